@@ -1,0 +1,15 @@
+package org.inkgate.format.bundle;
+
+/**
+ * A candidate allowed to sit, with the accommodations the client must apply. No names: the
+ * bundle travels on shared media.
+ *
+ * @param candidateNumber   the number the candidate signs in with
+ * @param formId            the form assigned to the candidate
+ * @param extraTimePercent  extra time as a percentage of each limit (QTI PNP additional-testing-time)
+ * @param largePrint        larger type (PNP text-appearance font-size)
+ * @param highContrast      high-contrast theme (PNP high-contrast)
+ */
+public record RosterEntry(String candidateNumber, String formId, int extraTimePercent, boolean largePrint,
+        boolean highContrast) {
+}

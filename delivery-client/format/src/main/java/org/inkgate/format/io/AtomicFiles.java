@@ -1,0 +1,65 @@
+package org.inkgate.format.io;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.channels.FileChannel;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+
+/**
+ * Writes a file so that its final name only ever holds complete content: write beside it,
+ * force to disk, then rename. A crash leaves at most a stray temporary file.
+ */
+public final class AtomicFiles {
+
+    /** The body that writes the content. */
+    @FunctionalInterface
+    public interface Body {
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    private AtomicFiles() {
+    }
+
+    public static void write(Path target, Body body) throws IOException {
+        Path absolute = target.toAbsolutePath();
+        Path folder = absolute.getParent();
+        Files.createDirectories(folder);
+        Path temp = Files.createTempFile(folder, "." + absolute.getFileName() + ".", ".part");
+        try {
+            try (FileChannel channel = FileChannel.open(temp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING);
+                    OutputStream out = new java.io.BufferedOutputStream(java.nio.channels.Channels.newOutputStream(channel), 1 << 16)) {
+                body.writeTo(new NonClosing(out));
+                out.flush();
+                channel.force(true);
+            }
+            try {
+                Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temp);
+        }
+    }
+
+    /** Lets the body close its own stream wrappers without closing the channel before force(). */
+    private static final class NonClosing extends java.io.FilterOutputStream {
+        NonClosing(OutputStream out) {
+            super(out);
+        }
+
+        @Override
+        public void write(byte[] b, int off, int len) throws IOException {
+            out.write(b, off, len);
+        }
+
+        @Override
+        public void close() throws IOException {
+            out.flush();
+        }
+    }
+}

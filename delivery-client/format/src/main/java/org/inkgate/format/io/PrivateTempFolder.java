@@ -1,0 +1,61 @@
+package org.inkgate.format.io;
+
+import java.io.IOException;
+import java.nio.file.FileSystems;
+import java.nio.file.FileVisitResult;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.nio.file.attribute.PosixFilePermissions;
+
+/** A temporary folder only its owner may read, deleted with everything in it on close. */
+public final class PrivateTempFolder implements AutoCloseable {
+
+    private final Path root;
+
+    private PrivateTempFolder(Path root) {
+        this.root = root;
+    }
+
+    public static PrivateTempFolder create(String prefix) throws IOException {
+        if (FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
+            return new PrivateTempFolder(Files.createTempDirectory(prefix,
+                    PosixFilePermissions.asFileAttribute(PosixFilePermissions.fromString("rwx------"))));
+        }
+        return new PrivateTempFolder(Files.createTempDirectory(prefix));
+    }
+
+    public Path root() {
+        return root;
+    }
+
+    /** The path of a checked-safe entry name inside this folder. */
+    public Path resolve(String safeEntryName) {
+        Path path = root.resolve(safeEntryName).normalize();
+        if (!path.startsWith(root)) {
+            throw new IllegalArgumentException("entry \"" + safeEntryName + "\" would leave the temporary folder");
+        }
+        return path;
+    }
+
+    @Override
+    public void close() throws IOException {
+        if (!Files.exists(root)) {
+            return;
+        }
+        Files.walkFileTree(root, new SimpleFileVisitor<>() {
+            @Override
+            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) throws IOException {
+                Files.delete(file);
+                return FileVisitResult.CONTINUE;
+            }
+
+            @Override
+            public FileVisitResult postVisitDirectory(Path dir, IOException exc) throws IOException {
+                Files.delete(dir);
+                return FileVisitResult.CONTINUE;
+            }
+        });
+    }
+}

@@ -1,0 +1,95 @@
+package org.inkgate.format.json;
+
+import com.fasterxml.jackson.annotation.JsonInclude;
+import com.fasterxml.jackson.core.JsonLocation;
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.datatype.jsr310.JavaTimeModule;
+import java.io.IOException;
+import org.inkgate.format.refusal.MalformedJson;
+
+/**
+ * The one JSON configuration of Inkgate's files. Reading is strict: duplicate keys, unknown
+ * fields, trailing content and nulls for numbers are refused, because a signed file with two
+ * readings is a hole. Writing is deterministic: sorted keys, no nulls, ISO-8601 times.
+ */
+public final class Json {
+
+    private static final ObjectMapper MAPPER = JsonMapper.builder()
+            .addModule(new JavaTimeModule())
+            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+            .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
+            .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY)
+            .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
+            .enable(SerializationFeature.INDENT_OUTPUT)
+            .disable(SerializationFeature.WRITE_DATES_AS_TIMESTAMPS)
+            .serializationInclusion(JsonInclude.Include.NON_NULL)
+            .build();
+
+    private static final ObjectMapper COMPACT = MAPPER.copy().disable(SerializationFeature.INDENT_OUTPUT);
+
+    private Json() {
+    }
+
+    public static ObjectMapper mapper() {
+        return MAPPER;
+    }
+
+    /** Deterministic, indented UTF-8 bytes. */
+    public static byte[] write(Object value) {
+        try {
+            return MAPPER.writeValueAsBytes(value);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("could not write " + value.getClass().getSimpleName() + " as JSON", e);
+        }
+    }
+
+    /** Deterministic single-line UTF-8 bytes (for JSON lines). */
+    public static byte[] writeLine(Object value) {
+        try {
+            return COMPACT.writeValueAsBytes(value);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("could not write " + value.getClass().getSimpleName() + " as JSON", e);
+        }
+    }
+
+    public static JsonNode tree(String file, String entry, byte[] bytes) throws MalformedJson {
+        try {
+            JsonNode node = MAPPER.readTree(bytes);
+            if (node == null || node.isMissingNode()) {
+                throw new MalformedJson(file, entry, 1, 1, "the entry is empty", null);
+            }
+            return node;
+        } catch (JsonProcessingException e) {
+            throw located(file, entry, e);
+        } catch (IOException e) {
+            throw new MalformedJson(file, entry, 1, 1, e.getMessage(), e);
+        }
+    }
+
+    public static <T> T bind(String file, String entry, byte[] bytes, Class<T> type) throws MalformedJson {
+        try {
+            return MAPPER.readValue(bytes, type);
+        } catch (JsonProcessingException e) {
+            throw located(file, entry, e);
+        } catch (IOException | IllegalArgumentException e) {
+            throw new MalformedJson(file, entry, 1, 1, String.valueOf(e.getMessage()), e);
+        }
+    }
+
+    private static MalformedJson located(String file, String entry, JsonProcessingException e) {
+        JsonLocation at = e.getLocation();
+        long line = at == null ? 1 : Math.max(1, at.getLineNr());
+        long column = at == null ? 1 : Math.max(1, at.getColumnNr());
+        return new MalformedJson(file, entry, line, column, e.getOriginalMessage(), e);
+    }
+}
