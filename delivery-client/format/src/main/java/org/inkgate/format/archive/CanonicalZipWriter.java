@@ -31,23 +31,54 @@ public final class CanonicalZipWriter implements AutoCloseable {
         add(name, data, ZipLayout.METHOD_STORED);
     }
 
-    /** Adds a deflated entry: right for large text such as event logs. */
+    /**
+     * Adds a deflated entry: right for large text such as event logs. Text so repetitive that it
+     * would expand more than readers allow ({@link ArchiveLimits#DEFAULT_MAX_RATIO}) is stored
+     * instead, so that Inkgate's own files are never refused as decompression bombs.
+     */
     public void addDeflated(String name, byte[] data) throws IOException {
         add(name, data, ZipLayout.METHOD_DEFLATED);
     }
 
+    /** Adds a deflated entry whatever its ratio; for tests that build hostile archives. */
+    public void addDeflatedUnchecked(String name, byte[] data) throws IOException {
+        addPacked(name, data, ZipLayout.METHOD_DEFLATED, deflate(data), true);
+    }
+
+    /**
+     * Adds an entry without the name checks, for tests that build hostile archives (zip slip,
+     * duplicates). Never used by Inkgate's writers.
+     */
+    void addUnchecked(String name, byte[] data) throws IOException {
+        addPacked(name, data, ZipLayout.METHOD_STORED, data, false);
+    }
+
     private void add(String name, byte[] data, int method) throws IOException {
+        if (method == ZipLayout.METHOD_DEFLATED) {
+            byte[] packed = deflate(data);
+            if (packed.length == 0 || data.length / packed.length > ArchiveLimits.DEFAULT_MAX_RATIO) {
+                addPacked(name, data, ZipLayout.METHOD_STORED, data, true);
+            } else {
+                addPacked(name, data, ZipLayout.METHOD_DEFLATED, packed, true);
+            }
+        } else {
+            addPacked(name, data, ZipLayout.METHOD_STORED, data, true);
+        }
+    }
+
+    private void addPacked(String name, byte[] data, int method, byte[] packed, boolean checkName) throws IOException {
         if (finished) {
             throw new IllegalStateException("archive already finished");
         }
-        EntryNames.requireSafe(name);
-        if (!names.add(name)) {
-            throw new IllegalArgumentException("entry \"" + name + "\" added twice");
+        if (checkName) {
+            EntryNames.requireSafe(name);
+            if (!names.add(name)) {
+                throw new IllegalArgumentException("entry \"" + name + "\" added twice");
+            }
         }
         byte[] nameBytes = name.getBytes(StandardCharsets.UTF_8);
         CRC32 crc = new CRC32();
         crc.update(data);
-        byte[] packed = method == ZipLayout.METHOD_STORED ? data : deflate(data);
         if (offset + ZipLayout.LOCAL_HEADER_BYTES + nameBytes.length + packed.length > 0xFFFF_FFFFL) {
             throw new IOException("archive would exceed 4 GiB, which Inkgate's archive profile does not allow");
         }

@@ -12,7 +12,6 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
 import java.security.MessageDigest;
-import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -372,11 +371,5 @@ public final class SafeZipReader implements AutoCloseable {
 
     private static long u32(ByteBuffer b) {
         return Integer.toUnsignedLong(b.getInt());
-    }
-
-    static List<String> names(List<ArchiveEntry> entries) {
-        List<String> names = new ArrayList<>();
-        entries.forEach(e -> names.add(e.name()));
-        return names;
     }
 }

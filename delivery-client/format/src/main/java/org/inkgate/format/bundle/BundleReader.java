@@ -46,7 +46,10 @@ public final class BundleReader {
         String name = file.getFileName().toString();
         try (SafeZipReader zip = SafeZipReader.open(file, limits)) {
             byte[] manifestBytes = SignedArchive.required(name, zip, BundleWriter.MANIFEST);
-            byte[] signature = SignedArchive.required(name, zip, BundleWriter.SIGNATURE);
+            if (zip.entry(BundleWriter.SIGNATURE).isEmpty()) {
+                throw new BadSignature(name, "the bundle carries no signature (" + BundleWriter.SIGNATURE + " is missing)");
+            }
+            byte[] signature = zip.read(zip.entry(BundleWriter.SIGNATURE).get());
             JsonNode tree = Json.tree(name, BundleWriter.MANIFEST, manifestBytes);
             checkSchema(name, tree);
             PublicKey signer = signingKey(name, tree);

@@ -1,0 +1,108 @@
+package org.inkgate.format.response;
+
+import com.fasterxml.jackson.annotation.JsonPropertyOrder;
+import java.io.ByteArrayOutputStream;
+import java.nio.charset.StandardCharsets;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import org.inkgate.format.crypto.Sha256;
+import org.inkgate.format.json.Json;
+import org.inkgate.format.refusal.BrokenHashChain;
+import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.refusal.InvalidContent;
+import org.inkgate.format.refusal.MalformedJson;
+
+/**
+ * The events.jsonl encoding: one JSON object per line, each carrying in {@code prev} the
+ * SHA-256 (hex) of the previous line's exact bytes; the first line carries 64 zeros. Removing,
+ * inserting, reordering or editing a line breaks the chain at that line.
+ */
+public final class EventChain {
+
+    public static final String GENESIS = "0".repeat(64);
+
+    /** The on-disk shape of one line. */
+    @JsonPropertyOrder({"seq", "at", "mono", "type", "task", "data", "prev"})
+    record Line(long seq, Instant at, long mono, String type, String task, Map<String, Object> data, String prev) {
+    }
+
+    private EventChain() {
+    }
+
+    /** Encodes events in order; their seq must run 1, 2, 3... */
+    public static byte[] encode(List<ProcessEvent> events) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        String prev = GENESIS;
+        long expected = 1;
+        for (ProcessEvent e : events) {
+            if (e.seq() != expected) {
+                throw new IllegalArgumentException("event seq " + e.seq() + " where " + expected + " was expected");
+            }
+            byte[] line = Json.writeLine(new Line(e.seq(), e.at(), e.mono(), e.type(), e.task(), e.data(), prev));
+            out.writeBytes(line);
+            out.write('\n');
+            prev = Sha256.hex(line);
+            expected++;
+        }
+        return out.toByteArray();
+    }
+
+    /** The digest the next line would carry; the head of the chain. */
+    public static String head(byte[] encoded) {
+        String prev = GENESIS;
+        for (byte[] line : lines(encoded)) {
+            prev = Sha256.hex(line);
+        }
+        return prev;
+    }
+
+    /** Decodes and checks the chain, naming the first line that breaks it. */
+    public static List<ProcessEvent> decode(String file, String entry, byte[] encoded) throws FormatRefusal {
+        if (encoded.length > 0 && encoded[encoded.length - 1] != '\n') {
+            throw new InvalidContent(file, "the event log \"" + entry + "\" does not end with a complete line (truncated?)");
+        }
+        List<ProcessEvent> events = new ArrayList<>();
+        String prev = GENESIS;
+        int number = 0;
+        for (byte[] line : lines(encoded)) {
+            number++;
+            Line parsed;
+            try {
+                parsed = Json.bind(file, entry, line, Line.class);
+            } catch (MalformedJson e) {
+                throw new MalformedJson(file, entry, number, e.column(), "line " + number + " is not a valid event", e);
+            }
+            if (!prev.equals(parsed.prev())) {
+                throw new BrokenHashChain(file, entry, number);
+            }
+            if (parsed.seq() != number) {
+                throw new InvalidContent(file, "the event log \"" + entry + "\" numbers line " + number + " as event " + parsed.seq());
+            }
+            events.add(new ProcessEvent(parsed.seq(), parsed.at(), parsed.mono(), parsed.type(), parsed.task(), parsed.data()));
+            prev = Sha256.hex(line);
+        }
+        return events;
+    }
+
+    private static List<byte[]> lines(byte[] encoded) {
+        List<byte[]> lines = new ArrayList<>();
+        int start = 0;
+        for (int i = 0; i < encoded.length; i++) {
+            if (encoded[i] == '\n') {
+                lines.add(Arrays.copyOfRange(encoded, start, i));
+                start = i + 1;
+            }
+        }
+        if (start < encoded.length) {
+            lines.add(Arrays.copyOfRange(encoded, start, encoded.length));
+        }
+        return lines;
+    }
+
+    static String utf8(byte[] bytes) {
+        return new String(bytes, StandardCharsets.UTF_8);
+    }
+}
