@@ -152,7 +152,8 @@ class MutationTest {
     }
 
     private static long tempFolders() throws IOException {
-        try (Stream<Path> s = Files.list(Path.of(System.getProperty("java.io.tmpdir")))) {
+        // surefire points inkgate.tmpdir at this module's target folder, so other processes cannot disturb the count
+        try (Stream<Path> s = Files.list(org.inkgate.format.io.PrivateTempFolder.parent())) {
             return s.filter(p -> p.getFileName().toString().startsWith("inkgate-")).count();
         }
     }

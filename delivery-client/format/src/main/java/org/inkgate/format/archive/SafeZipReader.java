@@ -140,8 +140,9 @@ public final class SafeZipReader implements AutoCloseable {
                             + entry.size() + " bytes its header says");
                 }
                 emit(outBuffer, n, out, digest, crc);
-                if (n == 0 && inflater.needsDictionary()) {
-                    throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" asks for a preset dictionary");
+                if (n == 0 && !inflater.needsInput() && !inflater.finished()) {
+                    // no progress without a reason the stream states: a preset dictionary or a corrupt stream
+                    throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" has a deflate stream that makes no progress");
                 }
             }
             if (remainingIn != 0 || inflater.getRemaining() != 0) {
@@ -209,6 +210,9 @@ public final class SafeZipReader implements AutoCloseable {
             }
             if (count > limits.maxEntries()) {
                 throw new SizeLimitExceeded(file, "the number of entries (" + count + ")", limits.maxEntries());
+            }
+            if (cdSize > (long) count * (ZipLayout.CENTRAL_HEADER_BYTES + ZipLayout.MAX_NAME_BYTES)) {
+                throw new MalformedArchive(file, "the central directory is larger than " + count + " records can be");
             }
             if (cdOffset + cdSize != size - ZipLayout.END_RECORD_BYTES) {
                 throw new MalformedArchive(file, "the central directory does not end where the end record begins");

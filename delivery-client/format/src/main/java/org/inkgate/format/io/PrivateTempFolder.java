@@ -9,8 +9,14 @@ import java.nio.file.SimpleFileVisitor;
 import java.nio.file.attribute.BasicFileAttributes;
 import java.nio.file.attribute.PosixFilePermissions;
 
-/** A temporary folder only its owner may read, deleted with everything in it on close. */
+/**
+ * A temporary folder only its owner may read, deleted with everything in it on close. Folders
+ * are made under the system property {@value #PARENT_PROPERTY} when set (e.g. an encrypted
+ * volume chosen by the test centre), else under {@code java.io.tmpdir}.
+ */
 public final class PrivateTempFolder implements AutoCloseable {
+
+    public static final String PARENT_PROPERTY = "inkgate.tmpdir";
 
     private final Path root;
 
@@ -19,11 +25,19 @@ public final class PrivateTempFolder implements AutoCloseable {
     }
 
     public static PrivateTempFolder create(String prefix) throws IOException {
+        Path parent = parent();
+        Files.createDirectories(parent);
         if (FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
-            return new PrivateTempFolder(Files.createTempDirectory(prefix,
+            return new PrivateTempFolder(Files.createTempDirectory(parent, prefix,
                     PosixFilePermissions.asFileAttribute(PosixFilePermissions.fromString("rwx------"))));
         }
-        return new PrivateTempFolder(Files.createTempDirectory(prefix));
+        return new PrivateTempFolder(Files.createTempDirectory(parent, prefix));
+    }
+
+    /** Where temporary folders are made. */
+    public static Path parent() {
+        String configured = System.getProperty(PARENT_PROPERTY);
+        return Path.of(configured != null && !configured.isBlank() ? configured : System.getProperty("java.io.tmpdir"));
     }
 
     public Path root() {

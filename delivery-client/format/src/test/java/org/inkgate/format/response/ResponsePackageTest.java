@@ -59,6 +59,22 @@ class ResponsePackageTest {
     }
 
     @Test
+    void open_answerSoRepetitiveItWouldLookLikeABomb_stillOpens() throws Exception {
+        // a candidate holding a key down: deflate would shrink it far past the ratio limit of 100
+        String held = "a".repeat(300_000);
+        TaskResponse t = document.tasks().get(0);
+        ResponseDocument repetitive = new ResponseDocument(document.format(), document.schemaVersion(), document.packageId(),
+                document.examId(), document.bundleManifestSha256(), document.candidateNumber(), document.seat(),
+                document.formId(), document.clientVersion(), document.startedAt(), document.submittedAt(),
+                List.of(new TaskResponse(t.taskId(), t.conditionId(), held, 1, t.startedAt(), t.endedAt(),
+                        t.extraTimeSeconds(), t.policy(), t.toolsOffered(), t.toolUse(), t.endReason())),
+                document.questionnaires());
+        Path file = dir.resolve("held-key.inkresp");
+        new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic()).write(repetitive, events, file);
+        assertEquals(held, reader.open(file).response().tasks().get(0).text());
+    }
+
+    @Test
     void write_package_holdsNoReadableAnswerText() throws Exception {
         String raw = new String(Files.readAllBytes(written()), StandardCharsets.ISO_8859_1);
         assertTrue(!raw.contains("Sunday") && !raw.contains("1001"), "answer text and candidate number are encrypted");
