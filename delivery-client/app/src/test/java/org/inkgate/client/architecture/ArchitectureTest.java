@@ -1,0 +1,38 @@
+package org.inkgate.client.architecture;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+import static com.tngtech.archunit.library.GeneralCodingRules.ACCESS_STANDARD_STREAMS;
+
+import com.tngtech.archunit.core.importer.ImportOption;
+import com.tngtech.archunit.junit.AnalyzeClasses;
+import com.tngtech.archunit.junit.ArchTest;
+import com.tngtech.archunit.lang.ArchRule;
+
+/** The client's layering, checked from the start so it never needs an exception. */
+@AnalyzeClasses(packages = "org.inkgate.client", importOptions = ImportOption.DoNotIncludeTests.class)
+class ArchitectureTest {
+
+    @ArchTest
+    static final ArchRule practiceModel_importsNoJavaFx = noClasses()
+            .that().resideInAPackage("org.inkgate.client.practice")
+            .should().dependOnClassesThat().resideInAPackage("javafx..")
+            .because("the practice model is plain data and logic; only practice.ui binds it to JavaFX");
+
+    @ArchTest
+    static final ArchRule demoBuild_importsNoJavaFx = noClasses()
+            .that().resideInAPackage("org.inkgate.client.demo..")
+            .should().dependOnClassesThat().resideInAPackage("javafx..")
+            .because("the demo bundle build runs inside Maven, without a display");
+
+    @ArchTest
+    static final ArchRule practiceModel_doesNotDependOnViews = noClasses()
+            .that().resideInAPackage("org.inkgate.client.practice")
+            .should().dependOnClassesThat().resideInAPackage("org.inkgate.client.practice.ui..");
+
+    @ArchTest
+    static final ArchRule views_doNotWriteToStandardStreams = noClasses()
+            .that().resideInAPackage("org.inkgate.client.practice..")
+            .and().doNotHaveSimpleName("PracticeApp")
+            .should(ACCESS_STANDARD_STREAMS)
+            .because("only the entry points (Launcher, PracticeApp, DemoBundleBuild) talk to the console");
+}
