@@ -20,7 +20,8 @@ final class WritingPane extends VBox {
         heading.setMnemonicParsing(true);
         heading.setLabelFor(editor);
         heading.getStyleClass().add("pane-heading");
-        Label note = new Label("Kept for each task while this window is open; never saved or sent.");
+        Label note = new Label("Kept for each task while this window is open; never saved or sent."
+                + " Ctrl+Tab moves out of the writing area.");
         note.getStyleClass().add("quiet-note");
         note.setWrapText(true);
         note.setMinHeight(Region.USE_PREF_SIZE);
