@@ -28,6 +28,9 @@ final class ManifestRules {
         }
         Set<String> taskIds = tasks(m, problems);
         Set<String> conditionIds = unique(problems, "condition", m.conditions().stream().map(ConditionSpec::id).toList());
+        for (ConditionSpec condition : m.conditions()) {
+            requireText(problems, condition.label(), "label of condition \"" + condition.id() + "\"");
+        }
         Set<String> questionnaireIds = questionnaires(m, problems);
         Set<String> packIds = packs(m, problems);
         Set<String> formIds = unique(problems, "form", m.forms().stream().map(FormSpec::id).toList());

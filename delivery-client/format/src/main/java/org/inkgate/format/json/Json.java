@@ -6,6 +6,7 @@ import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.StreamReadFeature;
 import com.fasterxml.jackson.databind.DeserializationFeature;
+import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -17,7 +18,8 @@ import org.inkgate.format.refusal.MalformedJson;
 /**
  * The one JSON configuration of Inkgate's files. Reading is strict: duplicate keys, unknown
  * fields, trailing content and nulls for numbers are refused, because a signed file with two
- * readings is a hole. Writing is deterministic: sorted keys, no nulls, ISO-8601 times.
+ * readings is a hole. Writing is deterministic: record fields in declaration order, map keys
+ * sorted, no nulls, ISO-8601 times.
  */
 public final class Json {
 
@@ -86,10 +88,34 @@ public final class Json {
         }
     }
 
+    /**
+     * Syntax errors carry the parser's line and column. Binding errors also name the JSON path
+     * (e.g. {@code forms[0].slots[1].policy.spelling}), because Jackson binds records after
+     * reading the whole object and so reports the object's end as the location.
+     */
     private static MalformedJson located(String file, String entry, JsonProcessingException e) {
         JsonLocation at = e.getLocation();
         long line = at == null ? 1 : Math.max(1, at.getLineNr());
         long column = at == null ? 1 : Math.max(1, at.getColumnNr());
-        return new MalformedJson(file, entry, line, column, e.getOriginalMessage(), e);
+        String problem = e.getOriginalMessage();
+        if (e instanceof JsonMappingException mapping && !mapping.getPath().isEmpty()) {
+            problem = "at " + path(mapping.getPath()) + ": " + problem;
+        }
+        return new MalformedJson(file, entry, line, column, problem, e);
+    }
+
+    private static String path(java.util.List<JsonMappingException.Reference> references) {
+        StringBuilder out = new StringBuilder();
+        for (JsonMappingException.Reference ref : references) {
+            if (ref.getIndex() >= 0) {
+                out.append('[').append(ref.getIndex()).append(']');
+            } else if (ref.getFieldName() != null) {
+                if (!out.isEmpty()) {
+                    out.append('.');
+                }
+                out.append(ref.getFieldName());
+            }
+        }
+        return out.toString();
     }
 }

@@ -141,6 +141,22 @@ class BundleRefusalsTest {
     }
 
     @Test
+    void open_wrongValueDeepInManifest_isRefusedNamingItsPath() throws Exception {
+        ObjectNode tree = manifestTree();
+        ((ObjectNode) tree.withArray("forms").get(1).withArray("slots").get(0).get("policy")).put("spelling", "always");
+        MalformedJson refusal = refused(MalformedJson.class, signedWith("enum.inkexam", Json.write(tree)));
+        assertTrue(refusal.getMessage().contains("at forms[1].slots[0].policy.spelling"), refusal.getMessage());
+    }
+
+    @Test
+    void open_unknownFieldInManifest_isRefusedNamingIt() throws Exception {
+        ObjectNode tree = manifestTree();
+        ((ObjectNode) tree.withArray("tasks").get(0)).put("hint", "write about your neighbour");
+        MalformedJson refusal = refused(MalformedJson.class, signedWith("unknown.inkexam", Json.write(tree)));
+        assertTrue(refusal.getMessage().contains("at tasks[0].hint"), refusal.getMessage());
+    }
+
+    @Test
     void open_duplicateKeyInManifest_isRefusedAsMalformedJson() throws Exception {
         String text = new String(entry("manifest.json"), StandardCharsets.UTF_8)
                 .replaceFirst("\\{", "{\n  \"practice\" : false,");
