@@ -116,6 +116,72 @@ class MutationTest {
         return new Outcome(bytes, mutations, refusals);
     }
 
+    /** Copies cut short (an interrupted USB copy) and bytes inserted or removed, which flips never make. */
+    @Test
+    void everyTruncationAndSeededInsertionsAndDeletions_areRefused() throws Exception {
+        Path bundle = dir.resolve("exam.inkexam");
+        new BundleWriter(TestKeys.OWNER_SIGNING).write(SampleExam.manifest(), SampleExam.contents(), bundle);
+        BundleReader bundleReader = new BundleReader(TrustPolicy.trusting(java.util.Set.of(TestKeys.ownerFingerprint())));
+        report("bundle, truncated at every length", changeLength(bundle, path -> bundleReader.open(path).close(), 0));
+        report("bundle, 2000 seeded insertions/deletions (seed 20261202)",
+                changeLength(bundle, path -> bundleReader.open(path).close(), 2000));
+
+        Path pkg = dir.resolve("1001.inkresp");
+        new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic())
+                .write(SampleResponse.document(), SampleResponse.events(30), pkg);
+        ResponsePackageReader packageReader = new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION);
+        report("response package, truncated at every length", changeLength(pkg, packageReader::open, 0));
+        report("response package, 2000 seeded insertions/deletions (seed 20261202)",
+                changeLength(pkg, packageReader::open, 2000));
+    }
+
+    /** With {@code randomCases} 0, every truncation; otherwise that many seeded insertions or deletions of 1-16 bytes. */
+    private Outcome changeLength(Path original, Opener opener, int randomCases) throws Exception {
+        byte[] bytes = Files.readAllBytes(original);
+        long foldersBefore = tempFolders();
+        Map<String, Integer> refusals = new TreeMap<>();
+        List<String> accepted = new ArrayList<>();
+        Path mutant = dir.resolve("length-mutant-" + original.getFileName());
+        java.util.Random random = new java.util.Random(20261202L);
+        int cases = randomCases == 0 ? bytes.length : randomCases;
+        for (int c = 0; c < cases; c++) {
+            byte[] changed;
+            String what;
+            if (randomCases == 0) {
+                changed = java.util.Arrays.copyOf(bytes, c);
+                what = "truncated to " + c;
+            } else {
+                int at = random.nextInt(bytes.length);
+                int n = 1 + random.nextInt(16);
+                if (random.nextBoolean()) {
+                    byte[] inserted = new byte[n];
+                    random.nextBytes(inserted);
+                    changed = new byte[bytes.length + n];
+                    System.arraycopy(bytes, 0, changed, 0, at);
+                    System.arraycopy(inserted, 0, changed, at, n);
+                    System.arraycopy(bytes, at, changed, at + n, bytes.length - at);
+                    what = n + " bytes inserted at " + at;
+                } else {
+                    int cut = Math.min(n, bytes.length - at);
+                    changed = new byte[bytes.length - cut];
+                    System.arraycopy(bytes, 0, changed, 0, at);
+                    System.arraycopy(bytes, at + cut, changed, at, bytes.length - at - cut);
+                    what = cut + " bytes removed at " + at;
+                }
+            }
+            Files.write(mutant, changed);
+            try {
+                opener.open(mutant);
+                accepted.add(what);
+            } catch (FormatRefusal refusal) {
+                refusals.merge(refusal.getClass().getSimpleName(), 1, Integer::sum);
+            }
+        }
+        assertTrue(accepted.isEmpty(), "changed files were opened: " + accepted);
+        assertEquals(foldersBefore, tempFolders(), "no temporary folder is left behind by a refused file");
+        return new Outcome(bytes.length, cases, refusals);
+    }
+
     @FunctionalInterface
     interface Opener {
         void open(Path file) throws FormatRefusal, IOException;
