@@ -19,7 +19,7 @@ import org.inkgate.format.archive.HostileArchives;
 import org.inkgate.format.archive.SafeZipReader;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.BundleWriter;
-import org.inkgate.format.bundle.TrustPolicy;
+import org.inkgate.format.trust.TrustPolicy;
 import org.inkgate.format.io.PrivateTempFolder;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.response.ResponsePackageReader;
@@ -128,7 +128,7 @@ class MutationTest {
     }
 
     private static Opener packageOpener() {
-        return new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION)::open;
+        return new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION, TestKeys.installations())::open;
     }
 
     private static List<Damage> flips(Path file) throws IOException {

@@ -14,7 +14,7 @@ import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.bundle.TaskSpec;
-import org.inkgate.format.bundle.TrustPolicy;
+import org.inkgate.format.trust.TrustPolicy;
 import org.inkgate.format.refusal.FormatRefusal;
 
 /**

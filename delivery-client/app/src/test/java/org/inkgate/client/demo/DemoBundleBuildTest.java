@@ -15,7 +15,7 @@ import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.FormSlot;
 import org.inkgate.format.bundle.OpenedBundle;
-import org.inkgate.format.bundle.TrustPolicy;
+import org.inkgate.format.trust.TrustPolicy;
 import org.inkgate.format.crypto.Ed25519;
 import org.inkgate.format.crypto.Fingerprint;
 import org.inkgate.format.crypto.Hex;

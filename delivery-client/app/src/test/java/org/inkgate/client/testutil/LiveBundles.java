@@ -19,7 +19,7 @@ public final class LiveBundles {
         BundleManifest m = demo.manifest();
         BundleManifest live = new BundleManifest(m.format(), m.schemaVersion(), "live-" + m.examId(), m.title(),
                 m.language(), m.instructionsFile(), m.tasks(), m.conditions(), m.forms(), m.questionnaires(),
-                m.packs(), m.roster(), m.ownerKeys(), PinHasher.hash("2468".toCharArray()), null, false, null);
+                m.packs(), m.roster(), m.ownerKeys(), PinHasher.hash("246813".toCharArray()), null, false, null);
         Path out = folder.resolve("live.inkexam");
         new BundleWriter(demo.signingKey()).write(live, demo.contents(), out);
         return out;

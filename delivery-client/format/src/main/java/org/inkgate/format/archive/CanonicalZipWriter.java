@@ -18,6 +18,7 @@ public final class CanonicalZipWriter implements AutoCloseable {
     private final OutputStream out;
     private final ByteArrayOutputStream central = new ByteArrayOutputStream();
     private final Set<String> names = new HashSet<>();
+    private final EntryNames.NameSet fileNames = new EntryNames.NameSet();
     private long offset;
     private int count;
     private boolean finished;
@@ -74,6 +75,10 @@ public final class CanonicalZipWriter implements AutoCloseable {
             EntryNames.requireSafe(name);
             if (!names.add(name)) {
                 throw new IllegalArgumentException("entry \"" + name + "\" added twice");
+            }
+            String clash = fileNames.add(name);
+            if (clash != null) {
+                throw new IllegalArgumentException("entry \"" + name + "\" " + clash);
             }
         }
         byte[] nameBytes = name.getBytes(StandardCharsets.UTF_8);

@@ -37,11 +37,11 @@ import org.inkgate.format.refusal.UnsafeEntryName;
 public final class SafeZipReader implements AutoCloseable {
 
     private final String fileName;
-    private final FileChannel channel;
+    private final Source channel;
     private final Map<String, ArchiveEntry> entries;
     private final ArchiveLimits limits;
 
-    private SafeZipReader(String fileName, FileChannel channel, Map<String, ArchiveEntry> entries, ArchiveLimits limits) {
+    private SafeZipReader(String fileName, Source channel, Map<String, ArchiveEntry> entries, ArchiveLimits limits) {
         this.fileName = fileName;
         this.channel = channel;
         this.entries = entries;
@@ -50,13 +50,70 @@ public final class SafeZipReader implements AutoCloseable {
 
     public static SafeZipReader open(Path file, ArchiveLimits limits) throws FormatRefusal, IOException {
         String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
-        FileChannel channel = FileChannel.open(file, StandardOpenOption.READ);
+        return open(name, new FileSource(FileChannel.open(file, StandardOpenOption.READ)), limits);
+    }
+
+    /** Reads an archive held in memory (e.g. just decrypted), so its content never touches the disk. */
+    public static SafeZipReader open(String name, byte[] bytes, ArchiveLimits limits) throws FormatRefusal, IOException {
+        return open(name, new BytesSource(bytes), limits);
+    }
+
+    private static SafeZipReader open(String name, Source source, ArchiveLimits limits) throws FormatRefusal, IOException {
         try {
-            Map<String, ArchiveEntry> entries = new Structure(name, channel, limits).read();
-            return new SafeZipReader(name, channel, entries, limits);
+            Map<String, ArchiveEntry> entries = new Structure(name, source, limits).read();
+            return new SafeZipReader(name, source, entries, limits);
         } catch (FormatRefusal | IOException | RuntimeException e) {
-            channel.close();
+            source.close();
             throw e;
+        }
+    }
+
+    /** Positional reads from a file or from memory. */
+    private interface Source extends AutoCloseable {
+        long size() throws IOException;
+
+        int read(ByteBuffer into, long position) throws IOException;
+
+        @Override
+        void close() throws IOException;
+    }
+
+    private record FileSource(FileChannel channel) implements Source {
+        @Override
+        public long size() throws IOException {
+            return channel.size();
+        }
+
+        @Override
+        public int read(ByteBuffer into, long position) throws IOException {
+            return channel.read(into, position);
+        }
+
+        @Override
+        public void close() throws IOException {
+            channel.close();
+        }
+    }
+
+    private record BytesSource(byte[] bytes) implements Source {
+        @Override
+        public long size() {
+            return bytes.length;
+        }
+
+        @Override
+        public int read(ByteBuffer into, long position) {
+            if (position >= bytes.length) {
+                return -1;
+            }
+            int n = (int) Math.min(into.remaining(), bytes.length - position);
+            into.put(bytes, (int) position, n);
+            return n;
+        }
+
+        @Override
+        public void close() {
+            // nothing held
         }
     }
 
@@ -177,10 +234,10 @@ public final class SafeZipReader implements AutoCloseable {
     /** Parses and checks the archive's structure; reads headers only. */
     private static final class Structure {
         private final String file;
-        private final FileChannel channel;
+        private final Source channel;
         private final ArchiveLimits limits;
 
-        Structure(String file, FileChannel channel, ArchiveLimits limits) {
+        Structure(String file, Source channel, ArchiveLimits limits) {
             this.file = file;
             this.channel = channel;
             this.limits = limits;
@@ -219,12 +276,17 @@ public final class SafeZipReader implements AutoCloseable {
             }
             ByteBuffer cd = bytes(cdOffset, cdSize);
             Map<String, ArchiveEntry> entries = new LinkedHashMap<>();
+            EntryNames.NameSet names = new EntryNames.NameSet();
             long expectedLocal = 0;
             long total = 0;
             for (int i = 0; i < count; i++) {
                 ArchiveEntry entry = centralRecord(cd, i);
                 if (entries.containsKey(entry.name())) {
                     throw new DuplicateEntry(file, entry.name());
+                }
+                String clash = names.add(entry.name());
+                if (clash != null) {
+                    throw new DuplicateEntry(file, entry.name(), clash);
                 }
                 checkLimits(entry);
                 total += entry.size();

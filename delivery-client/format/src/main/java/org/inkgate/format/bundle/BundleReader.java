@@ -1,5 +1,6 @@
 package org.inkgate.format.bundle;
 
+import org.inkgate.format.trust.TrustPolicy;
 import com.fasterxml.jackson.databind.JsonNode;
 import java.io.IOException;
 import java.nio.file.Path;
@@ -45,17 +46,16 @@ public final class BundleReader {
     public OpenedBundle open(Path file) throws FormatRefusal, IOException {
         String name = file.getFileName().toString();
         try (SafeZipReader zip = SafeZipReader.open(file, limits)) {
-            byte[] manifestBytes = SignedArchive.required(name, zip, BundleWriter.MANIFEST);
-            if (zip.entry(BundleWriter.SIGNATURE).isEmpty()) {
-                throw new BadSignature(name, "the bundle carries no signature (" + BundleWriter.SIGNATURE + " is missing)");
-            }
-            byte[] signature = zip.read(zip.entry(BundleWriter.SIGNATURE).get());
+            byte[] manifestBytes = SignedArchive.manifest(name, zip, BundleWriter.MANIFEST);
+            byte[] signature = SignedArchive.signature(name, zip, BundleWriter.SIGNATURE);
             JsonNode tree = Json.tree(name, BundleWriter.MANIFEST, manifestBytes);
-            checkSchema(name, tree);
+            checkFormat(name, tree);
             PublicKey signer = signingKey(name, tree);
             if (!Ed25519.verify(signer, manifestBytes, signature)) {
                 throw new BadSignature(name, "the signature in " + BundleWriter.SIGNATURE + " does not match the manifest");
             }
+            // only a signed version number is believed: an edited one is an altered file, not a newer bundle
+            checkSchemaVersion(name, tree);
             String fingerprint = Fingerprint.of(Ed25519.rawPublic(signer));
             if (!trust.trusts(fingerprint)) {
                 throw new UntrustedSigner(name, fingerprint);
@@ -74,18 +74,25 @@ public final class BundleReader {
                         Set.of(BundleWriter.MANIFEST, BundleWriter.SIGNATURE), folder);
                 return new OpenedBundle(name, manifest, fingerprint, Sha256.hex(manifestBytes), folder);
             } catch (FormatRefusal | IOException | RuntimeException e) {
-                folder.close();
+                try {
+                    folder.close();
+                } catch (IOException cleanup) {
+                    e.addSuppressed(cleanup);
+                }
                 throw e;
             }
         }
     }
 
-    private static void checkSchema(String name, JsonNode tree) throws UnsupportedSchema {
+    private static void checkFormat(String name, JsonNode tree) throws UnsupportedSchema {
         String format = tree.path("format").asText("");
         if (!BundleManifest.FORMAT.equals(format)) {
             throw new UnsupportedSchema(name, "this is not an exam bundle (format \"" + format
                     + "\"). Open a .inkexam file made by the Inkgate admin tool.");
         }
+    }
+
+    private static void checkSchemaVersion(String name, JsonNode tree) throws UnsupportedSchema {
         JsonNode version = tree.path("schemaVersion");
         if (!version.canConvertToInt() || !version.isIntegralNumber() || version.asInt() < 1) {
             throw new UnsupportedSchema(name, "the manifest has no valid schemaVersion; the file is damaged.");

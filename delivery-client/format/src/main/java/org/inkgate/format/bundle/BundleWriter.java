@@ -44,11 +44,16 @@ public final class BundleWriter {
         write(manifest, contents, null, out);
     }
 
-    /** Writes a bundle whose content entries are encrypted under a key derived from the release code. */
+    /**
+     * Writes a bundle whose content entries are encrypted under a key derived from the release
+     * code. The sealed bundle lets anyone who copies it guess codes offline, so the code must be
+     * long: use {@link ReleaseCode#generate()} (100 random bits) unless there is a reason not to.
+     */
     public void writeSealed(BundleManifest manifest, Map<String, byte[]> contents, char[] releaseCode, Path out)
             throws IOException {
-        if (releaseCode == null || releaseCode.length < 8) {
-            throw new IllegalArgumentException("a release code needs at least 8 characters");
+        if (releaseCode == null || releaseCode.length < ReleaseCode.MIN_LENGTH) {
+            throw new IllegalArgumentException("a release code needs at least " + ReleaseCode.MIN_LENGTH
+                    + " characters, because a copied sealed bundle can be attacked offline; ReleaseCode.generate() makes one");
         }
         write(manifest, contents, releaseCode, out);
     }

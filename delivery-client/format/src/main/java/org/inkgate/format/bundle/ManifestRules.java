@@ -1,9 +1,12 @@
 package org.inkgate.format.bundle;
 
 import java.util.ArrayList;
+import java.util.Base64;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import org.inkgate.format.crypto.Ed25519;
+import org.inkgate.format.crypto.X25519;
 import org.inkgate.packs.policy.ResourcePolicy;
 
 /**
@@ -70,7 +73,9 @@ final class ManifestRules {
             if (r.candidateNumber() != null && !candidates.add(r.candidateNumber())) {
                 problems.add("roster lists candidate \"" + r.candidateNumber() + "\" twice");
             }
-            if (r.formId() != null && !formIds.contains(r.formId())) {
+            if (r.formId() == null) {
+                problems.add("roster gives candidate \"" + r.candidateNumber() + "\" no form: assign one of " + formIds);
+            } else if (!formIds.contains(r.formId())) {
                 problems.add("roster assigns candidate \"" + r.candidateNumber() + "\" to unknown form \"" + r.formId() + "\"");
             }
             if (r.extraTimePercent() < 0 || r.extraTimePercent() > MAX_EXTRA_TIME_PERCENT) {
@@ -78,13 +83,32 @@ final class ManifestRules {
                         + r.extraTimePercent() + "%, outside 0.." + MAX_EXTRA_TIME_PERCENT);
             }
         }
-        if (m.ownerKeys() == null || m.ownerKeys().signing() == null || m.ownerKeys().encryption() == null) {
-            problems.add("ownerKeys must give both the signing and the encryption public key");
-        }
+        ownerKeys(problems, m.ownerKeys());
         if (!m.practice() && m.invigilatorPin() == null) {
             problems.add("a bundle for a live sitting needs an invigilatorPin; only practice bundles may go without");
         }
         return problems;
+    }
+
+    /**
+     * Both keys must be usable now, not at the end of a sitting: the encryption key is tried in
+     * an X25519 agreement, which refuses low-order points (RFC 7748 section 6.1).
+     */
+    private static void ownerKeys(List<String> problems, OwnerKeys keys) {
+        if (keys == null || keys.signing() == null || keys.encryption() == null) {
+            problems.add("ownerKeys must give both the signing and the encryption public key");
+            return;
+        }
+        try {
+            Ed25519.publicFromRaw(Base64.getDecoder().decode(keys.signing()));
+        } catch (IllegalArgumentException e) {
+            problems.add("ownerKeys.signing is not a 32-byte Ed25519 public key in base64");
+        }
+        try {
+            X25519.agree(X25519.generate().getPrivate(), X25519.publicFromRaw(Base64.getDecoder().decode(keys.encryption())));
+        } catch (IllegalArgumentException e) {
+            problems.add("ownerKeys.encryption is not a usable X25519 public key: responses could not be encrypted to it");
+        }
     }
 
     private static Set<String> tasks(BundleManifest m, List<String> problems) {

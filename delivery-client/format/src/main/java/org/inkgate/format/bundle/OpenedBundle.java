@@ -19,8 +19,9 @@ import org.inkgate.format.refusal.WrongReleaseCode;
 
 /**
  * A bundle that passed every check, unpacked into a private temporary folder that
- * {@link #close()} deletes. A sealed bundle's content stays encrypted until {@link #unseal}
- * is given the right release code.
+ * {@link #close()} deletes. A sealed bundle's entries stay encrypted on disk: after
+ * {@link #unseal} has checked the release code and every entry, {@link #readBytes} decrypts
+ * in memory, so a crash never leaves a decrypted prompt behind.
  */
 public final class OpenedBundle implements AutoCloseable {
 
@@ -29,7 +30,7 @@ public final class OpenedBundle implements AutoCloseable {
     private final String signerFingerprint;
     private final String manifestSha256;
     private final PrivateTempFolder folder;
-    private boolean unsealed;
+    private byte[] sealKey;
 
     OpenedBundle(String fileName, BundleManifest manifest, String signerFingerprint, String manifestSha256,
             PrivateTempFolder folder) {
@@ -38,7 +39,6 @@ public final class OpenedBundle implements AutoCloseable {
         this.signerFingerprint = signerFingerprint;
         this.manifestSha256 = manifestSha256;
         this.folder = folder;
-        this.unsealed = !manifest.sealed();
     }
 
     public BundleManifest manifest() {
@@ -64,21 +64,23 @@ public final class OpenedBundle implements AutoCloseable {
     }
 
     /** True when the content can be read: the bundle was never sealed, or it has been unsealed. */
-    public boolean readable() {
-        return unsealed;
+    public synchronized boolean readable() {
+        return !manifest.sealed() || sealKey != null;
     }
 
     /**
-     * Decrypts the sealed entries with the release code. A wrong code is refused before anything
-     * is decrypted; the bundle stays sealed and the code can be entered again.
+     * Checks the release code and then decrypts every sealed entry once, in memory, to prove the
+     * whole bundle opens (and every pack matches its digest) before a sitting relies on it. A
+     * wrong code changes nothing: the bundle stays sealed and the code can be entered again.
      */
     public synchronized void unseal(char[] releaseCode) throws FormatRefusal, IOException {
-        if (unsealed) {
+        if (readable()) {
             return;
         }
         SealSpec seal = manifest.seal();
         Base64.Decoder b64 = Base64.getDecoder();
         byte[] key = Pbkdf2.derive(releaseCode, b64.decode(seal.salt()), seal.iterations(), AesGcm.KEY_BYTES);
+        boolean kept = false;
         try {
             try {
                 byte[] check = AesGcm.open(key, b64.decode(seal.check()), BundleWriter.CHECK_AAD);
@@ -88,54 +90,79 @@ public final class OpenedBundle implements AutoCloseable {
             } catch (AEADBadTagException e) {
                 throw new WrongReleaseCode(fileName);
             }
-            for (Map.Entry<String, EntryDigest> e : manifest.entries().entrySet()) {
-                if (!e.getValue().sealed()) {
-                    continue;
+            for (String entry : manifest.entries().keySet()) {
+                byte[] plain = decrypt(key, entry);
+                PackRef pack = manifest.packs().stream().filter(p -> p.file().equals(entry)).findFirst().orElse(null);
+                if (pack != null && !Sha256.hex(plain).equals(pack.sha256())) {
+                    throw new DigestMismatch(fileName, entry);
                 }
-                Path path = folder.resolve(e.getKey());
-                byte[] plain;
-                try {
-                    plain = AesGcm.open(key, Files.readAllBytes(path), BundleWriter.sealedEntryAad(e.getKey()));
-                } catch (AEADBadTagException ex) {
-                    throw new DecryptionFailed(fileName, "sealed entry \"" + e.getKey()
-                            + "\" does not decrypt although the release code is right: the bundle was built wrongly."
-                            + " Ask the test owner for a new bundle.", ex);
-                }
-                Files.write(path, plain);
+                Arrays.fill(plain, (byte) 0);
             }
-            for (PackRef pack : manifest.packs()) {
-                if (!Sha256.hex(Files.readAllBytes(folder.resolve(pack.file()))).equals(pack.sha256())) {
-                    throw new DigestMismatch(fileName, pack.file());
-                }
-            }
-            unsealed = true;
+            sealKey = key;
+            kept = true;
         } finally {
-            Arrays.fill(key, (byte) 0);
+            if (!kept) {
+                Arrays.fill(key, (byte) 0);
+            }
         }
     }
 
-    /** The bytes of a content entry (prompt, instructions, pack). */
-    public byte[] readBytes(String entry) throws IOException {
-        return Files.readAllBytes(path(entry));
+    private byte[] decrypt(byte[] key, String entry) throws FormatRefusal, IOException {
+        try {
+            return AesGcm.open(key, Files.readAllBytes(folder.resolve(entry)), BundleWriter.sealedEntryAad(entry));
+        } catch (AEADBadTagException e) {
+            throw new DecryptionFailed(fileName, "sealed entry \"" + entry
+                    + "\" does not decrypt although the release code is right: the bundle was built wrongly."
+                    + " Ask the test owner for a new bundle.", e);
+        }
+    }
+
+    /** The bytes of a content entry (prompt, instructions, pack); decrypted in memory when sealed. */
+    public synchronized byte[] readBytes(String entry) throws IOException {
+        requireEntry(entry);
+        if (!manifest.sealed()) {
+            return Files.readAllBytes(folder.resolve(entry));
+        }
+        try {
+            return decrypt(sealKey, entry);
+        } catch (FormatRefusal e) {
+            // unseal() already decrypted this entry from the same verified bytes: only a changed temp file gets here
+            throw new IOException("sealed entry \"" + entry + "\" changed on disk after it was checked: " + e.getMessage(), e);
+        }
     }
 
     public String readText(String entry) throws IOException {
         return new String(readBytes(entry), StandardCharsets.UTF_8);
     }
 
-    /** Where a content entry lies unpacked, for tools that need a file (pack indexes). */
+    /**
+     * Where an unsealed bundle's entry lies unpacked, for tools that need a file. Sealed entries
+     * are never written decrypted to disk; read them with {@link #readBytes}.
+     */
     public Path path(String entry) {
-        if (!unsealed) {
+        requireEntry(entry);
+        if (manifest.sealed()) {
+            throw new IllegalStateException("\"" + entry + "\" is sealed: sealed entries are never written decrypted"
+                    + " to disk; read them with readBytes after unsealing");
+        }
+        return folder.resolve(entry);
+    }
+
+    private void requireEntry(String entry) {
+        if (!readable()) {
             throw new IllegalStateException("the bundle is sealed: unseal it with the release code first");
         }
         if (!manifest.entries().containsKey(entry)) {
             throw new IllegalArgumentException("\"" + entry + "\" is not an entry of this bundle");
         }
-        return folder.resolve(entry);
     }
 
     @Override
-    public void close() throws IOException {
+    public synchronized void close() throws IOException {
+        if (sealKey != null) {
+            Arrays.fill(sealKey, (byte) 0);
+            sealKey = null;
+        }
         folder.close();
     }
 }

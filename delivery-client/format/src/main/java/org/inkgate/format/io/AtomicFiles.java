@@ -41,8 +41,22 @@ public final class AtomicFiles {
             } catch (AtomicMoveNotSupportedException e) {
                 Files.move(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
             }
+            forceFolder(folder);
         } finally {
             Files.deleteIfExists(temp);
+        }
+    }
+
+    /**
+     * On POSIX systems a rename is durable only once the folder itself is flushed; without it a
+     * power cut can lose the new name. Windows cannot open a folder this way: there the rename
+     * is left to the file system's own journal.
+     */
+    private static void forceFolder(Path folder) {
+        try (FileChannel dir = FileChannel.open(folder, StandardOpenOption.READ)) {
+            dir.force(true);
+        } catch (IOException | UnsupportedOperationException e) {
+            // not supported for folders on this platform
         }
     }
 

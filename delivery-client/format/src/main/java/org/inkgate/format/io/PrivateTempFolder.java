@@ -53,23 +53,56 @@ public final class PrivateTempFolder implements AutoCloseable {
         return path;
     }
 
+    /**
+     * Deletes the folder and everything in it. Carries on past a file it cannot delete (locked
+     * on Windows, say) so that as much as possible goes, then reports the first failure.
+     */
     @Override
     public void close() throws IOException {
         if (!Files.exists(root)) {
             return;
         }
+        IOException[] first = new IOException[1];
         Files.walkFileTree(root, new SimpleFileVisitor<>() {
             @Override
-            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) throws IOException {
-                Files.delete(file);
+            public FileVisitResult visitFile(Path file, BasicFileAttributes attrs) {
+                delete(file);
                 return FileVisitResult.CONTINUE;
             }
 
             @Override
-            public FileVisitResult postVisitDirectory(Path dir, IOException exc) throws IOException {
-                Files.delete(dir);
+            public FileVisitResult visitFileFailed(Path file, IOException exc) {
+                remember(exc);
                 return FileVisitResult.CONTINUE;
             }
+
+            @Override
+            public FileVisitResult postVisitDirectory(Path dir, IOException exc) {
+                if (exc != null) {
+                    remember(exc);
+                }
+                delete(dir);
+                return FileVisitResult.CONTINUE;
+            }
+
+            private void delete(Path path) {
+                try {
+                    Files.delete(path);
+                } catch (IOException e) {
+                    remember(e);
+                }
+            }
+
+            private void remember(IOException e) {
+                if (first[0] == null) {
+                    first[0] = e;
+                } else {
+                    first[0].addSuppressed(e);
+                }
+            }
         });
+        if (first[0] != null) {
+            throw first[0];
+        }
     }
 }

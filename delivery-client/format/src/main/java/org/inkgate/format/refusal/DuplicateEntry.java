@@ -1,9 +1,17 @@
 package org.inkgate.format.refusal;
 
-/** The archive holds two entries with one name, so which one a reader uses is ambiguous. */
+/**
+ * The archive holds two entries that are, or could be, the same file: the same name twice, names
+ * that differ only in case or Unicode form, or a name that is both a file and a folder.
+ */
 public final class DuplicateEntry extends FormatRefusal {
 
     public DuplicateEntry(String file, String entry) {
-        super(file, "entry \"" + entry + "\" appears more than once. The archive was built by another tool or altered; do not use it.");
+        this(file, entry, "appears more than once");
+    }
+
+    public DuplicateEntry(String file, String entry, String how) {
+        super(file, "entry \"" + entry + "\" " + how
+                + ". Which content a reader uses would depend on the machine; do not use this file.");
     }
 }

@@ -13,8 +13,27 @@ public abstract sealed class FormatRefusal extends Exception
     private final String file;
 
     protected FormatRefusal(String file, String message, Throwable cause) {
-        super(file + ": " + message, cause);
+        super(printable(file + ": " + message), cause);
         this.file = file;
+    }
+
+    /**
+     * Messages repeat names and values taken from the refused file, which an attacker chooses:
+     * control, C1, bidirectional and line-separator characters are shown as \\uXXXX so that a
+     * message can never forge console or log lines or reorder what an invigilator reads.
+     */
+    static String printable(String text) {
+        StringBuilder out = new StringBuilder(text.length());
+        text.codePoints().forEach(c -> {
+            boolean hidden = c < 0x20 || (c >= 0x7f && c <= 0x9f) || c == 0x061c || c == 0x200e || c == 0x200f
+                    || (c >= 0x2028 && c <= 0x202e) || (c >= 0x2066 && c <= 0x2069);
+            if (hidden) {
+                out.append(String.format("\\u%04x", c));
+            } else {
+                out.appendCodePoint(c);
+            }
+        });
+        return out.toString();
     }
 
     protected FormatRefusal(String file, String message) {

@@ -9,8 +9,12 @@ import java.security.PublicKey;
 import java.util.Arrays;
 import java.util.Base64;
 import java.util.List;
+import java.util.Map;
+import java.util.Objects;
 import java.util.Set;
+import java.util.UUID;
 import javax.crypto.AEADBadTagException;
+import org.inkgate.format.archive.ArchiveEntry;
 import org.inkgate.format.archive.ArchiveLimits;
 import org.inkgate.format.archive.SafeZipReader;
 import org.inkgate.format.archive.SignedArchive;
@@ -21,58 +25,80 @@ import org.inkgate.format.crypto.Fingerprint;
 import org.inkgate.format.crypto.Hkdf;
 import org.inkgate.format.crypto.Sha256;
 import org.inkgate.format.crypto.X25519;
-import org.inkgate.format.io.PrivateTempFolder;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.refusal.BadSignature;
 import org.inkgate.format.refusal.DecryptionFailed;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.InvalidContent;
+import org.inkgate.format.refusal.MissingEntry;
+import org.inkgate.format.refusal.SizeLimitExceeded;
 import org.inkgate.format.refusal.UnlistedEntry;
 import org.inkgate.format.refusal.UnsupportedSchema;
+import org.inkgate.format.refusal.UntrustedSigner;
+import org.inkgate.format.trust.TrustPolicy;
 
 /**
  * Opens response packages with the test owner's X25519 private key: checks the outer
  * archive, decrypts and authenticates the payload, checks the inner archive, the client's
- * signature, every digest and the event log's hash chain. Only then is anything handed out.
+ * signature and whether that client installation is trusted, every digest and the event
+ * log's hash chain. Only then is anything handed out. The file is read once, and decrypted
+ * content stays in memory: answers are never written to disk in the clear.
+ *
+ * <p>Anyone can encrypt to the owner's public key, so a package's origin rests on the
+ * installation key that signed it: give the reader the fingerprints of the installations
+ * enrolled for the sitting, or accept any signer and check {@link OpenedResponse#installationFingerprint()}.
  */
 public final class ResponsePackageReader {
 
     private final PrivateKey ownerKey;
     private final byte[] ownerPublic;
+    private final TrustPolicy installations;
     private final ArchiveLimits limits;
 
-    public ResponsePackageReader(PrivateKey ownerEncryptionKey) {
-        this(ownerEncryptionKey, ArchiveLimits.defaults());
+    public ResponsePackageReader(PrivateKey ownerEncryptionKey, TrustPolicy installations) {
+        this(ownerEncryptionKey, installations, defaultLimits());
     }
 
-    public ResponsePackageReader(PrivateKey ownerEncryptionKey, ArchiveLimits limits) {
+    public ResponsePackageReader(PrivateKey ownerEncryptionKey, TrustPolicy installations, ArchiveLimits limits) {
         this.ownerKey = ownerEncryptionKey;
         this.ownerPublic = X25519.rawPublic(X25519.publicOf(ownerEncryptionKey));
+        this.installations = Objects.requireNonNull(installations, "installations: say which installation keys to trust");
         this.limits = limits;
+    }
+
+    /** A response package holds one candidate's sitting: 256 MiB is far above any real one. */
+    public static ArchiveLimits defaultLimits() {
+        return new ArchiveLimits(256L << 20, 16, 256L << 20, 512L << 20, ArchiveLimits.DEFAULT_MAX_RATIO);
     }
 
     public OpenedResponse open(Path file) throws FormatRefusal, IOException {
         String name = file.getFileName().toString();
+        long size = Files.size(file);
+        if (size > limits.maxArchiveBytes()) {
+            throw new SizeLimitExceeded(name, "the package's size (" + size + " bytes)", limits.maxArchiveBytes());
+        }
+        byte[] bytes = Files.readAllBytes(file);
+        String packageSha256 = Sha256.hex(bytes);
         byte[] envelopeBytes;
         byte[] payload;
-        try (SafeZipReader outer = SafeZipReader.open(file, limits)) {
-            for (var entry : outer.entries()) {
+        try (SafeZipReader outer = SafeZipReader.open(name, bytes, limits)) {
+            for (ArchiveEntry entry : outer.entries()) {
                 if (!entry.name().equals(PackageLayout.ENVELOPE) && !entry.name().equals(PackageLayout.PAYLOAD)) {
                     throw new UnlistedEntry(name, entry.name());
                 }
             }
-            envelopeBytes = SignedArchive.required(name, outer, PackageLayout.ENVELOPE);
-            payload = SignedArchive.required(name, outer, PackageLayout.PAYLOAD);
+            envelopeBytes = SignedArchive.manifest(name, outer, PackageLayout.ENVELOPE);
+            ArchiveEntry payloadEntry = outer.entry(PackageLayout.PAYLOAD)
+                    .orElseThrow(() -> new MissingEntry(name, PackageLayout.PAYLOAD));
+            payload = outer.read(payloadEntry);
         }
+        bytes = null; // the outer archive is no longer needed; let it go before decrypting
         JsonNode envelopeTree = Json.tree(name, PackageLayout.ENVELOPE, envelopeBytes);
         checkSchema(name, envelopeTree, Envelope.FORMAT, Envelope.SCHEMA_VERSION, "response package");
         Envelope envelope = Json.bind(name, PackageLayout.ENVELOPE, envelopeBytes, Envelope.class);
         byte[] inner = decrypt(name, envelope, envelopeBytes, payload);
-        try (PrivateTempFolder folder = PrivateTempFolder.create("inkgate-response-")) {
-            Path innerFile = folder.resolve("content.zip");
-            Files.write(innerFile, inner);
-            return readInner(name, envelope, innerFile, folder, Sha256.hex(Files.readAllBytes(file)));
-        }
+        payload = null;
+        return readInner(name, envelope, inner, packageSha256);
     }
 
     private byte[] decrypt(String name, Envelope envelope, byte[] envelopeBytes, byte[] payload) throws FormatRefusal {
@@ -112,17 +138,13 @@ public final class ResponsePackageReader {
         }
     }
 
-    private OpenedResponse readInner(String name, Envelope envelope, Path innerFile, PrivateTempFolder folder,
-            String packageSha256) throws FormatRefusal, IOException {
-        try (SafeZipReader zip = SafeZipReader.open(innerFile, limits)) {
-            byte[] manifestBytes = SignedArchive.required(name, zip, PackageLayout.MANIFEST);
-            byte[] signature = zip.entry(PackageLayout.SIGNATURE).isPresent()
-                    ? zip.read(zip.entry(PackageLayout.SIGNATURE).get()) : null;
-            if (signature == null) {
-                throw new BadSignature(name, "the package carries no signature (" + PackageLayout.SIGNATURE + " is missing)");
-            }
+    private OpenedResponse readInner(String name, Envelope envelope, byte[] inner, String packageSha256)
+            throws FormatRefusal, IOException {
+        try (SafeZipReader zip = SafeZipReader.open(name, inner, limits)) {
+            byte[] manifestBytes = SignedArchive.manifest(name, zip, PackageLayout.MANIFEST);
+            byte[] signature = SignedArchive.signature(name, zip, PackageLayout.SIGNATURE);
             JsonNode tree = Json.tree(name, PackageLayout.MANIFEST, manifestBytes);
-            checkSchema(name, tree, PackageManifest.FORMAT, PackageManifest.SCHEMA_VERSION, "response package");
+            checkFormat(name, tree, PackageManifest.FORMAT, "response package");
             PublicKey signer;
             try {
                 signer = Ed25519.publicFromRaw(Base64.getDecoder().decode(tree.path("signingKey").asText("")));
@@ -132,46 +154,74 @@ public final class ResponsePackageReader {
             if (!Ed25519.verify(signer, manifestBytes, signature)) {
                 throw new BadSignature(name, "the client's signature does not match the package contents");
             }
+            checkSchemaVersion(name, tree, PackageManifest.SCHEMA_VERSION, "response package");
+            String installation = Fingerprint.of(Ed25519.rawPublic(signer));
+            if (!installations.trusts(installation)) {
+                throw new UntrustedSigner(name, installation);
+            }
             PackageManifest manifest = Json.bind(name, PackageLayout.MANIFEST, manifestBytes, PackageManifest.class);
             if (!manifest.entries().keySet().equals(Set.of(PackageLayout.RESPONSE, PackageLayout.EVENTS))) {
                 throw new InvalidContent(name, "the package lists " + manifest.entries().keySet()
                         + " instead of response.json and events.jsonl");
             }
-            SignedArchive.extractListed(name, zip,
+            Map<String, byte[]> content = SignedArchive.readListed(name, zip,
                     ListedDigest.of(manifest.entries(), d -> new ListedDigest(d.sha256(), d.size())),
-                    Set.of(PackageLayout.MANIFEST, PackageLayout.SIGNATURE), folder);
-            byte[] responseBytes = Files.readAllBytes(folder.resolve(PackageLayout.RESPONSE));
-            byte[] eventBytes = Files.readAllBytes(folder.resolve(PackageLayout.EVENTS));
+                    Set.of(PackageLayout.MANIFEST, PackageLayout.SIGNATURE));
+            byte[] responseBytes = content.get(PackageLayout.RESPONSE);
+            byte[] eventBytes = content.get(PackageLayout.EVENTS);
             JsonNode responseTree = Json.tree(name, PackageLayout.RESPONSE, responseBytes);
-            checkSchema(name, responseTree, ResponseDocument.FORMAT, ResponseDocument.SCHEMA_VERSION, "response");
+            checkFormat(name, responseTree, ResponseDocument.FORMAT, "response");
+            checkSchemaVersion(name, responseTree, ResponseDocument.SCHEMA_VERSION, "response");
             ResponseDocument response = Json.bind(name, PackageLayout.RESPONSE, responseBytes, ResponseDocument.class);
             List<ProcessEvent> events = EventChain.decode(name, PackageLayout.EVENTS, eventBytes);
             if (events.size() != manifest.eventCount() || !EventChain.head(eventBytes).equals(manifest.chainHead())) {
                 throw new InvalidContent(name, "the event log does not end where the signed manifest says it ends");
             }
-            if (!java.util.Objects.equals(envelope.packageId(), manifest.packageId())
-                    || !java.util.Objects.equals(manifest.packageId(), response.packageId())) {
-                throw new InvalidContent(name, "the package id differs between envelope, manifest and response"
-                        + " (parts of different packages were combined)");
-            }
-            return new OpenedResponse(name, envelope, response, events,
-                    Fingerprint.of(Ed25519.rawPublic(signer)), packageSha256);
+            checkPackageId(name, envelope.packageId(), manifest.packageId(), response.packageId());
+            return new OpenedResponse(name, envelope, response, events, installation, packageSha256);
         }
     }
 
-    static void checkSchema(String name, JsonNode tree, String format, int newest, String what) throws UnsupportedSchema {
+    /** One UUID in all three places: copies can then be matched and parts of packages not mixed. */
+    private static void checkPackageId(String name, String envelopeId, String manifestId, String responseId)
+            throws InvalidContent {
+        try {
+            if (envelopeId == null || !UUID.fromString(envelopeId).toString().equals(envelopeId)) {
+                throw new InvalidContent(name, "the package id \"" + envelopeId + "\" is not a UUID");
+            }
+        } catch (IllegalArgumentException e) {
+            throw new InvalidContent(name, "the package id \"" + envelopeId + "\" is not a UUID");
+        }
+        if (!envelopeId.equals(manifestId) || !envelopeId.equals(responseId)) {
+            throw new InvalidContent(name, "the package id differs between envelope, manifest and response"
+                    + " (parts of different packages were combined)");
+        }
+    }
+
+    private static void checkSchema(String name, JsonNode tree, String format, int newest, String what)
+            throws UnsupportedSchema {
+        checkFormat(name, tree, format, what);
+        checkSchemaVersion(name, tree, newest, what);
+    }
+
+    private static void checkFormat(String name, JsonNode tree, String format, String what) throws UnsupportedSchema {
         String actual = tree.path("format").asText("");
         if (!format.equals(actual)) {
             throw new UnsupportedSchema(name, "this is not a " + what + " (format \"" + actual + "\" where \"" + format
                     + "\" was expected). Collect .inkresp files written by the Inkgate delivery client.");
         }
+    }
+
+    private static void checkSchemaVersion(String name, JsonNode tree, int newest, String what) throws UnsupportedSchema {
         JsonNode version = tree.path("schemaVersion");
         if (!version.isIntegralNumber() || version.asInt() < 1) {
             throw new UnsupportedSchema(name, "the " + what + " has no valid schemaVersion; the file is damaged.");
         }
         if (version.asInt() > newest) {
+            // the envelope is read before anything can be authenticated, so an edit looks the same
             throw new UnsupportedSchema(name, "the " + what + " uses schema version " + version.asInt() + ", newer than the "
-                    + newest + " this version reads. Update the admin tool to the version that matches the client.");
+                    + newest + " this version reads. Update the admin tool to the version that matches the client;"
+                    + " if no newer client was used, the file was altered.");
         }
     }
 }

@@ -12,7 +12,7 @@ import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.BundleWriter;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.bundle.PackRef;
-import org.inkgate.format.bundle.TrustPolicy;
+import org.inkgate.format.trust.TrustPolicy;
 import org.inkgate.format.crypto.Sha256;
 import org.inkgate.format.response.OpenedResponse;
 import org.inkgate.format.response.ProcessEvent;
@@ -85,7 +85,7 @@ public class FormatBenchmarks {
 
         log = SampleResponse.events(events);
         packageWriter = new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic());
-        packageReader = new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION);
+        packageReader = new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION, TestKeys.installations());
         responsePackage = dir.resolve("1001.inkresp");
         packageWriter.write(SampleResponse.document(), log, responsePackage);
     }

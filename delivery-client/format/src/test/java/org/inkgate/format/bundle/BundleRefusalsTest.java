@@ -1,5 +1,6 @@
 package org.inkgate.format.bundle;
 
+import org.inkgate.format.trust.TrustPolicy;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;

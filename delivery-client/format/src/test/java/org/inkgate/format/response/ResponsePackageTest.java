@@ -30,7 +30,7 @@ class ResponsePackageTest {
 
     @TempDir
     Path dir;
-    final ResponsePackageReader reader = new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION);
+    final ResponsePackageReader reader = new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION, TestKeys.installations());
     final ResponseDocument document = SampleResponse.document();
     final List<ProcessEvent> events = SampleResponse.events(40);
 
@@ -89,7 +89,7 @@ class ResponsePackageTest {
     @Test
     void open_withAnotherOwnersKey_isRefusedNamingBothKeys() throws Exception {
         DecryptionFailed refusal = assertThrows(DecryptionFailed.class,
-                () -> new ResponsePackageReader(TestKeys.OTHER_ENCRYPTION).open(written()));
+                () -> new ResponsePackageReader(TestKeys.OTHER_ENCRYPTION, TestKeys.installations()).open(written()));
         assertTrue(refusal.getMessage().contains("not to this key"), refusal.getMessage());
     }
 

@@ -35,6 +35,12 @@ public final class TestKeys {
                 b64.encodeToString(X25519.rawPublic(ownerEncryptionPublic())));
     }
 
+    /** The test client installation, enrolled: what a collector trusts for the sample sitting. */
+    public static org.inkgate.format.trust.TrustPolicy installations() {
+        return org.inkgate.format.trust.TrustPolicy.trusting(java.util.Set.of(
+                Fingerprint.of(Ed25519.rawPublic(Ed25519.publicOf(INSTALLATION_SIGNING)))));
+    }
+
     public static String ownerFingerprint() {
         return Fingerprint.of(Ed25519.rawPublic(Ed25519.publicOf(OWNER_SIGNING)));
     }
