@@ -13,19 +13,18 @@ import java.util.Map;
 import java.util.Random;
 import java.util.Set;
 import java.util.TreeMap;
-import java.util.stream.Stream;
 import org.inkgate.format.archive.ArchiveLimits;
 import org.inkgate.format.archive.HostileArchives;
 import org.inkgate.format.archive.SafeZipReader;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.BundleWriter;
 import org.inkgate.format.trust.TrustPolicy;
-import org.inkgate.format.io.PrivateTempFolder;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.response.ResponsePackageWriter;
 import org.inkgate.format.testutil.SampleExam;
 import org.inkgate.format.testutil.SampleResponse;
+import org.inkgate.format.testutil.TempFolders;
 import org.inkgate.format.testutil.TestKeys;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -230,7 +229,7 @@ class MutationTest {
     }
 
     private Outcome refuseAll(List<Damage> damages, Opener opener) throws Exception {
-        long foldersBefore = tempFolders();
+        long foldersBefore = TempFolders.count();
         Map<String, Integer> refusals = new TreeMap<>();
         List<String> opened = new ArrayList<>();
         Path mutant = dir.resolve("mutant.bin");
@@ -244,16 +243,10 @@ class MutationTest {
             }
         }
         assertTrue(opened.isEmpty(), "damaged files were opened: " + opened);
-        assertEquals(foldersBefore, tempFolders(), "no temporary folder is left behind by a refused file");
+        assertEquals(foldersBefore, TempFolders.count(), "no temporary folder is left behind by a refused file");
         return new Outcome(damages.size(), refusals);
     }
 
-    private static long tempFolders() throws IOException {
-        // surefire points inkgate.tmpdir at this module's target folder, so other processes cannot disturb the count
-        try (Stream<Path> s = Files.list(PrivateTempFolder.parent())) {
-            return s.filter(p -> p.getFileName().toString().startsWith("inkgate-")).count();
-        }
-    }
 
     private static synchronized void report(String what, Outcome outcome) throws IOException {
         Path target = Path.of("target", "mutation-report.txt");

@@ -16,12 +16,10 @@ import java.util.Base64;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.stream.Stream;
 import org.inkgate.format.archive.ArchiveLimits;
 import org.inkgate.format.archive.HostileArchives;
 import org.inkgate.format.archive.SafeZipReader;
 import org.inkgate.format.crypto.Ed25519;
-import org.inkgate.format.io.PrivateTempFolder;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.refusal.BadSignature;
 import org.inkgate.format.refusal.DuplicateEntry;
@@ -29,6 +27,7 @@ import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.InvalidContent;
 import org.inkgate.format.refusal.SizeLimitExceeded;
 import org.inkgate.format.testutil.SampleExam;
+import org.inkgate.format.testutil.TempFolders;
 import org.inkgate.format.testutil.TestKeys;
 import org.inkgate.format.trust.TrustPolicy;
 import org.junit.jupiter.api.BeforeEach;
@@ -78,10 +77,10 @@ class BundleHardeningTest {
     @Test
     void open_entryThatIsBothFileAndFolder_isRefusedAndLeavesNothingBehind() throws Exception {
         Path file = signed("clash.inkexam", entry("manifest.json"), Map.of("prompts/t1.md/x", new byte[] {2}));
-        long before = tempFolders();
+        long before = TempFolders.count();
         DuplicateEntry refusal = assertThrows(DuplicateEntry.class, () -> reader.open(file).close());
         assertTrue(refusal.getMessage().contains("also a file"), refusal.getMessage());
-        assertEquals(before, tempFolders());
+        assertEquals(before, TempFolders.count());
     }
 
     @Test
@@ -176,11 +175,6 @@ class BundleHardeningTest {
         assertThrows(IllegalArgumentException.class, () -> PinHasher.hash("12345".toCharArray()));
     }
 
-    private static long tempFolders() throws java.io.IOException {
-        try (Stream<Path> s = Files.list(PrivateTempFolder.parent())) {
-            return s.filter(p -> p.getFileName().toString().startsWith("inkgate-")).count();
-        }
-    }
 
     private static long allocatedByThisThread() {
         return ((com.sun.management.ThreadMXBean) ManagementFactory.getThreadMXBean()).getCurrentThreadAllocatedBytes();
