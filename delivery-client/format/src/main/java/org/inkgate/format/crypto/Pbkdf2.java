@@ -7,8 +7,9 @@ import javax.crypto.spec.PBEKeySpec;
 
 /**
  * PBKDF2-HMAC-SHA256 (RFC 8018 section 5.2) for release codes and invigilator PINs.
- * {@link #ITERATIONS} follows the OWASP Password Storage Cheat Sheet's figure for
- * PBKDF2-HMAC-SHA256 (600,000 iterations; recalled from the 2023 edition of the sheet).
+ * {@link #ITERATIONS} follows the OWASP Password Storage Cheat Sheet, section PBKDF2:
+ * "PBKDF2-HMAC-SHA256: 600,000 iterations" (the figure since the sheet's December 2022
+ * revision, which raised it from 310,000).
  */
 public final class Pbkdf2 {
 
