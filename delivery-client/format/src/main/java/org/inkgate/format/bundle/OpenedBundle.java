@@ -6,7 +6,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.Base64;
-import java.util.Map;
 import javax.crypto.AEADBadTagException;
 import org.inkgate.format.crypto.AesGcm;
 import org.inkgate.format.crypto.Pbkdf2;

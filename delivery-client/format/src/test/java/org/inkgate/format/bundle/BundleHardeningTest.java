@@ -8,25 +8,20 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.lang.management.ManagementFactory;
 import java.math.BigInteger;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Base64;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import org.inkgate.format.archive.ArchiveLimits;
 import org.inkgate.format.archive.HostileArchives;
-import org.inkgate.format.archive.SafeZipReader;
-import org.inkgate.format.crypto.Ed25519;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.refusal.BadSignature;
 import org.inkgate.format.refusal.DuplicateEntry;
-import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.InvalidContent;
 import org.inkgate.format.refusal.SizeLimitExceeded;
 import org.inkgate.format.testutil.SampleExam;
+import org.inkgate.format.testutil.SignedBundles;
 import org.inkgate.format.testutil.TempFolders;
 import org.inkgate.format.testutil.TestKeys;
 import org.inkgate.format.trust.TrustPolicy;
@@ -44,26 +39,15 @@ class BundleHardeningTest {
 
     @BeforeEach
     void writeGoodBundle() throws Exception {
-        good = dir.resolve("good.inkexam");
-        new BundleWriter(TestKeys.OWNER_SIGNING).write(SampleExam.manifest(), SampleExam.contents(), good);
+        good = SignedBundles.good(dir);
     }
 
     private byte[] entry(String name) throws Exception {
-        try (SafeZipReader zip = SafeZipReader.open(good, ArchiveLimits.defaults())) {
-            return zip.read(zip.entry(name).orElseThrow());
-        }
+        return SignedBundles.entry(good, name);
     }
 
-    /** Packs a manifest signed by the owner with the sample contents and any extra entries. */
     private Path signed(String fileName, byte[] manifest, Map<String, byte[]> extra) throws Exception {
-        List<Map.Entry<String, byte[]>> entries = new ArrayList<>();
-        entries.add(Map.entry("manifest.json", manifest));
-        entries.add(Map.entry("manifest.sig", Ed25519.sign(TestKeys.OWNER_SIGNING, manifest)));
-        SampleExam.contents().forEach((k, v) -> entries.add(Map.entry(k, v)));
-        extra.forEach((k, v) -> entries.add(Map.entry(k, v)));
-        Path file = dir.resolve(fileName);
-        HostileArchives.writeRaw(file, entries.toArray(Map.Entry[]::new));
-        return file;
+        return SignedBundles.signedWith(dir, fileName, manifest, extra);
     }
 
     @Test

@@ -9,12 +9,10 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
 import org.inkgate.format.archive.ArchiveLimits;
 import org.inkgate.format.archive.HostileArchives;
-import org.inkgate.format.crypto.Ed25519;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.refusal.BadSignature;
 import org.inkgate.format.refusal.CompressionRatioExceeded;
@@ -29,8 +27,7 @@ import org.inkgate.format.refusal.SizeLimitExceeded;
 import org.inkgate.format.refusal.UnlistedEntry;
 import org.inkgate.format.refusal.UnsafeEntryName;
 import org.inkgate.format.refusal.UnsupportedSchema;
-import org.inkgate.format.testutil.SampleExam;
-import org.inkgate.format.testutil.TestKeys;
+import org.inkgate.format.testutil.SignedBundles;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -45,8 +42,7 @@ class BundleRefusalsTest {
 
     @BeforeEach
     void writeGoodBundle() throws Exception {
-        good = dir.resolve("good.inkexam");
-        new BundleWriter(TestKeys.OWNER_SIGNING).write(SampleExam.manifest(), SampleExam.contents(), good);
+        good = SignedBundles.good(dir);
     }
 
     private <T extends FormatRefusal> T refused(Class<T> type, Path file) {
@@ -56,20 +52,11 @@ class BundleRefusalsTest {
     }
 
     private byte[] entry(String name) throws Exception {
-        try (var zip = org.inkgate.format.archive.SafeZipReader.open(good, ArchiveLimits.defaults())) {
-            return zip.read(zip.entry(name).orElseThrow());
-        }
+        return SignedBundles.entry(good, name);
     }
 
-    /** Signs an arbitrary manifest text with the owner key and packs it with the sample contents. */
     private Path signedWith(String fileName, byte[] manifest) throws Exception {
-        Path file = dir.resolve(fileName);
-        List<Map.Entry<String, byte[]>> entries = new java.util.ArrayList<>();
-        entries.add(Map.entry("manifest.json", manifest));
-        entries.add(Map.entry("manifest.sig", Ed25519.sign(TestKeys.OWNER_SIGNING, manifest)));
-        SampleExam.contents().forEach((k, v) -> entries.add(Map.entry(k, v)));
-        HostileArchives.writeRaw(file, entries.toArray(Map.Entry[]::new));
-        return file;
+        return SignedBundles.signedWith(dir, fileName, manifest, Map.of());
     }
 
     private ObjectNode manifestTree() throws Exception {
