@@ -340,7 +340,7 @@ public final class SafeZipReader implements AutoCloseable {
             String name = utf8(nameBytes, index);
             String problem = EntryNames.problem(name);
             if (problem != null) {
-                throw new UnsafeEntryName(file, name);
+                throw new UnsafeEntryName(file, name, problem);
             }
             if (madeBy != ZipLayout.VERSION || needed != ZipLayout.VERSION || flags != ZipLayout.FLAG_UTF8
                     || time != ZipLayout.DOS_TIME || date != ZipLayout.DOS_DATE || extraLength != 0
@@ -367,9 +367,9 @@ public final class SafeZipReader implements AutoCloseable {
                 if (entry.packedSize() == 0) {
                     throw new CompressionRatioExceeded(file, entry.name(), Long.MAX_VALUE, limits.maxRatio());
                 }
-                long ratio = entry.size() / entry.packedSize();
-                if (ratio > limits.maxRatio()) {
-                    throw new CompressionRatioExceeded(file, entry.name(), ratio, limits.maxRatio());
+                // exact comparison: size / packed > maxRatio, without integer division rounding down
+                if (entry.size() > entry.packedSize() * limits.maxRatio()) {
+                    throw new CompressionRatioExceeded(file, entry.name(), entry.size() / entry.packedSize(), limits.maxRatio());
                 }
             }
         }

@@ -5,7 +5,9 @@ import java.util.Base64;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import org.inkgate.format.crypto.AesGcm;
 import org.inkgate.format.crypto.Ed25519;
+import org.inkgate.format.crypto.Pbkdf2;
 import org.inkgate.format.crypto.X25519;
 import org.inkgate.packs.policy.ResourcePolicy;
 
@@ -87,6 +89,12 @@ final class ManifestRules {
         if (!m.practice() && m.invigilatorPin() == null) {
             problems.add("a bundle for a live sitting needs an invigilatorPin; only practice bundles may go without");
         }
+        if (m.invigilatorPin() != null) {
+            pin(problems, m.invigilatorPin());
+        }
+        if (m.seal() != null) {
+            seal(problems, m);
+        }
         return problems;
     }
 
@@ -111,6 +119,44 @@ final class ManifestRules {
         }
     }
 
+    /** A PIN hash that could never match is found when the bundle opens, not when the invigilator needs it. */
+    private static void pin(List<String> problems, PinHash pin) {
+        if (pin.iterations() < Pbkdf2.MIN_ITERATIONS || pin.iterations() > Pbkdf2.MAX_ITERATIONS) {
+            problems.add("invigilatorPin.iterations " + pin.iterations() + " is outside " + Pbkdf2.MIN_ITERATIONS + ".."
+                    + Pbkdf2.MAX_ITERATIONS);
+        }
+        if (base64Length(pin.salt()) < 16) {
+            problems.add("invigilatorPin.salt is not base64 of at least 16 bytes");
+        }
+        if (base64Length(pin.hash()) != 32) {
+            problems.add("invigilatorPin.hash is not base64 of 32 bytes");
+        }
+    }
+
+    private static void seal(List<String> problems, BundleManifest m) {
+        SealSpec seal = m.seal();
+        if (base64Length(seal.salt()) < 16) {
+            problems.add("seal.salt is not base64 of at least 16 bytes");
+        }
+        if (base64Length(seal.check()) < AesGcm.NONCE_BYTES + AesGcm.TAG_BITS / 8) {
+            problems.add("seal.check is not base64 of a nonce, a ciphertext and a tag");
+        }
+        m.entries().forEach((name, digest) -> {
+            if (!digest.sealed()) {
+                problems.add("entry \"" + name + "\" is not sealed in a sealed bundle: every content entry must be");
+            }
+        });
+    }
+
+    /** Decoded length of a base64 text, or -1 when it is missing or not base64. */
+    private static int base64Length(String text) {
+        try {
+            return text == null ? -1 : Base64.getDecoder().decode(text).length;
+        } catch (IllegalArgumentException e) {
+            return -1;
+        }
+    }
+
     private static Set<String> tasks(BundleManifest m, List<String> problems) {
         if (m.tasks().isEmpty()) {
             problems.add("the bundle has no tasks");
@@ -125,7 +171,7 @@ final class ManifestRules {
                 problems.add("task \"" + task.id() + "\": timeLimitSeconds is negative");
             }
             for (int minute : task.warningMinutes()) {
-                if (minute <= 0 || (task.timeLimitSeconds() > 0 && minute * 60 >= task.timeLimitSeconds())) {
+                if (minute <= 0 || minute * 60 >= task.timeLimitSeconds()) {
                     problems.add("task \"" + task.id() + "\": warning at " + minute + " minutes is not inside the time limit");
                 }
             }
@@ -140,6 +186,9 @@ final class ManifestRules {
     private static Set<String> questionnaires(BundleManifest m, List<String> problems) {
         Set<String> ids = unique(problems, "questionnaire", m.questionnaires().stream().map(QuestionnaireSpec::id).toList());
         for (QuestionnaireSpec q : m.questionnaires()) {
+            requireText(problems, q.title(), "title of questionnaire \"" + q.id() + "\"");
+            q.items().forEach(item -> requireText(problems, item.text(),
+                    "text of item \"" + item.id() + "\" in questionnaire \"" + q.id() + "\""));
             unique(problems, "item of questionnaire \"" + q.id() + "\"", q.items().stream().map(QuestionItem::id).toList());
             for (QuestionItem item : q.items()) {
                 if (item.kind() == null) {
@@ -155,6 +204,10 @@ final class ManifestRules {
     private static Set<String> packs(BundleManifest m, List<String> problems) {
         Set<String> ids = unique(problems, "pack", m.packs().stream().map(PackRef::id).toList());
         for (PackRef pack : m.packs()) {
+            requireText(problems, pack.version(), "version of pack \"" + pack.id() + "\"");
+            if (pack.sha256() == null || !pack.sha256().matches("[0-9a-f]{64}")) {
+                problems.add("pack \"" + pack.id() + "\": sha256 must be 64 lower-case hex digits");
+            }
             EntryDigest digest = pack.file() == null ? null : m.entries().get(pack.file());
             if (digest == null) {
                 problems.add("pack \"" + pack.id() + "\": file \"" + pack.file() + "\" is not an entry of the bundle");

@@ -31,6 +31,9 @@ public final class Json {
             .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
             .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
             .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY)
+            // "60" or 60.5 for a number, 0 or "true" for a boolean: refused, not converted
+            .disable(com.fasterxml.jackson.databind.MapperFeature.ALLOW_COERCION_OF_SCALARS)
+            .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
             .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
             .enable(SerializationFeature.INDENT_OUTPUT)
             .disable(SerializationFeature.WRITE_DATES_AS_TIMESTAMPS)
@@ -97,7 +100,9 @@ public final class Json {
         JsonLocation at = e.getLocation();
         long line = at == null ? 1 : Math.max(1, at.getLineNr());
         long column = at == null ? 1 : Math.max(1, at.getColumnNr());
-        String problem = e.getOriginalMessage();
+        // Jackson's hints are for programmers ("set ... to 'false' to allow"); the reader of the message cannot act on them
+        String problem = e.getOriginalMessage().replaceAll("\\s*\\(set [^)]*\\)", "")
+                .replaceAll("\\s*\\(enable [^)]*\\)", "");
         if (e instanceof JsonMappingException mapping && !mapping.getPath().isEmpty()) {
             problem = "at " + path(mapping.getPath()) + ": " + problem;
         }

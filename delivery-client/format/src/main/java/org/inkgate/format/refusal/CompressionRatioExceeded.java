@@ -4,7 +4,7 @@ package org.inkgate.format.refusal;
 public final class CompressionRatioExceeded extends FormatRefusal {
 
     public CompressionRatioExceeded(String file, String entry, long ratio, long limit) {
-        super(file, "entry \"" + entry + "\" expands " + ratio + " times, over the limit of " + limit
+        super(file, "entry \"" + entry + "\" expands about " + ratio + " times, over the limit of " + limit
                 + " (a decompression bomb). Do not use this file.");
     }
 }

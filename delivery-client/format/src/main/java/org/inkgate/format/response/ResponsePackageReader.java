@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
-import java.util.UUID;
 import javax.crypto.AEADBadTagException;
 import org.inkgate.format.archive.ArchiveEntry;
 import org.inkgate.format.archive.ArchiveLimits;
@@ -178,6 +177,11 @@ public final class ResponsePackageReader {
                 throw new InvalidContent(name, "the event log does not end where the signed manifest says it ends");
             }
             checkPackageId(name, envelope.packageId(), manifest.packageId(), response.packageId());
+            List<String> problems = ResponseRules.problems(response);
+            if (!problems.isEmpty()) {
+                throw new InvalidContent(name, "the signed response breaks the response rules: " + String.join("; ", problems)
+                        + ". The client that wrote it is faulty; keep the file and report it.");
+            }
             return new OpenedResponse(name, envelope, response, events, installation, packageSha256);
         }
     }
@@ -185,11 +189,7 @@ public final class ResponsePackageReader {
     /** One UUID in all three places: copies can then be matched and parts of packages not mixed. */
     private static void checkPackageId(String name, String envelopeId, String manifestId, String responseId)
             throws InvalidContent {
-        try {
-            if (envelopeId == null || !UUID.fromString(envelopeId).toString().equals(envelopeId)) {
-                throw new InvalidContent(name, "the package id \"" + envelopeId + "\" is not a UUID");
-            }
-        } catch (IllegalArgumentException e) {
+        if (!ResponseRules.isUuid(envelopeId)) {
             throw new InvalidContent(name, "the package id \"" + envelopeId + "\" is not a UUID");
         }
         if (!envelopeId.equals(manifestId) || !envelopeId.equals(responseId)) {

@@ -55,6 +55,10 @@ public final class ResponsePackageWriter {
             throw new IllegalArgumentException("the response document must be format " + ResponseDocument.FORMAT
                     + " version " + ResponseDocument.SCHEMA_VERSION);
         }
+        List<String> problems = ResponseRules.problems(response);
+        if (!problems.isEmpty()) {
+            throw new IllegalArgumentException("the response is not consistent: " + String.join("; ", problems));
+        }
         byte[] inner = innerArchive(response, events);
         KeyPair ephemeral = X25519.generate();
         byte[] ephemeralPublic = X25519.rawPublic(ephemeral.getPublic());

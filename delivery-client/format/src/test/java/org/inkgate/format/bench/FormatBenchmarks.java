@@ -97,6 +97,16 @@ public class FormatBenchmarks {
         }
     }
 
+    /**
+     * One guess at a release code or invigilator PIN: PBKDF2-HMAC-SHA256 at the iterations the
+     * writers use. Its cost is what slows offline guessing (docs/formats.md).
+     */
+    @Benchmark
+    public byte[] pbkdf2AtWriterIterations() {
+        return org.inkgate.format.crypto.Pbkdf2.derive("river-lamp-42-x".toCharArray(), new byte[16],
+                org.inkgate.format.crypto.Pbkdf2.ITERATIONS, 32);
+    }
+
     @Benchmark
     public String openBundle() throws Exception {
         try (OpenedBundle opened = bundleReader.open(bundle)) {

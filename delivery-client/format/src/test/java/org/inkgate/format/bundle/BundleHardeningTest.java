@@ -137,6 +137,46 @@ class BundleHardeningTest {
     }
 
     @Test
+    void open_pinHashThatCouldNeverMatch_isRefusedAtOpen() throws Exception {
+        ObjectNode tree = (ObjectNode) Json.mapper().readTree(entry("manifest.json"));
+        ObjectNode pin = tree.putObject("invigilatorPin");
+        pin.put("salt", "not base64!");
+        pin.put("iterations", 5);
+        pin.put("hash", Base64.getEncoder().encodeToString(new byte[8]));
+        InvalidContent refusal = assertThrows(InvalidContent.class,
+                () -> reader.open(signed("pin.inkexam", Json.write(tree), Map.of())).close());
+        assertTrue(refusal.getMessage().contains("invigilatorPin.iterations 5")
+                && refusal.getMessage().contains("invigilatorPin.salt")
+                && refusal.getMessage().contains("invigilatorPin.hash"), refusal.getMessage());
+    }
+
+    @Test
+    void open_sealWithUnsealedEntries_isRefused() throws Exception {
+        ObjectNode tree = (ObjectNode) Json.mapper().readTree(entry("manifest.json"));
+        ObjectNode seal = tree.putObject("seal");
+        seal.put("kdf", SealSpec.KDF);
+        seal.put("iterations", 600_000);
+        seal.put("salt", Base64.getEncoder().encodeToString(new byte[16]));
+        seal.put("check", Base64.getEncoder().encodeToString(new byte[40]));
+        InvalidContent refusal = assertThrows(InvalidContent.class,
+                () -> reader.open(signed("halfsealed.inkexam", Json.write(tree), Map.of())).close());
+        assertTrue(refusal.getMessage().contains("is not sealed in a sealed bundle"), refusal.getMessage());
+    }
+
+    @Test
+    void write_warningInAnUntimedTask_isRefused() {
+        BundleManifest m = SampleExam.manifest();
+        TaskSpec t = m.tasks().get(0);
+        List<TaskSpec> tasks = List.of(new TaskSpec(t.id(), t.title(), t.promptFile(), 0, List.of(5), t.words()), m.tasks().get(1));
+        BundleManifest untimed = new BundleManifest(m.format(), m.schemaVersion(), m.examId(), m.title(), m.language(),
+                m.instructionsFile(), tasks, m.conditions(), m.forms(), m.questionnaires(), m.packs(), m.roster(),
+                m.ownerKeys(), m.invigilatorPin(), m.seal(), m.practice(), m.entries());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new BundleWriter(TestKeys.OWNER_SIGNING)
+                .write(untimed, SampleExam.contents(), dir.resolve("untimed.inkexam")));
+        assertTrue(e.getMessage().contains("not inside the time limit"), e.getMessage());
+    }
+
+    @Test
     void writeSealed_shortReleaseCode_isRefused() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new BundleWriter(TestKeys.OWNER_SIGNING)
                 .writeSealed(SampleExam.manifest(), SampleExam.contents(), "short-code".toCharArray(), dir.resolve("s.inkexam")));

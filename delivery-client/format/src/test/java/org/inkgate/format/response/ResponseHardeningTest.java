@@ -61,13 +61,54 @@ class ResponseHardeningTest {
     }
 
     @Test
+    void write_packageWithoutAPackageId_isRefusedBeforeWriting() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic())
+                        .write(SampleResponse.document(null), SampleResponse.events(2), dir.resolve("noid.inkresp")));
+        assertTrue(e.getMessage().contains("not a UUID"), e.getMessage());
+    }
+
+    @Test
     void open_packageWithoutAPackageId_isRefused() throws Exception {
-        Path file = dir.resolve("noid.inkresp");
-        new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic())
-                .write(SampleResponse.document(null), SampleResponse.events(2), file);
+        // a faulty or hostile client that skips the writer's checks: the reader refuses it too
+        Path file = new HandmadePackage(SampleResponse.document(null), SampleResponse.events(2), TestKeys.INSTALLATION_SIGNING,
+                TestKeys.ownerEncryptionPublic()).writeTo(dir.resolve("noid.inkresp"), null);
         InvalidContent refusal = assertThrows(InvalidContent.class,
                 () -> new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION, TestKeys.installations()).open(file));
         assertTrue(refusal.getMessage().contains("not a UUID"), refusal.getMessage());
+    }
+
+    @Test
+    void write_toolsOfferedThatDifferFromThePolicy_isRefused() {
+        ResponseDocument d = SampleResponse.document();
+        TaskResponse t = d.tasks().get(1); // sat without tools
+        TaskResponse claimed = new TaskResponse(t.taskId(), t.conditionId(), t.text(), t.wordCount(), t.startedAt(),
+                t.endedAt(), t.extraTimeSeconds(), t.policy(), java.util.Set.of(org.inkgate.packs.policy.Tool.SPELLING),
+                t.toolUse(), t.endReason());
+        ResponseDocument bad = new ResponseDocument(d.format(), d.schemaVersion(), d.packageId(), d.examId(),
+                d.bundleManifestSha256(), d.candidateNumber(), d.seat(), d.formId(), d.clientVersion(), d.startedAt(),
+                d.submittedAt(), List.of(d.tasks().get(0), claimed), d.questionnaires());
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic())
+                        .write(bad, List.of(), dir.resolve("claimed.inkresp")));
+        assertTrue(e.getMessage().contains("differ from what its policy offers"), e.getMessage());
+    }
+
+    @Test
+    void open_useRecordedForAToolNotOffered_isRefused() throws Exception {
+        ResponseDocument d = SampleResponse.document();
+        TaskResponse t = d.tasks().get(1);
+        TaskResponse used = new TaskResponse(t.taskId(), t.conditionId(), t.text(), t.wordCount(), t.startedAt(),
+                t.endedAt(), t.extraTimeSeconds(), t.policy(), t.toolsOffered(),
+                java.util.Map.of(org.inkgate.packs.policy.Tool.DICTIONARY, new ToolUse(3, 0, 2, 0, 0, 0, 0)), t.endReason());
+        ResponseDocument bad = new ResponseDocument(d.format(), d.schemaVersion(), d.packageId(), d.examId(),
+                d.bundleManifestSha256(), d.candidateNumber(), d.seat(), d.formId(), d.clientVersion(), d.startedAt(),
+                d.submittedAt(), List.of(d.tasks().get(0), used), d.questionnaires());
+        Path file = new HandmadePackage(bad, SampleResponse.events(2), TestKeys.INSTALLATION_SIGNING,
+                TestKeys.ownerEncryptionPublic()).writeTo(dir.resolve("used.inkresp"), d.packageId());
+        InvalidContent refusal = assertThrows(InvalidContent.class,
+                () -> new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION, TestKeys.installations()).open(file));
+        assertTrue(refusal.getMessage().contains("not offered"), refusal.getMessage());
     }
 
     /** RFC 7748 section 6.1: an all-zero shared secret (low-order point) must be refused. */
