@@ -17,6 +17,7 @@ import org.inkgate.format.crypto.Fingerprint;
 import org.inkgate.format.crypto.Sha256;
 import org.inkgate.format.io.PrivateTempFolder;
 import org.inkgate.format.json.Json;
+import org.inkgate.format.json.SchemaCheck;
 import org.inkgate.format.refusal.BadSignature;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.InvalidContent;
@@ -85,23 +86,13 @@ public final class BundleReader {
     }
 
     private static void checkFormat(String name, JsonNode tree) throws UnsupportedSchema {
-        String format = tree.path("format").asText("");
-        if (!BundleManifest.FORMAT.equals(format)) {
-            throw new UnsupportedSchema(name, "this is not an exam bundle (format \"" + format
-                    + "\"). Open a .inkexam file made by the Inkgate admin tool.");
-        }
+        SchemaCheck.requireFormat(name, tree, BundleManifest.FORMAT, "an exam bundle",
+                "Open a .inkexam file made by the Inkgate admin tool.");
     }
 
     private static void checkSchemaVersion(String name, JsonNode tree) throws UnsupportedSchema {
-        JsonNode version = tree.path("schemaVersion");
-        if (!version.canConvertToInt() || !version.isIntegralNumber() || version.asInt() < 1) {
-            throw new UnsupportedSchema(name, "the manifest has no valid schemaVersion; the file is damaged.");
-        }
-        if (version.asInt() > BundleManifest.SCHEMA_VERSION) {
-            throw new UnsupportedSchema(name, "the bundle uses schema version " + version.asInt()
-                    + ", newer than the " + BundleManifest.SCHEMA_VERSION
-                    + " this client reads. Install the client version the test owner names for this exam.");
-        }
+        SchemaCheck.requireVersion(name, tree, BundleManifest.SCHEMA_VERSION, "bundle",
+                "Install the client version the test owner names for this exam.");
     }
 
     private static PublicKey signingKey(String name, JsonNode tree) throws BadSignature {

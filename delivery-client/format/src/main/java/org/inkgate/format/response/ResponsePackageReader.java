@@ -25,6 +25,7 @@ import org.inkgate.format.crypto.Hkdf;
 import org.inkgate.format.crypto.Sha256;
 import org.inkgate.format.crypto.X25519;
 import org.inkgate.format.json.Json;
+import org.inkgate.format.json.SchemaCheck;
 import org.inkgate.format.refusal.BadSignature;
 import org.inkgate.format.refusal.DecryptionFailed;
 import org.inkgate.format.refusal.FormatRefusal;
@@ -205,23 +206,13 @@ public final class ResponsePackageReader {
     }
 
     private static void checkFormat(String name, JsonNode tree, String format, String what) throws UnsupportedSchema {
-        String actual = tree.path("format").asText("");
-        if (!format.equals(actual)) {
-            throw new UnsupportedSchema(name, "this is not a " + what + " (format \"" + actual + "\" where \"" + format
-                    + "\" was expected). Collect .inkresp files written by the Inkgate delivery client.");
-        }
+        SchemaCheck.requireFormat(name, tree, format, "a " + what,
+                "Collect .inkresp files written by the Inkgate delivery client.");
     }
 
     private static void checkSchemaVersion(String name, JsonNode tree, int newest, String what) throws UnsupportedSchema {
-        JsonNode version = tree.path("schemaVersion");
-        if (!version.isIntegralNumber() || version.asInt() < 1) {
-            throw new UnsupportedSchema(name, "the " + what + " has no valid schemaVersion; the file is damaged.");
-        }
-        if (version.asInt() > newest) {
-            // the envelope is read before anything can be authenticated, so an edit looks the same
-            throw new UnsupportedSchema(name, "the " + what + " uses schema version " + version.asInt() + ", newer than the "
-                    + newest + " this version reads. Update the admin tool to the version that matches the client;"
-                    + " if no newer client was used, the file was altered.");
-        }
+        // the envelope is read before anything can be authenticated, so an edit looks the same
+        SchemaCheck.requireVersion(name, tree, newest, what, "Update the admin tool to the version that matches the"
+                + " client; if no newer client was used, the file was altered.");
     }
 }
