@@ -1,0 +1,362 @@
+package org.inkgate.analysis.mfrm.estimation;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.IntStream;
+import org.inkgate.analysis.mfrm.design.ModelDesign;
+
+/**
+ * Joint maximum likelihood estimation (JMLE) of a many-facet Rasch model (Linacre 1989; Wright &
+ * Masters 1982, ch. 5) by Newton-Raphson: each iteration makes one pass over the ratings,
+ * collecting every element's expected score and information at once, then moves each free
+ * element by (observed - expected) / information (steps capped at 1 logit), each threshold by
+ * the same rule on the counts "at or above category k", then centres every unanchored
+ * non-candidate facet at 0 and every unanchored threshold set at sum 0.
+ *
+ * <p>The pass is split into chunks run in parallel, each with its own accumulators, so no
+ * per-rating objects are made and the result does not depend on thread timing beyond the order
+ * of floating-point sums.
+ */
+public final class JmleEstimator {
+    private static final double MAX_STEP = 1.0;
+    /** Beyond this |eta| the fast power series could overflow; the stable path is used. */
+    private static final double FAST_LIMIT = 30.0;
+
+    private final ModelDesign d;
+    private final boolean[][] anchored;
+    private final boolean[] scaleAnchored;
+    private final int threads;
+    private final int nF;
+    private final int nS;
+    private final double[][] obsSum;
+    private final double[][] thrObs;
+    private final boolean[][] present;
+
+    /**
+     * @param anchored      [facet][element] true where the measure is fixed
+     * @param scaleAnchored [scale] true where the thresholds are fixed
+     */
+    public JmleEstimator(ModelDesign d, boolean[][] anchored, boolean[] scaleAnchored, int threads) {
+        this.d = d;
+        this.anchored = anchored;
+        this.scaleAnchored = scaleAnchored;
+        this.threads = threads;
+        this.nF = d.facetCount();
+        this.nS = d.scaleCount();
+        obsSum = new double[nF][];
+        present = new boolean[nF][];
+        int[] x = d.categories();
+        for (int f = 0; f < nF; f++) {
+            obsSum[f] = new double[d.elementCount(f)];
+            present[f] = new boolean[d.elementCount(f)];
+            int[] el = d.elements(f);
+            for (int n = 0; n < x.length; n++) {
+                obsSum[f][el[n]] += x[n];
+                present[f][el[n]] = true;
+            }
+        }
+        thrObs = new double[nS][];
+        for (int s = 0; s < nS; s++) {
+            thrObs[s] = new double[d.maxCategory(s) + 1];
+        }
+        int[] sc = d.scales();
+        for (int n = 0; n < x.length; n++) {
+            for (int k = 1; k <= x[n]; k++) {
+                thrObs[sc[n]][k]++;
+            }
+        }
+    }
+
+    /** Sensible starting values: candidates from their raw score, thresholds from category counts. */
+    public void startingValues(double[][] measure, double[][] thresholds) {
+        int[] x = d.categories();
+        int[] sc = d.scales();
+        double[] maxSum = new double[d.elementCount(0)];
+        int[] cand = d.elements(0);
+        for (int n = 0; n < x.length; n++) {
+            maxSum[cand[n]] += d.maxCategory(sc[n]);
+        }
+        for (int c = 0; c < maxSum.length; c++) {
+            if (!anchored[0][c] && present[0][c]) {
+                measure[0][c] = Math.log((obsSum[0][c] + 0.5) / (maxSum[c] - obsSum[0][c] + 0.5));
+            }
+        }
+        for (int s = 0; s < nS; s++) {
+            if (scaleAnchored[s]) {
+                continue;
+            }
+            int m = d.maxCategory(s);
+            double[] count = new double[m + 1];
+            for (int n = 0; n < x.length; n++) {
+                if (sc[n] == s) {
+                    count[x[n]]++;
+                }
+            }
+            double mean = 0;
+            for (int k = 1; k <= m; k++) {
+                thresholds[s][k] = Math.log((count[k - 1] + 0.5) / (count[k] + 0.5));
+                mean += thresholds[s][k] / m;
+            }
+            for (int k = 1; k <= m; k++) {
+                thresholds[s][k] -= mean;
+            }
+        }
+    }
+
+    /** Iterates to convergence or the cap; updates {@code measure} and {@code thresholds} in place. */
+    public Estimates estimate(double[][] measure, double[][] thresholds, double maxChangeLimit,
+                              double maxResidualLimit, int maxIterations) {
+        Accumulators total = new Accumulators(d);
+        int it = 0;
+        double maxResidual = Double.NaN;
+        double maxChange = Double.NaN;
+        boolean converged = false;
+        while (it < maxIterations) {
+            it++;
+            pass(measure, thresholds, total);
+            maxResidual = 0;
+            maxChange = 0;
+            for (int f = 0; f < nF; f++) {
+                double sign = f == 0 ? 1 : -1;
+                for (int e = 0; e < measure[f].length; e++) {
+                    if (anchored[f][e] || !present[f][e]) {
+                        continue;
+                    }
+                    double r = obsSum[f][e] - total.exp[f][e];
+                    maxResidual = Math.max(maxResidual, Math.abs(r));
+                    double step = clamp(r / total.info[f][e]);
+                    measure[f][e] += sign * step;
+                    maxChange = Math.max(maxChange, Math.abs(step));
+                }
+            }
+            for (int s = 0; s < nS; s++) {
+                if (scaleAnchored[s]) {
+                    continue;
+                }
+                for (int k = 1; k <= d.maxCategory(s); k++) {
+                    double r = total.thrExp[s][k] - thrObs[s][k];
+                    maxResidual = Math.max(maxResidual, Math.abs(r));
+                    double step = clamp(r / total.thrInfo[s][k]);
+                    thresholds[s][k] += step;
+                    maxChange = Math.max(maxChange, Math.abs(step));
+                }
+            }
+            centre(measure, thresholds);
+            if (maxChange < maxChangeLimit && maxResidual < maxResidualLimit) {
+                converged = true;
+                break;
+            }
+        }
+        pass(measure, thresholds, total);
+        double[][] se = new double[nF][];
+        for (int f = 0; f < nF; f++) {
+            se[f] = new double[measure[f].length];
+            for (int e = 0; e < se[f].length; e++) {
+                se[f][e] = present[f][e] ? 1 / Math.sqrt(total.info[f][e]) : Double.NaN;
+            }
+        }
+        double[][] thrSe = new double[nS][];
+        for (int s = 0; s < nS; s++) {
+            thrSe[s] = new double[d.maxCategory(s) + 1];
+            for (int k = 1; k <= d.maxCategory(s); k++) {
+                thrSe[s][k] = 1 / Math.sqrt(total.thrInfo[s][k]);
+            }
+        }
+        List<String> warnings = new ArrayList<>();
+        if (!converged) {
+            warnings.add(String.format(java.util.Locale.ROOT, "estimation stopped at the iteration cap (%d) before"
+                    + " converging: largest score residual %.4g, largest logit change %.4g; measures may be off"
+                    + " by about that change or more - raise the cap or check the design before using them",
+                    maxIterations, maxResidual, maxChange));
+        }
+        return new Estimates(measure, se, thresholds, thrSe, it, maxResidual, maxChange, converged, warnings);
+    }
+
+    private static double clamp(double step) {
+        if (Double.isNaN(step)) {
+            return 0;
+        }
+        return Math.max(-MAX_STEP, Math.min(MAX_STEP, step));
+    }
+
+    /**
+     * Centres unanchored non-candidate facets and threshold sets. The candidates are not moved to
+     * compensate: all facets step at once, so a compensating move would add to the candidates' own
+     * step and overshoot; the next pass corrects the candidates instead.
+     */
+    private void centre(double[][] measure, double[][] thresholds) {
+        for (int f = 1; f < nF; f++) {
+            boolean any = false;
+            for (boolean a : anchored[f]) {
+                any |= a;
+            }
+            if (any) {
+                continue;
+            }
+            double sum = 0;
+            int count = 0;
+            for (int e = 0; e < measure[f].length; e++) {
+                if (present[f][e]) {
+                    sum += measure[f][e];
+                    count++;
+                }
+            }
+            double mean = sum / count;
+            for (int e = 0; e < measure[f].length; e++) {
+                if (present[f][e]) {
+                    measure[f][e] -= mean;
+                }
+            }
+        }
+        for (int s = 0; s < nS; s++) {
+            if (scaleAnchored[s]) {
+                continue;
+            }
+            int m = d.maxCategory(s);
+            double mean = 0;
+            for (int k = 1; k <= m; k++) {
+                mean += thresholds[s][k] / m;
+            }
+            for (int k = 1; k <= m; k++) {
+                thresholds[s][k] -= mean;
+            }
+        }
+    }
+
+    /** One pass: expected scores and information of every element and threshold. */
+    void pass(double[][] measure, double[][] thresholds, Accumulators total) {
+        int nObs = d.observationCount();
+        int chunks = nObs < 20_000 ? 1 : threads;
+        double[][] expNegCum = new double[nS][];
+        for (int s = 0; s < nS; s++) {
+            int m = d.maxCategory(s);
+            expNegCum[s] = new double[m + 1];
+            double cum = 0;
+            expNegCum[s][0] = 1;
+            for (int k = 1; k <= m; k++) {
+                cum += thresholds[s][k];
+                expNegCum[s][k] = Math.exp(-cum);
+            }
+        }
+        if (chunks == 1) {
+            total.clear();
+            passRange(0, nObs, measure, thresholds, expNegCum, total);
+            return;
+        }
+        Accumulators[] parts = new Accumulators[chunks];
+        IntStream.range(0, chunks).parallel().forEach(c -> {
+            Accumulators a = new Accumulators(d);
+            long from = (long) nObs * c / chunks;
+            long to = (long) nObs * (c + 1) / chunks;
+            passRange((int) from, (int) to, measure, thresholds, expNegCum, a);
+            parts[c] = a;
+        });
+        total.clear();
+        for (Accumulators a : parts) {
+            total.add(a);
+        }
+    }
+
+    private void passRange(int from, int to, double[][] measure, double[][] thresholds, double[][] expNegCum,
+                           Accumulators acc) {
+        int[] x = d.categories();
+        int[] sc = d.scales();
+        int[][] el = new int[nF][];
+        for (int f = 0; f < nF; f++) {
+            el[f] = d.elements(f);
+        }
+        double[] cand = measure[0];
+        int[] candEl = el[0];
+        int mMax = d.maxCategoryOverall();
+        double[] p = new double[mMax + 1];
+        for (int n = from; n < to; n++) {
+            double eta = cand[candEl[n]];
+            for (int f = 1; f < nF; f++) {
+                eta -= measure[f][el[f][n]];
+            }
+            int s = sc[n];
+            int m = expNegCum[s].length - 1;
+            double z = 0;
+            if (Math.abs(eta) < FAST_LIMIT) {
+                double r = Math.exp(eta);
+                double t = 1;
+                double[] ec = expNegCum[s];
+                for (int k = 0; k <= m; k++) {
+                    double num = ec[k] * t;
+                    p[k] = num;
+                    z += num;
+                    t *= r;
+                }
+                for (int k = 0; k <= m; k++) {
+                    p[k] /= z;
+                }
+            } else {
+                CategoryModel.probabilities(eta, thresholds[s], m, p);
+            }
+            double e = 0;
+            double e2 = 0;
+            double tail = 0;
+            double[] te = acc.thrExp[s];
+            double[] ti = acc.thrInfo[s];
+            for (int k = m; k >= 1; k--) {
+                double pk = p[k];
+                e += k * pk;
+                e2 += k * k * pk;
+                tail += pk;
+                te[k] += tail;
+                ti[k] += tail * (1 - tail);
+            }
+            double v = e2 - e * e;
+            for (int f = 0; f < nF; f++) {
+                int idx = el[f][n];
+                acc.exp[f][idx] += e;
+                acc.info[f][idx] += v;
+            }
+        }
+    }
+
+    /** Per-pass sums, one set per parallel chunk. */
+    static final class Accumulators {
+        final double[][] exp;
+        final double[][] info;
+        final double[][] thrExp;
+        final double[][] thrInfo;
+
+        Accumulators(ModelDesign d) {
+            exp = new double[d.facetCount()][];
+            info = new double[d.facetCount()][];
+            for (int f = 0; f < d.facetCount(); f++) {
+                exp[f] = new double[d.elementCount(f)];
+                info[f] = new double[d.elementCount(f)];
+            }
+            thrExp = new double[d.scaleCount()][];
+            thrInfo = new double[d.scaleCount()][];
+            for (int s = 0; s < d.scaleCount(); s++) {
+                thrExp[s] = new double[d.maxCategory(s) + 1];
+                thrInfo[s] = new double[d.maxCategory(s) + 1];
+            }
+        }
+
+        void clear() {
+            for (double[] a : exp) java.util.Arrays.fill(a, 0);
+            for (double[] a : info) java.util.Arrays.fill(a, 0);
+            for (double[] a : thrExp) java.util.Arrays.fill(a, 0);
+            for (double[] a : thrInfo) java.util.Arrays.fill(a, 0);
+        }
+
+        void add(Accumulators o) {
+            addAll(exp, o.exp);
+            addAll(info, o.info);
+            addAll(thrExp, o.thrExp);
+            addAll(thrInfo, o.thrInfo);
+        }
+
+        private static void addAll(double[][] a, double[][] b) {
+            for (int i = 0; i < a.length; i++) {
+                for (int j = 0; j < a[i].length; j++) {
+                    a[i][j] += b[i][j];
+                }
+            }
+        }
+    }
+}

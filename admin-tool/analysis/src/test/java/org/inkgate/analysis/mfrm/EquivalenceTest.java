@@ -1,0 +1,60 @@
+package org.inkgate.analysis.mfrm;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Map;
+import org.junit.jupiter.api.Test;
+
+/**
+ * JMLE maximises the same likelihood as a fixed-effects model (METHODS.md), so with sum-to-zero
+ * contrasts the centred measures must agree with a general-purpose fit. Reference values: R 4.2.2
+ * glm (binomial) and VGAM 1.1.7 vglm(acat(parallel = TRUE)) run by
+ * src/test/resources/mfrm/reference/reference.R on the simulated data sets committed beside it.
+ */
+class EquivalenceTest {
+    /** The acceptance limit for centred measures, logits. */
+    private static final double LIMIT = 0.005;
+
+    @Test
+    void analyse_dichotomousData_matchesBinomialGlm() throws Exception {
+        RatingData data = ReferenceFits.data("dichotomous");
+        MfrmResult r = ManyFacetRasch.analyse(data, MfrmOptions.builder(List.of("item", "rater")).build());
+        Map<String, Map<String, Double>> ref = ReferenceFits.measures("dichotomous-glm.csv");
+        assertTrue(r.convergence().converged(), r.convergence().toString());
+        double worst = compare(r, ref, List.of("candidate", "item", "rater"));
+        assertTrue(worst < LIMIT, "largest difference " + worst);
+    }
+
+    @Test
+    void analyse_ratingScaleData_matchesVgamAdjacentCategoryLogit() throws Exception {
+        for (String name : List.of("ratingscale-2000", "ratingscale-6000")) {
+            RatingData data = ReferenceFits.data(name);
+            MfrmResult r = ManyFacetRasch.analyse(data, MfrmOptions.builder(List.of("task", "rater")).build());
+            Map<String, Map<String, Double>> ref = ReferenceFits.measures(name + "-vgam.csv");
+            assertTrue(r.convergence().converged(), r.convergence().toString());
+            double worst = compare(r, ref, List.of("candidate", "task", "rater"));
+            List<MfrmResult.Category> cats = r.scales().get(0).categories();
+            for (int k = 1; k < cats.size(); k++) {
+                double d = Math.abs(cats.get(k).threshold() - ref.get("threshold").get("F" + k));
+                worst = Math.max(worst, d);
+            }
+            assertEquals(4, ref.get("threshold").size());
+            assertTrue(worst < LIMIT, name + ": largest difference " + worst);
+        }
+    }
+
+    static double compare(MfrmResult r, Map<String, Map<String, Double>> ref, List<String> facets) {
+        double worst = 0;
+        for (String facet : facets) {
+            Map<String, Double> expected = ref.get(facet);
+            List<MfrmResult.Element> els = r.facet(facet).elements();
+            assertEquals(expected.size(), els.size(), facet + " element count");
+            for (MfrmResult.Element e : els) {
+                worst = Math.max(worst, Math.abs(e.measure() - expected.get(e.label())));
+            }
+        }
+        return worst;
+    }
+}
