@@ -13,6 +13,7 @@ import org.inkgate.analysis.mfrm.design.ModelDesign;
 import org.inkgate.analysis.mfrm.estimation.CategoryModel;
 import org.inkgate.analysis.mfrm.estimation.Estimates;
 import org.inkgate.analysis.mfrm.estimation.JmleEstimator;
+import org.inkgate.analysis.mfrm.estimation.JointStandardErrors;
 import org.inkgate.analysis.mfrm.fit.RatingStatistics;
 import org.inkgate.analysis.mfrm.fit.Separation;
 
@@ -127,6 +128,7 @@ public final class ManyFacetRasch {
         double[][] se = est.se();
         estimateExtremes(full, measure, se, thresholds, anchored, extremeSide);
 
+        double[][] jointSe = JointStandardErrors.of(active, measure, thresholds, anchored);
         RatingStatistics stats = new RatingStatistics(active, measure, thresholds, options.unexpectedZ(),
                 options.unexpectedLimit());
         List<BiasPair> bias = new ArrayList<>();
@@ -149,7 +151,7 @@ public final class ManyFacetRasch {
         List<String> warnings = new ArrayList<>(est.warnings());
         List<MfrmResult.Facet> facets = new ArrayList<>();
         for (int f = 0; f < nF; f++) {
-            facets.add(facet(full, f, measure, se, anchored, extremeSide, stats, factor, warnings));
+            facets.add(facet(full, f, measure, se, jointSe, anchored, extremeSide, stats, factor, warnings));
         }
         List<MfrmResult.Scale> scales = new ArrayList<>();
         for (int s = 0; s < scaleLabels.length; s++) {
@@ -371,7 +373,8 @@ public final class ManyFacetRasch {
     }
 
     private static MfrmResult.Facet facet(ModelDesign full, int f, double[][] measure, double[][] se,
-                                          boolean[][] anchored, int[][] side, RatingStatistics st, double factor,
+                                          double[][] jointSe, boolean[][] anchored, int[][] side,
+                                          RatingStatistics st, double factor,
                                           List<String> warnings) {
         List<MfrmResult.Element> elements = new ArrayList<>();
         double[] ms = new double[full.elementCount(f)];
@@ -385,12 +388,13 @@ public final class ManyFacetRasch {
             double m = anchored[f][e] ? measure[f][e] : measure[f][e] * factor;
             if (side[f][e] != 0) {
                 extremes++;
-                elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], 0, Double.NaN,
+                elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], Double.NaN, 0, Double.NaN,
                         Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN));
                 continue;
             }
             int cnt = st.count[f][e];
-            elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], cnt, st.observedRaw[f][e],
+            elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], jointSe[f][e], cnt,
+                    st.observedRaw[f][e],
                     st.expectedRaw[f][e], st.observedRaw[f][e] / cnt, st.infit[f][e], st.infitZ[f][e],
                     st.outfit[f][e], st.outfitZ[f][e], st.pointMeasure[f][e]));
             if (cnt > 0) {

@@ -35,8 +35,12 @@ public record MfrmResult(Model model, Convergence convergence, List<Facet> facet
         EXTREME_MAXIMUM
     }
 
-    /** One element of a facet. Fit values are NaN for extreme elements. */
-    public record Element(String label, Status status, double measure, double se, int count,
+    /**
+     * One element of a facet. Fit values are NaN for extreme elements. {@code se} is the model SE
+     * (own information, other measures treated as known); {@code jointSe} (non-candidate facets)
+     * also carries the uncertainty of the candidates and other facets it is linked through.
+     */
+    public record Element(String label, Status status, double measure, double se, double jointSe, int count,
                           double observedScore, double expectedScore, double observedAverage,
                           double infit, double infitZ, double outfit, double outfitZ, double pointMeasure) {
     }

@@ -52,6 +52,7 @@ final class MfrmSummary {
                 em.put("status", e.status().name().toLowerCase(java.util.Locale.ROOT));
                 em.put("measure", num(e.measure()));
                 em.put("se", num(e.se()));
+                em.put("jointSe", num(e.jointSe()));
                 em.put("count", e.count());
                 em.put("observedScore", num(e.observedScore()));
                 em.put("expectedScore", num(e.expectedScore()));

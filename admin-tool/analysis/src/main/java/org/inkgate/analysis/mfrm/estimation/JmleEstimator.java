@@ -7,11 +7,11 @@ import org.inkgate.analysis.mfrm.design.ModelDesign;
 
 /**
  * Joint maximum likelihood estimation (JMLE) of a many-facet Rasch model (Linacre 1989; Wright &
- * Masters 1982, ch. 5) by Newton-Raphson: each iteration makes one pass over the ratings,
- * collecting every element's expected score and information at once, then moves each free
- * element by (observed - expected) / information (steps capped at 1 logit), each threshold by
- * the same rule on the counts "at or above category k", then centres every unanchored
- * non-candidate facet at 0 and every unanchored threshold set at sum 0.
+ * Masters 1982, ch. 5) by Newton-Raphson, one facet at a time: a pass over the ratings collects
+ * the facet's expected scores and information, each free element moves by
+ * (observed - expected) / information (steps capped at 1 logit), and the facet is centred at 0
+ * unless anchored; then the thresholds move by the same rule on the counts "at or above
+ * category k" and each unanchored threshold set is centred at sum 0.
  *
  * <p>The pass is split into chunks run in parallel, each with its own accumulators, so no
  * per-rating objects are made and the result does not depend on thread timing beyond the order
@@ -31,6 +31,13 @@ public final class JmleEstimator {
     private final double[][] obsSum;
     private final double[][] thrObs;
     private final boolean[][] present;
+    private final boolean[] anyAnchored;
+    private final boolean[] allAnchored;
+    private final boolean allScalesAnchored;
+    /** Pass that accumulates every facet and the thresholds. */
+    private static final int ALL = -1;
+    /** Pass that accumulates the thresholds only. */
+    private static final int THRESHOLDS = -2;
 
     /**
      * @param anchored      [facet][element] true where the measure is fixed
@@ -55,6 +62,21 @@ public final class JmleEstimator {
                 present[f][el[n]] = true;
             }
         }
+        anyAnchored = new boolean[nF];
+        allAnchored = new boolean[nF];
+        for (int f = 0; f < nF; f++) {
+            boolean all = true;
+            for (int e = 0; e < anchored[f].length; e++) {
+                anyAnchored[f] |= anchored[f][e];
+                all &= anchored[f][e] || !present[f][e];
+            }
+            allAnchored[f] = all;
+        }
+        boolean allScales = true;
+        for (boolean a : scaleAnchored) {
+            allScales &= a;
+        }
+        allScalesAnchored = allScales;
         thrObs = new double[nS][];
         for (int s = 0; s < nS; s++) {
             thrObs[s] = new double[d.maxCategory(s) + 1];
@@ -113,10 +135,16 @@ public final class JmleEstimator {
         boolean converged = false;
         while (it < maxIterations) {
             it++;
-            pass(measure, thresholds, total);
             maxResidual = 0;
             maxChange = 0;
+            // block Gauss-Seidel: elements of one facet share no rating, so within a block the
+            // information matrix is diagonal and the Newton step is exact; stepping all facets at
+            // once (Jacobi) overshoots and oscillates when raters are nested in candidate groups
             for (int f = 0; f < nF; f++) {
+                if (allAnchored[f]) {
+                    continue;
+                }
+                pass(measure, thresholds, total, f);
                 double sign = f == 0 ? 1 : -1;
                 for (int e = 0; e < measure[f].length; e++) {
                     if (anchored[f][e] || !present[f][e]) {
@@ -128,26 +156,30 @@ public final class JmleEstimator {
                     measure[f][e] += sign * step;
                     maxChange = Math.max(maxChange, Math.abs(step));
                 }
+                centre(measure, f);
             }
-            for (int s = 0; s < nS; s++) {
-                if (scaleAnchored[s]) {
-                    continue;
+            if (!allScalesAnchored) {
+                pass(measure, thresholds, total, THRESHOLDS);
+                for (int s = 0; s < nS; s++) {
+                    if (scaleAnchored[s]) {
+                        continue;
+                    }
+                    for (int k = 1; k <= d.maxCategory(s); k++) {
+                        double r = total.thrExp[s][k] - thrObs[s][k];
+                        maxResidual = Math.max(maxResidual, Math.abs(r));
+                        double step = clamp(r / total.thrInfo[s][k]);
+                        thresholds[s][k] += step;
+                        maxChange = Math.max(maxChange, Math.abs(step));
+                    }
                 }
-                for (int k = 1; k <= d.maxCategory(s); k++) {
-                    double r = total.thrExp[s][k] - thrObs[s][k];
-                    maxResidual = Math.max(maxResidual, Math.abs(r));
-                    double step = clamp(r / total.thrInfo[s][k]);
-                    thresholds[s][k] += step;
-                    maxChange = Math.max(maxChange, Math.abs(step));
-                }
+                centreThresholds(thresholds);
             }
-            centre(measure, thresholds);
             if (maxChange < maxChangeLimit && maxResidual < maxResidualLimit) {
                 converged = true;
                 break;
             }
         }
-        pass(measure, thresholds, total);
+        pass(measure, thresholds, total, ALL);
         double[][] se = new double[nF][];
         for (int f = 0; f < nF; f++) {
             se[f] = new double[measure[f].length];
@@ -179,35 +211,29 @@ public final class JmleEstimator {
         return Math.max(-MAX_STEP, Math.min(MAX_STEP, step));
     }
 
-    /**
-     * Centres unanchored non-candidate facets and threshold sets. The candidates are not moved to
-     * compensate: all facets step at once, so a compensating move would add to the candidates' own
-     * step and overshoot; the next pass corrects the candidates instead.
-     */
-    private void centre(double[][] measure, double[][] thresholds) {
-        for (int f = 1; f < nF; f++) {
-            boolean any = false;
-            for (boolean a : anchored[f]) {
-                any |= a;
-            }
-            if (any) {
-                continue;
-            }
-            double sum = 0;
-            int count = 0;
-            for (int e = 0; e < measure[f].length; e++) {
-                if (present[f][e]) {
-                    sum += measure[f][e];
-                    count++;
-                }
-            }
-            double mean = sum / count;
-            for (int e = 0; e < measure[f].length; e++) {
-                if (present[f][e]) {
-                    measure[f][e] -= mean;
-                }
+    /** Centres facet f at 0 unless it is the candidate facet or has anchored elements. */
+    private void centre(double[][] measure, int f) {
+        if (f == 0 || anyAnchored[f]) {
+            return;
+        }
+        double sum = 0;
+        int count = 0;
+        for (int e = 0; e < measure[f].length; e++) {
+            if (present[f][e]) {
+                sum += measure[f][e];
+                count++;
             }
         }
+        double mean = sum / count;
+        for (int e = 0; e < measure[f].length; e++) {
+            if (present[f][e]) {
+                measure[f][e] -= mean;
+            }
+        }
+    }
+
+    /** Centres every unanchored threshold set at sum 0. */
+    private void centreThresholds(double[][] thresholds) {
         for (int s = 0; s < nS; s++) {
             if (scaleAnchored[s]) {
                 continue;
@@ -224,7 +250,7 @@ public final class JmleEstimator {
     }
 
     /** One pass: expected scores and information of every element and threshold. */
-    void pass(double[][] measure, double[][] thresholds, Accumulators total) {
+    void pass(double[][] measure, double[][] thresholds, Accumulators total, int block) {
         int nObs = d.observationCount();
         int chunks = nObs < 20_000 ? 1 : threads;
         double[][] expNegCum = new double[nS][];
@@ -240,7 +266,7 @@ public final class JmleEstimator {
         }
         if (chunks == 1) {
             total.clear();
-            passRange(0, nObs, measure, thresholds, expNegCum, total);
+            passRange(0, nObs, measure, thresholds, expNegCum, total, block);
             return;
         }
         Accumulators[] parts = new Accumulators[chunks];
@@ -248,7 +274,7 @@ public final class JmleEstimator {
             Accumulators a = new Accumulators(d);
             long from = (long) nObs * c / chunks;
             long to = (long) nObs * (c + 1) / chunks;
-            passRange((int) from, (int) to, measure, thresholds, expNegCum, a);
+            passRange((int) from, (int) to, measure, thresholds, expNegCum, a, block);
             parts[c] = a;
         });
         total.clear();
@@ -258,7 +284,7 @@ public final class JmleEstimator {
     }
 
     private void passRange(int from, int to, double[][] measure, double[][] thresholds, double[][] expNegCum,
-                           Accumulators acc) {
+                           Accumulators acc, int block) {
         int[] x = d.categories();
         int[] sc = d.scales();
         int[][] el = new int[nF][];
@@ -293,20 +319,33 @@ public final class JmleEstimator {
             } else {
                 CategoryModel.probabilities(eta, thresholds[s], m, p);
             }
+            if (block == THRESHOLDS || block == ALL) {
+                double tail = 0;
+                double[] te = acc.thrExp[s];
+                double[] ti = acc.thrInfo[s];
+                for (int k = m; k >= 1; k--) {
+                    tail += p[k];
+                    te[k] += tail;
+                    ti[k] += tail * (1 - tail);
+                }
+                if (block == THRESHOLDS) {
+                    continue;
+                }
+            }
             double e = 0;
             double e2 = 0;
-            double tail = 0;
-            double[] te = acc.thrExp[s];
-            double[] ti = acc.thrInfo[s];
-            for (int k = m; k >= 1; k--) {
+            for (int k = 1; k <= m; k++) {
                 double pk = p[k];
                 e += k * pk;
                 e2 += k * k * pk;
-                tail += pk;
-                te[k] += tail;
-                ti[k] += tail * (1 - tail);
             }
             double v = e2 - e * e;
+            if (block >= 0) {
+                int idx = el[block][n];
+                acc.exp[block][idx] += e;
+                acc.info[block][idx] += v;
+                continue;
+            }
             for (int f = 0; f < nF; f++) {
                 int idx = el[f][n];
                 acc.exp[f][idx] += e;
