@@ -15,7 +15,7 @@ import org.junit.jupiter.api.Test;
 class BiasTest {
     private static final double PLANTED = 1.0;
 
-    /** 300 candidates (level A or B), 2 conditions by form, 2 tasks, 6 raters, 4 categories. */
+    /** 300 candidates (level A or B, crossed with form), 2 conditions by form, 2 tasks, 6 raters, 4 categories. */
     private static RatingData planted() {
         Random rng = new Random(99);
         double[] rater = Simulation.spread(6, 0.6);
@@ -25,7 +25,7 @@ class BiasTest {
         RatingData.Builder b = RatingData.builder(List.of("level", "task", "condition", "rater"));
         double[] p = new double[4];
         for (int c = 0; c < 300; c++) {
-            String level = c % 3 == 0 ? "A" : "B";
+            String level = (c / 2) % 2 == 0 ? "A" : "B"; // half each, crossed with form (c % 2)
             double ability = (level.equals("A") ? 1.0 : -0.5) + rng.nextGaussian() * 0.8;
             for (int t = 0; t < 2; t++) {
                 int k = (t + c) % 2;
@@ -35,7 +35,7 @@ class BiasTest {
                         eta -= PLANTED; // rater1 harsher on task2 than overall
                     }
                     if (k == 1 && level.equals("B")) {
-                        eta += 0.5; // condition2 helps level B more
+                        eta += 0.8; // condition2 helps level B more
                     }
                     CategoryModel.probabilities(eta, f, 3, p);
                     double u = rng.nextDouble();
@@ -72,7 +72,13 @@ class BiasTest {
         assertEquals("condition", cl.first());
         BiasCell b2 = cl.cells().stream().filter(c -> c.first().equals("cond2") && c.second().equals("B"))
                 .findFirst().orElseThrow();
-        assertTrue(b2.size() > 0 && b2.p() < 0.05, b2.toString());
+        // the condition and candidate main effects absorb most of the plant; what is left is
+        // positive for cond2 x B and negative for cond2 x A
+        assertTrue(b2.size() > 0 && b2.p() < 0.01, b2.toString());
+        BiasCell a2 = cl.cells().stream().filter(c -> c.first().equals("cond2") && c.second().equals("A"))
+                .findFirst().orElseThrow();
+        assertTrue(a2.size() < 0 && a2.p() < 0.01, a2.toString());
+        assertTrue(cl.p() < 0.001, "chi-square p " + cl.p());
     }
 
     @Test
