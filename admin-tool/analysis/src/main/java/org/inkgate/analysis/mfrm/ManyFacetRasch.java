@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.stream.IntStream;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
 import org.inkgate.analysis.mfrm.bias.InteractionAnalysis;
 import org.inkgate.analysis.mfrm.design.DesignCheck;
@@ -121,14 +122,15 @@ public final class ManyFacetRasch {
             throw new MfrmRefusedException(refusals);
         }
 
-        JmleEstimator estimator = new JmleEstimator(active, anchored, scaleAnchored, options.threads());
+        JmleEstimator estimator = new JmleEstimator(active, anchored, scaleAnchored, options.threads(), pcFacet);
         estimator.startingValues(measure, thresholds);
         Estimates est = estimator.estimate(measure, thresholds, options.maxLogitChange(), options.maxScoreResidual(),
                 options.maxIterations());
         double[][] se = est.se();
         estimateExtremes(full, measure, se, thresholds, anchored, extremeSide);
 
-        double[][] jointSe = JointStandardErrors.of(active, measure, thresholds, anchored);
+        double[][] jointSe = est.jointSe() != null ? est.jointSe()
+                : JointStandardErrors.of(active, measure, thresholds, anchored);
         RatingStatistics stats = new RatingStatistics(active, measure, thresholds, options.unexpectedZ(),
                 options.unexpectedLimit());
         List<BiasPair> bias = new ArrayList<>();
@@ -311,6 +313,14 @@ public final class ManyFacetRasch {
             return;
         }
         double[] p = new double[d.maxCategoryOverall() + 1];
+        int[] involved = IntStream.range(0, d.observationCount()).filter(n -> {
+            for (int f = 0; f < nF; f++) {
+                if (side[f][d.elements(f)[n]] != 0) {
+                    return true;
+                }
+            }
+            return false;
+        }).toArray();
         for (int round = 0; round < 200; round++) {
             double[][] obs = new double[nF][];
             double[][] max = new double[nF][];
@@ -322,14 +332,7 @@ public final class ManyFacetRasch {
                 exp[f] = new double[side[f].length];
                 info[f] = new double[side[f].length];
             }
-            for (int n = 0; n < d.observationCount(); n++) {
-                boolean involves = false;
-                for (int f = 0; f < nF; f++) {
-                    involves |= side[f][d.elements(f)[n]] != 0;
-                }
-                if (!involves) {
-                    continue;
-                }
+            for (int n : involved) {
                 double eta = measure[0][d.elements(0)[n]];
                 for (int f = 1; f < nF; f++) {
                     eta -= measure[f][d.elements(f)[n]];

@@ -19,6 +19,8 @@ import org.inkgate.analysis.mfrm.design.ModelDesign;
  */
 public final class JmleEstimator {
     private static final double MAX_STEP = 1.0;
+    /** Above this many non-candidate elements and thresholds the joint system is not solved. */
+    private static final int JOINT_LIMIT = 800;
     /** Beyond this |eta| the fast power series could overflow; the stable path is used. */
     private static final double FAST_LIMIT = 30.0;
 
@@ -34,6 +36,7 @@ public final class JmleEstimator {
     private final boolean[] anyAnchored;
     private final boolean[] allAnchored;
     private final boolean allScalesAnchored;
+    private final int pcFacet;
     /** Pass that accumulates every facet and the thresholds. */
     private static final int ALL = -1;
     /** Pass that accumulates the thresholds only. */
@@ -44,7 +47,15 @@ public final class JmleEstimator {
      * @param scaleAnchored [scale] true where the thresholds are fixed
      */
     public JmleEstimator(ModelDesign d, boolean[][] anchored, boolean[] scaleAnchored, int threads) {
+        this(d, anchored, scaleAnchored, threads, -1);
+    }
+
+    /**
+     * @param pcFacet the facet whose elements own the threshold sets (partial credit), or -1
+     */
+    public JmleEstimator(ModelDesign d, boolean[][] anchored, boolean[] scaleAnchored, int threads, int pcFacet) {
         this.d = d;
+        this.pcFacet = pcFacet;
         this.anchored = anchored;
         this.scaleAnchored = scaleAnchored;
         this.threads = threads;
@@ -133,7 +144,25 @@ public final class JmleEstimator {
         double maxResidual = Double.NaN;
         double maxChange = Double.NaN;
         boolean converged = false;
-        while (it < maxIterations) {
+        JointNewton joint = useJointNewton() ? new JointNewton(d, anchored, scaleAnchored, present, threads) : null;
+        JointNewton.Step lastStep = null;
+        while (joint != null && it < maxIterations) {
+            it++;
+            JointNewton.Step step = joint.step(measure, thresholds);
+            lastStep = step;
+            maxResidual = step.maxResidual();
+            double size = JointNewton.size(step);
+            maxChange = joint.apply(step, size > MAX_STEP ? MAX_STEP / size : 1, measure, thresholds);
+            centreKeepingEta(measure, thresholds);
+            if (!Double.isFinite(maxChange)) {
+                throw new IllegalStateException("Newton step is not finite; the design may be degenerate");
+            }
+            if (maxChange < maxChangeLimit && maxResidual < maxResidualLimit) {
+                converged = true;
+                break;
+            }
+        }
+        while (joint == null && it < maxIterations) {
             it++;
             maxResidual = 0;
             maxChange = 0;
@@ -164,12 +193,28 @@ public final class JmleEstimator {
                     if (scaleAnchored[s]) {
                         continue;
                     }
-                    for (int k = 1; k <= d.maxCategory(s); k++) {
-                        double r = total.thrExp[s][k] - thrObs[s][k];
-                        maxResidual = Math.max(maxResidual, Math.abs(r));
-                        double step = clamp(r / total.thrInfo[s][k]);
-                        thresholds[s][k] += step;
-                        maxChange = Math.max(maxChange, Math.abs(step));
+                    // full Newton within a threshold set: adjacent thresholds are strongly
+                    // correlated, and a diagonal step crawls along that ridge
+                    int m = d.maxCategory(s);
+                    double[] g = new double[m];
+                    double[][] h = new double[m][m];
+                    for (int k = 1; k <= m; k++) {
+                        g[k - 1] = total.thrExp[s][k] - thrObs[s][k];
+                        maxResidual = Math.max(maxResidual, Math.abs(g[k - 1]));
+                        for (int l = k; l <= m; l++) {
+                            h[k - 1][l - 1] = total.thrCov[s][k][l];
+                            h[l - 1][k - 1] = total.thrCov[s][k][l];
+                        }
+                    }
+                    double[] step = solve(h, g);
+                    double scale = 1;
+                    for (double v : step) {
+                        scale = Math.max(scale, Math.abs(v) / MAX_STEP);
+                    }
+                    for (int k = 1; k <= m; k++) {
+                        double st = step[k - 1] / scale;
+                        thresholds[s][k] += st;
+                        maxChange = Math.max(maxChange, Math.abs(st));
                     }
                 }
                 centreThresholds(thresholds);
@@ -201,7 +246,25 @@ public final class JmleEstimator {
                     + " by about that change or more - raise the cap or check the design before using them",
                     maxIterations, maxResidual, maxChange));
         }
-        return new Estimates(measure, se, thresholds, thrSe, it, maxResidual, maxChange, converged, warnings);
+        double[][] jointSe = lastStep != null ? joint.jointSe(lastStep) : null;
+        return new Estimates(measure, se, jointSe, thresholds, thrSe, it, maxResidual, maxChange, converged, warnings);
+    }
+
+    /** Solves h x = g (h symmetric positive definite); falls back to the diagonal if singular. */
+    private static double[] solve(double[][] h, double[] g) {
+        try {
+            return new org.apache.commons.math3.linear.CholeskyDecomposition(
+                    new org.apache.commons.math3.linear.Array2DRowRealMatrix(h, true))
+                    .getSolver().solve(new org.apache.commons.math3.linear.ArrayRealVector(g)).toArray();
+        } catch (org.apache.commons.math3.linear.NonPositiveDefiniteMatrixException
+                 | org.apache.commons.math3.linear.NonSymmetricMatrixException
+                 | org.apache.commons.math3.linear.SingularMatrixException e) {
+            double[] x = new double[g.length];
+            for (int i = 0; i < g.length; i++) {
+                x[i] = h[i][i] > 0 ? g[i] / h[i][i] : 0;
+            }
+            return x;
+        }
     }
 
     private static double clamp(double step) {
@@ -209,6 +272,75 @@ public final class JmleEstimator {
             return 0;
         }
         return Math.max(-MAX_STEP, Math.min(MAX_STEP, step));
+    }
+
+    /**
+     * Joint Newton needs free candidates (they absorb the centring shifts) and a small enough
+     * system; otherwise facet-by-facet steps are used.
+     */
+    private boolean useJointNewton() {
+        if (anyAnchored[0]) {
+            return false;
+        }
+        int q = 0;
+        for (int f = 1; f < nF; f++) {
+            q += d.elementCount(f);
+        }
+        for (int s = 0; s < nS; s++) {
+            q += d.maxCategory(s);
+        }
+        return q <= JOINT_LIMIT;
+    }
+
+    /**
+     * Centres thresholds and unanchored facets after a joint step, moving the candidates (or, for
+     * partial credit, the scale's element) the other way so every rating's probabilities stay as
+     * the Newton step left them.
+     */
+    private void centreKeepingEta(double[][] measure, double[][] thresholds) {
+        for (int s = 0; s < nS; s++) {
+            if (scaleAnchored[s]) {
+                continue;
+            }
+            int m = d.maxCategory(s);
+            double mean = 0;
+            for (int k = 1; k <= m; k++) {
+                mean += thresholds[s][k] / m;
+            }
+            for (int k = 1; k <= m; k++) {
+                thresholds[s][k] -= mean;
+            }
+            // F - mean at eta equals F at eta + mean
+            if (pcFacet < 0) {
+                for (int c = 0; c < measure[0].length; c++) {
+                    measure[0][c] -= mean;
+                }
+            } else if (!anchored[pcFacet][s]) {
+                measure[pcFacet][s] += mean;
+            }
+        }
+        for (int f = 1; f < nF; f++) {
+            if (anyAnchored[f]) {
+                continue;
+            }
+            double sum = 0;
+            int count = 0;
+            for (int e = 0; e < measure[f].length; e++) {
+                if (present[f][e]) {
+                    sum += measure[f][e];
+                    count++;
+                }
+            }
+            double mean = sum / count;
+            for (int e = 0; e < measure[f].length; e++) {
+                if (present[f][e]) {
+                    measure[f][e] -= mean;
+                }
+            }
+            for (int c = 0; c < measure[0].length; c++) {
+                measure[0][c] -= mean;
+            }
+        }
     }
 
     /** Centres facet f at 0 unless it is the candidate facet or has anchored elements. */
@@ -295,6 +427,7 @@ public final class JmleEstimator {
         int[] candEl = el[0];
         int mMax = d.maxCategoryOverall();
         double[] p = new double[mMax + 1];
+        double[] tails = new double[mMax + 1];
         for (int n = from; n < to; n++) {
             double eta = cand[candEl[n]];
             for (int f = 1; f < nF; f++) {
@@ -323,10 +456,20 @@ public final class JmleEstimator {
                 double tail = 0;
                 double[] te = acc.thrExp[s];
                 double[] ti = acc.thrInfo[s];
+                double[] tl = tails;
                 for (int k = m; k >= 1; k--) {
                     tail += p[k];
+                    tl[k] = tail;
                     te[k] += tail;
                     ti[k] += tail * (1 - tail);
+                }
+                double[][] cov = acc.thrCov[s];
+                for (int k = 1; k <= m; k++) {
+                    double tk = tl[k];
+                    double[] row = cov[k];
+                    for (int l = k; l <= m; l++) {
+                        row[l] += tl[l] - tk * tl[l];
+                    }
                 }
                 if (block == THRESHOLDS) {
                     continue;
@@ -360,6 +503,8 @@ public final class JmleEstimator {
         final double[][] info;
         final double[][] thrExp;
         final double[][] thrInfo;
+        /** [scale][k][l], l >= k: covariance of the indicators "at or above k" and "at or above l". */
+        final double[][][] thrCov;
 
         Accumulators(ModelDesign d) {
             exp = new double[d.facetCount()][];
@@ -370,7 +515,9 @@ public final class JmleEstimator {
             }
             thrExp = new double[d.scaleCount()][];
             thrInfo = new double[d.scaleCount()][];
+            thrCov = new double[d.scaleCount()][][];
             for (int s = 0; s < d.scaleCount(); s++) {
+                thrCov[s] = new double[d.maxCategory(s) + 1][d.maxCategory(s) + 1];
                 thrExp[s] = new double[d.maxCategory(s) + 1];
                 thrInfo[s] = new double[d.maxCategory(s) + 1];
             }
@@ -381,6 +528,7 @@ public final class JmleEstimator {
             for (double[] a : info) java.util.Arrays.fill(a, 0);
             for (double[] a : thrExp) java.util.Arrays.fill(a, 0);
             for (double[] a : thrInfo) java.util.Arrays.fill(a, 0);
+            for (double[][] a : thrCov) for (double[] b : a) java.util.Arrays.fill(b, 0);
         }
 
         void add(Accumulators o) {
@@ -388,6 +536,9 @@ public final class JmleEstimator {
             addAll(info, o.info);
             addAll(thrExp, o.thrExp);
             addAll(thrInfo, o.thrInfo);
+            for (int s = 0; s < thrCov.length; s++) {
+                addAll(thrCov[s], o.thrCov[s]);
+            }
         }
 
         private static void addAll(double[][] a, double[][] b) {

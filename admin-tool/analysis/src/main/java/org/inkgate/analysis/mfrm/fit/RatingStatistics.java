@@ -86,14 +86,44 @@ public final class RatingStatistics {
         int[] x = d.categories();
         int[] sc = d.scales();
         double[] p = new double[d.maxCategoryOverall() + 1];
+        double[][] expNegCum = new double[nS][];
+        for (int s = 0; s < nS; s++) {
+            int m = d.maxCategory(s);
+            expNegCum[s] = new double[m + 1];
+            expNegCum[s][0] = 1;
+            double cum = 0;
+            for (int k = 1; k <= m; k++) {
+                cum += thresholds[s][k];
+                expNegCum[s][k] = Math.exp(-cum);
+            }
+        }
+        int[][] elements = new int[nF][];
+        for (int f = 0; f < nF; f++) {
+            elements[f] = d.elements(f);
+        }
         for (int n = 0; n < x.length; n++) {
-            double eta = measure[0][d.elements(0)[n]];
+            double eta = measure[0][elements[0][n]];
             for (int f = 1; f < nF; f++) {
-                eta -= measure[f][d.elements(f)[n]];
+                eta -= measure[f][elements[f][n]];
             }
             int s = sc[n];
             int m = d.maxCategory(s);
-            CategoryModel.probabilities(eta, thresholds[s], m, p);
+            if (Math.abs(eta) < 30) {
+                // one exp per rating, as in the estimator
+                double r = Math.exp(eta);
+                double pow = 1;
+                double z = 0;
+                for (int k = 0; k <= m; k++) {
+                    p[k] = expNegCum[s][k] * pow;
+                    z += p[k];
+                    pow *= r;
+                }
+                for (int k = 0; k <= m; k++) {
+                    p[k] /= z;
+                }
+            } else {
+                CategoryModel.probabilities(eta, thresholds[s], m, p);
+            }
             double e = 0;
             double eRaw = 0;
             for (int k = 0; k <= m; k++) {
@@ -111,7 +141,7 @@ public final class RatingStatistics {
             double z = r / Math.sqrt(w);
             double raw = d.rawScore(s, x[n]);
             for (int f = 0; f < nF; f++) {
-                int el = d.elements(f)[n];
+                int el = elements[f][n];
                 count[f][el]++;
                 observedRaw[f][el] += raw;
                 expectedRaw[f][el] += eRaw;
