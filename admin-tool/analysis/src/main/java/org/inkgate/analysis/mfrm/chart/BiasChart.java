@@ -1,10 +1,8 @@
 package org.inkgate.analysis.mfrm.chart;
 
-import java.awt.Graphics2D;
-import java.awt.geom.Ellipse2D;
-import java.awt.geom.Line2D;
 import java.util.Comparator;
 import java.util.List;
+import java.util.Locale;
 import org.inkgate.analysis.mfrm.bias.BiasCell;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
 
@@ -23,13 +21,17 @@ public final class BiasChart {
     /** The chart as an SVG element. */
     public static String svg(BiasPair pair) {
         List<BiasCell> cells = top(pair);
-        return ChartOutput.svg(W, height(cells), g -> paint(g, pair, cells));
+        SvgCanvas c = new SvgCanvas(W, height(cells), "Bias " + pair.first() + " x " + pair.second());
+        paint(c, pair, cells);
+        return c.finish();
     }
 
     /** The same as PNG bytes. */
     public static byte[] png(BiasPair pair) {
         List<BiasCell> cells = top(pair);
-        return ChartOutput.png(W, height(cells), g -> paint(g, pair, cells));
+        ImageCanvas c = new ImageCanvas(W, height(cells));
+        paint(c, pair, cells);
+        return c.png();
     }
 
     private static List<BiasCell> top(BiasPair pair) {
@@ -41,7 +43,7 @@ public final class BiasChart {
         return 90 + ROW * Math.max(1, cells.size());
     }
 
-    static void paint(Graphics2D g, BiasPair pair, List<BiasCell> cells) {
+    static void paint(Canvas g, BiasPair pair, List<BiasCell> cells) {
         int left = 200;
         int right = W - 20;
         int top = 50;
@@ -52,37 +54,29 @@ public final class BiasChart {
         }
         span = Math.min(span, 6);
         WrightMap.Scale x = new WrightMap.Scale(-span, span, left, right);
-        g.setFont(Palette.TITLE);
-        g.setColor(Palette.TEXT);
-        g.drawString("Bias: " + pair.first() + " x " + pair.second(), 10, 20);
-        g.setFont(Palette.SMALL);
-        g.setColor(Palette.MUTED);
-        g.drawString(String.format(java.util.Locale.ROOT, "%d largest |t| of %d cells; 95%% intervals; right of 0 ="
-                + " higher scores than expected. Chi-square %.1f, df %d", cells.size(), pair.cells().size(),
-                pair.chiSquare(), pair.df()), 10, 36);
-        g.setColor(Palette.GRID);
-        double zero = x.map(0);
-        g.draw(new Line2D.Double(zero, top - 4, zero, bottom));
-        g.setFont(Palette.SMALL);
+        g.text("Bias: " + pair.first() + " x " + pair.second(), 10, 20, Palette.TITLE, true, Palette.TEXT,
+                Canvas.Anchor.START);
+        g.text(String.format(Locale.ROOT, "%d largest |t| of %d cells; 95%% intervals; right of 0 = higher scores"
+                        + " than expected; red: p < 0.05 (unadjusted). Chi-square %.1f, df %d", cells.size(),
+                pair.cells().size(), pair.chiSquare(), pair.df()), 10, 36, Palette.SMALL, false, Palette.MUTED,
+                Canvas.Anchor.START);
+        g.line(x.map(0), top - 4, x.map(0), bottom, Palette.GRID, 1);
         for (int i = 0; i < cells.size(); i++) {
             BiasCell c = cells.get(i);
             double cy = top + ROW * i + ROW / 2.0;
-            g.setColor(Palette.TEXT);
-            String label = c.first() + " / " + c.second() + (c.extreme() ? " (extreme)" : "");
-            g.drawString(label, left - 8 - g.getFontMetrics().stringWidth(label), (float) cy + 4);
+            g.text(c.first() + " / " + c.second() + (c.extreme() ? " (extreme)" : ""), left - 8, cy + 4, Palette.SMALL,
+                    false, Palette.TEXT, Canvas.Anchor.END);
             double lo = x.map(Math.max(-span, c.size() - 1.96 * c.se()));
             double hi = x.map(Math.min(span, c.size() + 1.96 * c.se()));
-            g.setColor(c.p() < 0.05 ? Palette.MARK : Palette.BAR);
-            g.draw(new Line2D.Double(lo, cy, hi, cy));
-            double px = x.map(Math.max(-span, Math.min(span, c.size())));
-            g.fill(new Ellipse2D.Double(px - 3.5, cy - 3.5, 7, 7));
+            var colour = c.p() < 0.05 ? Palette.MARK : Palette.BAR;
+            g.line(lo, cy, hi, cy, colour, 1.5);
+            g.circle(x.map(Math.max(-span, Math.min(span, c.size()))), cy, 3.5, colour);
         }
-        g.setColor(Palette.TEXT);
-        g.setFont(Palette.LABEL);
         for (double v : new double[] {-span, -span / 2, 0, span / 2, span}) {
-            String t = String.format(java.util.Locale.ROOT, "%.1f", v);
-            g.drawString(t, (float) (x.map(v) - g.getFontMetrics().stringWidth(t) / 2.0), bottom + 16);
+            g.text(String.format(Locale.ROOT, "%.1f", v), x.map(v), bottom + 16, Palette.LABEL, false, Palette.TEXT,
+                    Canvas.Anchor.MIDDLE);
         }
-        g.drawString("bias size (logits)", (left + right) / 2 - 40, bottom + 32);
+        g.text("bias size (logits)", (left + right) / 2.0, bottom + 32, Palette.LABEL, false, Palette.TEXT,
+                Canvas.Anchor.MIDDLE);
     }
 }

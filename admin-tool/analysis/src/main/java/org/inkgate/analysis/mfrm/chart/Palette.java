@@ -1,11 +1,8 @@
 package org.inkgate.analysis.mfrm.chart;
 
-import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.Font;
-import java.awt.Stroke;
 
-/** Colours and fonts shared by the charts: dark text, light grid, a colour-blind-safe series set. */
+/** Colours and sizes shared by the charts: dark text, light grid, a colour-blind-safe series set. */
 final class Palette {
     static final Color TEXT = new Color(0x22, 0x22, 0x22);
     static final Color MUTED = new Color(0x66, 0x66, 0x66);
@@ -17,11 +14,9 @@ final class Palette {
         new Color(0x00, 0x72, 0xB2), new Color(0xE6, 0x9F, 0x00), new Color(0x00, 0x9E, 0x73),
         new Color(0xCC, 0x79, 0xA7), new Color(0x56, 0xB4, 0xE9), new Color(0xD5, 0x5E, 0x00),
         new Color(0xF0, 0xE4, 0x42), new Color(0x00, 0x00, 0x00)};
-    static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 14);
-    static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
-    static final Font SMALL = new Font(Font.SANS_SERIF, Font.PLAIN, 10);
-    static final Stroke THIN = new BasicStroke(1f);
-    static final Stroke LINE = new BasicStroke(2f);
+    static final double TITLE = 14;
+    static final double LABEL = 11;
+    static final double SMALL = 10;
 
     private Palette() {
     }

@@ -1,8 +1,5 @@
 package org.inkgate.analysis.mfrm.chart;
 
-import java.awt.Graphics2D;
-import java.awt.geom.Line2D;
-import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
@@ -13,10 +10,11 @@ import org.inkgate.analysis.mfrm.MfrmResult;
  * The Wright map: every facet side by side on the one logit scale (Wright & Stone 1979; Linacre
  * 1989). Candidates appear as a histogram (more able higher up); every other facet's elements as
  * labelled ticks (harder or more severe higher up); the last column(s) show the Rasch-Andrich
- * thresholds of each scale. An element and a candidate at the same height give that candidate a
- * 50% chance of each step.
+ * thresholds of each scale. A candidate level with an element has even odds of the next higher
+ * category against the lower one at each threshold position.
  */
 public final class WrightMap {
+    private static final int HEIGHT = 640;
     private static final int MARGIN_TOP = 48;
     private static final int MARGIN_BOTTOM = 72;
     private static final int AXIS_WIDTH = 56;
@@ -24,18 +22,23 @@ public final class WrightMap {
     private static final int COLUMN_WIDTH = 130;
     private static final int MAX_LABELLED = 60;
     private static final int MAX_SCALES = 6;
+    private static final int LINE_HEIGHT = 12;
 
     private WrightMap() {
     }
 
     /** The map as an SVG element. */
     public static String svg(MfrmResult r) {
-        return ChartOutput.svg(width(r), 640, g -> paint(g, r, width(r), 640));
+        SvgCanvas c = new SvgCanvas(width(r), HEIGHT, "Wright map");
+        paint(c, r, width(r), HEIGHT);
+        return c.finish();
     }
 
     /** The map as PNG bytes. */
     public static byte[] png(MfrmResult r) {
-        return ChartOutput.png(width(r), 640, g -> paint(g, r, width(r), 640));
+        ImageCanvas c = new ImageCanvas(width(r), HEIGHT);
+        paint(c, r, width(r), HEIGHT);
+        return c.png();
     }
 
     private static int width(MfrmResult r) {
@@ -43,7 +46,7 @@ public final class WrightMap {
         return AXIS_WIDTH + HIST_WIDTH + COLUMN_WIDTH * (r.facets().size() - 1 + scales) + 20;
     }
 
-    static void paint(Graphics2D g, MfrmResult r, int width, int height) {
+    static void paint(Canvas g, MfrmResult r, int width, int height) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (MfrmResult.Facet f : r.facets()) {
@@ -68,42 +71,31 @@ public final class WrightMap {
         int plotBottom = height - MARGIN_BOTTOM;
         Scale y = new Scale(lo, hi, plotBottom, plotTop);
 
-        g.setFont(Palette.TITLE);
-        g.setColor(Palette.TEXT);
-        g.drawString("Wright map: all facets on one logit scale", 10, 20);
-        g.setFont(Palette.SMALL);
-        g.setColor(Palette.MUTED);
-        g.drawString("Higher: more able candidates; harder or more severe elements of the other facets."
-                + " Thresholds: Rasch-Andrich F_k.", 10, 36);
-
-        // axis and grid
-        g.setFont(Palette.LABEL);
+        g.text("Wright map: all facets on one logit scale", 10, 20, Palette.TITLE, true, Palette.TEXT,
+                Canvas.Anchor.START);
+        g.text("Higher: more able candidates; harder or more severe elements of the other facets."
+                + " Thresholds: Rasch-Andrich F_k.", 10, 36, Palette.SMALL, false, Palette.MUTED, Canvas.Anchor.START);
         for (int v = (int) Math.ceil(lo); v <= hi; v++) {
-            int py = (int) Math.round(y.map(v));
-            g.setColor(Palette.GRID);
-            g.draw(new Line2D.Double(AXIS_WIDTH, py, width - 10, py));
-            g.setColor(Palette.TEXT);
-            String t = String.format(Locale.ROOT, "%+d", v);
-            g.drawString(v == 0 ? "0" : t, AXIS_WIDTH - 8 - g.getFontMetrics().stringWidth(t), py + 4);
+            double py = y.map(v);
+            g.line(AXIS_WIDTH, py, width - 10, py, Palette.GRID, 1);
+            g.text(v > 0 ? "+" + v : Integer.toString(v), AXIS_WIDTH - 8, py + 4, Palette.LABEL, false, Palette.TEXT,
+                    Canvas.Anchor.END);
         }
-        g.setColor(Palette.TEXT);
-        g.draw(new Line2D.Double(AXIS_WIDTH, plotTop, AXIS_WIDTH, plotBottom));
-        drawRotated(g, "logits", 14, (plotTop + plotBottom) / 2);
+        g.line(AXIS_WIDTH, plotTop, AXIS_WIDTH, plotBottom, Palette.TEXT, 1);
+        g.verticalText("logits", 16, (plotTop + plotBottom) / 2.0, Palette.LABEL, Palette.TEXT);
 
         int x = AXIS_WIDTH + 8;
         candidateHistogram(g, r.facets().get(0), x, HIST_WIDTH - 16, y, plotBottom);
         x += HIST_WIDTH;
         for (int f = 1; f < r.facets().size(); f++) {
             MfrmResult.Facet facet = r.facets().get(f);
-            List<double[]> marks = new ArrayList<>();
-            List<String> labels = new ArrayList<>();
+            List<Mark> marks = new ArrayList<>();
             for (MfrmResult.Element e : facet.elements()) {
                 if (Double.isFinite(e.measure())) {
-                    marks.add(new double[] {e.measure(), labels.size()});
-                    labels.add(e.label() + (e.status() == MfrmResult.Status.ESTIMATED ? "" : "*"));
+                    marks.add(new Mark(e.measure(), e.label() + (e.status() == MfrmResult.Status.ESTIMATED ? "" : "*")));
                 }
             }
-            labelledColumn(g, facet.name(), marks, labels, x, y, plotBottom);
+            labelledColumn(g, facet.name(), marks, x, y, plotBottom);
             x += COLUMN_WIDTH;
         }
         int shown = 0;
@@ -111,34 +103,28 @@ public final class WrightMap {
             if (shown++ == MAX_SCALES) {
                 break;
             }
-            List<double[]> marks = new ArrayList<>();
-            List<String> labels = new ArrayList<>();
+            List<Mark> marks = new ArrayList<>();
             List<MfrmResult.Category> cats = s.categories();
             for (int k = 1; k < cats.size(); k++) {
-                marks.add(new double[] {cats.get(k).threshold(), labels.size()});
-                labels.add(cats.get(k - 1).score() + "|" + cats.get(k).score());
+                marks.add(new Mark(cats.get(k).threshold(), cats.get(k - 1).score() + "|" + cats.get(k).score()));
             }
-            String title = r.scales().size() == 1 ? "thresholds" : "thr. " + s.label();
-            labelledColumn(g, title, marks, labels, x, y, plotBottom);
+            labelledColumn(g, r.scales().size() == 1 ? "thresholds" : "thr. " + s.label(), marks, x, y, plotBottom);
             x += COLUMN_WIDTH;
         }
-        g.setFont(Palette.SMALL);
-        g.setColor(Palette.MUTED);
-        String foot = "* anchored or extreme (estimated after setting aside)";
+        String foot = "* anchored, or extreme (set aside, then estimated at a score 0.5 from the extreme)";
         if (r.scales().size() > MAX_SCALES) {
             foot += "; first " + MAX_SCALES + " of " + r.scales().size() + " threshold sets shown";
         }
-        g.drawString(foot, 10, height - 8);
+        g.text(foot, 10, height - 8, Palette.SMALL, false, Palette.MUTED, Canvas.Anchor.START);
     }
 
-    private static void candidateHistogram(Graphics2D g, MfrmResult.Facet facet, int x, int w, Scale y,
-                                           int plotBottom) {
+    private static void candidateHistogram(Canvas g, MfrmResult.Facet facet, int x, int w, Scale y, int plotBottom) {
         double bin = 0.25;
-        int nb = (int) Math.ceil((y.hi - y.lo) / bin);
+        int nb = (int) Math.ceil((y.hi() - y.lo()) / bin);
         int[] counts = new int[nb];
         for (MfrmResult.Element e : facet.elements()) {
             if (Double.isFinite(e.measure())) {
-                int b = (int) Math.floor((e.measure() - y.lo) / bin);
+                int b = (int) Math.floor((e.measure() - y.lo()) / bin);
                 counts[Math.max(0, Math.min(nb - 1, b))]++;
             }
         }
@@ -146,62 +132,47 @@ public final class WrightMap {
         for (int c : counts) {
             max = Math.max(max, c);
         }
-        g.setColor(Palette.BAR);
         for (int b = 0; b < nb; b++) {
             if (counts[b] == 0) {
                 continue;
             }
-            double top = y.map(y.lo + (b + 1) * bin);
-            double bottom = y.map(y.lo + b * bin);
+            double top = y.map(y.lo() + (b + 1) * bin);
+            double bottom = y.map(y.lo() + b * bin);
             double len = (double) w * counts[b] / max;
-            g.fill(new Rectangle2D.Double(x + w - len, top + 0.5, len, Math.max(1, bottom - top - 1)));
+            g.rect(x + w - len, top + 0.5, len, Math.max(1, bottom - top - 1), Palette.BAR);
         }
-        g.setColor(Palette.TEXT);
-        g.setFont(Palette.LABEL);
-        g.drawString(facet.name() + " (n = " + facet.elements().size() + ")", x, plotBottom + 18);
-        g.setFont(Palette.SMALL);
-        g.setColor(Palette.MUTED);
-        g.drawString("bar length: count per 0.25 logit, max " + max, x, plotBottom + 32);
+        g.text(facet.name() + " (n = " + facet.elements().size() + ")", x, plotBottom + 18, Palette.LABEL, false,
+                Palette.TEXT, Canvas.Anchor.START);
+        g.text("bar length: count per 0.25 logit, longest " + max, x, plotBottom + 32, Palette.SMALL, false,
+                Palette.MUTED, Canvas.Anchor.START);
     }
 
-    private static void labelledColumn(Graphics2D g, String title, List<double[]> marks, List<String> labels, int x,
-                                       Scale y, int plotBottom) {
-        g.setColor(Palette.TEXT);
-        g.setFont(Palette.LABEL);
-        g.drawString(title, x, plotBottom + 18);
-        marks.sort(Comparator.comparingDouble((double[] m) -> -m[0]));
-        g.setFont(Palette.SMALL);
-        int lineHeight = g.getFontMetrics().getHeight() - 2;
+    private static void labelledColumn(Canvas g, String title, List<Mark> marks, int x, Scale y, int plotBottom) {
+        g.text(title, x, plotBottom + 18, Palette.LABEL, false, Palette.TEXT, Canvas.Anchor.START);
+        marks.sort(Comparator.comparingDouble((Mark m) -> -m.value()));
         boolean labelled = marks.size() <= MAX_LABELLED;
         double lastY = Double.NEGATIVE_INFINITY;
-        for (double[] m : marks) {
-            double py = y.map(m[0]);
-            g.setColor(Palette.MARK);
-            g.draw(new Line2D.Double(x, py, x + 10, py));
+        for (Mark m : marks) {
+            double py = y.map(m.value());
+            g.line(x, py, x + 10, py, Palette.MARK, 1.5);
             if (!labelled) {
                 continue;
             }
             // labels never overlap: each goes below the previous one if they would collide
-            double ly = Math.max(py + 4, lastY + lineHeight);
+            double ly = Math.max(py + 4, lastY + LINE_HEIGHT);
             lastY = ly;
-            g.setColor(Palette.MUTED);
             if (Math.abs(ly - 4 - py) > 1) {
-                g.draw(new Line2D.Double(x + 10, py, x + 16, ly - 4));
+                g.line(x + 10, py, x + 16, ly - 4, Palette.MUTED, 0.75);
             }
-            g.setColor(Palette.TEXT);
-            g.drawString(labels.get((int) m[1]), x + 18, (float) ly);
+            g.text(m.label(), x + 18, ly, Palette.SMALL, false, Palette.TEXT, Canvas.Anchor.START);
         }
         if (!labelled) {
-            g.setColor(Palette.MUTED);
-            g.drawString(marks.size() + " elements (ticks only)", x, plotBottom + 32);
+            g.text(marks.size() + " elements (ticks only)", x, plotBottom + 32, Palette.SMALL, false, Palette.MUTED,
+                    Canvas.Anchor.START);
         }
     }
 
-    private static void drawRotated(Graphics2D g, String text, int x, int y) {
-        var old = g.getTransform();
-        g.rotate(-Math.PI / 2, x, y);
-        g.drawString(text, x - g.getFontMetrics().stringWidth(text) / 2, y);
-        g.setTransform(old);
+    private record Mark(double value, String label) {
     }
 
     /** Linear map from data values to pixels. */
