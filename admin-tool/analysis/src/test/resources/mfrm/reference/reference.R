@@ -28,6 +28,36 @@ out <- rbind(
   data.frame(facet = "rater", element = levels(dich$rater), measure = -eff("rater", dich$rater)))
 write.csv(out, "dichotomous-glm.csv", row.names = FALSE, quote = FALSE)
 
+# fit statistics from the GLM's fitted probabilities (Wright & Masters 1982, ch. 5):
+# outfit = mean z^2, infit = sum (y-p)^2 / sum p(1-p); point-measure correlation of the item's
+# responses with the linear predictor without the item's own term
+p <- fitted(fit); eta <- predict(fit, type = "link")
+z2 <- (dich$score - p)^2 / (p * (1 - p))
+fitstats <- function(f, name) {
+  data.frame(facet = name, element = levels(f),
+             infit = as.vector(tapply((dich$score - p)^2, f, sum) / tapply(p * (1 - p), f, sum)),
+             outfit = as.vector(tapply(z2, f, mean)))
+}
+fs <- rbind(fitstats(dich$candidate, "candidate"), fitstats(dich$item, "item"), fitstats(dich$rater, "rater"))
+itemEff <- eff("item", dich$item); names(itemEff) <- levels(dich$item)
+rest <- eta - itemEff[as.character(dich$item)]
+pm <- sapply(levels(dich$item), function(i) cor(dich$score[dich$item == i], rest[dich$item == i]))
+fs$pointMeasure <- NA
+fs$pointMeasure[fs$facet == "item"] <- pm[fs$element[fs$facet == "item"]]
+write.csv(fs, "dichotomous-fit.csv", row.names = FALSE, quote = FALSE)
+
+# bias item x rater with every main effect anchored: per cell a binomial GLM with the main-effects
+# linear predictor as offset and one intercept (= the bias size, positive = more 1s than expected)
+cells <- unique(dich[, c("item", "rater")])
+bias <- do.call(rbind, lapply(seq_len(nrow(cells)), function(i) {
+  sel <- dich$item == cells$item[i] & dich$rater == cells$rater[i]
+  b <- glm(dich$score[sel] ~ 1, family = binomial, offset = eta[sel],
+           control = glm.control(epsilon = 1e-12, maxit = 100))
+  data.frame(item = cells$item[i], rater = cells$rater[i], size = coef(b)[1],
+             se = sqrt(vcov(b)[1, 1]))
+}))
+write.csv(bias, "dichotomous-bias.csv", row.names = FALSE, quote = FALSE)
+
 # ---- 2. rating scale, 5 categories: candidate x task x rater, VGAM acat(parallel = TRUE) ----
 simulate_rs <- function(nc, nt, nr, name) {
   b <- rnorm(nc, 0.3, 1); d <- seq(-0.8, 0.8, length.out = nt); r <- seq(-0.6, 0.6, length.out = nr)
