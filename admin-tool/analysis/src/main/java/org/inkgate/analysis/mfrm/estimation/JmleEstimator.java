@@ -21,6 +21,8 @@ public final class JmleEstimator {
     private static final double MAX_STEP = 1.0;
     /** Above this many non-candidate elements and thresholds the joint system is not solved. */
     private static final int JOINT_LIMIT = 800;
+    /** Joint Newton steps tried before falling back to facet-by-facet steps. */
+    private static final int JOINT_PATIENCE = 60;
     /** Beyond this |eta| the fast power series could overflow; the stable path is used. */
     private static final double FAST_LIMIT = 30.0;
 
@@ -146,23 +148,30 @@ public final class JmleEstimator {
         boolean converged = false;
         JointNewton joint = useJointNewton() ? new JointNewton(d, anchored, scaleAnchored, present, threads) : null;
         JointNewton.Step lastStep = null;
-        while (joint != null && it < maxIterations) {
+        boolean fellBack = false;
+        // Newton converges in a handful of steps near the maximum; if it has not settled after
+        // JOINT_PATIENCE steps (oscillating on an awkward design), facet-by-facet steps take over
+        while (joint != null && it < Math.min(maxIterations, JOINT_PATIENCE)) {
             it++;
             JointNewton.Step step = joint.step(measure, thresholds);
+            double size = JointNewton.size(step);
+            if (!Double.isFinite(size)) {
+                break; // not applied; the facet-by-facet steps below take over
+            }
             lastStep = step;
             maxResidual = step.maxResidual();
-            double size = JointNewton.size(step);
             maxChange = joint.apply(step, size > MAX_STEP ? MAX_STEP / size : 1, measure, thresholds);
             centreKeepingEta(measure, thresholds);
-            if (!Double.isFinite(maxChange)) {
-                throw new IllegalStateException("Newton step is not finite; the design may be degenerate");
-            }
             if (maxChange < maxChangeLimit && maxResidual < maxResidualLimit) {
                 converged = true;
                 break;
             }
         }
-        while (joint == null && it < maxIterations) {
+        if (joint != null && !converged && it < maxIterations) {
+            fellBack = true;
+            lastStep = null;
+        }
+        while (!converged && (joint == null || fellBack) && it < maxIterations) {
             it++;
             maxResidual = 0;
             maxChange = 0;
@@ -240,13 +249,17 @@ public final class JmleEstimator {
             }
         }
         List<String> warnings = new ArrayList<>();
+        if (fellBack) {
+            warnings.add("the joint Newton-Raphson steps did not settle within " + JOINT_PATIENCE
+                    + " iterations; estimation continued facet by facet (slower, same maximum)");
+        }
         if (!converged) {
             warnings.add(String.format(java.util.Locale.ROOT, "estimation stopped at the iteration cap (%d) before"
                     + " converging: largest score residual %.4g, largest logit change %.4g; measures may be off"
                     + " by about that change or more - raise the cap or check the design before using them",
                     maxIterations, maxResidual, maxChange));
         }
-        double[][] jointSe = lastStep != null ? joint.jointSe(lastStep) : null;
+        double[][] jointSe = lastStep != null && joint != null ? joint.jointSe(lastStep) : null;
         return new Estimates(measure, se, jointSe, thresholds, thrSe, it, maxResidual, maxChange, converged, warnings);
     }
 
