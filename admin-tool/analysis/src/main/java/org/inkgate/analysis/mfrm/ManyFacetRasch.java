@@ -25,6 +25,8 @@ import org.inkgate.analysis.mfrm.fit.Separation;
  * rating and bias statistics.
  */
 public final class ManyFacetRasch {
+    /** Marks an element whose every rating involved an extreme element. */
+    private static final int UNLINKED = 2;
     private static final String AFTER_EXTREMES = " after setting extreme scores aside";
 
     private ManyFacetRasch() {
@@ -281,6 +283,22 @@ public final class ManyFacetRasch {
                 }
             }
         }
+        // elements left without ratings (all of them were with extreme elements) are estimated
+        // afterwards too, from their own ratings
+        for (int f = 0; f < nF; f++) {
+            boolean[] has = new boolean[d.elementCount(f)];
+            boolean[] any = new boolean[d.elementCount(f)];
+            int[] el = d.elements(f);
+            for (int n = 0; n < keep.length; n++) {
+                any[el[n]] = true;
+                has[el[n]] |= keep[n];
+            }
+            for (int e = 0; e < has.length; e++) {
+                if (any[e] && !has[e] && side[f][e] == 0 && !anchored[f][e]) {
+                    side[f][e] = UNLINKED;
+                }
+            }
+        }
         int k = 0;
         for (boolean b : keep) {
             k += b ? 1 : 0;
@@ -362,7 +380,8 @@ public final class ManyFacetRasch {
                     if (side[f][e] == 0) {
                         continue;
                     }
-                    double target = side[f][e] < 0 ? 0.5 : max[f][e] - 0.5;
+                    double target = side[f][e] < 0 ? 0.5 : side[f][e] == 1 ? max[f][e] - 0.5
+                            : obs[f][e] == 0 ? 0.5 : obs[f][e] == max[f][e] ? max[f][e] - 0.5 : obs[f][e];
                     double step = Math.max(-1, Math.min(1, (target - exp[f][e]) / info[f][e]));
                     measure[f][e] += f == 0 ? step : -step;
                     se[f][e] = 1 / Math.sqrt(info[f][e]);
@@ -387,7 +406,8 @@ public final class ManyFacetRasch {
         for (int e = 0; e < full.elementCount(f); e++) {
             MfrmResult.Status status = anchored[f][e] ? MfrmResult.Status.ANCHORED
                     : side[f][e] < 0 ? MfrmResult.Status.EXTREME_MINIMUM
-                    : side[f][e] > 0 ? MfrmResult.Status.EXTREME_MAXIMUM : MfrmResult.Status.ESTIMATED;
+                    : side[f][e] == 1 ? MfrmResult.Status.EXTREME_MAXIMUM
+                    : side[f][e] == UNLINKED ? MfrmResult.Status.ONLY_WITH_EXTREMES : MfrmResult.Status.ESTIMATED;
             double m = anchored[f][e] ? measure[f][e] : measure[f][e] * factor;
             if (side[f][e] != 0) {
                 extremes++;
@@ -408,9 +428,9 @@ public final class ManyFacetRasch {
         }
         if (extremes > 0) {
             warnings.add(extremes + " " + full.facetName(f) + " element(s) had extreme scores (every rating at the"
-                    + " bottom or top): their measures are estimated at a score 0.5 from the extreme, are less"
-                    + " certain than their SE suggests, have no fit statistics and are left out of the facet"
-                    + " summary");
+                    + " bottom or top) or were rated only with such elements: their measures are estimated"
+                    + " afterwards (extreme ones at a score 0.5 from the extreme), are less certain than their SE"
+                    + " suggests, have no fit statistics and are left out of the facet summary");
         }
         return new MfrmResult.Facet(full.facetName(f), List.copyOf(elements),
                 Separation.of(Arrays.copyOf(ms, used), Arrays.copyOf(ses, used)));

@@ -32,7 +32,9 @@ public record MfrmResult(Model model, Convergence convergence, List<Facet> facet
         /** Every rating at the bottom: set aside, then estimated at score + 0.5. */
         EXTREME_MINIMUM,
         /** Every rating at the top: set aside, then estimated at score - 0.5. */
-        EXTREME_MAXIMUM
+        EXTREME_MAXIMUM,
+        /** Every rating was with an extreme element: set aside with them, then estimated from its ratings. */
+        ONLY_WITH_EXTREMES
     }
 
     /**

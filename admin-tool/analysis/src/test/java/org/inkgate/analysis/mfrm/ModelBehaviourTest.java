@@ -48,6 +48,26 @@ class ModelBehaviourTest {
     }
 
     @Test
+    void analyse_raterWhoRatedOnlyAnExtremeCandidate_isEstimatedAfterwardsAndFlagged() {
+        RatingData base = withExtremeCandidate();
+        RatingData.Builder b = RatingData.builder(base.columns());
+        for (int n = 0; n < base.size(); n++) {
+            String[] v = new String[base.columns().size()];
+            for (int i = 0; i < v.length; i++) {
+                v[i] = base.labels(i)[base.codesView(i)[n]];
+            }
+            b.add(base.labels(-1)[base.codesView(-1)[n]], v, base.scoresView()[n]);
+        }
+        b.add("top", new String[] {"task1", "rater13", "criterion2"}, 4);
+        MfrmResult r = ManyFacetRasch.analyse(b.build(), MfrmOptions.builder(List.of("task", "rater", "criterion")).build());
+        MfrmResult.Element lone = r.facet("rater").elements().stream().filter(e -> e.label().equals("rater13"))
+                .findFirst().orElseThrow();
+        assertEquals(MfrmResult.Status.ONLY_WITH_EXTREMES, lone.status());
+        assertTrue(Double.isFinite(lone.measure()));
+        assertEquals(12, r.facet("rater").separation().count(), "left out of the rater summary");
+    }
+
+    @Test
     void analyse_unobservedMiddleScore_isRenumberedAndReported() {
         RatingData.Builder b = RatingData.builder(List.of("rater"));
         java.util.Random rng = new java.util.Random(3);
