@@ -53,6 +53,10 @@ public final class ManyFacetRasch {
             labels[f] = data.labels(col);
             elem[f] = data.codesView(col);
         }
+        for (FacetPair pair : options.biasPairs()) {
+            data.columnIndex(pair.first()); // unknown columns fail here, before any work
+            data.columnIndex(pair.second());
+        }
         int nObs = data.size();
         int[] scaleOf;
         String[] scaleLabels;
@@ -105,23 +109,9 @@ public final class ManyFacetRasch {
         if (!activeProblems.isEmpty()) {
             throw new MfrmRefusedException(activeProblems);
         }
-        for (int s = 0; s < scaleLabels.length; s++) {
-            int[] counts = new int[rawOf[s].length];
-            for (int n = 0; n < active.observationCount(); n++) {
-                if (active.scales()[n] == s) {
-                    counts[active.categories()[n]]++;
-                }
-            }
-            for (int k = 0; k < counts.length; k++) {
-                if (counts[k] == 0 && !scaleAnchored[s]) {
-                    refusals.add("score " + rawOf[s][k] + " of scale '" + scaleLabels[s] + "' occurs only in"
-                            + " extreme elements' ratings, so its threshold cannot be estimated; anchor the"
-                            + " thresholds or collect more ratings");
-                }
-            }
-        }
-        if (!refusals.isEmpty()) {
-            throw new MfrmRefusedException(refusals);
+        List<String> lost = categoriesLostWithExtremes(active, scaleAnchored);
+        if (!lost.isEmpty()) {
+            throw new MfrmRefusedException(lost);
         }
 
         JmleEstimator estimator = new JmleEstimator(active, anchored, scaleAnchored, options.threads(), pcFacet);
@@ -161,17 +151,7 @@ public final class ManyFacetRasch {
         for (int s = 0; s < scaleLabels.length; s++) {
             scales.add(scale(active, s, stats, est, thresholds, factor, scaleAnchored[s]));
         }
-        List<MfrmResult.Unexpected> unexpected = new ArrayList<>();
-        for (int i = 0; i < stats.unexpected.length; i++) {
-            int n = stats.unexpected[i];
-            Map<String, String> el = new LinkedHashMap<>();
-            for (int f = 0; f < nF; f++) {
-                el.put(facetNames[f], active.label(f, active.elements(f)[n]));
-            }
-            int s = active.scales()[n];
-            unexpected.add(new MfrmResult.Unexpected(active.rows()[n] + 1, el, active.rawScore(s, active.categories()[n]),
-                    stats.unexpectedExpectedRaw[i], stats.unexpectedResidual[i], stats.unexpectedZ[i]));
-        }
+        List<MfrmResult.Unexpected> unexpected = unexpectedRatings(active, stats);
         String structure = pcFacet < 0 ? "rating scale" : "partial credit by " + facetNames[pcFacet];
         MfrmResult.Model model = new MfrmResult.Model(List.of(facetNames), structure, nObs, active.observationCount(),
                 options.lengthCorrection(), factor, List.copyOf(notes));
@@ -180,6 +160,42 @@ public final class ManyFacetRasch {
                 options.maxLogitChange());
         return new MfrmResult(model, conv, List.copyOf(facets), List.copyOf(scales), List.copyOf(unexpected),
                 List.copyOf(bias), List.copyOf(warnings));
+    }
+
+    /** A category seen only in extreme elements' ratings has no data left for its threshold. */
+    private static List<String> categoriesLostWithExtremes(ModelDesign active, boolean[] scaleAnchored) {
+        List<String> out = new ArrayList<>();
+        for (int s = 0; s < active.scaleCount(); s++) {
+            int[] counts = new int[active.maxCategory(s) + 1];
+            for (int n = 0; n < active.observationCount(); n++) {
+                if (active.scales()[n] == s) {
+                    counts[active.categories()[n]]++;
+                }
+            }
+            for (int k = 0; k < counts.length; k++) {
+                if (counts[k] == 0 && !scaleAnchored[s]) {
+                    out.add("score " + active.rawScore(s, k) + " of scale '" + active.scaleLabel(s) + "' occurs only"
+                            + " in extreme elements' ratings, so its threshold cannot be estimated; anchor the"
+                            + " thresholds or collect more ratings");
+                }
+            }
+        }
+        return out;
+    }
+
+    private static List<MfrmResult.Unexpected> unexpectedRatings(ModelDesign active, RatingStatistics stats) {
+        List<MfrmResult.Unexpected> out = new ArrayList<>();
+        for (int i = 0; i < stats.unexpected.length; i++) {
+            int n = stats.unexpected[i];
+            Map<String, String> el = new LinkedHashMap<>();
+            for (int f = 0; f < active.facetCount(); f++) {
+                el.put(active.facetName(f), active.label(f, active.elements(f)[n]));
+            }
+            int s = active.scales()[n];
+            out.add(new MfrmResult.Unexpected(active.rows()[n] + 1, el, active.rawScore(s, active.categories()[n]),
+                    stats.unexpectedExpectedRaw[i], stats.unexpectedResidual[i], stats.unexpectedZ[i]));
+        }
+        return out;
     }
 
     private static int countPresent(ModelDesign d, int f) {
