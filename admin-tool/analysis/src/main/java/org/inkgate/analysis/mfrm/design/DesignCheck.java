@@ -38,7 +38,7 @@ public final class DesignCheck {
         int p = 0;
         boolean[] facetAnchored = new boolean[nF];
         boolean[][] present = presentElements(d);
-        List<Integer>[] facetColumns = columnsByFacet(nF);
+        List<List<Integer>> facetColumns = columnsByFacet(nF);
         for (int f = 1; f < nF; f++) {
             column[f] = new int[d.elementCount(f)];
             Arrays.fill(column[f], -1);
@@ -47,7 +47,7 @@ public final class DesignCheck {
                     facetAnchored[f] = true;
                 } else if (present[f][e]) {
                     column[f][e] = p;
-                    facetColumns[f].add(p);
+                    facetColumns.get(f).add(p);
                     p++;
                 }
             }
@@ -62,7 +62,7 @@ public final class DesignCheck {
         }
         int expected = 0;
         for (int f = 1; f < nF; f++) {
-            expected += expectedRank(facetColumns[f].size(), facetAnchored[f]);
+            expected += expectedRank(facetColumns.get(f).size(), facetAnchored[f]);
         }
         int deficiency = expected - rank(a, all);
         if (deficiency <= 0) {
@@ -76,7 +76,7 @@ public final class DesignCheck {
         List<String> specific = new ArrayList<>();
         int[] single = new int[nF];
         for (int f = 1; f < nF; f++) {
-            int[] cols = facetColumns[f].stream().mapToInt(Integer::intValue).toArray();
+            int[] cols = facetColumns.get(f).stream().mapToInt(Integer::intValue).toArray();
             single[f] = Math.max(0, expectedRank(cols.length, facetAnchored[f]) - rank(a, cols));
             if (single[f] > 0) {
                 specific.add("facet '" + d.facetName(f) + "' cannot be separated from candidates" + context
@@ -88,9 +88,9 @@ public final class DesignCheck {
         }
         for (int f = 1; f < nF; f++) {
             for (int g = f + 1; g < nF; g++) {
-                int[] cols = concat(facetColumns[f], facetColumns[g]);
-                int exp = expectedRank(facetColumns[f].size(), facetAnchored[f])
-                        + expectedRank(facetColumns[g].size(), facetAnchored[g]);
+                int[] cols = concat(facetColumns.get(f), facetColumns.get(g));
+                int exp = expectedRank(facetColumns.get(f).size(), facetAnchored[f])
+                        + expectedRank(facetColumns.get(g).size(), facetAnchored[g]);
                 int def = exp - rank(a, cols) - single[f] - single[g];
                 if (def > 0) {
                     specific.add("facets '" + d.facetName(f) + "' and '" + d.facetName(g) + "' are confounded"
@@ -124,11 +124,10 @@ public final class DesignCheck {
         return present;
     }
 
-    @SuppressWarnings("unchecked")
-    private static List<Integer>[] columnsByFacet(int nF) {
-        List<Integer>[] cols = new List[nF];
+    private static List<List<Integer>> columnsByFacet(int nF) {
+        List<List<Integer>> cols = new ArrayList<>();
         for (int f = 0; f < nF; f++) {
-            cols[f] = new ArrayList<>();
+            cols.add(new ArrayList<>());
         }
         return cols;
     }
