@@ -11,7 +11,8 @@ import org.junit.jupiter.api.Test;
  * JMLE maximises the same likelihood as a fixed-effects model (METHODS.md), so with sum-to-zero
  * contrasts the centred measures must agree with a general-purpose fit. Reference values: R 4.2.2
  * glm (binomial) and VGAM 1.1.7 vglm(acat(parallel = TRUE)) run by
- * src/test/resources/mfrm/reference/reference.R on the simulated data sets committed beside it.
+ * src/test/resources/mfrm/reference/reference.R (and reference-pcm.R for partial credit) on the
+ * simulated data sets committed beside them.
  */
 class EquivalenceTest {
     /** The acceptance limit for centred measures, logits. */
@@ -43,6 +44,26 @@ class EquivalenceTest {
             assertEquals(4, ref.get("threshold").size());
             assertTrue(worst < LIMIT, name + ": largest difference " + worst);
         }
+    }
+
+    @Test
+    void analyse_partialCreditByTask_matchesVgamWithTaskSpecificThresholds() throws Exception {
+        // reference-pcm.R: acat(parallel = TRUE ~ candidate + rater - 1), i.e. intercepts and task
+        // terms differ by category step: one threshold set per task
+        RatingData data = ReferenceFits.data("ratingscale-2000");
+        MfrmResult r = ManyFacetRasch.analyse(data, MfrmOptions.builder(List.of("task", "rater"))
+                .structure(new ScaleStructure.PartialCredit("task")).build());
+        Map<String, Map<String, Double>> ref = ReferenceFits.measures("ratingscale-2000-pcm-vgam.csv");
+        assertTrue(r.convergence().converged(), r.convergence().toString());
+        double worst = compare(r, ref, List.of("candidate", "task", "rater"));
+        assertEquals(4, r.scales().size());
+        for (MfrmResult.Scale s : r.scales()) {
+            for (int k = 1; k < s.categories().size(); k++) {
+                double d = Math.abs(s.categories().get(k).threshold() - ref.get("threshold").get(s.label() + ":F" + k));
+                worst = Math.max(worst, d);
+            }
+        }
+        assertTrue(worst < LIMIT, "largest difference " + worst);
     }
 
     static double compare(MfrmResult r, Map<String, Map<String, Double>> ref, List<String> facets) {
