@@ -10,7 +10,7 @@ import org.inkgate.analysis.mfrm.estimation.CategoryModel;
  * Facet 0 is the candidate facet; each rule lists, for one candidate, the element index of every
  * other facet for each of its ratings.
  */
-final class Simulation {
+public final class Simulation {
     /** Which ratings a candidate receives: rows of element indices, one per non-candidate facet. */
     interface Assignment {
         List<int[]> ratings(int candidate, Random rng);
@@ -21,6 +21,16 @@ final class Simulation {
     final double[][] truth;
     final double[] thresholds;
     final RatingData data;
+
+    /** The modelled facets, in order. */
+    public List<String> facets() {
+        return facets;
+    }
+
+    /** The simulated ratings. */
+    public RatingData data() {
+        return data;
+    }
 
     private Simulation(List<String> facets, double[] candidates, double[][] truth, double[] thresholds,
                        RatingData data) {
@@ -104,7 +114,7 @@ final class Simulation {
     }
 
     /** The truth for an element label of facet i (labels are facet name + 1-based index). */
-    double truthOf(int facet, String label) {
+    public double truthOf(int facet, String label) {
         return truth[facet][Integer.parseInt(label.substring(facets.get(facet).length())) - 1];
     }
 
@@ -117,7 +127,7 @@ final class Simulation {
      * conditions (two counterbalanced forms), 5 criteria, 2 of 20 raters per candidate,
      * 9 categories: 20 ratings per candidate.
      */
-    static Simulation writingExam(long seed, int nCandidates) {
+    public static Simulation writingExam(long seed, int nCandidates) {
         List<String> facets = List.of("task", "condition", "rater", "criterion");
         double[][] truth = {spread(2, 0.3), spread(2, 0.25), spread(20, 1.0), spread(5, 0.6)};
         double[] thr = {-2.6, -1.9, -1.2, -0.4, 0.3, 1.0, 1.8, 3.0};

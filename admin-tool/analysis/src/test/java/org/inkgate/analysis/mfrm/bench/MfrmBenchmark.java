@@ -1,4 +1,4 @@
-package org.inkgate.analysis.mfrm;
+package org.inkgate.analysis.mfrm.bench;
 
 import java.io.PrintStream;
 import java.lang.management.ManagementFactory;
@@ -9,6 +9,12 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.inkgate.analysis.mfrm.ManyFacetRasch;
+import org.inkgate.analysis.mfrm.MfrmOptions;
+import org.inkgate.analysis.mfrm.MfrmResult;
+import org.inkgate.analysis.mfrm.RatingData;
+import org.inkgate.analysis.mfrm.ReferenceFits;
+import org.inkgate.analysis.mfrm.Simulation;
 
 /**
  * Bench command (not a test): {@code mvn -q -Pbench -pl admin-tool/analysis -am process-test-classes}.
@@ -32,26 +38,26 @@ public final class MfrmBenchmark {
         out.println("cores " + Runtime.getRuntime().availableProcessors() + ", max heap "
                 + Runtime.getRuntime().maxMemory() / (1 << 20) + " MiB");
         Simulation sim = Simulation.writingExam(2026, candidates);
-        out.println("simulated " + sim.data.size() + " ratings");
-        MfrmOptions options = MfrmOptions.builder(sim.facets).build();
+        out.println("simulated " + sim.data().size() + " ratings");
+        MfrmOptions options = MfrmOptions.builder(sim.facets()).build();
         System.gc();
         long[] ms = new long[runs];
         long peak = 0;
-        MfrmResult r = ManyFacetRasch.analyse(sim.data, options); // warm-up
+        MfrmResult r = ManyFacetRasch.analyse(sim.data(), options); // warm-up
         for (int i = 0; i < runs; i++) {
             System.gc();
             resetPeaks();
             long t0 = System.nanoTime();
-            r = ManyFacetRasch.analyse(sim.data, options);
+            r = ManyFacetRasch.analyse(sim.data(), options);
             ms[i] = (System.nanoTime() - t0) / 1_000_000;
             peak = Math.max(peak, peakHeap());
         }
         out.printf(Locale.ROOT, "large: %d ratings, runs %s ms, median %d ms, iterations %d, converged %s,"
-                        + " peak heap used %d MiB (data set included)%n", sim.data.size(), Arrays.toString(ms),
+                        + " peak heap used %d MiB (data set included)%n", sim.data().size(), Arrays.toString(ms),
                 median(ms), r.convergence().iterations(), r.convergence().converged(), peak / (1 << 20));
         double worst = 0;
-        for (int f = 0; f < sim.facets.size(); f++) {
-            for (MfrmResult.Element e : r.facet(sim.facets.get(f)).elements()) {
+        for (int f = 0; f < sim.facets().size(); f++) {
+            for (MfrmResult.Element e : r.facet(sim.facets().get(f)).elements()) {
                 worst = Math.max(worst, Math.abs(e.measure() - sim.truthOf(f, e.label())));
             }
         }
@@ -71,7 +77,7 @@ public final class MfrmBenchmark {
                 res = ManyFacetRasch.analyse(data, o);
                 t[i] = (System.nanoTime() - t0) / 1000;
             }
-            double diff = EquivalenceTest.compare(res, ReferenceFits.measures(name + "-vgam.csv"),
+            double diff = ReferenceFits.compare(res, ReferenceFits.measures(name + "-vgam.csv"),
                     List.of("candidate", "task", "rater"));
             double javaMs = median(t) / 1000.0;
             double rMs = rSeconds.get(name) * 1000;
