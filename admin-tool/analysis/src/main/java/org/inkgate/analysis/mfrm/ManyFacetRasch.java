@@ -417,6 +417,7 @@ public final class ManyFacetRasch {
         List<MfrmResult.Element> elements = new ArrayList<>();
         double[] ms = new double[full.elementCount(f)];
         double[] ses = new double[full.elementCount(f)];
+        double[] joint = new double[full.elementCount(f)];
         int used = 0;
         int extremes = 0;
         for (int e = 0; e < full.elementCount(f); e++) {
@@ -439,6 +440,7 @@ public final class ManyFacetRasch {
             if (cnt > 0) {
                 ms[used] = m;
                 ses[used] = se[f][e];
+                joint[used] = jointSe[f][e];
                 used++;
             }
         }
@@ -448,8 +450,13 @@ public final class ManyFacetRasch {
                     + " afterwards (extreme ones at a score 0.5 from the extreme), are less certain than their SE"
                     + " suggests, have no fit statistics and are left out of the facet summary");
         }
+        boolean jointKnown = f > 0 && used > 0;
+        for (int i = 0; i < used; i++) {
+            jointKnown &= Double.isFinite(joint[i]);
+        }
         return new MfrmResult.Facet(full.facetName(f), List.copyOf(elements),
-                Separation.of(Arrays.copyOf(ms, used), Arrays.copyOf(ses, used)));
+                Separation.of(Arrays.copyOf(ms, used), Arrays.copyOf(ses, used)),
+                jointKnown ? Separation.of(Arrays.copyOf(ms, used), Arrays.copyOf(joint, used)) : null);
     }
 
     private static MfrmResult.Scale scale(ModelDesign d, int s, RatingStatistics st, Estimates est,

@@ -47,8 +47,11 @@ public record MfrmResult(Model model, Convergence convergence, List<Facet> facet
                           double infit, double infitZ, double outfit, double outfitZ, double pointMeasure) {
     }
 
-    /** One facet: its elements and their spread. */
-    public record Facet(String name, List<Element> elements, Separation separation) {
+    /**
+     * One facet: its elements and their spread, from the model SEs and (non-candidate facets; null
+     * for candidates) from the joint SEs, which is the honest one in sparse designs.
+     */
+    public record Facet(String name, List<Element> elements, Separation separation, Separation separationJointSe) {
     }
 
     /** One category of a threshold set. Threshold fields are NaN for the lowest category. */

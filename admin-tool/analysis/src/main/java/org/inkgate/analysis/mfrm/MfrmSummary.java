@@ -45,6 +45,7 @@ final class MfrmSummary {
             Map<String, Object> fm = new LinkedHashMap<>();
             fm.put("name", f.name());
             fm.put("summary", separation(f.separation()));
+            fm.put("summaryJointSe", f.separationJointSe() == null ? null : separation(f.separationJointSe()));
             List<Object> els = new ArrayList<>();
             for (MfrmResult.Element e : f.elements()) {
                 Map<String, Object> em = new LinkedHashMap<>();

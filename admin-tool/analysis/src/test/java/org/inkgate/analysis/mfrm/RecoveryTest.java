@@ -116,6 +116,10 @@ class RecoveryTest {
         assertTrue(Math.abs(ratios[1] - 1) < 0.15, "replication SD / joint SE = " + ratios[1]);
         // the model SE treats the linked candidates and raters as known, so here it is far too small
         assertTrue(ratios[0] > 1.5, "replication SD / model SE = " + ratios[0]);
+        // and the rater separation from joint SEs is accordingly lower than from model SEs
+        MfrmResult r = ManyFacetRasch.analyse(chain(999).data, MfrmOptions.builder(List.of("task", "rater", "criterion")).build());
+        assertTrue(r.facet("rater").separationJointSe().separation() < r.facet("rater").separation().separation());
+        assertTrue(r.facet("candidate").separationJointSe() == null);
     }
 
     /** Rater estimates over replications: {SD / RMS model SE, SD / RMS joint SE}, pooled over raters. */
