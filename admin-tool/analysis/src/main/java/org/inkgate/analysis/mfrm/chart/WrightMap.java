@@ -10,8 +10,8 @@ import org.inkgate.analysis.mfrm.MfrmResult;
  * The Wright map: every facet side by side on the one logit scale (Wright & Stone 1979; Linacre
  * 1989). Candidates appear as a histogram (more able higher up); every other facet's elements as
  * labelled ticks (harder or more severe higher up); the last column(s) show the Rasch-Andrich
- * thresholds of each scale. A candidate level with an element has even odds of the next higher
- * category against the lower one at each threshold position.
+ * thresholds of each scale. A candidate level with an element (the other facets at 0) has step
+ * log-odds -F_k: even odds on the average step.
  */
 public final class WrightMap {
     private static final int HEIGHT = 640;
