@@ -471,9 +471,10 @@ public final class ManyFacetRasch {
         for (int k = 0; k <= m; k++) {
             double thr = k == 0 ? Double.NaN : anchored ? thresholds[s][k] : thresholds[s][k] * factor;
             double thrSe = k == 0 ? Double.NaN : est.thresholdSe()[s][k];
+            double thrJoint = k == 0 || est.thresholdJointSe() == null ? Double.NaN : est.thresholdJointSe()[s][k];
             cats.add(new MfrmResult.Category(d.rawScore(s, k), st.categoryCount[s][k],
                     100.0 * st.categoryCount[s][k] / total, st.averageMeasure[s][k], st.expectedAverageMeasure[s][k],
-                    st.categoryOutfit[s][k], thr, thrSe));
+                    st.categoryOutfit[s][k], thr, thrSe, thrJoint));
             if (k >= 2 && thresholds[s][k] < thresholds[s][k - 1]) {
                 notes.add("thresholds " + d.rawScore(s, k - 1) + "->" + d.rawScore(s, k) + " are disordered (F"
                         + k + " < F" + (k - 1) + "): category " + d.rawScore(s, k - 1) + " is never the most likely"

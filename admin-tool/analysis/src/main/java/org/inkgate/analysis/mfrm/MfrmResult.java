@@ -54,9 +54,13 @@ public record MfrmResult(Model model, Convergence convergence, List<Facet> facet
     public record Facet(String name, List<Element> elements, Separation separation, Separation separationJointSe) {
     }
 
-    /** One category of a threshold set. Threshold fields are NaN for the lowest category. */
+    /**
+     * One category of a threshold set. Threshold fields are NaN for the lowest category;
+     * {@code thresholdJointSe} is NaN when the facet-by-facet path was used or the set is anchored.
+     */
     public record Category(int score, int count, double percent, double averageMeasure,
-                           double expectedAverageMeasure, double outfit, double threshold, double thresholdSe) {
+                           double expectedAverageMeasure, double outfit, double threshold, double thresholdSe,
+                           double thresholdJointSe) {
     }
 
     /** A threshold set: the shared scale, or one partial-credit element's scale. */

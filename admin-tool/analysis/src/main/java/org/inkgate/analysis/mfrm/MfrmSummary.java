@@ -84,6 +84,7 @@ final class MfrmSummary {
                 cm.put("outfit", num(c.outfit()));
                 cm.put("threshold", num(c.threshold()));
                 cm.put("thresholdSe", num(c.thresholdSe()));
+                cm.put("thresholdJointSe", num(c.thresholdJointSe()));
                 cats.add(cm);
             }
             sm.put("categories", cats);

@@ -47,6 +47,25 @@ class EquivalenceTest {
     }
 
     @Test
+    void analyse_ratingScaleData_jointSesMatchVgamCovariance() throws Exception {
+        // reference-se.R: SEs of the centred task and rater measures and thresholds from vcov() of
+        // the same VGAM fit. The joint information with candidates absorbed is the same matrix
+        // (its pseudo-inverse gives the covariance of the centred measures), so the SEs agree.
+        MfrmResult r = ManyFacetRasch.analyse(ReferenceFits.data("ratingscale-2000"),
+                MfrmOptions.builder(List.of("task", "rater")).build());
+        Map<String, Map<String, Double>> ref = ReferenceFits.measures("ratingscale-2000-vgam-se.csv");
+        for (String facet : List.of("task", "rater")) {
+            for (MfrmResult.Element e : r.facet(facet).elements()) {
+                assertEquals(ref.get(facet).get(e.label()), e.jointSe(), 1e-6, facet + " " + e.label());
+            }
+        }
+        List<MfrmResult.Category> cats = r.scales().get(0).categories();
+        for (int k = 1; k < cats.size(); k++) {
+            assertEquals(ref.get("threshold").get("F" + k), cats.get(k).thresholdJointSe(), 1e-6, "F" + k);
+        }
+    }
+
+    @Test
     void analyse_partialCreditByTask_matchesVgamWithTaskSpecificThresholds() throws Exception {
         // reference-pcm.R: acat(parallel = TRUE ~ candidate + rater - 1), i.e. intercepts and task
         // terms differ by category step: one threshold set per task

@@ -259,8 +259,9 @@ public final class JmleEstimator {
                     + " by about that change or more - raise the cap or check the design before using them",
                     maxIterations, maxResidual, maxChange));
         }
-        double[][] jointSe = lastStep != null && joint != null ? joint.jointSe(lastStep) : null;
-        return new Estimates(measure, se, jointSe, thresholds, thrSe, it, maxResidual, maxChange, converged, warnings);
+        JointNewton.JointSe jointSe = lastStep != null && joint != null ? joint.jointSe(lastStep) : null;
+        return new Estimates(measure, se, jointSe == null ? null : jointSe.elements(), thresholds, thrSe,
+                jointSe == null ? null : jointSe.thresholds(), it, maxResidual, maxChange, converged, warnings);
     }
 
     /** Solves h x = g (h symmetric positive definite); falls back to the diagonal if singular. */

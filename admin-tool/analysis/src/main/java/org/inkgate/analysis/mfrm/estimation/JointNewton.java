@@ -194,18 +194,27 @@ final class JointNewton {
         return max;
     }
 
+    /** Joint SEs: [facet][element] (NaN for candidates and fixed elements), [scale][k] (NaN when fixed). */
+    record JointSe(double[][] elements, double[][] thresholds) {
+    }
+
     /**
-     * Joint SEs of the non-candidate elements from a step's reduced information matrix (thresholds
-     * estimated too): the Moore-Penrose inverse is the covariance under the estimator's centring.
+     * Joint SEs of the non-candidate elements and thresholds from a step's reduced information
+     * matrix: its Moore-Penrose inverse is the covariance under the estimator's centring.
      */
-    double[][] jointSe(Step step) {
+    JointSe jointSe(Step step) {
         double[][] out = new double[nF][];
         for (int f = 0; f < nF; f++) {
             out[f] = new double[d.elementCount(f)];
             Arrays.fill(out[f], Double.NaN);
         }
+        double[][] thr = new double[thresholdColumn.length][];
+        for (int s = 0; s < thr.length; s++) {
+            thr[s] = new double[thresholdColumn[s].length];
+            Arrays.fill(thr[s], Double.NaN);
+        }
         if (q == 0) {
-            return out;
+            return new JointSe(out, thr);
         }
         var cov = new SingularValueDecomposition(new Array2DRowRealMatrix(step.reducedInformation(), false))
                 .getSolver().getInverse();
@@ -216,7 +225,15 @@ final class JointNewton {
                 }
             }
         }
-        return out;
+        for (int s = 0; s < thr.length; s++) {
+            for (int k = 1; k < thr[s].length; k++) {
+                int c = thresholdColumn[s][k];
+                if (c >= 0) {
+                    thr[s][k] = Math.sqrt(cov.getEntry(c, c));
+                }
+            }
+        }
+        return new JointSe(out, thr);
     }
 
     /** Largest absolute value in a step. */
