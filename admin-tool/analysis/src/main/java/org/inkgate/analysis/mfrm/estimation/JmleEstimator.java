@@ -1,19 +1,30 @@
 package org.inkgate.analysis.mfrm.estimation;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.stream.IntStream;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.CholeskyDecomposition;
+import org.apache.commons.math3.linear.NonPositiveDefiniteMatrixException;
+import org.apache.commons.math3.linear.NonSymmetricMatrixException;
+import org.apache.commons.math3.linear.SingularMatrixException;
 import org.inkgate.analysis.mfrm.design.ModelDesign;
 
 /**
  * Joint maximum likelihood estimation (JMLE) of a many-facet Rasch model (Linacre 1989; Wright &
- * Masters 1982, ch. 5) by Newton-Raphson, one facet at a time: a pass over the ratings collects
- * the facet's expected scores and information, each free element moves by
- * (observed - expected) / information (steps capped at 1 logit), and the facet is centred at 0
- * unless anchored; then the thresholds move by the same rule on the counts "at or above
- * category k" and each unanchored threshold set is centred at sum 0.
+ * Masters 1982, ch. 5) by Newton-Raphson.
  *
- * <p>The pass is split into chunks run in parallel, each with its own accumulators, so no
+ * <p>Default: joint Newton steps on all measures and thresholds at once, candidates absorbed
+ * ({@link JointNewton}); then each unanchored non-candidate facet is centred at 0 and each
+ * unanchored threshold set at sum 0, moving the candidates the other way so no rating's
+ * probabilities change. Fallback (an anchored candidate, a very large system, or joint steps that
+ * do not settle): facet by facet, each free element moves by (observed - expected) / information
+ * (steps capped at 1 logit), the facet is centred, then each threshold set takes a full Newton
+ * step within itself.
+ *
+ * <p>Passes are split into chunks run in parallel, each with its own accumulators, so no
  * per-rating objects are made and the result does not depend on thread timing beyond the order
  * of floating-point sums.
  */
@@ -267,12 +278,9 @@ public final class JmleEstimator {
     /** Solves h x = g (h symmetric positive definite); falls back to the diagonal if singular. */
     private static double[] solve(double[][] h, double[] g) {
         try {
-            return new org.apache.commons.math3.linear.CholeskyDecomposition(
-                    new org.apache.commons.math3.linear.Array2DRowRealMatrix(h, true))
-                    .getSolver().solve(new org.apache.commons.math3.linear.ArrayRealVector(g)).toArray();
-        } catch (org.apache.commons.math3.linear.NonPositiveDefiniteMatrixException
-                 | org.apache.commons.math3.linear.NonSymmetricMatrixException
-                 | org.apache.commons.math3.linear.SingularMatrixException e) {
+            return new CholeskyDecomposition(new Array2DRowRealMatrix(h, true))
+                    .getSolver().solve(new ArrayRealVector(g)).toArray();
+        } catch (NonPositiveDefiniteMatrixException | NonSymmetricMatrixException | SingularMatrixException e) {
             double[] x = new double[g.length];
             for (int i = 0; i < g.length; i++) {
                 x[i] = h[i][i] > 0 ? g[i] / h[i][i] : 0;
@@ -538,11 +546,23 @@ public final class JmleEstimator {
         }
 
         void clear() {
-            for (double[] a : exp) java.util.Arrays.fill(a, 0);
-            for (double[] a : info) java.util.Arrays.fill(a, 0);
-            for (double[] a : thrExp) java.util.Arrays.fill(a, 0);
-            for (double[] a : thrInfo) java.util.Arrays.fill(a, 0);
-            for (double[][] a : thrCov) for (double[] b : a) java.util.Arrays.fill(b, 0);
+            for (double[] a : exp) {
+                Arrays.fill(a, 0);
+            }
+            for (double[] a : info) {
+                Arrays.fill(a, 0);
+            }
+            for (double[] a : thrExp) {
+                Arrays.fill(a, 0);
+            }
+            for (double[] a : thrInfo) {
+                Arrays.fill(a, 0);
+            }
+            for (double[][] a : thrCov) {
+                for (double[] b : a) {
+                    Arrays.fill(b, 0);
+                }
+            }
         }
 
         void add(Accumulators o) {
