@@ -25,6 +25,8 @@ import org.inkgate.analysis.mfrm.fit.Separation;
  * rating and bias statistics.
  */
 public final class ManyFacetRasch {
+    /** Joint SEs this much larger than model SEs (RMS ratio) earn a warning. */
+    private static final double SE_GAP = 1.2;
     /** Marks an element whose every rating involved an extreme element. */
     private static final int UNLINKED = 2;
     private static final String AFTER_EXTREMES = " after setting extreme scores aside";
@@ -451,8 +453,18 @@ public final class ManyFacetRasch {
                     + " suggests, have no fit statistics and are left out of the facet summary");
         }
         boolean jointKnown = f > 0 && used > 0;
+        double model2 = 0;
+        double joint2 = 0;
         for (int i = 0; i < used; i++) {
             jointKnown &= Double.isFinite(joint[i]);
+            model2 += ses[i] * ses[i];
+            joint2 += joint[i] * joint[i];
+        }
+        if (jointKnown && joint2 > model2 * SE_GAP * SE_GAP) {
+            warnings.add(String.format(Locale.ROOT, "%s: the joint SEs are on average %.0f%% larger than the model"
+                    + " SEs - the design links these elements only loosely (e.g. few shared candidates), so use"
+                    + " jointSe and summaryJointSe, not se and summary, to compare them", full.facetName(f),
+                    100 * (Math.sqrt(joint2 / model2) - 1)));
         }
         return new MfrmResult.Facet(full.facetName(f), List.copyOf(elements),
                 Separation.of(Arrays.copyOf(ms, used), Arrays.copyOf(ses, used)),

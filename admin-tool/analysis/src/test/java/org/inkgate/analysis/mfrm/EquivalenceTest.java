@@ -42,6 +42,7 @@ class EquivalenceTest {
                 worst = Math.max(worst, d);
             }
             assertEquals(4, ref.get("threshold").size());
+            assertEquals(List.of(), r.warnings(), "a fully crossed design gives no warnings");
             assertTrue(worst < LIMIT, name + ": largest difference " + worst);
         }
     }

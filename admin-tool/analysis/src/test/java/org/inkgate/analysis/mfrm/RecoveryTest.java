@@ -120,6 +120,8 @@ class RecoveryTest {
         MfrmResult r = ManyFacetRasch.analyse(chain(999).data, MfrmOptions.builder(List.of("task", "rater", "criterion")).build());
         assertTrue(r.facet("rater").separationJointSe().separation() < r.facet("rater").separation().separation());
         assertTrue(r.facet("candidate").separationJointSe() == null);
+        assertTrue(r.warnings().stream().anyMatch(w -> w.startsWith("rater: the joint SEs are on average")),
+                r.warnings().toString());
     }
 
     /** Rater estimates over replications: {SD / RMS model SE, SD / RMS joint SE}, pooled over raters. */
