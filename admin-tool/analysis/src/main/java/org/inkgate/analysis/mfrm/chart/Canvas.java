@@ -1,0 +1,28 @@
+package org.inkgate.analysis.mfrm.chart;
+
+import java.awt.Color;
+
+/**
+ * The few drawing operations the charts need, so one drawing routine writes both SVG text
+ * ({@link SvgCanvas}) and a raster image ({@link ImageCanvas}). Coordinates are pixels from
+ * the top left.
+ */
+interface Canvas {
+
+    /** Horizontal text alignment relative to the given x. */
+    enum Anchor { START, MIDDLE, END }
+
+    void line(double x1, double y1, double x2, double y2, Color colour, double width);
+
+    void rect(double x, double y, double w, double h, Color fill);
+
+    void circle(double cx, double cy, double r, Color fill);
+
+    void polyline(double[] xs, double[] ys, Color colour, double width);
+
+    /** Text with its baseline at y. */
+    void text(String s, double x, double y, double size, boolean bold, Color colour, Anchor anchor);
+
+    /** Text turned 90 degrees anticlockwise, centred on (x, y). */
+    void verticalText(String s, double x, double y, double size, Color colour);
+}

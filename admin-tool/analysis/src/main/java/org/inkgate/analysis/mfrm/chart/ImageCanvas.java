@@ -1,0 +1,96 @@
+package org.inkgate.analysis.mfrm.chart;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.geom.AffineTransform;
+import java.awt.geom.Ellipse2D;
+import java.awt.geom.Line2D;
+import java.awt.geom.Path2D;
+import java.awt.geom.Rectangle2D;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import javax.imageio.ImageIO;
+
+/** Draws into an in-memory image and encodes it as PNG (JDK only; works with java.awt.headless). */
+final class ImageCanvas implements Canvas {
+    private final BufferedImage image;
+    private final Graphics2D g;
+
+    ImageCanvas(int width, int height) {
+        image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
+        g = image.createGraphics();
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
+        rect(0, 0, width, height, Color.WHITE);
+    }
+
+    @Override
+    public void line(double x1, double y1, double x2, double y2, Color colour, double width) {
+        g.setColor(colour);
+        g.setStroke(new BasicStroke((float) width));
+        g.draw(new Line2D.Double(x1, y1, x2, y2));
+    }
+
+    @Override
+    public void rect(double x, double y, double w, double h, Color fill) {
+        g.setColor(fill);
+        g.fill(new Rectangle2D.Double(x, y, w, h));
+    }
+
+    @Override
+    public void circle(double cx, double cy, double r, Color fill) {
+        g.setColor(fill);
+        g.fill(new Ellipse2D.Double(cx - r, cy - r, 2 * r, 2 * r));
+    }
+
+    @Override
+    public void polyline(double[] xs, double[] ys, Color colour, double width) {
+        Path2D.Double p = new Path2D.Double();
+        p.moveTo(xs[0], ys[0]);
+        for (int i = 1; i < xs.length; i++) {
+            p.lineTo(xs[i], ys[i]);
+        }
+        g.setColor(colour);
+        g.setStroke(new BasicStroke((float) width));
+        g.draw(p);
+    }
+
+    @Override
+    public void text(String s, double x, double y, double size, boolean bold, Color colour, Anchor anchor) {
+        g.setFont(new Font(Font.SANS_SERIF, bold ? Font.BOLD : Font.PLAIN, (int) Math.round(size)));
+        g.setColor(colour);
+        double w = g.getFontMetrics().stringWidth(s);
+        double dx = switch (anchor) {
+            case START -> 0;
+            case MIDDLE -> -w / 2;
+            case END -> -w;
+        };
+        g.drawString(s, (float) (x + dx), (float) y);
+    }
+
+    @Override
+    public void verticalText(String s, double x, double y, double size, Color colour) {
+        AffineTransform old = g.getTransform();
+        g.rotate(-Math.PI / 2, x, y);
+        text(s, x, y, size, false, colour, Anchor.MIDDLE);
+        g.setTransform(old);
+    }
+
+    /** The image as PNG bytes. */
+    byte[] png() {
+        g.dispose();
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            ImageIO.write(image, "png", out);
+        } catch (IOException e) {
+            throw new UncheckedIOException("PNG encoding failed in memory", e);
+        }
+        return out.toByteArray();
+    }
+}
