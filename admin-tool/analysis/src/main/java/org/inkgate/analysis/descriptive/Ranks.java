@@ -1,7 +1,6 @@
 package org.inkgate.analysis.descriptive;
 
 import java.util.Arrays;
-import java.util.Comparator;
 
 /** Average ranks (mid-ranks for ties) and the tie correction sum of (t^3 - t). */
 public final class Ranks {
@@ -12,23 +11,24 @@ public final class Ranks {
     /** Ranks 1..n of the values, ties sharing the mean of their ranks. */
     public static double[] of(double[] values) {
         int n = values.length;
-        Integer[] order = new Integer[n];
-        for (int i = 0; i < n; i++) {
-            order[i] = i;
-        }
-        Arrays.sort(order, Comparator.comparingDouble(i -> values[i]));
-        double[] ranks = new double[n];
-        int i = 0;
+        double[] sorted = values.clone();
+        Arrays.sort(sorted);
+        // distinct values and the mean rank of each (positions i..j hold equal values)
+        double[] distinct = new double[n];
+        double[] meanRank = new double[n];
+        int d = 0, i = 0;
         while (i < n) {
             int j = i;
-            while (j + 1 < n && values[order[j + 1]] == values[order[i]]) {
+            while (j + 1 < n && sorted[j + 1] == sorted[i]) {
                 j++;
             }
-            double rank = (i + j) / 2.0 + 1;
-            for (int k = i; k <= j; k++) {
-                ranks[order[k]] = rank;
-            }
+            distinct[d] = sorted[i];
+            meanRank[d++] = (i + j) / 2.0 + 1;
             i = j + 1;
+        }
+        double[] ranks = new double[n];
+        for (int k = 0; k < n; k++) {
+            ranks[k] = meanRank[Arrays.binarySearch(distinct, 0, d, values[k])];
         }
         return ranks;
     }

@@ -7,7 +7,7 @@ import org.apache.commons.math3.analysis.integration.gauss.GaussIntegratorFactor
 /** 20-point Gauss-Legendre quadrature on one interval (nodes from Commons Math). */
 final class GaussLegendre {
 
-    private static final int POINTS = 20;
+    static final int POINTS = 20;
     private static final double[] NODES;
     private static final double[] WEIGHTS;
 
@@ -22,6 +22,14 @@ final class GaussLegendre {
     }
 
     private GaussLegendre() {
+    }
+
+    static double node(int i) {
+        return NODES[i];
+    }
+
+    static double weight(int i) {
+        return WEIGHTS[i];
     }
 
     static double integrate(DoubleUnaryOperator f, double a, double b) {

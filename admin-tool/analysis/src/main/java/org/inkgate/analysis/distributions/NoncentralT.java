@@ -1,7 +1,6 @@
 package org.inkgate.analysis.distributions;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
-import org.apache.commons.math3.special.Erf;
 
 /**
  * The noncentral t distribution and confidence limits for its noncentrality parameter.
@@ -14,8 +13,6 @@ import org.apache.commons.math3.special.Erf;
  */
 public final class NoncentralT {
 
-    private static final double SQRT2 = Math.sqrt(2);
-
     private NoncentralT() {
     }
 
@@ -24,7 +21,7 @@ public final class NoncentralT {
         if (!(df > 0)) {
             throw new IllegalArgumentException("noncentral t needs df > 0: " + df);
         }
-        double p = ScaledChiIntegral.expectation(df, s -> 0.5 * Erf.erfc(-(t * s - delta) / SQRT2));
+        double p = ScaledChiIntegral.expectation(df, s -> NormalTable.cdf(t * s - delta));
         return Math.min(1, Math.max(0, p));
     }
 

@@ -13,7 +13,7 @@ import org.apache.commons.math3.special.Gamma;
  */
 final class ScaledChiIntegral {
 
-    private static final int PANELS = 24;
+    private static final int PANELS = 10;
     private static final double LOG_SPAN = 40.0;
 
     private ScaledChiIntegral() {

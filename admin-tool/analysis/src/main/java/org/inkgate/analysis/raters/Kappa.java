@@ -2,7 +2,6 @@ package org.inkgate.analysis.raters;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.TreeSet;
 import org.apache.commons.math3.distribution.NormalDistribution;
 
 /**
@@ -26,15 +25,13 @@ public record Kappa(Weights weights, int n, int categories, double observed, dou
 
     /** Kappa over the categories observed in a and b. */
     public static Kappa of(double[] a, double[] b, Weights weights) {
-        TreeSet<Double> cats = new TreeSet<>();
-        for (int i = 0; i < a.length; i++) {
-            cats.add(a[i]);
-            cats.add(b[i]);
-        }
-        return of(a, b, cats.stream().mapToDouble(Double::doubleValue).toArray(), weights);
+        double[] all = new double[a.length + b.length];
+        System.arraycopy(a, 0, all, 0, a.length);
+        System.arraycopy(b, 0, all, a.length, b.length);
+        return of(a, b, java.util.Arrays.stream(all).sorted().distinct().toArray(), weights);
     }
 
-    /** Kappa over the given ordered categories (every value must be one of them). */
+    /** Kappa over the given categories, in increasing order (every value must be one of them). */
     public static Kappa of(double[] a, double[] b, double[] categories, Weights weights) {
         int q = categories.length;
         int n = a.length;
@@ -110,10 +107,9 @@ public record Kappa(Weights weights, int n, int categories, double observed, dou
     }
 
     private static int index(double[] categories, double v) {
-        for (int i = 0; i < categories.length; i++) {
-            if (categories[i] == v) {
-                return i;
-            }
+        int i = java.util.Arrays.binarySearch(categories, v);
+        if (i >= 0 && categories[i] == v) {
+            return i;
         }
         throw new IllegalArgumentException("value " + v + " is not one of the categories");
     }

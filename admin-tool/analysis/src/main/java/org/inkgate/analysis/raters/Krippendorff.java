@@ -2,7 +2,6 @@ package org.inkgate.analysis.raters;
 
 import java.util.ArrayList;
 import java.util.List;
-import java.util.TreeMap;
 
 /**
  * Krippendorff's alpha from the coincidence matrix (Krippendorff 2011, "Computing
@@ -28,22 +27,10 @@ public final class Krippendorff {
 
     /** units[u] holds the values given to unit u (missing values simply absent). */
     public static Result alpha(List<double[]> units, Metric metric) {
-        TreeMap<Double, Integer> index = new TreeMap<>();
-        for (double[] u : units) {
-            if (u.length >= 2) {
-                for (double v : u) {
-                    index.putIfAbsent(v, 0);
-                }
-            }
-        }
+        double[] values = units.stream().filter(u -> u.length >= 2).flatMapToDouble(java.util.Arrays::stream)
+                .sorted().distinct().toArray();
         List<String> cautions = new ArrayList<>();
-        int q = index.size();
-        double[] values = new double[q];
-        int c = 0;
-        for (Double v : index.keySet()) {
-            values[c] = v;
-            index.put(v, c++);
-        }
+        int q = values.length;
         double[][] o = new double[q][q];
         int pairable = 0;
         for (double[] u : units) {
@@ -55,7 +42,7 @@ public final class Krippendorff {
             for (int i = 0; i < m; i++) {
                 for (int j = 0; j < m; j++) {
                     if (i != j) {
-                        o[index.get(u[i])][index.get(u[j])] += 1.0 / (m - 1);
+                        o[java.util.Arrays.binarySearch(values, u[i])][java.util.Arrays.binarySearch(values, u[j])] += 1.0 / (m - 1);
                     }
                 }
             }

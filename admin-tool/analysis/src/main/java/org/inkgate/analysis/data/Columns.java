@@ -1,0 +1,64 @@
+package org.inkgate.analysis.data;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Shared checks of the readers: required columns, cells, numbers; strings shared to save memory. */
+final class Columns {
+
+    static final int MAX_PROBLEMS = 200;
+    private final Map<String, String> pool = new HashMap<>();
+
+    /** Positions of required columns; missing ones added to problems. */
+    static int[] require(CsvTable t, List<InputProblem> problems, String... names) {
+        int[] pos = new int[names.length];
+        for (int i = 0; i < names.length; i++) {
+            pos[i] = t.column(names[i]);
+            if (pos[i] < 0) {
+                problems.add(new InputProblem(t.file(), 1, names[i], "required column '" + names[i]
+                        + "' is missing from the header (found: " + String.join(",", t.header()) + ")"));
+            }
+        }
+        return pos;
+    }
+
+    String text(CsvTable t, CsvTable.Row row, int pos, String name, boolean required, List<InputProblem> problems) {
+        String v = pos < 0 || pos >= row.cells().length ? "" : row.cells()[pos].trim();
+        if (required && v.isEmpty()) {
+            problems.add(new InputProblem(t.file(), row.number(), name, "empty; every row needs a " + name));
+        }
+        return pool.computeIfAbsent(v, k -> k);
+    }
+
+    static double number(CsvTable t, CsvTable.Row row, int pos, String name, List<InputProblem> problems) {
+        String v = pos < 0 || pos >= row.cells().length ? "" : row.cells()[pos].trim();
+        try {
+            double d = Double.parseDouble(v);
+            if (!Double.isFinite(d)) {
+                throw new NumberFormatException();
+            }
+            return d;
+        } catch (NumberFormatException e) {
+            problems.add(new InputProblem(t.file(), row.number(), name, "'" + v
+                    + "' is not a number; write a plain number with a dot for decimals (e.g. 3 or 2.5)"));
+            return Double.NaN;
+        }
+    }
+
+    static boolean widthOk(CsvTable t, CsvTable.Row row, List<InputProblem> problems) {
+        if (row.cells().length != t.header().size()) {
+            problems.add(new InputProblem(t.file(), row.number(), null, "has " + row.cells().length
+                    + " cells but the header has " + t.header().size() + "; check commas and quotes"));
+            return false;
+        }
+        return true;
+    }
+
+    static void stopIfFull(List<InputProblem> problems) throws InputRejected {
+        if (problems.size() >= MAX_PROBLEMS) {
+            throw new InputRejected(new ArrayList<>(problems));
+        }
+    }
+}
