@@ -10,6 +10,8 @@ final class Columns {
 
     static final int MAX_PROBLEMS = 200;
     private final Map<String, String> pool = new HashMap<>();
+    // neighbouring rows mostly repeat a column's value (same candidate, task, condition): reuse it
+    private final Map<String, String> last = new HashMap<>();
 
     /** Positions of required columns; missing ones added to problems. */
     static int[] require(CsvTable t, List<InputProblem> problems, String... names) {
@@ -29,7 +31,13 @@ final class Columns {
         if (required && v.isEmpty()) {
             problems.add(new InputProblem(t.file(), row.number(), name, "empty; every row needs a " + name));
         }
-        return pool.computeIfAbsent(v, k -> k);
+        String previous = last.get(name);
+        if (v.equals(previous)) {
+            return previous;
+        }
+        String pooled = pool.computeIfAbsent(v, k -> k);
+        last.put(name, pooled);
+        return pooled;
     }
 
     static double number(CsvTable t, CsvTable.Row row, int pos, String name, List<InputProblem> problems) {

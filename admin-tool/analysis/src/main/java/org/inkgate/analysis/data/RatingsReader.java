@@ -29,10 +29,11 @@ public final class RatingsReader {
         }
         Columns cols = new Columns();
         List<Rating> out = new ArrayList<>();
-        // the same rater scoring the same criterion of the same response twice is ambiguous
-        Map<String, Long> seen = new HashMap<>();
+        // per response its ratings and their rows: the same rater scoring the same criterion of the
+        // same response twice is ambiguous, and a response is sat under one condition
+        Map<ResponseKey, List<Rating>> byResponse = new HashMap<>();
+        Map<ResponseKey, List<Long>> rowsOf = new HashMap<>();
         Map<String, String> levelOf = new HashMap<>();
-        Map<String, String> conditionOf = new HashMap<>();
         CsvTable.Row row;
         while ((row = t.next()) != null) {
             if (!Columns.widthOk(t, row, problems)) {
@@ -49,25 +50,33 @@ public final class RatingsReader {
             String criterion = cols.text(t, row, pos[6], "criterion", true, problems);
             double score = Columns.number(t, row, pos[7], "score", problems);
             if (problems.size() == before) {
-                String key = candidate + '\u0000' + task + '\u0000' + rater + '\u0000' + criterion;
-                Long earlier = seen.putIfAbsent(key, row.number());
-                if (earlier != null) {
-                    problems.add(new InputProblem(file, row.number(), "rater", "rater " + rater + " already scored "
-                            + criterion + " of candidate " + candidate + ", task " + task + " in row " + earlier
-                            + "; keep one rating per rater, criterion and response"));
+                ResponseKey key = new ResponseKey(candidate, task);
+                List<Rating> earlierRatings = byResponse.computeIfAbsent(key, k -> new ArrayList<>(8));
+                List<Long> earlierRows = rowsOf.computeIfAbsent(key, k -> new ArrayList<>(8));
+                for (int i = 0; i < earlierRatings.size(); i++) {
+                    Rating e = earlierRatings.get(i);
+                    if (e.rater().equals(rater) && e.criterion().equals(criterion)) {
+                        problems.add(new InputProblem(file, row.number(), "rater", "rater " + rater + " already scored "
+                                + criterion + " of candidate " + candidate + ", task " + task + " in row "
+                                + earlierRows.get(i) + "; keep one rating per rater, criterion and response"));
+                        break;
+                    }
+                }
+                if (!earlierRatings.isEmpty() && !earlierRatings.get(0).condition().equals(condition)) {
+                    problems.add(new InputProblem(file, row.number(), "condition", "candidate " + candidate + ", task "
+                            + task + " is under condition '" + condition + "' here but '"
+                            + earlierRatings.get(0).condition() + "' in row " + earlierRows.get(0)
+                            + "; a response is sat under one condition"));
                 }
                 String lv = levelOf.putIfAbsent(candidate, level);
                 if (lv != null && !lv.equals(level)) {
                     problems.add(new InputProblem(file, row.number(), "level", "candidate " + candidate + " has level '"
                             + level + "' here but '" + lv + "' in an earlier row; give each candidate one level"));
                 }
-                String cond = conditionOf.putIfAbsent(candidate + '\u0000' + task, condition);
-                if (cond != null && !cond.equals(condition)) {
-                    problems.add(new InputProblem(file, row.number(), "condition", "candidate " + candidate + ", task "
-                            + task + " is under condition '" + condition + "' here but '" + cond
-                            + "' in an earlier row; a response is sat under one condition"));
-                }
-                out.add(new Rating(candidate, level, form, task, condition, rater, criterion, score));
+                Rating rating = new Rating(candidate, level, form, task, condition, rater, criterion, score);
+                earlierRatings.add(rating);
+                earlierRows.add(row.number());
+                out.add(rating);
             }
             Columns.stopIfFull(problems);
         }

@@ -28,7 +28,7 @@ public record Kappa(Weights weights, int n, int categories, double observed, dou
         double[] all = new double[a.length + b.length];
         System.arraycopy(a, 0, all, 0, a.length);
         System.arraycopy(b, 0, all, a.length, b.length);
-        return of(a, b, java.util.Arrays.stream(all).sorted().distinct().toArray(), weights);
+        return of(a, b, distinctSorted(all), weights);
     }
 
     /** Kappa over the given categories, in increasing order (every value must be one of them). */
@@ -104,6 +104,19 @@ public record Kappa(Weights weights, int n, int categories, double observed, dou
         }
         return new Kappa(weights, n, q, po, pe, kappa, se, kappa - crit * se, kappa + crit * se, se0, z, pValue,
                 cautions);
+    }
+
+    /** The distinct values, increasing (no boxing: DoubleStream.distinct boxes every value). */
+    public static double[] distinctSorted(double[] values) {
+        double[] v = values.clone();
+        java.util.Arrays.sort(v);
+        int d = 0;
+        for (int i = 0; i < v.length; i++) {
+            if (i == 0 || v[i] != v[d - 1]) {
+                v[d++] = v[i];
+            }
+        }
+        return java.util.Arrays.copyOf(v, d);
     }
 
     private static int index(double[] categories, double v) {

@@ -27,8 +27,19 @@ public final class Krippendorff {
 
     /** units[u] holds the values given to unit u (missing values simply absent). */
     public static Result alpha(List<double[]> units, Metric metric) {
-        double[] values = units.stream().filter(u -> u.length >= 2).flatMapToDouble(java.util.Arrays::stream)
-                .sorted().distinct().toArray();
+        int total = 0;
+        for (double[] u : units) {
+            total += u.length >= 2 ? u.length : 0;
+        }
+        double[] all = new double[total];
+        int at = 0;
+        for (double[] u : units) {
+            if (u.length >= 2) {
+                System.arraycopy(u, 0, all, at, u.length);
+                at += u.length;
+            }
+        }
+        double[] values = Kappa.distinctSorted(all);
         List<String> cautions = new ArrayList<>();
         int q = values.length;
         double[][] o = new double[q][q];

@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 import org.inkgate.analysis.data.Rating;
+import org.inkgate.analysis.data.ResponseKey;
 
 /**
  * Response and candidate scores from ratings (rule stated by {@link ScoreRule#describe()}).
@@ -40,13 +41,13 @@ public final class ScoreTable {
      * level, e.g. the candidate table) where a rating's level is empty.
      */
     public static ScoreTable of(List<Rating> ratings, ScoreRule rule, Map<String, String> levels) {
-        Map<String, Map<String, double[]>> byResponse = new LinkedHashMap<>(); // key -> criterion -> {sum, n}
-        Map<String, Rating> first = new HashMap<>();
-        Map<String, Set<String>> raters = new HashMap<>();
+        Map<ResponseKey, Map<String, double[]>> byResponse = new LinkedHashMap<>(); // criterion -> {sum, n}
+        Map<ResponseKey, Rating> first = new HashMap<>();
+        Map<ResponseKey, Set<String>> raters = new HashMap<>();
         Set<String> criteria = new TreeSet<>();
         Set<String> conditions = new TreeSet<>();
         for (Rating r : ratings) {
-            String key = r.candidate() + '\u0000' + r.task();
+            ResponseKey key = ResponseKey.of(r);
             first.putIfAbsent(key, r);
             double[] acc = byResponse.computeIfAbsent(key, k -> new HashMap<>())
                     .computeIfAbsent(r.criterion(), k -> new double[2]);

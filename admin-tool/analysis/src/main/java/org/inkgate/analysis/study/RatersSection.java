@@ -2,11 +2,11 @@ package org.inkgate.analysis.study;
 
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.inkgate.analysis.data.Rating;
+import org.inkgate.analysis.data.ResponseKey;
 import org.inkgate.analysis.raters.Agreement;
 import org.inkgate.analysis.raters.Correlation;
 import org.inkgate.analysis.raters.Icc;
@@ -28,44 +28,83 @@ final class RatersSection {
     private RatersSection() {
     }
 
-    private record Unit(String response, String criterion, List<Rating> ratings) {
-    }
-
     static Section build(List<Rating> ratings, StudyOptions options) {
         Section.Builder s = Section.builder("raters", "Raters");
-        Map<String, Unit> units = new LinkedHashMap<>();
-        for (Rating r : ratings) {
-            String resp = r.candidate() + '\u0000' + r.task();
-            units.computeIfAbsent(resp + '\u0000' + r.criterion(), k -> new Unit(resp, r.criterion(), new ArrayList<>(2)))
-                    .ratings().add(r);
+        // index responses, criteria and raters once; a unit (response x criterion) is then an array slot
+        Map<ResponseKey, Integer> responseId = new HashMap<>();
+        Map<String, Integer> criterionId = new HashMap<>();
+        Map<String, Integer> raterId = new HashMap<>();
+        List<String> criterionNames = new ArrayList<>(), raterNames = new ArrayList<>();
+        int n = ratings.size();
+        int[] unitOf = new int[n], raterOf = new int[n];
+        int[] respOf = new int[n], critOf = new int[n];
+        for (int i = 0; i < n; i++) {
+            Rating r = ratings.get(i);
+            respOf[i] = responseId.computeIfAbsent(ResponseKey.of(r), k -> responseId.size());
+            critOf[i] = criterionId.computeIfAbsent(r.criterion(), k -> {
+                criterionNames.add(k);
+                return criterionNames.size() - 1;
+            });
+            raterOf[i] = raterId.computeIfAbsent(r.rater(), k -> {
+                raterNames.add(k);
+                return raterNames.size() - 1;
+            });
+        }
+        int nc = criterionNames.size(), nr = raterNames.size(), nResp = responseId.size();
+        int nUnits = nResp * nc;
+        int[] count = new int[nUnits];
+        for (int i = 0; i < n; i++) {
+            unitOf[i] = respOf[i] * nc + critOf[i];
+            count[unitOf[i]]++;
+        }
+        int[] start = new int[nUnits + 1];
+        for (int u = 0; u < nUnits; u++) {
+            start[u + 1] = start[u] + count[u];
+        }
+        int[] fill = start.clone();
+        double[] value = new double[n];
+        int[] valueRater = new int[n];
+        for (int i = 0; i < n; i++) {
+            int at = fill[unitOf[i]]++; // input order kept within a unit: first and second rating
+            value[at] = ratings.get(i).score();
+            valueRater[at] = raterOf[i];
         }
         Map<String, List<double[]>> pairsByCriterion = new TreeMap<>();
         Map<String, List<double[]>> valuesByCriterion = new TreeMap<>();
-        Map<String, double[]> responseMeans = new LinkedHashMap<>(); // response -> {sum1, sum2, n}
-        Map<String, long[]> perRater = new TreeMap<>(); // rater -> {ratings, paired, discrepant}
-        Map<String, Double> raterSum = new HashMap<>();
-        for (Unit u : units.values()) {
-            double[] vals = u.ratings().stream().mapToDouble(Rating::score).toArray();
-            valuesByCriterion.computeIfAbsent(u.criterion(), k -> new ArrayList<>()).add(vals);
-            for (Rating r : u.ratings()) {
-                perRater.computeIfAbsent(r.rater(), k -> new long[3])[0]++;
-                raterSum.merge(r.rater(), r.score(), Double::sum);
+        double[][] responseMeans = new double[nResp][3]; // {sum first, sum second, criteria paired}
+        long[][] perRaterCounts = new long[nr][3]; // {ratings, paired, discrepant}
+        double[] raterTotal = new double[nr];
+        for (int u = 0; u < nUnits; u++) {
+            int m = count[u];
+            if (m == 0) {
+                continue;
             }
-            if (u.ratings().size() >= 2) {
-                Rating r1 = u.ratings().get(0), r2 = u.ratings().get(1);
-                pairsByCriterion.computeIfAbsent(u.criterion(), k -> new ArrayList<>())
-                        .add(new double[] {r1.score(), r2.score()});
-                boolean discrepant = Math.abs(r1.score() - r2.score()) > 1;
-                for (Rating r : List.of(r1, r2)) {
-                    long[] c = perRater.get(r.rater());
-                    c[1]++;
-                    c[2] += discrepant ? 1 : 0;
+            String criterion = criterionNames.get(u % nc);
+            double[] vals = java.util.Arrays.copyOfRange(value, start[u], start[u] + m);
+            valuesByCriterion.computeIfAbsent(criterion, k -> new ArrayList<>()).add(vals);
+            for (int j = start[u]; j < start[u] + m; j++) {
+                perRaterCounts[valueRater[j]][0]++;
+                raterTotal[valueRater[j]] += value[j];
+            }
+            if (m >= 2) {
+                double a = value[start[u]], b = value[start[u] + 1];
+                pairsByCriterion.computeIfAbsent(criterion, k -> new ArrayList<>()).add(new double[] {a, b});
+                long discrepant = Math.abs(a - b) > 1 ? 1 : 0;
+                for (int j = start[u]; j < start[u] + 2; j++) {
+                    perRaterCounts[valueRater[j]][1]++;
+                    perRaterCounts[valueRater[j]][2] += discrepant;
                 }
-                double[] m = responseMeans.computeIfAbsent(u.response(), k -> new double[3]);
-                m[0] += r1.score();
-                m[1] += r2.score();
-                m[2]++;
+                double[] rm = responseMeans[u / nc];
+                rm[0] += a;
+                rm[1] += b;
+                rm[2]++;
             }
+        }
+        Map<String, long[]> perRater = new HashMap<>();
+        Map<String, Double> raterSum = new HashMap<>();
+        for (int r = 0; r < nr; r++) {
+            perRater.put(raterNames.get(r), perRaterCounts[r]);
+            raterSum.put(raterNames.get(r), raterTotal[r]);
         }
         long pairs = pairsByCriterion.values().stream().mapToLong(List::size).sum();
         s.put("pairs", pairs);
@@ -150,27 +189,31 @@ final class RatersSection {
                 .method("per rater: number of ratings, mean score, share of their paired ratings that differ from the"
                         + " other rating by more than 1 point (discrepant; common practice)", "")
                 .columns("rater", "ratings", "mean score", "paired ratings", "discrepant", "share discrepant");
-        perRater.forEach((r, c) -> {
+        new TreeMap<>(perRater).forEach((r, c) -> {
             raters.row(r, c[0], raterSum.get(r) / c[0], c[1], c[2], c[1] == 0 ? Double.NaN : (double) c[2] / c[1]);
             s.put("rater." + Keys.slug(r) + ".mean", raterSum.get(r) / c[0])
                     .put("rater." + Keys.slug(r) + ".share_discrepant", c[1] == 0 ? null : (double) c[2] / c[1]);
         });
         s.table(raters.build());
         // scatter: response means of first vs second rating, every k-th response to cap the points
-        int n = responseMeans.size();
-        int step = Math.max(1, (n + SCATTER_POINTS - 1) / SCATTER_POINTS);
-        List<double[]> pts = new ArrayList<>();
-        int i = 0;
-        for (double[] m : responseMeans.values()) {
-            if (i++ % step == 0) {
-                pts.add(new double[] {m[0] / m[2], m[1] / m[2]});
+        List<double[]> paired = new ArrayList<>();
+        for (double[] m : responseMeans) {
+            if (m[2] > 0) {
+                paired.add(m);
             }
+        }
+        int np = paired.size();
+        int step = Math.max(1, (np + SCATTER_POINTS - 1) / SCATTER_POINTS);
+        List<double[]> pts = new ArrayList<>();
+        for (int i = 0; i < np; i += step) {
+            double[] m = paired.get(i);
+            pts.add(new double[] {m[0] / m[2], m[1] / m[2]});
         }
         double[] px = pts.stream().mapToDouble(a -> a[0]).toArray();
         double[] py = pts.stream().mapToDouble(a -> a[1]).toArray();
         s.chart(new Chart("chart_rater_scatter", "First against second rating",
                 "Each point is one response: the mean over criteria of its first rating against that of its second."
-                        + (step > 1 ? " Every " + step + "th response is drawn (" + pts.size() + " of " + n + ")." : ""),
+                        + (step > 1 ? " Every " + step + "th response is drawn (" + pts.size() + " of " + np + ")." : ""),
                 Charts.scatter("first rating (mean over criteria)", "second rating (mean over criteria)", px, py), 560,
                 480));
         return s.build();
