@@ -2,7 +2,6 @@ package org.inkgate.analysis.groups;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.distribution.FDistribution;
 
 /**
  * One-way analysis of variance with eta squared and omega squared (eta^2 = SS_b / SS_T;
@@ -57,7 +56,7 @@ public record OneWayAnova(int groups, int n, double ssBetween, double ssWithin, 
         }
         double msw = ssw / dfw;
         double f = (ssb / dfb) / msw;
-        double p = 1 - new FDistribution(null, dfb, dfw).cumulativeProbability(f);
+        double p = org.inkgate.analysis.distributions.Tails.fUpper(f, dfb, dfw);
         double sst = ssb + ssw;
         return new OneWayAnova(k, n, ssb, ssw, dfb, dfw, f, p, ssb / sst, (ssb - dfb * msw) / (sst + msw), cautions);
     }

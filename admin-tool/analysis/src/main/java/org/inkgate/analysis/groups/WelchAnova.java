@@ -2,7 +2,6 @@ package org.inkgate.analysis.groups;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.distribution.FDistribution;
 
 /**
  * Welch's (1951) heteroscedastic one-way ANOVA: weights w_i = n_i / s_i^2, F = A / B with
@@ -55,7 +54,7 @@ public record WelchAnova(double f, double df1, double df2, double p, List<String
         double b = 1 + 2.0 * (k - 2) * lambda / (k * k - 1.0);
         double f = a / b;
         double df2 = (k * k - 1.0) / (3 * lambda);
-        double p = 1 - new FDistribution(null, k - 1, df2).cumulativeProbability(f);
+        double p = org.inkgate.analysis.distributions.Tails.fUpper(f, k - 1, df2);
         return new WelchAnova(f, k - 1, df2, p, cautions);
     }
 }

@@ -66,13 +66,13 @@ public record Icc(int targets, int judges, double bms, double wms, double jms, d
         // ICC(1): one-way random
         double f1 = bms / wms, df11 = n - 1, df12 = n * (k - 1.0);
         double fl1 = f1 / fq(1 - a, df11, df12), fu1 = f1 * fq(1 - a, df12, df11);
-        double p1 = 1 - new FDistribution(null, df11, df12).cumulativeProbability(f1);
+        double p1 = org.inkgate.analysis.distributions.Tails.fUpper(f1, df11, df12);
         forms.add(new Form("ICC1", "single rater, one-way random (Shrout-Fleiss ICC(1,1))",
                 (bms - wms) / (bms + (k - 1) * wms), (fl1 - 1) / (fl1 + k - 1), (fu1 - 1) / (fu1 + k - 1),
                 f1, df11, df12, p1));
         // ICC(2): two-way random, absolute agreement
         double f3 = bms / ems, df31 = n - 1, df32 = (n - 1.0) * (k - 1);
-        double p3 = 1 - new FDistribution(null, df31, df32).cumulativeProbability(f3);
+        double p3 = org.inkgate.analysis.distributions.Tails.fUpper(f3, df31, df32);
         double icc2 = (bms - ems) / (bms + (k - 1) * ems + k * (jms - ems) / n);
         double aa = k * icc2 / (n * (1 - icc2));
         double bb = 1 + k * icc2 * (n - 1) / (n * (1 - icc2));

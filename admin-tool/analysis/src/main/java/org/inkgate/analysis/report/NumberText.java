@@ -21,6 +21,9 @@ final class NumberText {
                 return d > 0 ? "∞" : "−∞";
             }
             double a = Math.abs(d);
+            if (d == Math.rint(d) && a < 1e9) {
+                return Long.toString((long) (double) d);
+            }
             if (a != 0 && a < 0.001) {
                 return String.format(Locale.ROOT, "%.2e", d);
             }

@@ -106,6 +106,7 @@ final class LevelsSection {
         }
         s.table(anova.build());
         post.note("Games-Howell is left out for levels with fewer than 2 candidates.");
+        post.note("Studentized-range p-values are computed to about 1e-9; smaller ones are shown as 0.");
         s.table(post.build());
         if (conditions.size() == 2) {
             Table.Builder inter = Table.builder("levels_interaction", "Condition x level interaction")

@@ -2,7 +2,6 @@ package org.inkgate.analysis.usage;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.math3.distribution.ChiSquaredDistribution;
 import org.apache.commons.math3.special.Gamma;
 
 /**
@@ -49,7 +48,7 @@ public record Contingency(long[][] counts, double chiSquare, int df, double chiS
             }
         }
         int df = (r - 1) * (c - 1);
-        double p = 1 - new ChiSquaredDistribution(null, df).cumulativeProbability(chi);
+        double p = org.inkgate.analysis.distributions.Tails.chiSquareUpper(chi, df);
         double v = Math.sqrt(chi / (n * (Math.min(r, c) - 1.0)));
         double fisher = Double.NaN;
         String method = "Pearson chi-square";
