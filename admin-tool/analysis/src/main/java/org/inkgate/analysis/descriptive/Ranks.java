@@ -11,24 +11,24 @@ public final class Ranks {
     /** Ranks 1..n of the values, ties sharing the mean of their ranks. */
     public static double[] of(double[] values) {
         int n = values.length;
-        double[] sorted = values.clone();
-        Arrays.sort(sorted);
-        // distinct values and the mean rank of each (positions i..j hold equal values)
-        double[] distinct = new double[n];
-        double[] meanRank = new double[n];
-        int d = 0, i = 0;
-        while (i < n) {
-            int j = i;
-            while (j + 1 < n && sorted[j + 1] == sorted[i]) {
-                j++;
-            }
-            distinct[d] = sorted[i];
-            meanRank[d++] = (i + j) / 2.0 + 1;
-            i = j + 1;
+        double[] distinct = DistinctValues.of(values);
+        int q = distinct.length;
+        long[] count = new long[q];
+        int[] index = new int[n];
+        for (int k = 0; k < n; k++) {
+            index[k] = DistinctValues.indexOf(distinct, values[k]);
+            count[index[k]]++;
+        }
+        // values equal to distinct[d] occupy positions below..below+count-1 (0-based) in sorted order
+        double[] meanRank = new double[q];
+        long below = 0;
+        for (int d = 0; d < q; d++) {
+            meanRank[d] = below + (count[d] + 1) / 2.0;
+            below += count[d];
         }
         double[] ranks = new double[n];
         for (int k = 0; k < n; k++) {
-            ranks[k] = meanRank[Arrays.binarySearch(distinct, 0, d, values[k])];
+            ranks[k] = meanRank[index[k]];
         }
         return ranks;
     }

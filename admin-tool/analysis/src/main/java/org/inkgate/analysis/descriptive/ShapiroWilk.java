@@ -63,8 +63,18 @@ public final class ShapiroWilk {
         return new Result(n, w, pValue(w, n), cautions);
     }
 
-    /** Royston's approximate coefficients a_1..a_n (antisymmetric, a_n &gt; 0). */
+    // the coefficients depend on n only; an analysis tests many samples of the same size
+    private static final java.util.Map<Integer, double[]> COEFFICIENTS = new java.util.concurrent.ConcurrentHashMap<>();
+
+    /** Royston's approximate coefficients a_1..a_n (antisymmetric, a_n &gt; 0); callers must not modify. */
     static double[] coefficients(int n) {
+        if (COEFFICIENTS.size() > 64) {
+            COEFFICIENTS.clear();
+        }
+        return COEFFICIENTS.computeIfAbsent(n, ShapiroWilk::computeCoefficients);
+    }
+
+    private static double[] computeCoefficients(int n) {
         double[] a = new double[n];
         if (n == 3) {
             a[0] = -Math.sqrt(0.5);

@@ -106,17 +106,9 @@ public record Kappa(Weights weights, int n, int categories, double observed, dou
                 cautions);
     }
 
-    /** The distinct values, increasing (no boxing: DoubleStream.distinct boxes every value). */
+    /** The distinct values, increasing. */
     public static double[] distinctSorted(double[] values) {
-        double[] v = values.clone();
-        java.util.Arrays.sort(v);
-        int d = 0;
-        for (int i = 0; i < v.length; i++) {
-            if (i == 0 || v[i] != v[d - 1]) {
-                v[d++] = v[i];
-            }
-        }
-        return java.util.Arrays.copyOf(v, d);
+        return org.inkgate.analysis.descriptive.DistinctValues.of(values);
     }
 
     private static int index(double[] categories, double v) {

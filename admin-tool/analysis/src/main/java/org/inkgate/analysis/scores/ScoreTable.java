@@ -44,19 +44,29 @@ public final class ScoreTable {
         Map<ResponseKey, Map<String, double[]>> byResponse = new LinkedHashMap<>(); // criterion -> {sum, n}
         Map<ResponseKey, Rating> first = new HashMap<>();
         Map<ResponseKey, Set<String>> raters = new HashMap<>();
-        Set<String> criteria = new TreeSet<>();
-        Set<String> conditions = new TreeSet<>();
+        Set<String> criteriaSeen = new java.util.HashSet<>();
+        Set<String> conditionsSeen = new java.util.HashSet<>();
+        // ratings of one response are usually neighbours: reuse the previous row's groups then
+        Rating previous = null;
+        Map<String, double[]> groupOfRow = null;
+        Set<String> responseRaters = null;
         for (Rating r : ratings) {
-            ResponseKey key = ResponseKey.of(r);
-            first.putIfAbsent(key, r);
-            double[] acc = byResponse.computeIfAbsent(key, k -> new HashMap<>())
-                    .computeIfAbsent(r.criterion(), k -> new double[2]);
+            if (previous == null || !previous.candidate().equals(r.candidate()) || !previous.task().equals(r.task())) {
+                ResponseKey key = ResponseKey.of(r);
+                first.putIfAbsent(key, r);
+                groupOfRow = byResponse.computeIfAbsent(key, k -> new HashMap<>());
+                responseRaters = raters.computeIfAbsent(key, k -> new java.util.HashSet<>(4));
+            }
+            previous = r;
+            double[] acc = groupOfRow.computeIfAbsent(r.criterion(), k -> new double[2]);
             acc[0] += r.score();
             acc[1]++;
-            raters.computeIfAbsent(key, k -> new java.util.HashSet<>(4)).add(r.rater());
-            criteria.add(r.criterion());
-            conditions.add(r.condition());
+            responseRaters.add(r.rater());
+            criteriaSeen.add(r.criterion());
+            conditionsSeen.add(r.condition());
         }
+        Set<String> criteria = new TreeSet<>(criteriaSeen);
+        Set<String> conditions = new TreeSet<>(conditionsSeen);
         List<ResponseScore> out = new ArrayList<>(byResponse.size());
         Map<String, String> levelOf = new HashMap<>();
         Set<String> levelSet = new TreeSet<>();

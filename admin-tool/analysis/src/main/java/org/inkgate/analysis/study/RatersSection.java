@@ -38,9 +38,16 @@ final class RatersSection {
         int n = ratings.size();
         int[] unitOf = new int[n], raterOf = new int[n];
         int[] respOf = new int[n], critOf = new int[n];
+        Rating previous = null;
         for (int i = 0; i < n; i++) {
             Rating r = ratings.get(i);
-            respOf[i] = responseId.computeIfAbsent(ResponseKey.of(r), k -> responseId.size());
+            // ratings of one response are usually neighbours: reuse the previous row's id then
+            if (previous != null && previous.candidate().equals(r.candidate()) && previous.task().equals(r.task())) {
+                respOf[i] = respOf[i - 1];
+            } else {
+                respOf[i] = responseId.computeIfAbsent(ResponseKey.of(r), k -> responseId.size());
+            }
+            previous = r;
             critOf[i] = criterionId.computeIfAbsent(r.criterion(), k -> {
                 criterionNames.add(k);
                 return criterionNames.size() - 1;
