@@ -28,6 +28,10 @@ public record Table(String id, String title, String method, String source, List<
         }
     }
 
+    /** Added to every table with a value that cannot be computed (shown as a dash, empty in CSV, null in JSON). */
+    public static final String UNDEFINED_NOTE = "A dash marks a value that cannot be computed for these data (too few"
+            + " values, no variance, nothing to count); the notes above give the reason where a method reports one.";
+
     /** A builder, since tables grow row by row. */
     public static Builder builder(String id, String title) {
         return new Builder(id, title);
@@ -81,6 +85,11 @@ public record Table(String id, String title, String method, String source, List<
         }
 
         public Table build() {
+            boolean undefined = rows.stream().flatMap(List::stream)
+                    .anyMatch(c -> c instanceof Double d && !Double.isFinite(d));
+            if (undefined) {
+                note(UNDEFINED_NOTE);
+            }
             return new Table(id, title, method, source, columns, rows, notes);
         }
     }

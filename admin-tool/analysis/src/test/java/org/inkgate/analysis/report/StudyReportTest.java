@@ -62,4 +62,34 @@ class StudyReportTest {
         assertTrue(html.contains("needs at least"));
         assertFalse(html.contains("NaN"), "no unexplained NaN in the report");
     }
+
+    @Test
+    void report_missingRatingsZeroVarianceAndTinyGroups_explainsEveryGap(@TempDir Path dir) throws Exception {
+        // edge cases, no check values: a response without one criterion, a second rating missing,
+        // one level with a single candidate, every score under one condition equal
+        List<Rating> r = new java.util.ArrayList<>();
+        String[] levels = {"A", "A", "A", "B"};
+        for (int c = 0; c < 4; c++) {
+            for (String crit : new String[] {"content", "grammar"}) {
+                if (c == 3 && crit.equals("grammar")) {
+                    continue; // missing criterion
+                }
+                r.add(new Rating("C" + c, levels[c], "", "t1", "none", "R1", crit, 3));
+                if (c != 2) {
+                    r.add(new Rating("C" + c, levels[c], "", "t1", "none", "R2", crit, 3));
+                }
+                r.add(new Rating("C" + c, levels[c], "", "t2", "with", "R1", crit, c + (crit.equals("content") ? 1 : 2)));
+            }
+        }
+        Report report = StudyAnalysis.report(StudyData.ofRatings(r), StudyOptions.DEFAULT);
+        ReportWriter.write(report, dir);
+        String html = Files.readString(dir.resolve("report.html"));
+        assertFalse(html.contains("NaN"));
+        assertFalse(html.contains("Infinity"));
+        assertTrue(html.contains("A dash marks a value that cannot be computed"));
+        assertTrue(html.contains("response(s) lack ratings for some criterion"));
+        assertTrue(html.contains("all values equal"), "zero variance under 'none' is explained");
+        String json = Files.readString(dir.resolve("summary.json"));
+        assertFalse(json.contains("NaN"));
+    }
 }
