@@ -12,7 +12,6 @@ import org.jfree.chart.axis.SymbolAxis;
 import org.jfree.chart.plot.CategoryPlot;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.plot.XYPlot;
-import org.jfree.chart.renderer.GrayPaintScale;
 import org.jfree.chart.renderer.category.StatisticalLineAndShapeRenderer;
 import org.jfree.chart.renderer.xy.XYBarRenderer;
 import org.jfree.chart.renderer.xy.XYBlockRenderer;
@@ -149,9 +148,20 @@ final class Charts {
         SymbolAxis y = new SymbolAxis(null, labels);
         y.setInverted(true);
         XYBlockRenderer renderer = new XYBlockRenderer();
-        GrayPaintScale scale = new GrayPaintScale(-1, 1);
+        DivergingScale scale = new DivergingScale();
         renderer.setPaintScale(scale);
         XYPlot plot = new XYPlot(data, x, y, renderer);
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                if (!Double.isNaN(r[i][j])) {
+                    var label = new org.jfree.chart.annotations.XYTextAnnotation(
+                            String.format(java.util.Locale.ROOT, "%.2f", r[i][j]), j, i);
+                    label.setFont(FONT);
+                    label.setPaint(Math.abs(r[i][j]) > 0.6 ? Color.WHITE : Color.BLACK);
+                    plot.addAnnotation(label);
+                }
+            }
+        }
         JFreeChart chart = new JFreeChart(null, FONT, plot, false);
         NumberAxis legendAxis = new NumberAxis("Pearson r");
         legendAxis.setRange(-1, 1);
@@ -160,6 +170,28 @@ final class Charts {
         legend.setMargin(4, 4, 4, 4);
         chart.addSubtitle(legend);
         return style(chart);
+    }
+
+    /** White at r = 0, deepening to blue at +1 and to vermilion at -1 (palette colours). */
+    static final class DivergingScale implements org.jfree.chart.renderer.PaintScale {
+        @Override
+        public double getLowerBound() {
+            return -1;
+        }
+
+        @Override
+        public double getUpperBound() {
+            return 1;
+        }
+
+        @Override
+        public java.awt.Paint getPaint(double value) {
+            double v = Math.max(-1, Math.min(1, Double.isNaN(value) ? 0 : value));
+            Color end = v >= 0 ? PALETTE[0] : PALETTE[5];
+            double t = Math.abs(v);
+            return new Color((int) Math.round(255 + (end.getRed() - 255) * t),
+                    (int) Math.round(255 + (end.getGreen() - 255) * t), (int) Math.round(255 + (end.getBlue() - 255) * t));
+        }
     }
 
     private static JFreeChart style(JFreeChart chart) {

@@ -88,7 +88,8 @@ final class RubricSection {
         }
         s.table(corr.build());
         s.chart(new Chart("chart_criterion_correlations", "Correlations between criteria",
-                "Darker is higher; the diagonal is 1.", Charts.correlationMatrix(criteria, r), 560, 460));
+                "Pearson r between criterion scores of all responses: deeper blue is a higher positive correlation,"
+                + " vermilion a negative one; the diagonal is 1.", Charts.correlationMatrix(criteria, r), 560, 460));
         return s.build();
     }
 

@@ -33,8 +33,16 @@ public final class DemoReport {
             var cands = CandidatesReader.read("candidates.csv", c);
             var data = new StudyData(RatingsReader.read("ratings.csv", r), cands.candidates(), cands.items(),
                     ToolUseReader.read("tool-usage.csv", u), ProcessLogReader.read("process.csv", p));
-            ReportWriter.write(StudyAnalysis.report(data, StudyOptions.DEFAULT.withBaseline("none")
-                    .withTitle("Demo report (simulated data, not a real sitting)")), dir.resolve("report"));
+            var report = StudyAnalysis.report(data, StudyOptions.DEFAULT.withBaseline("none")
+                    .withTitle("Demo report (simulated data, not a real sitting)"));
+            ReportWriter.write(report, dir.resolve("report"));
+            // PNG copies of the charts, for documentation (the report itself embeds them as SVG)
+            for (var section : report.sections()) {
+                for (var chart : section.charts()) {
+                    org.jfree.chart.ChartUtils.saveChartAsPNG(dir.resolve(chart.id() + ".png").toFile(), chart.chart(),
+                            chart.width(), chart.height());
+                }
+            }
         }
     }
 
