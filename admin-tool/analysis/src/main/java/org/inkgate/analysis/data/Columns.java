@@ -11,7 +11,7 @@ final class Columns {
     static final int MAX_PROBLEMS = 200;
     private final Map<String, String> pool = new HashMap<>();
     // neighbouring rows mostly repeat a column's value (same candidate, task, condition): reuse it
-    private final Map<String, String> last = new HashMap<>();
+    private final String[] last = new String[256];
 
     /** Positions of required columns; missing ones added to problems. */
     static int[] require(CsvTable t, List<InputProblem> problems, String... names) {
@@ -31,17 +31,23 @@ final class Columns {
         if (required && v.isEmpty()) {
             problems.add(new InputProblem(t.file(), row.number(), name, "empty; every row needs a " + name));
         }
-        String previous = last.get(name);
+        String previous = pos >= 0 && pos < last.length ? last[pos] : null;
         if (v.equals(previous)) {
             return previous;
         }
         String pooled = pool.computeIfAbsent(v, k -> k);
-        last.put(name, pooled);
+        if (pos >= 0 && pos < last.length) {
+            last[pos] = pooled;
+        }
         return pooled;
     }
 
     static double number(CsvTable t, CsvTable.Row row, int pos, String name, List<InputProblem> problems) {
         String v = pos < 0 || pos >= row.cells().length ? "" : row.cells()[pos].trim();
+        int small = smallInteger(v);
+        if (small >= 0) {
+            return small; // the usual rating: a few digits, no sign or point; parsed without Double.parseDouble
+        }
         try {
             double d = Double.parseDouble(v);
             if (!Double.isFinite(d)) {
@@ -53,6 +59,23 @@ final class Columns {
                     + "' is not a number; write a plain number with a dot for decimals (e.g. 3 or 2.5)"));
             return Double.NaN;
         }
+    }
+
+    /** The value of 1-4 plain digits, else -1. */
+    private static int smallInteger(String v) {
+        int n = v.length();
+        if (n == 0 || n > 4) {
+            return -1;
+        }
+        int x = 0;
+        for (int i = 0; i < n; i++) {
+            char c = v.charAt(i);
+            if (c < '0' || c > '9') {
+                return -1;
+            }
+            x = x * 10 + (c - '0');
+        }
+        return x;
     }
 
     static boolean widthOk(CsvTable t, CsvTable.Row row, List<InputProblem> problems) {

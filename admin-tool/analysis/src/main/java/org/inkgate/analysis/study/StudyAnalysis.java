@@ -4,6 +4,9 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.function.Supplier;
 import org.inkgate.analysis.data.Candidate;
 import org.inkgate.analysis.report.Report;
 import org.inkgate.analysis.report.Section;
@@ -32,21 +35,35 @@ public final class StudyAnalysis {
             levels.put(c.id(), c.level());
         }
         ScoreTable scores = ScoreTable.of(data.ratings(), options.scoreRule(), levels);
-        List<Section> sections = new ArrayList<>();
-        sections.add(InputSection.build(data, scores, options));
-        sections.add(DescriptivesSection.build(scores, options));
-        sections.add(ConditionSection.build(scores, options));
-        sections.add(LevelsSection.build(scores, options));
-        sections.add(RatersSection.build(data.ratings(), options));
-        sections.add(RubricSection.build(scores, options));
+        // sections only read the scores and the input, so they are built concurrently (the rater
+        // section, the largest, runs beside the others) and then kept in their fixed order
+        List<Supplier<Section>> builders = new ArrayList<>();
+        builders.add(() -> InputSection.build(data, scores, options));
+        builders.add(() -> DescriptivesSection.build(scores, options));
+        builders.add(() -> ConditionSection.build(scores, options));
+        builders.add(() -> LevelsSection.build(scores, options));
+        builders.add(() -> RatersSection.build(data.ratings(), options));
+        builders.add(() -> RubricSection.build(scores, options));
         if (!data.toolUse().isEmpty()) {
-            sections.add(UsageSection.build(data.toolUse(), scores, options));
+            builders.add(() -> UsageSection.build(data.toolUse(), scores, options));
         }
         if (!data.processLog().isEmpty()) {
-            sections.add(ProcessSection.build(data.processLog(), scores, options));
+            builders.add(() -> ProcessSection.build(data.processLog(), scores, options));
         }
         if (!data.surveyItems().isEmpty()) {
-            sections.add(SurveySection.build(data.candidates(), data.surveyItems()));
+            builders.add(() -> SurveySection.build(data.candidates(), data.surveyItems()));
+        }
+        List<CompletableFuture<Section>> futures = builders.stream().map(CompletableFuture::supplyAsync).toList();
+        List<Section> sections = new ArrayList<>();
+        for (CompletableFuture<Section> f : futures) {
+            try {
+                sections.add(f.join());
+            } catch (CompletionException e) {
+                if (e.getCause() instanceof RuntimeException r) {
+                    throw r;
+                }
+                throw e;
+            }
         }
         sections.addAll(extraSections);
         List<String> preamble = List.of(
