@@ -1,6 +1,5 @@
 package org.inkgate.analysis.study;
 
-import java.util.List;
 import java.util.Locale;
 
 /** Helpers for summary keys and caution text. */
@@ -17,11 +16,6 @@ final class Keys {
         String s = name.toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9]+", "_");
         s = s.replaceAll("^_+|_+$", "");
         return s.isEmpty() ? "_" : s;
-    }
-
-    /** Cautions joined for a table cell or note. */
-    static String join(List<String> cautions) {
-        return String.join("; ", cautions);
     }
 
     static double[] values(java.util.Collection<Double> v) {

@@ -2,7 +2,6 @@ package org.inkgate.analysis.study;
 
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -116,9 +115,5 @@ final class UsageSection {
         s.chart(new Chart("chart_usage_by_level", "Share of candidates using each tool, by level",
                 "Among candidates offered the tool.", Charts.bars("tool", "share using", chart), 760, 380));
         return s.build();
-    }
-
-    static <K, V> Map<K, V> ordered() {
-        return new LinkedHashMap<>();
     }
 }
