@@ -9,9 +9,9 @@ import org.inkgate.analysis.descriptive.Ranks;
  * Wilcoxon's (1945) signed-rank test for paired values, differences b - a.
  *
  * <p>Zero differences are dropped (Wilcoxon's convention). V = sum of the ranks of positive
- * differences. With fewer than 50 non-zero differences and no ties the p-value is exact (the
- * null distribution by counting subsets); otherwise the normal approximation with tie
- * correction and continuity correction (Hollander &amp; Wolfe 1999, ch. 3). The matched-pairs
+ * differences. With fewer than 50 differences, no ties and no zeros the p-value is exact (the
+ * null distribution by counting subsets), as R and scipy do; otherwise the normal approximation
+ * with tie correction and continuity correction (Hollander &amp; Wolfe 1999, ch. 3). The matched-pairs
  * rank-biserial correlation r = (V+ - V-) / (V+ + V-) (Kerby 2014) is given as effect size.
  */
 public record WilcoxonSignedRank(int nonZero, int zeros, double v, double z, double p, boolean exact,
@@ -54,7 +54,7 @@ public record WilcoxonSignedRank(int nonZero, int zeros, double v, double z, dou
         double mean = n * (n + 1) / 4.0;
         double var = n * (n + 1) * (2.0 * n + 1) / 24 - ties / 48;
         double z = var > 0 ? (vPlus - mean) / Math.sqrt(var) : Double.NaN;
-        if (n < 50 && ties == 0) {
+        if (n < 50 && ties == 0 && zeros == 0) {
             return new WilcoxonSignedRank(n, zeros, vPlus, z, exactP(n, (int) Math.round(vPlus)), true, r, cautions);
         }
         if (ties > 0) {
