@@ -57,6 +57,47 @@ class AnalyseCommandTest {
     }
 
     @Test
+    void analyse_allFourInputs_writeUsageProcessAndSurveySections(@TempDir Path dir) throws Exception {
+        // invented rows, structure only (no check values): two conditions, two levels, one tool
+        StringBuilder r = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        StringBuilder c = new StringBuilder("candidate,level,felt_rushed\n");
+        StringBuilder u = new StringBuilder("candidate,task,tool,uses,empty_queries,suggestions_accepted,suggestions_ignored\n");
+        StringBuilder p = new StringBuilder("candidate,task,time_ms,type,position,text\n");
+        for (int i = 0; i < 12; i++) {
+            String id = "K" + i;
+            c.append(id).append(',').append(i % 2 == 0 ? "low" : "high").append(',').append(1 + i % 5).append('\n');
+            for (String task : new String[] {"a", "b"}) {
+                String cond = task.equals("a") ? "none" : "tools";
+                for (String rater : new String[] {"R1", "R2"}) {
+                    for (String crit : new String[] {"ideas", "language"}) {
+                        r.append(id).append(",,,").append(task).append(',').append(cond).append(',').append(rater)
+                                .append(',').append(crit).append(',').append((i + task.length() + rater.length()
+                                        + crit.length() * (rater.equals("R1") ? 1 : 2)) % 6).append('\n');
+                    }
+                }
+                p.append(id).append(',').append(task).append(",0,text.insert,0,Hello\n");
+                p.append(id).append(',').append(task).append(",2500,text.insert,5, world\n");
+            }
+            u.append(id).append(",b,dictionary,").append(i % 3).append(",0,,\n");
+        }
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), r.toString());
+        Path cands = Files.writeString(dir.resolve("candidates.csv"), c.toString());
+        Path usage = Files.writeString(dir.resolve("usage.csv"), u.toString());
+        Path process = Files.writeString(dir.resolve("process.csv"), p.toString());
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", ratings.toString(), "--candidates", cands.toString(), "--tool-usage",
+                usage.toString(), "--process", process.toString(), "--out", outDir.toString(), "--baseline", "none",
+                "--score-rule", "SUM", "--pause-ms", "2000"), err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertEquals("sum", s.get("input.score_rule").asText());
+        assertEquals("none", s.get("comparison.baseline").asText());
+        assertTrue(s.has("usage.tool.dictionary.level.low.share_using"));
+        assertEquals(1.0, s.get("process.tools.all_levels.pauses.mean").asDouble());
+        assertTrue(s.has("survey.felt_rushed.high.mean"));
+        assertTrue(Files.exists(outDir.resolve("tables/levels_posthoc.csv")));
+    }
+
+    @Test
     void analyse_badScoreAndMissingCell_reportsRowAndColumnAndWritesNothing(@TempDir Path dir) throws Exception {
         Path f = dir.resolve("bad.csv");
         Files.writeString(f, "candidate,level,form,task,condition,rater,criterion,score\n"
