@@ -72,10 +72,7 @@ record ArchitectureRules(String root) {
     ArchRule analysisUsesNoDatabaseFormatOrAdminCore() {
         return noClasses().that().resideInAPackage(analysis())
                 .should().dependOnClassesThat().resideInAnyPackage("java.sql..", format(), adminCore())
-                .because("analysis takes plain data and returns plain results, so it can be tested and cited alone")
-                // admin-tool/analysis has no classes yet; without this ArchUnit fails a rule that
-                // matches nothing. Remove it once the first analysis class lands.
-                .allowEmptyShould(true);
+                .because("analysis takes plain data and returns plain results, so it can be tested and cited alone");
     }
 
     /** (c) Resource packs are the bottom layer: they know nothing of formats, client or admin. */

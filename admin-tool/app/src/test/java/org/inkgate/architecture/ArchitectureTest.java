@@ -143,14 +143,15 @@ class ArchitectureTest {
         }
 
         @Test
-        void analysisRule_noAnalysisClasses_passesWhileOtherRulesRefuseToCheckNothing() {
-            // only the analysis rule says allowEmptyShould: a typo in any other rule's package
-            // would match nothing, and ArchUnit then fails instead of passing silently
+        void rules_noMatchingClasses_refuseToCheckNothing() {
+            // no rule allows an empty match any more (the analysis module has classes now): a typo
+            // in a rule's package would match nothing, and ArchUnit then fails instead of passing silently
             JavaClasses packsOnly = new ClassFileImporter().importClasses(PackReadingBundle.class);
-            assertFalse(rules.analysisUsesNoDatabaseFormatOrAdminCore().evaluate(packsOnly).hasViolation());
-            AssertionError refusal = assertThrows(AssertionError.class,
-                    () -> rules.formatDoesNotDependOnClientOrAdmin().evaluate(packsOnly));
-            assertTrue(refusal.getMessage().contains("failed to check any classes"), refusal.getMessage());
+            for (ArchRule rule : new ArchRule[] {rules.analysisUsesNoDatabaseFormatOrAdminCore(),
+                rules.formatDoesNotDependOnClientOrAdmin()}) {
+                AssertionError refusal = assertThrows(AssertionError.class, () -> rule.evaluate(packsOnly));
+                assertTrue(refusal.getMessage().contains("failed to check any classes"), refusal.getMessage());
+            }
         }
 
         /** The classes that the rule's violations originate in, as fully qualified names. */

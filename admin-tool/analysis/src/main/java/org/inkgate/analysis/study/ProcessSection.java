@@ -1,0 +1,101 @@
+package org.inkgate.analysis.study;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.function.ToDoubleFunction;
+import org.inkgate.analysis.data.ProcessEvent;
+import org.inkgate.analysis.descriptive.Descriptives;
+import org.inkgate.analysis.process.ProcessMeasures;
+import org.inkgate.analysis.report.Section;
+import org.inkgate.analysis.report.Table;
+import org.inkgate.analysis.scores.ResponseScore;
+import org.inkgate.analysis.scores.ScoreTable;
+
+/** Writing-process measures per response, summarised by condition and level. */
+final class ProcessSection {
+
+    private ProcessSection() {
+    }
+
+    private record Measure(String name, String key, ToDoubleFunction<ProcessMeasures> value) {
+    }
+
+    private static final List<Measure> MEASURES = List.of(
+            new Measure("time on task (s)", "time_on_task_s", ProcessMeasures::timeOnTaskS),
+            new Measure("active writing time (s)", "active_writing_s", ProcessMeasures::activeWritingS),
+            new Measure("pauses", "pauses", m -> m.pauses()),
+            new Measure("mean pause (s)", "mean_pause_s", ProcessMeasures::meanPauseS),
+            new Measure("P-bursts", "p_bursts", m -> m.pBursts()),
+            new Measure("R-bursts", "r_bursts", m -> m.rBursts()),
+            new Measure("mean P-burst length (chars)", "mean_p_burst_chars", ProcessMeasures::meanPBurstChars),
+            new Measure("revisions", "revisions", m -> m.revisions()),
+            new Measure("product/process ratio", "product_process_ratio", ProcessMeasures::productProcessRatio),
+            new Measure("characters per minute", "chars_per_minute", ProcessMeasures::charsPerMinute),
+            new Measure("time in resource panel (s)", "panel_time_s", ProcessMeasures::panelTimeS),
+            new Measure("lookups", "lookups", m -> m.lookups()),
+            new Measure("lookups followed by use", "lookups_used", m -> m.lookupsUsed()));
+
+    static Section build(List<ProcessEvent> log, ScoreTable scores, StudyOptions options) {
+        Section.Builder s = Section.builder("process", "Writing process");
+        ProcessMeasures.Parameters p = options.process();
+        s.paragraph("Measures from the process log, one value per response, summarised as mean and SD by condition and"
+                + " level. Pause threshold " + p.pauseThresholdMs() + " ms; a lookup counts as used when the looked-up"
+                + " text is typed within " + p.lookupWindowMs() + " ms. Definitions and sources: docs/analysis.md"
+                + " (Chenoweth & Hayes 2001; Wengelin 2006).");
+        Map<String, List<ProcessEvent>> byResponse = new LinkedHashMap<>();
+        for (ProcessEvent e : log) {
+            byResponse.computeIfAbsent(e.candidate() + '\u0000' + e.task(), k -> new ArrayList<>()).add(e);
+        }
+        Map<String, ResponseScore> resp = new HashMap<>();
+        for (ResponseScore r : scores.responses()) {
+            resp.put(r.candidate() + '\u0000' + r.task(), r);
+        }
+        Map<String, List<ProcessMeasures>> groups = new TreeMap<>();
+        long unmatched = 0;
+        for (var e : byResponse.entrySet()) {
+            ProcessMeasures m = ProcessMeasures.of(e.getValue(), p);
+            ResponseScore r = resp.get(e.getKey());
+            if (r == null) {
+                unmatched++;
+            }
+            String condition = r == null ? "(not rated)" : r.condition();
+            String level = scores.levelOf(m.candidate());
+            groups.computeIfAbsent(condition + '\u0000' + "all levels", k -> new ArrayList<>()).add(m);
+            if (!level.isEmpty()) {
+                groups.computeIfAbsent(condition + '\u0000' + level, k -> new ArrayList<>()).add(m);
+            }
+        }
+        List<String> cols = new ArrayList<>(List.of("condition", "level", "responses"));
+        for (Measure m : MEASURES) {
+            cols.add(m.name() + " mean");
+            cols.add(m.name() + " SD");
+        }
+        Table.Builder t = Table.builder("process_measures", "Writing-process measures by condition and level")
+                .method("per-response measures from keystroke logs, mean and SD over responses",
+                        "Chenoweth & Hayes 2001; Wengelin 2006; Leijten & Van Waes 2013")
+                .columns(cols.toArray(String[]::new));
+        for (var g : groups.entrySet()) {
+            String[] parts = g.getKey().split("\u0000");
+            List<Object> row = new ArrayList<>(List.of(parts[0], parts[1], (long) g.getValue().size()));
+            for (Measure m : MEASURES) {
+                double[] v = g.getValue().stream().mapToDouble(m.value()).filter(x -> !Double.isNaN(x)).toArray();
+                Descriptives d = Descriptives.of(v);
+                row.add(d.mean());
+                row.add(d.sd());
+                s.put(Keys.slug(parts[0]) + "." + Keys.slug(parts[1]) + "." + m.key() + ".mean", d.mean());
+            }
+            t.row(row.toArray());
+        }
+        if (unmatched > 0) {
+            t.note(unmatched + " logged response(s) have no ratings and appear under '(not rated)'.");
+        }
+        t.note("Means leave out responses where a measure is undefined (e.g. mean pause with no pause).");
+        s.table(t.build());
+        s.put("responses", byResponse.size());
+        return s.build();
+    }
+}

@@ -1,0 +1,136 @@
+package org.inkgate.admin.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+
+class AnalyseCommandTest {
+
+    private final StringWriter out = new StringWriter();
+    private final StringWriter err = new StringWriter();
+
+    private int run(String... args) {
+        CommandLine cl = new CommandLine(new AnalyseCommand());
+        cl.setOut(new PrintWriter(out));
+        cl.setErr(new PrintWriter(err));
+        return cl.execute(args);
+    }
+
+    /** Shrout & Fleiss (1979) Table 2: 6 targets x 4 judges, as tidy ratings of one criterion. */
+    private static Path shroutFleissRatings(Path dir) throws Exception {
+        int[][] t = {{9, 2, 5, 8}, {6, 1, 3, 2}, {8, 4, 6, 8}, {7, 1, 2, 6}, {10, 5, 6, 9}, {6, 2, 4, 7}};
+        StringBuilder b = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        for (int i = 0; i < 6; i++) {
+            for (int j = 0; j < 4; j++) {
+                b.append("T").append(i + 1).append(",,,t1,plain,J").append(j + 1).append(",overall,").append(t[i][j])
+                        .append('\n');
+            }
+        }
+        Path f = dir.resolve("ratings.csv");
+        Files.writeString(f, b.toString());
+        return f;
+    }
+
+    @Test
+    void analyse_shroutFleissRatings_writesReportWithKrippendorffAndRaterTables(@TempDir Path dir) throws Exception {
+        Path ratings = shroutFleissRatings(dir);
+        Path outDir = dir.resolve("report");
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", outDir.toString()), err.toString());
+        assertTrue(Files.exists(outDir.resolve("report.html")));
+        assertTrue(Files.exists(outDir.resolve("tables/raters_icc.csv")));
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertEquals(24, s.get("input.ratings").asInt());
+        assertEquals(6, s.get("raters.pairs").asInt());
+        // one condition: the paired comparison says it cannot run
+        assertFalse(s.get("comparison.available").asBoolean());
+        assertTrue(out.toString().contains("Report written"));
+    }
+
+    @Test
+    void analyse_allFourInputs_writeUsageProcessAndSurveySections(@TempDir Path dir) throws Exception {
+        // invented rows, structure only (no check values): two conditions, two levels, one tool
+        StringBuilder r = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        StringBuilder c = new StringBuilder("candidate,level,felt_rushed\n");
+        StringBuilder u = new StringBuilder("candidate,task,tool,uses,empty_queries,suggestions_accepted,suggestions_ignored\n");
+        StringBuilder p = new StringBuilder("candidate,task,time_ms,type,position,text\n");
+        for (int i = 0; i < 12; i++) {
+            String id = "K" + i;
+            c.append(id).append(',').append(i % 2 == 0 ? "low" : "high").append(',').append(1 + i % 5).append('\n');
+            for (String task : new String[] {"a", "b"}) {
+                String cond = task.equals("a") ? "none" : "tools";
+                for (String rater : new String[] {"R1", "R2"}) {
+                    for (String crit : new String[] {"ideas", "language"}) {
+                        r.append(id).append(",,,").append(task).append(',').append(cond).append(',').append(rater)
+                                .append(',').append(crit).append(',').append((i + task.length() + rater.length()
+                                        + crit.length() * (rater.equals("R1") ? 1 : 2)) % 6).append('\n');
+                    }
+                }
+                p.append(id).append(',').append(task).append(",0,text.insert,0,Hello\n");
+                p.append(id).append(',').append(task).append(",2500,text.insert,5, world\n");
+            }
+            u.append(id).append(",b,dictionary,").append(i % 3).append(",0,,\n");
+        }
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), r.toString());
+        Path cands = Files.writeString(dir.resolve("candidates.csv"), c.toString());
+        Path usage = Files.writeString(dir.resolve("usage.csv"), u.toString());
+        Path process = Files.writeString(dir.resolve("process.csv"), p.toString());
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", ratings.toString(), "--candidates", cands.toString(), "--tool-usage",
+                usage.toString(), "--process", process.toString(), "--out", outDir.toString(), "--baseline", "none",
+                "--score-rule", "SUM", "--pause-ms", "2000"), err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertEquals("sum", s.get("input.score_rule").asText());
+        assertEquals("none", s.get("comparison.baseline").asText());
+        assertTrue(s.has("usage.tool.dictionary.level.low.share_using"));
+        assertEquals(1.0, s.get("process.tools.all_levels.pauses.mean").asDouble());
+        assertTrue(s.has("survey.felt_rushed.high.mean"));
+        assertTrue(Files.exists(outDir.resolve("tables/levels_posthoc.csv")));
+    }
+
+    @Test
+    void analyse_badScoreAndMissingCell_reportsRowAndColumnAndWritesNothing(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("bad.csv");
+        Files.writeString(f, "candidate,level,form,task,condition,rater,criterion,score\n"
+                + "C1,B1,,t1,none,R1,content,3\n"
+                + "C1,B1,,t1,none,R2,content,three\n"
+                + ",B1,,t1,none,R1,grammar,2\n");
+        Path outDir = dir.resolve("report");
+        assertEquals(AnalyseCommand.INPUT_REFUSED, run("--ratings", f.toString(), "--out", outDir.toString()));
+        String e = err.toString();
+        assertTrue(e.contains("bad.csv, row 3, column score: 'three' is not a number"), e);
+        assertTrue(e.contains("bad.csv, row 4, column candidate: empty"), e);
+        assertFalse(Files.exists(outDir));
+    }
+
+    @Test
+    void analyse_missingColumn_namesIt(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("short.csv");
+        Files.writeString(f, "candidate,task,condition,rater,score\nC1,t1,none,R1,3\n");
+        assertEquals(AnalyseCommand.INPUT_REFUSED, run("--ratings", f.toString(), "--out", dir.resolve("o").toString()));
+        assertTrue(err.toString().contains("required column 'criterion' is missing"), err.toString());
+    }
+
+    @Test
+    void analyse_unknownBaseline_listsTheConditions(@TempDir Path dir) throws Exception {
+        Path ratings = shroutFleissRatings(dir);
+        assertEquals(AnalyseCommand.INPUT_REFUSED, run("--ratings", ratings.toString(), "--out",
+                dir.resolve("o").toString(), "--baseline", "nothing"));
+        assertTrue(err.toString().contains("[plain]"), err.toString());
+    }
+
+    @Test
+    void analyse_missingRatingsOption_isUsageError() {
+        assertEquals(2, run("--out", "x"));
+        assertTrue(err.toString().contains("--ratings"));
+    }
+}
