@@ -16,13 +16,13 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.jfree.svg.SVGGraphics2D;
+import org.inkgate.analysis.graphics.Drawings;
 
 /**
  * Writes a report to a folder: {@code report.html} (self-contained: inline CSS and SVG charts,
  * no scripts, no external files), {@code tables/<id>.csv} per table, and {@code summary.json}.
- * The HTML comes from a Mustache template, which escapes every value; only the SVG drawn by
- * JFreeSVG is inserted unescaped.
+ * The HTML comes from a Mustache template, which escapes every value; only the SVG written by
+ * Batik's SVG generator (from JFreeChart's drawing) is inserted unescaped.
  */
 public final class ReportWriter {
 
@@ -101,10 +101,8 @@ public final class ReportWriter {
 
     /** The chart as an SVG element; ids prefixed by the chart id so several charts share one page. */
     static String svg(Chart c) {
-        SVGGraphics2D g = new SVGGraphics2D(c.width(), c.height());
-        g.setDefsKeyPrefix(c.id() + "-");
-        c.chart().draw(g, new Rectangle(0, 0, c.width(), c.height()));
-        return g.getSVGElement(c.id());
+        return Drawings.svg(c.id(), c.title(), c.width(), c.height(),
+                g -> c.chart().draw(g, new Rectangle(0, 0, c.width(), c.height())));
     }
 
     static void writeCsv(Table t, Path file) throws IOException {

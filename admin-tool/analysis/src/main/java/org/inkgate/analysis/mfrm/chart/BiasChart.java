@@ -3,6 +3,7 @@ package org.inkgate.analysis.mfrm.chart;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import org.inkgate.analysis.graphics.Drawings;
 import org.inkgate.analysis.mfrm.bias.BiasCell;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
 
@@ -21,17 +22,15 @@ public final class BiasChart {
     /** The chart as an SVG element. */
     public static String svg(BiasPair pair) {
         List<BiasCell> cells = top(pair);
-        SvgCanvas c = new SvgCanvas(W, height(cells), "Bias " + pair.first() + " x " + pair.second());
-        paint(c, pair, cells);
-        return c.finish();
+        String id = ("bias-" + pair.first() + "-" + pair.second()).replaceAll("[^A-Za-z0-9_-]", "_");
+        return Drawings.svg(id, "Bias " + pair.first() + " x " + pair.second(), W, height(cells),
+                g -> paint(new GraphicsCanvas(g), pair, cells));
     }
 
     /** The same as PNG bytes. */
     public static byte[] png(BiasPair pair) {
         List<BiasCell> cells = top(pair);
-        ImageCanvas c = new ImageCanvas(W, height(cells));
-        paint(c, pair, cells);
-        return c.png();
+        return Drawings.png(W, height(cells), g -> paint(new GraphicsCanvas(g), pair, cells));
     }
 
     private static List<BiasCell> top(BiasPair pair) {

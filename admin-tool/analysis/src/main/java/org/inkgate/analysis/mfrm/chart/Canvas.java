@@ -3,9 +3,8 @@ package org.inkgate.analysis.mfrm.chart;
 import java.awt.Color;
 
 /**
- * The few drawing operations the charts need, so one drawing routine writes both SVG text
- * ({@link SvgCanvas}) and a raster image ({@link ImageCanvas}). Coordinates are pixels from
- * the top left.
+ * The few drawing operations the charts need, drawn by {@link GraphicsCanvas} on a Graphics2D
+ * that becomes SVG or PNG. Coordinates are pixels from the top left.
  */
 interface Canvas {
 

@@ -2,6 +2,7 @@ package org.inkgate.analysis.mfrm.chart;
 
 import java.util.List;
 import java.util.Locale;
+import org.inkgate.analysis.graphics.Drawings;
 import org.inkgate.analysis.mfrm.MfrmResult;
 import org.inkgate.analysis.mfrm.estimation.CategoryModel;
 
@@ -21,16 +22,17 @@ public final class CategoryCurves {
 
     /** Curves of the scale at {@code scaleIndex} as an SVG element. */
     public static String svg(MfrmResult r, int scaleIndex) {
-        SvgCanvas c = new SvgCanvas(W, H, "Category probability curves");
-        paint(c, r.scales().get(scaleIndex), r.scales().size() == 1);
-        return c.finish();
+        MfrmResult.Scale scale = r.scales().get(scaleIndex);
+        boolean shared = r.scales().size() == 1;
+        return Drawings.svg("category-curves-" + scaleIndex, "Category probability curves", W, H,
+                g -> paint(new GraphicsCanvas(g), scale, shared));
     }
 
     /** The same as PNG bytes. */
     public static byte[] png(MfrmResult r, int scaleIndex) {
-        ImageCanvas c = new ImageCanvas(W, H);
-        paint(c, r.scales().get(scaleIndex), r.scales().size() == 1);
-        return c.png();
+        MfrmResult.Scale scale = r.scales().get(scaleIndex);
+        boolean shared = r.scales().size() == 1;
+        return Drawings.png(W, H, g -> paint(new GraphicsCanvas(g), scale, shared));
     }
 
     static void paint(Canvas g, MfrmResult.Scale s, boolean shared) {

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
+import org.inkgate.analysis.graphics.Drawings;
 import org.inkgate.analysis.mfrm.MfrmResult;
 
 /**
@@ -29,16 +30,14 @@ public final class WrightMap {
 
     /** The map as an SVG element. */
     public static String svg(MfrmResult r) {
-        SvgCanvas c = new SvgCanvas(width(r), HEIGHT, "Wright map");
-        paint(c, r, width(r), HEIGHT);
-        return c.finish();
+        int w = width(r);
+        return Drawings.svg("wright-map", "Wright map", w, HEIGHT, g -> paint(new GraphicsCanvas(g), r, w, HEIGHT));
     }
 
     /** The map as PNG bytes. */
     public static byte[] png(MfrmResult r) {
-        ImageCanvas c = new ImageCanvas(width(r), HEIGHT);
-        paint(c, r, width(r), HEIGHT);
-        return c.png();
+        int w = width(r);
+        return Drawings.png(w, HEIGHT, g -> paint(new GraphicsCanvas(g), r, w, HEIGHT));
     }
 
     private static int width(MfrmResult r) {

@@ -10,24 +10,17 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 import java.awt.geom.Rectangle2D;
-import java.awt.image.BufferedImage;
-import java.io.ByteArrayOutputStream;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import javax.imageio.ImageIO;
 
-/** Draws into an in-memory image and encodes it as PNG (JDK only; works with java.awt.headless). */
-final class ImageCanvas implements Canvas {
-    private final BufferedImage image;
+/**
+ * The canvas operations on any Graphics2D: an image for PNG or Batik's SVG generator for SVG
+ * (see {@link org.inkgate.analysis.graphics.Drawings}), so each chart has one drawing routine.
+ */
+final class GraphicsCanvas implements Canvas {
     private final Graphics2D g;
 
-    ImageCanvas(int width, int height) {
-        image = new BufferedImage(width, height, BufferedImage.TYPE_INT_RGB);
-        g = image.createGraphics();
-        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
-        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+    GraphicsCanvas(Graphics2D g) {
+        this.g = g;
         g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
-        rect(0, 0, width, height, Color.WHITE);
     }
 
     @Override
@@ -80,17 +73,5 @@ final class ImageCanvas implements Canvas {
         g.rotate(-Math.PI / 2, x, y);
         text(s, x, y, size, false, colour, Anchor.MIDDLE);
         g.setTransform(old);
-    }
-
-    /** The image as PNG bytes. */
-    byte[] png() {
-        g.dispose();
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        try {
-            ImageIO.write(image, "png", out);
-        } catch (IOException e) {
-            throw new UncheckedIOException("PNG encoding failed in memory", e);
-        }
-        return out.toByteArray();
     }
 }
