@@ -56,7 +56,10 @@ public final class EncryptedKeys {
             Cipher cipher = Cipher.getInstance(PBES2);
             cipher.init(Cipher.ENCRYPT_MODE, pbeKey, new PBEParameterSpec(salt, iterations, new IvParameterSpec(iv)));
             byte[] encrypted = cipher.doFinal(plain);
-            AlgorithmParameters params = cipher.getParameters();
+            // the cipher names its parameters by the JDK's cipher name, which EncryptedPrivateKeyInfo cannot map
+            // to an OID; the same DER re-read as "PBES2" parameters carries the PBES2 OID (RFC 8018 A.4)
+            AlgorithmParameters params = AlgorithmParameters.getInstance("PBES2");
+            params.init(cipher.getParameters().getEncoded());
             return new EncryptedPrivateKeyInfo(params, encrypted).getEncoded();
         } catch (GeneralSecurityException | java.io.IOException e) {
             throw new IllegalStateException("the JDK could not encrypt the key with PBES2: " + e.getMessage(), e);

@@ -73,7 +73,7 @@ final class YamlChecker {
     }
 
     List<JsonNode> list(JsonNode parent, At at, boolean required) {
-        JsonNode node = parent == null ? null : parent.get(last(at));
+        JsonNode node = child(parent, at);
         if (node == null || node.isNull()) {
             if (required) {
                 problem(at, "is missing; add a list (lines starting with \"- \")");
@@ -90,7 +90,7 @@ final class YamlChecker {
     }
 
     String text(JsonNode parent, At at, boolean required) {
-        JsonNode node = parent == null ? null : parent.get(last(at));
+        JsonNode node = child(parent, at);
         if (node == null || node.isNull()) {
             if (required) {
                 problem(at, "is missing; add it");
@@ -119,7 +119,7 @@ final class YamlChecker {
     }
 
     Integer integer(JsonNode parent, At at, boolean required, int min, int max) {
-        JsonNode node = parent == null ? null : parent.get(last(at));
+        JsonNode node = child(parent, at);
         if (node == null || node.isNull()) {
             if (required) {
                 problem(at, "is missing; add a whole number from " + min + " to " + max);
@@ -139,7 +139,7 @@ final class YamlChecker {
     }
 
     Boolean bool(JsonNode parent, At at, boolean fallback) {
-        JsonNode node = parent == null ? null : parent.get(last(at));
+        JsonNode node = child(parent, at);
         if (node == null || node.isNull()) {
             return fallback;
         }
@@ -148,6 +148,22 @@ final class YamlChecker {
             return fallback;
         }
         return node.booleanValue();
+    }
+
+    /** The value at {@code at} inside {@code parent}, which may be a mapping or a list. */
+    private static JsonNode child(JsonNode parent, At at) {
+        if (parent == null) {
+            return null;
+        }
+        String key = last(at);
+        if (parent.isArray()) {
+            try {
+                return parent.get(Integer.parseInt(key));
+            } catch (NumberFormatException e) {
+                return null;
+            }
+        }
+        return parent.get(key);
     }
 
     private static String last(At at) {

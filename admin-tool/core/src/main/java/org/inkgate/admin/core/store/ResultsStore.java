@@ -32,6 +32,9 @@ public interface ResultsStore extends AutoCloseable {
     /** The sitting imported from exactly these package bytes, if any. */
     Optional<Long> sittingByPackageFile(String packageSha256) throws StoreException;
 
+    /** SHA-256 of every package file already imported, so a rerun skips them without decrypting. */
+    java.util.Set<String> importedPackageFiles() throws StoreException;
+
     /** The sitting with this package id and content (a re-sent copy), if any. */
     Optional<Long> sittingByContent(String packageId, String contentSha256) throws StoreException;
 

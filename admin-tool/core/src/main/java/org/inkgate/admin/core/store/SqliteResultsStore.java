@@ -221,6 +221,12 @@ public final class SqliteResultsStore implements ResultsStore {
     }
 
     @Override
+    public java.util.Set<String> importedPackageFiles() throws StoreException {
+        return read("listing imported packages", () -> new java.util.HashSet<>(list("SELECT package_sha256 FROM sittings",
+                rs -> rs.getString(1))));
+    }
+
+    @Override
     public Optional<Long> sittingByContent(String packageId, String contentSha256) throws StoreException {
         return read("looking up a package", () -> first("SELECT sitting_id FROM sittings WHERE package_id=? AND content_sha256=?",
                 1, packageId, contentSha256).map(r -> ((Number) r[0]).longValue()));
