@@ -73,7 +73,7 @@ final class FormsCommand implements Callable<Integer> {
         }
         long usedSeed = seed != null ? seed : new SecureRandom().nextLong();
         Assignment a = FormAssigner.assign(candidates.stream()
-                .map(c -> new FormAssigner.Candidate(c.candidateNumber(), c.level())).toList(), forms, usedSeed);
+                .map(c -> new FormAssigner.Candidate(c.candidateNumber(), c.level())).toList(), forms, FormDesigner.blockSize(exam), usedSeed);
         w.println();
         w.println("Assignment of " + a.rows().size() + " candidates, seed " + usedSeed
                 + " (the same seed and roster give the same assignment):");

@@ -28,7 +28,8 @@ public final class XapiExport {
     public static final String BASE = "https://inkgate.example/xapi/";
     private static final String ADL = "http://adlnet.gov/expapi/verbs/";
     private static final String AS = "http://activitystrea.ms/schema/1.0/";
-    private static final ObjectMapper M = Json.mapper();
+    private static final ObjectMapper M = Json.mapper().copy()
+            .disable(com.fasterxml.jackson.databind.SerializationFeature.INDENT_OUTPUT);
 
     private XapiExport() {
     }

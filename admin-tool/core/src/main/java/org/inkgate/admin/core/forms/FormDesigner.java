@@ -64,6 +64,18 @@ public final class FormDesigner {
     }
 
     /**
+     * How many consecutive forms (in the order {@link #forms} returns them) make one balanced
+     * block: the condition shifts of one task order. Without rotation the whole square is one
+     * block, and the leftover balance of {@link FormAssigner} then holds only for cyclic squares.
+     */
+    public static int blockSize(ExamSource exam) {
+        return switch (exam.design().kind()) {
+            case CROSSOVER -> 2;
+            case LATIN_SQUARE -> exam.design().rotateConditions() ? exam.conditions().size() : exam.tasks().size();
+        };
+    }
+
+    /**
      * Rows of a k x k Latin square of task indexes: Williams' construction for even k (first row
      * 0, 1, k-1, 2, k-2, ..., each later row adds 1 modulo k), the cyclic square for odd k.
      */

@@ -549,7 +549,8 @@ public final class ExamSourceReader {
                         }
                     }
                     if (!missing.isEmpty() && covered.size() > 0) {
-                        c.problem(ca.child("bands"), "no band describes score" + (missing.size() > 1 ? "s " : " ") + missing
+                        c.problem(ca.child("bands"), "no band describes score" + (missing.size() > 1 ? "s " : " ")
+                                + String.join(", ", missing.stream().map(String::valueOf).toList())
                                 + "; every score in " + range[0] + "-" + range[1] + " needs a descriptor raters can read");
                     }
                 }

@@ -97,6 +97,11 @@ final class YamlChecker {
             }
             return null;
         }
+        if (node.isBoolean()) {
+            problem(at, "must be a text, not " + describe(node) + " (YAML reads yes, no, on, off, true and false"
+                    + " without quotes as true/false: put the text in quotes)");
+            return null;
+        }
         if (!node.isTextual() && !node.isNumber()) {
             problem(at, "must be a text, not " + describe(node));
             return null;
