@@ -22,7 +22,6 @@ import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.crypto.Sha256;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.refusal.FormatRefusal;
-import org.inkgate.format.response.EventChain;
 import org.inkgate.format.response.OpenedResponse;
 import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.response.ResponsePackageReader;
@@ -136,11 +135,25 @@ public final class Collector {
         }
     }
 
-    /** Names what a package says, whatever bytes carry it: the response document and the event chain's head. */
+    /**
+     * Names what a package says, whatever bytes carry it: the response document and every event,
+     * field by field (length-prefixed, so no two different logs feed the digest the same bytes).
+     * Cheaper than re-encoding the log as JSON lines, and equally exact.
+     */
     static String contentSha256(OpenedResponse opened) {
-        byte[] response = Json.writeLine(opened.response());
-        String head = EventChain.head(EventChain.encode(opened.events()));
-        return Sha256.hex((Sha256.hex(response) + head).getBytes(java.nio.charset.StandardCharsets.US_ASCII));
+        java.security.MessageDigest digest = Sha256.newDigest();
+        update(digest, Json.writeLine(opened.response()));
+        for (org.inkgate.format.response.ProcessEvent e : opened.events()) {
+            update(digest, (e.seq() + "|" + e.at() + "|" + e.mono() + "|" + e.type() + "|" + e.task() + "|" + e.data())
+                    .getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        }
+        return org.inkgate.format.crypto.Hex.of(digest.digest());
+    }
+
+    private static void update(java.security.MessageDigest digest, byte[] bytes) {
+        int n = bytes.length;
+        digest.update(new byte[] {(byte) (n >>> 24), (byte) (n >>> 16), (byte) (n >>> 8), (byte) n});
+        digest.update(bytes);
     }
 
     private Outcome settle(Read r) throws StoreException {

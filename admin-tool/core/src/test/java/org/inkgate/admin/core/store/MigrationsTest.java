@@ -49,7 +49,7 @@ class MigrationsTest {
                     "refusals"), objects(c, "table"));
             assertEquals("1", pragma(c, "foreign_keys"));
             assertEquals("wal", pragma(c, "journal_mode"));
-            assertEquals("2", pragma(c, "synchronous"), "FULL is 2 (SQLite PRAGMA synchronous documentation)");
+            assertEquals("1", pragma(c, "synchronous"), "NORMAL is 1 (SQLite PRAGMA synchronous documentation)");
             try (Statement s = c.createStatement()) {
                 SQLException e = assertThrows(SQLException.class, () -> s.execute(
                         "INSERT INTO tasks(exam_id, task_id, title, time_limit_seconds) VALUES ('nope', 't', 'x', 0)"));
