@@ -96,6 +96,7 @@ public final class SqliteResultsStore implements ResultsStore {
                 return result;
             } catch (SQLException | RuntimeException e) {
                 c.rollback();
+                policyIds.clear(); // ids cached inside the rolled-back transaction no longer exist
                 throw e;
             } finally {
                 c.setAutoCommit(true);
