@@ -28,6 +28,7 @@ import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.response.TaskResponse;
 import org.inkgate.format.trust.TrustPolicy;
 import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.SittingRecord;
 import org.inkgate.admin.core.store.StoreException;
 
 /**
@@ -78,7 +79,7 @@ public final class Collector {
     }
 
     /** A package read by a worker: opened, or refused, or skipped because its bytes are known. */
-    private record Read(Path file, String sha256, OpenedResponse opened, String contentSha256, FormatRefusal refusal,
+    private record Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
             IOException failure, boolean known) {
     }
 
@@ -126,7 +127,9 @@ public final class Collector {
             }
             try {
                 OpenedResponse opened = reader.open(file);
-                return new Read(file, sha, opened, contentSha256(opened), null, null, false);
+                // digest and row rendering here, on the reading threads, so the single writer only stores
+                return new Read(file, sha, opened, SittingRecord.of(opened, contentSha256(opened), file.toString()),
+                        null, null, false);
             } catch (FormatRefusal refusal) {
                 return new Read(file, sha, null, null, refusal, null, false);
             }
@@ -181,10 +184,10 @@ public final class Collector {
             return refuse(r, "form-mismatch", name + ": " + mismatch + ". The client that wrote it did not follow the"
                     + " signed bundle; keep the file and report it");
         }
-        if (store.sittingByContent(d.packageId(), r.contentSha256()).isPresent()) {
+        if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()) {
             return new Outcome.SameAsImported(name, d.packageId());
         }
-        store.importSitting(opened, r.contentSha256(), name);
+        store.importSitting(r.record());
         boolean onRoster = bundle.roster().isEmpty()
                 || bundle.roster().stream().anyMatch(e -> e.candidateNumber().equals(d.candidateNumber()));
         return new Outcome.Imported(name, d.candidateNumber(), d.formId(), d.packageId(), opened.installationFingerprint(),

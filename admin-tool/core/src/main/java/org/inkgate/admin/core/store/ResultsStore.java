@@ -39,7 +39,12 @@ public interface ResultsStore extends AutoCloseable {
     Optional<Long> sittingByContent(String packageId, String contentSha256) throws StoreException;
 
     /** Imports one opened package in one transaction; returns the new sitting id. */
-    long importSitting(OpenedResponse opened, String contentSha256, String sourceFile) throws StoreException;
+    long importSitting(SittingRecord sitting) throws StoreException;
+
+    /** Imports one opened package in one transaction; returns the new sitting id. */
+    default long importSitting(OpenedResponse opened, String contentSha256, String sourceFile) throws StoreException {
+        return importSitting(SittingRecord.of(opened, contentSha256, sourceFile));
+    }
 
     /** Records a refused file once per file and reason. */
     void recordRefusal(String fileSha256, String sourceFile, String reason, String message) throws StoreException;

@@ -239,7 +239,10 @@ public final class SqliteResultsStore implements ResultsStore {
     }
 
     @Override
-    public long importSitting(OpenedResponse opened, String contentSha256, String sourceFile) throws StoreException {
+    public long importSitting(SittingRecord record) throws StoreException {
+        OpenedResponse opened = record.opened();
+        String contentSha256 = record.contentSha256();
+        String sourceFile = record.sourceFile();
         ResponseDocument d = opened.response();
         return tx("importing " + sourceFile, () -> {
             long sitting;
@@ -277,7 +280,7 @@ public final class SqliteResultsStore implements ResultsStore {
                             sitting, q.questionnaireId(), a.getKey(), a.getValue());
                 }
             }
-            insertEvents(sitting, opened.events());
+            insertEvents(sitting, record);
             return sitting;
         });
     }
@@ -286,37 +289,41 @@ public final class SqliteResultsStore implements ResultsStore {
     private static final int EVENT_ROWS_PER_STATEMENT = 200;
 
     /** Many rows per statement: one native step per 200 events instead of one per event. */
-    private void insertEvents(long sitting, List<ProcessEvent> events) throws SQLException {
+    private void insertEvents(long sitting, SittingRecord record) throws SQLException {
+        List<ProcessEvent> events = record.opened().events();
         String row = "(?,?,?,?,?,?,?)";
-        String full = "INSERT INTO process_events(sitting_id, seq, at, mono, type, task_id, data_json) VALUES "
-                + String.join(",", java.util.Collections.nCopies(EVENT_ROWS_PER_STATEMENT, row));
-        try (PreparedStatement ps = c.prepareStatement(full)) {
+        String insert = "INSERT INTO process_events(sitting_id, seq, at, mono, type, task_id, data_json) VALUES ";
+        try (PreparedStatement ps = c.prepareStatement(insert
+                + String.join(",", java.util.Collections.nCopies(EVENT_ROWS_PER_STATEMENT, row)))) {
             int i = 0;
             for (; i + EVENT_ROWS_PER_STATEMENT <= events.size(); i += EVENT_ROWS_PER_STATEMENT) {
-                bindEvents(ps, sitting, events.subList(i, i + EVENT_ROWS_PER_STATEMENT));
+                bindEvents(ps, sitting, record, i, EVENT_ROWS_PER_STATEMENT);
                 ps.executeUpdate();
             }
             if (i < events.size()) {
-                List<ProcessEvent> rest = events.subList(i, events.size());
-                try (PreparedStatement last = c.prepareStatement("INSERT INTO process_events(sitting_id, seq, at, mono,"
-                        + " type, task_id, data_json) VALUES " + String.join(",", java.util.Collections.nCopies(rest.size(), row)))) {
-                    bindEvents(last, sitting, rest);
+                int rest = events.size() - i;
+                try (PreparedStatement last = c.prepareStatement(insert
+                        + String.join(",", java.util.Collections.nCopies(rest, row)))) {
+                    bindEvents(last, sitting, record, i, rest);
                     last.executeUpdate();
                 }
             }
         }
     }
 
-    private static void bindEvents(PreparedStatement ps, long sitting, List<ProcessEvent> events) throws SQLException {
+    private static void bindEvents(PreparedStatement ps, long sitting, SittingRecord record, int from, int count)
+            throws SQLException {
+        List<ProcessEvent> events = record.opened().events();
         int p = 1;
-        for (ProcessEvent e : events) {
+        for (int i = from; i < from + count; i++) {
+            ProcessEvent e = events.get(i);
             ps.setLong(p++, sitting);
             ps.setLong(p++, e.seq());
-            ps.setString(p++, e.at().toString());
+            ps.setString(p++, record.eventAt()[i]);
             ps.setLong(p++, e.mono());
             ps.setString(p++, e.type());
             ps.setString(p++, e.task());
-            ps.setString(p++, new String(Json.writeLine(e.data()), StandardCharsets.UTF_8));
+            ps.setString(p++, record.eventData()[i]);
         }
     }
 
