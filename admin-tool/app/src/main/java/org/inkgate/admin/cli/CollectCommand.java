@@ -77,6 +77,10 @@ final class CollectCommand implements Callable<Integer> {
     @Option(names = "--exam", paramLabel = "EXAM_DIR", description = "exam source: adds its rubric to the store")
     Path examSource;
 
+    @Option(names = "--assignment", paramLabel = "CSV", description = "the assignment table the bundle was built with:"
+            + " records its seed in the store")
+    Path assignment;
+
     @Option(names = "--threads", paramLabel = "N", description = "packages opened in parallel (default: processors)")
     int threads = Runtime.getRuntime().availableProcessors();
 
@@ -129,6 +133,18 @@ final class CollectCommand implements Callable<Integer> {
             }
             if (exam != null && exam.rubric() != null) {
                 store.registerRubric(exam.examId(), exam.rubric());
+            }
+            if (assignment != null) {
+                long seed;
+                try {
+                    seed = org.inkgate.admin.core.forms.AssignmentTable.read(assignment).seed();
+                } catch (InvalidSourceException e) {
+                    err.println(e.getMessage());
+                    return InkgateAdmin.PROBLEMS;
+                }
+                for (BundleManifest m : bundles.values()) {
+                    store.recordAssignmentRun(m.examId(), seed, "assignment table " + assignment.getFileName());
+                }
             }
             List<Path> files = Collector.packageFiles(roots);
             w.println("Collecting " + files.size() + " package files into " + storeFile + " ...");

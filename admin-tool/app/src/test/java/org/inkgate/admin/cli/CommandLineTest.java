@@ -79,7 +79,7 @@ class CommandLineTest {
         Run collect = admin("collect", responses, "--store", store, "--bundle", bundle, "--keys", keys,
                 "--installations", Path.of(responses, "installations.txt").toString(),
                 "--roster", DEMO.resolve("roster.csv").toString(), "--exam", DEMO.resolve("exam-source").toString(),
-                "--passphrase-env", "TEST_PASSPHRASE");
+                "--assignment", assignment, "--passphrase-env", "TEST_PASSPHRASE");
         assertEquals(InkgateAdmin.ATTENTION, collect.code(), collect.out());
         assertTrue(collect.out().contains("Imported 11,"), collect.out());
         assertTrue(collect.out().contains("candidate H1004 (level B1): no response package"), collect.out());
@@ -87,6 +87,12 @@ class CommandLineTest {
         Run again = admin("collect", responses, "--store", store, "--bundle", bundle, "--keys", keys,
                 "--installations", Path.of(responses, "installations.txt").toString(), "--passphrase-env", "TEST_PASSPHRASE");
         assertTrue(again.out().contains("Imported 0, already imported (same file) 11"), again.out());
+
+        try (var c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + store); var st = c.createStatement();
+                var rs = st.executeQuery("SELECT seed FROM form_assignment_runs")) {
+            assertTrue(rs.next());
+            assertEquals(20261202L, rs.getLong(1), "the seed given to forms is recorded in the store");
+        }
 
         Run missing = admin("missing", "--store", store);
         assertEquals(InkgateAdmin.ATTENTION, missing.code());
