@@ -4,7 +4,6 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.keys.OwnerKeyStore;
-import org.inkgate.format.archive.ArchiveLimits;
 import org.inkgate.format.archive.SafeZipReader;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.BundleReader;
@@ -126,9 +125,5 @@ final class InspectCommand implements Callable<Integer> {
         }
         w.println("  events         " + r.events().size());
         return InkgateAdmin.OK;
-    }
-
-    static ArchiveLimits limits() {
-        return ArchiveLimits.defaults();
     }
 }

@@ -222,8 +222,7 @@ public final class ExamSourceReader {
                 Map<String, ResourcePolicy> perTask = new LinkedHashMap<>();
                 JsonNode pt = n.get("perTask");
                 if (pt != null && c.isObject(pt, ca.child("perTask"), false)) {
-                    for (var it = pt.fields(); it.hasNext();) {
-                        var e = it.next();
+                    for (var e : pt.properties()) {
                         At pa = ca.child("perTask").child(e.getKey());
                         if (!taskIds.contains(e.getKey())) {
                             c.problem(pa, "names task \"" + e.getKey() + "\", which is not among the tasks; use one of " + taskIds);

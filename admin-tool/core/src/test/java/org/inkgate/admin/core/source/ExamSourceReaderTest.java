@@ -66,6 +66,22 @@ class ExamSourceReaderTest {
     }
 
     @Test
+    void read_perTaskPolicy_overridesTheConditionForThatTaskOnly() throws Exception {
+        ExamFolders.valid(dir);
+        Files.writeString(dir.resolve("exam.yaml"), Files.readString(dir.resolve("exam.yaml")).replace(
+                "      glossary: test-glossary\n",
+                "      glossary: test-glossary\n    perTask:\n      t2: {spelling: underline-only}\n"));
+        ExamSource exam = ExamSourceReader.read(dir);
+        ExamSource.Condition with = exam.conditions().get(0);
+        assertEquals(SpellingMode.SUGGESTIONS, with.policyFor("t1").spelling());
+        assertEquals(SpellingMode.UNDERLINE_ONLY, with.policyFor("t2").spelling());
+        assertEquals(null, with.policyFor("t2").glossaryPack(), "a per-task policy is written out in full");
+        var slot = org.inkgate.admin.core.forms.FormDesigner.forms(exam).stream().flatMap(f -> f.slots().stream())
+                .filter(s -> s.taskId().equals("t2") && s.conditionId().equals("c1")).findFirst().orElseThrow();
+        assertEquals(SpellingMode.UNDERLINE_ONLY, slot.policy().spelling());
+    }
+
+    @Test
     void check_unquotedYesNoLabels_explainYamlBooleans() throws Exception {
         ExamFolders.valid(dir);
         Files.writeString(dir.resolve("exam.yaml"), Files.readString(dir.resolve("exam.yaml"))
