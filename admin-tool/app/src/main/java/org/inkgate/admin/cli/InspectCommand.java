@@ -84,7 +84,9 @@ final class InspectCommand implements Callable<Integer> {
                 StringBuilder s = new StringBuilder("  form           " + f.id() + ":");
                 for (FormSlot slot : f.slots()) {
                     s.append(' ').append(slot.taskId()).append('[').append(slot.conditionId()).append(", tools ")
-                            .append(slot.policy().offeredTools().isEmpty() ? "none" : slot.policy().offeredTools()).append(']');
+                            .append(slot.policy().offeredTools().isEmpty() ? "none" : String.join(" ", slot.policy().offeredTools()
+                                    .stream().sorted().map(t -> t.name().toLowerCase(java.util.Locale.ROOT)).toList()))
+                            .append(']');
                 }
                 w.println(s);
             }
@@ -121,7 +123,9 @@ final class InspectCommand implements Callable<Integer> {
         w.println("  submitted      " + d.submittedAt());
         for (TaskResponse t : d.tasks()) {
             w.println("  task           " + t.taskId() + " [" + t.conditionId() + "] " + t.wordCount() + " words, ended "
-                    + t.endReason().name().toLowerCase(java.util.Locale.ROOT) + ", tools offered " + t.toolsOffered());
+                    + t.endReason().name().toLowerCase(java.util.Locale.ROOT) + ", tools offered "
+                    + (t.toolsOffered().isEmpty() ? "none" : String.join(" ", t.toolsOffered().stream().sorted()
+                            .map(x -> x.name().toLowerCase(java.util.Locale.ROOT)).toList())));
         }
         w.println("  events         " + r.events().size());
         return InkgateAdmin.OK;
