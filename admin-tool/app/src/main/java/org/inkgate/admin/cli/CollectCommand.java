@@ -1,0 +1,202 @@
+package org.inkgate.admin.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.concurrent.Callable;
+import java.util.stream.Collectors;
+import org.inkgate.admin.core.collection.Collector;
+import org.inkgate.admin.core.collection.MissingReport;
+import org.inkgate.admin.core.collection.Outcome;
+import org.inkgate.admin.core.keys.OwnerKeyStore;
+import org.inkgate.admin.core.roster.RosterReader;
+import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.admin.core.source.ExamSourceReader;
+import org.inkgate.admin.core.source.InvalidSourceException;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.Rows;
+import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.format.bundle.BundleManifest;
+import org.inkgate.format.bundle.BundleReader;
+import org.inkgate.format.bundle.OpenedBundle;
+import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.trust.TrustPolicy;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code collect}: imports response packages into the results store and reports what is missing. */
+@Command(name = "collect", description = "Import response packages (.inkresp) from folders or files into the results"
+        + " store: one transaction per package; safe to rerun. Then report refusals, conflicts and missing responses.")
+final class CollectCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(paramLabel = "FOLDER", arity = "1..*", description = "folders (searched recursively) or .inkresp files")
+    List<Path> roots;
+
+    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store (SQLite; created)")
+    Path storeFile;
+
+    @Option(names = "--bundle", required = true, paramLabel = "FILE", description = "the bundle(s) of the sitting")
+    List<Path> bundleFiles;
+
+    @Option(names = "--keys", required = true, paramLabel = "DIR", description = "the owner key folder")
+    Path keys;
+
+    @Option(names = "--passphrase-env", paramLabel = "VAR", description = "environment variable holding the key passphrase")
+    String passphraseEnv;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Trust trust;
+
+    /** Which client installations' signatures are accepted. */
+    static final class Trust {
+        @Option(names = "--installations", paramLabel = "FILE", description = "fingerprints of the installations enrolled"
+                + " for the sitting, one per line")
+        Path installations;
+
+        @Option(names = "--any-installation", description = "accept any installation and list each package's"
+                + " installation fingerprint for checking against the seat records")
+        boolean any;
+    }
+
+    @Option(names = "--roster", paramLabel = "CSV", description = "roster CSV: adds levels, first languages and personal"
+            + " fields to the store")
+    Path roster;
+
+    @Option(names = "--exam", paramLabel = "EXAM_DIR", description = "exam source: adds its rubric to the store")
+    Path examSource;
+
+    @Option(names = "--assignment", paramLabel = "CSV", description = "the assignment table the bundle was built with:"
+            + " records its seed in the store")
+    Path assignment;
+
+    @Option(names = "--threads", paramLabel = "N", description = "packages opened in parallel (default: processors)")
+    int threads = Runtime.getRuntime().availableProcessors();
+
+    @Override
+    public Integer call() throws Exception {
+        PrintWriter w = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        OwnerKeyStore keyStore = new OwnerKeyStore(keys);
+        TrustPolicy installations;
+        if (trust.any) {
+            installations = TrustPolicy.anySigner();
+        } else {
+            Set<String> prints = Files.readAllLines(trust.installations).stream().map(String::strip)
+                    .filter(l -> !l.isEmpty() && !l.startsWith("#")).collect(Collectors.toSet());
+            installations = TrustPolicy.trusting(prints);
+        }
+        ExamSource exam = null;
+        try {
+            if (examSource != null) {
+                exam = ExamSourceReader.read(examSource);
+            }
+        } catch (InvalidSourceException e) {
+            err.println(e.getMessage());
+            return InkgateAdmin.PROBLEMS;
+        }
+        char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
+        var encryptionKey = keyStore.encryptionKey(pass);
+        try (ResultsStore store = SqliteResultsStore.open(storeFile)) {
+            Map<String, BundleManifest> bundles = new HashMap<>();
+            TrustPolicy owner = TrustPolicy.trusting(Set.of(keyStore.publicKeys().signingFingerprint()));
+            for (Path f : bundleFiles) {
+                try (OpenedBundle b = new BundleReader(owner).open(f)) {
+                    store.registerBundle(b.manifest(), b.manifestSha256(), b.signerFingerprint());
+                    bundles.put(b.manifestSha256(), b.manifest());
+                } catch (FormatRefusal refusal) {
+                    err.println("The bundle " + f + " is refused: " + refusal.getMessage());
+                    return InkgateAdmin.PROBLEMS;
+                }
+            }
+            if (roster != null) {
+                try {
+                    var candidates = RosterReader.read(roster);
+                    for (String examId : bundles.values().stream().map(BundleManifest::examId).distinct().toList()) {
+                        store.registerRoster(examId, candidates);
+                    }
+                } catch (InvalidSourceException e) {
+                    err.println(e.getMessage());
+                    return InkgateAdmin.PROBLEMS;
+                }
+            }
+            if (exam != null && exam.rubric() != null) {
+                store.registerRubric(exam.examId(), exam.rubric());
+            }
+            if (assignment != null) {
+                long seed;
+                try {
+                    seed = org.inkgate.admin.core.forms.AssignmentTable.read(assignment).seed();
+                } catch (InvalidSourceException e) {
+                    err.println(e.getMessage());
+                    return InkgateAdmin.PROBLEMS;
+                }
+                for (BundleManifest m : bundles.values()) {
+                    store.recordAssignmentRun(m.examId(), seed, "assignment table " + assignment.getFileName());
+                }
+            }
+            List<Path> files = Collector.packageFiles(roots);
+            w.println("Collecting " + files.size() + " package files into " + storeFile + " ...");
+            w.flush();
+            Collector collector = new Collector(store, encryptionKey, installations, bundles, threads);
+            List<Outcome> outcomes = collector.collect(files, o -> {
+                if (o instanceof Outcome.Refused r) {
+                    err.println("REFUSED " + r.file() + " (" + r.reason() + "): " + r.message());
+                    err.flush();
+                }
+            });
+            return report(w, store, outcomes, bundles, trust.any);
+        }
+    }
+
+    private int report(PrintWriter w, ResultsStore store, List<Outcome> outcomes, Map<String, BundleManifest> bundles,
+            boolean anyInstallation) throws Exception {
+        Map<String, Integer> kinds = new TreeMap<>();
+        outcomes.forEach(o -> kinds.merge(o.getClass().getSimpleName(), 1, Integer::sum));
+        w.println("Imported " + kinds.getOrDefault("Imported", 0) + ", already imported (same file) "
+                + kinds.getOrDefault("AlreadyImported", 0) + ", copies of imported packages "
+                + kinds.getOrDefault("SameAsImported", 0) + ", refused " + kinds.getOrDefault("Refused", 0) + ".");
+        boolean attention = kinds.containsKey("Refused");
+        List<String> offRoster = new ArrayList<>();
+        Map<String, Integer> byInstallation = new TreeMap<>();
+        for (Outcome o : outcomes) {
+            if (o instanceof Outcome.Imported i) {
+                byInstallation.merge(i.installation(), 1, Integer::sum);
+                if (!i.onRoster()) {
+                    offRoster.add(i.candidateNumber() + " (" + i.file() + ")");
+                }
+            }
+        }
+        if (!offRoster.isEmpty()) {
+            attention = true;
+            w.println("Imported but NOT on the bundle's roster (kept; check the candidate numbers): " + offRoster);
+        }
+        if (anyInstallation && !byInstallation.isEmpty()) {
+            w.println("Installations that signed the packages imported now (compare with the seat records):");
+            byInstallation.forEach((k, v) -> w.println("  " + k + "  " + v + " package" + (v == 1 ? "" : "s")));
+        }
+        for (String examId : bundles.values().stream().map(BundleManifest::examId).distinct().sorted().toList()) {
+            List<Rows.Conflict> conflicts = store.conflicts(examId);
+            if (!conflicts.isEmpty()) {
+                attention = true;
+                w.println("CONFLICTS in " + examId + " (more than one response for a candidate and task; all are kept,"
+                        + " decide under your regulations which counts):");
+                conflicts.forEach(c -> w.println("  candidate " + c.candidateNumber() + ", task " + c.taskId() + ": "
+                        + c.copies() + " responses, packages " + c.packageIds()));
+            }
+            attention |= MissingCommand.print(w, MissingReport.of(store, examId));
+        }
+        return attention ? InkgateAdmin.ATTENTION : InkgateAdmin.OK;
+    }
+}

@@ -1,0 +1,65 @@
+package org.inkgate.admin.cli;
+
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+
+/**
+ * The {@code inkgate-admin} command line: one subcommand per step from exam source to results.
+ * Every subcommand prints through picocli's writers and returns an exit code: 0 done, 1 the
+ * input has problems (listed), 2 wrong usage, 3 done but something needs attention (refused
+ * packages, conflicts, missing responses).
+ */
+@Command(name = "inkgate-admin", mixinStandardHelpOptions = true, versionProvider = InkgateAdmin.Version.class,
+        description = "Prepare, bundle and collect Inkgate writing exams.",
+        subcommands = {
+            // one line per command; the lead adds analyse and pack here
+            KeysCommand.class,
+            ExamCommand.class,
+            FormsCommand.class,
+            RosterCommand.class,
+            BundleCommand.class,
+            InspectCommand.class,
+            CollectCommand.class,
+            MissingCommand.class,
+            ExportCommand.class,
+            CommandLine.HelpCommand.class,
+        })
+public final class InkgateAdmin {
+
+    public static final int OK = 0;
+    public static final int PROBLEMS = 1;
+    public static final int ATTENTION = 3;
+
+    /** Reports the build's version. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = InkgateAdmin.class.getPackage().getImplementationVersion();
+            return new String[] {"inkgate-admin " + (v == null ? "(development build)" : v)};
+        }
+    }
+
+    /** A configured command line, for the launcher and for tests. */
+    public static CommandLine commandLine() {
+        CommandLine cl = new CommandLine(new InkgateAdmin());
+        cl.setExecutionExceptionHandler((e, cmd, parsed) -> {
+            // expected failures (files, keys, store) carry a message meant for people: no stack trace
+            boolean expected = e instanceof java.io.IOException || e instanceof IllegalArgumentException
+                    || e instanceof org.inkgate.admin.core.store.StoreException
+                    || e instanceof org.inkgate.admin.core.keys.EncryptedKeys.WrongPassphraseException
+                    || e instanceof org.inkgate.format.refusal.FormatRefusal;
+            cmd.getErr().println("inkgate-admin " + cmd.getCommandName() + ": " + (expected ? "" : e.getClass().getName()
+                    + ": ") + e.getMessage());
+            if (!expected) {
+                e.printStackTrace(cmd.getErr());
+            }
+            cmd.getErr().println("Nothing was changed by the step that failed.");
+            return PROBLEMS;
+        });
+        return cl;
+    }
+
+    public static void main(String[] args) {
+        System.exit(commandLine().execute(args));
+    }
+}

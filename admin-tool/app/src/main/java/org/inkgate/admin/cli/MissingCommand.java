@@ -1,0 +1,58 @@
+package org.inkgate.admin.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.inkgate.admin.core.collection.MissingReport;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.SqliteResultsStore;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code missing}: who on the roster has no response, per form. */
+@Command(name = "missing", description = "Report, per form, who on the roster has no response in the results store.")
+final class MissingCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store")
+    Path storeFile;
+
+    @Option(names = "--exam-id", paramLabel = "ID", description = "only this exam (default: every exam in the store)")
+    String examId;
+
+    @Override
+    public Integer call() throws Exception {
+        boolean attention = false;
+        try (ResultsStore store = SqliteResultsStore.open(storeFile)) {
+            List<String> exams = examId != null ? List.of(examId) : store.examIds();
+            for (String id : exams) {
+                attention |= print(spec.commandLine().getOut(), MissingReport.of(store, id));
+            }
+        }
+        return attention ? InkgateAdmin.ATTENTION : InkgateAdmin.OK;
+    }
+
+    /** Prints the report; true when something is missing. */
+    static boolean print(PrintWriter w, MissingReport r) {
+        w.println("Missing responses in " + r.examId() + " (" + r.rosterSize() + " on the roster):");
+        if (r.missingCount() == 0 && r.withoutForm().isEmpty()) {
+            w.println("  none: every candidate on the roster has a response to every task of their form.");
+            return false;
+        }
+        r.byForm().forEach((form, list) -> {
+            w.println("  form " + form + ": " + (list.isEmpty() ? "none missing" : list.size() + " missing"));
+            list.forEach(m -> w.println("    candidate " + m.candidateNumber() + (m.level() == null ? "" : " (level "
+                    + m.level() + ")") + (m.taskId() == null ? ": no response package" : ": no response to task " + m.taskId())));
+        });
+        if (!r.withoutForm().isEmpty()) {
+            w.println("  on the roster without a form in the bundle: " + r.withoutForm());
+        }
+        w.println("  This report cannot tell why a response is missing (absence, a package not yet collected, a");
+        w.println("  machine failure). Look for the client's local copy before concluding, and follow your regulations.");
+        return true;
+    }
+}

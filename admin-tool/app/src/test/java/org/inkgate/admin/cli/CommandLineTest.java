@@ -1,0 +1,130 @@
+package org.inkgate.admin.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Runs the real command line in separate processes, as a test owner would, over the invented demo
+ * exam source: keys, exam check, forms, roster, bundle, simulated sitting, collect, missing, export.
+ */
+class CommandLineTest {
+
+    private static final Path DEMO = Path.of("src/demo");
+
+    @TempDir
+    Path dir;
+
+    /** Output and exit code of one run. */
+    record Run(int code, String out) {
+    }
+
+    private Run run(String mainClass, String... args) throws Exception {
+        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "--enable-native-access=ALL-UNNAMED", "-cp", System.getProperty("java.class.path"), mainClass));
+        command.addAll(List.of(args));
+        ProcessBuilder pb = new ProcessBuilder(command).redirectErrorStream(true);
+        pb.environment().put("TEST_PASSPHRASE", "invented passphrase for the demo");
+        pb.environment().put("TEST_PIN", "invented-pin-8642");
+        Process p = pb.start();
+        String out = new String(p.getInputStream().readAllBytes(), java.nio.charset.StandardCharsets.UTF_8);
+        assertTrue(p.waitFor(120, TimeUnit.SECONDS));
+        return new Run(p.exitValue(), out);
+    }
+
+    private Run admin(String... args) throws Exception {
+        return run(InkgateAdmin.class.getName(), args);
+    }
+
+    @Test
+    void demoWalkthrough_emptyFolderToCollectedStore_reportsTheMissingCandidate() throws Exception {
+        String keys = dir.resolve("keys").toString();
+        Run init = admin("keys", "init", "--keys", keys, "--passphrase-env", "TEST_PASSPHRASE");
+        assertEquals(0, init.code(), init.out());
+        assertTrue(init.out().contains("signing key (Ed25519)"), init.out());
+
+        Run check = admin("exam", "check", DEMO.resolve("exam-source").toString());
+        assertEquals(0, check.code(), check.out());
+        assertTrue(check.out().contains("no problems found"));
+
+        String assignment = dir.resolve("assignment.csv").toString();
+        Run forms = admin("forms", DEMO.resolve("exam-source").toString(), "--roster", DEMO.resolve("roster.csv").toString(),
+                "--seed", "20261202", "--out", assignment);
+        assertEquals(0, forms.code(), forms.out());
+        assertTrue(forms.out().contains("ferry-complaint:  with-resources=6  without-resources=6"), forms.out());
+
+        String bundle = dir.resolve("demo.inkexam").toString();
+        Run built = admin("bundle", DEMO.resolve("exam-source").toString(), "--out", bundle, "--keys", keys,
+                "--roster", DEMO.resolve("roster.csv").toString(), "--assignment", assignment,
+                "--passphrase-env", "TEST_PASSPHRASE", "--pin-env", "TEST_PIN");
+        assertEquals(0, built.code(), built.out());
+
+        Run inspect = admin("inspect", bundle, "--keys", keys);
+        assertEquals(0, inspect.code(), inspect.out());
+        assertTrue(inspect.out().contains("matches your signing key"), inspect.out());
+
+        String responses = dir.resolve("responses").toString();
+        Run simulated = run("org.inkgate.admin.demo.SimulateDemoSitting", bundle, "--keys", keys, "--out", responses,
+                "--leave-out", "H1004", "--events", "100");
+        assertEquals(0, simulated.code(), simulated.out());
+
+        String store = dir.resolve("results.db").toString();
+        Run collect = admin("collect", responses, "--store", store, "--bundle", bundle, "--keys", keys,
+                "--installations", Path.of(responses, "installations.txt").toString(),
+                "--roster", DEMO.resolve("roster.csv").toString(), "--exam", DEMO.resolve("exam-source").toString(),
+                "--assignment", assignment, "--passphrase-env", "TEST_PASSPHRASE");
+        assertEquals(InkgateAdmin.ATTENTION, collect.code(), collect.out());
+        assertTrue(collect.out().contains("Imported 11,"), collect.out());
+        assertTrue(collect.out().contains("candidate H1004 (level B1): no response package"), collect.out());
+
+        Run again = admin("collect", responses, "--store", store, "--bundle", bundle, "--keys", keys,
+                "--installations", Path.of(responses, "installations.txt").toString(), "--passphrase-env", "TEST_PASSPHRASE");
+        assertTrue(again.out().contains("Imported 0, already imported (same file) 11"), again.out());
+
+        try (var c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + store); var st = c.createStatement();
+                var rs = st.executeQuery("SELECT seed FROM form_assignment_runs")) {
+            assertTrue(rs.next());
+            assertEquals(20261202L, rs.getLong(1), "the seed given to forms is recorded in the store");
+        }
+
+        Run missing = admin("missing", "--store", store);
+        assertEquals(InkgateAdmin.ATTENTION, missing.code());
+        assertTrue(missing.out().contains("H1004"));
+
+        Run export = admin("export", "--store", store, "--out", dir.resolve("export").toString());
+        assertEquals(0, export.code(), export.out());
+        assertTrue(Files.exists(dir.resolve("export/demo-harbourside-placement/csv/responses.csv")));
+        assertEquals(11, Files.list(dir.resolve("export/demo-harbourside-placement/qti-results")).count());
+    }
+
+    @Test
+    void examCheck_brokenSource_exitsOneAndListsProblemsWithLines() throws Exception {
+        Path src = dir.resolve("broken");
+        Files.createDirectories(src);
+        Files.writeString(src.resolve("exam.yaml"), "id: x\ntitle: Invented\nlanguage: en-GB\ntasks: []\nconditions: []\n");
+        Run check = admin("exam", "check", src.toString());
+        assertEquals(InkgateAdmin.PROBLEMS, check.code(), check.out());
+        assertTrue(check.out().contains("exam.yaml:4:8: tasks: lists no task"), check.out());
+        assertTrue(check.out().contains("design: is missing"), check.out());
+    }
+
+    @Test
+    void collect_wrongPassphrase_saysSoWithoutAStackTrace() throws Exception {
+        String keys = dir.resolve("keys").toString();
+        assertEquals(0, admin("keys", "init", "--keys", keys, "--passphrase-env", "TEST_PASSPHRASE").code());
+        Run bad = admin("inspect", DEMO.resolve("roster.csv").toString());
+        assertEquals(2, bad.code(), bad.out());
+        Run wrong = admin("collect", dir.toString(), "--store", dir.resolve("r.db").toString(), "--bundle",
+                dir.resolve("none.inkexam").toString(), "--keys", keys, "--any-installation", "--passphrase-env", "TEST_PIN");
+        assertEquals(InkgateAdmin.PROBLEMS, wrong.code(), wrong.out());
+        assertTrue(wrong.out().contains("the passphrase does not open this key"), wrong.out());
+        assertTrue(!wrong.out().contains("\tat "), "no stack trace: " + wrong.out());
+    }
+}

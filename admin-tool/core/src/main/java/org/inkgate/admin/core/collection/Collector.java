@@ -1,0 +1,227 @@
+package org.inkgate.admin.core.collection;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.PrivateKey;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.function.Consumer;
+import java.util.stream.Stream;
+import org.inkgate.format.bundle.BundleManifest;
+import org.inkgate.format.bundle.FormSlot;
+import org.inkgate.format.bundle.FormSpec;
+import org.inkgate.format.crypto.Sha256;
+import org.inkgate.format.json.Json;
+import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.response.OpenedResponse;
+import org.inkgate.format.response.ResponseDocument;
+import org.inkgate.format.response.ResponsePackageReader;
+import org.inkgate.format.response.TaskResponse;
+import org.inkgate.format.trust.TrustPolicy;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.SittingRecord;
+import org.inkgate.admin.core.store.StoreException;
+
+/**
+ * Imports response packages into the results store, one transaction per package. Packages are
+ * opened (decrypted, signature, digests and hash chain checked) on a few worker threads and
+ * stored in file order by the calling thread, so a killed import leaves only whole packages and
+ * a rerun imports the rest. Importing the same bytes again changes nothing; a copy with the
+ * same package id and content changes nothing; a different package for a candidate who already
+ * has one is kept beside it and shows up as a conflict; a refused package is listed with its
+ * reason and changes nothing else.
+ */
+public final class Collector {
+
+    public static final String EXTENSION = ".inkresp";
+
+    private final ResultsStore store;
+    private final ResponsePackageReader reader;
+    private final Map<String, BundleManifest> bundles;
+    private final int threads;
+
+    /**
+     * @param bundles the registered bundles by manifest SHA-256: a package must come from one of them
+     */
+    public Collector(ResultsStore store, PrivateKey ownerEncryptionKey, TrustPolicy installations,
+            Map<String, BundleManifest> bundles, int threads) {
+        this.store = store;
+        this.reader = new ResponsePackageReader(ownerEncryptionKey, installations);
+        this.bundles = Map.copyOf(bundles);
+        this.threads = Math.max(1, threads);
+    }
+
+    /** Every .inkresp file under the given files and folders, in a stable order. */
+    public static List<Path> packageFiles(List<Path> roots) throws IOException {
+        List<Path> files = new ArrayList<>();
+        for (Path root : roots) {
+            if (Files.isDirectory(root)) {
+                try (Stream<Path> walk = Files.walk(root)) {
+                    walk.filter(p -> Files.isRegularFile(p) && p.getFileName().toString().endsWith(EXTENSION))
+                            .sorted().forEach(files::add);
+                }
+            } else if (Files.isRegularFile(root)) {
+                files.add(root);
+            } else {
+                throw new IOException(root + " does not exist; name folders or " + EXTENSION + " files to collect");
+            }
+        }
+        return files;
+    }
+
+    /** A package read by a worker: opened, or refused, or skipped because its bytes are known. */
+    private record Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
+            IOException failure, boolean known) {
+    }
+
+    /** Imports the files; reports each outcome to {@code progress} as it is settled. */
+    public List<Outcome> collect(List<Path> files, Consumer<Outcome> progress) throws StoreException {
+        Set<String> known = store.importedPackageFiles();
+        List<Outcome> outcomes = new ArrayList<>();
+        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "inkgate-collect");
+            t.setDaemon(true);
+            return t;
+        });
+        try {
+            Deque<Future<Read>> window = new ArrayDeque<>();
+            int next = 0;
+            while (next < files.size() || !window.isEmpty()) {
+                while (next < files.size() && window.size() < threads * 2) {
+                    Path file = files.get(next++);
+                    window.add(pool.submit(() -> read(file, known)));
+                }
+                Read read;
+                try {
+                    read = window.removeFirst().get();
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw new StoreException("collection interrupted; imported packages are kept, rerun to finish");
+                } catch (ExecutionException e) {
+                    throw new IllegalStateException("reading a package failed unexpectedly: " + e.getCause(), e.getCause());
+                }
+                Outcome outcome = settle(read);
+                outcomes.add(outcome);
+                progress.accept(outcome);
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+        return outcomes;
+    }
+
+    private Read read(Path file, Set<String> known) {
+        try {
+            String sha = Sha256.hex(Files.readAllBytes(file));
+            if (known.contains(sha)) {
+                return new Read(file, sha, null, null, null, null, true);
+            }
+            try {
+                OpenedResponse opened = reader.open(file);
+                // digest and row rendering here, on the reading threads, so the single writer only stores
+                return new Read(file, sha, opened, SittingRecord.of(opened, contentSha256(opened), file.toString()),
+                        null, null, false);
+            } catch (FormatRefusal refusal) {
+                return new Read(file, sha, null, null, refusal, null, false);
+            }
+        } catch (IOException e) {
+            return new Read(file, null, null, null, null, e, false);
+        }
+    }
+
+    /**
+     * Names what a package says, whatever bytes carry it: the response document and every event,
+     * field by field (length-prefixed, so no two different logs feed the digest the same bytes).
+     * Cheaper than re-encoding the log as JSON lines, and equally exact.
+     */
+    static String contentSha256(OpenedResponse opened) {
+        java.security.MessageDigest digest = Sha256.newDigest();
+        update(digest, Json.writeLine(opened.response()));
+        for (org.inkgate.format.response.ProcessEvent e : opened.events()) {
+            update(digest, (e.seq() + "|" + e.at() + "|" + e.mono() + "|" + e.type() + "|" + e.task() + "|" + e.data())
+                    .getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        }
+        return org.inkgate.format.crypto.Hex.of(digest.digest());
+    }
+
+    private static void update(java.security.MessageDigest digest, byte[] bytes) {
+        int n = bytes.length;
+        digest.update(new byte[] {(byte) (n >>> 24), (byte) (n >>> 16), (byte) (n >>> 8), (byte) n});
+        digest.update(bytes);
+    }
+
+    private Outcome settle(Read r) throws StoreException {
+        String name = r.file().toString();
+        if (r.failure() != null) {
+            return new Outcome.Refused(name, "unreadable", "cannot be read: " + r.failure().getMessage()
+                    + ". Copy the file again from the candidate's machine or the invigilator's copy");
+        }
+        if (r.known() || store.sittingByPackageFile(r.sha256()).isPresent()) {
+            return new Outcome.AlreadyImported(name);
+        }
+        if (r.refusal() != null) {
+            return refuse(r, r.refusal().getClass().getSimpleName(), r.refusal().getMessage());
+        }
+        OpenedResponse opened = r.opened();
+        ResponseDocument d = opened.response();
+        BundleManifest bundle = bundles.get(d.bundleManifestSha256());
+        if (bundle == null) {
+            return refuse(r, "unknown-bundle", name + ": written from a bundle (manifest " + d.bundleManifestSha256()
+                    + ", exam \"" + d.examId() + "\") that was not given to this collection. Collect it with the bundle"
+                    + " of its sitting (--bundle); if that bundle is not yours, set the package aside");
+        }
+        String mismatch = formMismatch(bundle, d);
+        if (mismatch != null) {
+            return refuse(r, "form-mismatch", name + ": " + mismatch + ". The client that wrote it did not follow the"
+                    + " signed bundle; keep the file and report it");
+        }
+        if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()) {
+            return new Outcome.SameAsImported(name, d.packageId());
+        }
+        store.importSitting(r.record());
+        boolean onRoster = bundle.roster().isEmpty()
+                || bundle.roster().stream().anyMatch(e -> e.candidateNumber().equals(d.candidateNumber()));
+        return new Outcome.Imported(name, d.candidateNumber(), d.formId(), d.packageId(), opened.installationFingerprint(),
+                onRoster);
+    }
+
+    private Outcome refuse(Read r, String reason, String message) throws StoreException {
+        store.recordRefusal(r.sha256(), r.file().toString(), reason, message);
+        return new Outcome.Refused(r.file().toString(), reason, message);
+    }
+
+    /** The response must follow its form in the signed bundle: the same tasks, conditions and policies in order. */
+    static String formMismatch(BundleManifest bundle, ResponseDocument d) {
+        if (!bundle.examId().equals(d.examId())) {
+            return "names exam \"" + d.examId() + "\" but its bundle is of exam \"" + bundle.examId() + "\"";
+        }
+        FormSpec form = bundle.form(d.formId()).orElse(null);
+        if (form == null) {
+            return "names form \"" + d.formId() + "\", which the bundle does not have";
+        }
+        if (form.slots().size() != d.tasks().size()) {
+            return "has " + d.tasks().size() + " task responses where form " + form.id() + " has " + form.slots().size()
+                    + " tasks";
+        }
+        for (int i = 0; i < form.slots().size(); i++) {
+            FormSlot slot = form.slots().get(i);
+            TaskResponse t = d.tasks().get(i);
+            if (!slot.taskId().equals(t.taskId()) || !slot.conditionId().equals(t.conditionId())
+                    || !slot.policy().equals(t.policy())) {
+                return "task " + (i + 1) + " (" + t.taskId() + " under " + t.conditionId() + ") differs from form "
+                        + form.id() + "'s task " + (i + 1) + " (" + slot.taskId() + " under " + slot.conditionId()
+                        + ") or from its resource policy";
+            }
+        }
+        return null;
+    }
+}

@@ -1,0 +1,76 @@
+package org.inkgate.admin.core.store;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.function.Consumer;
+import org.inkgate.admin.core.roster.RosterCandidate;
+import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.format.bundle.BundleManifest;
+import org.inkgate.format.response.OpenedResponse;
+
+/**
+ * The results store as its callers see it: exams, the roster, imported sittings, refusals, and the
+ * rows exports need. The SQL lives behind this interface ({@link SqliteResultsStore}), so a server
+ * database can be added later without touching collection or exports.
+ */
+public interface ResultsStore extends AutoCloseable {
+
+    /** Records an exam and its bundle (tasks, conditions, forms with policies, the bundle's roster); repeatable. */
+    void registerBundle(BundleManifest manifest, String manifestSha256, String signerFingerprint) throws StoreException;
+
+    /** Adds the roster's levels, first languages and personal fields to the exam's candidates; repeatable. */
+    void registerRoster(String examId, List<RosterCandidate> roster) throws StoreException;
+
+    /** Records the seed and design a form assignment was made with. */
+    void recordAssignmentRun(String examId, long seed, String design) throws StoreException;
+
+    /** Records the exam's rubric (criteria and band descriptors); repeatable. */
+    void registerRubric(String examId, ExamSource.Rubric rubric) throws StoreException;
+
+    boolean hasBundle(String manifestSha256) throws StoreException;
+
+    /** The sitting imported from exactly these package bytes, if any. */
+    Optional<Long> sittingByPackageFile(String packageSha256) throws StoreException;
+
+    /** SHA-256 of every package file already imported, so a rerun skips them without decrypting. */
+    java.util.Set<String> importedPackageFiles() throws StoreException;
+
+    /** The sitting with this package id and content (a re-sent copy), if any. */
+    Optional<Long> sittingByContent(String packageId, String contentSha256) throws StoreException;
+
+    /** Imports one opened package in one transaction; returns the new sitting id. */
+    long importSitting(SittingRecord sitting) throws StoreException;
+
+    /** Imports one opened package in one transaction; returns the new sitting id. */
+    default long importSitting(OpenedResponse opened, String contentSha256, String sourceFile) throws StoreException {
+        return importSitting(SittingRecord.of(opened, contentSha256, sourceFile));
+    }
+
+    /** Records a refused file once per file and reason. */
+    void recordRefusal(String fileSha256, String sourceFile, String reason, String message) throws StoreException;
+
+    List<Rows.Refusal> refusals() throws StoreException;
+
+    List<Rows.Conflict> conflicts(String examId) throws StoreException;
+
+    List<Rows.Candidate> candidates(String examId) throws StoreException;
+
+    List<Rows.Slot> formSlots(String examId) throws StoreException;
+
+    /** (candidate, task) pairs that have at least one response. */
+    List<Rows.Answered> answered(String examId) throws StoreException;
+
+    List<String> examIds() throws StoreException;
+
+    void forEachResponse(String examId, Consumer<Rows.Response> sink) throws StoreException;
+
+    void forEachToolUse(String examId, Consumer<Rows.ToolUseRow> sink) throws StoreException;
+
+    void forEachEvent(String examId, Consumer<Rows.Event> sink) throws StoreException;
+
+    /** Row counts per table, for reports and tests. */
+    java.util.Map<String, Long> counts() throws StoreException;
+
+    @Override
+    void close() throws StoreException;
+}

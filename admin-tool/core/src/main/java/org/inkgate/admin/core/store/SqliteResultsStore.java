@@ -1,0 +1,527 @@
+package org.inkgate.admin.core.store;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.function.Consumer;
+import org.inkgate.admin.core.roster.RosterCandidate;
+import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.format.bundle.BundleManifest;
+import org.inkgate.format.bundle.FormSlot;
+import org.inkgate.format.bundle.FormSpec;
+import org.inkgate.format.bundle.RosterEntry;
+import org.inkgate.format.bundle.TaskSpec;
+import org.inkgate.format.json.Json;
+import org.inkgate.format.response.OpenedResponse;
+import org.inkgate.format.response.ProcessEvent;
+import org.inkgate.format.response.QuestionnaireAnswers;
+import org.inkgate.format.response.ResponseDocument;
+import org.inkgate.format.response.TaskResponse;
+import org.inkgate.format.response.ToolUse;
+import org.inkgate.packs.policy.ResourcePolicy;
+import org.inkgate.packs.policy.Tool;
+import org.sqlite.SQLiteConfig;
+
+/**
+ * The results store in one SQLite file: foreign keys on, write-ahead log, synchronous NORMAL, so
+ * that a committed import survives a killed process and an interrupted one leaves no trace.
+ */
+public final class SqliteResultsStore implements ResultsStore {
+
+    private final Connection c;
+    private final Map<String, Long> policyIds = new HashMap<>();
+
+    private SqliteResultsStore(Connection c) {
+        this.c = c;
+    }
+
+    /** Opens (creating if needed) the store and brings its schema to the latest version. */
+    public static SqliteResultsStore open(Path file) throws StoreException {
+        return open(file, Migrations.latest());
+    }
+
+    /** Opens the store migrated to {@code version} only: for migration tests. */
+    static SqliteResultsStore open(Path file, int version) throws StoreException {
+        try {
+            Path parent = file.toAbsolutePath().getParent();
+            if (parent != null) {
+                Files.createDirectories(parent);
+            }
+            SQLiteConfig config = new SQLiteConfig();
+            config.enforceForeignKeys(true);
+            config.setJournalMode(SQLiteConfig.JournalMode.WAL);
+            // NORMAL in WAL mode: a killed process never corrupts the store or keeps half a transaction
+            // (SQLite docs, "WAL mode" and PRAGMA synchronous); only a power cut may lose the last few
+            // commits, and a rerun of collect imports those packages again from their files. FULL
+            // costs an fsync per package, which the 1,000-package benchmark cannot afford.
+            config.setSynchronous(SQLiteConfig.SynchronousMode.NORMAL);
+            config.setCacheSize(-65536);
+            config.setBusyTimeout(10_000);
+            Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
+            Migrations.migrate(c, version);
+            return new SqliteResultsStore(c);
+        } catch (SQLException | java.io.IOException e) {
+            throw new StoreException("cannot open the results store " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    Connection connection() {
+        return c;
+    }
+
+    private interface Work<T> {
+        T run() throws SQLException;
+    }
+
+    /** Runs the work in one transaction: all of it is kept, or none. */
+    private <T> T tx(String what, Work<T> work) throws StoreException {
+        try {
+            c.setAutoCommit(false);
+            try {
+                T result = work.run();
+                c.commit();
+                return result;
+            } catch (SQLException | RuntimeException e) {
+                c.rollback();
+                policyIds.clear(); // ids cached inside the rolled-back transaction no longer exist
+                throw e;
+            } finally {
+                c.setAutoCommit(true);
+            }
+        } catch (SQLException e) {
+            throw new StoreException(what + " failed; nothing of it was stored: " + e.getMessage(), e);
+        }
+    }
+
+    private <T> T read(String what, Work<T> work) throws StoreException {
+        try {
+            return work.run();
+        } catch (SQLException e) {
+            throw new StoreException(what + " failed: " + e.getMessage(), e);
+        }
+    }
+
+    @Override
+    public void registerBundle(BundleManifest m, String manifestSha256, String signerFingerprint) throws StoreException {
+        tx("registering bundle of " + m.examId(), () -> {
+            update("INSERT OR IGNORE INTO exams(exam_id, title, language, practice) VALUES (?,?,?,?)",
+                    m.examId(), m.title(), m.language(), m.practice() ? 1 : 0);
+            update("INSERT OR IGNORE INTO bundles(manifest_sha256, exam_id, signer_fingerprint, registered_at) VALUES (?,?,?,?)",
+                    manifestSha256, m.examId(), signerFingerprint, Instant.now().toString());
+            for (TaskSpec t : m.tasks()) {
+                update("INSERT OR IGNORE INTO tasks(exam_id, task_id, title, time_limit_seconds, words_min, words_max)"
+                        + " VALUES (?,?,?,?,?,?)", m.examId(), t.id(), t.title(), t.timeLimitSeconds(),
+                        t.words() == null ? null : t.words().min(), t.words() == null ? null : t.words().max());
+            }
+            m.conditions().forEach(cd -> unchecked(() -> update(
+                    "INSERT OR IGNORE INTO conditions(exam_id, condition_id, label) VALUES (?,?,?)", m.examId(), cd.id(), cd.label())));
+            for (FormSpec f : m.forms()) {
+                update("INSERT OR IGNORE INTO forms(exam_id, form_id) VALUES (?,?)", m.examId(), f.id());
+                for (int i = 0; i < f.slots().size(); i++) {
+                    FormSlot s = f.slots().get(i);
+                    long policy = policyId(s.policy());
+                    Optional<Object[]> existing = first("SELECT task_id, condition_id, policy_id FROM form_slots"
+                            + " WHERE exam_id=? AND form_id=? AND position=?", 3, m.examId(), f.id(), i);
+                    if (existing.isPresent()) {
+                        Object[] e = existing.get();
+                        if (!s.taskId().equals(e[0]) || !s.conditionId().equals(e[1]) || policy != ((Number) e[2]).longValue()) {
+                            throw new SQLException("form " + f.id() + " of exam " + m.examId() + " differs from the form of"
+                                    + " that id in a bundle registered before; give a changed exam a new exam id or new form ids");
+                        }
+                    } else {
+                        update("INSERT INTO form_slots(exam_id, form_id, position, task_id, condition_id, policy_id)"
+                                + " VALUES (?,?,?,?,?,?)", m.examId(), f.id(), i, s.taskId(), s.conditionId(), policy);
+                    }
+                }
+            }
+            for (RosterEntry r : m.roster()) {
+                update("INSERT INTO candidates(exam_id, candidate_number, extra_time_percent, large_print, high_contrast, form_id)"
+                        + " VALUES (?,?,?,?,?,?) ON CONFLICT(exam_id, candidate_number) DO UPDATE SET"
+                        + " extra_time_percent=excluded.extra_time_percent, large_print=excluded.large_print,"
+                        + " high_contrast=excluded.high_contrast, form_id=excluded.form_id",
+                        m.examId(), r.candidateNumber(), r.extraTimePercent(), r.largePrint() ? 1 : 0,
+                        r.highContrast() ? 1 : 0, r.formId());
+            }
+            return null;
+        });
+    }
+
+    private long policyId(ResourcePolicy p) throws SQLException {
+        String json = new String(Json.writeLine(p), StandardCharsets.UTF_8);
+        Long cached = policyIds.get(json);
+        if (cached != null) {
+            return cached;
+        }
+        update("INSERT OR IGNORE INTO policy_snapshots(policy_json, spelling, glossary_pack, dictionary_pack,"
+                + " insert_from_panel, show_word_count, paste) VALUES (?,?,?,?,?,?,?)", json,
+                Json.mapper().valueToTree(p.spelling()).asText(), p.glossaryPack(), p.dictionaryPack(),
+                p.insertFromPanel() ? 1 : 0, p.showWordCount() ? 1 : 0, Json.mapper().valueToTree(p.paste()).asText());
+        long id = ((Number) first("SELECT policy_id FROM policy_snapshots WHERE policy_json=?", 1, json).orElseThrow()[0]).longValue();
+        policyIds.put(json, id);
+        return id;
+    }
+
+    @Override
+    public void registerRoster(String examId, List<RosterCandidate> roster) throws StoreException {
+        tx("registering the roster of " + examId, () -> {
+            for (RosterCandidate r : roster) {
+                update("INSERT INTO candidates(exam_id, candidate_number, level, first_language, extra_time_percent,"
+                        + " large_print, high_contrast) VALUES (?,?,?,?,?,?,?) ON CONFLICT(exam_id, candidate_number)"
+                        + " DO UPDATE SET level=excluded.level, first_language=excluded.first_language",
+                        examId, r.candidateNumber(), r.level(), r.firstLanguage(), r.extraTimePercent(),
+                        r.largePrint() ? 1 : 0, r.highContrast() ? 1 : 0);
+                for (Map.Entry<String, String> f : r.personal().entrySet()) {
+                    update("INSERT OR REPLACE INTO candidate_personal(exam_id, candidate_number, field, value) VALUES (?,?,?,?)",
+                            examId, r.candidateNumber(), f.getKey(), f.getValue());
+                }
+            }
+            return null;
+        });
+    }
+
+    @Override
+    public void recordAssignmentRun(String examId, long seed, String design) throws StoreException {
+        tx("recording the form assignment", () -> update("INSERT OR IGNORE INTO form_assignment_runs(exam_id, seed, design,"
+                + " recorded_at) VALUES (?,?,?,?)", examId, seed, design, Instant.now().toString()));
+    }
+
+    @Override
+    public void registerRubric(String examId, ExamSource.Rubric rubric) throws StoreException {
+        tx("registering the rubric of " + examId, () -> {
+            for (ExamSource.Criterion cr : rubric.criteria()) {
+                update("INSERT OR REPLACE INTO rubric_criteria(exam_id, criterion_id, name, min_score, max_score)"
+                        + " VALUES (?,?,?,?,?)", examId, cr.id(), cr.name(), cr.minScore(), cr.maxScore());
+                update("DELETE FROM rubric_bands WHERE exam_id=? AND criterion_id=?", examId, cr.id());
+                for (ExamSource.Band b : cr.bands()) {
+                    update("INSERT INTO rubric_bands(exam_id, criterion_id, from_score, to_score, descriptor) VALUES (?,?,?,?,?)",
+                            examId, cr.id(), b.from(), b.to(), b.descriptor());
+                }
+            }
+            return null;
+        });
+    }
+
+    @Override
+    public boolean hasBundle(String manifestSha256) throws StoreException {
+        return read("looking up a bundle", () -> first("SELECT 1 FROM bundles WHERE manifest_sha256=?", 1, manifestSha256)
+                .isPresent());
+    }
+
+    @Override
+    public Optional<Long> sittingByPackageFile(String packageSha256) throws StoreException {
+        return read("looking up a package", () -> first("SELECT sitting_id FROM sittings WHERE package_sha256=?", 1,
+                packageSha256).map(r -> ((Number) r[0]).longValue()));
+    }
+
+    @Override
+    public java.util.Set<String> importedPackageFiles() throws StoreException {
+        return read("listing imported packages", () -> new java.util.HashSet<>(list("SELECT package_sha256 FROM sittings",
+                rs -> rs.getString(1))));
+    }
+
+    @Override
+    public Optional<Long> sittingByContent(String packageId, String contentSha256) throws StoreException {
+        return read("looking up a package", () -> first("SELECT sitting_id FROM sittings WHERE package_id=? AND content_sha256=?",
+                1, packageId, contentSha256).map(r -> ((Number) r[0]).longValue()));
+    }
+
+    @Override
+    public long importSitting(SittingRecord record) throws StoreException {
+        OpenedResponse opened = record.opened();
+        String contentSha256 = record.contentSha256();
+        String sourceFile = record.sourceFile();
+        ResponseDocument d = opened.response();
+        return tx("importing " + sourceFile, () -> {
+            long sitting;
+            try (PreparedStatement ps = c.prepareStatement("INSERT INTO sittings(package_sha256, package_id, content_sha256,"
+                    + " exam_id, bundle_manifest_sha256, candidate_number, form_id, seat, client_version,"
+                    + " installation_fingerprint, started_at, submitted_at, source_file, imported_at)"
+                    + " VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?)", Statement.RETURN_GENERATED_KEYS)) {
+                bind(ps, opened.packageSha256(), d.packageId(), contentSha256, d.examId(), d.bundleManifestSha256(),
+                        d.candidateNumber(), d.formId(), d.seat(), d.clientVersion(), opened.installationFingerprint(),
+                        str(d.startedAt()), str(d.submittedAt()), sourceFile, Instant.now().toString());
+                ps.executeUpdate();
+                try (ResultSet keys = ps.getGeneratedKeys()) {
+                    keys.next();
+                    sitting = keys.getLong(1);
+                }
+            }
+            for (int i = 0; i < d.tasks().size(); i++) {
+                TaskResponse t = d.tasks().get(i);
+                update("INSERT INTO responses(sitting_id, task_id, position, condition_id, policy_id, tools_offered, text,"
+                        + " word_count, started_at, ended_at, extra_time_seconds, end_reason) VALUES (?,?,?,?,?,?,?,?,?,?,?,?)",
+                        sitting, t.taskId(), i, t.conditionId(), policyId(t.policy()), tools(t.toolsOffered()), t.text(),
+                        t.wordCount(), str(t.startedAt()), str(t.endedAt()), t.extraTimeSeconds(),
+                        Json.mapper().valueToTree(t.endReason()).asText());
+                for (Map.Entry<Tool, ToolUse> u : t.toolUse().entrySet()) {
+                    ToolUse x = u.getValue();
+                    update("INSERT INTO tool_use(sitting_id, task_id, tool, queries, empty_queries, entries_opened,"
+                            + " suggestions_shown, suggestions_accepted, suggestions_ignored, insertions) VALUES (?,?,?,?,?,?,?,?,?,?)",
+                            sitting, t.taskId(), Json.mapper().valueToTree(u.getKey()).asText(), x.queries(), x.emptyQueries(),
+                            x.entriesOpened(), x.suggestionsShown(), x.suggestionsAccepted(), x.suggestionsIgnored(), x.insertions());
+                }
+            }
+            for (QuestionnaireAnswers q : d.questionnaires()) {
+                for (Map.Entry<String, String> a : q.answers().entrySet()) {
+                    update("INSERT INTO questionnaire_answers(sitting_id, questionnaire_id, item_id, value) VALUES (?,?,?,?)",
+                            sitting, q.questionnaireId(), a.getKey(), a.getValue());
+                }
+            }
+            insertEvents(sitting, record);
+            return sitting;
+        });
+    }
+
+    /** Rows per INSERT statement: 7 parameters each, far below SQLite's default limit of 32,766 parameters. */
+    private static final int EVENT_ROWS_PER_STATEMENT = 200;
+
+    /** Many rows per statement: one native step per 200 events instead of one per event. */
+    private void insertEvents(long sitting, SittingRecord record) throws SQLException {
+        List<ProcessEvent> events = record.opened().events();
+        String row = "(?,?,?,?,?,?,?)";
+        String insert = "INSERT INTO process_events(sitting_id, seq, at, mono, type, task_id, data_json) VALUES ";
+        try (PreparedStatement ps = c.prepareStatement(insert
+                + String.join(",", java.util.Collections.nCopies(EVENT_ROWS_PER_STATEMENT, row)))) {
+            int i = 0;
+            for (; i + EVENT_ROWS_PER_STATEMENT <= events.size(); i += EVENT_ROWS_PER_STATEMENT) {
+                bindEvents(ps, sitting, record, i, EVENT_ROWS_PER_STATEMENT);
+                ps.executeUpdate();
+            }
+            if (i < events.size()) {
+                int rest = events.size() - i;
+                try (PreparedStatement last = c.prepareStatement(insert
+                        + String.join(",", java.util.Collections.nCopies(rest, row)))) {
+                    bindEvents(last, sitting, record, i, rest);
+                    last.executeUpdate();
+                }
+            }
+        }
+    }
+
+    private static void bindEvents(PreparedStatement ps, long sitting, SittingRecord record, int from, int count)
+            throws SQLException {
+        List<ProcessEvent> events = record.opened().events();
+        int p = 1;
+        for (int i = from; i < from + count; i++) {
+            ProcessEvent e = events.get(i);
+            ps.setLong(p++, sitting);
+            ps.setLong(p++, e.seq());
+            ps.setString(p++, record.eventAt()[i]);
+            ps.setLong(p++, e.mono());
+            ps.setString(p++, e.type());
+            ps.setString(p++, e.task());
+            ps.setString(p++, record.eventData()[i]);
+        }
+    }
+
+    private static String tools(java.util.Set<Tool> tools) {
+        return String.join(" ", tools.stream().sorted().map(t -> Json.mapper().valueToTree(t).asText()).toList());
+    }
+
+    private static String str(Instant i) {
+        return i == null ? null : i.toString();
+    }
+
+    @Override
+    public void recordRefusal(String fileSha256, String sourceFile, String reason, String message) throws StoreException {
+        tx("recording a refusal", () -> update("INSERT OR IGNORE INTO refusals(file_sha256, source_file, reason, message,"
+                + " first_seen_at) VALUES (?,?,?,?,?)", fileSha256, sourceFile, reason, message, Instant.now().toString()));
+    }
+
+    @Override
+    public List<Rows.Refusal> refusals() throws StoreException {
+        return read("listing refusals", () -> list("SELECT source_file, file_sha256, reason, message, first_seen_at FROM refusals"
+                + " ORDER BY source_file, reason", rs -> new Rows.Refusal(rs.getString(1), rs.getString(2), rs.getString(3),
+                rs.getString(4), rs.getString(5))));
+    }
+
+    @Override
+    public List<Rows.Conflict> conflicts(String examId) throws StoreException {
+        return read("listing conflicts", () -> list("SELECT v.exam_id, v.candidate_number, v.task_id, v.copies,"
+                + " (SELECT group_concat(s.package_id, ' ') FROM sittings s JOIN responses r ON r.sitting_id = s.sitting_id"
+                + "  WHERE s.exam_id = v.exam_id AND s.candidate_number = v.candidate_number AND r.task_id = v.task_id)"
+                + " FROM response_conflicts v WHERE v.exam_id=? ORDER BY v.candidate_number, v.task_id",
+                rs -> new Rows.Conflict(rs.getString(1), rs.getString(2), rs.getString(3), rs.getInt(4), rs.getString(5)), examId));
+    }
+
+    @Override
+    public List<Rows.Candidate> candidates(String examId) throws StoreException {
+        return read("listing candidates", () -> list("SELECT candidate_number, level, form_id,"
+                + " EXISTS(SELECT 1 FROM sittings s WHERE s.exam_id = c.exam_id AND s.candidate_number = c.candidate_number)"
+                + " FROM candidates c WHERE exam_id=? ORDER BY candidate_number",
+                rs -> new Rows.Candidate(rs.getString(1), rs.getString(2), rs.getString(3), rs.getInt(4) == 1), examId));
+    }
+
+    @Override
+    public List<Rows.Slot> formSlots(String examId) throws StoreException {
+        return read("listing forms", () -> list("SELECT form_id, position, task_id, condition_id FROM form_slots WHERE exam_id=?"
+                + " ORDER BY form_id, position", rs -> new Rows.Slot(rs.getString(1), rs.getInt(2), rs.getString(3),
+                rs.getString(4)), examId));
+    }
+
+    @Override
+    public List<Rows.Answered> answered(String examId) throws StoreException {
+        return read("listing responses", () -> list("SELECT DISTINCT s.candidate_number, r.task_id FROM responses r"
+                + " JOIN sittings s ON s.sitting_id = r.sitting_id WHERE s.exam_id=?",
+                rs -> new Rows.Answered(rs.getString(1), rs.getString(2)), examId));
+    }
+
+    @Override
+    public List<String> examIds() throws StoreException {
+        return read("listing exams", () -> list("SELECT exam_id FROM exams ORDER BY exam_id", rs -> rs.getString(1)));
+    }
+
+    @Override
+    public void forEachResponse(String examId, Consumer<Rows.Response> sink) throws StoreException {
+        read("reading responses", () -> {
+            each("SELECT s.exam_id, s.candidate_number, c.level, s.form_id, s.package_id, s.sitting_id, r.position, r.task_id,"
+                    + " r.condition_id, p.spelling, p.glossary_pack, p.dictionary_pack, p.insert_from_panel, p.show_word_count,"
+                    + " p.paste, r.tools_offered, r.text, r.word_count, r.started_at, r.ended_at, r.extra_time_seconds,"
+                    + " r.end_reason, s.submitted_at,"
+                    + " (SELECT COUNT(*) FROM responses r2 JOIN sittings s2 ON s2.sitting_id = r2.sitting_id"
+                    + "   WHERE s2.exam_id = s.exam_id AND s2.candidate_number = s.candidate_number AND r2.task_id = r.task_id),"
+                    + " s.installation_fingerprint"
+                    + " FROM responses r JOIN sittings s ON s.sitting_id = r.sitting_id"
+                    + " JOIN policy_snapshots p ON p.policy_id = r.policy_id"
+                    + " LEFT JOIN candidates c ON c.exam_id = s.exam_id AND c.candidate_number = s.candidate_number"
+                    + " WHERE s.exam_id=? ORDER BY s.candidate_number, s.sitting_id, r.position",
+                    rs -> sink.accept(new Rows.Response(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
+                            rs.getString(5), rs.getLong(6), rs.getInt(7), rs.getString(8), rs.getString(9), rs.getString(10),
+                            rs.getString(11), rs.getString(12), rs.getInt(13) == 1, rs.getInt(14) == 1, rs.getString(15),
+                            rs.getString(16), rs.getString(17), rs.getInt(18), rs.getString(19), rs.getString(20),
+                            rs.getLong(21), rs.getString(22), rs.getString(23), rs.getInt(24), rs.getString(25))), examId);
+            return null;
+        });
+    }
+
+    @Override
+    public void forEachToolUse(String examId, Consumer<Rows.ToolUseRow> sink) throws StoreException {
+        read("reading tool use", () -> {
+            each("SELECT s.exam_id, s.candidate_number, s.package_id, u.task_id, r.condition_id, u.tool, u.queries,"
+                    + " u.empty_queries, u.entries_opened, u.suggestions_shown, u.suggestions_accepted, u.suggestions_ignored,"
+                    + " u.insertions FROM tool_use u JOIN responses r ON r.sitting_id = u.sitting_id AND r.task_id = u.task_id"
+                    + " JOIN sittings s ON s.sitting_id = u.sitting_id WHERE s.exam_id=?"
+                    + " ORDER BY s.candidate_number, s.sitting_id, r.position, u.tool",
+                    rs -> sink.accept(new Rows.ToolUseRow(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
+                            rs.getString(5), rs.getString(6), rs.getInt(7), rs.getInt(8), rs.getInt(9), rs.getInt(10),
+                            rs.getInt(11), rs.getInt(12), rs.getInt(13))), examId);
+            return null;
+        });
+    }
+
+    @Override
+    public void forEachEvent(String examId, Consumer<Rows.Event> sink) throws StoreException {
+        read("reading events", () -> {
+            each("SELECT s.exam_id, s.candidate_number, s.package_id, s.package_id, e.seq, e.at, e.mono, e.type, e.task_id,"
+                    + " e.data_json FROM process_events e JOIN sittings s ON s.sitting_id = e.sitting_id WHERE s.exam_id=?"
+                    + " ORDER BY s.candidate_number, s.sitting_id, e.seq",
+                    rs -> sink.accept(new Rows.Event(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
+                            rs.getLong(5), rs.getString(6), rs.getLong(7), rs.getString(8), rs.getString(9),
+                            rs.getString(10))), examId);
+            return null;
+        });
+    }
+
+    @Override
+    public Map<String, Long> counts() throws StoreException {
+        return read("counting rows", () -> {
+            Map<String, Long> out = new LinkedHashMap<>();
+            for (String t : List.of("exams", "bundles", "tasks", "conditions", "forms", "form_slots", "policy_snapshots",
+                    "candidates", "candidate_personal", "sittings", "responses", "tool_use", "process_events",
+                    "questionnaire_answers", "rubric_criteria", "rubric_bands", "refusals")) {
+                out.put(t, ((Number) first("SELECT COUNT(*) FROM " + t, 1).orElseThrow()[0]).longValue());
+            }
+            return out;
+        });
+    }
+
+    @Override
+    public void close() throws StoreException {
+        try {
+            c.close();
+        } catch (SQLException e) {
+            throw new StoreException("closing the results store failed: " + e.getMessage(), e);
+        }
+    }
+
+    // --- small JDBC helpers ---
+
+    private interface RowMapper<T> {
+        T map(ResultSet rs) throws SQLException;
+    }
+
+    private interface RowSink {
+        void accept(ResultSet rs) throws SQLException;
+    }
+
+    private interface SqlRunnable {
+        Object run() throws SQLException;
+    }
+
+    private static void unchecked(SqlRunnable r) {
+        try {
+            r.run();
+        } catch (SQLException e) {
+            throw new IllegalStateException(e.getMessage(), e);
+        }
+    }
+
+    private static void bind(PreparedStatement ps, Object... args) throws SQLException {
+        for (int i = 0; i < args.length; i++) {
+            ps.setObject(i + 1, args[i]);
+        }
+    }
+
+    private int update(String sql, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(sql)) {
+            bind(ps, args);
+            return ps.executeUpdate();
+        }
+    }
+
+    private Optional<Object[]> first(String sql, int columns, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(sql)) {
+            bind(ps, args);
+            try (ResultSet rs = ps.executeQuery()) {
+                if (!rs.next()) {
+                    return Optional.empty();
+                }
+                Object[] row = new Object[columns];
+                for (int i = 0; i < columns; i++) {
+                    row[i] = rs.getObject(i + 1);
+                }
+                return Optional.of(row);
+            }
+        }
+    }
+
+    private <T> List<T> list(String sql, RowMapper<T> mapper, Object... args) throws SQLException {
+        List<T> out = new ArrayList<>();
+        each(sql, rs -> out.add(mapper.map(rs)), args);
+        return out;
+    }
+
+    private void each(String sql, RowSink sink, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(sql)) {
+            bind(ps, args);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    sink.accept(rs);
+                }
+            }
+        }
+    }
+}
