@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
 @Command(name = "inkgate-admin", mixinStandardHelpOptions = true, versionProvider = InkgateAdmin.Version.class,
         description = "Prepare, bundle and collect Inkgate writing exams.",
         subcommands = {
-            // one line per command; the lead adds analyse and pack here
+            // one line per command
             KeysCommand.class,
             ExamCommand.class,
             FormsCommand.class,
@@ -22,6 +22,7 @@ import picocli.CommandLine.Command;
             CollectCommand.class,
             MissingCommand.class,
             ExportCommand.class,
+            AnalyseCommand.class,
             CommandLine.HelpCommand.class,
         })
 public final class InkgateAdmin {

@@ -1,0 +1,32 @@
+package org.inkgate.admin.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import picocli.CommandLine;
+
+/** Every command a guide names is reachable from the one root command. */
+class RootCommandTest {
+
+    @Test
+    void root_listsEveryCommandTheGuidesName() {
+        var names = new CommandLine(new InkgateAdmin()).getSubcommands().keySet();
+        for (String name : List.of("keys", "exam", "forms", "roster", "bundle", "inspect", "collect", "missing",
+                "export", "analyse")) {
+            assertTrue(names.contains(name), name + " is a subcommand of inkgate-admin: " + names);
+        }
+    }
+
+    @Test
+    void analyseHelp_throughTheRoot_printsItsOptions() {
+        StringWriter out = new StringWriter();
+        CommandLine cli = new CommandLine(new InkgateAdmin());
+        cli.setOut(new PrintWriter(out));
+        assertEquals(0, cli.execute("analyse", "--help"));
+        assertTrue(out.toString().contains("--ratings"), out.toString());
+    }
+}
