@@ -99,7 +99,7 @@ public final class Glossary implements AutoCloseable {
         try {
             TopDocs top = searcher.search(new BooleanQuery.Builder()
                     .add(new TermQuery(new Term(GlossaryIndex.TYPE, GlossaryIndex.TYPE_ENTRY)), BooleanClause.Occur.FILTER)
-                    .add(new TermQuery(new Term(GlossaryIndex.ENTRY_ID, entryId)), BooleanClause.Occur.FILTER).build(), 1);
+                    .add(new TermQuery(new Term(GlossaryIndex.ENTRY_KEY, entryId)), BooleanClause.Occur.FILTER).build(), 1);
             if (top.scoreDocs.length == 1) {
                 Document d = searcher.storedFields().document(top.scoreDocs[0].doc);
                 entry = Optional.of(GlossaryIndex.MAPPER.readValue(d.getBinaryValue(GlossaryIndex.JSON).bytes, GlossaryEntry.class));

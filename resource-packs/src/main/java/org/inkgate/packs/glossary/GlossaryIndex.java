@@ -31,6 +31,8 @@ final class GlossaryIndex {
     static final String TYPE_TERM = "term";
     static final String TYPE_ENTRY = "entry";
     static final String ENTRY_ID = "entry";
+    /** The indexed id of entry documents (term documents only store {@link #ENTRY_ID}). */
+    static final String ENTRY_KEY = "eid";
     static final String LANG = "lang";
     static final String TERM = "term";
     static final String KEY = "key";
@@ -83,7 +85,7 @@ final class GlossaryIndex {
     private static Document entryDoc(GlossaryEntry e) throws JsonProcessingException {
         Document d = new Document();
         d.add(new StringField(TYPE, TYPE_ENTRY, Field.Store.NO));
-        d.add(new StringField(ENTRY_ID, e.id(), Field.Store.YES));
+        d.add(new StringField(ENTRY_KEY, e.id(), Field.Store.NO));
         d.add(new StoredField(JSON, MAPPER.writeValueAsBytes(e)));
         return d;
     }
