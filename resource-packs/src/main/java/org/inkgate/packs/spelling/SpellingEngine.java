@@ -271,6 +271,11 @@ public final class SpellingEngine implements SpellingChecker {
         return lt;
     }
 
+    /** Runs a task on the engine thread (tests use it to hold the engine busy). */
+    CompletableFuture<Void> runOnEngineThread(Runnable task) {
+        return CompletableFuture.runAsync(task, executor);
+    }
+
     /** Rule ids active in this engine (built on the engine thread); for tests and diagnostics. */
     public CompletableFuture<List<String>> activeRuleIds() {
         return CompletableFuture.supplyAsync(() -> engine().getAllActiveRules().stream().map(Rule::getId).toList(), executor);
