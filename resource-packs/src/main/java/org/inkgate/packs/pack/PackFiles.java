@@ -163,6 +163,10 @@ public final class PackFiles {
                 zip.flush();
                 channel.force(true);
             }
+            if (Files.getFileStore(temp).supportsFileAttributeView("posix")) {
+                // a temporary file is private to its owner; a pack is for others to read
+                Files.setPosixFilePermissions(temp, java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--"));
+            }
             try {
                 Files.move(temp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
             } catch (AtomicMoveNotSupportedException e) {
