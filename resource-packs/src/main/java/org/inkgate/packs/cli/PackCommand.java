@@ -30,10 +30,8 @@ public final class PackCommand implements Callable<Integer> {
         return ExitCodes.USAGE;
     }
 
-    /** A command line for {@code pack} with our exit codes for usage errors. */
+    /** A command line for {@code pack}; picocli's defaults give 2 for usage errors and 1 for unexpected exceptions. */
     public static CommandLine commandLine() {
-        CommandLine cl = new CommandLine(new PackCommand());
-        cl.setExitCodeExceptionMapper(e -> ExitCodes.INTERNAL);
-        return cl;
+        return new CommandLine(new PackCommand());
     }
 }
