@@ -11,22 +11,20 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.EnumMap;
 import java.util.HashMap;
-import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 import org.apache.lucene.index.DirectoryReader;
 import org.apache.lucene.index.LeafReader;
 import org.apache.lucene.index.Term;
 import org.apache.lucene.index.Terms;
 import org.apache.lucene.index.TermsEnum;
-import org.apache.lucene.search.FuzzyQuery;
-import org.apache.lucene.search.IndexSearcher;
-import org.apache.lucene.search.ScoreDoc;
-import org.apache.lucene.search.TermQuery;
-import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.index.PostingsEnum;
+import org.apache.lucene.search.DocIdSetIterator;
+import org.apache.lucene.search.spell.DirectSpellChecker;
+import org.apache.lucene.search.spell.SuggestMode;
+import org.apache.lucene.search.spell.SuggestWord;
 import org.apache.lucene.store.FSDirectory;
 import org.apache.lucene.util.BytesRef;
 import org.inkgate.packs.event.Timed;
@@ -49,7 +47,8 @@ public final class Dictionary implements AutoCloseable {
 
     private final OpenedPack pack;
     private final DirectoryReader reader;
-    private final IndexSearcher searcher;
+    private final LeafReader leaf;
+    private final DirectSpellChecker speller;
     private final Morphology morphology;
     private final Clock clock;
     private final ThreadLocal<TermsEnum> keys;
@@ -63,8 +62,9 @@ public final class Dictionary implements AutoCloseable {
             throw new PackRefusal(PackRefusal.Reason.CONTENT_MISMATCH, "dictionary pack " + pack.manifest().id()
                     + " has an index of " + reader.leaves().size() + " segments, expected 1; rebuild the pack");
         }
-        this.searcher = new IndexSearcher(reader);
-        LeafReader leaf = reader.leaves().get(0).reader();
+        this.leaf = reader.leaves().get(0).reader();
+        this.speller = new DirectSpellChecker();
+        speller.setMinQueryLength(3);
         Terms terms = leaf.terms(DictionaryIndex.KEY);
         this.keys = ThreadLocal.withInitial(() -> {
             try {
@@ -143,34 +143,36 @@ public final class Dictionary implements AutoCloseable {
 
     private Optional<DictionaryEntry> fetch(PartOfSpeech pos, String lemma) {
         try {
-            TopDocs top = searcher.search(new TermQuery(new Term(DictionaryIndex.KEY, DictionaryIndex.key(pos, lemma))), 1);
-            if (top.scoreDocs.length == 0) {
+            TermsEnum te = keys.get();
+            if (!te.seekExact(new BytesRef(DictionaryIndex.key(pos, lemma)))) {
                 return Optional.empty();
             }
-            byte[] json = searcher.storedFields().document(top.scoreDocs[0].doc).getBinaryValue(DictionaryIndex.JSON).bytes;
+            PostingsEnum postings = te.postings(null, PostingsEnum.NONE);
+            int doc = postings.nextDoc();
+            if (doc == DocIdSetIterator.NO_MORE_DOCS) {
+                return Optional.empty();
+            }
+            byte[] json = leaf.storedFields().document(doc).getBinaryValue(DictionaryIndex.JSON).bytes;
             return Optional.of(DictionaryIndex.MAPPER.readValue(json, DictionaryEntry.class));
         } catch (IOException e) {
             throw new UncheckedIOException("dictionary pack " + manifest().id() + " could not be read", e);
         }
     }
 
-    /** Lemmas within one edit (short words) or two edits of the query, closest first. */
+    /**
+     * Lemmas within two edits of the query (first letter kept), closest first, by Lucene's
+     * DirectSpellChecker over the lemma terms (no document is read).
+     */
     private List<String> suggest(String q) {
         if (q.length() < 3) {
             return List.of();
         }
-        int edits = q.length() <= 5 ? 1 : 2;
         try {
-            TopDocs top = searcher.search(new FuzzyQuery(new Term(DictionaryIndex.LEMMA, q), edits, 1), SUGGESTIONS * 4);
-            Set<String> out = new LinkedHashSet<>();
-            for (ScoreDoc sd : top.scoreDocs) {
-                byte[] json = searcher.storedFields().document(sd.doc).getBinaryValue(DictionaryIndex.JSON).bytes;
-                out.add(DictionaryIndex.MAPPER.readTree(json).get("lemma").asText());
-                if (out.size() == SUGGESTIONS) {
-                    break;
-                }
+            List<String> out = new ArrayList<>();
+            for (SuggestWord w : speller.suggestSimilar(new Term(DictionaryIndex.LEMMA, q), SUGGESTIONS, reader, SuggestMode.SUGGEST_ALWAYS)) {
+                out.add(w.string);
             }
-            return new ArrayList<>(out);
+            return out;
         } catch (IOException e) {
             throw new UncheckedIOException("dictionary pack " + manifest().id() + " could not be read", e);
         }

@@ -15,13 +15,18 @@ import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.index.DirectoryReader;
+import org.apache.lucene.index.LeafReader;
+import org.apache.lucene.index.PostingsEnum;
+import org.apache.lucene.index.TermsEnum;
+import org.apache.lucene.search.DocIdSetIterator;
+import org.apache.lucene.util.BytesRef;
+import org.apache.lucene.util.StringHelper;
 import org.apache.lucene.index.StoredFields;
 import org.apache.lucene.index.Term;
 import org.apache.lucene.search.BooleanClause;
 import org.apache.lucene.search.BooleanQuery;
 import org.apache.lucene.search.FuzzyQuery;
 import org.apache.lucene.search.IndexSearcher;
-import org.apache.lucene.search.PrefixQuery;
 import org.apache.lucene.search.Query;
 import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.TermQuery;
@@ -38,17 +43,21 @@ import org.inkgate.packs.policy.Tool;
 
 /**
  * A read-only term bank opened from a verified glossary pack. Searches rank exact matches
- * first, then prefix (search as you type), stemmed and fuzzy (up to two edits) matches; each
- * entry appears once, under its best match. Safe for use from several threads.
+ * first, then prefix (search as you type, in alphabetical order) and stemmed matches; when none
+ * of these finds anything, fuzzy matches (up to two edits) are offered for a likely misspelling.
+ * Each entry appears once, under its best match. Safe for use from several threads.
  */
 public final class Glossary implements AutoCloseable {
     /** Most hits one search returns. */
     public static final int MAX_HITS = 50;
     private static final int MAX_QUERY_CHARS = 200;
+    /** Most distinct terms a prefix stage reads (a one-letter prefix can match thousands). */
+    private static final int MAX_PREFIX_TERMS = 200;
 
     private final OpenedPack pack;
     private final DirectoryReader reader;
     private final IndexSearcher searcher;
+    private final LeafReader leaf;
     private final Set<String> primaries;
     private final Analyzer analyzer;
     private final Clock clock;
@@ -57,7 +66,12 @@ public final class Glossary implements AutoCloseable {
         this.pack = pack;
         this.clock = clock;
         this.reader = DirectoryReader.open(FSDirectory.open(pack.folder().resolve(GlossaryPacks.INDEX_FOLDER)));
+        if (reader.leaves().size() != 1) {
+            reader.close();
+            throw new IOException("the index has " + reader.leaves().size() + " segments, expected 1");
+        }
         this.searcher = new IndexSearcher(reader);
+        this.leaf = reader.leaves().get(0).reader();
         this.primaries = new LinkedHashSet<>();
         for (String tag : pack.manifest().languages()) {
             primaries.add(LanguageAnalyzers.primary(tag));
@@ -97,9 +111,8 @@ public final class Glossary implements AutoCloseable {
         long start = System.nanoTime();
         Optional<GlossaryEntry> entry = Optional.empty();
         try {
-            TopDocs top = searcher.search(new BooleanQuery.Builder()
-                    .add(new TermQuery(new Term(GlossaryIndex.TYPE, GlossaryIndex.TYPE_ENTRY)), BooleanClause.Occur.FILTER)
-                    .add(new TermQuery(new Term(GlossaryIndex.ENTRY_KEY, entryId)), BooleanClause.Occur.FILTER).build(), 1);
+            // only entry documents carry the indexed entry key
+            TopDocs top = searcher.search(new TermQuery(new Term(GlossaryIndex.ENTRY_KEY, entryId)), 1);
             if (top.scoreDocs.length == 1) {
                 Document d = searcher.storedFields().document(top.scoreDocs[0].doc);
                 entry = Optional.of(GlossaryIndex.MAPPER.readValue(d.getBinaryValue(GlossaryIndex.JSON).bytes, GlossaryEntry.class));
@@ -124,20 +137,33 @@ public final class Glossary implements AutoCloseable {
         List<GlossaryHit> hits = new ArrayList<>();
         Set<String> seen = new HashSet<>();
         try {
-            collect(new TermQuery(new Term(GlossaryIndex.KEY, key)), MatchKind.EXACT, limit, hits, seen);
-            if (hits.size() < limit) {
-                collect(new PrefixQuery(new Term(GlossaryIndex.KEY, key)), MatchKind.PREFIX, limit, hits, seen);
+            StoredFields stored = leaf.storedFields();
+            TermsEnum keys = leaf.terms(GlossaryIndex.KEY).iterator();
+            BytesRef target = new BytesRef(key);
+            // exact and prefix read the sorted term dictionary directly: cost bounded by the hits wanted
+            if (keys.seekExact(target)) {
+                addPostings(keys, MatchKind.EXACT, limit, hits, seen, stored);
+            }
+            if (hits.size() < limit && keys.seekCeil(target) != TermsEnum.SeekStatus.END) {
+                int terms = 0;
+                do {
+                    if (!StringHelper.startsWith(keys.term(), target) || ++terms > MAX_PREFIX_TERMS) {
+                        break;
+                    }
+                    addPostings(keys, MatchKind.PREFIX, limit, hits, seen, stored);
+                } while (hits.size() < limit && keys.next() != null);
             }
             if (hits.size() < limit) {
                 Query stemmed = stemmedQuery(q);
                 if (stemmed != null) {
-                    collect(stemmed, MatchKind.STEMMED, limit, hits, seen);
+                    collect(stemmed, MatchKind.STEMMED, limit, hits, seen, stored);
                 }
             }
-            if (hits.size() < limit) {
+            // fuzzy matching is the fallback for a likely misspelling: only when nothing else matched
+            if (hits.isEmpty()) {
                 Query fuzzy = fuzzyQuery(key);
                 if (fuzzy != null) {
-                    collect(fuzzy, MatchKind.FUZZY, limit, hits, seen);
+                    collect(fuzzy, MatchKind.FUZZY, limit, hits, seen, stored);
                 }
             }
         } catch (IOException e) {
@@ -146,25 +172,32 @@ public final class Glossary implements AutoCloseable {
         return hits;
     }
 
+    private void addPostings(TermsEnum keys, MatchKind kind, int limit, List<GlossaryHit> hits, Set<String> seen,
+                             StoredFields stored) throws IOException {
+        PostingsEnum postings = keys.postings(null, PostingsEnum.NONE);
+        for (int doc = postings.nextDoc(); doc != DocIdSetIterator.NO_MORE_DOCS && hits.size() < limit; doc = postings.nextDoc()) {
+            add(stored.document(doc), kind, hits, seen);
+        }
+    }
+
     /** Adds the hits of one stage, skipping entries already found by a better stage. */
-    private void collect(Query q, MatchKind kind, int limit, List<GlossaryHit> hits, Set<String> seen) throws IOException {
-        Query filtered = new BooleanQuery.Builder()
-                .add(q, BooleanClause.Occur.MUST)
-                .add(new TermQuery(new Term(GlossaryIndex.TYPE, GlossaryIndex.TYPE_TERM)), BooleanClause.Occur.FILTER).build();
+    private void collect(Query q, MatchKind kind, int limit, List<GlossaryHit> hits, Set<String> seen, StoredFields stored)
+            throws IOException {
         // fetch more than needed: several terms of one entry may match
-        TopDocs top = searcher.search(filtered, (limit - hits.size()) * 3 + 5);
-        StoredFields stored = searcher.storedFields();
+        TopDocs top = searcher.search(q, (limit - hits.size()) * 3 + 5);
         for (ScoreDoc sd : top.scoreDocs) {
-            Document d = stored.document(sd.doc);
-            String entryId = d.get(GlossaryIndex.ENTRY_ID);
-            if (!seen.add(entryId)) {
-                continue;
-            }
-            hits.add(new GlossaryHit(entryId, d.get(GlossaryIndex.TERM), d.get(GlossaryIndex.LANG), d.get(GlossaryIndex.POS),
-                    kind, parseEquivalents(d.get(GlossaryIndex.EQUIVALENTS))));
+            add(stored.document(sd.doc), kind, hits, seen);
             if (hits.size() >= limit) {
                 return;
             }
+        }
+    }
+
+    private static void add(Document d, MatchKind kind, List<GlossaryHit> hits, Set<String> seen) {
+        String entryId = d.get(GlossaryIndex.ENTRY_ID);
+        if (seen.add(entryId)) {
+            hits.add(new GlossaryHit(entryId, d.get(GlossaryIndex.TERM), d.get(GlossaryIndex.LANG), d.get(GlossaryIndex.POS),
+                    kind, parseEquivalents(d.get(GlossaryIndex.EQUIVALENTS))));
         }
     }
 
