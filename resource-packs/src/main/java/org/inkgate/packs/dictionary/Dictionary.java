@@ -48,7 +48,7 @@ public final class Dictionary implements AutoCloseable {
     private final OpenedPack pack;
     private final DirectoryReader reader;
     private final LeafReader leaf;
-    private final DirectSpellChecker speller;
+    private final List<DirectSpellChecker> spellers;
     private final Morphology morphology;
     private final Clock clock;
     private final ThreadLocal<TermsEnum> keys;
@@ -63,8 +63,13 @@ public final class Dictionary implements AutoCloseable {
                     + " has an index of " + reader.leaves().size() + " segments, expected 1; rebuild the pack");
         }
         this.leaf = reader.leaves().get(0).reader();
-        this.speller = new DirectSpellChecker();
-        speller.setMinQueryLength(3);
+        DirectSpellChecker one = new DirectSpellChecker();
+        one.setMaxEdits(1);
+        one.setMinQueryLength(3);
+        DirectSpellChecker two = new DirectSpellChecker();
+        two.setMaxEdits(2);
+        two.setMinQueryLength(3);
+        this.spellers = List.of(one, two);
         Terms terms = leaf.terms(DictionaryIndex.KEY);
         this.keys = ThreadLocal.withInitial(() -> {
             try {
@@ -160,7 +165,7 @@ public final class Dictionary implements AutoCloseable {
     }
 
     /**
-     * Lemmas within two edits of the query (first letter kept), closest first, by Lucene's
+     * Lemmas within one, else two edits of the query (first letter kept), closest first, by Lucene's
      * DirectSpellChecker over the lemma terms (no document is read).
      */
     private List<String> suggest(String q) {
@@ -169,8 +174,14 @@ public final class Dictionary implements AutoCloseable {
         }
         try {
             List<String> out = new ArrayList<>();
-            for (SuggestWord w : speller.suggestSimilar(new Term(DictionaryIndex.LEMMA, q), SUGGESTIONS, reader, SuggestMode.SUGGEST_ALWAYS)) {
-                out.add(w.string);
+            // one edit first, two only when one finds nothing (see Glossary's fuzzy stage for why)
+            for (DirectSpellChecker speller : spellers) {
+                for (SuggestWord w : speller.suggestSimilar(new Term(DictionaryIndex.LEMMA, q), SUGGESTIONS, reader, SuggestMode.SUGGEST_ALWAYS)) {
+                    out.add(w.string);
+                }
+                if (!out.isEmpty()) {
+                    break;
+                }
             }
             return out;
         } catch (IOException e) {

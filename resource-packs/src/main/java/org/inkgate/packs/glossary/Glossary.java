@@ -161,10 +161,7 @@ public final class Glossary implements AutoCloseable {
             }
             // fuzzy matching is the fallback for a likely misspelling: only when nothing else matched
             if (hits.isEmpty()) {
-                Query fuzzy = fuzzyQuery(key);
-                if (fuzzy != null) {
-                    collect(fuzzy, MatchKind.FUZZY, limit, hits, seen, stored);
-                }
+                fuzzy(key, limit, hits, seen, stored);
             }
         } catch (IOException e) {
             throw new UncheckedIOException("glossary pack " + manifest().id() + " could not be read", e);
@@ -222,21 +219,26 @@ public final class Glossary implements AutoCloseable {
 
     /**
      * Fuzzy stage: the whole term within the edit distance, or (one-word queries) any word of a
-     * term. Edits allowed: none below 3 characters, 1 up to 5, else 2 (common practice: short
-     * words have too many neighbours at distance 2).
+     * term; the first letter must match. Edits allowed: none below 3 characters, 1 up to 5,
+     * else 2 (common practice: short words have too many neighbours at distance 2). One edit is
+     * tried first and two only when one finds nothing: most misspellings are a single edit
+     * (Damerau 1964 found about 80%), and the two-edit automaton costs several times more.
      */
-    private Query fuzzyQuery(String key) throws IOException {
-        int edits = key.length() < 3 ? 0 : key.length() <= 5 ? 1 : 2;
-        if (edits == 0) {
-            return null;
-        }
-        BooleanQuery.Builder b = new BooleanQuery.Builder();
-        b.add(new FuzzyQuery(new Term(GlossaryIndex.KEY, key), edits, 1), BooleanClause.Occur.SHOULD);
+    private void fuzzy(String key, int limit, List<GlossaryHit> hits, Set<String> seen, StoredFields stored) throws IOException {
+        int maxEdits = key.length() < 3 ? 0 : key.length() <= 5 ? 1 : 2;
         List<String> words = tokens(GlossaryIndex.TOKENS, key);
-        if (words.size() == 1) {
-            b.add(new FuzzyQuery(new Term(GlossaryIndex.TOKENS, words.get(0)), edits, 1), BooleanClause.Occur.SHOULD);
+        for (int edits = 1; edits <= maxEdits && hits.isEmpty(); edits++) {
+            Query q;
+            if (words.size() == 1) {
+                q = new BooleanQuery.Builder()
+                        .add(new FuzzyQuery(new Term(GlossaryIndex.KEY, key), edits, 1), BooleanClause.Occur.SHOULD)
+                        .add(new FuzzyQuery(new Term(GlossaryIndex.TOKENS, words.get(0)), edits, 1), BooleanClause.Occur.SHOULD)
+                        .build();
+            } else {
+                q = new FuzzyQuery(new Term(GlossaryIndex.KEY, key), edits, 1);
+            }
+            collect(q, MatchKind.FUZZY, limit, hits, seen, stored);
         }
-        return b.build();
     }
 
     private List<String> tokens(String field, String text) throws IOException {
