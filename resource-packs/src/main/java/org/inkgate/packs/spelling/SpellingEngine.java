@@ -48,6 +48,13 @@ public final class SpellingEngine implements SpellingChecker {
     private static final int PARAGRAPH_CACHE = 2_000;
     private static final int SENTENCE_CACHE = 10_000;
     private static final int MAX_SUGGESTIONS = 5;
+    /** Invented text for warm-up: statements, a question, a list, numbers, a misspelling, a grammar slip. */
+    private static final List<String> WARM_UP_TEXT = List.of(
+            "This is a warm-up sentence with a mispeled word.",
+            "When the weather turns, the harbour waits, and everyone reads the sky before the first crossing.",
+            "Would a bridge really be cheaper than a new ferry, given the depth of the strait?",
+            "The council should add an early crossing, improve the ramp, and buy a quieter vessel in 2027.",
+            "She have been waiting for a hour, but the timetable was wrong.");
 
     private final EnglishVariant variant;
     private final SpellingMode mode;
@@ -105,7 +112,11 @@ public final class SpellingEngine implements SpellingChecker {
     public CompletableFuture<Void> warmUp() {
         return CompletableFuture.runAsync(() -> {
             try {
-                engine().check("This is a warm-up sentence with a mispeled word.");
+                JLanguageTool lt = engine();
+                // several kinds of sentence, so more of LanguageTool's rules are loaded and compiled
+                for (String sentence : WARM_UP_TEXT) {
+                    lt.check(sentence);
+                }
             } catch (IOException e) {
                 throw new IllegalStateException("LanguageTool could not check the warm-up text", e);
             }
