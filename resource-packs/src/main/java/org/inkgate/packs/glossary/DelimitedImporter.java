@@ -242,6 +242,10 @@ public final class DelimitedImporter {
                             field.append('"');
                         } else {
                             quoted = false;
+                            if (n != separator && n != '\r' && n != '\n' && n != -1) {
+                                throw new GlossaryImportException(where, line, 0, "text after the closing quote of a field; "
+                                        + "put the whole field in quotes, with any quote inside doubled (\"\"), as RFC 4180 says");
+                            }
                             pushback = n;
                         }
                     } else {

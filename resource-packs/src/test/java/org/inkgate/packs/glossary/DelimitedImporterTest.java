@@ -62,6 +62,13 @@ class DelimitedImporterTest {
     }
 
     @Test
+    void read_textAfterClosingQuote_isRefused() {
+        // RFC 4180 section 2, rule 5: a quoted field is enclosed in quotes as a whole
+        GlossaryImportException e = assertThrows(GlossaryImportException.class, () -> csv("language,term\nen,\"bee\"hive\n"));
+        assertEquals(2, e.line());
+    }
+
+    @Test
     void read_unclosedQuote_pointsAtTheLineWhereItOpened() {
         GlossaryImportException e = assertThrows(GlossaryImportException.class,
                 () -> csv("language,term\nen,ok\nen,\"never closed\nen,x\n"));
