@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
             MissingCommand.class,
             ExportCommand.class,
             AnalyseCommand.class,
+            org.inkgate.packs.cli.PackCommand.class,
             CommandLine.HelpCommand.class,
         })
 public final class InkgateAdmin {

@@ -16,9 +16,18 @@ class RootCommandTest {
     void root_listsEveryCommandTheGuidesName() {
         var names = new CommandLine(new InkgateAdmin()).getSubcommands().keySet();
         for (String name : List.of("keys", "exam", "forms", "roster", "bundle", "inspect", "collect", "missing",
-                "export", "analyse")) {
+                "export", "analyse", "pack")) {
             assertTrue(names.contains(name), name + " is a subcommand of inkgate-admin: " + names);
         }
+    }
+
+    @Test
+    void packVerifyHelp_throughTheRoot_printsItsUsage() {
+        StringWriter out = new StringWriter();
+        CommandLine cli = new CommandLine(new InkgateAdmin());
+        cli.setOut(new PrintWriter(out));
+        assertEquals(0, cli.execute("pack", "verify", "--help"));
+        assertTrue(out.toString().contains("verify"), out.toString());
     }
 
     @Test

@@ -58,8 +58,9 @@ public final class BundleBuilder {
         }
         List<PackRef> packs = new ArrayList<>();
         for (ExamSource.Pack p : exam.packs()) {
-            byte[] bytes = Files.readAllBytes(exam.folder().resolve(p.file()));
-            PackCheck.check(p, bytes, problems);
+            Path packFile = exam.folder().resolve(p.file());
+            PackCheck.check(p, packFile, problems);
+            byte[] bytes = Files.readAllBytes(packFile);
             contents.put(p.file(), bytes);
             packs.add(new PackRef(p.id(), p.kind(), p.version(), p.file(), Sha256.hex(bytes)));
         }

@@ -35,6 +35,7 @@ class BundleBuilderTest {
     @Test
     void build_sealedWithPack_readerOpensItAndThePackIsEmbeddedWithItsDigest() throws Exception {
         ExamSource exam = ExamSourceReader.read(ExamFolders.valid(dir.resolve("src")));
+        byte[] packBytes = java.nio.file.Files.readAllBytes(dir.resolve("src/packs/test-glossary.inkpack"));
         var assignment = FormAssigner.assign(roster.stream().map(r -> new FormAssigner.Candidate(r.candidateNumber(),
                 r.level())).toList(), FormDesigner.forms(exam), FormDesigner.blockSize(exam), 5);
         Path out = dir.resolve("exam.inkexam");
@@ -46,9 +47,9 @@ class BundleBuilderTest {
             PackRef pack = b.manifest().packs().get(0);
             // SHA-256 of the pack bytes by the JDK's MessageDigest, independent of our Sha256 helper
             String expected = java.util.HexFormat.of().formatHex(
-                    java.security.MessageDigest.getInstance("SHA-256").digest(ExamFolders.PACK_BYTES));
+                    java.security.MessageDigest.getInstance("SHA-256").digest(packBytes));
             assertEquals(new PackRef("test-glossary", "glossary", "0.1", "packs/test-glossary.inkpack", expected), pack);
-            assertArrayEquals(ExamFolders.PACK_BYTES, b.readBytes(pack.file()));
+            assertArrayEquals(packBytes, b.readBytes(pack.file()));
             assertEquals(2, b.manifest().roster().size());
             assertEquals(25, b.manifest().roster().get(0).extraTimePercent());
             assertTrue(new String(org.inkgate.format.json.Json.write(b.manifest())).indexOf("Invented One") < 0,
@@ -65,5 +66,36 @@ class BundleBuilderTest {
         assertEquals(2, e.problems().size(), e.getMessage());
         assertTrue(e.getMessage().contains("candidate X2 has no form"));
         assertTrue(e.getMessage().contains("needs an invigilator PIN"));
+    }
+
+    @Test
+    void build_packWhoseOwnVersionDiffersFromTheDeclaration_listsTheProblem() throws Exception {
+        ExamFolders.valid(dir.resolve("src"));
+        ExamFolders.writeGlossaryPack(dir.resolve("src/packs/test-glossary.inkpack"), "test-glossary", "0.2");
+        ExamSource exam = ExamSourceReader.read(dir.resolve("src"));
+        InvalidSourceException e = assertThrows(InvalidSourceException.class, () -> buildPlain(exam));
+        assertEquals(1, e.problems().size(), e.getMessage());
+        assertTrue(e.getMessage().contains("declares version \"0.1\"") && e.getMessage().contains("says \"0.2\""),
+                e.getMessage());
+    }
+
+    @Test
+    void build_damagedPack_isRefusedAndNoBundleIsWritten() throws Exception {
+        ExamFolders.valid(dir.resolve("src"));
+        Path pack = dir.resolve("src/packs/test-glossary.inkpack");
+        byte[] bytes = java.nio.file.Files.readAllBytes(pack);
+        bytes[bytes.length / 2] ^= 0x55;
+        java.nio.file.Files.write(pack, bytes);
+        ExamSource exam = ExamSourceReader.read(dir.resolve("src"));
+        InvalidSourceException e = assertThrows(InvalidSourceException.class, () -> buildPlain(exam));
+        assertTrue(e.getMessage().contains("the pack was refused"), e.getMessage());
+        assertTrue(java.nio.file.Files.notExists(dir.resolve("plain.inkexam")), "nothing is written");
+    }
+
+    private void buildPlain(ExamSource exam) throws Exception {
+        var assignment = FormAssigner.assign(roster.stream().map(r -> new FormAssigner.Candidate(r.candidateNumber(),
+                r.level())).toList(), FormDesigner.forms(exam), FormDesigner.blockSize(exam), 5);
+        BundleBuilder.build(exam, roster, assignment, TestKeys.ownerKeys(), TestKeys.OWNER_SIGNING,
+                "invented-pin-1357".toCharArray(), false, dir.resolve("plain.inkexam"));
     }
 }

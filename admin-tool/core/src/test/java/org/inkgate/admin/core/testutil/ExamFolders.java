@@ -4,6 +4,12 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import org.inkgate.packs.glossary.GlossaryEntry;
+import org.inkgate.packs.glossary.GlossaryImportException;
+import org.inkgate.packs.glossary.GlossaryPacks;
+import org.inkgate.packs.pack.PackRefusal;
 
 /**
  * Invented exam source folders for tests: a valid one with two tasks, two conditions, a small
@@ -11,9 +17,31 @@ import java.nio.file.Path;
  */
 public final class ExamFolders {
 
-    public static final byte[] PACK_BYTES = "invented test glossary pack: not a real pack format\n".getBytes(StandardCharsets.UTF_8);
+    /** An invented two-entry term bank in the resource-packs CSV columns (docs/resource-packs.md). */
+    private static final String GLOSSARY_CSV = """
+            entry_id,language,term,part_of_speech,definition,example,subject_field,note
+            g1,en,harbour master,noun,An invented definition for tests.,,invented,
+            g1,es,capitán de puerto,noun,,,invented,
+            g2,en,mooring,noun,Another invented definition.,,invented,
+            """;
 
     private ExamFolders() {
+    }
+
+    /** Builds a real glossary pack with the resource-packs builder, as a test owner would. */
+    public static void writeGlossaryPack(Path target, String id, String version) throws IOException {
+        Path work = target.getParent();
+        Path csv = work.resolve(id + "-source.csv");
+        Files.writeString(csv, GLOSSARY_CSV, StandardCharsets.UTF_8);
+        try {
+            List<GlossaryEntry> entries = GlossaryPacks.importFile(csv);
+            GlossaryPacks.build(entries, new GlossaryPacks.Metadata(id, version, "Invented test glossary",
+                    "invented for tests", "invented for tests", Instant.parse("2026-01-01T00:00:00Z")), target, work);
+        } catch (GlossaryImportException | PackRefusal e) {
+            throw new IllegalStateException("the invented test glossary did not build", e);
+        } finally {
+            Files.deleteIfExists(csv);
+        }
     }
 
     public static Path valid(Path dir) throws IOException {
@@ -61,7 +89,7 @@ public final class ExamFolders {
         y.append("rubric: rubric.yaml\n");
         Files.writeString(dir.resolve("exam.yaml"), y.toString());
         Files.writeString(dir.resolve("instructions.md"), "# Invented instructions\n");
-        Files.write(dir.resolve("packs/test-glossary.inkpack"), PACK_BYTES);
+        writeGlossaryPack(dir.resolve("packs/test-glossary.inkpack"), "test-glossary", "0.1");
         Files.writeString(dir.resolve("rubric.yaml"), """
                 criteria:
                   - id: content
