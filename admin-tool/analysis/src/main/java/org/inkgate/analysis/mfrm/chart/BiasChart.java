@@ -3,7 +3,7 @@ package org.inkgate.analysis.mfrm.chart;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import org.inkgate.analysis.graphics.Drawings;
+import org.inkgate.analysis.graphics.Drawing;
 import org.inkgate.analysis.mfrm.bias.BiasCell;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
 
@@ -19,18 +19,21 @@ public final class BiasChart {
     private BiasChart() {
     }
 
+    /** The chart's drawing routine and size (for a report chart). */
+    public static Drawing drawing(BiasPair pair) {
+        List<BiasCell> cells = top(pair);
+        return new Drawing(W, height(cells), g -> paint(new GraphicsCanvas(g), pair, cells));
+    }
+
     /** The chart as an SVG element. */
     public static String svg(BiasPair pair) {
-        List<BiasCell> cells = top(pair);
         String id = ("bias-" + pair.first() + "-" + pair.second()).replaceAll("[^A-Za-z0-9_-]", "_");
-        return Drawings.svg(id, "Bias " + pair.first() + " x " + pair.second(), W, height(cells),
-                g -> paint(new GraphicsCanvas(g), pair, cells));
+        return drawing(pair).svg(id, "Bias " + pair.first() + " x " + pair.second());
     }
 
     /** The same as PNG bytes. */
     public static byte[] png(BiasPair pair) {
-        List<BiasCell> cells = top(pair);
-        return Drawings.png(W, height(cells), g -> paint(new GraphicsCanvas(g), pair, cells));
+        return drawing(pair).png();
     }
 
     private static List<BiasCell> top(BiasPair pair) {
