@@ -90,7 +90,9 @@ public final class MfrmSection {
                 + " or extreme elements.", WrightMap.drawing(r)));
         s.table(facetTable(r));
         Set<String> ids = new HashSet<>();
-        for (MfrmResult.Facet f : r.facets()) {
+        // the other facets first: they are few and usually what the study is about; the
+        // candidates' long table follows the category, bias and unexpected-rating tables
+        for (MfrmResult.Facet f : r.facets().subList(1, r.facets().size())) {
             s.table(elementTable(f, unique(ids, "mfrm_elements_" + slug(f.name()))));
         }
         s.table(categoryTable(r));
@@ -119,6 +121,8 @@ public final class MfrmSection {
             }
         }
         s.table(unexpectedTable(r));
+        MfrmResult.Facet candidates = r.facets().get(0);
+        s.table(elementTable(candidates, unique(ids, "mfrm_elements_" + slug(candidates.name()))));
         s.put("available", true);
         r.summary().forEach(s::put);
         return s.build();
@@ -172,6 +176,14 @@ public final class MfrmSection {
                 + " act on, not a quality to celebrate. For candidates, reliability is the share of observed variance"
                 + " that is true variance.");
         t.note("Extreme elements (every rating at one end of the scale) are left out of these summaries.");
+        if (r.facets().stream().anyMatch(f -> f.separation().p() == 0
+                || f.separationJointSe() != null && f.separationJointSe().p() == 0)) {
+            t.note("A p of 0 is below about 1e-15, the smallest tail probability double precision resolves here.");
+        }
+        if (r.facets().stream().anyMatch(f -> f.separation().count() == 2)) {
+            t.note("With two elements (e.g. two conditions) separation and reliability rest on one difference and say"
+                + " little; read the measures and their joint SEs instead.");
+        }
         return t.build();
     }
 
