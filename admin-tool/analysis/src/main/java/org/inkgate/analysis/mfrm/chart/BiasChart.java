@@ -75,7 +75,8 @@ public final class BiasChart {
             g.circle(x.map(Math.max(-span, Math.min(span, c.size()))), cy, 3.5, colour);
         }
         for (double v : new double[] {-span, -span / 2, 0, span / 2, span}) {
-            g.text(String.format(Locale.ROOT, "%.1f", v), x.map(v), bottom + 16, Palette.LABEL, false, Palette.TEXT,
+            // two decimals for small spans, so the quarter ticks (e.g. 0.25) are not rounded to 0.3
+            g.text(String.format(Locale.ROOT, span < 2 ? "%.2f" : "%.1f", v), x.map(v), bottom + 16, Palette.LABEL, false, Palette.TEXT,
                     Canvas.Anchor.MIDDLE);
         }
         g.text("bias size (logits)", (left + right) / 2.0, bottom + 32, Palette.LABEL, false, Palette.TEXT,
