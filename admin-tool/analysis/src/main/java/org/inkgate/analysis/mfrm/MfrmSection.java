@@ -134,8 +134,10 @@ public final class MfrmSection {
         for (int i = 1; i < facets.size(); i++) {
             eq.append(" - D(").append(facets.get(i)).append(')');
         }
-        eq.append(" - F_k");
-        boolean partial = r.model().structure().startsWith("partial credit");
+        String structure = r.model().structure();
+        boolean partial = structure.startsWith("partial credit by ");
+        // partial credit: the thresholds belong to the element of the named facet in the rating
+        eq.append(partial ? " - F_k(" + structure.substring("partial credit by ".length()) + ")" : " - F_k");
         return "Model: " + eq + " (Linacre 1989), estimated by joint maximum likelihood. Facets: "
                 + String.join(", ", facets) + ". Structure: " + r.model().structure()
                 + (partial ? " (one threshold set per element, Masters 1982)" : " (one threshold set for all"
