@@ -204,6 +204,34 @@ class AnalyseCommandTest {
     }
 
     @Test
+    void analyse_mfrmPartialCreditByTask_thresholdsMatchVgam(@TempDir Path dir) throws Exception {
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", referenceRatings(dir).toString(), "--out", outDir.toString(),
+                "--mfrm-facets", "task,rater", "--mfrm-structure", "partial-credit:task"), err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertEquals("partial credit by task", s.get("mfrm.model").get("structure").asText());
+        // VGAM acat(parallel = TRUE ~ candidate + rater - 1): one threshold set per task
+        // (ratingscale-2000-pcm-vgam.csv by reference-pcm.R, R 4.2.2, VGAM 1.1.7); limit 0.005 logits
+        Map<String, Double> ref = new HashMap<>();
+        List<String> vgam = resourceLines("ratingscale-2000-pcm-vgam.csv");
+        for (String line : vgam.subList(1, vgam.size())) {
+            String[] f = line.split(",");
+            ref.put(f[0] + "/" + f[1], Double.parseDouble(f[2]));
+        }
+        int compared = 0;
+        for (JsonNode scale : s.get("mfrm.scales")) {
+            JsonNode cats = scale.get("categories");
+            for (int k = 1; k < cats.size(); k++) {
+                String key = "threshold/" + scale.get("label").asText() + ":F" + k;
+                assertEquals(ref.get(key), cats.get(k).get("threshold").asDouble(), 0.005, key);
+                compared++;
+            }
+        }
+        assertEquals(16, compared, "4 tasks x 4 thresholds");
+        assertTrue(Files.readString(outDir.resolve("report.html")).contains("F_k(task)"));
+    }
+
+    @Test
     void analyse_mfrmOnConfoundedDesign_writesClassicalReportAndRefusalText(@TempDir Path dir) throws Exception {
         // invented rows, structure only: task a always under condition none, task b always under tools
         StringBuilder r = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
