@@ -5,7 +5,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.github.mustachejava.DefaultMustacheFactory;
 import com.github.mustachejava.Mustache;
-import java.awt.Rectangle;
 import java.io.IOException;
 import java.io.StringWriter;
 import java.io.Writer;
@@ -16,13 +15,12 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.inkgate.analysis.graphics.Drawings;
 
 /**
  * Writes a report to a folder: {@code report.html} (self-contained: inline CSS and SVG charts,
  * no scripts, no external files), {@code tables/<id>.csv} per table, and {@code summary.json}.
  * The HTML comes from a Mustache template, which escapes every value; only the SVG written by
- * Batik's SVG generator (from JFreeChart's drawing) is inserted unescaped.
+ * Batik's SVG generator (from the charts' Graphics2D drawing) is inserted unescaped.
  */
 public final class ReportWriter {
 
@@ -101,8 +99,8 @@ public final class ReportWriter {
 
     /** The chart as an SVG element; ids prefixed by the chart id so several charts share one page. */
     static String svg(Chart c) {
-        return Drawings.svg(c.id(), c.title(), c.width(), c.height(),
-                g -> c.chart().draw(g, new Rectangle(0, 0, c.width(), c.height())));
+        // the figure around it carries the chart id, so the SVG element gets its own
+        return c.drawing().svg(c.id() + "-svg", c.title());
     }
 
     static void writeCsv(Table t, Path file) throws IOException {

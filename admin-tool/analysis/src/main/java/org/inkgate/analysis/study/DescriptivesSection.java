@@ -100,7 +100,7 @@ final class DescriptivesSection {
             v.note("Fewer than two proficiency levels in the data: variances across levels cannot be compared.");
         }
         s.table(v.build());
-        s.chart(new Chart("chart_score_distribution", "Score distributions by condition",
+        s.chart(Chart.of("chart_score_distribution", "Score distributions by condition",
                 "Relative frequency of candidates' overall scores, one colour per condition (overlaid).",
                 Charts.histogram("overall score", histogram, 20), 760, 380));
         return s.build();

@@ -135,7 +135,7 @@ final class LevelsSection {
             }
             s.table(inter.build());
         }
-        s.chart(new Chart("chart_level_means", "Mean overall score by level and condition",
+        s.chart(Chart.of("chart_level_means", "Mean overall score by level and condition",
                 "Means with 95% confidence intervals (t-based, per level and condition).",
                 Charts.meansWithIntervals("proficiency level", "mean overall score", means), 760, 380));
         return s.build();

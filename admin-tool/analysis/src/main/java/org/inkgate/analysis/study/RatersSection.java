@@ -218,7 +218,7 @@ final class RatersSection {
         }
         double[] px = pts.stream().mapToDouble(a -> a[0]).toArray();
         double[] py = pts.stream().mapToDouble(a -> a[1]).toArray();
-        s.chart(new Chart("chart_rater_scatter", "First against second rating",
+        s.chart(Chart.of("chart_rater_scatter", "First against second rating",
                 "Each point is one response: the mean over criteria of its first rating against that of its second."
                         + (step > 1 ? " Every " + step + "th response is drawn (" + pts.size() + " of " + np + ")." : ""),
                 Charts.scatter("first rating (mean over criteria)", "second rating (mean over criteria)", px, py), 560,

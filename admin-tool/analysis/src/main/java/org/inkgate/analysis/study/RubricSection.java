@@ -87,7 +87,7 @@ final class RubricSection {
             corr.row(row.toArray());
         }
         s.table(corr.build());
-        s.chart(new Chart("chart_criterion_correlations", "Correlations between criteria",
+        s.chart(Chart.of("chart_criterion_correlations", "Correlations between criteria",
                 "Pearson r between criterion scores of all responses: deeper blue is a higher positive correlation,"
                 + " vermilion a negative one; the diagonal is 1.", Charts.correlationMatrix(criteria, r), 560, 460));
         return s.build();

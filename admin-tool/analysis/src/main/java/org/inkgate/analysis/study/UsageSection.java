@@ -112,7 +112,7 @@ final class UsageSection {
         s.table(t.build());
         s.table(test.build());
         s.table(score.build());
-        s.chart(new Chart("chart_usage_by_level", "Share of candidates using each tool, by level",
+        s.chart(Chart.of("chart_usage_by_level", "Share of candidates using each tool, by level",
                 "Among candidates offered the tool.", Charts.bars("tool", "share using", chart), 760, 380));
         return s.build();
     }

@@ -13,7 +13,9 @@ import org.inkgate.analysis.data.Rating;
 /**
  * An invented, simulated sitting for demos, smoke tests and benchmarks: NOT real data and never
  * used as a check value. Candidates at three invented levels write two tasks, one without and
- * one with resources; raters score five criteria 0-5 from a latent ability plus noise.
+ * one with resources (form F1: the letter without and the essay with resources; form F2 the other way
+ * round, so task and condition are crossed); raters score five criteria 0-5 from a latent ability
+ * plus noise.
  */
 public final class SimulatedSitting {
 
@@ -33,23 +35,36 @@ public final class SimulatedSitting {
             int level = c % 3;
             double ability = 1.2 + 1.0 * level + rnd.nextGaussian() * 0.7;
             String id = String.format("C%06d", c);
+            String form = formOf(c);
             for (int task = 0; task < 2; task++) {
-                String condition = task == 0 ? "none" : "resources";
-                double boost = task == 1 ? 0.25 + 0.1 * (2 - level) : 0;
+                boolean withResources = task == (form.equals("F1") ? 1 : 0);
+                String condition = withResources ? "resources" : "none";
+                double boost = withResources ? 0.25 + 0.1 * (2 - level) : 0;
+                double taskDifficulty = task == 1 ? 0.2 : 0;
                 int r1 = rnd.nextInt(raterPool);
                 int r2 = (r1 + 1 + rnd.nextInt(raterPool - 1)) % raterPool;
                 for (int r : new int[] {r1, r2}) {
                     double severity = (r % 5 - 2) * 0.1;
                     for (int k = 0; k < CRITERIA.length; k++) {
-                        double v = ability + boost - severity + (k - 2) * 0.1 + rnd.nextGaussian() * 0.6;
+                        double v = ability + boost - taskDifficulty - severity + (k - 2) * 0.1 + rnd.nextGaussian() * 0.6;
                         double score = Math.max(0, Math.min(5, Math.round(v)));
-                        out.add(new Rating(id, LEVELS[level], "F1", task == 0 ? "letter" : "essay", condition,
+                        out.add(new Rating(id, LEVELS[level], form, task == 0 ? "letter" : "essay", condition,
                                 String.format("R%03d", r), CRITERIA[k], score));
                     }
                 }
             }
         }
         return out;
+    }
+
+    /** The form of candidate number c: F1 for even, F2 for odd numbers. */
+    public static String formOf(int c) {
+        return c % 2 == 0 ? "F1" : "F2";
+    }
+
+    /** The task candidate number c sat with resources. */
+    public static String resourcesTask(int c) {
+        return formOf(c).equals("F1") ? "essay" : "letter";
     }
 
     /** Writes ratings as the tidy CSV. */
@@ -67,7 +82,7 @@ public final class SimulatedSitting {
         }
     }
 
-    /** A tool-use table for the resources task. */
+    /** A tool-use table for the task each candidate sat with resources. */
     public static void writeToolUse(int candidates, long seed, Path file) throws IOException {
         Random rnd = new Random(seed);
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
@@ -78,7 +93,8 @@ public final class SimulatedSitting {
                     int empty = uses == 0 ? 0 : rnd.nextInt(uses + 1) / 3;
                     int acc = t == 2 ? rnd.nextInt(uses + 1) : 0;
                     int ign = t == 2 ? rnd.nextInt(3) : 0;
-                    w.write(String.format("C%06d,essay,%s,%d,%d,%d,%d%n", c, TOOLS[t], uses, empty, acc, ign));
+                    w.write(String.format("C%06d,%s,%s,%d,%d,%d,%d%n", c, resourcesTask(c), TOOLS[t], uses, empty, acc,
+                            ign));
                 }
             }
         }
@@ -96,7 +112,7 @@ public final class SimulatedSitting {
                     int len = 0;
                     for (int i = 0; i < 120; i++) {
                         t += rnd.nextDouble() < 0.1 ? 2000 + rnd.nextInt(6000) : 80 + rnd.nextInt(300);
-                        if (task.equals("essay") && rnd.nextDouble() < 0.03) {
+                        if (task.equals(resourcesTask(c)) && rnd.nextDouble() < 0.03) {
                             String q = words[rnd.nextInt(words.length)];
                             w.write(String.format("C%06d,%s,%d,tool.open,,%n", c, task, t));
                             w.write(String.format("C%06d,%s,%d,tool.query,,%s%n", c, task, t + 500, q));

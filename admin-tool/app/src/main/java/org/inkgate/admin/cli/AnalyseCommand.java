@@ -7,7 +7,10 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.inkgate.analysis.data.CandidatesReader;
 import org.inkgate.analysis.data.InputRejected;
@@ -17,9 +20,17 @@ import org.inkgate.analysis.data.Rating;
 import org.inkgate.analysis.data.RatingsReader;
 import org.inkgate.analysis.data.ToolUse;
 import org.inkgate.analysis.data.ToolUseReader;
+import org.inkgate.analysis.mfrm.FacetPair;
+import org.inkgate.analysis.mfrm.MfrmOptions;
+import org.inkgate.analysis.mfrm.MfrmRefusedException;
+import org.inkgate.analysis.mfrm.MfrmSection;
+import org.inkgate.analysis.mfrm.RatingData;
+import org.inkgate.analysis.mfrm.ScaleStructure;
+import org.inkgate.analysis.mfrm.StudyRatings;
 import org.inkgate.analysis.process.ProcessMeasures;
 import org.inkgate.analysis.report.Report;
 import org.inkgate.analysis.report.ReportWriter;
+import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.scores.ScoreRule;
 import org.inkgate.analysis.study.StudyAnalysis;
 import org.inkgate.analysis.study.StudyData;
@@ -27,17 +38,22 @@ import org.inkgate.analysis.study.StudyOptions;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
+import picocli.CommandLine.ParameterException;
 import picocli.CommandLine.Spec;
 
 /**
  * {@code inkgate-admin analyse}: reads a tidy ratings CSV (and optional candidate, tool-use and
  * process-log tables) and writes the analysis report, one CSV per table and summary.json.
+ * With {@code --mfrm-facets} the many-facet Rasch analysis joins the report as one more section,
+ * from the same ratings; a design it refuses leaves the other sections as they are (the section
+ * says why, a warning is printed, the exit code stays 0).
  * Exit codes: 0 written, 1 input refused (each problem printed with file, row and column),
- * 2 usage error (picocli), 3 the output could not be written.
+ * 2 usage error (picocli, including bad --mfrm-* values), 3 the output could not be written.
  */
 @Command(name = "analyse", mixinStandardHelpOptions = true,
         description = {"Analyse ratings: descriptive statistics, the with/without-resources comparison, proficiency"
-                + " levels, rater agreement, rubric consistency, resource use and writing process.",
+                + " levels, rater agreement, rubric consistency, resource use and writing process; with"
+                + " --mfrm-facets also many-facet Rasch measurement.",
             "Writes report.html (self-contained), tables/*.csv and summary.json into the output folder."})
 public final class AnalyseCommand implements Callable<Integer> {
 
@@ -85,10 +101,30 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--title", paramLabel = "TEXT", defaultValue = "Analysis of ratings", description = "Report title")
     private String title;
 
+    @Option(names = "--mfrm-facets", paramLabel = "LIST", split = ",",
+            description = {"Also run many-facet Rasch measurement with these facets besides candidate, e.g."
+                + " task,condition,rater,criterion (any of level, form, task, condition, rater, criterion).",
+                "Off unless given."})
+    private List<String> mfrmFacets;
+
+    @Option(names = "--mfrm-structure", paramLabel = "STRUCTURE", defaultValue = "rating-scale",
+            description = "rating-scale (one threshold set) or partial-credit:FACET (one set per element of FACET,"
+                    + " a modelled facet); default: ${DEFAULT-VALUE}")
+    private String mfrmStructure;
+
+    @Option(names = "--mfrm-bias", paramLabel = "A:B", split = ",",
+            description = "Bias/interaction pairs, e.g. rater:task,condition:level (candidate or any ratings column)")
+    private List<String> mfrmBias;
+
+    @Option(names = "--mfrm-max-iterations", paramLabel = "N", defaultValue = "1000",
+            description = "Iteration cap of the Rasch estimation (default: ${DEFAULT-VALUE})")
+    private int mfrmMaxIterations;
+
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
         PrintWriter outWriter = spec.commandLine().getOut();
+        MfrmOptions mfrmOptions = mfrmOptions();
         StudyData data;
         StudyOptions options;
         try {
@@ -140,7 +176,25 @@ public final class AnalyseCommand implements Callable<Integer> {
                     + data.ratings().stream().map(Rating::condition).distinct().sorted().toList());
             return INPUT_REFUSED;
         }
-        Report report = StudyAnalysis.report(data, options);
+        List<Section> extra = new ArrayList<>();
+        if (mfrmOptions != null) {
+            Section mfrm = mfrmSection(data, mfrmOptions);
+            if (Boolean.FALSE.equals(mfrm.summary().get(MfrmSection.ID + ".available"))) {
+                err.println("inkgate-admin analyse: warning: the many-facet Rasch analysis was refused (the other"
+                        + " sections are written as usual):");
+                mfrm.paragraphs().stream().filter(x -> x.startsWith("Reason: ")).forEach(x -> err.println("  " + x));
+            } else if (mfrm.summary().get(MfrmSection.ID + ".convergence") instanceof Map<?, ?> c
+                    && Boolean.FALSE.equals(c.get("converged"))) {
+                err.println("inkgate-admin analyse: warning: the many-facet Rasch estimation did not converge within"
+                        + " --mfrm-max-iterations " + mfrmMaxIterations + "; its measures are provisional (see the report)");
+            }
+            if (mfrm.summary().get(MfrmSection.ID + ".warnings") instanceof List<?> w && !w.isEmpty()) {
+                err.println("inkgate-admin analyse: the many-facet Rasch analysis raised " + w.size()
+                        + " warning(s); read them in the report before using its measures");
+            }
+            extra.add(mfrm);
+        }
+        Report report = StudyAnalysis.report(data, options, extra);
         try {
             ReportWriter.write(report, out);
         } catch (IOException e) {
@@ -151,6 +205,74 @@ public final class AnalyseCommand implements Callable<Integer> {
                 + " ratings; tables in " + out.resolve("tables") + ", figures in " + out.resolve("summary.json") + ")");
         outWriter.flush();
         return 0;
+    }
+
+    /** The MFRM options from the command line, or null when --mfrm-facets is not given; bad values are usage errors. */
+    private MfrmOptions mfrmOptions() {
+        if (mfrmFacets == null) {
+            if (mfrmBias != null) {
+                throw new ParameterException(spec.commandLine(), "--mfrm-bias needs --mfrm-facets (the model the"
+                        + " bias terms are added to)");
+            }
+            return null;
+        }
+        List<String> facets = mfrmFacets.stream().map(String::trim).toList();
+        for (String f : facets) {
+            if (!StudyRatings.COLUMNS.contains(f)) {
+                throw new ParameterException(spec.commandLine(), "--mfrm-facets: '" + f + "' is not a ratings column;"
+                        + " use some of " + StudyRatings.COLUMNS + " (candidate is always modelled)");
+            }
+        }
+        try {
+            MfrmOptions.Builder b = MfrmOptions.builder(facets).structure(structure(mfrmStructure))
+                    .maxIterations(mfrmMaxIterations);
+            for (String pair : mfrmBias == null ? List.<String>of() : mfrmBias.stream().distinct().toList()) {
+                String[] ab = pair.trim().split(":", -1);
+                if (ab.length != 2 || !isColumn(ab[0]) || !isColumn(ab[1])) {
+                    throw new IllegalArgumentException("--mfrm-bias: '" + pair + "' is not COLUMN:COLUMN with columns"
+                            + " among candidate and " + StudyRatings.COLUMNS + " (e.g. rater:task)");
+                }
+                b.bias(ab[0], ab[1]);
+            }
+            return b.build();
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), e.getMessage(), e);
+        }
+    }
+
+    private static boolean isColumn(String c) {
+        return RatingData.CANDIDATE.equals(c) || StudyRatings.COLUMNS.contains(c);
+    }
+
+    private static ScaleStructure structure(String text) {
+        String t = text.trim();
+        if (t.equals("rating-scale")) {
+            return new ScaleStructure.RatingScale();
+        }
+        if (t.startsWith("partial-credit:") && t.length() > "partial-credit:".length()) {
+            return new ScaleStructure.PartialCredit(t.substring("partial-credit:".length()));
+        }
+        throw new IllegalArgumentException("--mfrm-structure: '" + text + "'; use rating-scale or"
+                + " partial-credit:FACET (e.g. partial-credit:task)");
+    }
+
+    /** Runs the Rasch analysis on the ratings already read; a refusal becomes the section's text. */
+    private static Section mfrmSection(StudyData data, MfrmOptions o) {
+        Map<String, String> levels = new HashMap<>();
+        data.candidates().forEach(c -> levels.put(c.id(), c.level()));
+        List<String> columns = new ArrayList<>(o.facets());
+        for (FacetPair p : o.biasPairs()) {
+            for (String c : List.of(p.first(), p.second())) {
+                if (!RatingData.CANDIDATE.equals(c) && !columns.contains(c)) {
+                    columns.add(c);
+                }
+            }
+        }
+        try {
+            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, columns), o);
+        } catch (MfrmRefusedException e) {
+            return MfrmSection.refused(e.reasons());
+        }
     }
 
     private static Reader open(Path file) throws IOException {

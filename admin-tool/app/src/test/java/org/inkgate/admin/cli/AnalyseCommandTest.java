@@ -6,10 +6,15 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.InputStream;
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
@@ -126,6 +131,165 @@ class AnalyseCommandTest {
         assertEquals(AnalyseCommand.INPUT_REFUSED, run("--ratings", ratings.toString(), "--out",
                 dir.resolve("o").toString(), "--baseline", "nothing"));
         assertTrue(err.toString().contains("[plain]"), err.toString());
+    }
+
+    /**
+     * The simulated rating-scale set of the MFRM reference tests (candidate x task x rater, invented
+     * parameters; admin-tool/analysis/src/test/resources/mfrm/reference/reference.R), rewritten as the
+     * tidy ratings table with one condition and one criterion.
+     */
+    private static Path referenceRatings(Path dir) throws Exception {
+        StringBuilder b = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        List<String> lines = resourceLines("ratingscale-2000.csv");
+        for (String line : lines.subList(1, lines.size())) {
+            String[] f = line.split(",");
+            b.append(f[0]).append(",,,").append(f[1]).append(",plain,").append(f[2]).append(",overall,").append(f[3])
+                    .append('\n');
+        }
+        return Files.writeString(dir.resolve("ratings.csv"), b.toString());
+    }
+
+    private static List<String> resourceLines(String name) throws Exception {
+        try (InputStream in = AnalyseCommandTest.class.getResourceAsStream("/analysis/" + name)) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8).lines().toList();
+        }
+    }
+
+    @Test
+    void analyse_mfrmOnConnectedDesign_addsSectionAndSummaryMatchingVgam(@TempDir Path dir) throws Exception {
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", referenceRatings(dir).toString(), "--out", outDir.toString(),
+                "--mfrm-facets", "task,rater", "--mfrm-bias", "rater:task", "--mfrm-max-iterations", "500"),
+                err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertTrue(s.get("mfrm.available").asBoolean());
+        assertTrue(s.get("mfrm.convergence").get("converged").asBoolean());
+        assertEquals(500, s.get("mfrm.convergence").get("maxIterations").asInt());
+        assertEquals(2000, s.get("mfrm.model").get("ratings").asInt());
+        assertEquals("rater", s.get("mfrm.bias").get(0).get("first").asText());
+        // the classical sections are still there
+        assertEquals(2000, s.get("input.ratings").asInt());
+        // rater and task measures and thresholds against VGAM's adjacent-category logit fit of the same
+        // data (vglm acat(parallel = TRUE), R 4.2.2, VGAM 1.1.7; ratingscale-2000-vgam.csv by reference.R);
+        // limit 0.005 logits as in the analysis module's EquivalenceTest
+        Map<String, Double> ref = new HashMap<>();
+        List<String> vgam = resourceLines("ratingscale-2000-vgam.csv");
+        for (String line : vgam.subList(1, vgam.size())) {
+            String[] f = line.split(",");
+            ref.put(f[0] + "/" + f[1], Double.parseDouble(f[2]));
+        }
+        int compared = 0;
+        for (JsonNode facet : s.get("mfrm.facets")) {
+            for (JsonNode e : facet.get("elements")) {
+                Double expected = ref.get(facet.get("name").asText() + "/" + e.get("label").asText());
+                assertTrue(expected != null, facet.get("name") + " " + e.get("label"));
+                assertEquals(expected, e.get("measure").asDouble(), 0.005, e.get("label").asText());
+                compared++;
+            }
+        }
+        JsonNode cats = s.get("mfrm.scales").get(0).get("categories");
+        for (int k = 1; k < cats.size(); k++) {
+            assertEquals(ref.get("threshold/F" + k), cats.get(k).get("threshold").asDouble(), 0.005, "F" + k);
+            compared++;
+        }
+        assertEquals(ref.size(), compared, "every reference value compared");
+        String html = Files.readString(outDir.resolve("report.html"));
+        assertTrue(html.contains("<section id=\"mfrm\">"), "MFRM section present");
+        assertTrue(html.contains("Wright map"));
+        assertTrue(html.contains("Convergence: reached after"));
+        assertTrue(Files.exists(outDir.resolve("tables/mfrm_facets.csv")));
+        assertTrue(Files.exists(outDir.resolve("tables/mfrm_elements_rater.csv")));
+        assertTrue(Files.exists(outDir.resolve("tables/mfrm_bias_rater_task.csv")));
+        assertFalse(err.toString().contains("refused"), err.toString());
+    }
+
+    @Test
+    void analyse_mfrmPartialCreditByTask_thresholdsMatchVgam(@TempDir Path dir) throws Exception {
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", referenceRatings(dir).toString(), "--out", outDir.toString(),
+                "--mfrm-facets", "task,rater", "--mfrm-structure", "partial-credit:task"), err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertEquals("partial credit by task", s.get("mfrm.model").get("structure").asText());
+        // VGAM acat(parallel = TRUE ~ candidate + rater - 1): one threshold set per task
+        // (ratingscale-2000-pcm-vgam.csv by reference-pcm.R, R 4.2.2, VGAM 1.1.7); limit 0.005 logits
+        Map<String, Double> ref = new HashMap<>();
+        List<String> vgam = resourceLines("ratingscale-2000-pcm-vgam.csv");
+        for (String line : vgam.subList(1, vgam.size())) {
+            String[] f = line.split(",");
+            ref.put(f[0] + "/" + f[1], Double.parseDouble(f[2]));
+        }
+        int compared = 0;
+        for (JsonNode scale : s.get("mfrm.scales")) {
+            JsonNode cats = scale.get("categories");
+            for (int k = 1; k < cats.size(); k++) {
+                String key = "threshold/" + scale.get("label").asText() + ":F" + k;
+                assertEquals(ref.get(key), cats.get(k).get("threshold").asDouble(), 0.005, key);
+                compared++;
+            }
+        }
+        assertEquals(16, compared, "4 tasks x 4 thresholds");
+        assertTrue(Files.readString(outDir.resolve("report.html")).contains("F_k(task)"));
+    }
+
+    @Test
+    void analyse_mfrmOnConfoundedDesign_writesClassicalReportAndRefusalText(@TempDir Path dir) throws Exception {
+        // invented rows, structure only: task a always under condition none, task b always under tools
+        StringBuilder r = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        for (int i = 0; i < 20; i++) {
+            for (String task : new String[] {"a", "b"}) {
+                for (String rater : new String[] {"R1", "R2"}) {
+                    r.append("K").append(i).append(",,,").append(task).append(',')
+                            .append(task.equals("a") ? "none" : "tools").append(',').append(rater).append(",ideas,")
+                            .append((i * 7 + task.length() + rater.hashCode()) % 5).append('\n');
+                }
+            }
+        }
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), r.toString());
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", outDir.toString(), "--mfrm-facets",
+                "task,condition,rater"), err.toString());
+        // the refusal reason of DesignCheck (docs/analysis.md, "two confounded facets")
+        assertTrue(err.toString().contains("warning: the many-facet Rasch analysis was refused"), err.toString());
+        assertTrue(err.toString().contains("each task occurs with only one condition"), err.toString());
+        String html = Files.readString(outDir.resolve("report.html"));
+        assertTrue(html.contains("NOT RUN. The many-facet Rasch analysis was refused"), "refusal stated");
+        assertTrue(html.contains("each task occurs with only one condition"), "reason given in the section");
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertFalse(s.get("mfrm.available").asBoolean());
+        assertTrue(s.get("mfrm.refusal").get(0).asText().contains("confounded"), s.get("mfrm.refusal").toString());
+        assertEquals(80, s.get("input.ratings").asInt());
+        assertTrue(s.has("comparison.overall.t"), "the classical comparison still runs");
+        assertFalse(Files.exists(outDir.resolve("tables/mfrm_facets.csv")));
+    }
+
+    @Test
+    void analyse_mfrmWithDecimalScores_refusesOnlyTheRaschSection(@TempDir Path dir) throws Exception {
+        Path f = Files.writeString(dir.resolve("ratings.csv"), "candidate,level,form,task,condition,rater,criterion,score\n"
+                + "C1,,,t1,none,R1,content,2.5\nC1,,,t1,none,R2,content,3\nC2,,,t1,none,R1,content,1\n"
+                + "C2,,,t1,none,R2,content,2\n");
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", f.toString(), "--out", outDir.toString(), "--mfrm-facets", "rater"),
+                err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertFalse(s.get("mfrm.available").asBoolean());
+        assertTrue(s.get("mfrm.refusal").get(0).asText().startsWith("rating 1 (candidate C1"), s.toString());
+        assertTrue(s.get("mfrm.refusal").get(0).asText().contains("score 2.5 is not a whole number"));
+    }
+
+    @Test
+    void analyse_badMfrmOptions_areUsageErrors(@TempDir Path dir) throws Exception {
+        Path ratings = shroutFleissRatings(dir);
+        String o = dir.resolve("o").toString();
+        assertEquals(2, run("--ratings", ratings.toString(), "--out", o, "--mfrm-facets", "rater,judge"));
+        assertTrue(err.toString().contains("'judge' is not a ratings column"), err.toString());
+        assertEquals(2, run("--ratings", ratings.toString(), "--out", o, "--mfrm-facets", "rater",
+                "--mfrm-structure", "partial-credit:task"), err.toString());
+        assertTrue(err.toString().contains("partial credit by 'task'"), err.toString());
+        assertEquals(2, run("--ratings", ratings.toString(), "--out", o, "--mfrm-facets", "rater",
+                "--mfrm-bias", "rater-task"));
+        assertTrue(err.toString().contains("is not COLUMN:COLUMN"), err.toString());
+        assertEquals(2, run("--ratings", ratings.toString(), "--out", o, "--mfrm-bias", "rater:task"));
+        assertFalse(Files.exists(dir.resolve("o")));
     }
 
     @Test

@@ -3,7 +3,7 @@ package org.inkgate.analysis.mfrm.chart;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import org.inkgate.analysis.graphics.Drawings;
+import org.inkgate.analysis.graphics.Drawing;
 import org.inkgate.analysis.mfrm.bias.BiasCell;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
 
@@ -19,18 +19,21 @@ public final class BiasChart {
     private BiasChart() {
     }
 
+    /** The chart's drawing routine and size (for a report chart). */
+    public static Drawing drawing(BiasPair pair) {
+        List<BiasCell> cells = top(pair);
+        return new Drawing(W, height(cells), g -> paint(new GraphicsCanvas(g), pair, cells));
+    }
+
     /** The chart as an SVG element. */
     public static String svg(BiasPair pair) {
-        List<BiasCell> cells = top(pair);
         String id = ("bias-" + pair.first() + "-" + pair.second()).replaceAll("[^A-Za-z0-9_-]", "_");
-        return Drawings.svg(id, "Bias " + pair.first() + " x " + pair.second(), W, height(cells),
-                g -> paint(new GraphicsCanvas(g), pair, cells));
+        return drawing(pair).svg(id, "Bias " + pair.first() + " x " + pair.second());
     }
 
     /** The same as PNG bytes. */
     public static byte[] png(BiasPair pair) {
-        List<BiasCell> cells = top(pair);
-        return Drawings.png(W, height(cells), g -> paint(new GraphicsCanvas(g), pair, cells));
+        return drawing(pair).png();
     }
 
     private static List<BiasCell> top(BiasPair pair) {
@@ -72,7 +75,8 @@ public final class BiasChart {
             g.circle(x.map(Math.max(-span, Math.min(span, c.size()))), cy, 3.5, colour);
         }
         for (double v : new double[] {-span, -span / 2, 0, span / 2, span}) {
-            g.text(String.format(Locale.ROOT, "%.1f", v), x.map(v), bottom + 16, Palette.LABEL, false, Palette.TEXT,
+            // two decimals for small spans, so the quarter ticks (e.g. 0.25) are not rounded to 0.3
+            g.text(String.format(Locale.ROOT, span < 2 ? "%.2f" : "%.1f", v), x.map(v), bottom + 16, Palette.LABEL, false, Palette.TEXT,
                     Canvas.Anchor.MIDDLE);
         }
         g.text("bias size (logits)", (left + right) / 2.0, bottom + 32, Palette.LABEL, false, Palette.TEXT,

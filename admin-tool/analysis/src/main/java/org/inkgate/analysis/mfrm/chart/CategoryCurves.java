@@ -2,7 +2,7 @@ package org.inkgate.analysis.mfrm.chart;
 
 import java.util.List;
 import java.util.Locale;
-import org.inkgate.analysis.graphics.Drawings;
+import org.inkgate.analysis.graphics.Drawing;
 import org.inkgate.analysis.mfrm.MfrmResult;
 import org.inkgate.analysis.mfrm.estimation.CategoryModel;
 
@@ -20,19 +20,21 @@ public final class CategoryCurves {
     private CategoryCurves() {
     }
 
-    /** Curves of the scale at {@code scaleIndex} as an SVG element. */
-    public static String svg(MfrmResult r, int scaleIndex) {
+    /** The drawing routine and size of the curves of the scale at {@code scaleIndex} (for a report chart). */
+    public static Drawing drawing(MfrmResult r, int scaleIndex) {
         MfrmResult.Scale scale = r.scales().get(scaleIndex);
         boolean shared = r.scales().size() == 1;
-        return Drawings.svg("category-curves-" + scaleIndex, "Category probability curves", W, H,
-                g -> paint(new GraphicsCanvas(g), scale, shared));
+        return new Drawing(W, H, g -> paint(new GraphicsCanvas(g), scale, shared));
+    }
+
+    /** Curves of the scale at {@code scaleIndex} as an SVG element. */
+    public static String svg(MfrmResult r, int scaleIndex) {
+        return drawing(r, scaleIndex).svg("category-curves-" + scaleIndex, "Category probability curves");
     }
 
     /** The same as PNG bytes. */
     public static byte[] png(MfrmResult r, int scaleIndex) {
-        MfrmResult.Scale scale = r.scales().get(scaleIndex);
-        boolean shared = r.scales().size() == 1;
-        return Drawings.png(W, H, g -> paint(new GraphicsCanvas(g), scale, shared));
+        return drawing(r, scaleIndex).png();
     }
 
     static void paint(Canvas g, MfrmResult.Scale s, boolean shared) {

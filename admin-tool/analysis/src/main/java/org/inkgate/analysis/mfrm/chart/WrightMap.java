@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
-import org.inkgate.analysis.graphics.Drawings;
+import org.inkgate.analysis.graphics.Drawing;
 import org.inkgate.analysis.mfrm.MfrmResult;
 
 /**
@@ -28,16 +28,20 @@ public final class WrightMap {
     private WrightMap() {
     }
 
+    /** The map's drawing routine and size (for a report chart). */
+    public static Drawing drawing(MfrmResult r) {
+        int w = width(r);
+        return new Drawing(w, HEIGHT, g -> paint(new GraphicsCanvas(g), r, w, HEIGHT));
+    }
+
     /** The map as an SVG element. */
     public static String svg(MfrmResult r) {
-        int w = width(r);
-        return Drawings.svg("wright-map", "Wright map", w, HEIGHT, g -> paint(new GraphicsCanvas(g), r, w, HEIGHT));
+        return drawing(r).svg("wright-map", "Wright map");
     }
 
     /** The map as PNG bytes. */
     public static byte[] png(MfrmResult r) {
-        int w = width(r);
-        return Drawings.png(w, HEIGHT, g -> paint(new GraphicsCanvas(g), r, w, HEIGHT));
+        return drawing(r).png();
     }
 
     private static int width(MfrmResult r) {
