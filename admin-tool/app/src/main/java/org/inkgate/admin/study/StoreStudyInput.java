@@ -1,0 +1,101 @@
+package org.inkgate.admin.study;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.Rows;
+import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.analysis.data.Candidate;
+import org.inkgate.analysis.data.ProcessEvent;
+import org.inkgate.analysis.data.ToolUse;
+
+/**
+ * The analysis's candidate, tool-use and writing-process tables read straight from a results
+ * store, so a researcher needs no CSV export in between. Ratings are not in the store until the
+ * rating desk exists; they still come from a ratings CSV.
+ *
+ * <p>The mapping is documented in docs/analysis.md ("Input from a results store"):
+ * <ul>
+ *   <li>a candidate's level is the roster's level; personal fields are never read;</li>
+ *   <li>a tool's {@code uses} in a response are the candidate's own actions with it: queries,
+ *       suggestions accepted and suggestions ignored (suggestions merely shown do not count);</li>
+ *   <li>process events keep their type, task, monotonic time (as milliseconds) and the
+ *       {@code pos} and {@code text} fields of their data; a deletion logged with only {@code len}
+ *       gets a placeholder of that length, because the measures use its length only.</li>
+ * </ul>
+ */
+public final class StoreStudyInput {
+    private static final ObjectMapper JSON = new ObjectMapper();
+
+    /** The three tables of one exam. */
+    public record Tables(List<Candidate> candidates, List<ToolUse> toolUse, List<ProcessEvent> processLog) {
+    }
+
+    private StoreStudyInput() {
+    }
+
+    /** Reads the exam's candidates, tool use and process events from the store. */
+    public static Tables read(ResultsStore store, String examId) throws StoreException {
+        List<Candidate> candidates = store.candidates(examId).stream().map(StoreStudyInput::candidate).toList();
+        List<ToolUse> toolUse = new ArrayList<>();
+        store.forEachToolUse(examId, row -> toolUse.add(toolUse(row)));
+        List<ProcessEvent> events = new ArrayList<>();
+        store.forEachEvent(examId, row -> {
+            ProcessEvent e = processEvent(row);
+            if (e != null) {
+                events.add(e);
+            }
+        });
+        return new Tables(candidates, toolUse, events);
+    }
+
+    static Candidate candidate(Rows.Candidate row) {
+        return new Candidate(row.candidateNumber(), row.level() == null ? "" : row.level(), Map.of());
+    }
+
+    static ToolUse toolUse(Rows.ToolUseRow row) {
+        long uses = (long) row.queries() + row.suggestionsAccepted() + row.suggestionsIgnored();
+        return new ToolUse(row.candidateNumber(), row.taskId(), row.tool(), uses, row.emptyQueries(),
+                row.suggestionsAccepted(), row.suggestionsIgnored());
+    }
+
+    /** The analysis's view of one stored event, or null for event types the measures do not use. */
+    static ProcessEvent processEvent(Rows.Event row) {
+        ProcessEvent.Type type = typeOf(row.type());
+        if (type == null || row.taskId() == null || row.taskId().isEmpty()) {
+            return null;
+        }
+        JsonNode data = parse(row);
+        int position = data.path("pos").asInt(0);
+        String text = switch (type) {
+            case INSERT -> data.path("text").asText("");
+            case DELETE -> data.hasNonNull("text") ? data.get("text").asText()
+                    : "\uFFFD".repeat(Math.max(0, data.path("len").asInt(0)));
+            case TOOL_QUERY -> data.path("query").asText(data.path("text").asText(""));
+            case TOOL_OPEN, TOOL_CLOSE -> "";
+        };
+        return new ProcessEvent(row.candidateNumber(), row.taskId(), Math.floorDiv(row.mono(), 1_000_000L), type,
+                position, text);
+    }
+
+    private static ProcessEvent.Type typeOf(String logName) {
+        for (ProcessEvent.Type t : ProcessEvent.Type.values()) {
+            if (t.logName().equals(logName)) {
+                return t;
+            }
+        }
+        return null;
+    }
+
+    private static JsonNode parse(Rows.Event row) {
+        try {
+            return JSON.readTree(row.dataJson() == null ? "{}" : row.dataJson());
+        } catch (java.io.IOException e) {
+            throw new IllegalStateException("event " + row.seq() + " of package " + row.packageId()
+                    + " has data that is not JSON; the store may be damaged: " + e.getMessage(), e);
+        }
+    }
+}
