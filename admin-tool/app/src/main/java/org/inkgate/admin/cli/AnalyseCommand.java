@@ -12,6 +12,11 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.study.StoreStudyInput;
+import org.inkgate.analysis.data.Candidate;
 import org.inkgate.analysis.data.CandidatesReader;
 import org.inkgate.analysis.data.InputRejected;
 import org.inkgate.analysis.data.ProcessEvent;
@@ -78,6 +83,15 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--process", paramLabel = "FILE.csv",
             description = "Optional process log: candidate,task,time_ms,type,position,text")
     private Path process;
+
+    @Option(names = "--store", paramLabel = "FILE.db",
+            description = "Optional results store (from collect): candidates' levels, tool use and process events of"
+                    + " --exam are read from it; not together with --tool-usage or --process")
+    private Path store;
+
+    @Option(names = "--exam", paramLabel = "ID",
+            description = "The exam in --store; may be left out when the store holds one exam")
+    private String exam;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "Folder for the report (created if absent)")
     private Path out;
@@ -157,7 +171,17 @@ public final class AnalyseCommand implements Callable<Integer> {
                     p = ProcessLogReader.read(process.getFileName().toString(), in);
                 }
             }
-            data = new StudyData(r, c == null ? List.of() : c.candidates(), c == null ? List.of() : c.items(), u, p);
+            List<Candidate> cands = c == null ? List.of() : c.candidates();
+            if (store != null) {
+                StoreStudyInput.Tables fromStore = readStore(err);
+                if (fromStore == null) {
+                    return INPUT_REFUSED;
+                }
+                cands = c == null ? fromStore.candidates() : cands;
+                u = fromStore.toolUse();
+                p = fromStore.processLog();
+            }
+            data = new StudyData(r, cands, c == null ? List.of() : c.items(), u, p);
         } catch (InputRejected e) {
             err.println("inkgate-admin analyse: " + e.getMessage());
             err.println("Fix the rows above and run again; no report was written.");
@@ -205,6 +229,38 @@ public final class AnalyseCommand implements Callable<Integer> {
                 + " ratings; tables in " + out.resolve("tables") + ", figures in " + out.resolve("summary.json") + ")");
         outWriter.flush();
         return 0;
+    }
+
+    /** The store's tables of the chosen exam, or null after saying on err why they cannot be read. */
+    private StoreStudyInput.Tables readStore(PrintWriter err) {
+        if (toolUsage != null || process != null) {
+            err.println("inkgate-admin analyse: give either --store or --tool-usage/--process, not both: the store"
+                    + " already holds the tool use and process events");
+            return null;
+        }
+        if (!Files.isRegularFile(store)) {
+            err.println("inkgate-admin analyse: no results store at " + store + "; give the file collect wrote");
+            return null;
+        }
+        try (ResultsStore s = SqliteResultsStore.open(store)) {
+            List<String> exams = s.examIds();
+            String chosen = exam;
+            if (chosen == null) {
+                if (exams.size() != 1) {
+                    err.println("inkgate-admin analyse: the store holds " + exams.size() + " exams " + exams
+                            + "; name one with --exam");
+                    return null;
+                }
+                chosen = exams.get(0);
+            } else if (!exams.contains(chosen)) {
+                err.println("inkgate-admin analyse: the store holds no exam " + chosen + "; it holds " + exams);
+                return null;
+            }
+            return StoreStudyInput.read(s, chosen);
+        } catch (StoreException e) {
+            err.println("inkgate-admin analyse: could not read the results store " + store + ": " + e.getMessage());
+            return null;
+        }
     }
 
     /** The MFRM options from the command line, or null when --mfrm-facets is not given; bad values are usage errors. */

@@ -102,6 +102,43 @@ class CommandLineTest {
         assertEquals(0, export.code(), export.out());
         assertTrue(Files.exists(dir.resolve("export/demo-harbourside-placement/csv/responses.csv")));
         assertEquals(11, Files.list(dir.resolve("export/demo-harbourside-placement/qti-results")).count());
+
+        // ratings come from a CSV (the rating desk comes later); levels, tool use and process events from the store
+        Path ratings = dir.resolve("ratings.csv");
+        Files.writeString(ratings, inventedRatings(dir.resolve("export/demo-harbourside-placement/csv/responses.csv")));
+        Path report = dir.resolve("report");
+        Run analyse = admin("analyse", "--ratings", ratings.toString(), "--store", store, "--out", report.toString());
+        assertEquals(0, analyse.code(), analyse.out());
+        String summary = Files.readString(report.resolve("summary.json"));
+        assertTrue(summary.contains("\"usage."), "tool use read from the store: " + summary.substring(0, 400));
+        assertTrue(summary.contains("\"process."), "process events read from the store");
+    }
+
+    /** Two raters, two criteria, invented scores for every response in the export (not check values). */
+    private static String inventedRatings(Path responsesCsv) throws Exception {
+        List<String> lines = Files.readAllLines(responsesCsv);
+        List<String> header = List.of(lines.get(0).split(","));
+        int cand = header.indexOf("candidate_number");
+        int task = header.indexOf("task_id");
+        int cond = header.indexOf("condition_id");
+        int form = header.indexOf("form_id");
+        StringBuilder out = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        int n = 0;
+        for (String line : lines.subList(1, lines.size())) {
+            String[] f = line.split(",", -1);
+            if (f.length <= Math.max(Math.max(cand, task), Math.max(cond, form)) || !f[cand].matches("[A-Z0-9]+")) {
+                continue;
+            }
+            for (String rater : List.of("R1", "R2")) {
+                for (String criterion : List.of("content", "language")) {
+                    int score = 3 + (n++ * 7 + rater.hashCode()) % 5;
+                    out.append(f[cand]).append(",,").append(f[form]).append(',').append(f[task]).append(',')
+                            .append(f[cond]).append(',').append(rater).append(',').append(criterion).append(',')
+                            .append(score).append('\n');
+                }
+            }
+        }
+        return out.toString();
     }
 
     @Test
