@@ -3,8 +3,8 @@
 # invented demo exam source, names both packs built by resource-packs, times 3 signed and 3 sealed
 # bundle commands (JVM start included). Needs: mvn -q -B -pl admin-tool/app -am -DskipTests package
 set -euo pipefail
-cd /work/main
-export JAVA_HOME=/usr/lib/jvm/temurin-25-jdk-amd64 PATH=/usr/lib/jvm/temurin-25-jdk-amd64/bin:$PATH
+cd "$(dirname "$0")/../../../../.."
+if [ -d /usr/lib/jvm/temurin-25-jdk-amd64 ]; then export JAVA_HOME=/usr/lib/jvm/temurin-25-jdk-amd64; fi
 W=/tmp/wn-bench; rm -rf $W; mkdir -p $W
 cp -r admin-tool/app/src/demo/exam-source $W/exam; mkdir -p $W/exam/packs
 cp resource-packs/target/packs/*.inkpack $W/exam/packs/
