@@ -3,6 +3,7 @@ package org.inkgate.analysis.comparison;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
+import org.inkgate.analysis.descriptive.Moments;
 import org.inkgate.analysis.distributions.NoncentralT;
 
 /**
@@ -26,8 +27,8 @@ public record IndependentComparison(double difference, double studentT, double s
             throw new IllegalArgumentException("independent t-tests need at least 2 values per sample (have " + na
                     + " and " + nb + ")");
         }
-        double ma = PairedComparison.mean(a), mb = PairedComparison.mean(b);
-        double va = PairedComparison.variance(a), vb = PairedComparison.variance(b);
+        double ma = Moments.mean(a), mb = Moments.mean(b);
+        double va = Moments.variance(a), vb = Moments.variance(b);
         double diff = ma - mb;
         double dfS = na + nb - 2;
         double pooled = ((na - 1) * va + (nb - 1) * vb) / dfS;

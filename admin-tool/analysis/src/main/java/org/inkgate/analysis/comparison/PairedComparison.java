@@ -3,6 +3,7 @@ package org.inkgate.analysis.comparison;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.math3.distribution.TDistribution;
+import org.inkgate.analysis.descriptive.Moments;
 import org.inkgate.analysis.distributions.NoncentralT;
 
 /**
@@ -30,18 +31,18 @@ public record PairedComparison(int n, double meanA, double meanB, double meanDif
         }
         int n = a.length;
         List<String> cautions = new ArrayList<>();
-        double ma = mean(a), mb = mean(b);
+        double ma = Moments.mean(a), mb = Moments.mean(b);
         double[] d = new double[n];
         for (int i = 0; i < n; i++) {
             d[i] = b[i] - a[i];
         }
-        double md = mean(d);
+        double md = Moments.mean(d);
         if (n < 2) {
             cautions.add("paired t-test needs at least 2 pairs (has " + n + ")");
             return nan(n, ma, mb, md, cautions);
         }
-        double sd = Math.sqrt(variance(d));
-        double sa = Math.sqrt(variance(a)), sb = Math.sqrt(variance(b));
+        double sd = Math.sqrt(Moments.variance(d));
+        double sa = Math.sqrt(Moments.variance(a)), sb = Math.sqrt(Moments.variance(b));
         if (sd == 0) {
             cautions.add("all paired differences are equal: t and d_z undefined");
             return nan(n, ma, mb, md, cautions);
@@ -70,20 +71,4 @@ public record PairedComparison(int n, double meanA, double meanB, double meanDif
         return new PairedComparison(n, ma, mb, md, x, x, x, x, x, x, x, x, x, x, x, x, cautions);
     }
 
-    static double mean(double[] v) {
-        double s = 0;
-        for (double x : v) {
-            s += x;
-        }
-        return s / v.length;
-    }
-
-    static double variance(double[] v) {
-        double m = mean(v);
-        double s = 0;
-        for (double x : v) {
-            s += (x - m) * (x - m);
-        }
-        return s / (v.length - 1);
-    }
 }

@@ -41,20 +41,4 @@ public record Groups(List<String> labels, List<double[]> values) {
         return values.stream().mapToInt(v -> v.length).sum();
     }
 
-    static double mean(double[] v) {
-        double s = 0;
-        for (double x : v) {
-            s += x;
-        }
-        return s / v.length;
-    }
-
-    static double variance(double[] v) {
-        double m = mean(v);
-        double s = 0;
-        for (double x : v) {
-            s += (x - m) * (x - m);
-        }
-        return s / (v.length - 1);
-    }
 }

@@ -2,6 +2,7 @@ package org.inkgate.analysis.groups;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.inkgate.analysis.descriptive.Moments;
 
 /**
  * One-way analysis of variance with eta squared and omega squared (eta^2 = SS_b / SS_T;
@@ -42,7 +43,7 @@ public record OneWayAnova(int groups, int n, double ssBetween, double ssWithin, 
         double grand = used.stream().flatMapToDouble(java.util.Arrays::stream).sum() / n;
         double ssb = 0, ssw = 0;
         for (double[] v : used) {
-            double m = Groups.mean(v);
+            double m = Moments.mean(v);
             ssb += v.length * (m - grand) * (m - grand);
             for (double x : v) {
                 ssw += (x - m) * (x - m);

@@ -2,6 +2,7 @@ package org.inkgate.analysis.groups;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.inkgate.analysis.descriptive.Moments;
 import org.inkgate.analysis.distributions.StudentizedRange;
 
 /**
@@ -51,7 +52,7 @@ public final class PairwiseComparisons {
         double mse = 0;
         int n = 0;
         for (double[] v : values) {
-            double m = Groups.mean(v);
+            double m = Moments.mean(v);
             for (double x : v) {
                 mse += (x - m) * (x - m);
             }
@@ -64,7 +65,7 @@ public final class PairwiseComparisons {
             for (int j = i + 1; j < k; j++) {
                 double[] a = values.get(i);
                 double[] b = values.get(j);
-                double diff = Groups.mean(b) - Groups.mean(a);
+                double diff = Moments.mean(b) - Moments.mean(a);
                 double se;
                 double df;
                 double qCrit;
@@ -73,8 +74,8 @@ public final class PairwiseComparisons {
                     df = dfE;
                     qCrit = qCritPooled;
                 } else {
-                    double va = Groups.variance(a) / a.length;
-                    double vb = Groups.variance(b) / b.length;
+                    double va = Moments.variance(a) / a.length;
+                    double vb = Moments.variance(b) / b.length;
                     se = Math.sqrt((va + vb) / 2);
                     df = (va + vb) * (va + vb) / (va * va / (a.length - 1) + vb * vb / (b.length - 1));
                     qCrit = df > 0 ? StudentizedRange.quantile(confidence, k, df) : Double.NaN;

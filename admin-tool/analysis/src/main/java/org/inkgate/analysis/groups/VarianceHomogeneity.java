@@ -3,6 +3,7 @@ package org.inkgate.analysis.groups;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.inkgate.analysis.descriptive.Moments;
 
 /**
  * Levene's test (centre = mean; Levene 1960) and the Brown-Forsythe test (centre = median;
@@ -20,7 +21,7 @@ public final class VarianceHomogeneity {
     public static OneWayAnova test(Groups groups, Centre centre) {
         List<double[]> deviations = new ArrayList<>();
         for (double[] v : groups.values()) {
-            double c = v.length == 0 ? 0 : centre == Centre.MEAN ? Groups.mean(v) : median(v);
+            double c = v.length == 0 ? 0 : centre == Centre.MEAN ? Moments.mean(v) : median(v);
             deviations.add(Arrays.stream(v).map(x -> Math.abs(x - c)).toArray());
         }
         return OneWayAnova.of(new Groups(groups.labels(), deviations));

@@ -2,6 +2,7 @@ package org.inkgate.analysis.groups;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.inkgate.analysis.descriptive.Moments;
 
 /**
  * Welch's (1951) heteroscedastic one-way ANOVA: weights w_i = n_i / s_i^2, F = A / B with
@@ -21,7 +22,7 @@ public record WelchAnova(double f, double df1, double df2, double p, List<String
             double[] v = groups.values().get(g);
             if (v.length < 2) {
                 cautions.add("group " + groups.labels().get(g) + " has fewer than 2 values and is left out");
-            } else if (Groups.variance(v) == 0) {
+            } else if (Moments.variance(v) == 0) {
                 cautions.add("group " + groups.labels().get(g) + " has zero variance: Welch weights undefined");
                 return new WelchAnova(Double.NaN, Double.NaN, Double.NaN, Double.NaN, cautions);
             } else {
@@ -37,8 +38,8 @@ public record WelchAnova(double f, double df1, double df2, double p, List<String
         double[] m = new double[k];
         double sumW = 0;
         for (int i = 0; i < k; i++) {
-            w[i] = used.get(i).length / Groups.variance(used.get(i));
-            m[i] = Groups.mean(used.get(i));
+            w[i] = used.get(i).length / Moments.variance(used.get(i));
+            m[i] = Moments.mean(used.get(i));
             sumW += w[i];
         }
         double weightedMean = 0;

@@ -342,33 +342,17 @@ public final class JmleEstimator {
             }
         }
         for (int f = 1; f < nF; f++) {
-            if (anyAnchored[f]) {
-                continue;
-            }
-            double sum = 0;
-            int count = 0;
-            for (int e = 0; e < measure[f].length; e++) {
-                if (present[f][e]) {
-                    sum += measure[f][e];
-                    count++;
-                }
-            }
-            double mean = sum / count;
-            for (int e = 0; e < measure[f].length; e++) {
-                if (present[f][e]) {
-                    measure[f][e] -= mean;
-                }
-            }
+            double mean = centre(measure, f);
             for (int c = 0; c < measure[0].length; c++) {
                 measure[0][c] -= mean;
             }
         }
     }
 
-    /** Centres facet f at 0 unless it is the candidate facet or has anchored elements. */
-    private void centre(double[][] measure, int f) {
+    /** Centres facet f at 0 unless it is the candidate facet or has anchored elements; returns the mean removed. */
+    private double centre(double[][] measure, int f) {
         if (f == 0 || anyAnchored[f]) {
-            return;
+            return 0;
         }
         double sum = 0;
         int count = 0;
@@ -384,6 +368,7 @@ public final class JmleEstimator {
                 measure[f][e] -= mean;
             }
         }
+        return mean;
     }
 
     /** Centres every unanchored threshold set at sum 0. */
