@@ -1,0 +1,292 @@
+package org.inkgate.admin.gui;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertSame;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.KeyPair;
+import java.util.Base64;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicReference;
+import javafx.scene.Node;
+import javafx.scene.Scene;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListView;
+import javafx.scene.control.TableView;
+import javafx.scene.control.TextArea;
+import javafx.scene.control.TextInputControl;
+import javafx.scene.input.KeyCode;
+import javafx.stage.Stage;
+import org.inkgate.admin.core.collection.Outcome;
+import org.inkgate.admin.core.keys.OwnerKeyStore;
+import org.inkgate.admin.core.simulation.SimulatedSitting;
+import org.inkgate.admin.core.source.Problem;
+import org.inkgate.admin.testutil.DemoSource;
+import org.inkgate.admin.testutil.PngSnapshots;
+import org.inkgate.format.bundle.BundleReader;
+import org.inkgate.format.bundle.OpenedBundle;
+import org.inkgate.format.bundle.RosterEntry;
+import org.inkgate.format.crypto.Ed25519;
+import org.inkgate.format.crypto.X25519;
+import org.inkgate.format.trust.TrustPolicy;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.extension.ExtendWith;
+import org.junit.jupiter.api.io.TempDir;
+import org.testfx.api.FxRobot;
+import org.testfx.framework.junit5.ApplicationExtension;
+import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
+
+/**
+ * Drives the real admin window headless (Monocle) over the invented demo exam source, step by
+ * step as a test owner would, and writes a screenshot of every step (docs/screenshots/README.md).
+ * Expected values come from the demo files themselves (src/demo/roster.csv: 12 invented
+ * candidates, 6 at each of two levels) and from what the test plants, never from the code under test.
+ */
+@ExtendWith(ApplicationExtension.class)
+class AdminWindowTest {
+
+    private static final char[] PASSPHRASE = "invented passphrase for the demo".toCharArray();
+    private static final String LEFT_OUT = "H1012";
+
+    @TempDir
+    Path dir;
+    private Stage stage;
+
+    @Start
+    void start(Stage primary) {
+        this.stage = primary;
+    }
+
+    @Test
+    void walkthrough_demoExam_everyStepShowsWhatTheTestOwnerNeeds(FxRobot robot) throws Exception {
+        Path keys = dir.resolve("keys");
+        new OwnerKeyStore(keys).init(PASSPHRASE);
+        AdminSession session = new AdminSession();
+        AtomicReference<Scene> scene = new AtomicReference<>();
+        robot.interact(() -> scene.set(AdminWindow.show(stage, session)));
+
+        // 1. exam check: a planted problem is listed with the line it is on
+        Path broken = DemoSource.copyExam(dir.resolve("broken"));
+        Path examYaml = broken.resolve("exam.yaml");
+        String yaml = Files.readString(examYaml).replace("prompt: prompts/ferry-complaint.md",
+                "prompt: prompts/no-such-prompt.md");
+        Files.writeString(examYaml, yaml);
+        int plantedLine = lineOf(yaml, "prompts/no-such-prompt.md");
+        setText(robot, "#examFolder", broken.toString());
+        robot.clickOn("#checkExam");
+        WaitForAsyncUtils.waitForFxEvents();
+        TableView<Problem> problems = robot.lookup("#problems").queryTableView();
+        assertFalse(problems.getItems().isEmpty(), "the planted problem is listed");
+        assertTrue(problems.getItems().stream().anyMatch(p -> p.file().equals("exam.yaml") && p.line() == plantedLine),
+                "a problem on exam.yaml line " + plantedLine + ": " + problems.getItems());
+        assertTrue(label(robot, "#examSummary").startsWith(problems.getItems().size() + " problem"));
+        shoot(robot, scene.get(), "admin-exam-check.png");
+
+        Path exam = DemoSource.copyExam(dir.resolve("exam-source"));
+        setText(robot, "#examFolder", exam.toString());
+        robot.clickOn("#checkExam");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(label(robot, "#examSummary").startsWith("No problems found"), label(robot, "#examSummary"));
+
+        // keyboard: Ctrl+2 opens the forms step
+        robot.press(KeyCode.CONTROL, KeyCode.DIGIT2).release(KeyCode.DIGIT2, KeyCode.CONTROL);
+        WaitForAsyncUtils.waitForFxEvents();
+        ListView<?> steps = robot.lookup("#steps").queryListView();
+        assertEquals(1, steps.getSelectionModel().getSelectedIndex());
+
+        // 2. forms: 12 candidates, 6 per level (src/demo/roster.csv), spread over the forms
+        setText(robot, "#roster", DemoSource.DEMO.resolve("roster.csv").toAbsolutePath().toString());
+        setText(robot, "#seed", "20261202");
+        robot.clickOn("#assign");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(label(robot, "#formsResult").startsWith("12 candidates assigned with seed 20261202"),
+                label(robot, "#formsResult"));
+        for (String level : List.of("B1", "B2")) {
+            int sum = 0;
+            int min = Integer.MAX_VALUE;
+            int max = 0;
+            for (String form : List.of("F01", "F02", "F03", "F04")) {
+                int n = Integer.parseInt(label(robot, "#count-" + level + "-" + form));
+                sum += n;
+                min = Math.min(min, n);
+                max = Math.max(max, n);
+            }
+            assertEquals(6, sum, "level " + level + " has 6 candidates in src/demo/roster.csv");
+            // the rule: within a level, forms at most one apart when the level does not divide evenly
+            assertTrue(max - min <= 1, level + ": " + min + ".." + max);
+        }
+        assertTrue(Files.isRegularFile(session.assignment().get()));
+        shoot(robot, scene.get(), "admin-forms.png");
+
+        // 3. bundle: sealed first (the release code is shown once), then the unsealed one collected below
+        select(robot, 2);
+        setText(robot, "#keys", keys.toString());
+        Path sealedFile = dir.resolve("sealed.inkexam");
+        setText(robot, "#bundleOut", sealedFile.toString());
+        fillSecrets(robot);
+        robot.interact(() -> robot.lookup("#seal").queryAs(CheckBox.class).setSelected(true));
+        robot.clickOn("#buildBundle");
+        waitForWork(session);
+        String code = label(robot, "#releaseCode");
+        assertFalse(code.isEmpty(), label(robot, "#bundleResult"));
+        try (OpenedBundle b = ownerReader(keys).open(sealedFile)) {
+            assertTrue(b.sealed());
+            assertFalse(b.readable(), "sealed: prompts stay closed until the code is given");
+            b.unseal(code.toCharArray());
+            assertTrue(b.readable(), "the code shown on screen opens the bundle");
+        }
+        shoot(robot, scene.get(), "admin-bundle-sealed.png");
+        robot.clickOn("#codeStored");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals("", label(robot, "#releaseCode"));
+
+        Path bundleFile = dir.resolve("demo.inkexam");
+        setText(robot, "#bundleOut", bundleFile.toString());
+        fillSecrets(robot);
+        robot.interact(() -> robot.lookup("#seal").queryAs(CheckBox.class).setSelected(false));
+        robot.clickOn("#buildBundle");
+        waitForWork(session);
+        assertTrue(label(robot, "#bundleResult").startsWith("Bundle written"), label(robot, "#bundleResult"));
+        List<RosterEntry> roster;
+        try (OpenedBundle b = ownerReader(keys).open(bundleFile)) {
+            assertTrue(b.readable());
+            roster = b.manifest().roster();
+            assertEquals(12, roster.size(), "every candidate of src/demo/roster.csv");
+        }
+
+        // 4. collect: simulated packages for all but one candidate, and a tampered copy
+        Path packages = dir.resolve("packages");
+        writeSimulatedPackages(keys, bundleFile, packages);
+        byte[] bytes = Files.readAllBytes(packages.resolve("H1001.inkresp"));
+        bytes[bytes.length / 2] ^= 0x01;
+        Files.write(packages.resolve("H1001-tampered.inkresp"), bytes);
+        select(robot, 3);
+        robot.interact(() -> robot.lookup("#packageFolders").queryAs(TextArea.class).setText(packages.toString()));
+        robot.interact(() -> robot.lookup("#anyInstallation").queryAs(CheckBox.class).setSelected(true));
+        setText(robot, "#collectPassphrase", new String(PASSPHRASE));
+        robot.clickOn("#collect");
+        waitForWork(session);
+        String counts = label(robot, "#collectCounts");
+        // 11 written, one tampered copy: 11 imported, 1 refused
+        assertTrue(counts.startsWith("Imported 11, already imported (same file) 0, copies of imported packages 0,"
+                + " refused 1."), counts);
+        TableView<Outcome.Refused> refused = robot.lookup("#refused").queryTableView();
+        assertEquals(1, refused.getItems().size());
+        assertTrue(refused.getItems().get(0).file().endsWith("H1001-tampered.inkresp"));
+        assertFalse(refused.getItems().get(0).reason().isBlank());
+        assertFalse(refused.getItems().get(0).message().isBlank());
+        shoot(robot, scene.get(), "admin-collect.png");
+
+        // 5. missing: the candidate left out is named
+        select(robot, 4);
+        robot.clickOn("#showMissing");
+        WaitForAsyncUtils.waitForFxEvents();
+        String missing = label(robot, "#missingReport");
+        assertTrue(missing.contains("candidate " + LEFT_OUT), missing);
+        assertFalse(missing.contains("candidate H1001"), missing);
+        assertTrue(missing.contains("follow your regulations"), missing);
+        shoot(robot, scene.get(), "admin-missing.png");
+    }
+
+    @Test
+    void bundle_wrongPassphrase_showsAPlainMessageAndWritesNothing(FxRobot robot) throws Exception {
+        Path keys = dir.resolve("keys");
+        new OwnerKeyStore(keys).init(PASSPHRASE);
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        setText(robot, "#examFolder", DemoSource.copyExam(dir.resolve("exam-source")).toString());
+        robot.clickOn("#checkExam");
+        select(robot, 1);
+        setText(robot, "#roster", DemoSource.DEMO.resolve("roster.csv").toAbsolutePath().toString());
+        robot.clickOn("#assign");
+        select(robot, 2);
+        setText(robot, "#keys", keys.toString());
+        Path out = dir.resolve("never.inkexam");
+        setText(robot, "#bundleOut", out.toString());
+        setText(robot, "#passphrase", "not the passphrase");
+        setText(robot, "#pin", "invented-pin-8642");
+        setText(robot, "#pinAgain", "invented-pin-8642");
+        robot.clickOn("#buildBundle");
+        waitForWork(session);
+        String result = label(robot, "#bundleResult");
+        assertTrue(result.startsWith("The bundle was not built."), result);
+        assertTrue(result.contains("passphrase"), result);
+        assertFalse(result.contains("\tat ") || result.contains("Exception"), "no stack trace: " + result);
+        assertFalse(Files.exists(out));
+    }
+
+    private static void writeSimulatedPackages(Path keys, Path bundleFile, Path out) throws Exception {
+        OwnerKeyStore.PublicKeys owner = new OwnerKeyStore(keys).publicKeys();
+        KeyPair installation = Ed25519.generate();
+        Files.createDirectories(out);
+        try (OpenedBundle b = ownerReader(keys).open(bundleFile)) {
+            SimulatedSitting sitting = new SimulatedSitting(b.manifest(), b.manifestSha256(), installation.getPrivate(),
+                    X25519.publicFromRaw(Base64.getDecoder().decode(owner.encryption())));
+            long seed = 1;
+            for (RosterEntry r : b.manifest().roster()) {
+                if (!r.candidateNumber().equals(LEFT_OUT)) {
+                    sitting.write(r.candidateNumber(), r.formId(), seed++, 40, out.resolve(r.candidateNumber() + ".inkresp"));
+                }
+            }
+        }
+    }
+
+    private static BundleReader ownerReader(Path keys) throws Exception {
+        return new BundleReader(TrustPolicy.trusting(Set.of(new OwnerKeyStore(keys).publicKeys().signingFingerprint())));
+    }
+
+    private static void fillSecrets(FxRobot robot) {
+        setText(robot, "#passphrase", new String(PASSPHRASE));
+        setText(robot, "#pin", "invented-pin-8642");
+        setText(robot, "#pinAgain", "invented-pin-8642");
+    }
+
+    private static void select(FxRobot robot, int step) {
+        robot.interact(() -> robot.lookup("#steps").queryListView().getSelectionModel().select(step));
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    private static void setText(FxRobot robot, String query, String text) {
+        robot.interact(() -> robot.lookup(query).queryAs(TextInputControl.class).setText(text));
+    }
+
+    private static String label(FxRobot robot, String query) {
+        Node node = robot.lookup(query).query();
+        assertNotNull(node, query);
+        return ((Label) node).getText();
+    }
+
+    private static void waitForWork(AdminSession session) throws Exception {
+        WaitForAsyncUtils.waitForFxEvents();
+        WaitForAsyncUtils.waitFor(90, TimeUnit.SECONDS, () -> !session.work().busy().get());
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    private static int lineOf(String text, String needle) {
+        String[] lines = text.split("\n", -1);
+        for (int i = 0; i < lines.length; i++) {
+            if (lines[i].contains(needle)) {
+                return i + 1;
+            }
+        }
+        throw new AssertionError(needle + " not planted");
+    }
+
+    private static void shoot(FxRobot robot, Scene scene, String name) throws Exception {
+        AtomicReference<java.awt.image.BufferedImage> image = new AtomicReference<>();
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.interact(() -> image.set(PngSnapshots.snapshot(scene)));
+        assertEquals(1280, image.get().getWidth());
+        assertEquals(800, image.get().getHeight());
+        assertSame(scene, scene);
+        PngSnapshots.save(image.get(), name);
+    }
+}
