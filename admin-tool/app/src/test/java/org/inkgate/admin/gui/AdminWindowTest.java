@@ -76,18 +76,25 @@ class AdminWindowTest {
         // 1. exam check: a planted problem is listed with the line it is on
         Path broken = DemoSource.copyExam(dir.resolve("broken"));
         Path examYaml = broken.resolve("exam.yaml");
+        // three planted problems in different fields: the whole folder is checked at once
         String yaml = Files.readString(examYaml).replace("prompt: prompts/ferry-complaint.md",
-                "prompt: prompts/no-such-prompt.md");
+                "prompt: prompts/no-such-prompt.md").replace("words: {min: 180, max: 250}", "words: {min: 250, max: 180}")
+                .replace("paste: none", "paste: sometimes");
         Files.writeString(examYaml, yaml);
         int plantedLine = lineOf(yaml, "prompts/no-such-prompt.md");
+        int swappedLine = lineOf(yaml, "words: {min: 250, max: 180}");
+        int pasteLine = lineOf(yaml, "paste: sometimes");
         setText(robot, "#examFolder", broken.toString());
         robot.clickOn("#checkExam");
         WaitForAsyncUtils.waitForFxEvents();
         TableView<Problem> problems = robot.lookup("#problems").queryTableView();
-        assertFalse(problems.getItems().isEmpty(), "the planted problem is listed");
-        assertTrue(problems.getItems().stream().anyMatch(p -> p.file().equals("exam.yaml") && p.line() == plantedLine),
-                "a problem on exam.yaml line " + plantedLine + ": " + problems.getItems());
-        assertTrue(label(robot, "#examSummary").startsWith(problems.getItems().size() + " problem"));
+        assertEquals(3, problems.getItems().size(), "the three planted problems: " + problems.getItems());
+        for (int line : new int[] {plantedLine, swappedLine, pasteLine}) {
+            assertTrue(problems.getItems().stream().anyMatch(p -> p.file().equals("exam.yaml") && p.line() == line
+                    && !p.field().isBlank() && !p.message().isBlank()),
+                    "a problem on exam.yaml line " + line + ": " + problems.getItems());
+        }
+        assertTrue(label(robot, "#examSummary").startsWith("3 problems"), label(robot, "#examSummary"));
         shoot(robot, scene.get(), "admin-exam-check.png");
 
         Path exam = DemoSource.copyExam(dir.resolve("exam-source"));

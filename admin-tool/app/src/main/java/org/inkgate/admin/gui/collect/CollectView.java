@@ -69,7 +69,9 @@ public final class CollectView implements Step {
         Fields.wrap(file);
         Fields.wrap(message);
         refused.getColumns().add(file);
-        refused.getColumns().add(column("Reason", 170, Outcome.Refused::reason));
+        TableColumn<Outcome.Refused, String> reason = column("Reason", 190, Outcome.Refused::reason);
+        Fields.wrap(reason);
+        refused.getColumns().add(reason);
         refused.getColumns().add(message);
         refused.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
         refused.setPrefHeight(160);

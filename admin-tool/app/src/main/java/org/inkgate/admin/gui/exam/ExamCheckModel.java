@@ -55,7 +55,7 @@ public final class ExamCheckModel {
         if (!found.isEmpty()) {
             summary.set(found.size() + (found.size() == 1 ? " problem" : " problems") + " in " + dir
                     + ". Each row names the file, line, column and field and says how to fix it; fix them all and"
-                    + " check again. The later steps stay closed until the folder has no problems.");
+                    + " check again. The later steps need a folder without problems.");
             return;
         }
         ExamSource e = exam.orElseThrow();

@@ -37,10 +37,10 @@ public final class ExamCheckView implements Step {
         table.setId("problems");
         table.setAccessibleText("Problems found in the exam folder");
         table.setPlaceholder(new Label("No problems listed."));
-        table.getColumns().add(column("File", 150, p -> p.file()));
+        table.getColumns().add(column("File", 120, p -> p.file()));
         table.getColumns().add(column("Line", 60, p -> p.line() == 0 ? "" : String.valueOf(p.line())));
         table.getColumns().add(column("Col", 50, p -> p.column() == 0 ? "" : String.valueOf(p.column())));
-        table.getColumns().add(column("Field", 170, p -> p.field()));
+        table.getColumns().add(column("Field", 220, p -> p.field()));
         TableColumn<Problem, String> fix = column("Problem and how to fix it", 560, p -> p.message());
         Fields.wrap(fix);
         table.getColumns().add(fix);
