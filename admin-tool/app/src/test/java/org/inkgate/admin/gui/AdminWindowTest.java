@@ -103,6 +103,21 @@ class AdminWindowTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(label(robot, "#examSummary").startsWith("No problems found"), label(robot, "#examSummary"));
 
+        // preview from the exam step: a second window, marked as a preview, on the chosen task
+        robot.interact(() -> {
+            robot.lookup("#previewTask").queryComboBox().setValue("market-square");
+            robot.lookup("#previewCondition").queryComboBox().setValue("without-resources");
+        });
+        robot.clickOn("#openPreview");
+        WaitForAsyncUtils.waitForFxEvents();
+        assertTrue(label(robot, "#previewMessage").startsWith("Preview window opened: task market-square under"
+                + " without-resources"), label(robot, "#previewMessage"));
+        List<javafx.stage.Window> previews = javafx.stage.Window.getWindows().stream()
+                .filter(w -> w != stage && w instanceof Stage s && s.getTitle() != null
+                        && s.getTitle().startsWith("PREVIEW (not a locked sitting)")).toList();
+        assertEquals(1, previews.size(), "one preview window");
+        robot.interact(() -> ((Stage) previews.get(0)).close());
+
         // keyboard: Ctrl+2 opens the forms step
         robot.press(KeyCode.CONTROL, KeyCode.DIGIT2).release(KeyCode.DIGIT2, KeyCode.CONTROL);
         WaitForAsyncUtils.waitForFxEvents();
@@ -114,7 +129,9 @@ class AdminWindowTest {
         setText(robot, "#seed", "20261202");
         robot.clickOn("#assign");
         WaitForAsyncUtils.waitForFxEvents();
-        assertTrue(label(robot, "#formsResult").startsWith("12 candidates assigned with seed 20261202"),
+        assertTrue(label(robot, "#formsResult").startsWith("Roster: 12 candidates, per level {B1=6, B2=6}"),
+                label(robot, "#formsResult"));
+        assertTrue(label(robot, "#formsResult").contains("12 candidates assigned with seed 20261202"),
                 label(robot, "#formsResult"));
         for (String level : List.of("B1", "B2")) {
             int sum = 0;
@@ -130,6 +147,11 @@ class AdminWindowTest {
             // the rule: within a level, forms at most one apart when the level does not divide evenly
             assertTrue(max - min <= 1, level + ": " + min + ".." + max);
         }
+        // the rule: every task under every condition equally often; 12 candidates each sit both tasks
+        // once under each condition, so 6 and 6 per task
+        String cells = label(robot, "#taskConditionCounts");
+        assertTrue(cells.contains("ferry-complaint:  with-resources = 6  without-resources = 6"), cells);
+        assertTrue(cells.contains("market-square:  with-resources = 6  without-resources = 6"), cells);
         assertTrue(Files.isRegularFile(session.assignment().get()));
         shoot(robot, scene.get(), "admin-forms.png");
 
@@ -228,6 +250,27 @@ class AdminWindowTest {
         assertTrue(result.contains("passphrase"), result);
         assertFalse(result.contains("\tat ") || result.contains("Exception"), "no stack trace: " + result);
         assertFalse(Files.exists(out));
+    }
+
+    @Test
+    void forms_rosterWithABadRow_namesTheRowAndAssignsNothing(FxRobot robot) throws Exception {
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        setText(robot, "#examFolder", DemoSource.copyExam(dir.resolve("exam-source")).toString());
+        robot.clickOn("#checkExam");
+        select(robot, 1);
+        Path roster = dir.resolve("roster.csv");
+        // invented rows; row 3 (the second candidate) has no level
+        Files.writeString(roster, "candidate_number,level\nH9001,B1\nH9002,\nH9003,B2\n");
+        setText(robot, "#roster", roster.toString());
+        setText(robot, "#assignmentOut", dir.resolve("assignment.csv").toString());
+        robot.clickOn("#assign");
+        WaitForAsyncUtils.waitForFxEvents();
+        String result = label(robot, "#formsResult");
+        assertTrue(result.contains("roster.csv:3"), result);
+        assertTrue(result.contains("level"), result);
+        assertFalse(Files.exists(dir.resolve("assignment.csv")), "nothing assigned");
+        assertEquals(null, session.assignment().get());
     }
 
     private static void writeSimulatedPackages(Path keys, Path bundleFile, Path out) throws Exception {

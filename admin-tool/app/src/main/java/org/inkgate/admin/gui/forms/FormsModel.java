@@ -16,6 +16,7 @@ import org.inkgate.admin.core.forms.FormAssigner;
 import org.inkgate.admin.core.forms.FormDesigner;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.roster.RosterReader;
+import org.inkgate.admin.core.roster.RosterSummary;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
@@ -138,7 +139,13 @@ public final class FormsModel {
             session.roster().set(rosterFile);
             counts.set(AssignmentCounts.of(a, forms));
             rows.setAll(a.rows());
-            result.set(a.rows().size() + " candidates assigned with seed " + usedSeed + " (the same seed and roster give"
+            RosterSummary summary = RosterSummary.of(candidates);
+            result.set("Roster: " + summary.candidates() + " candidates, per level " + summary.perLevel()
+                    + "; accommodations: extra time " + summary.extraTime() + ", large print " + summary.largePrint()
+                    + ", high contrast " + summary.highContrast() + (summary.personalFields().isEmpty() ? ""
+                    : "; personal fields " + summary.personalFields() + " stay in the results store, never in bundles"
+                    + " or rater exports") + ".\n"
+                    + a.rows().size() + " candidates assigned with seed " + usedSeed + " (the same seed and roster give"
                     + " the same assignment)." + (table == null ? " Not saved: name a file to save the table."
                     : " Table saved to " + table + "."));
         } catch (Exception e) {
