@@ -54,6 +54,9 @@ final class PreviewCommand implements Callable<Integer> {
                 // createTempDirectory makes the folder readable by this user only (POSIX)
                 temp = Files.createTempDirectory("inkgate-preview-");
                 out = temp.resolve("preview.inkexam");
+                // also when the program is stopped rather than the window closed (deleted in reverse order)
+                temp.toFile().deleteOnExit();
+                out.toFile().deleteOnExit();
             }
             PreviewBundle.Built built = PreviewBundle.build(exam, task, condition, out);
             w.println("Preview of task " + built.task().id() + " under condition " + built.condition().id()

@@ -97,6 +97,12 @@ class PreviewCommandTest {
     }
 
     @Test
+    void help_listsPreviewAndGui() {
+        Run run = admin("--help");
+        assertTrue(run.out().contains("preview") && run.out().contains("gui"), run.out());
+    }
+
+    @Test
     void preview_unknownTask_exitsOneAndNamesTheTasks() {
         Run run = admin("preview", DemoSource.DEMO.resolve("exam-source").toString(), "--task", "no-such-task",
                 "--write-only", dir.resolve("x.inkexam").toString());

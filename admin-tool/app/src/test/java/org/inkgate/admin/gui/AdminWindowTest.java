@@ -273,6 +273,32 @@ class AdminWindowTest {
         assertEquals(null, session.assignment().get());
     }
 
+    @Test
+    void everyStep_inputsTablesAndButtons_haveAccessibleNames(FxRobot robot) throws Exception {
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        setText(robot, "#examFolder", DemoSource.copyExam(dir.resolve("exam-source")).toString());
+        robot.clickOn("#checkExam");
+        for (int step = 0; step < 5; step++) {
+            select(robot, step);
+            Node view = robot.lookup("#steps").queryListView().getSelectionModel().getSelectedItem() instanceof Step s
+                    ? s.view() : null;
+            assertNotNull(view);
+            int inputs = 0;
+            for (Node n : robot.from(view).lookup((java.util.function.Predicate<Node>) n -> n instanceof TextInputControl
+                    || n instanceof TableView || n instanceof javafx.scene.control.ComboBox).queryAll()) {
+                assertTrue(n.getAccessibleText() != null && !n.getAccessibleText().isBlank(),
+                        "step " + (step + 1) + ": " + n + " has no accessible name");
+                inputs++;
+            }
+            assertTrue(inputs > 0, "step " + (step + 1) + " has inputs to check");
+            for (javafx.scene.control.Labeled b : robot.from(view).lookup((java.util.function.Predicate<Node>) n -> n instanceof javafx.scene.control.ButtonBase)
+                    .<javafx.scene.control.Labeled>queryAll()) {
+                assertFalse(b.getText() == null || b.getText().isBlank(), "step " + (step + 1) + ": a button without text");
+            }
+        }
+    }
+
     private static void writeSimulatedPackages(Path keys, Path bundleFile, Path out) throws Exception {
         OwnerKeyStore.PublicKeys owner = new OwnerKeyStore(keys).publicKeys();
         KeyPair installation = Ed25519.generate();
