@@ -191,12 +191,15 @@ class AdminWindowTest {
             assertEquals(12, roster.size(), "every candidate of src/demo/roster.csv");
         }
 
-        // 4. collect: simulated packages for all but one candidate, and a tampered copy
+        // 4. collect: simulated packages for all but one candidate, a tampered copy, a byte-identical copy
+        // and a second, different package for one candidate (a conflict)
         Path packages = dir.resolve("packages");
         writeSimulatedPackages(keys, bundleFile, packages);
         byte[] bytes = Files.readAllBytes(packages.resolve("H1001.inkresp"));
         bytes[bytes.length / 2] ^= 0x01;
         Files.write(packages.resolve("H1001-tampered.inkresp"), bytes);
+        Files.copy(packages.resolve("H1002.inkresp"), packages.resolve("H1002-copy.inkresp"));
+        writeSecondPackage(keys, bundleFile, "H1003", packages.resolve("H1003-second.inkresp"));
         select(robot, 3);
         robot.interact(() -> robot.lookup("#packageFolders").queryAs(TextArea.class).setText(packages.toString()));
         robot.interact(() -> robot.lookup("#anyInstallation").queryAs(CheckBox.class).setSelected(true));
@@ -204,14 +207,18 @@ class AdminWindowTest {
         robot.clickOn("#collect");
         waitForWork(session);
         String counts = label(robot, "#collectCounts");
-        // 11 written, one tampered copy: 11 imported, 1 refused
-        assertTrue(counts.startsWith("Imported 11, already imported (same file) 0, copies of imported packages 0,"
+        // 11 written + the second H1003 package imported; the identical copy changes nothing; the tampered one refused
+        assertTrue(counts.startsWith("Imported 12, already imported (same file) 1, copies of imported packages 0,"
                 + " refused 1."), counts);
+        String details = label(robot, "#collectDetails");
+        assertTrue(details.contains("CONFLICTS") && details.contains("candidate H1003"), details);
         TableView<Outcome.Refused> refused = robot.lookup("#refused").queryTableView();
         assertEquals(1, refused.getItems().size());
         assertTrue(refused.getItems().get(0).file().endsWith("H1001-tampered.inkresp"));
         assertFalse(refused.getItems().get(0).reason().isBlank());
         assertFalse(refused.getItems().get(0).message().isBlank());
+        // the picture shows the results: scroll the step to its end
+        robot.interact(() -> robot.lookup(".step-scroll").queryAs(javafx.scene.control.ScrollPane.class).setVvalue(1.0));
         shoot(robot, scene.get(), "admin-collect.png");
 
         // 5. missing: the candidate left out is named
@@ -312,6 +319,17 @@ class AdminWindowTest {
                     sitting.write(r.candidateNumber(), r.formId(), seed++, 40, out.resolve(r.candidateNumber() + ".inkresp"));
                 }
             }
+        }
+    }
+
+    private static void writeSecondPackage(Path keys, Path bundleFile, String candidate, Path out) throws Exception {
+        OwnerKeyStore.PublicKeys owner = new OwnerKeyStore(keys).publicKeys();
+        try (OpenedBundle b = ownerReader(keys).open(bundleFile)) {
+            SimulatedSitting sitting = new SimulatedSitting(b.manifest(), b.manifestSha256(), Ed25519.generate().getPrivate(),
+                    X25519.publicFromRaw(Base64.getDecoder().decode(owner.encryption())));
+            String form = b.manifest().roster().stream().filter(r -> r.candidateNumber().equals(candidate)).findFirst()
+                    .orElseThrow().formId();
+            sitting.write(candidate, form, 9_999, 40, out);
         }
     }
 
