@@ -172,8 +172,9 @@ class AdminWindowTest {
             b.unseal(code.toCharArray());
             assertTrue(b.readable(), "the code shown on screen opens the bundle");
         }
+        scrollToEnd(robot);
         shoot(robot, scene.get(), "admin-bundle-sealed.png");
-        robot.clickOn("#codeStored");
+        robot.interact(() -> robot.lookup("#codeStored").queryButton().fire());
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals("", label(robot, "#releaseCode"));
 
@@ -218,7 +219,7 @@ class AdminWindowTest {
         assertFalse(refused.getItems().get(0).reason().isBlank());
         assertFalse(refused.getItems().get(0).message().isBlank());
         // the picture shows the results: scroll the step to its end
-        robot.interact(() -> robot.lookup(".step-scroll").queryAs(javafx.scene.control.ScrollPane.class).setVvalue(1.0));
+        scrollToEnd(robot);
         shoot(robot, scene.get(), "admin-collect.png");
 
         // 5. missing: the candidate left out is named
@@ -306,6 +307,33 @@ class AdminWindowTest {
         }
     }
 
+    @Test
+    void bundle_createKeys_showsTheFingerprintsAndNeverOverwrites(FxRobot robot) throws Exception {
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        select(robot, 2);
+        Path keys = dir.resolve("new-keys");
+        setText(robot, "#keys", keys.toString());
+        robot.interact(() -> robot.lookup("#newKeys").queryAs(javafx.scene.control.TitledPane.class).setExpanded(true));
+        setText(robot, "#passphrase", new String(PASSPHRASE));
+        setText(robot, "#passphraseAgain", new String(PASSPHRASE));
+        robot.interact(() -> robot.lookup("#createKeys").queryButton().fire());
+        waitForWork(session);
+        // the fingerprint on screen is the one the key files hold
+        String fingerprint = new OwnerKeyStore(keys).publicKeys().signingFingerprint();
+        assertTrue(label(robot, "#keysResult").contains("Signing key (Ed25519) fingerprint " + fingerprint),
+                label(robot, "#keysResult"));
+        byte[] before = Files.readAllBytes(keys.resolve(OwnerKeyStore.SIGNING_FILE));
+
+        setText(robot, "#passphrase", new String(PASSPHRASE));
+        setText(robot, "#passphraseAgain", new String(PASSPHRASE));
+        robot.interact(() -> robot.lookup("#createKeys").queryButton().fire());
+        waitForWork(session);
+        assertTrue(label(robot, "#keysResult").startsWith("No keys were created."), label(robot, "#keysResult"));
+        assertTrue(label(robot, "#keysResult").contains("keys already exist"), label(robot, "#keysResult"));
+        assertTrue(java.util.Arrays.equals(before, Files.readAllBytes(keys.resolve(OwnerKeyStore.SIGNING_FILE))));
+    }
+
     private static void writeSimulatedPackages(Path keys, Path bundleFile, Path out) throws Exception {
         OwnerKeyStore.PublicKeys owner = new OwnerKeyStore(keys).publicKeys();
         KeyPair installation = Ed25519.generate();
@@ -341,6 +369,12 @@ class AdminWindowTest {
         setText(robot, "#passphrase", new String(PASSPHRASE));
         setText(robot, "#pin", "invented-pin-8642");
         setText(robot, "#pinAgain", "invented-pin-8642");
+    }
+
+    /** Pictures show a step's results: scroll it to its end. */
+    private static void scrollToEnd(FxRobot robot) {
+        robot.interact(() -> robot.lookup(".step-scroll").queryAs(javafx.scene.control.ScrollPane.class).setVvalue(1.0));
+        WaitForAsyncUtils.waitForFxEvents();
     }
 
     private static void select(FxRobot robot, int step) {

@@ -32,6 +32,8 @@ public final class BundleModel {
     private final StringProperty keys = new SimpleStringProperty("");
     private final StringProperty out = new SimpleStringProperty("");
     private final StringProperty passphrase = new SimpleStringProperty("");
+    private final StringProperty passphraseAgain = new SimpleStringProperty("");
+    private final StringProperty keysResult = new SimpleStringProperty("");
     private final StringProperty pin = new SimpleStringProperty("");
     private final StringProperty pinAgain = new SimpleStringProperty("");
     private final BooleanProperty seal = new SimpleBooleanProperty(false);
@@ -58,6 +60,42 @@ public final class BundleModel {
 
     public StringProperty passphrase() {
         return passphrase;
+    }
+
+    /** The passphrase typed again, only for creating new keys. */
+    public StringProperty passphraseAgain() {
+        return passphraseAgain;
+    }
+
+    public StringProperty keysResult() {
+        return keysResult;
+    }
+
+    /**
+     * Creates the owner's key pairs in the key folder (as {@code inkgate-admin keys init}); refuses
+     * to overwrite keys that exist.
+     */
+    public void createKeys() {
+        Path keyFolder = Fields.path(keys.get());
+        if (keyFolder == null) {
+            keysResult.set("Name the folder for the new keys first.");
+            return;
+        }
+        if (!passphrase.get().equals(passphraseAgain.get())) {
+            keysResult.set("The two passphrase entries differ. Type the new passphrase twice the same way; no keys were"
+                    + " created.");
+            return;
+        }
+        char[] pass = passphrase.get().toCharArray();
+        passphrase.set("");
+        passphraseAgain.set("");
+        session.work().run("Creating keys", progress -> new OwnerKeyStore(keyFolder).init(pass),
+                created -> keysResult.set("Keys created in " + keyFolder + ".\nSigning key (Ed25519) fingerprint "
+                        + created.signingFingerprint() + "\nEncryption key (X25519) fingerprint "
+                        + created.encryptionFingerprint() + "\nPublish the signing fingerprint to invigilators through a"
+                        + " channel other than the exam media; keep the passphrase and a backup of the folder safe:"
+                        + " without them responses cannot be opened."),
+                message -> keysResult.set("No keys were created. " + message));
     }
 
     public StringProperty pin() {

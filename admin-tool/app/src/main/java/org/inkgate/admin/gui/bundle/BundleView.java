@@ -59,10 +59,29 @@ public final class BundleView implements Step {
         codeBox.visibleProperty().bind(model.releaseCode().isNotEmpty());
         codeBox.managedProperty().bind(codeBox.visibleProperty());
 
+        PasswordField again = secret("passphraseAgain", "Passphrase again, for new keys", model.passphraseAgain());
+        Button create = new Button("Create new keys in this folder");
+        create.setId("createKeys");
+        create.disableProperty().bind(work.busy());
+        create.setOnAction(e -> model.createKeys());
+        Label keysResult = new Label();
+        keysResult.setId("keysResult");
+        keysResult.setWrapText(true);
+        keysResult.textProperty().bind(model.keysResult());
+        javafx.scene.layout.HBox newKeysRow = new javafx.scene.layout.HBox(10, new Label("Passphrase again"), again, create);
+        newKeysRow.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        ((Label) newKeysRow.getChildren().get(0)).setLabelFor(again);
+        javafx.scene.control.TitledPane newKeys = new javafx.scene.control.TitledPane("No keys yet? Create them (once)",
+                new VBox(10, Fields.note("Type a new passphrase of " + org.inkgate.admin.core.keys.OwnerKeyStore.MIN_PASSPHRASE
+                        + " characters or more in \"Key passphrase\" above and again here. Existing keys are never"
+                        + " overwritten."), newKeysRow, keysResult));
+        newKeys.setId("newKeys");
+        newKeys.setExpanded(false);
+
         root = new VBox(14, Fields.heading("3. Bundle"),
                 Fields.note("Builds the signed exam bundle from the checked folder, the roster and the assignment of step 2."
                         + " The passphrase opens your signing key; the PIN lets invigilators start the sitting."),
-                grid, build, result, codeBox);
+                grid, newKeys, build, result, codeBox);
         root.getStyleClass().add("step");
     }
 
