@@ -3,29 +3,18 @@ package org.inkgate.admin.cli;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.TreeMap;
 import java.util.concurrent.Callable;
 import java.util.stream.Collectors;
-import org.inkgate.admin.core.collection.Collector;
-import org.inkgate.admin.core.collection.MissingReport;
+import org.inkgate.admin.core.collection.CollectionRun;
 import org.inkgate.admin.core.collection.Outcome;
 import org.inkgate.admin.core.keys.OwnerKeyStore;
-import org.inkgate.admin.core.roster.RosterReader;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
 import org.inkgate.admin.core.source.InvalidSourceException;
-import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
-import org.inkgate.admin.core.store.SqliteResultsStore;
-import org.inkgate.format.bundle.BundleManifest;
-import org.inkgate.format.bundle.BundleReader;
-import org.inkgate.format.bundle.OpenedBundle;
-import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.trust.TrustPolicy;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -98,105 +87,54 @@ final class CollectCommand implements Callable<Integer> {
             installations = TrustPolicy.trusting(prints);
         }
         ExamSource exam = null;
+        char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
+        var encryptionKey = keyStore.encryptionKey(pass);
+        CollectionRun.Report report;
         try {
             if (examSource != null) {
                 exam = ExamSourceReader.read(examSource);
             }
-        } catch (InvalidSourceException e) {
+            report = CollectionRun.run(new CollectionRun.Request(storeFile, bundleFiles, roots, encryptionKey,
+                    keyStore.publicKeys().signingFingerprint(), installations, roster, exam, assignment, threads),
+                    n -> {
+                        w.println("Collecting " + n + " package files into " + storeFile + " ...");
+                        w.flush();
+                    },
+                    o -> {
+                        if (o instanceof Outcome.Refused r) {
+                            err.println("REFUSED " + r.file() + " (" + r.reason() + "): " + r.message());
+                            err.flush();
+                        }
+                    });
+        } catch (InvalidSourceException | CollectionRun.BundleRefusedException e) {
             err.println(e.getMessage());
             return InkgateAdmin.PROBLEMS;
         }
-        char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
-        var encryptionKey = keyStore.encryptionKey(pass);
-        try (ResultsStore store = SqliteResultsStore.open(storeFile)) {
-            Map<String, BundleManifest> bundles = new HashMap<>();
-            TrustPolicy owner = TrustPolicy.trusting(Set.of(keyStore.publicKeys().signingFingerprint()));
-            for (Path f : bundleFiles) {
-                try (OpenedBundle b = new BundleReader(owner).open(f)) {
-                    store.registerBundle(b.manifest(), b.manifestSha256(), b.signerFingerprint());
-                    bundles.put(b.manifestSha256(), b.manifest());
-                } catch (FormatRefusal refusal) {
-                    err.println("The bundle " + f + " is refused: " + refusal.getMessage());
-                    return InkgateAdmin.PROBLEMS;
-                }
-            }
-            if (roster != null) {
-                try {
-                    var candidates = RosterReader.read(roster);
-                    for (String examId : bundles.values().stream().map(BundleManifest::examId).distinct().toList()) {
-                        store.registerRoster(examId, candidates);
-                    }
-                } catch (InvalidSourceException e) {
-                    err.println(e.getMessage());
-                    return InkgateAdmin.PROBLEMS;
-                }
-            }
-            if (exam != null && exam.rubric() != null) {
-                store.registerRubric(exam.examId(), exam.rubric());
-            }
-            if (assignment != null) {
-                long seed;
-                try {
-                    seed = org.inkgate.admin.core.forms.AssignmentTable.read(assignment).seed();
-                } catch (InvalidSourceException e) {
-                    err.println(e.getMessage());
-                    return InkgateAdmin.PROBLEMS;
-                }
-                for (BundleManifest m : bundles.values()) {
-                    store.recordAssignmentRun(m.examId(), seed, "assignment table " + assignment.getFileName());
-                }
-            }
-            List<Path> files = Collector.packageFiles(roots);
-            w.println("Collecting " + files.size() + " package files into " + storeFile + " ...");
-            w.flush();
-            Collector collector = new Collector(store, encryptionKey, installations, bundles, threads);
-            List<Outcome> outcomes = collector.collect(files, o -> {
-                if (o instanceof Outcome.Refused r) {
-                    err.println("REFUSED " + r.file() + " (" + r.reason() + "): " + r.message());
-                    err.flush();
-                }
-            });
-            return report(w, store, outcomes, bundles, trust.any);
-        }
+        return report(w, report, trust.any);
     }
 
-    private int report(PrintWriter w, ResultsStore store, List<Outcome> outcomes, Map<String, BundleManifest> bundles,
-            boolean anyInstallation) throws Exception {
-        Map<String, Integer> kinds = new TreeMap<>();
-        outcomes.forEach(o -> kinds.merge(o.getClass().getSimpleName(), 1, Integer::sum));
+    private static int report(PrintWriter w, CollectionRun.Report report, boolean anyInstallation) {
+        Map<String, Integer> kinds = report.kinds();
         w.println("Imported " + kinds.getOrDefault("Imported", 0) + ", already imported (same file) "
                 + kinds.getOrDefault("AlreadyImported", 0) + ", copies of imported packages "
                 + kinds.getOrDefault("SameAsImported", 0) + ", refused " + kinds.getOrDefault("Refused", 0) + ".");
-        boolean attention = kinds.containsKey("Refused");
-        List<String> offRoster = new ArrayList<>();
-        Map<String, Integer> byInstallation = new TreeMap<>();
-        for (Outcome o : outcomes) {
-            if (o instanceof Outcome.Imported i) {
-                byInstallation.merge(i.installation(), 1, Integer::sum);
-                if (!i.onRoster()) {
-                    offRoster.add(i.candidateNumber() + " (" + i.file() + ")");
-                }
-            }
+        if (!report.offRoster().isEmpty()) {
+            w.println("Imported but NOT on the bundle's roster (kept; check the candidate numbers): " + report.offRoster());
         }
-        if (!offRoster.isEmpty()) {
-            attention = true;
-            w.println("Imported but NOT on the bundle's roster (kept; check the candidate numbers): " + offRoster);
-        }
-        if (anyInstallation && !byInstallation.isEmpty()) {
+        if (anyInstallation && !report.byInstallation().isEmpty()) {
             w.println("Installations that signed the packages imported now (compare with the seat records):");
-            byInstallation.forEach((k, v) -> w.println("  " + k + "  " + v + " package" + (v == 1 ? "" : "s")));
+            report.byInstallation().forEach((k, v) -> w.println("  " + k + "  " + v + " package" + (v == 1 ? "" : "s")));
         }
-        for (String examId : bundles.values().stream().map(BundleManifest::examId).distinct().sorted().toList()) {
-            List<Rows.Conflict> conflicts = store.conflicts(examId);
+        for (var e : report.conflicts().entrySet()) {
+            List<Rows.Conflict> conflicts = e.getValue();
             if (!conflicts.isEmpty()) {
-                attention = true;
-                w.println("CONFLICTS in " + examId + " (more than one response for a candidate and task; all are kept,"
+                w.println("CONFLICTS in " + e.getKey() + " (more than one response for a candidate and task; all are kept,"
                         + " decide under your regulations which counts):");
                 conflicts.forEach(c -> w.println("  candidate " + c.candidateNumber() + ", task " + c.taskId() + ": "
                         + c.copies() + " responses, packages " + c.packageIds()));
             }
-            attention |= MissingCommand.print(w, MissingReport.of(store, examId));
+            MissingCommand.print(w, report.missing().get(e.getKey()));
         }
-        return attention ? InkgateAdmin.ATTENTION : InkgateAdmin.OK;
+        return report.needsAttention() ? InkgateAdmin.ATTENTION : InkgateAdmin.OK;
     }
 }

@@ -4,11 +4,9 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.security.SecureRandom;
 import java.util.List;
-import java.util.Map;
-import java.util.TreeMap;
-import java.util.TreeSet;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.forms.Assignment;
+import org.inkgate.admin.core.forms.AssignmentCounts;
 import org.inkgate.admin.core.forms.AssignmentTable;
 import org.inkgate.admin.core.forms.FormAssigner;
 import org.inkgate.admin.core.forms.FormDesigner;
@@ -89,32 +87,19 @@ final class FormsCommand implements Callable<Integer> {
     }
 
     static void printCounts(PrintWriter w, Assignment a, List<FormSpec> forms) {
-        Map<String, Map<String, Integer>> byLevel = new TreeMap<>();
-        for (Assignment.Row r : a.rows()) {
-            byLevel.computeIfAbsent(r.level(), k -> new TreeMap<>()).merge(r.formId(), 1, Integer::sum);
-        }
+        AssignmentCounts counts = AssignmentCounts.of(a, forms);
         StringBuilder head = new StringBuilder(String.format("  %-12s", "level"));
         forms.forEach(f -> head.append(String.format("%6s", f.id())));
         w.println(head);
-        for (var e : byLevel.entrySet()) {
-            StringBuilder row = new StringBuilder(String.format("  %-12s", e.getKey()));
-            forms.forEach(f -> row.append(String.format("%6d", e.getValue().getOrDefault(f.id(), 0))));
+        for (String level : counts.byLevel().keySet()) {
+            StringBuilder row = new StringBuilder(String.format("  %-12s", level));
+            forms.forEach(f -> row.append(String.format("%6d", counts.count(level, f.id()))));
             w.println(row);
         }
-        Map<String, Map<String, Integer>> cells = new TreeMap<>();
-        Map<String, FormSpec> byId = new TreeMap<>();
-        forms.forEach(f -> byId.put(f.id(), f));
-        TreeSet<String> conditions = new TreeSet<>();
-        for (Assignment.Row r : a.rows()) {
-            for (FormSlot s : byId.get(r.formId()).slots()) {
-                cells.computeIfAbsent(s.taskId(), k -> new TreeMap<>()).merge(s.conditionId(), 1, Integer::sum);
-                conditions.add(s.conditionId());
-            }
-        }
         w.println("  task x condition (candidates):");
-        for (var e : cells.entrySet()) {
+        for (var e : counts.byTaskAndCondition().entrySet()) {
             StringBuilder row = new StringBuilder("    " + e.getKey() + ":");
-            conditions.forEach(c -> row.append("  ").append(c).append('=').append(e.getValue().getOrDefault(c, 0)));
+            counts.conditions().forEach(c -> row.append("  ").append(c).append('=').append(e.getValue().getOrDefault(c, 0)));
             w.println(row);
         }
     }

@@ -19,10 +19,12 @@ import picocli.CommandLine.Command;
             RosterCommand.class,
             BundleCommand.class,
             InspectCommand.class,
+            PreviewCommand.class,
             CollectCommand.class,
             MissingCommand.class,
             ExportCommand.class,
             AnalyseCommand.class,
+            GuiCommand.class,
             org.inkgate.packs.cli.PackCommand.class,
             CommandLine.HelpCommand.class,
         })

@@ -3,11 +3,10 @@ package org.inkgate.admin.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
-import java.util.TreeMap;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.roster.RosterReader;
+import org.inkgate.admin.core.roster.RosterSummary;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -34,16 +33,15 @@ final class RosterCommand implements Callable<Integer> {
             return InkgateAdmin.PROBLEMS;
         }
         PrintWriter w = spec.commandLine().getOut();
-        Map<String, Integer> levels = new TreeMap<>();
-        roster.forEach(r -> levels.merge(r.level(), 1, Integer::sum));
-        long extra = roster.stream().filter(r -> r.extraTimePercent() > 0).count();
-        long large = roster.stream().filter(RosterCandidate::largePrint).count();
-        long contrast = roster.stream().filter(RosterCandidate::highContrast).count();
-        w.println(file + ": " + roster.size() + " candidates, no problems found.");
-        w.println("  per level: " + levels);
-        w.println("  accommodations: extra time " + extra + ", large print " + large + ", high contrast " + contrast);
-        roster.stream().findFirst().filter(r -> !r.personal().isEmpty()).ifPresent(r -> w.println("  personal fields "
-                + r.personal().keySet() + " stay in the results store; they never go into bundles or rater exports."));
+        RosterSummary summary = RosterSummary.of(roster);
+        w.println(file + ": " + summary.candidates() + " candidates, no problems found.");
+        w.println("  per level: " + summary.perLevel());
+        w.println("  accommodations: extra time " + summary.extraTime() + ", large print " + summary.largePrint()
+                + ", high contrast " + summary.highContrast());
+        if (!summary.personalFields().isEmpty()) {
+            w.println("  personal fields " + summary.personalFields() + " stay in the results store; they never go into"
+                    + " bundles or rater exports.");
+        }
         return InkgateAdmin.OK;
     }
 }

@@ -1,0 +1,13 @@
+package org.inkgate.admin.gui;
+
+import javafx.application.Application;
+import javafx.stage.Stage;
+
+/** The admin window as a JavaFX application; started by {@link AdminLauncher} or {@code inkgate-admin gui}. */
+public final class AdminApp extends Application {
+
+    @Override
+    public void start(Stage stage) {
+        AdminWindow.show(stage, new AdminSession());
+    }
+}

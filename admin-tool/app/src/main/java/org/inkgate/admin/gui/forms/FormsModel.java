@@ -1,0 +1,155 @@
+package org.inkgate.admin.gui.forms;
+
+import java.nio.file.Path;
+import java.security.SecureRandom;
+import java.util.List;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.collections.FXCollections;
+import javafx.collections.ObservableList;
+import org.inkgate.admin.core.forms.Assignment;
+import org.inkgate.admin.core.forms.AssignmentCounts;
+import org.inkgate.admin.core.forms.AssignmentTable;
+import org.inkgate.admin.core.forms.FormAssigner;
+import org.inkgate.admin.core.forms.FormDesigner;
+import org.inkgate.admin.core.roster.RosterCandidate;
+import org.inkgate.admin.core.roster.RosterReader;
+import org.inkgate.admin.core.roster.RosterSummary;
+import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.admin.gui.AdminSession;
+import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.Messages;
+import org.inkgate.format.bundle.FormSlot;
+import org.inkgate.format.bundle.FormSpec;
+
+/**
+ * The forms step: the generated forms, the roster check and the seeded, stratified assignment
+ * through the same core calls as {@code inkgate-admin forms --roster --seed --out}.
+ */
+public final class FormsModel {
+
+    private final AdminSession session;
+    private final StringProperty roster = new SimpleStringProperty("");
+    private final StringProperty seed = new SimpleStringProperty("");
+    private final StringProperty out = new SimpleStringProperty("");
+    private final StringProperty formsText = new SimpleStringProperty("");
+    private final StringProperty result = new SimpleStringProperty("");
+    private final ObjectProperty<AssignmentCounts> counts = new SimpleObjectProperty<>();
+    private final ObservableList<String> formIds = FXCollections.observableArrayList();
+    private final ObservableList<Assignment.Row> rows = FXCollections.observableArrayList();
+
+    public FormsModel(AdminSession session) {
+        this.session = session;
+        session.exam().addListener((o, was, exam) -> showForms(exam));
+    }
+
+    public StringProperty roster() {
+        return roster;
+    }
+
+    public StringProperty seed() {
+        return seed;
+    }
+
+    public StringProperty out() {
+        return out;
+    }
+
+    public StringProperty formsText() {
+        return formsText;
+    }
+
+    public StringProperty result() {
+        return result;
+    }
+
+    public ObjectProperty<AssignmentCounts> counts() {
+        return counts;
+    }
+
+    public ObservableList<String> formIds() {
+        return formIds;
+    }
+
+    public ObservableList<Assignment.Row> rows() {
+        return rows;
+    }
+
+    private void showForms(ExamSource exam) {
+        if (exam == null) {
+            formsText.set("Check the exam folder first (step 1).");
+            formIds.clear();
+            return;
+        }
+        List<FormSpec> forms = FormDesigner.forms(exam);
+        StringBuilder b = new StringBuilder(forms.size() + " forms (" + exam.design().kind().word() + "):");
+        for (FormSpec f : forms) {
+            b.append("\n  ").append(f.id()).append(':');
+            for (FormSlot s : f.slots()) {
+                b.append("   ").append(s.taskId()).append(" [").append(s.conditionId()).append(']');
+            }
+        }
+        formsText.set(b.toString());
+        formIds.setAll(forms.stream().map(FormSpec::id).toList());
+        if (out.get().isBlank()) {
+            out.set(session.besideExam("assignment.csv").toString());
+        }
+    }
+
+    /** Reads the roster, assigns forms with the seed (a new one when blank) and writes the table. */
+    public void assign() {
+        ExamSource exam = session.exam().get();
+        counts.set(null);
+        rows.clear();
+        if (exam == null) {
+            result.set("Check the exam folder first (step 1): forms come from a folder without problems.");
+            return;
+        }
+        try {
+            Path rosterFile = Fields.path(roster.get());
+            if (rosterFile == null) {
+                result.set("Name the roster CSV (candidate_number, level, ...).");
+                return;
+            }
+            long usedSeed;
+            if (seed.get().isBlank()) {
+                usedSeed = new SecureRandom().nextLong();
+                seed.set(Long.toString(usedSeed));
+            } else {
+                try {
+                    usedSeed = Long.parseLong(seed.get().strip());
+                } catch (NumberFormatException e) {
+                    result.set("The seed \"" + seed.get() + "\" is not a whole number. Give a whole number, or leave it"
+                            + " blank to draw a new one.");
+                    return;
+                }
+            }
+            List<RosterCandidate> candidates = RosterReader.read(rosterFile);
+            List<FormSpec> forms = FormDesigner.forms(exam);
+            Assignment a = FormAssigner.assign(candidates.stream()
+                    .map(c -> new FormAssigner.Candidate(c.candidateNumber(), c.level())).toList(), forms,
+                    FormDesigner.blockSize(exam), usedSeed);
+            Path table = Fields.path(out.get());
+            if (table != null) {
+                AssignmentTable.write(a, table);
+                session.assignment().set(table);
+            }
+            session.roster().set(rosterFile);
+            counts.set(AssignmentCounts.of(a, forms));
+            rows.setAll(a.rows());
+            RosterSummary summary = RosterSummary.of(candidates);
+            result.set("Roster: " + summary.candidates() + " candidates, per level " + summary.perLevel()
+                    + "; accommodations: extra time " + summary.extraTime() + ", large print " + summary.largePrint()
+                    + ", high contrast " + summary.highContrast() + (summary.personalFields().isEmpty() ? ""
+                    : "; personal fields " + summary.personalFields() + " stay in the results store, never in bundles"
+                    + " or rater exports") + ".\n"
+                    + a.rows().size() + " candidates assigned with seed " + usedSeed + " (the same seed and roster give"
+                    + " the same assignment)." + (table == null ? " Not saved: name a file to save the table."
+                    : " Table saved to " + table + "."));
+        } catch (Exception e) {
+            result.set(Messages.of(e));
+        }
+    }
+}
