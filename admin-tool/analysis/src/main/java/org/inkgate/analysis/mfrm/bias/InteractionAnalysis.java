@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import org.apache.commons.math3.distribution.ChiSquaredDistribution;
 import org.apache.commons.math3.distribution.TDistribution;
+import org.inkgate.analysis.mfrm.design.Grouping;
 import org.inkgate.analysis.mfrm.design.ModelDesign;
 import org.inkgate.analysis.mfrm.estimation.CategoryModel;
 
@@ -44,18 +45,9 @@ public final class InteractionAnalysis {
             cellOf[n] = c;
         }
         int nCells = keys.size();
-        int[] start = new int[nCells + 1];
-        for (int c : cellOf) {
-            start[c + 1]++;
-        }
-        for (int c = 0; c < nCells; c++) {
-            start[c + 1] += start[c];
-        }
-        int[] order = new int[nObs];
-        int[] fill = start.clone();
-        for (int n = 0; n < nObs; n++) {
-            order[fill[cellOf[n]]++] = n;
-        }
+        Grouping byCell = Grouping.of(cellOf, nCells);
+        int[] start = byCell.start();
+        int[] order = byCell.order();
         double[] eta = new double[nObs];
         for (int n = 0; n < nObs; n++) {
             double v = measure[0][d.elements(0)[n]];

@@ -134,22 +134,12 @@ public final class DesignCheck {
 
     /** A = sum over candidates of (X_c'X_c - s_c s_c'/n_c) over the free non-candidate columns. */
     private static double[][] withinCandidateMatrix(ModelDesign d, int[][] column, int p) {
-        int nObs = d.observationCount();
         int nF = d.facetCount();
         int[] cand = d.elements(0);
         int nC = d.elementCount(0);
-        int[] start = new int[nC + 1];
-        for (int c : cand) {
-            start[c + 1]++;
-        }
-        for (int c = 0; c < nC; c++) {
-            start[c + 1] += start[c];
-        }
-        int[] order = new int[nObs];
-        int[] fill = start.clone();
-        for (int n = 0; n < nObs; n++) {
-            order[fill[cand[n]]++] = n;
-        }
+        Grouping byCandidate = Grouping.of(cand, nC);
+        int[] start = byCandidate.start();
+        int[] order = byCandidate.order();
         double[][] a = new double[p][p];
         double[] s = new double[p];
         int[] touched = new int[p];

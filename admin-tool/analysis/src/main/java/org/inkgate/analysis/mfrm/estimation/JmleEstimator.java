@@ -34,8 +34,6 @@ public final class JmleEstimator {
     private static final int JOINT_LIMIT = 800;
     /** Joint Newton steps tried before falling back to facet-by-facet steps. */
     private static final int JOINT_PATIENCE = 60;
-    /** Beyond this |eta| the fast power series could overflow; the stable path is used. */
-    private static final double FAST_LIMIT = 30.0;
 
     private final ModelDesign d;
     private final boolean[][] anchored;
@@ -392,17 +390,7 @@ public final class JmleEstimator {
     void pass(double[][] measure, double[][] thresholds, Accumulators total, int block) {
         int nObs = d.observationCount();
         int chunks = nObs < 20_000 ? 1 : threads;
-        double[][] expNegCum = new double[nS][];
-        for (int s = 0; s < nS; s++) {
-            int m = d.maxCategory(s);
-            expNegCum[s] = new double[m + 1];
-            double cum = 0;
-            expNegCum[s][0] = 1;
-            for (int k = 1; k <= m; k++) {
-                cum += thresholds[s][k];
-                expNegCum[s][k] = Math.exp(-cum);
-            }
-        }
+        double[][] expNegCum = CategoryModel.expNegCumulative(thresholds, d);
         if (chunks == 1) {
             total.clear();
             passRange(0, nObs, measure, thresholds, expNegCum, total, block);
@@ -442,23 +430,7 @@ public final class JmleEstimator {
             }
             int s = sc[n];
             int m = expNegCum[s].length - 1;
-            double z = 0;
-            if (Math.abs(eta) < FAST_LIMIT) {
-                double r = Math.exp(eta);
-                double t = 1;
-                double[] ec = expNegCum[s];
-                for (int k = 0; k <= m; k++) {
-                    double num = ec[k] * t;
-                    p[k] = num;
-                    z += num;
-                    t *= r;
-                }
-                for (int k = 0; k <= m; k++) {
-                    p[k] /= z;
-                }
-            } else {
-                CategoryModel.probabilities(eta, thresholds[s], m, p);
-            }
+            CategoryModel.probabilities(eta, thresholds[s], expNegCum[s], m, p);
             if (block == THRESHOLDS || block == ALL) {
                 double tail = 0;
                 double[] te = acc.thrExp[s];

@@ -5,6 +5,7 @@ import java.util.stream.IntStream;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
+import org.inkgate.analysis.mfrm.design.Grouping;
 import org.inkgate.analysis.mfrm.design.ModelDesign;
 
 /**
@@ -32,7 +33,6 @@ final class JointNewton {
     private final int[] bound;
     private final int threads;
 
-    private static final double FAST_LIMIT = 30.0;
     private final boolean[] isThreshold;
 
     /** Result of one iteration's gradient pass, with the reduced information matrix it solved. */
@@ -74,20 +74,10 @@ final class JointNewton {
             }
         }
         int nC = d.elementCount(0);
-        int nObs = d.observationCount();
         int[] cand = d.elements(0);
-        start = new int[nC + 1];
-        for (int c : cand) {
-            start[c + 1]++;
-        }
-        for (int c = 0; c < nC; c++) {
-            start[c + 1] += start[c];
-        }
-        order = new int[nObs];
-        int[] fill = start.clone();
-        for (int n = 0; n < nObs; n++) {
-            order[fill[cand[n]]++] = n;
-        }
+        Grouping byCandidate = Grouping.of(cand, nC);
+        start = byCandidate.start();
+        order = byCandidate.order();
         bound = new int[nC + 1];
         int perRating = nF - 1 + d.maxCategoryOverall();
         for (int c = 0; c < nC; c++) {
@@ -250,17 +240,7 @@ final class JointNewton {
 
     private void accumulate(int c0, int c1, double[][] measure, double[][] thresholds, Part part, double[] gc,
                             double[] jcc, int[] cols, double[] vals, int[] used) {
-        double[][] expNegCum = new double[d.scaleCount()][];
-        for (int s = 0; s < expNegCum.length; s++) {
-            int m = d.maxCategory(s);
-            expNegCum[s] = new double[m + 1];
-            expNegCum[s][0] = 1;
-            double cum = 0;
-            for (int k = 1; k <= m; k++) {
-                cum += thresholds[s][k];
-                expNegCum[s][k] = Math.exp(-cum);
-            }
-        }
+        double[][] expNegCum = CategoryModel.expNegCumulative(thresholds, d);
         int mMax = d.maxCategoryOverall();
         double[] p = new double[mMax + 1];
         double[] t = new double[mMax + 2];
@@ -292,23 +272,7 @@ final class JointNewton {
                 }
                 int s = sc[n];
                 int m = d.maxCategory(s);
-                if (Math.abs(eta) < FAST_LIMIT) {
-                    // one exp per rating: P_k proportional to exp(-F_1 - ... - F_k) * exp(eta)^k
-                    double r = Math.exp(eta);
-                    double pow = 1;
-                    double z = 0;
-                    double[] ec = expNegCum[s];
-                    for (int k = 0; k <= m; k++) {
-                        p[k] = ec[k] * pow;
-                        z += p[k];
-                        pow *= r;
-                    }
-                    for (int k = 0; k <= m; k++) {
-                        p[k] /= z;
-                    }
-                } else {
-                    CategoryModel.probabilities(eta, thresholds[s], m, p);
-                }
+                CategoryModel.probabilities(eta, thresholds[s], expNegCum[s], m, p);
                 double e1 = 0;
                 double e2 = 0;
                 for (int k = 1; k <= m; k++) {

@@ -4,6 +4,7 @@ import java.util.Arrays;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
+import org.inkgate.analysis.mfrm.design.Grouping;
 import org.inkgate.analysis.mfrm.design.ModelDesign;
 
 /**
@@ -53,20 +54,10 @@ public final class JointStandardErrors {
             return out;
         }
         int nC = d.elementCount(0);
-        int nObs = d.observationCount();
         int[] cand = d.elements(0);
-        int[] start = new int[nC + 1];
-        for (int c : cand) {
-            start[c + 1]++;
-        }
-        for (int c = 0; c < nC; c++) {
-            start[c + 1] += start[c];
-        }
-        int[] order = new int[nObs];
-        int[] fill = start.clone();
-        for (int n = 0; n < nObs; n++) {
-            order[fill[cand[n]]++] = n;
-        }
+        Grouping byCandidate = Grouping.of(cand, nC);
+        int[] start = byCandidate.start();
+        int[] order = byCandidate.order();
         double[][] m = new double[p][p];
         double[] t = new double[p];
         int[] touched = new int[p];

@@ -86,17 +86,7 @@ public final class RatingStatistics {
         int[] x = d.categories();
         int[] sc = d.scales();
         double[] p = new double[d.maxCategoryOverall() + 1];
-        double[][] expNegCum = new double[nS][];
-        for (int s = 0; s < nS; s++) {
-            int m = d.maxCategory(s);
-            expNegCum[s] = new double[m + 1];
-            expNegCum[s][0] = 1;
-            double cum = 0;
-            for (int k = 1; k <= m; k++) {
-                cum += thresholds[s][k];
-                expNegCum[s][k] = Math.exp(-cum);
-            }
-        }
+        double[][] expNegCum = CategoryModel.expNegCumulative(thresholds, d);
         int[][] elements = new int[nF][];
         for (int f = 0; f < nF; f++) {
             elements[f] = d.elements(f);
@@ -108,22 +98,7 @@ public final class RatingStatistics {
             }
             int s = sc[n];
             int m = d.maxCategory(s);
-            if (Math.abs(eta) < 30) {
-                // one exp per rating, as in the estimator
-                double r = Math.exp(eta);
-                double pow = 1;
-                double z = 0;
-                for (int k = 0; k <= m; k++) {
-                    p[k] = expNegCum[s][k] * pow;
-                    z += p[k];
-                    pow *= r;
-                }
-                for (int k = 0; k <= m; k++) {
-                    p[k] /= z;
-                }
-            } else {
-                CategoryModel.probabilities(eta, thresholds[s], m, p);
-            }
+            CategoryModel.probabilities(eta, thresholds[s], expNegCum[s], m, p);
             double e = 0;
             double eRaw = 0;
             for (int k = 0; k <= m; k++) {
