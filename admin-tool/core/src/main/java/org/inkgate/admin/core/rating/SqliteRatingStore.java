@@ -230,7 +230,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
             Integer left = r.capacity() == null ? null : Math.max(0, r.capacity() - load.getOrDefault(r.id(), 0));
             capacities.add(new RatingAssigner.RaterCapacity(r.id(), left));
         }
-        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, k, seed);
+        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, load, k, seed);
         return tx("storing the rating assignment", () -> {
             String now = clock.instant().toString();
             StringBuilder raterList = new StringBuilder();
