@@ -342,7 +342,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         List<QueueItem> raw = read("reading the queue of " + raterId, () -> query("SELECT a.blind_id, a.task_id, a.kind,"
                 + " EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)"
                 + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
-                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.queue_position, a.assignment_id",
+                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
                 rs -> new QueueItem(0, rs.getString(1), rs.getString(2), kind(rs.getString(3)), rs.getInt(4) == 1),
                 raterId, examId));
         List<QueueItem> out = new ArrayList<>(raw.size());
