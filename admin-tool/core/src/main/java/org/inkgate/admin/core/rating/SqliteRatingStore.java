@@ -612,9 +612,12 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     private void assignAdjudicator(long sittingId, String taskId, String now) throws SQLException {
         Set<String> already = new HashSet<>(query("SELECT rater_id FROM rating_assignments WHERE sitting_id=? AND task_id=?",
                 rs -> rs.getString(1), sittingId, taskId));
-        Map<String, Integer> load = new HashMap<>();
-        each("SELECT a.rater_id, COUNT(*) FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
-                + " WHERE s.exam_id=? GROUP BY a.rater_id", rs -> load.put(rs.getString(1), rs.getInt(2)), examId);
+        if (loadInTx == null) {
+            loadInTx = new HashMap<>();
+            each("SELECT a.rater_id, COUNT(*) FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                    + " WHERE s.exam_id=? GROUP BY a.rater_id", rs -> loadInTx.put(rs.getString(1), rs.getInt(2)), examId);
+        }
+        Map<String, Integer> load = loadInTx;
         long seed = query("SELECT COALESCE(MAX(seed), 0) FROM rating_assignments WHERE sitting_id=? AND task_id=?",
                 rs -> rs.getLong(1), sittingId, taskId).get(0);
         Random rng = new Random(seed * 31 + sittingId * 1_000_003L + taskId.hashCode());
@@ -635,11 +638,14 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         if (best == null) {
             return; // stays in the adjudication queue without a rater: flags() says so, and a resolution entry settles it
         }
-        Set<String> taken = new HashSet<>(query("SELECT blind_id FROM rating_assignments WHERE blind_id IS NOT NULL",
-                rs -> rs.getString(1)));
+        String blind;
+        do {
+            blind = blindIds.next(new HashSet<>());
+        } while (!query("SELECT 1 FROM rating_assignments WHERE blind_id=?", rs -> 1, blind).isEmpty());
         update("INSERT INTO rating_assignments(sitting_id, task_id, rater_id, seed, created_at, run_id, blind_id, kind,"
                 + " queue_position) VALUES (?,?,?,?,?,NULL,?,'adjudication',?)", sittingId, taskId, best, seed, now,
-                blindIds.next(taken), nextPosition(best));
+                blind, nextPosition(best));
+        load.merge(best, 1, Integer::sum);
     }
 
     /** A flagged response in the adjudication queue (no candidate data: task, raters' blind ids and the reason). */
@@ -818,7 +824,11 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         void accept(ResultSet rs) throws SQLException;
     }
 
+    /** Workloads per rater, counted once per transaction that assigns adjudicators (null outside). */
+    private Map<String, Integer> loadInTx;
+
     private <T> T tx(String what, Work<T> work) throws RatingException {
+        loadInTx = null;
         try {
             c.setAutoCommit(false);
             try {
@@ -829,6 +839,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 c.rollback();
                 throw e;
             } finally {
+                loadInTx = null;
                 c.setAutoCommit(true);
             }
         } catch (SQLException e) {

@@ -15,9 +15,9 @@ import org.inkgate.admin.core.store.SqliteResultsStore;
  * (1-9, bands 1-3, 4-6, 7-9). Rows are written with plain SQL so the rating tests do not depend on
  * bundles and packages; the schema is the real one (SqliteResultsStore.open migrates it).
  */
-final class InventedStore {
+public final class InventedStore {
 
-    static final String EXAM = "invented-river-exam";
+    public static final String EXAM = "invented-river-exam";
     static final ExamSource.Rubric RUBRIC = new ExamSource.Rubric("rubric.yaml", List.of(
             criterion("content", "Content"), criterion("language", "Language")));
 
@@ -29,7 +29,7 @@ final class InventedStore {
                 new ExamSource.Band(4, 6, "adequate (invented)"), new ExamSource.Band(7, 9, "strong (invented)")));
     }
 
-    static Path make(Path dir, int candidates, List<String> tasks) throws Exception {
+    public static Path make(Path dir, int candidates, List<String> tasks) throws Exception {
         Path file = dir.resolve("results.db");
         try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
             try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file); Statement s = c.createStatement()) {
