@@ -580,6 +580,12 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
             }
         }
         boolean flagged = !flag.isEmpty();
+        if (flagged && ratings.stream().noneMatch(r -> r.kind() == Kind.ADJUDICATION)
+                && count("SELECT COUNT(*) FROM rating_assignments WHERE sitting_id=? AND task_id=? AND kind='adjudication'",
+                        sittingId, taskId) == 0
+                && count("SELECT COUNT(*) FROM resolution_entries WHERE flag_id=?", flag.get(0)) == 0) {
+            assignAdjudicator(sittingId, taskId, now); // none was free when it was flagged; one may be now
+        }
         Map<String, Integer> entry = new TreeMap<>();
         List<String> by = new ArrayList<>();
         if (flagged) {
@@ -657,7 +663,8 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 return "settled (" + finalMethod + ")";
             }
             if (adjudicator == null) {
-                return "no adjudicator available: add a rater with capacity and run review, or enter a resolution";
+                return "no adjudicator available: add a rater with capacity and run rate flags again, or enter a"
+                        + " resolution (rate resolve)";
             }
             return adjudicated ? "adjudicated" : "awaiting adjudicator " + adjudicator + " (" + adjudicatorBlindId + ")";
         }

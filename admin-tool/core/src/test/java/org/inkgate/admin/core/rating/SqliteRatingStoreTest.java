@@ -261,6 +261,17 @@ class SqliteRatingStoreTest {
             assertEquals(2, s.pendingResponses());
             s.addRater("R03", "Invented third", null);
             assertEquals(0, s.review(), "flags are raised once");
+            List<SqliteRatingStore.Flag> now = s.flags();
+            assertEquals(List.of("R03", "R03"), now.stream().map(SqliteRatingStore.Flag::adjudicator).toList(),
+                    "a rater added later takes the waiting adjudications when the rule runs again");
+            // ADJUDICATOR method: the third rater's scores become the final score
+            s.submit("R03", now.get(0).adjudicatorBlindId(), sheet(4, 6));
+            List<SqliteRatingStore.FinalRow> finals = new ArrayList<>();
+            s.forEachFinalScore(finals::add);
+            assertEquals(List.of("adjudicator", "adjudicator"), finals.stream().map(SqliteRatingStore.FinalRow::method)
+                    .toList());
+            assertEquals(List.of(4.0, 6.0), finals.stream().map(SqliteRatingStore.FinalRow::score).toList());
+            assertEquals(1, s.pendingResponses());
         }
     }
 
