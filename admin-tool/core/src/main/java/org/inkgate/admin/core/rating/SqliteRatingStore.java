@@ -612,8 +612,9 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
 
     /**
      * A third rater for a flagged response, by the assignment's balancing: not one of its raters,
-     * capacity left, the smallest workload in this exam; ties broken at random from the run's seed
-     * and the response, so a review repeated on a copy of the store picks the same rater.
+     * capacity left, the smallest workload in this exam; among equals one whose queue does not end
+     * with the same candidate; remaining ties broken at random from the run's seed and the response,
+     * so a review repeated on a copy of the store picks the same rater.
      */
     private void assignAdjudicator(long sittingId, String taskId, String now) throws SQLException {
         Set<String> already = new HashSet<>(query("SELECT rater_id FROM rating_assignments WHERE sitting_id=? AND task_id=?",
@@ -627,18 +628,32 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         long seed = query("SELECT COALESCE(MAX(seed), 0) FROM rating_assignments WHERE sitting_id=? AND task_id=?",
                 rs -> rs.getLong(1), sittingId, taskId).get(0);
         Random rng = new Random(seed * 31 + sittingId * 1_000_003L + taskId.hashCode());
-        String best = null;
-        long bestKey = Long.MAX_VALUE;
+        String candidate = query("SELECT candidate_number FROM sittings WHERE sitting_id=?", rs -> rs.getString(1),
+                sittingId).get(0);
+        List<String> eligible = new ArrayList<>();
+        int least = Integer.MAX_VALUE;
         for (RaterEntry r : query("SELECT rater_id, label, capacity FROM raters ORDER BY rater_id",
                 rs -> new RaterEntry(rs.getString(1), rs.getString(2), intOrNull(rs, 3)))) {
             int l = load.getOrDefault(r.id(), 0);
             if (already.contains(r.id()) || r.capacity() != null && l >= r.capacity()) {
                 continue;
             }
-            long key = ((long) l << 20) + rng.nextInt(1 << 20);
+            eligible.add(r.id());
+            least = Math.min(least, l);
+        }
+        String best = null;
+        long bestKey = Long.MAX_VALUE;
+        for (String r : eligible) {
+            if (load.getOrDefault(r, 0) != least) {
+                continue;
+            }
+            // among the least loaded, a rater whose queue would end with this candidate's other response is
+            // passed over (common practice against the halo effect); then a seeded random choice
+            int adjacent = candidate.equals(lastCandidate(r)) ? 1 : 0;
+            long key = ((long) adjacent << 20) + rng.nextInt(1 << 20);
             if (key < bestKey) {
                 bestKey = key;
-                best = r.id();
+                best = r;
             }
         }
         if (best == null) {
@@ -652,6 +667,13 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 + " queue_position) VALUES (?,?,?,?,?,NULL,?,'adjudication',?)", sittingId, taskId, best, seed, now,
                 blind, nextPosition(best));
         load.merge(best, 1, Integer::sum);
+    }
+
+    /** The candidate behind the last item of a rater's queue in this exam, or null for an empty queue. */
+    private String lastCandidate(String rater) throws SQLException {
+        return query("SELECT s.candidate_number FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.kind = 'adjudication' DESC, a.queue_position DESC"
+                + " LIMIT 1", rs -> rs.getString(1), rater, examId).stream().findFirst().orElse(null);
     }
 
     /** A flagged response in the adjudication queue (no candidate data: task, raters' blind ids and the reason). */
