@@ -20,8 +20,9 @@ final class QueueOrder {
     private QueueOrder() {
     }
 
+    /** The working order; {@code before} is the candidate of the item the queue already ends with, or null. */
     static List<RatingAssigner.Response> arrange(List<RatingAssigner.Response> items, Random rng, String rater,
-            List<String> warnings) {
+            String before, List<String> warnings) {
         Map<String, List<RatingAssigner.Response>> byTask = new TreeMap<>();
         for (RatingAssigner.Response r : items) {
             byTask.computeIfAbsent(r.taskId(), t -> new ArrayList<>()).add(r);
@@ -29,18 +30,19 @@ final class QueueOrder {
         List<String> tasks = new ArrayList<>(byTask.keySet());
         Collections.shuffle(tasks, rng);
         List<RatingAssigner.Response> out = new ArrayList<>(items.size());
-        String previous = null;
+        String previous = before;
         for (String task : tasks) {
             List<RatingAssigner.Response> block = new ArrayList<>(byTask.get(task));
             block.sort(Comparator.comparing(RatingAssigner.Response::candidate)
                     .thenComparingLong(RatingAssigner.Response::sittingId));
             previous = arrangeBlock(block, previous, rng, out);
         }
-        for (int i = 1; i < out.size(); i++) {
-            if (out.get(i).candidate().equals(out.get(i - 1).candidate())) {
-                warnings.add("rater " + rater + " gets two responses of one candidate in a row at positions " + i
-                        + " and " + (i + 1) + ": that candidate has several responses to one task (see the conflicts"
-                        + " in the collect report) and the queue could not separate them");
+        for (int i = 0; i < out.size(); i++) {
+            if (out.get(i).candidate().equals(i == 0 ? before : out.get(i - 1).candidate())) {
+                warnings.add("rater " + rater + " gets two responses of one candidate in a row at places " + i
+                        + " and " + (i + 1) + " of this run's items (place 0: the item already last in the queue):"
+                        + " that candidate has several responses to one task (see the conflicts in the collect report)"
+                        + " and the queue could not separate them");
             }
         }
         return out;

@@ -73,6 +73,15 @@ public final class RatingAssigner {
      */
     public static Plan assign(List<Response> responses, List<RaterCapacity> raters, Map<String, Integer> earlier, int k,
             long seed) throws RatingException {
+        return assign(responses, raters, earlier, Map.of(), k, seed);
+    }
+
+    /**
+     * As above; {@code lastCandidate} names, per rater, the candidate of the last item already in
+     * their queue, so the new items do not start with that candidate's other response.
+     */
+    public static Plan assign(List<Response> responses, List<RaterCapacity> raters, Map<String, Integer> earlier,
+            Map<String, String> lastCandidate, int k, long seed) throws RatingException {
         if (k < 1 || k > 3) {
             throw new RatingException("raters per response is " + k + "; give 1, 2 or 3");
         }
@@ -142,7 +151,8 @@ public final class RatingAssigner {
         Map<String, Integer> workload = new LinkedHashMap<>();
         raters.stream().map(RaterCapacity::raterId).sorted().forEach(r -> workload.put(r, 0));
         for (Map.Entry<String, List<Response>> e : byRater.entrySet()) {
-            List<Response> queue = QueueOrder.arrange(e.getValue(), rng, e.getKey(), warnings);
+            List<Response> queue = QueueOrder.arrange(e.getValue(), rng, e.getKey(), lastCandidate.get(e.getKey()),
+                    warnings);
             for (int i = 0; i < queue.size(); i++) {
                 placements.add(new Placement(queue.get(i), e.getKey(), i + 1));
             }

@@ -230,7 +230,14 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
             Integer left = r.capacity() == null ? null : Math.max(0, r.capacity() - load.getOrDefault(r.id(), 0));
             capacities.add(new RatingAssigner.RaterCapacity(r.id(), left));
         }
-        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, load, k, seed);
+        Map<String, String> last = new HashMap<>();
+        for (RaterEntry r : raters) {
+            String c = read("reading queues", () -> lastOwnCandidate(r.id()));
+            if (c != null) {
+                last.put(r.id(), c);
+            }
+        }
+        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, load, last, k, seed);
         return tx("storing the rating assignment", () -> {
             String now = clock.instant().toString();
             StringBuilder raterList = new StringBuilder();
@@ -674,6 +681,13 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         return query("SELECT s.candidate_number FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
                 + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.kind = 'adjudication' DESC, a.queue_position DESC"
                 + " LIMIT 1", rs -> rs.getString(1), rater, examId).stream().findFirst().orElse(null);
+    }
+
+    /** The candidate behind the last first-rating item of a rater's queue (new first ratings go after it). */
+    private String lastOwnCandidate(String rater) throws SQLException {
+        return query("SELECT s.candidate_number FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE a.rater_id=? AND s.exam_id=? AND a.kind = 'rating' ORDER BY a.queue_position DESC LIMIT 1",
+                rs -> rs.getString(1), rater, examId).stream().findFirst().orElse(null);
     }
 
     /** A flagged response in the adjudication queue (no candidate data: task, raters' blind ids and the reason). */

@@ -241,6 +241,18 @@ class RatingAssignerTest {
     }
 
     @Test
+    void assign_laterRun_doesNotStartWithTheCandidateTheQueueEndsWith() throws Exception {
+        // 3 candidates, one task: a random start would repeat the queue's last candidate one time in three
+        for (long seed = 1; seed <= 20; seed++) {
+            RatingAssigner.Plan plan = RatingAssigner.assign(responses(3, 1), raters(2), Map.of(),
+                    Map.of("R01", "C0000", "R02", "C0002"), 2, seed);
+            Map<String, List<RatingAssigner.Placement>> q = queues(plan);
+            assertNotEquals("C0000", q.get("R01").get(0).response().candidate(), "seed " + seed);
+            assertNotEquals("C0002", q.get("R02").get(0).response().candidate(), "seed " + seed);
+        }
+    }
+
+    @Test
     void assign_tooFewResponsesToLinkSevenRaters_warnsAndReportsTheGroups() throws Exception {
         RatingAssigner.Plan plan = RatingAssigner.assign(responses(3, 1), raters(7), 2, 1L);
         assertFalse(plan.links().connected());
