@@ -1,0 +1,435 @@
+package org.inkgate.admin.gui.rating;
+
+import java.util.ArrayList;
+import java.util.List;
+import javafx.beans.binding.Bindings;
+import javafx.geometry.Pos;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ListCell;
+import javafx.scene.control.ListView;
+import javafx.scene.control.ProgressBar;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.control.TextArea;
+import javafx.scene.control.TextField;
+import javafx.scene.control.TextFormatter;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyEvent;
+import javafx.scene.layout.BorderPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.StackPane;
+import javafx.scene.layout.VBox;
+import org.inkgate.admin.core.rating.RatingDesk;
+import org.inkgate.admin.core.rating.RatingDesk.Progress;
+import org.inkgate.admin.core.rating.RatingDesk.QueueItem;
+import org.inkgate.admin.core.source.ExamSource;
+
+/**
+ * The desk while a rater works: their queue on the left, the response in the middle (plain,
+ * read-only, the same presentation for every response), the rubric with score fields, the
+ * comment and "Save and next" on the right, progress at the top.
+ */
+final class ScoringView {
+
+    static final String ADJUDICATION_NOTE = "Adjudication: an independent further rating. Earlier ratings are not"
+            + " shown; score the response on its own, as you would any other.";
+    static final String DONE_NOTE = "You have submitted this rating. A change counts only when you save again; the"
+            + " earlier rating stays in the record.";
+
+    private final DeskModel model;
+    private final BorderPane root = new BorderPane();
+    private final ListView<QueueItem> queue;
+    private final TextArea responseText = new TextArea();
+    private final VBox criteria = new VBox(18);
+    private final TextArea comment = new TextArea();
+    private final Button saveNext = new Button("Save and next");
+    private final List<TextField> scoreFields = new ArrayList<>();
+
+    ScoringView(DeskModel model) {
+        this.model = model;
+        queue = queueList();
+        root.getStyleClass().add("desk-root");
+        root.setTop(header());
+        root.setLeft(queuePane());
+        root.setCenter(responsePane());
+        root.setRight(rubricPane());
+        model.revision().addListener((o, was, now) -> refresh());
+    }
+
+    Node view() {
+        return root;
+    }
+
+    /** Where focus goes when the desk opens a response: its first score field, else the queue. */
+    Node firstFocus() {
+        return scoreFields.isEmpty() ? queue : scoreFields.get(0);
+    }
+
+    private Node header() {
+        Label title = new Label("Inkgate rating desk");
+        title.getStyleClass().add("desk-title");
+        Label who = new Label();
+        who.setId("raterName");
+        who.getStyleClass().add("desk-rater");
+        who.textProperty().bind(Bindings.createStringBinding(() -> model.rater().get() == null ? ""
+                : "Signed in as " + SignInView.text(model.rater().get()), model.rater()));
+        Label progress = new Label();
+        progress.setId("progressText");
+        progress.getStyleClass().add("desk-progress");
+        progress.textProperty().bind(Bindings.createStringBinding(() -> progressText(model.progress().get()),
+                model.progress()));
+        ProgressBar bar = new ProgressBar();
+        bar.setId("progressBar");
+        bar.setPrefWidth(180);
+        bar.setAccessibleText("Share of your queue rated");
+        bar.progressProperty().bind(Bindings.createDoubleBinding(() -> {
+            Progress p = model.progress().get();
+            return p == null || p.total() == 0 ? 0.0 : (double) p.rated() / p.total();
+        }, model.progress()));
+        Button signOut = new Button("Sign out");
+        signOut.setId("signOut");
+        signOut.setOnAction(e -> model.signOut());
+        DeskKeys.enterFires(signOut);
+        Region grow = new Region();
+        HBox.setHgrow(grow, Priority.ALWAYS);
+        HBox header = new HBox(20, title, who, grow, progress, bar, signOut);
+        header.setAlignment(Pos.CENTER_LEFT);
+        header.getStyleClass().add("desk-header");
+        return header;
+    }
+
+    static String progressText(Progress p) {
+        return p == null ? "" : "Rated " + p.rated() + " of " + p.total() + "  \u00b7  " + p.remaining() + " remaining  \u00b7  "
+                + p.flagged() + " flagged";
+    }
+
+    private ListView<QueueItem> queueList() {
+        ListView<QueueItem> list = new ListView<>(model.queue());
+        list.setId("queue");
+        list.setAccessibleText("Your queue");
+        list.getStyleClass().add("queue-list");
+        list.setCellFactory(l -> new ListCell<>() {
+            @Override
+            protected void updateItem(QueueItem item, boolean empty) {
+                super.updateItem(item, empty);
+                getStyleClass().removeAll("queue-done", "queue-adjudication");
+                if (empty || item == null) {
+                    setText(null);
+                    return;
+                }
+                setText(queueText(item));
+                if (item.done()) {
+                    getStyleClass().add("queue-done");
+                }
+                if (item.kind() == RatingDesk.Kind.ADJUDICATION) {
+                    getStyleClass().add("queue-adjudication");
+                }
+            }
+        });
+        // opening is explicit (Enter or a click), so moving through the list, or the list refreshing
+        // after a submission, never opens a response by itself
+        list.setOnKeyPressed(e -> {
+            if (e.getCode() == KeyCode.ENTER && !e.isShortcutDown()) {
+                openSelected(list);
+                e.consume();
+            }
+        });
+        list.setOnMouseClicked(e -> {
+            if (e.getButton() == javafx.scene.input.MouseButton.PRIMARY) {
+                openSelected(list);
+            }
+        });
+        return list;
+    }
+
+    private void openSelected(ListView<QueueItem> list) {
+        QueueItem chosen = list.getSelectionModel().getSelectedItem();
+        QueueItem open = model.current().get();
+        if (chosen == null) {
+            return;
+        }
+        if (open != null && open.blindId().equals(chosen.blindId())) {
+            firstFocus().requestFocus();
+        } else {
+            model.open(chosen);
+        }
+    }
+
+    static String queueText(QueueItem item) {
+        return item.position() + ".  " + item.blindId() + (item.kind() == RatingDesk.Kind.ADJUDICATION ? "  adjudication" : "")
+                + "\n     " + (item.done() ? "rated" : "to rate") + "  \u00b7  task " + item.taskId();
+    }
+
+    private Node queuePane() {
+        Label heading = new Label("Your queue");
+        heading.getStyleClass().add("pane-heading");
+        heading.setLabelFor(queue);
+        VBox box = new VBox(8, heading, queue);
+        VBox.setVgrow(queue, Priority.ALWAYS);
+        box.getStyleClass().add("queue-pane");
+        box.setPrefWidth(240);
+        return box;
+    }
+
+    private Node responsePane() {
+        Label heading = new Label();
+        heading.setId("itemHeading");
+        heading.getStyleClass().add("item-heading");
+        heading.textProperty().bind(Bindings.createStringBinding(() -> {
+            QueueItem item = model.current().get();
+            RatingDesk.BlindResponse r = model.response().get();
+            return item == null || r == null ? "" : "Response " + r.blindId() + "   \u00b7   " + r.taskTitle()
+                    + "   \u00b7   item " + item.position() + " of " + model.queue().size();
+        }, model.current(), model.response(), model.queue()));
+        Label kind = new Label(ADJUDICATION_NOTE);
+        kind.setId("itemKind");
+        kind.setWrapText(true);
+        kind.getStyleClass().add("adjudication-note");
+        kind.visibleProperty().bind(Bindings.createBooleanBinding(() -> model.current().get() != null
+                && model.current().get().kind() == RatingDesk.Kind.ADJUDICATION, model.current()));
+        kind.managedProperty().bind(kind.visibleProperty());
+
+        responseText.setId("responseText");
+        responseText.setEditable(false);
+        responseText.setWrapText(true);
+        responseText.getStyleClass().add("response-text");
+        responseText.setAccessibleText("Response text, read only");
+        responseText.textProperty().bind(Bindings.createStringBinding(() -> model.response().get() == null ? ""
+                : model.response().get().text(), model.response()));
+        responseText.setContextMenu(new javafx.scene.control.ContextMenu());
+        DeskKeys.tabLeaves(responseText, this::firstFocus, () -> queue);
+        VBox.setVgrow(responseText, Priority.ALWAYS);
+        Label length = new Label();
+        length.setId("wordCount");
+        length.getStyleClass().add("desk-note");
+        length.textProperty().bind(Bindings.createStringBinding(() -> model.response().get() == null ? ""
+                : "Length: " + words(model.response().get().text()) + " words (counted between spaces, the same way"
+                        + " for every response)", model.response()));
+        VBox item = new VBox(12, heading, kind, responseText, length);
+        item.getStyleClass().add("response-pane");
+        item.visibleProperty().bind(model.current().isNotNull());
+
+        Label doneHeading = new Label("Queue finished");
+        doneHeading.getStyleClass().add("desk-heading");
+        Label doneText = new Label();
+        doneText.setId("finishedText");
+        doneText.setWrapText(true);
+        doneText.textProperty().bind(Bindings.createStringBinding(() -> {
+            Progress p = model.progress().get();
+            return "You have submitted all " + (p == null ? 0 : p.total()) + " ratings in your queue. Thank you."
+                    + "\n\nYou can still open any response from the list to read it again or change your rating."
+                    + " Sign out when you leave the desk.";
+        }, model.progress()));
+        VBox finished = new VBox(16, doneHeading, doneText);
+        finished.setId("finishedPane");
+        finished.getStyleClass().add("finished-pane");
+        finished.setMaxWidth(560);
+        finished.setMaxHeight(Region.USE_PREF_SIZE);
+        finished.visibleProperty().bind(model.finished());
+        return new StackPane(item, finished);
+    }
+
+    static int words(String text) {
+        String t = text == null ? "" : text.strip();
+        return t.isEmpty() ? 0 : t.split("\\s+").length;
+    }
+
+    private Node rubricPane() {
+        Label heading = new Label("Rubric and scores");
+        heading.getStyleClass().add("pane-heading");
+        Label how = new Label("Type a score in each box (Up and Down step it; Enter moves on). The band that covers"
+                + " your score is marked.");
+        how.setWrapText(true);
+        how.getStyleClass().add("desk-note");
+
+        comment.setId("comment");
+        comment.setWrapText(true);
+        comment.setPrefRowCount(4);
+        comment.setAccessibleText("Comment (optional)");
+        comment.textProperty().bindBidirectional(model.comment());
+        DeskKeys.tabLeaves(comment, () -> saveNext, () -> scoreFields.isEmpty() ? queue : scoreFields.get(scoreFields.size() - 1));
+        Label commentLabel = new Label("Comment (optional)");
+        commentLabel.getStyleClass().add("field-label");
+        commentLabel.setLabelFor(comment);
+
+        Label doneNote = new Label(DONE_NOTE);
+        doneNote.setId("doneNote");
+        doneNote.setWrapText(true);
+        doneNote.getStyleClass().add("desk-note");
+        doneNote.visibleProperty().bind(Bindings.createBooleanBinding(() -> model.current().get() != null
+                && model.current().get().done(), model.current()));
+        doneNote.managedProperty().bind(doneNote.visibleProperty());
+
+        Label problem = new Label();
+        problem.setId("problem");
+        problem.setWrapText(true);
+        problem.getStyleClass().add("desk-problem");
+        problem.textProperty().bind(model.problem());
+        problem.visibleProperty().bind(model.problem().isNotEmpty());
+        problem.managedProperty().bind(problem.visibleProperty());
+        // announced to screen readers when it changes
+        problem.setAccessibleRole(javafx.scene.AccessibleRole.TEXT);
+
+        saveNext.setId("saveNext");
+        saveNext.getStyleClass().add("primary");
+        saveNext.setOnAction(e -> submit());
+        saveNext.disableProperty().bind(model.current().isNull());
+        DeskKeys.enterFires(saveNext);
+        Label keys = new Label("Ctrl+Enter: save and next.  Ctrl+Page Down / Page Up: next / previous response"
+                + " without saving (your draft is kept).");
+        keys.setWrapText(true);
+        keys.getStyleClass().add("desk-note");
+        Label status = new Label();
+        status.setId("deskStatus");
+        status.setWrapText(true);
+        status.getStyleClass().add("desk-status");
+        status.textProperty().bind(model.status());
+
+        VBox box = new VBox(14, heading, how, criteria, commentLabel, comment, doneNote, problem, saveNext, keys, status);
+        box.getStyleClass().add("rubric-pane");
+        box.visibleProperty().bind(model.current().isNotNull());
+        ScrollPane scroll = new ScrollPane(box);
+        scroll.setFitToWidth(true);
+        scroll.setPrefWidth(440);
+        scroll.getStyleClass().add("rubric-scroll");
+        return scroll;
+    }
+
+    private void submit() {
+        model.submitAndNext().ifPresent(missing -> {
+            int index = model.scores().indexOf(missing);
+            if (index >= 0 && index < scoreFields.size()) {
+                scoreFields.get(index).requestFocus();
+            }
+        });
+    }
+
+    /** Rebuilds the rubric for the response now open, selects it in the queue and puts focus where work starts. */
+    private void refresh() {
+        criteria.getChildren().clear();
+        scoreFields.clear();
+        List<DeskModel.CriterionScore> scores = model.scores();
+        for (int i = 0; i < scores.size(); i++) {
+            criteria.getChildren().add(criterionCard(scores.get(i), i));
+        }
+        QueueItem open = model.current().get();
+        if (open != null) {
+            model.queue().stream().filter(q -> q.blindId().equals(open.blindId())).findFirst().ifPresent(q -> {
+                queue.getSelectionModel().select(q);
+                queue.scrollTo(Math.max(0, queue.getSelectionModel().getSelectedIndex() - 3));
+            });
+        } else {
+            queue.getSelectionModel().clearSelection();
+        }
+        Node target = model.finished().get() ? queue : firstFocus();
+        target.requestFocus();
+        // again after the pulse that lays the new fields out, in case they could not take focus yet
+        javafx.application.Platform.runLater(() -> {
+            if (target.getScene() != null && !target.isFocused() && target == (model.finished().get() ? queue : firstFocus())) {
+                target.requestFocus();
+            }
+        });
+    }
+
+    private Node criterionCard(DeskModel.CriterionScore score, int index) {
+        ExamSource.Criterion c = score.criterion();
+        String range = c.minScore() + " to " + c.maxScore();
+        TextField field = new TextField();
+        field.setId("score-" + c.id());
+        field.setPrefColumnCount(3);
+        field.setMaxWidth(80);
+        field.getStyleClass().add("score-field");
+        field.setAccessibleText(c.name() + ": score from " + range);
+        field.setTextFormatter(new TextFormatter<String>(change -> {
+            if (!change.isContentChange()) {
+                return change;
+            }
+            if (ScoreEntry.of(c, change.getControlNewText()) instanceof ScoreEntry.Refused r) {
+                model.refused(score, r.message());
+                return null;
+            }
+            return change;
+        }));
+        field.setText(score.text().get());
+        field.textProperty().bindBidirectional(score.text());
+        field.addEventFilter(KeyEvent.KEY_PRESSED, e -> onScoreKey(e, score, index));
+        scoreFields.add(field);
+
+        Label name = new Label(c.name());
+        name.getStyleClass().add("criterion-name");
+        name.setLabelFor(field);
+        Label rangeLabel = new Label("scores " + range);
+        rangeLabel.getStyleClass().add("desk-note");
+        HBox top = new HBox(12, name, rangeLabel);
+        top.setAlignment(Pos.BASELINE_LEFT);
+        HBox entry = new HBox(12, field);
+        entry.setAlignment(Pos.CENTER_LEFT);
+        Label message = new Label();
+        message.setId("message-" + c.id());
+        message.setWrapText(true);
+        message.getStyleClass().add("score-message");
+        message.textProperty().bind(score.message());
+        message.visibleProperty().bind(score.message().isNotEmpty());
+        message.managedProperty().bind(message.visibleProperty());
+
+        VBox bands = new VBox(4);
+        for (ExamSource.Band band : c.bands()) {
+            bands.getChildren().add(bandRow(score, band));
+        }
+        VBox card = new VBox(8, top, entry, message, bands);
+        card.getStyleClass().add("criterion-card");
+        return card;
+    }
+
+    private static Node bandRow(DeskModel.CriterionScore score, ExamSource.Band band) {
+        Label scores = new Label(band.from() == band.to() ? Integer.toString(band.from()) : band.from() + "\u2013" + band.to());
+        scores.getStyleClass().add("band-scores");
+        scores.setMinWidth(48);
+        Label text = new Label(band.descriptor());
+        text.setWrapText(true);
+        text.getStyleClass().add("band-text");
+        HBox.setHgrow(text, Priority.ALWAYS);
+        HBox row = new HBox(10, scores, text);
+        row.getStyleClass().add("band");
+        Runnable mark = () -> {
+            boolean covers = score.score().map(s -> s >= band.from() && s <= band.to()).orElse(false);
+            row.getStyleClass().remove("band-current");
+            if (covers) {
+                row.getStyleClass().add("band-current");
+            }
+            row.setAccessibleText("Band " + scores.getText() + ": " + band.descriptor() + (covers ? " (covers your score)" : ""));
+        };
+        score.entry().addListener((o, was, now) -> mark.run());
+        mark.run();
+        return row;
+    }
+
+    private void onScoreKey(KeyEvent e, DeskModel.CriterionScore score, int index) {
+        if (e.isShortcutDown() || e.isAltDown()) {
+            return;
+        }
+        switch (e.getCode()) {
+            case UP -> model.step(score, +1);
+            case DOWN -> model.step(score, -1);
+            case ENTER -> (index + 1 < scoreFields.size() ? scoreFields.get(index + 1) : comment).requestFocus();
+            default -> {
+                return;
+            }
+        }
+        e.consume();
+    }
+
+    /** Ctrl+Enter anywhere on the desk. */
+    void submitFromKeyboard() {
+        if (model.current().get() != null) {
+            submit();
+        }
+    }
+
+    TextArea responseArea() {
+        return responseText;
+    }
+}
