@@ -246,7 +246,92 @@ public final class Migrations {
                       SELECT s.exam_id, s.candidate_number, r.task_id, COUNT(*) AS copies
                       FROM responses r JOIN sittings s ON s.sitting_id = r.sitting_id
                       GROUP BY s.exam_id, s.candidate_number, r.task_id
-                      HAVING COUNT(*) > 1""")));
+                      HAVING COUNT(*) > 1""")),
+            new Migration(3, "blind double rating: rater capacity, assignment runs, blind ids and queues, drafts,"
+                    + " submission history, discrepancy rules, flags, resolution entries, final scores", List.of(
+                    "ALTER TABLE raters ADD COLUMN capacity INTEGER CHECK (capacity IS NULL OR capacity >= 0)",
+                    """
+                    CREATE TABLE rating_runs (
+                      run_id INTEGER PRIMARY KEY,
+                      exam_id TEXT NOT NULL REFERENCES exams(exam_id),
+                      seed INTEGER NOT NULL,
+                      raters_per_response INTEGER NOT NULL CHECK (raters_per_response BETWEEN 1 AND 3),
+                      raters TEXT NOT NULL,
+                      responses INTEGER NOT NULL,
+                      linked INTEGER NOT NULL CHECK (linked IN (0, 1)),
+                      rater_groups TEXT NOT NULL,
+                      created_at TEXT NOT NULL
+                    )""",
+                    "ALTER TABLE rating_assignments ADD COLUMN run_id INTEGER REFERENCES rating_runs(run_id)",
+                    "ALTER TABLE rating_assignments ADD COLUMN blind_id TEXT",
+                    "ALTER TABLE rating_assignments ADD COLUMN kind TEXT NOT NULL DEFAULT 'rating'"
+                            + " CHECK (kind IN ('rating', 'adjudication'))",
+                    "ALTER TABLE rating_assignments ADD COLUMN queue_position INTEGER",
+                    "CREATE UNIQUE INDEX rating_assignments_by_blind_id ON rating_assignments(blind_id)",
+                    "CREATE INDEX rating_assignments_by_rater ON rating_assignments(rater_id, queue_position)",
+                    """
+                    CREATE TABLE rating_drafts (
+                      assignment_id INTEGER PRIMARY KEY REFERENCES rating_assignments(assignment_id),
+                      scores_json TEXT NOT NULL,
+                      comment TEXT NOT NULL,
+                      saved_at TEXT NOT NULL
+                    )""",
+                    """
+                    CREATE TABLE rating_submissions (
+                      submission_id INTEGER PRIMARY KEY,
+                      assignment_id INTEGER NOT NULL REFERENCES rating_assignments(assignment_id),
+                      rater_id TEXT NOT NULL REFERENCES raters(rater_id),
+                      scores_json TEXT NOT NULL,
+                      comment TEXT NOT NULL,
+                      submitted_at TEXT NOT NULL,
+                      via TEXT NOT NULL
+                    )""",
+                    "CREATE INDEX rating_submissions_by_assignment ON rating_submissions(assignment_id, submission_id)",
+                    "ALTER TABLE ratings ADD COLUMN submission_id INTEGER REFERENCES rating_submissions(submission_id)",
+                    """
+                    CREATE TABLE discrepancy_rules (
+                      rule_id INTEGER PRIMARY KEY,
+                      exam_id TEXT NOT NULL REFERENCES exams(exam_id),
+                      max_criterion_band_gap INTEGER CHECK (max_criterion_band_gap IS NULL OR max_criterion_band_gap >= 0),
+                      max_total_gap INTEGER CHECK (max_total_gap IS NULL OR max_total_gap >= 0),
+                      adjudicated_score TEXT NOT NULL CHECK (adjudicated_score IN ('closest-pair-mean', 'adjudicator')),
+                      set_at TEXT NOT NULL,
+                      CHECK (max_criterion_band_gap IS NOT NULL OR max_total_gap IS NOT NULL)
+                    )""",
+                    """
+                    CREATE TABLE rating_flags (
+                      flag_id INTEGER PRIMARY KEY,
+                      sitting_id INTEGER NOT NULL,
+                      task_id TEXT NOT NULL,
+                      rule_id INTEGER NOT NULL REFERENCES discrepancy_rules(rule_id),
+                      reason TEXT NOT NULL,
+                      flagged_at TEXT NOT NULL,
+                      UNIQUE (sitting_id, task_id),
+                      FOREIGN KEY (sitting_id, task_id) REFERENCES responses(sitting_id, task_id)
+                    )""",
+                    """
+                    CREATE TABLE resolution_entries (
+                      flag_id INTEGER NOT NULL REFERENCES rating_flags(flag_id),
+                      criterion_id TEXT NOT NULL,
+                      score INTEGER NOT NULL,
+                      resolved_by TEXT NOT NULL,
+                      comment TEXT NOT NULL,
+                      resolved_at TEXT NOT NULL,
+                      PRIMARY KEY (flag_id, criterion_id)
+                    )""",
+                    """
+                    CREATE TABLE final_scores (
+                      sitting_id INTEGER NOT NULL,
+                      task_id TEXT NOT NULL,
+                      criterion_id TEXT NOT NULL,
+                      score REAL NOT NULL,
+                      method TEXT NOT NULL,
+                      rule_id INTEGER REFERENCES discrepancy_rules(rule_id),
+                      basis TEXT NOT NULL,
+                      decided_at TEXT NOT NULL,
+                      PRIMARY KEY (sitting_id, task_id, criterion_id),
+                      FOREIGN KEY (sitting_id, task_id) REFERENCES responses(sitting_id, task_id)
+                    )""")));
 
     private Migrations() {
     }

@@ -1,0 +1,898 @@
+package org.inkgate.admin.core.rating;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.type.TypeReference;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.DriverManager;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Statement;
+import java.time.Clock;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Random;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.function.Consumer;
+import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.admin.core.store.Migrations;
+import org.sqlite.SQLiteConfig;
+
+/**
+ * Blind double rating of one exam over the results store: raters, assignment runs, the rating
+ * desk ({@link RatingDesk}), discrepancy flags, adjudication, resolution entries, final scores and
+ * the rows exports need. Its own connection to the store file uses the client's storage discipline
+ * (write-ahead log, synchronous FULL): a draft or rating is on disk when a call returns, so a
+ * crash or power cut loses nothing a rater saved. Every submission is kept (history), with who and
+ * when; the current rating of an assignment is its latest submission.
+ */
+public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
+
+    private static final ObjectMapper JSON = new ObjectMapper();
+    private static final TypeReference<TreeMap<String, Integer>> SCORES = new TypeReference<>() {
+    };
+
+    private final Connection c;
+    private final String examId;
+    private final ExamSource.Rubric rubric;
+    private final Clock clock;
+    private final BlindIds blindIds;
+
+    private SqliteRatingStore(Connection c, String examId, ExamSource.Rubric rubric, Clock clock, BlindIds blindIds) {
+        this.c = c;
+        this.examId = examId;
+        this.rubric = rubric;
+        this.clock = clock;
+        this.blindIds = blindIds;
+    }
+
+    /** Opens rating of {@code examId} in an existing results store (migrating its schema if older). */
+    public static SqliteRatingStore open(Path file, String examId) throws RatingException {
+        return open(file, examId, Clock.systemUTC(), new BlindIds());
+    }
+
+    static SqliteRatingStore open(Path file, String examId, Clock clock, BlindIds ids) throws RatingException {
+        if (!Files.isRegularFile(file)) {
+            throw new RatingException("no results store at " + file + "; give the store that collect wrote");
+        }
+        Connection c = null;
+        try {
+            SQLiteConfig config = new SQLiteConfig();
+            config.enforceForeignKeys(true);
+            config.setJournalMode(SQLiteConfig.JournalMode.WAL);
+            // FULL, unlike collect's NORMAL: a rater's typing cannot be re-imported from a file, so each
+            // commit is synced before the call returns (SQLite docs, PRAGMA synchronous, "FULL")
+            config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
+            config.setBusyTimeout(10_000);
+            c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
+            Migrations.migrate(c, Migrations.latest());
+            Connection conn = c;
+            List<String> exams = query(conn, "SELECT exam_id FROM exams ORDER BY exam_id", rs -> rs.getString(1));
+            if (!exams.contains(examId)) {
+                throw new RatingException("the store " + file + " holds no exam " + examId + "; it holds " + exams);
+            }
+            ExamSource.Rubric rubric = loadRubric(conn, examId);
+            if (rubric.criteria().isEmpty()) {
+                throw new RatingException("the store holds no rubric for exam " + examId + "; run collect again with"
+                        + " --exam SOURCE-FOLDER so the rubric is registered");
+            }
+            return new SqliteRatingStore(conn, examId, rubric, clock, ids);
+        } catch (SQLException e) {
+            closeQuietly(c);
+            throw new RatingException("cannot open the results store " + file + " for rating: " + e.getMessage(), e);
+        } catch (RatingException e) {
+            closeQuietly(c);
+            throw e;
+        }
+    }
+
+    /** The exams in a store, to choose one when the store holds several. */
+    public static List<String> exams(Path file) throws RatingException {
+        if (!Files.isRegularFile(file)) {
+            throw new RatingException("no results store at " + file + "; give the store that collect wrote");
+        }
+        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath())) {
+            return query(c, "SELECT exam_id FROM exams ORDER BY exam_id", rs -> rs.getString(1));
+        } catch (SQLException e) {
+            throw new RatingException("cannot read the results store " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static void closeQuietly(Connection c) {
+        if (c != null) {
+            try {
+                c.close();
+            } catch (SQLException ignored) {
+                // the open failed already; that error is the one to report
+            }
+        }
+    }
+
+    private static ExamSource.Rubric loadRubric(Connection c, String examId) throws SQLException {
+        Map<String, List<ExamSource.Band>> bands = new HashMap<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT criterion_id, from_score, to_score, descriptor FROM"
+                + " rubric_bands WHERE exam_id=? ORDER BY criterion_id, from_score")) {
+            ps.setString(1, examId);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    bands.computeIfAbsent(rs.getString(1), k -> new ArrayList<>())
+                            .add(new ExamSource.Band(rs.getInt(2), rs.getInt(3), rs.getString(4)));
+                }
+            }
+        }
+        List<ExamSource.Criterion> criteria = new ArrayList<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT criterion_id, name, min_score, max_score FROM rubric_criteria"
+                + " WHERE exam_id=? ORDER BY rowid")) {
+            ps.setString(1, examId);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    criteria.add(new ExamSource.Criterion(rs.getString(1), rs.getString(2), rs.getInt(3), rs.getInt(4),
+                            bands.getOrDefault(rs.getString(1), List.of())));
+                }
+            }
+        }
+        return new ExamSource.Rubric("results store", criteria);
+    }
+
+    public String examId() {
+        return examId;
+    }
+
+    /** The exam's rubric as registered in the store. */
+    public ExamSource.Rubric rubric() {
+        return rubric;
+    }
+
+    // ---------------------------------------------------------------- raters
+
+    /** A rater with the most responses they may take in this exam (null: no limit). */
+    public record RaterEntry(String id, String label, Integer capacity) {
+    }
+
+    private static final String RATER_ID = "[A-Za-z0-9][A-Za-z0-9._-]{0,31}";
+
+    /** Adds a rater, or changes the label and capacity of one already there; returns true when new. */
+    public boolean addRater(String id, String label, Integer capacity) throws RatingException {
+        if (id == null || !id.matches(RATER_ID)) {
+            throw new RatingException("rater id '" + id + "' is not usable; use 1-32 letters, digits, '.', '_' or '-',"
+                    + " starting with a letter or digit (e.g. R07)");
+        }
+        if (capacity != null && capacity < 0) {
+            throw new RatingException("capacity " + capacity + " of rater " + id + " is negative; give 0 or more");
+        }
+        String name = label == null || label.isBlank() ? id : label.strip();
+        return tx("adding rater " + id, () -> {
+            boolean known = !query("SELECT 1 FROM raters WHERE rater_id=?", rs -> 1, id).isEmpty();
+            update("INSERT INTO raters(rater_id, label, capacity) VALUES (?,?,?) ON CONFLICT(rater_id) DO UPDATE SET"
+                    + " label=excluded.label, capacity=excluded.capacity", id, name, capacity);
+            return !known;
+        });
+    }
+
+    /** Every rater with label and capacity. */
+    public List<RaterEntry> raterEntries() throws RatingException {
+        return read("listing raters", () -> query("SELECT rater_id, label, capacity FROM raters ORDER BY rater_id",
+                rs -> new RaterEntry(rs.getString(1), rs.getString(2), intOrNull(rs, 3))));
+    }
+
+    @Override
+    public List<Rater> raters() throws RatingException {
+        return raterEntries().stream().map(r -> new Rater(r.id(), r.label())).toList();
+    }
+
+    // ---------------------------------------------------------------- assignment
+
+    /** What an assignment run did. */
+    public record AssignmentOutcome(long runId, RatingAssigner.Plan plan, RaterLinks.Report wholeDesign) {
+    }
+
+    /** The exam's responses that no rater has been given yet. */
+    public List<RatingAssigner.Response> unassignedResponses() throws RatingException {
+        return read("listing responses", () -> query("SELECT r.sitting_id, r.task_id, s.candidate_number FROM responses r"
+                + " JOIN sittings s ON s.sitting_id = r.sitting_id WHERE s.exam_id=? AND NOT EXISTS (SELECT 1 FROM"
+                + " rating_assignments a WHERE a.sitting_id = r.sitting_id AND a.task_id = r.task_id)"
+                + " ORDER BY r.sitting_id, r.task_id",
+                rs -> new RatingAssigner.Response(rs.getLong(1), rs.getString(2), rs.getString(3)), examId));
+    }
+
+    /**
+     * Assigns every response not yet assigned to {@code k} raters and stores the plan with fresh
+     * blind ids. A design whose raters do not all link through shared responses is refused (nothing
+     * stored) unless {@code allowUnlinked}; with k = 1 it is always unlinked and only warned about.
+     */
+    public AssignmentOutcome assign(int k, long seed, boolean allowUnlinked) throws RatingException {
+        List<RatingAssigner.Response> todo = unassignedResponses();
+        if (todo.isEmpty()) {
+            throw new RatingException("every response of exam " + examId + " already has its raters; nothing to assign");
+        }
+        List<RaterEntry> raters = raterEntries();
+        if (raters.isEmpty()) {
+            throw new RatingException("no raters yet; add them first (rate raters add ID --label NAME)");
+        }
+        List<RatingAssigner.RaterCapacity> capacities = new ArrayList<>();
+        Map<String, Integer> load = workloads();
+        for (RaterEntry r : raters) {
+            Integer left = r.capacity() == null ? null : Math.max(0, r.capacity() - load.getOrDefault(r.id(), 0));
+            capacities.add(new RatingAssigner.RaterCapacity(r.id(), left));
+        }
+        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, k, seed);
+        return tx("storing the rating assignment", () -> {
+            String now = clock.instant().toString();
+            StringBuilder raterList = new StringBuilder();
+            capacities.forEach(r -> raterList.append(raterList.isEmpty() ? "" : " ").append(r.raterId())
+                    .append(r.capacity() == null ? "" : ":" + r.capacity()));
+            long run = insert("INSERT INTO rating_runs(exam_id, seed, raters_per_response, raters, responses, linked,"
+                    + " rater_groups, created_at) VALUES (?,?,?,?,?,?,?,?)", examId, seed, k, raterList.toString(),
+                    todo.size(), plan.links().connected() ? 1 : 0, plan.links().components().toString(), now);
+            Set<String> taken = new HashSet<>(query("SELECT blind_id FROM rating_assignments WHERE blind_id IS NOT NULL",
+                    rs -> rs.getString(1)));
+            Map<String, Integer> offset = new HashMap<>();
+            for (String r : plan.workload().keySet()) {
+                offset.put(r, nextPosition(r) - 1);
+            }
+            for (RatingAssigner.Placement p : plan.placements()) {
+                update("INSERT INTO rating_assignments(sitting_id, task_id, rater_id, seed, created_at, run_id, blind_id,"
+                        + " kind, queue_position) VALUES (?,?,?,?,?,?,?,'rating',?)", p.response().sittingId(),
+                        p.response().taskId(), p.raterId(), seed, now, run, blindIds.next(taken),
+                        offset.get(p.raterId()) + p.queuePosition());
+            }
+            RaterLinks.Report whole = designNow();
+            if (k >= 2 && !whole.connected() && !allowUnlinked) {
+                throw new SQLException(new RatingException("the raters would fall into " + whole.components().size()
+                        + " groups that share no response " + whole.components() + "; a many-facet Rasch analysis"
+                        + " could not put them on one scale. Add responses per rater (fewer raters), raise raters per"
+                        + " response, change capacities, or accept the split with --allow-unlinked. Nothing was stored"));
+            }
+            return new AssignmentOutcome(run, plan, whole);
+        });
+    }
+
+    /** The linking graph of the exam's whole rating design so far (first ratings and adjudications). */
+    public RaterLinks.Report design() throws RatingException {
+        return read("reading the rating design", this::designNow);
+    }
+
+    private RaterLinks.Report designNow() throws SQLException {
+        {
+            Map<String, List<String>> byResponse = new TreeMap<>();
+            each("SELECT a.sitting_id || '/' || a.task_id, a.rater_id FROM rating_assignments a JOIN sittings s"
+                    + " ON s.sitting_id = a.sitting_id WHERE s.exam_id=? ORDER BY a.assignment_id",
+                    rs -> byResponse.computeIfAbsent(rs.getString(1), x -> new ArrayList<>()).add(rs.getString(2)), examId);
+            return RaterLinks.ofRaterSets(byResponse);
+        }
+    }
+
+    private Map<String, Integer> workloads() throws RatingException {
+        return read("counting workloads", () -> {
+            Map<String, Integer> out = new HashMap<>();
+            each("SELECT a.rater_id, COUNT(*) FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                    + " WHERE s.exam_id=? GROUP BY a.rater_id", rs -> out.put(rs.getString(1), rs.getInt(2)), examId);
+            return out;
+        });
+    }
+
+    private int nextPosition(String rater) throws SQLException {
+        return query("SELECT COALESCE(MAX(a.queue_position), 0) + 1 FROM rating_assignments a JOIN sittings s"
+                + " ON s.sitting_id = a.sitting_id WHERE a.rater_id=? AND s.exam_id=?", rs -> rs.getInt(1), rater, examId)
+                .get(0);
+    }
+
+    // ---------------------------------------------------------------- the desk
+
+    /** One assignment as the store knows it (not shown to raters beyond blind id, task and kind). */
+    private record Assignment(long id, long sittingId, String taskId, String raterId, RatingDesk.Kind kind) {
+    }
+
+    private Assignment assignment(String raterId, String blindId) throws RatingException {
+        List<Assignment> found = read("looking up " + blindId, () -> query("SELECT a.assignment_id, a.sitting_id, a.task_id,"
+                + " a.rater_id, a.kind FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE a.blind_id=? AND s.exam_id=?", rs -> new Assignment(rs.getLong(1), rs.getLong(2),
+                rs.getString(3), rs.getString(4), kind(rs.getString(5))), blindId, examId));
+        if (found.isEmpty()) {
+            throw new RatingException("unknown response id " + blindId + "; check it against the rater's queue");
+        }
+        Assignment a = found.get(0);
+        if (raterId != null && !a.raterId().equals(raterId)) {
+            throw new RatingException("response " + blindId + " is not in rater " + raterId + "'s queue");
+        }
+        return a;
+    }
+
+    private static RatingDesk.Kind kind(String stored) {
+        return "adjudication".equals(stored) ? RatingDesk.Kind.ADJUDICATION : RatingDesk.Kind.RATING;
+    }
+
+    private void requireRater(String raterId) throws RatingException {
+        if (read("looking up rater", () -> query("SELECT 1 FROM raters WHERE rater_id=?", rs -> 1, raterId)).isEmpty()) {
+            throw new RatingException("no rater " + raterId + "; the raters are " + raters().stream().map(Rater::id).toList());
+        }
+    }
+
+    /** The rater whose queue holds a blind id, if the id exists in this exam (for the test owner's tools, never raters). */
+    public Optional<String> raterOf(String blindId) throws RatingException {
+        return read("looking up " + blindId, () -> query("SELECT a.rater_id FROM rating_assignments a JOIN sittings s"
+                + " ON s.sitting_id = a.sitting_id WHERE a.blind_id=? AND s.exam_id=?", rs -> rs.getString(1), blindId, examId))
+                .stream().findFirst();
+    }
+
+    /** The rater's latest submitted sheet for a response (drafts left out), if any. */
+    public Optional<RatingSheet> submitted(String raterId, String blindId) throws RatingException {
+        Assignment a = assignment(raterId, blindId);
+        return read("reading the rating of " + blindId, () -> latest(a.id()).map(s -> new RatingSheet(s.scores(), s.comment())));
+    }
+
+    @Override
+    public List<QueueItem> queue(String raterId) throws RatingException {
+        requireRater(raterId);
+        List<QueueItem> raw = read("reading the queue of " + raterId, () -> query("SELECT a.blind_id, a.task_id, a.kind,"
+                + " EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)"
+                + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.queue_position, a.assignment_id",
+                rs -> new QueueItem(0, rs.getString(1), rs.getString(2), kind(rs.getString(3)), rs.getInt(4) == 1),
+                raterId, examId));
+        List<QueueItem> out = new ArrayList<>(raw.size());
+        for (int i = 0; i < raw.size(); i++) {
+            QueueItem q = raw.get(i);
+            out.add(new QueueItem(i + 1, q.blindId(), q.taskId(), q.kind(), q.done()));
+        }
+        return out;
+    }
+
+    @Override
+    public BlindResponse response(String raterId, String blindId) throws RatingException {
+        Assignment a = assignment(raterId, blindId);
+        return read("reading response " + blindId, () -> query("SELECT t.title, r.text FROM responses r JOIN sittings s"
+                + " ON s.sitting_id = r.sitting_id JOIN tasks t ON t.exam_id = s.exam_id AND t.task_id = r.task_id"
+                + " WHERE r.sitting_id=? AND r.task_id=?", rs -> new BlindResponse(blindId, a.taskId(), rs.getString(1),
+                rs.getString(2)), a.sittingId(), a.taskId()).get(0));
+    }
+
+    @Override
+    public ExamSource.Rubric rubric(String blindId) throws RatingException {
+        assignment(null, blindId);
+        return rubric;
+    }
+
+    @Override
+    public Optional<RatingSheet> sheet(String raterId, String blindId) throws RatingException {
+        Assignment a = assignment(raterId, blindId);
+        return read("reading the sheet of " + blindId, () -> {
+            List<RatingSheet> draft = query("SELECT scores_json, comment FROM rating_drafts WHERE assignment_id=?",
+                    rs -> new RatingSheet(parse(rs.getString(1)), rs.getString(2)), a.id());
+            if (!draft.isEmpty()) {
+                return Optional.of(draft.get(0));
+            }
+            return latest(a.id()).map(s -> new RatingSheet(s.scores(), s.comment()));
+        });
+    }
+
+    private record Submission(Map<String, Integer> scores, String comment) {
+    }
+
+    private Optional<Submission> latest(long assignment) throws SQLException {
+        return query("SELECT scores_json, comment FROM rating_submissions WHERE assignment_id=? ORDER BY submission_id DESC"
+                + " LIMIT 1", rs -> new Submission(parse(rs.getString(1)), rs.getString(2)), assignment).stream().findFirst();
+    }
+
+    @Override
+    public void saveDraft(String raterId, String blindId, RatingSheet sheet) throws RatingException {
+        Assignment a = assignment(raterId, blindId);
+        List<String> problems = check(sheet, false);
+        if (!problems.isEmpty()) {
+            throw new RatingException(blindId + ": " + String.join("; ", problems));
+        }
+        tx("saving the draft of " + blindId, () -> update("INSERT INTO rating_drafts(assignment_id, scores_json, comment,"
+                + " saved_at) VALUES (?,?,?,?) ON CONFLICT(assignment_id) DO UPDATE SET scores_json=excluded.scores_json,"
+                + " comment=excluded.comment, saved_at=excluded.saved_at", a.id(), json(sheet.scores()), sheet.comment(),
+                clock.instant().toString()));
+    }
+
+    /** What is wrong with a sheet: unknown criteria, scores out of range, and (if complete) missing criteria. */
+    public List<String> check(RatingSheet sheet, boolean complete) {
+        List<String> problems = new ArrayList<>();
+        Map<String, ExamSource.Criterion> byId = new LinkedHashMap<>();
+        rubric.criteria().forEach(cr -> byId.put(cr.id(), cr));
+        for (Map.Entry<String, Integer> e : new TreeMap<>(sheet.scores()).entrySet()) {
+            ExamSource.Criterion cr = byId.get(e.getKey());
+            if (cr == null) {
+                problems.add("'" + e.getKey() + "' is not a criterion of the rubric " + byId.keySet());
+            } else if (e.getValue() == null || e.getValue() < cr.minScore() || e.getValue() > cr.maxScore()) {
+                problems.add(cr.id() + " score " + e.getValue() + " is outside " + cr.minScore() + "-" + cr.maxScore());
+            }
+        }
+        if (complete) {
+            for (String id : byId.keySet()) {
+                if (!sheet.scores().containsKey(id)) {
+                    problems.add(id + " has no score; score every criterion before submitting");
+                }
+            }
+        }
+        return problems;
+    }
+
+    @Override
+    public void submit(String raterId, String blindId, RatingSheet sheet) throws RatingException {
+        submitAll(raterId, Map.of(blindId, sheet), "desk");
+    }
+
+    /**
+     * Submits several ratings of one rater in one transaction (all or none), e.g. from a rating
+     * sheet; a rating identical to the current one (scores and comment) is left as it is, so a
+     * repeated import adds nothing. Returns how many ratings were new or changed.
+     */
+    public int submitAll(String raterId, Map<String, RatingSheet> sheets, String via) throws RatingException {
+        requireRater(raterId);
+        Map<Assignment, RatingSheet> checked = new LinkedHashMap<>();
+        for (Map.Entry<String, RatingSheet> e : sheets.entrySet()) {
+            Assignment a = assignment(raterId, e.getKey());
+            List<String> problems = check(e.getValue(), true);
+            if (!problems.isEmpty()) {
+                throw new RatingException(e.getKey() + ": " + String.join("; ", problems) + ". Nothing was stored");
+            }
+            checked.put(a, e.getValue());
+        }
+        return tx("storing ratings of " + raterId, () -> {
+            int changed = 0;
+            String now = clock.instant().toString();
+            for (Map.Entry<Assignment, RatingSheet> e : checked.entrySet()) {
+                Assignment a = e.getKey();
+                RatingSheet s = e.getValue();
+                Optional<Submission> current = latest(a.id());
+                if (current.isPresent() && current.get().scores().equals(new TreeMap<>(s.scores()))
+                        && current.get().comment().equals(s.comment())) {
+                    update("DELETE FROM rating_drafts WHERE assignment_id=?", a.id());
+                    continue;
+                }
+                long submission = insert("INSERT INTO rating_submissions(assignment_id, rater_id, scores_json, comment,"
+                        + " submitted_at, via) VALUES (?,?,?,?,?,?)", a.id(), raterId, json(s.scores()), s.comment(), now, via);
+                for (Map.Entry<String, Integer> sc : s.scores().entrySet()) {
+                    update("INSERT INTO ratings(assignment_id, exam_id, criterion_id, score, rated_at, submission_id)"
+                            + " VALUES (?,?,?,?,?,?) ON CONFLICT(assignment_id, criterion_id) DO UPDATE SET"
+                            + " score=excluded.score, rated_at=excluded.rated_at, submission_id=excluded.submission_id",
+                            a.id(), examId, sc.getKey(), sc.getValue(), now, submission);
+                }
+                update("DELETE FROM rating_drafts WHERE assignment_id=?", a.id());
+                evaluate(a.sittingId(), a.taskId(), now);
+                changed++;
+            }
+            return changed;
+        });
+    }
+
+    @Override
+    public Progress progress(String raterId) throws RatingException {
+        requireRater(raterId);
+        int[] p = new int[3];
+        for (ProgressRow r : progressRows()) {
+            if (r.raterId().equals(raterId)) {
+                p[0] += r.total();
+                p[1] += r.rated();
+                p[2] += r.flagged();
+            }
+        }
+        return new Progress(p[0], p[1], p[0] - p[1], p[2]);
+    }
+
+    /** Progress of one rater on one task: assigned, rated, remaining, and how many of them are flagged. */
+    public record ProgressRow(String raterId, String taskId, int total, int rated, int remaining, int flagged) {
+    }
+
+    /** Progress per rater and task (raters with nothing assigned are left out). */
+    public List<ProgressRow> progressRows() throws RatingException {
+        return read("reading progress", () -> query("SELECT a.rater_id, a.task_id, COUNT(*),"
+                + " SUM(EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)),"
+                + " SUM(EXISTS(SELECT 1 FROM rating_flags f WHERE f.sitting_id = a.sitting_id AND f.task_id = a.task_id))"
+                + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=?"
+                + " GROUP BY a.rater_id, a.task_id ORDER BY a.rater_id, a.task_id",
+                rs -> new ProgressRow(rs.getString(1), rs.getString(2), rs.getInt(3), rs.getInt(4), rs.getInt(3) - rs.getInt(4),
+                        rs.getInt(5)), examId));
+    }
+
+    // ---------------------------------------------------------------- discrepancy, adjudication, final scores
+
+    /** Sets the exam's discrepancy rule and applies it to every response whose ratings are complete. */
+    public int setRule(DiscrepancyRule rule) throws RatingException {
+        return tx("setting the discrepancy rule", () -> {
+            String now = clock.instant().toString();
+            insert("INSERT INTO discrepancy_rules(exam_id, max_criterion_band_gap, max_total_gap, adjudicated_score,"
+                    + " set_at) VALUES (?,?,?,?,?)", examId, rule.maxCriterionBandGap(), rule.maxTotalGap(),
+                    rule.adjudicatedScore().label(), now);
+            return reviewAll(now);
+        });
+    }
+
+    /** The rule in force (the latest set), if any. */
+    public Optional<DiscrepancyRule> rule() throws RatingException {
+        return read("reading the discrepancy rule", () -> currentRule().map(RuleRow::rule));
+    }
+
+    private record RuleRow(long id, DiscrepancyRule rule) {
+    }
+
+    private Optional<RuleRow> currentRule() throws SQLException {
+        return query("SELECT rule_id, max_criterion_band_gap, max_total_gap, adjudicated_score FROM discrepancy_rules"
+                + " WHERE exam_id=? ORDER BY rule_id DESC LIMIT 1", rs -> new RuleRow(rs.getLong(1), new DiscrepancyRule(
+                intOrNull(rs, 2), intOrNull(rs, 3), DiscrepancyRule.AdjudicatedScore.of(rs.getString(4)))),
+                examId).stream().findFirst();
+    }
+
+    /** Applies the rule to every response (flags, adjudicators, final scores); returns the number of flags raised now. */
+    public int review() throws RatingException {
+        return tx("reviewing ratings", () -> reviewAll(clock.instant().toString()));
+    }
+
+    private int reviewAll(String now) throws SQLException {
+        int before = count("SELECT COUNT(*) FROM rating_flags f JOIN sittings s ON s.sitting_id = f.sitting_id"
+                + " WHERE s.exam_id=?", examId);
+        List<long[]> keys = new ArrayList<>();
+        List<String> tasks = new ArrayList<>();
+        each("SELECT DISTINCT a.sitting_id, a.task_id FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE s.exam_id=? ORDER BY a.sitting_id, a.task_id", rs -> {
+                    keys.add(new long[] {rs.getLong(1)});
+                    tasks.add(rs.getString(2));
+                }, examId);
+        for (int i = 0; i < keys.size(); i++) {
+            evaluate(keys.get(i)[0], tasks.get(i), now);
+        }
+        return count("SELECT COUNT(*) FROM rating_flags f JOIN sittings s ON s.sitting_id = f.sitting_id"
+                + " WHERE s.exam_id=?", examId) - before;
+    }
+
+    /** Flags the response if its complete first ratings break the rule, finds it an adjudicator, and updates its final score. */
+    private void evaluate(long sittingId, String taskId, String now) throws SQLException {
+        List<FinalScore.Submitted> ratings = new ArrayList<>();
+        int expected = count("SELECT COUNT(*) FROM rating_assignments WHERE sitting_id=? AND task_id=? AND kind='rating'",
+                sittingId, taskId);
+        each("SELECT a.rater_id, a.kind, (SELECT x.scores_json FROM rating_submissions x WHERE x.assignment_id ="
+                + " a.assignment_id ORDER BY x.submission_id DESC LIMIT 1) FROM rating_assignments a"
+                + " WHERE a.sitting_id=? AND a.task_id=? ORDER BY a.assignment_id", rs -> {
+                    if (rs.getString(3) != null) {
+                        ratings.add(new FinalScore.Submitted(rs.getString(1), kind(rs.getString(2)), parse(rs.getString(3))));
+                    }
+                }, sittingId, taskId);
+        List<Map<String, Integer>> first = ratings.stream().filter(r -> r.kind() == Kind.RATING)
+                .map(FinalScore.Submitted::scores).toList();
+        Optional<RuleRow> rule = currentRule();
+        List<Long> flag = query("SELECT flag_id FROM rating_flags WHERE sitting_id=? AND task_id=?", rs -> rs.getLong(1),
+                sittingId, taskId);
+        if (flag.isEmpty() && rule.isPresent() && expected >= 2 && first.size() >= expected) {
+            Optional<String> why = rule.get().rule().disagreement(first, rubric);
+            if (why.isPresent()) {
+                long id = insert("INSERT INTO rating_flags(sitting_id, task_id, rule_id, reason, flagged_at) VALUES (?,?,?,?,?)",
+                        sittingId, taskId, rule.get().id(), why.get(), now);
+                flag = List.of(id);
+                assignAdjudicator(sittingId, taskId, now);
+            }
+        }
+        boolean flagged = !flag.isEmpty();
+        Map<String, Integer> entry = new TreeMap<>();
+        List<String> by = new ArrayList<>();
+        if (flagged) {
+            each("SELECT criterion_id, score, resolved_by FROM resolution_entries WHERE flag_id=?", rs -> {
+                entry.put(rs.getString(1), rs.getInt(2));
+                by.add(rs.getString(3));
+            }, flag.get(0));
+        }
+        DiscrepancyRule.AdjudicatedScore how = rule.map(r -> r.rule().adjudicatedScore())
+                .orElse(DiscrepancyRule.AdjudicatedScore.CLOSEST_PAIR_MEAN);
+        Optional<FinalScore.Result> result = FinalScore.of(ratings, Math.max(1, expected), flagged,
+                entry.isEmpty() ? Optional.empty() : Optional.of(entry), by.isEmpty() ? "" : by.get(0), how);
+        update("DELETE FROM final_scores WHERE sitting_id=? AND task_id=?", sittingId, taskId);
+        if (result.isPresent()) {
+            Long ruleId = flagged ? query("SELECT rule_id FROM rating_flags WHERE flag_id=?", rs -> rs.getLong(1),
+                    flag.get(0)).get(0) : rule.map(RuleRow::id).orElse(null);
+            for (Map.Entry<String, Double> e : result.get().scores().entrySet()) {
+                update("INSERT INTO final_scores(sitting_id, task_id, criterion_id, score, method, rule_id, basis, decided_at)"
+                        + " VALUES (?,?,?,?,?,?,?,?)", sittingId, taskId, e.getKey(), e.getValue(), result.get().method(),
+                        ruleId, String.join(" ", result.get().basis()), now);
+            }
+        }
+    }
+
+    /**
+     * A third rater for a flagged response, by the assignment's balancing: not one of its raters,
+     * capacity left, the smallest workload in this exam; ties broken at random from the run's seed
+     * and the response, so a review repeated on a copy of the store picks the same rater.
+     */
+    private void assignAdjudicator(long sittingId, String taskId, String now) throws SQLException {
+        Set<String> already = new HashSet<>(query("SELECT rater_id FROM rating_assignments WHERE sitting_id=? AND task_id=?",
+                rs -> rs.getString(1), sittingId, taskId));
+        Map<String, Integer> load = new HashMap<>();
+        each("SELECT a.rater_id, COUNT(*) FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE s.exam_id=? GROUP BY a.rater_id", rs -> load.put(rs.getString(1), rs.getInt(2)), examId);
+        long seed = query("SELECT COALESCE(MAX(seed), 0) FROM rating_assignments WHERE sitting_id=? AND task_id=?",
+                rs -> rs.getLong(1), sittingId, taskId).get(0);
+        Random rng = new Random(seed * 31 + sittingId * 1_000_003L + taskId.hashCode());
+        String best = null;
+        long bestKey = Long.MAX_VALUE;
+        for (RaterEntry r : query("SELECT rater_id, label, capacity FROM raters ORDER BY rater_id",
+                rs -> new RaterEntry(rs.getString(1), rs.getString(2), intOrNull(rs, 3)))) {
+            int l = load.getOrDefault(r.id(), 0);
+            if (already.contains(r.id()) || r.capacity() != null && l >= r.capacity()) {
+                continue;
+            }
+            long key = ((long) l << 20) + rng.nextInt(1 << 20);
+            if (key < bestKey) {
+                bestKey = key;
+                best = r.id();
+            }
+        }
+        if (best == null) {
+            return; // stays in the adjudication queue without a rater: flags() says so, and a resolution entry settles it
+        }
+        Set<String> taken = new HashSet<>(query("SELECT blind_id FROM rating_assignments WHERE blind_id IS NOT NULL",
+                rs -> rs.getString(1)));
+        update("INSERT INTO rating_assignments(sitting_id, task_id, rater_id, seed, created_at, run_id, blind_id, kind,"
+                + " queue_position) VALUES (?,?,?,?,?,NULL,?,'adjudication',?)", sittingId, taskId, best, seed, now,
+                blindIds.next(taken), nextPosition(best));
+    }
+
+    /** A flagged response in the adjudication queue (no candidate data: task, raters' blind ids and the reason). */
+    public record Flag(long flagId, String taskId, String reason, String flaggedAt, List<String> raters,
+            String adjudicator, String adjudicatorBlindId, boolean adjudicated, String finalMethod) {
+        /** Where the flag stands, in words. */
+        public String status() {
+            if (finalMethod != null) {
+                return "settled (" + finalMethod + ")";
+            }
+            if (adjudicator == null) {
+                return "no adjudicator available: add a rater with capacity and run review, or enter a resolution";
+            }
+            return adjudicated ? "adjudicated" : "awaiting adjudicator " + adjudicator + " (" + adjudicatorBlindId + ")";
+        }
+    }
+
+    /** The adjudication queue: every flagged response with its state. */
+    public List<Flag> flags() throws RatingException {
+        return read("listing flags", () -> query("SELECT f.flag_id, f.task_id, f.reason, f.flagged_at,"
+                + " (SELECT group_concat(a.rater_id, ' ') FROM rating_assignments a WHERE a.sitting_id = f.sitting_id"
+                + "   AND a.task_id = f.task_id AND a.kind = 'rating'),"
+                + " (SELECT a.rater_id FROM rating_assignments a WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id"
+                + "   AND a.kind = 'adjudication' ORDER BY a.assignment_id DESC LIMIT 1),"
+                + " (SELECT a.blind_id FROM rating_assignments a WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id"
+                + "   AND a.kind = 'adjudication' ORDER BY a.assignment_id DESC LIMIT 1),"
+                + " EXISTS(SELECT 1 FROM rating_assignments a JOIN rating_submissions x ON x.assignment_id = a.assignment_id"
+                + "   WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id AND a.kind = 'adjudication'),"
+                + " (SELECT method FROM final_scores fs WHERE fs.sitting_id = f.sitting_id AND fs.task_id = f.task_id LIMIT 1)"
+                + " FROM rating_flags f JOIN sittings s ON s.sitting_id = f.sitting_id WHERE s.exam_id=? ORDER BY f.flag_id",
+                rs -> new Flag(rs.getLong(1), rs.getString(2), rs.getString(3), rs.getString(4),
+                        List.of(rs.getString(5).split(" ")), rs.getString(6), rs.getString(7), rs.getInt(8) == 1,
+                        rs.getString(9)), examId));
+    }
+
+    /**
+     * Settles a flagged response by a resolution entry (e.g. agreed in discussion): the given scores
+     * become its final score, with who and when; the raters' ratings stay as they were.
+     */
+    public void resolve(long flagId, String resolvedBy, Map<String, Integer> scores, String comment) throws RatingException {
+        if (resolvedBy == null || resolvedBy.isBlank()) {
+            throw new RatingException("say who resolved the response (--by NAME)");
+        }
+        List<String> problems = check(new RatingSheet(scores, comment), true);
+        if (!problems.isEmpty()) {
+            throw new RatingException("flag " + flagId + ": " + String.join("; ", problems) + ". Nothing was stored");
+        }
+        tx("storing the resolution of flag " + flagId, () -> {
+            List<Object[]> f = query("SELECT f.sitting_id, f.task_id FROM rating_flags f JOIN sittings s"
+                    + " ON s.sitting_id = f.sitting_id WHERE f.flag_id=? AND s.exam_id=?",
+                    rs -> new Object[] {rs.getLong(1), rs.getString(2)}, flagId, examId);
+            if (f.isEmpty()) {
+                throw new SQLException(new RatingException("no flag " + flagId + " in exam " + examId
+                        + "; list the flags with rate flags"));
+            }
+            String now = clock.instant().toString();
+            update("DELETE FROM resolution_entries WHERE flag_id=?", flagId);
+            for (Map.Entry<String, Integer> e : scores.entrySet()) {
+                update("INSERT INTO resolution_entries(flag_id, criterion_id, score, resolved_by, comment, resolved_at)"
+                        + " VALUES (?,?,?,?,?,?)", flagId, e.getKey(), e.getValue(), resolvedBy.strip(),
+                        comment == null ? "" : comment, now);
+            }
+            evaluate((Long) f.get(0)[0], (String) f.get(0)[1], now);
+            return null;
+        });
+    }
+
+    // ---------------------------------------------------------------- exports
+
+    /** One current rating in the analysis's tidy long form, with who and when. */
+    public record RatingRow(String candidate, String level, String form, String task, String condition, String rater,
+            String criterion, int score, String kind, String ratedAt) {
+    }
+
+    /** Every current rating of the exam (first ratings and adjudications), ordered by candidate, task, rater, criterion. */
+    public void forEachRating(Consumer<RatingRow> sink) throws RatingException {
+        read("reading ratings", () -> {
+            each("SELECT s.candidate_number, COALESCE(c.level, ''), s.form_id, a.task_id, r.condition_id, a.rater_id,"
+                    + " g.criterion_id, g.score, a.kind, g.rated_at FROM ratings g"
+                    + " JOIN rating_assignments a ON a.assignment_id = g.assignment_id"
+                    + " JOIN sittings s ON s.sitting_id = a.sitting_id"
+                    + " JOIN responses r ON r.sitting_id = a.sitting_id AND r.task_id = a.task_id"
+                    + " LEFT JOIN candidates c ON c.exam_id = s.exam_id AND c.candidate_number = s.candidate_number"
+                    + " WHERE s.exam_id=? ORDER BY s.candidate_number, a.task_id, s.sitting_id, a.rater_id, g.criterion_id",
+                    rs -> sink.accept(new RatingRow(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
+                            rs.getString(5), rs.getString(6), rs.getString(7), rs.getInt(8), rs.getString(9),
+                            rs.getString(10))), examId);
+            return null;
+        });
+    }
+
+    /** One final score of one criterion of one response, and how it was reached. */
+    public record FinalRow(String candidate, String level, String form, String task, String condition, String criterion,
+            double score, String method, String rule, String basis, String decidedAt) {
+    }
+
+    /** Every final score of the exam; responses still pending have none. */
+    public void forEachFinalScore(Consumer<FinalRow> sink) throws RatingException {
+        read("reading final scores", () -> {
+            each("SELECT s.candidate_number, COALESCE(c.level, ''), s.form_id, f.task_id, r.condition_id, f.criterion_id,"
+                    + " f.score, f.method, d.max_criterion_band_gap, d.max_total_gap, d.adjudicated_score, f.basis,"
+                    + " f.decided_at, f.rule_id FROM final_scores f JOIN sittings s ON s.sitting_id = f.sitting_id"
+                    + " JOIN responses r ON r.sitting_id = f.sitting_id AND r.task_id = f.task_id"
+                    + " LEFT JOIN discrepancy_rules d ON d.rule_id = f.rule_id"
+                    + " LEFT JOIN candidates c ON c.exam_id = s.exam_id AND c.candidate_number = s.candidate_number"
+                    + " WHERE s.exam_id=? ORDER BY s.candidate_number, f.task_id, s.sitting_id, f.criterion_id",
+                    rs -> sink.accept(new FinalRow(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
+                            rs.getString(5), rs.getString(6), rs.getDouble(7), rs.getString(8), rs.getObject(14) == null
+                            ? "none" : new DiscrepancyRule(intOrNull(rs, 9), intOrNull(rs, 10),
+                            DiscrepancyRule.AdjudicatedScore.of(rs.getString(11))).describe(), rs.getString(12),
+                            rs.getString(13))), examId);
+            return null;
+        });
+    }
+
+    /** Responses with a rating assignment but no final score yet. */
+    public int pendingResponses() throws RatingException {
+        return read("counting pending responses", () -> count("SELECT COUNT(*) FROM (SELECT DISTINCT a.sitting_id, a.task_id"
+                + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND NOT EXISTS"
+                + " (SELECT 1 FROM final_scores f WHERE f.sitting_id = a.sitting_id AND f.task_id = a.task_id))", examId));
+    }
+
+    /** The submission history of one assignment (every submission, oldest first): for audits and tests. */
+    public record HistoryEntry(String raterId, Map<String, Integer> scores, String comment, String submittedAt, String via) {
+    }
+
+    public List<HistoryEntry> history(String blindId) throws RatingException {
+        Assignment a = assignment(null, blindId);
+        return read("reading history", () -> query("SELECT rater_id, scores_json, comment, submitted_at, via FROM"
+                + " rating_submissions WHERE assignment_id=? ORDER BY submission_id", rs -> new HistoryEntry(rs.getString(1),
+                parse(rs.getString(2)), rs.getString(3), rs.getString(4), rs.getString(5)), a.id()));
+    }
+
+    @Override
+    public void close() throws RatingException {
+        try {
+            c.close();
+        } catch (SQLException e) {
+            throw new RatingException("closing the results store failed: " + e.getMessage(), e);
+        }
+    }
+
+    // ---------------------------------------------------------------- JDBC helpers
+
+    private static Integer intOrNull(ResultSet rs, int column) throws SQLException {
+        int v = rs.getInt(column);
+        return rs.wasNull() ? null : v;
+    }
+
+    private static String json(Map<String, Integer> scores) {
+        try {
+            return JSON.writeValueAsString(new TreeMap<>(scores));
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static Map<String, Integer> parse(String json) throws SQLException {
+        try {
+            return JSON.readValue(json, SCORES);
+        } catch (JsonProcessingException e) {
+            throw new SQLException("stored scores are not JSON; the store may be damaged: " + e.getMessage(), e);
+        }
+    }
+
+    private interface Work<T> {
+        T run() throws SQLException;
+    }
+
+    private interface RowMapper<T> {
+        T map(ResultSet rs) throws SQLException;
+    }
+
+    private interface RowSink {
+        void accept(ResultSet rs) throws SQLException;
+    }
+
+    private <T> T tx(String what, Work<T> work) throws RatingException {
+        try {
+            c.setAutoCommit(false);
+            try {
+                T result = work.run();
+                c.commit();
+                return result;
+            } catch (SQLException | RuntimeException e) {
+                c.rollback();
+                throw e;
+            } finally {
+                c.setAutoCommit(true);
+            }
+        } catch (SQLException e) {
+            if (e.getCause() instanceof RatingException r) {
+                throw r;
+            }
+            throw new RatingException(what + " failed; nothing of it was stored: " + e.getMessage(), e);
+        }
+    }
+
+    private <T> T read(String what, Work<T> work) throws RatingException {
+        try {
+            return work.run();
+        } catch (SQLException e) {
+            throw new RatingException(what + " failed: " + e.getMessage(), e);
+        }
+    }
+
+    private static void bind(PreparedStatement ps, Object... args) throws SQLException {
+        for (int i = 0; i < args.length; i++) {
+            ps.setObject(i + 1, args[i]);
+        }
+    }
+
+    private int update(String sql, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(sql)) {
+            bind(ps, args);
+            return ps.executeUpdate();
+        }
+    }
+
+    private long insert(String sql, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(sql, Statement.RETURN_GENERATED_KEYS)) {
+            bind(ps, args);
+            ps.executeUpdate();
+            try (ResultSet keys = ps.getGeneratedKeys()) {
+                keys.next();
+                return keys.getLong(1);
+            }
+        }
+    }
+
+    private int count(String sql, Object... args) throws SQLException {
+        return query(sql, rs -> rs.getInt(1), args).get(0);
+    }
+
+    private <T> List<T> query(String sql, RowMapper<T> mapper, Object... args) throws SQLException {
+        return query(c, sql, mapper, args);
+    }
+
+    private static <T> List<T> query(Connection c, String sql, RowMapper<T> mapper, Object... args) throws SQLException {
+        List<T> out = new ArrayList<>();
+        try (PreparedStatement ps = c.prepareStatement(sql)) {
+            bind(ps, args);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    out.add(mapper.map(rs));
+                }
+            }
+        }
+        return out;
+    }
+
+    private void each(String sql, RowSink sink, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(sql)) {
+            bind(ps, args);
+            try (ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    sink.accept(rs);
+                }
+            }
+        }
+    }
+}
