@@ -37,4 +37,25 @@ final class DeskKeys {
             }
         });
     }
+
+    /**
+     * Gives {@code node} focus now, or as soon as it is in the scene: a node inside a scroll pane
+     * joins the scene only when the pane's skin is made, on the next layout pulse.
+     */
+    static void focusWhenShown(Node node) {
+        if (node.getScene() != null) {
+            node.requestFocus();
+            return;
+        }
+        node.sceneProperty().addListener(new javafx.beans.value.ChangeListener<>() {
+            @Override
+            public void changed(javafx.beans.value.ObservableValue<? extends javafx.scene.Scene> o, javafx.scene.Scene was,
+                    javafx.scene.Scene now) {
+                if (now != null) {
+                    node.sceneProperty().removeListener(this);
+                    javafx.application.Platform.runLater(node::requestFocus);
+                }
+            }
+        });
+    }
 }

@@ -31,7 +31,10 @@ public final class DeskWindow {
         Runnable choose = () -> {
             boolean signedIn = model.rater().get() != null;
             root.getChildren().setAll(signedIn ? scoring.view() : signIn.view());
-            (signedIn ? scoring.firstFocus() : signIn.firstFocus()).requestFocus();
+            // make the skins now, so nodes inside scroll panes are in the scene before focus moves to them
+            root.applyCss();
+            root.layout();
+            DeskKeys.focusWhenShown(signedIn ? scoring.firstFocus() : signIn.firstFocus());
         };
         model.rater().addListener((o, was, now) -> choose.run());
         choose.run();

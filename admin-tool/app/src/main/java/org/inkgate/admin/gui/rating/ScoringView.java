@@ -160,7 +160,7 @@ final class ScoringView {
 
     static String queueText(QueueItem item) {
         return item.position() + ".  " + item.blindId() + (item.kind() == RatingDesk.Kind.ADJUDICATION ? "  adjudication" : "")
-                + "\n     " + (item.done() ? "rated" : "to rate") + "  \u00b7  task " + item.taskId();
+                + "\n      " + (item.done() ? "rated" : "to rate") + "  \u00b7  " + item.taskId();
     }
 
     private Node queuePane() {
@@ -170,7 +170,8 @@ final class ScoringView {
         VBox box = new VBox(8, heading, queue);
         VBox.setVgrow(queue, Priority.ALWAYS);
         box.getStyleClass().add("queue-pane");
-        box.setPrefWidth(240);
+        box.setPrefWidth(250);
+        box.setMinWidth(250);
         return box;
     }
 
@@ -181,8 +182,16 @@ final class ScoringView {
         heading.textProperty().bind(Bindings.createStringBinding(() -> {
             QueueItem item = model.current().get();
             RatingDesk.BlindResponse r = model.response().get();
-            return item == null || r == null ? "" : "Response " + r.blindId() + "   \u00b7   " + r.taskTitle()
-                    + "   \u00b7   item " + item.position() + " of " + model.queue().size();
+            return item == null || r == null ? "" : "Response " + r.blindId();
+        }, model.current(), model.response()));
+        Label sub = new Label();
+        sub.setId("itemTask");
+        sub.getStyleClass().add("item-task");
+        sub.textProperty().bind(Bindings.createStringBinding(() -> {
+            QueueItem item = model.current().get();
+            RatingDesk.BlindResponse r = model.response().get();
+            return item == null || r == null ? "" : "Task: " + r.taskTitle() + "   \u00b7   item " + item.position() + " of "
+                    + model.queue().size();
         }, model.current(), model.response(), model.queue()));
         Label kind = new Label(ADJUDICATION_NOTE);
         kind.setId("itemKind");
@@ -208,7 +217,7 @@ final class ScoringView {
         length.textProperty().bind(Bindings.createStringBinding(() -> model.response().get() == null ? ""
                 : "Length: " + words(model.response().get().text()) + " words (counted between spaces, the same way"
                         + " for every response)", model.response()));
-        VBox item = new VBox(12, heading, kind, responseText, length);
+        VBox item = new VBox(10, new VBox(2, heading, sub), kind, responseText, length);
         item.getStyleClass().add("response-pane");
         item.visibleProperty().bind(model.current().isNotNull());
 
@@ -288,14 +297,20 @@ final class ScoringView {
         status.getStyleClass().add("desk-status");
         status.textProperty().bind(model.status());
 
-        VBox box = new VBox(14, heading, how, criteria, commentLabel, comment, doneNote, problem, saveNext, keys, status);
+        VBox box = new VBox(14, heading, how, criteria, commentLabel, comment, doneNote);
         box.getStyleClass().add("rubric-pane");
-        box.visibleProperty().bind(model.current().isNotNull());
         ScrollPane scroll = new ScrollPane(box);
         scroll.setFitToWidth(true);
-        scroll.setPrefWidth(440);
         scroll.getStyleClass().add("rubric-scroll");
-        return scroll;
+        // the button stays in sight however long the rubric is
+        VBox footer = new VBox(8, problem, saveNext, keys, status);
+        footer.getStyleClass().add("rubric-footer");
+        BorderPane column = new BorderPane(scroll);
+        column.setBottom(footer);
+        column.setPrefWidth(450);
+        column.setMinWidth(400);
+        column.visibleProperty().bind(model.current().isNotNull());
+        return column;
     }
 
     private void submit() {
@@ -324,14 +339,7 @@ final class ScoringView {
         } else {
             queue.getSelectionModel().clearSelection();
         }
-        Node target = model.finished().get() ? queue : firstFocus();
-        target.requestFocus();
-        // again after the pulse that lays the new fields out, in case they could not take focus yet
-        javafx.application.Platform.runLater(() -> {
-            if (target.getScene() != null && !target.isFocused() && target == (model.finished().get() ? queue : firstFocus())) {
-                target.requestFocus();
-            }
-        });
+        DeskKeys.focusWhenShown(model.finished().get() ? queue : firstFocus());
     }
 
     private Node criterionCard(DeskModel.CriterionScore score, int index) {
