@@ -15,6 +15,7 @@ import java.util.concurrent.Callable;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.SqliteResultsStore;
 import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.study.StoreRatings;
 import org.inkgate.admin.study.StoreStudyInput;
 import org.inkgate.analysis.data.Candidate;
 import org.inkgate.analysis.data.CandidatesReader;
@@ -68,8 +69,9 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Spec
     private CommandSpec spec;
 
-    @Option(names = "--ratings", required = true, paramLabel = "FILE.csv",
-            description = "Ratings, one per row: candidate,level,form,task,condition,rater,criterion,score")
+    @Option(names = "--ratings", paramLabel = "FILE.csv",
+            description = "Ratings, one per row: candidate,level,form,task,condition,rater,criterion,score;"
+                    + " may be left out with --store when the store holds ratings (from rate)")
     private Path ratings;
 
     @Option(names = "--candidates", paramLabel = "FILE.csv",
@@ -86,7 +88,8 @@ public final class AnalyseCommand implements Callable<Integer> {
 
     @Option(names = "--store", paramLabel = "FILE.db",
             description = "Optional results store (from collect): candidates' levels, tool use and process events of"
-                    + " --exam are read from it; not together with --tool-usage or --process")
+                    + " --exam are read from it, and its ratings when --ratings is left out; not together with"
+                    + " --tool-usage or --process")
     private Path store;
 
     @Option(names = "--exam", paramLabel = "ID",
@@ -148,10 +151,20 @@ public final class AnalyseCommand implements Callable<Integer> {
             err.println("inkgate-admin analyse: " + e.getMessage());
             return INPUT_REFUSED;
         }
+        if (ratings == null && store == null) {
+            throw new ParameterException(spec.commandLine(), "give --ratings FILE.csv, or --store DB holding ratings");
+        }
         try {
             List<Rating> r;
-            try (Reader in = open(ratings)) {
-                r = RatingsReader.read(ratings.getFileName().toString(), in);
+            if (ratings != null) {
+                try (Reader in = open(ratings)) {
+                    r = RatingsReader.read(ratings.getFileName().toString(), in);
+                }
+            } else {
+                r = readStoreRatings(err);
+                if (r == null) {
+                    return INPUT_REFUSED;
+                }
             }
             CandidatesReader.Result c = null;
             if (candidates != null) {
@@ -229,6 +242,53 @@ public final class AnalyseCommand implements Callable<Integer> {
                 + " ratings; tables in " + out.resolve("tables") + ", figures in " + out.resolve("summary.json") + ")");
         outWriter.flush();
         return 0;
+    }
+
+    /** The store's ratings of the chosen exam through the analysis's own reader, or null after saying why not. */
+    private List<Rating> readStoreRatings(PrintWriter err) throws IOException, InputRejected {
+        if (!Files.isRegularFile(store)) {
+            err.println("inkgate-admin analyse: no results store at " + store + "; give the file collect wrote");
+            return null;
+        }
+        String chosen = chooseExam(err);
+        if (chosen == null) {
+            return null;
+        }
+        try {
+            List<Rating> r = StoreRatings.read(store, chosen);
+            if (r.isEmpty()) {
+                err.println("inkgate-admin analyse: the store holds no ratings of exam " + chosen + " yet; rate the"
+                        + " responses first (inkgate-admin rate) or give --ratings FILE.csv");
+                return null;
+            }
+            return r;
+        } catch (org.inkgate.admin.core.rating.RatingException e) {
+            err.println("inkgate-admin analyse: could not read ratings from " + store + ": " + e.getMessage());
+            return null;
+        }
+    }
+
+    /** The exam named by --exam, or the store's only exam; null after saying why neither works. */
+    private String chooseExam(PrintWriter err) {
+        try (ResultsStore s = SqliteResultsStore.open(store)) {
+            List<String> exams = s.examIds();
+            if (exam == null) {
+                if (exams.size() != 1) {
+                    err.println("inkgate-admin analyse: the store holds " + exams.size() + " exams " + exams
+                            + "; name one with --exam");
+                    return null;
+                }
+                return exams.get(0);
+            }
+            if (!exams.contains(exam)) {
+                err.println("inkgate-admin analyse: the store holds no exam " + exam + "; it holds " + exams);
+                return null;
+            }
+            return exam;
+        } catch (StoreException e) {
+            err.println("inkgate-admin analyse: could not read the results store " + store + ": " + e.getMessage());
+            return null;
+        }
     }
 
     /** The store's tables of the chosen exam, or null after saying on err why they cannot be read. */

@@ -23,6 +23,7 @@ import picocli.CommandLine.Command;
             CollectCommand.class,
             MissingCommand.class,
             ExportCommand.class,
+            RateCommand.class,
             AnalyseCommand.class,
             GuiCommand.class,
             org.inkgate.packs.cli.PackCommand.class,

@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.TimeUnit;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -112,6 +113,112 @@ class CommandLineTest {
         String summary = Files.readString(report.resolve("summary.json"));
         assertTrue(summary.contains("\"usage."), "tool use read from the store: " + summary.substring(0, 400));
         assertTrue(summary.contains("\"process."), "process events read from the store");
+
+        rateThroughToAnalysis(store);
+    }
+
+    /**
+     * Rating with the real commands: three invented raters, a seeded assignment, sheets filled with
+     * invented scores (R01 harsh, R02 middling, R03 lenient, so R01-R03 pairs disagree), a rule, the
+     * adjudicator's sheet, exports read back by the analysis's reader, and analyse --store with no
+     * --ratings file.
+     */
+    private void rateThroughToAnalysis(String store) throws Exception {
+        for (String r : List.of("R01", "R02", "R03")) {
+            Run add = admin("rate", "raters", "add", r, "--label", "Invented rater " + r, "--store", store);
+            assertEquals(0, add.code(), add.out());
+        }
+        Run assign = admin("rate", "assign", "--store", store, "--seed", "20261202");
+        assertEquals(0, assign.code(), assign.out());
+        assertTrue(assign.out().contains("Assigned 22 responses to 2 rater(s) each, seed 20261202"), assign.out());
+        assertTrue(assign.out().contains("Rater links: connected"), assign.out());
+
+        Run early = admin("analyse", "--store", store, "--out", dir.resolve("early").toString());
+        assertEquals(AnalyseCommand.INPUT_REFUSED, early.code(), early.out());
+        assertTrue(early.out().contains("holds no ratings"), early.out());
+
+        Map<String, Integer> harshness = Map.of("R01", 3, "R02", 5, "R03", 8);
+        for (String r : harshness.keySet()) {
+            Path sheet = dir.resolve("sheets/" + r + ".csv");
+            Run exported = admin("rate", "sheet", "export", "--rater", r, "--out", sheet.toString(), "--store", store);
+            assertEquals(0, exported.code(), exported.out());
+            Files.writeString(sheet, fill(Files.readString(sheet), harshness.get(r)));
+        }
+        // a bad cell is refused with its row and column, and nothing of the sheet is stored
+        Path bad = dir.resolve("sheets/bad.csv");
+        List<String> lines = new ArrayList<>(Files.readAllLines(dir.resolve("sheets/R01.csv")));
+        lines.set(2, lines.get(2).replaceFirst(",3,3,", ",3,12,"));
+        Files.write(bad, lines);
+        Run refused = admin("rate", "sheet", "import", "--rater", "R01", bad.toString(), "--store", store);
+        assertEquals(InkgateAdmin.PROBLEMS, refused.code(), refused.out());
+        assertTrue(refused.out().contains("bad.csv row 3, column language-control: score 12 is out of range"), refused.out());
+
+        for (String r : harshness.keySet()) {
+            Run imported = admin("rate", "sheet", "import", "--rater", r, dir.resolve("sheets/" + r + ".csv").toString(),
+                    "--store", store);
+            assertEquals(0, imported.code(), imported.out());
+        }
+        Run again = admin("rate", "sheet", "import", "--rater", "R01", dir.resolve("sheets/R01.csv").toString(),
+                "--store", store);
+        assertTrue(again.out().contains(": 0 ratings stored"), "re-import is idempotent: " + again.out());
+
+        // 3 (band 1-3) against 8 (band 7-9) is two bands apart: flagged; the adjudicator can only be R02
+        Run rule = admin("rate", "rule", "--criterion-gap", "1", "--store", store);
+        assertEquals(0, rule.code(), rule.out());
+        Run flags = admin("rate", "flags", "--store", store);
+        assertEquals(InkgateAdmin.ATTENTION, flags.code(), flags.out());
+        assertTrue(flags.out().contains("awaiting adjudicator R02"), flags.out());
+        Path adjudication = dir.resolve("sheets/R02-adjudication.csv");
+        assertEquals(0, admin("rate", "sheet", "export", "--rater", "R02", "--out", adjudication.toString(), "--store",
+                store).code());
+        Files.writeString(adjudication, fill(Files.readString(adjudication), 5));
+        assertEquals(0, admin("rate", "sheet", "import", "--rater", "R02", adjudication.toString(), "--store", store).code());
+        Run settled = admin("rate", "flags", "--store", store);
+        assertEquals(0, settled.code(), settled.out());
+        assertTrue(settled.out().contains("settled (closest-pair-mean)"), settled.out());
+        Run progress = admin("rate", "progress", "--store", store);
+        assertEquals(0, progress.code(), progress.out());
+        assertTrue(progress.out().contains("Every assigned response has a final score."), progress.out());
+
+        Path ratings = dir.resolve("rating-export");
+        Run export = admin("rate", "export", "--out", ratings.toString(), "--store", store);
+        assertEquals(0, export.code(), export.out());
+        // round trip: the analysis's own reader takes the export; scores are the ones typed into the sheets
+        List<org.inkgate.analysis.data.Rating> read;
+        try (var in = Files.newBufferedReader(ratings.resolve("ratings.csv"))) {
+            read = org.inkgate.analysis.data.RatingsReader.read("ratings.csv", in);
+        }
+        long flaggedPairs = read.stream().filter(x -> x.rater().equals("R02")).count();
+        assertTrue(read.size() >= 88, "22 responses x 2 raters x 2 criteria, plus adjudications: " + read.size());
+        for (var x : read) {
+            assertEquals(harshness.get(x.rater()).doubleValue(), x.score(), "rater " + x.rater());
+        }
+        assertTrue(flaggedPairs > 0);
+        String finals = Files.readString(ratings.resolve("final-scores.csv"));
+        assertTrue(finals.startsWith("candidate,level,form,task,condition,criterion,score,method,rule,raters,decided_at"));
+        // R01 (3+3 = 6) and R03 (8+8 = 16) flagged, R02 adjudicates 5+5 = 10: closest pair R01-R02, mean (3+5)/2 = 4
+        assertTrue(finals.contains(",4,closest-pair-mean,"), finals);
+
+        Path report = dir.resolve("report-from-store");
+        Run analyse = admin("analyse", "--store", store, "--out", report.toString());
+        assertEquals(0, analyse.code(), analyse.out());
+        assertTrue(analyse.out().contains("(" + read.size() + " ratings;"), analyse.out());
+    }
+
+    /** Fills every criterion of every row of a sheet with one invented score, keeping rows already scored. */
+    private static String fill(String sheet, int score) {
+        StringBuilder out = new StringBuilder();
+        String[] lines = sheet.split("\r\n");
+        out.append(lines[0]).append("\r\n");
+        for (String line : java.util.Arrays.asList(lines).subList(1, lines.length)) {
+            String[] f = line.split(",", -1);
+            if (f[2].isEmpty()) {
+                f[2] = String.valueOf(score);
+                f[3] = String.valueOf(score);
+            }
+            out.append(String.join(",", f)).append("\r\n");
+        }
+        return out.toString();
     }
 
     /** Two raters, two criteria, invented scores for every response in the export (not check values). */

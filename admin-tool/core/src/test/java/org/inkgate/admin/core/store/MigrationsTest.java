@@ -79,6 +79,51 @@ class MigrationsTest {
     }
 
     @Test
+    void migration3_storeAtVersion2WithAnOldRating_keepsItAndAddsRatingTables() throws Exception {
+        Path file = dir.resolve("r.db");
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 2)) {
+            try (Statement s = store.connection().createStatement()) {
+                s.execute("INSERT INTO exams VALUES ('e1', 'Invented', 'en', 0)");
+                s.execute("INSERT INTO bundles VALUES ('b', 'e1', 'fp', 't')");
+                s.execute("INSERT INTO policy_snapshots(policy_id, policy_json, spelling, insert_from_panel, show_word_count,"
+                        + " paste) VALUES (1, '{}', 'off', 0, 0, 'allow')");
+                s.execute("INSERT INTO forms VALUES ('e1', 'F')");
+                s.execute("INSERT INTO sittings(sitting_id, package_sha256, package_id, content_sha256, exam_id,"
+                        + " bundle_manifest_sha256, candidate_number, form_id, installation_fingerprint, source_file,"
+                        + " imported_at) VALUES (1, 'p', 'P', 'c', 'e1', 'b', 'C1', 'F', 'i', 'f', 't')");
+                s.execute("INSERT INTO responses(sitting_id, task_id, position, condition_id, policy_id, tools_offered, text,"
+                        + " word_count, extra_time_seconds, end_reason) VALUES (1, 't1', 0, 'w', 1, '', 'x', 1, 0, 'done')");
+                s.execute("INSERT INTO raters VALUES ('R1', 'Invented')");
+                s.execute("INSERT INTO rating_assignments(assignment_id, sitting_id, task_id, rater_id, seed, created_at)"
+                        + " VALUES (1, 1, 't1', 'R1', 7, 't')");
+            }
+        }
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 3)) {
+            Connection c = store.connection();
+            assertEquals(3, Migrations.version(c));
+            assertTrue(objects(c, "table").containsAll(Set.of("rating_runs", "rating_drafts", "rating_submissions",
+                    "discrepancy_rules", "rating_flags", "resolution_entries", "final_scores")));
+            try (Statement s = c.createStatement();
+                    ResultSet rs = s.executeQuery("SELECT kind, blind_id, capacity FROM rating_assignments JOIN raters"
+                            + " USING (rater_id)")) {
+                assertTrue(rs.next());
+                assertEquals("rating", rs.getString(1), "an earlier assignment is a first rating");
+                assertEquals(null, rs.getString(2));
+                assertEquals(null, rs.getObject(3), "no capacity: no limit");
+                SQLException both = assertThrows(SQLException.class, () -> s.execute("INSERT INTO discrepancy_rules(exam_id,"
+                        + " adjudicated_score, set_at) VALUES ('e1', 'adjudicator', 't')"));
+                assertTrue(both.getMessage().contains("CHECK"), both.getMessage());
+                s.execute("INSERT INTO raters VALUES ('R2', 'Invented', NULL), ('R3', 'Invented', 5)");
+                s.execute("INSERT INTO rating_assignments(sitting_id, task_id, rater_id, seed, created_at, blind_id)"
+                        + " VALUES (1, 't1', 'R2', 7, 't', 'AAAA-AAAA')");
+                SQLException twice = assertThrows(SQLException.class, () -> s.execute("INSERT INTO rating_assignments("
+                        + "sitting_id, task_id, rater_id, seed, created_at, blind_id) VALUES (1, 't1', 'R3', 7, 't', 'AAAA-AAAA')"));
+                assertTrue(twice.getMessage().contains("UNIQUE"), "blind ids are unique: " + twice.getMessage());
+            }
+        }
+    }
+
+    @Test
     void open_storeFromANewerProgram_isRefusedAndLeftAlone() throws Exception {
         Path file = dir.resolve("r.db");
         try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
@@ -97,7 +142,7 @@ class MigrationsTest {
     void open_latest_isTheLastMigration() throws Exception {
         try (SqliteResultsStore store = SqliteResultsStore.open(dir.resolve("r.db"))) {
             assertEquals(Migrations.latest(), Migrations.version(store.connection()));
-            assertEquals(2, Migrations.latest());
+            assertEquals(3, Migrations.latest());
         }
     }
 }
