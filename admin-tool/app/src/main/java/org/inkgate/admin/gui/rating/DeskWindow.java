@@ -24,6 +24,14 @@ public final class DeskWindow {
 
     /** Fills {@code stage} with the desk over {@code model}, shows it with focus on the rater list; returns the scene. */
     public static Scene show(Stage stage, DeskModel model) {
+        return show(stage, model, () -> { });
+    }
+
+    /**
+     * As {@link #show(Stage, DeskModel)}; when the window closes, the last drafts are written and
+     * then {@code afterClose} runs (the caller closes the store there).
+     */
+    public static Scene show(Stage stage, DeskModel model, Runnable afterClose) {
         SignInView signIn = new SignInView(model);
         ScoringView scoring = new ScoringView(model);
         StackPane root = new StackPane();
@@ -52,7 +60,10 @@ public final class DeskWindow {
         stage.setMinWidth(1024);
         stage.setMinHeight(640);
         stage.setScene(scene);
-        stage.setOnHidden(e -> model.close());
+        stage.setOnHidden(e -> {
+            model.close();
+            afterClose.run();
+        });
         stage.show();
         // since JavaFX 20 a newly shown stage may not get focus by itself
         stage.requestFocus();

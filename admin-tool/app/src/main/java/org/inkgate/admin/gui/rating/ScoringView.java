@@ -47,6 +47,7 @@ final class ScoringView {
     private final TextArea comment = new TextArea();
     private final Button saveNext = new Button("Save and next");
     private final List<TextField> scoreFields = new ArrayList<>();
+    private final ScrollPane rubricScroll = new ScrollPane();
 
     ScoringView(DeskModel model) {
         this.model = model;
@@ -215,8 +216,8 @@ final class ScoringView {
         length.setId("wordCount");
         length.getStyleClass().add("desk-note");
         length.textProperty().bind(Bindings.createStringBinding(() -> model.response().get() == null ? ""
-                : "Length: " + words(model.response().get().text()) + " words (counted between spaces, the same way"
-                        + " for every response)", model.response()));
+                : "Length: " + words(model.response().get().text()) + " words (counted the same way for every"
+                        + " response)", model.response()));
         VBox item = new VBox(10, new VBox(2, heading, sub), kind, responseText, length);
         item.getStyleClass().add("response-pane");
         item.visibleProperty().bind(model.current().isNotNull());
@@ -299,8 +300,10 @@ final class ScoringView {
 
         VBox box = new VBox(14, heading, how, criteria, commentLabel, comment, doneNote);
         box.getStyleClass().add("rubric-pane");
-        ScrollPane scroll = new ScrollPane(box);
+        rubricScroll.setContent(box);
+        ScrollPane scroll = rubricScroll;
         scroll.setFitToWidth(true);
+        keepInView(comment);
         scroll.getStyleClass().add("rubric-scroll");
         // the button stays in sight however long the rubric is
         VBox footer = new VBox(8, problem, saveNext, keys, status);
@@ -365,6 +368,7 @@ final class ScoringView {
         field.textProperty().bindBidirectional(score.text());
         field.addEventFilter(KeyEvent.KEY_PRESSED, e -> onScoreKey(e, score, index));
         scoreFields.add(field);
+        keepInView(field);
 
         Label name = new Label(c.name());
         name.getStyleClass().add("criterion-name");
@@ -390,6 +394,30 @@ final class ScoringView {
         VBox card = new VBox(8, top, entry, message, bands);
         card.getStyleClass().add("criterion-card");
         return card;
+    }
+
+    /** Scrolls the rubric so a control that gains focus is in sight (a scroll pane does not do it by itself). */
+    private void keepInView(Node node) {
+        node.focusedProperty().addListener((o, was, focused) -> {
+            Node content = rubricScroll.getContent();
+            if (!focused || content == null) {
+                return;
+            }
+            javafx.geometry.Bounds b = content.sceneToLocal(node.localToScene(node.getBoundsInLocal()));
+            double contentHeight = content.getBoundsInLocal().getHeight();
+            double viewHeight = rubricScroll.getViewportBounds().getHeight();
+            double room = contentHeight - viewHeight;
+            if (room <= 0) {
+                return;
+            }
+            double top = rubricScroll.getVvalue() * room;
+            // a little margin so the label above a field shows too
+            if (b.getMinY() - 40 < top) {
+                rubricScroll.setVvalue(Math.max(0, (b.getMinY() - 40) / room));
+            } else if (b.getMaxY() + 16 > top + viewHeight) {
+                rubricScroll.setVvalue(Math.min(1, (b.getMaxY() + 16 - viewHeight) / room));
+            }
+        });
     }
 
     private static Node bandRow(DeskModel.CriterionScore score, ExamSource.Band band) {

@@ -30,11 +30,11 @@ import org.inkgate.format.trust.TrustPolicy;
  * also returns what raters must never see: each candidate's number, level and form, and the
  * exam's condition ids and labels.
  */
-record RatedStore(Path file, ExamSource exam, List<String> hiddenFacts) {
+public record RatedStore(Path file, ExamSource exam, List<String> hiddenFacts) {
 
     static final long SEED = 20261202L;
 
-    static RatedStore make(Path dir, List<String> raterIds) throws Exception {
+    public static RatedStore make(Path dir, List<String> raterIds) throws Exception {
         ExamSource exam = ExamSourceReader.read(DemoSource.copyExam(dir.resolve("exam-source")));
         Path rosterFile = DemoSource.DEMO.resolve("roster.csv");
         List<RosterCandidate> roster = RosterReader.read(rosterFile);
@@ -73,7 +73,7 @@ record RatedStore(Path file, ExamSource exam, List<String> hiddenFacts) {
         return new RatedStore(store, exam, List.copyOf(hidden.stream().distinct().toList()));
     }
 
-    SqliteRatingStore open() throws Exception {
+    public SqliteRatingStore open() throws Exception {
         return SqliteRatingStore.open(file, exam.examId());
     }
 }
