@@ -313,6 +313,8 @@ final class ScoringView {
         column.setPrefWidth(450);
         column.setMinWidth(400);
         column.visibleProperty().bind(model.current().isNotNull());
+        // when the queue is finished the column gives its room to the message in the middle
+        column.managedProperty().bind(column.visibleProperty());
         return column;
     }
 

@@ -248,6 +248,54 @@ class DeskWindowTest {
         assertTrue(scan.textsSeen() > 20, "the scan read the screens' text: " + scan.textsSeen());
     }
 
+    @Test
+    void desk_tabAndShiftTab_reachEveryControlInOrderAndNeverStickInATextBox(FxRobot robot) throws Exception {
+        show(robot, fixture());
+        robot.type(KeyCode.ENTER);
+        settle(robot);
+        List<String> forward = new java.util.ArrayList<>();
+        for (int i = 0; i < 3; i++) {
+            robot.type(KeyCode.TAB);
+            settle(robot);
+            forward.add(focusId());
+        }
+        // from the first score: the second score, the comment (Tab leaves it instead of typing a tab), the button
+        assertEquals(List.of("score-language-control", "comment", "saveNext"), forward);
+        robot.interact(() -> robot.lookup("#comment").query().requestFocus());
+        robot.press(KeyCode.SHIFT).type(KeyCode.TAB).release(KeyCode.SHIFT);
+        settle(robot);
+        assertEquals("score-language-control", focusId(), "Shift+Tab leaves the comment backwards");
+        robot.interact(() -> robot.lookup("#responseText").query().requestFocus());
+        robot.type(KeyCode.TAB);
+        settle(robot);
+        assertEquals("score-task-fulfilment", focusId(), "Tab leaves the read-only response for the first score");
+        assertEquals("", model.comment().get(), "no tab character was typed anywhere");
+    }
+
+    @Test
+    void desk_everyInputAndList_hasAnAccessibleName(FxRobot robot) throws Exception {
+        Scene scene = show(robot, fixture());
+        robot.type(KeyCode.ENTER);
+        settle(robot);
+        int inputs = 0;
+        for (Node n : robot.from(scene.getRoot()).lookup((java.util.function.Predicate<Node>) n ->
+                n instanceof javafx.scene.control.TextInputControl || n instanceof javafx.scene.control.ListView
+                        || n instanceof javafx.scene.control.ProgressBar).queryAll()) {
+            assertTrue(n.getAccessibleText() != null && !n.getAccessibleText().isBlank(), n + " has no accessible name");
+            inputs++;
+        }
+        assertTrue(inputs >= 5, "queue, response, two scores, comment, progress: " + inputs);
+    }
+
+    private String focusId() throws Exception {
+        AtomicReference<String> id = new AtomicReference<>();
+        org.testfx.util.WaitForAsyncUtils.asyncFx(() -> {
+            Node owner = stage.getScene().getFocusOwner();
+            id.set(owner == null ? null : owner.getId());
+        }).get();
+        return id.get();
+    }
+
     // ---- helpers
 
     private Scene show(FxRobot robot, InMemoryRatingDesk desk) throws Exception {
