@@ -18,7 +18,8 @@ import java.util.Set;
  * here: they must not be reproducible from the seed (see {@link BlindIds}).
  *
  * <p>Balance: targets come from water-filling (every rater gets the same share, capped by its
- * capacity; the rest spread one each at random), so uncapped workloads differ by at most one.
+ * capacity; the rest spread one each at random), so uncapped workloads differ by at most one;
+ * for a later run, the level is set on totals including earlier work.
  * The choice per response keeps the remaining quotas feasible: with M responses left, each needing
  * k distinct raters, quotas q can be met exactly when sum q = M k and every q_r is at most M (the
  * Gale-Ryser theorem for a 0-1 matrix with equal row sums; Ryser 1957), so a rater whose quota
@@ -62,6 +63,16 @@ public final class RatingAssigner {
     /** Makes the plan, or refuses (saying why and what to change) when the raters cannot cover the responses. */
     public static Plan assign(List<Response> responses, List<RaterCapacity> raters, int k, long seed)
             throws RatingException {
+        return assign(responses, raters, Map.of(), k, seed);
+    }
+
+    /**
+     * As {@link #assign(List, List, int, long)} for responses that arrive after an earlier run:
+     * {@code earlier} holds each rater's workload so far, and the water level is set on the totals,
+     * so raters with less work so far take more of the new responses. Capacities are what is left.
+     */
+    public static Plan assign(List<Response> responses, List<RaterCapacity> raters, Map<String, Integer> earlier, int k,
+            long seed) throws RatingException {
         if (k < 1 || k > 3) {
             throw new RatingException("raters per response is " + k + "; give 1, 2 or 3");
         }
@@ -96,7 +107,7 @@ public final class RatingAssigner {
                 .thenComparingLong(Response::sittingId));
         java.util.Collections.shuffle(order, rng);
 
-        Map<String, Integer> quota = targets(usable, n, k, rng);
+        Map<String, Integer> quota = targets(usable, earlier, n, k, rng);
         List<String> names = usable.stream().map(RaterCapacity::raterId).toList();
         int[] left = new int[names.size()];
         for (int i = 0; i < left.length; i++) {
@@ -140,22 +151,26 @@ public final class RatingAssigner {
         return new Plan(seed, k, placements, workload, links, warnings);
     }
 
-    /** Water-filling: the smallest common level L that covers n k ratings, capped by each capacity. */
-    static Map<String, Integer> targets(List<RaterCapacity> raters, int n, int k, Random rng) {
+    /**
+     * Water-filling on totals: the smallest level L at which the raters' room up to L (earlier work
+     * counted, capped by capacity and by one rating per response) covers n k ratings; every rater
+     * is filled to L - 1 and the rest are spread one each, at random, over raters with room at L.
+     */
+    static Map<String, Integer> targets(List<RaterCapacity> raters, Map<String, Integer> earlier, int n, int k,
+            Random rng) {
         long need = (long) n * k;
         int level = 0;
-        while (sumAt(raters, level, n) < need) {
+        while (sumAt(raters, earlier, level, n) < need) {
             level++;
         }
         Map<String, Integer> out = new HashMap<>();
         List<String> atLevel = new ArrayList<>();
         long given = 0;
         for (RaterCapacity r : raters) {
-            int cap = cap(r, n);
-            int base = Math.min(cap, level - 1);
-            out.put(r.raterId(), Math.max(base, 0));
-            given += Math.max(base, 0);
-            if (cap >= level) {
+            int below = roomAt(r, earlier, level - 1, n);
+            out.put(r.raterId(), below);
+            given += below;
+            if (roomAt(r, earlier, level, n) > below) {
                 atLevel.add(r.raterId());
             }
         }
@@ -166,10 +181,16 @@ public final class RatingAssigner {
         return out;
     }
 
-    private static long sumAt(List<RaterCapacity> raters, int level, int n) {
+    /** New ratings a rater can take before its total reaches {@code level}. */
+    private static int roomAt(RaterCapacity r, Map<String, Integer> earlier, int level, int n) {
+        int before = earlier.getOrDefault(r.raterId(), 0);
+        return Math.max(0, Math.min(cap(r, n), level - before));
+    }
+
+    private static long sumAt(List<RaterCapacity> raters, Map<String, Integer> earlier, int level, int n) {
         long s = 0;
         for (RaterCapacity r : raters) {
-            s += Math.min(cap(r, n), level);
+            s += roomAt(r, earlier, level, n);
         }
         return s;
     }

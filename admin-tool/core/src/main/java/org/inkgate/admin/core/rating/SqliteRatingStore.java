@@ -33,7 +33,8 @@ import org.sqlite.SQLiteConfig;
  * the rows exports need. Its own connection to the store file uses the client's storage discipline
  * (write-ahead log, synchronous FULL): a draft or rating is on disk when a call returns, so a
  * crash or power cut loses nothing a rater saved. Every submission is kept (history), with who and
- * when; the current rating of an assignment is its latest submission.
+ * when; the current rating of an assignment is its latest submission. Public methods are
+ * synchronized: one connection serves one call at a time, whichever thread it comes from.
  */
 public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
 
@@ -143,12 +144,17 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         return new ExamSource.Rubric("results store", criteria);
     }
 
-    public String examId() {
+    /** For tests of the connection's settings. */
+    Connection connection() {
+        return c;
+    }
+
+    public synchronized String examId() {
         return examId;
     }
 
     /** The exam's rubric as registered in the store. */
-    public ExamSource.Rubric rubric() {
+    public synchronized ExamSource.Rubric rubric() {
         return rubric;
     }
 
@@ -161,7 +167,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     private static final String RATER_ID = "[A-Za-z0-9][A-Za-z0-9._-]{0,31}";
 
     /** Adds a rater, or changes the label and capacity of one already there; returns true when new. */
-    public boolean addRater(String id, String label, Integer capacity) throws RatingException {
+    public synchronized boolean addRater(String id, String label, Integer capacity) throws RatingException {
         if (id == null || !id.matches(RATER_ID)) {
             throw new RatingException("rater id '" + id + "' is not usable; use 1-32 letters, digits, '.', '_' or '-',"
                     + " starting with a letter or digit (e.g. R07)");
@@ -179,13 +185,13 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** Every rater with label and capacity. */
-    public List<RaterEntry> raterEntries() throws RatingException {
+    public synchronized List<RaterEntry> raterEntries() throws RatingException {
         return read("listing raters", () -> query("SELECT rater_id, label, capacity FROM raters ORDER BY rater_id",
                 rs -> new RaterEntry(rs.getString(1), rs.getString(2), intOrNull(rs, 3))));
     }
 
     @Override
-    public List<Rater> raters() throws RatingException {
+    public synchronized List<Rater> raters() throws RatingException {
         return raterEntries().stream().map(r -> new Rater(r.id(), r.label())).toList();
     }
 
@@ -196,7 +202,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** The exam's responses that no rater has been given yet. */
-    public List<RatingAssigner.Response> unassignedResponses() throws RatingException {
+    public synchronized List<RatingAssigner.Response> unassignedResponses() throws RatingException {
         return read("listing responses", () -> query("SELECT r.sitting_id, r.task_id, s.candidate_number FROM responses r"
                 + " JOIN sittings s ON s.sitting_id = r.sitting_id WHERE s.exam_id=? AND NOT EXISTS (SELECT 1 FROM"
                 + " rating_assignments a WHERE a.sitting_id = r.sitting_id AND a.task_id = r.task_id)"
@@ -209,7 +215,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
      * blind ids. A design whose raters do not all link through shared responses is refused (nothing
      * stored) unless {@code allowUnlinked}; with k = 1 it is always unlinked and only warned about.
      */
-    public AssignmentOutcome assign(int k, long seed, boolean allowUnlinked) throws RatingException {
+    public synchronized AssignmentOutcome assign(int k, long seed, boolean allowUnlinked) throws RatingException {
         List<RatingAssigner.Response> todo = unassignedResponses();
         if (todo.isEmpty()) {
             throw new RatingException("every response of exam " + examId + " already has its raters; nothing to assign");
@@ -224,7 +230,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
             Integer left = r.capacity() == null ? null : Math.max(0, r.capacity() - load.getOrDefault(r.id(), 0));
             capacities.add(new RatingAssigner.RaterCapacity(r.id(), left));
         }
-        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, k, seed);
+        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, load, k, seed);
         return tx("storing the rating assignment", () -> {
             String now = clock.instant().toString();
             StringBuilder raterList = new StringBuilder();
@@ -257,7 +263,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** The linking graph of the exam's whole rating design so far (first ratings and adjudications). */
-    public RaterLinks.Report design() throws RatingException {
+    public synchronized RaterLinks.Report design() throws RatingException {
         return read("reading the rating design", this::designNow);
     }
 
@@ -318,20 +324,20 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** The rater whose queue holds a blind id, if the id exists in this exam (for the test owner's tools, never raters). */
-    public Optional<String> raterOf(String blindId) throws RatingException {
+    public synchronized Optional<String> raterOf(String blindId) throws RatingException {
         return read("looking up " + blindId, () -> query("SELECT a.rater_id FROM rating_assignments a JOIN sittings s"
                 + " ON s.sitting_id = a.sitting_id WHERE a.blind_id=? AND s.exam_id=?", rs -> rs.getString(1), blindId, examId))
                 .stream().findFirst();
     }
 
     /** The rater's latest submitted sheet for a response (drafts left out), if any. */
-    public Optional<RatingSheet> submitted(String raterId, String blindId) throws RatingException {
+    public synchronized Optional<RatingSheet> submitted(String raterId, String blindId) throws RatingException {
         Assignment a = assignment(raterId, blindId);
         return read("reading the rating of " + blindId, () -> latest(a.id()).map(s -> new RatingSheet(s.scores(), s.comment())));
     }
 
     @Override
-    public List<QueueItem> queue(String raterId) throws RatingException {
+    public synchronized List<QueueItem> queue(String raterId) throws RatingException {
         requireRater(raterId);
         List<QueueItem> raw = read("reading the queue of " + raterId, () -> query("SELECT a.blind_id, a.task_id, a.kind,"
                 + " EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)"
@@ -348,7 +354,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     @Override
-    public BlindResponse response(String raterId, String blindId) throws RatingException {
+    public synchronized BlindResponse response(String raterId, String blindId) throws RatingException {
         Assignment a = assignment(raterId, blindId);
         return read("reading response " + blindId, () -> query("SELECT t.title, r.text FROM responses r JOIN sittings s"
                 + " ON s.sitting_id = r.sitting_id JOIN tasks t ON t.exam_id = s.exam_id AND t.task_id = r.task_id"
@@ -357,13 +363,13 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     @Override
-    public ExamSource.Rubric rubric(String blindId) throws RatingException {
+    public synchronized ExamSource.Rubric rubric(String blindId) throws RatingException {
         assignment(null, blindId);
         return rubric;
     }
 
     @Override
-    public Optional<RatingSheet> sheet(String raterId, String blindId) throws RatingException {
+    public synchronized Optional<RatingSheet> sheet(String raterId, String blindId) throws RatingException {
         Assignment a = assignment(raterId, blindId);
         return read("reading the sheet of " + blindId, () -> {
             List<RatingSheet> draft = query("SELECT scores_json, comment FROM rating_drafts WHERE assignment_id=?",
@@ -384,7 +390,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     @Override
-    public void saveDraft(String raterId, String blindId, RatingSheet sheet) throws RatingException {
+    public synchronized void saveDraft(String raterId, String blindId, RatingSheet sheet) throws RatingException {
         Assignment a = assignment(raterId, blindId);
         List<String> problems = check(sheet, false);
         if (!problems.isEmpty()) {
@@ -397,7 +403,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** What is wrong with a sheet: unknown criteria, scores out of range, and (if complete) missing criteria. */
-    public List<String> check(RatingSheet sheet, boolean complete) {
+    public synchronized List<String> check(RatingSheet sheet, boolean complete) {
         List<String> problems = new ArrayList<>();
         Map<String, ExamSource.Criterion> byId = new LinkedHashMap<>();
         rubric.criteria().forEach(cr -> byId.put(cr.id(), cr));
@@ -420,7 +426,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     @Override
-    public void submit(String raterId, String blindId, RatingSheet sheet) throws RatingException {
+    public synchronized void submit(String raterId, String blindId, RatingSheet sheet) throws RatingException {
         submitAll(raterId, Map.of(blindId, sheet), "desk");
     }
 
@@ -429,7 +435,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
      * sheet; a rating identical to the current one (scores and comment) is left as it is, so a
      * repeated import adds nothing. Returns how many ratings were new or changed.
      */
-    public int submitAll(String raterId, Map<String, RatingSheet> sheets, String via) throws RatingException {
+    public synchronized int submitAll(String raterId, Map<String, RatingSheet> sheets, String via) throws RatingException {
         requireRater(raterId);
         Map<Assignment, RatingSheet> checked = new LinkedHashMap<>();
         for (Map.Entry<String, RatingSheet> e : sheets.entrySet()) {
@@ -469,7 +475,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     @Override
-    public Progress progress(String raterId) throws RatingException {
+    public synchronized Progress progress(String raterId) throws RatingException {
         requireRater(raterId);
         int[] p = new int[3];
         for (ProgressRow r : progressRows()) {
@@ -487,7 +493,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** Progress per rater and task (raters with nothing assigned are left out). */
-    public List<ProgressRow> progressRows() throws RatingException {
+    public synchronized List<ProgressRow> progressRows() throws RatingException {
         return read("reading progress", () -> query("SELECT a.rater_id, a.task_id, COUNT(*),"
                 + " SUM(EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)),"
                 + " SUM(EXISTS(SELECT 1 FROM rating_flags f WHERE f.sitting_id = a.sitting_id AND f.task_id = a.task_id))"
@@ -500,7 +506,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     // ---------------------------------------------------------------- discrepancy, adjudication, final scores
 
     /** Sets the exam's discrepancy rule and applies it to every response whose ratings are complete. */
-    public int setRule(DiscrepancyRule rule) throws RatingException {
+    public synchronized int setRule(DiscrepancyRule rule) throws RatingException {
         return tx("setting the discrepancy rule", () -> {
             String now = clock.instant().toString();
             insert("INSERT INTO discrepancy_rules(exam_id, max_criterion_band_gap, max_total_gap, adjudicated_score,"
@@ -511,7 +517,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** The rule in force (the latest set), if any. */
-    public Optional<DiscrepancyRule> rule() throws RatingException {
+    public synchronized Optional<DiscrepancyRule> rule() throws RatingException {
         return read("reading the discrepancy rule", () -> currentRule().map(RuleRow::rule));
     }
 
@@ -526,7 +532,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** Applies the rule to every response (flags, adjudicators, final scores); returns the number of flags raised now. */
-    public int review() throws RatingException {
+    public synchronized int review() throws RatingException {
         return tx("reviewing ratings", () -> reviewAll(clock.instant().toString()));
     }
 
@@ -652,7 +658,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** The adjudication queue: every flagged response with its state. */
-    public List<Flag> flags() throws RatingException {
+    public synchronized List<Flag> flags() throws RatingException {
         return read("listing flags", () -> query("SELECT f.flag_id, f.task_id, f.reason, f.flagged_at,"
                 + " (SELECT group_concat(a.rater_id, ' ') FROM rating_assignments a WHERE a.sitting_id = f.sitting_id"
                 + "   AND a.task_id = f.task_id AND a.kind = 'rating'),"
@@ -673,7 +679,8 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
      * Settles a flagged response by a resolution entry (e.g. agreed in discussion): the given scores
      * become its final score, with who and when; the raters' ratings stay as they were.
      */
-    public void resolve(long flagId, String resolvedBy, Map<String, Integer> scores, String comment) throws RatingException {
+    public synchronized void resolve(long flagId, String resolvedBy, Map<String, Integer> scores, String comment)
+            throws RatingException {
         if (resolvedBy == null || resolvedBy.isBlank()) {
             throw new RatingException("say who resolved the response (--by NAME)");
         }
@@ -709,7 +716,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** Every current rating of the exam (first ratings and adjudications), ordered by candidate, task, rater, criterion. */
-    public void forEachRating(Consumer<RatingRow> sink) throws RatingException {
+    public synchronized void forEachRating(Consumer<RatingRow> sink) throws RatingException {
         read("reading ratings", () -> {
             each("SELECT s.candidate_number, COALESCE(c.level, ''), s.form_id, a.task_id, r.condition_id, a.rater_id,"
                     + " g.criterion_id, g.score, a.kind, g.rated_at FROM ratings g"
@@ -731,7 +738,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** Every final score of the exam; responses still pending have none. */
-    public void forEachFinalScore(Consumer<FinalRow> sink) throws RatingException {
+    public synchronized void forEachFinalScore(Consumer<FinalRow> sink) throws RatingException {
         read("reading final scores", () -> {
             each("SELECT s.candidate_number, COALESCE(c.level, ''), s.form_id, f.task_id, r.condition_id, f.criterion_id,"
                     + " f.score, f.method, d.max_criterion_band_gap, d.max_total_gap, d.adjudicated_score, f.basis,"
@@ -750,7 +757,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     /** Responses with a rating assignment but no final score yet. */
-    public int pendingResponses() throws RatingException {
+    public synchronized int pendingResponses() throws RatingException {
         return read("counting pending responses", () -> count("SELECT COUNT(*) FROM (SELECT DISTINCT a.sitting_id, a.task_id"
                 + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND NOT EXISTS"
                 + " (SELECT 1 FROM final_scores f WHERE f.sitting_id = a.sitting_id AND f.task_id = a.task_id))", examId));
@@ -760,7 +767,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     public record HistoryEntry(String raterId, Map<String, Integer> scores, String comment, String submittedAt, String via) {
     }
 
-    public List<HistoryEntry> history(String blindId) throws RatingException {
+    public synchronized List<HistoryEntry> history(String blindId) throws RatingException {
         Assignment a = assignment(null, blindId);
         return read("reading history", () -> query("SELECT rater_id, scores_json, comment, submitted_at, via FROM"
                 + " rating_submissions WHERE assignment_id=? ORDER BY submission_id", rs -> new HistoryEntry(rs.getString(1),
@@ -768,7 +775,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     @Override
-    public void close() throws RatingException {
+    public synchronized void close() throws RatingException {
         try {
             c.close();
         } catch (SQLException e) {

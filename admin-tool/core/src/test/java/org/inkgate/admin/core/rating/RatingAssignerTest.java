@@ -207,6 +207,17 @@ class RatingAssignerTest {
     }
 
     @Test
+    void assign_laterRun_levelsTotalsIncludingEarlierWork() throws Exception {
+        // R01 rated 30 earlier; 50 new responses x 2 = 100 ratings: totals level at 26 would need 130 - 30 = 100
+        // from the other four (25 each) and none from R01 (worked by hand from the water-filling rule)
+        RatingAssigner.Plan plan = RatingAssigner.assign(responses(50, 1), raters(5), Map.of("R01", 30), 2, 4L);
+        assertEquals(Map.of("R01", 0, "R02", 25, "R03", 25, "R04", 25, "R05", 25), plan.workload());
+        // R01 with 10 earlier: totals 110 + 10 = 120 over 5 = 22 each -> R01 gets 12, the others 22
+        RatingAssigner.Plan two = RatingAssigner.assign(responses(50, 1), raters(5), Map.of("R01", 10), 2, 4L);
+        assertEquals(Map.of("R01", 12, "R02", 22, "R03", 22, "R04", 22, "R05", 22), two.workload());
+    }
+
+    @Test
     void assign_tooFewResponsesToLinkSevenRaters_warnsAndReportsTheGroups() throws Exception {
         RatingAssigner.Plan plan = RatingAssigner.assign(responses(3, 1), raters(7), 2, 1L);
         assertFalse(plan.links().connected());
