@@ -13,9 +13,7 @@ import javafx.scene.control.ProgressBar;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextArea;
 import javafx.scene.control.TextField;
-import javafx.scene.control.TextFormatter;
 import javafx.scene.input.KeyCode;
-import javafx.scene.input.KeyEvent;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
@@ -25,7 +23,6 @@ import javafx.scene.layout.VBox;
 import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingDesk.Progress;
 import org.inkgate.admin.core.rating.RatingDesk.QueueItem;
-import org.inkgate.admin.core.source.ExamSource;
 
 /**
  * The desk while a rater works: their queue on the left, the response in the middle (plain,
@@ -333,7 +330,11 @@ final class ScoringView {
         scoreFields.clear();
         List<DeskModel.CriterionScore> scores = model.scores();
         for (int i = 0; i < scores.size(); i++) {
-            criteria.getChildren().add(criterionCard(scores.get(i), i));
+            int index = i;
+            CriterionCard card = new CriterionCard(model, scores.get(i), () -> next(index));
+            scoreFields.add(card.field());
+            keepInView(card.field());
+            criteria.getChildren().add(card.view());
         }
         QueueItem open = model.current().get();
         if (open != null) {
@@ -345,57 +346,6 @@ final class ScoringView {
             queue.getSelectionModel().clearSelection();
         }
         DeskKeys.focusWhenShown(model.finished().get() ? queue : firstFocus());
-    }
-
-    private Node criterionCard(DeskModel.CriterionScore score, int index) {
-        ExamSource.Criterion c = score.criterion();
-        String range = c.minScore() + " to " + c.maxScore();
-        TextField field = new TextField();
-        field.setId("score-" + c.id());
-        field.setPrefColumnCount(3);
-        field.setMaxWidth(80);
-        field.getStyleClass().add("score-field");
-        field.setAccessibleText(c.name() + ": score from " + range);
-        field.setTextFormatter(new TextFormatter<String>(change -> {
-            if (!change.isContentChange()) {
-                return change;
-            }
-            if (ScoreEntry.of(c, change.getControlNewText()) instanceof ScoreEntry.Refused r) {
-                model.refused(score, r.message());
-                return null;
-            }
-            return change;
-        }));
-        field.setText(score.text().get());
-        field.textProperty().bindBidirectional(score.text());
-        field.addEventFilter(KeyEvent.KEY_PRESSED, e -> onScoreKey(e, score, index));
-        scoreFields.add(field);
-        keepInView(field);
-
-        Label name = new Label(c.name());
-        name.getStyleClass().add("criterion-name");
-        name.setLabelFor(field);
-        Label rangeLabel = new Label("scores " + range);
-        rangeLabel.getStyleClass().add("desk-note");
-        HBox top = new HBox(12, name, rangeLabel);
-        top.setAlignment(Pos.BASELINE_LEFT);
-        HBox entry = new HBox(12, field);
-        entry.setAlignment(Pos.CENTER_LEFT);
-        Label message = new Label();
-        message.setId("message-" + c.id());
-        message.setWrapText(true);
-        message.getStyleClass().add("score-message");
-        message.textProperty().bind(score.message());
-        message.visibleProperty().bind(score.message().isNotEmpty());
-        message.managedProperty().bind(message.visibleProperty());
-
-        VBox bands = new VBox(4);
-        for (ExamSource.Band band : c.bands()) {
-            bands.getChildren().add(bandRow(score, band));
-        }
-        VBox card = new VBox(8, top, entry, message, bands);
-        card.getStyleClass().add("criterion-card");
-        return card;
     }
 
     /** Scrolls the rubric so a control that gains focus is in sight (a scroll pane does not do it by itself). */
@@ -422,42 +372,9 @@ final class ScoringView {
         });
     }
 
-    private static Node bandRow(DeskModel.CriterionScore score, ExamSource.Band band) {
-        Label scores = new Label(band.from() == band.to() ? Integer.toString(band.from()) : band.from() + "\u2013" + band.to());
-        scores.getStyleClass().add("band-scores");
-        scores.setMinWidth(48);
-        Label text = new Label(band.descriptor());
-        text.setWrapText(true);
-        text.getStyleClass().add("band-text");
-        HBox.setHgrow(text, Priority.ALWAYS);
-        HBox row = new HBox(10, scores, text);
-        row.getStyleClass().add("band");
-        Runnable mark = () -> {
-            boolean covers = score.score().map(s -> s >= band.from() && s <= band.to()).orElse(false);
-            row.getStyleClass().remove("band-current");
-            if (covers) {
-                row.getStyleClass().add("band-current");
-            }
-            row.setAccessibleText("Band " + scores.getText() + ": " + band.descriptor() + (covers ? " (covers your score)" : ""));
-        };
-        score.entry().addListener((o, was, now) -> mark.run());
-        mark.run();
-        return row;
-    }
-
-    private void onScoreKey(KeyEvent e, DeskModel.CriterionScore score, int index) {
-        if (e.isShortcutDown() || e.isAltDown()) {
-            return;
-        }
-        switch (e.getCode()) {
-            case UP -> model.step(score, +1);
-            case DOWN -> model.step(score, -1);
-            case ENTER -> (index + 1 < scoreFields.size() ? scoreFields.get(index + 1) : comment).requestFocus();
-            default -> {
-                return;
-            }
-        }
-        e.consume();
+    /** Enter in a score box: the next score box, or after the last one the comment. */
+    private void next(int index) {
+        (index + 1 < scoreFields.size() ? scoreFields.get(index + 1) : comment).requestFocus();
     }
 
     /** Ctrl+Enter anywhere on the desk. */
