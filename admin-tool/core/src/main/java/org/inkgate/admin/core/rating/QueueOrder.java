@@ -56,10 +56,13 @@ final class QueueOrder {
         Map<String, Integer> count = new HashMap<>();
         block.forEach(r -> count.merge(r.candidate(), 1, Integer::sum));
         List<RatingAssigner.Response> left = new ArrayList<>(block);
+        // counts only fall, so no candidate can hold more than half of what is left while 2 x max <= remaining
+        int maxCount = count.values().stream().mapToInt(Integer::intValue).max().orElse(0);
         while (!left.isEmpty()) {
             int remaining = left.size();
             String forced = null;
-            for (Map.Entry<String, Integer> e : new TreeMap<>(count).entrySet()) {
+            for (Map.Entry<String, Integer> e : maxCount * 2 > remaining ? new TreeMap<>(count).entrySet()
+                    : Map.<String, Integer>of().entrySet()) {
                 if (e.getValue() * 2 > remaining && !e.getKey().equals(previous)) {
                     forced = e.getKey();
                 }

@@ -342,7 +342,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         List<QueueItem> raw = read("reading the queue of " + raterId, () -> query("SELECT a.blind_id, a.task_id, a.kind,"
                 + " EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)"
                 + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
-                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.queue_position, a.assignment_id",
+                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
                 rs -> new QueueItem(0, rs.getString(1), rs.getString(2), kind(rs.getString(3)), rs.getInt(4) == 1),
                 raterId, examId));
         List<QueueItem> out = new ArrayList<>(raw.size());
@@ -580,6 +580,12 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
             }
         }
         boolean flagged = !flag.isEmpty();
+        if (flagged && ratings.stream().noneMatch(r -> r.kind() == Kind.ADJUDICATION)
+                && count("SELECT COUNT(*) FROM rating_assignments WHERE sitting_id=? AND task_id=? AND kind='adjudication'",
+                        sittingId, taskId) == 0
+                && count("SELECT COUNT(*) FROM resolution_entries WHERE flag_id=?", flag.get(0)) == 0) {
+            assignAdjudicator(sittingId, taskId, now); // none was free when it was flagged; one may be now
+        }
         Map<String, Integer> entry = new TreeMap<>();
         List<String> by = new ArrayList<>();
         if (flagged) {
@@ -606,40 +612,68 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
 
     /**
      * A third rater for a flagged response, by the assignment's balancing: not one of its raters,
-     * capacity left, the smallest workload in this exam; ties broken at random from the run's seed
-     * and the response, so a review repeated on a copy of the store picks the same rater.
+     * capacity left, the smallest workload in this exam; among equals one whose queue does not end
+     * with the same candidate; remaining ties broken at random from the run's seed and the response,
+     * so a review repeated on a copy of the store picks the same rater.
      */
     private void assignAdjudicator(long sittingId, String taskId, String now) throws SQLException {
         Set<String> already = new HashSet<>(query("SELECT rater_id FROM rating_assignments WHERE sitting_id=? AND task_id=?",
                 rs -> rs.getString(1), sittingId, taskId));
-        Map<String, Integer> load = new HashMap<>();
-        each("SELECT a.rater_id, COUNT(*) FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
-                + " WHERE s.exam_id=? GROUP BY a.rater_id", rs -> load.put(rs.getString(1), rs.getInt(2)), examId);
+        if (loadInTx == null) {
+            loadInTx = new HashMap<>();
+            each("SELECT a.rater_id, COUNT(*) FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                    + " WHERE s.exam_id=? GROUP BY a.rater_id", rs -> loadInTx.put(rs.getString(1), rs.getInt(2)), examId);
+        }
+        Map<String, Integer> load = loadInTx;
         long seed = query("SELECT COALESCE(MAX(seed), 0) FROM rating_assignments WHERE sitting_id=? AND task_id=?",
                 rs -> rs.getLong(1), sittingId, taskId).get(0);
         Random rng = new Random(seed * 31 + sittingId * 1_000_003L + taskId.hashCode());
-        String best = null;
-        long bestKey = Long.MAX_VALUE;
+        String candidate = query("SELECT candidate_number FROM sittings WHERE sitting_id=?", rs -> rs.getString(1),
+                sittingId).get(0);
+        List<String> eligible = new ArrayList<>();
+        int least = Integer.MAX_VALUE;
         for (RaterEntry r : query("SELECT rater_id, label, capacity FROM raters ORDER BY rater_id",
                 rs -> new RaterEntry(rs.getString(1), rs.getString(2), intOrNull(rs, 3)))) {
             int l = load.getOrDefault(r.id(), 0);
             if (already.contains(r.id()) || r.capacity() != null && l >= r.capacity()) {
                 continue;
             }
-            long key = ((long) l << 20) + rng.nextInt(1 << 20);
+            eligible.add(r.id());
+            least = Math.min(least, l);
+        }
+        String best = null;
+        long bestKey = Long.MAX_VALUE;
+        for (String r : eligible) {
+            if (load.getOrDefault(r, 0) != least) {
+                continue;
+            }
+            // among the least loaded, a rater whose queue would end with this candidate's other response is
+            // passed over (common practice against the halo effect); then a seeded random choice
+            int adjacent = candidate.equals(lastCandidate(r)) ? 1 : 0;
+            long key = ((long) adjacent << 20) + rng.nextInt(1 << 20);
             if (key < bestKey) {
                 bestKey = key;
-                best = r.id();
+                best = r;
             }
         }
         if (best == null) {
             return; // stays in the adjudication queue without a rater: flags() says so, and a resolution entry settles it
         }
-        Set<String> taken = new HashSet<>(query("SELECT blind_id FROM rating_assignments WHERE blind_id IS NOT NULL",
-                rs -> rs.getString(1)));
+        String blind;
+        do {
+            blind = blindIds.next(new HashSet<>());
+        } while (!query("SELECT 1 FROM rating_assignments WHERE blind_id=?", rs -> 1, blind).isEmpty());
         update("INSERT INTO rating_assignments(sitting_id, task_id, rater_id, seed, created_at, run_id, blind_id, kind,"
                 + " queue_position) VALUES (?,?,?,?,?,NULL,?,'adjudication',?)", sittingId, taskId, best, seed, now,
-                blindIds.next(taken), nextPosition(best));
+                blind, nextPosition(best));
+        load.merge(best, 1, Integer::sum);
+    }
+
+    /** The candidate behind the last item of a rater's queue in this exam, or null for an empty queue. */
+    private String lastCandidate(String rater) throws SQLException {
+        return query("SELECT s.candidate_number FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.kind = 'adjudication' DESC, a.queue_position DESC"
+                + " LIMIT 1", rs -> rs.getString(1), rater, examId).stream().findFirst().orElse(null);
     }
 
     /** A flagged response in the adjudication queue (no candidate data: task, raters' blind ids and the reason). */
@@ -651,7 +685,8 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 return "settled (" + finalMethod + ")";
             }
             if (adjudicator == null) {
-                return "no adjudicator available: add a rater with capacity and run review, or enter a resolution";
+                return "no adjudicator available: add a rater with capacity and run rate flags again, or enter a"
+                        + " resolution (rate resolve)";
             }
             return adjudicated ? "adjudicated" : "awaiting adjudicator " + adjudicator + " (" + adjudicatorBlindId + ")";
         }
@@ -818,7 +853,11 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         void accept(ResultSet rs) throws SQLException;
     }
 
+    /** Workloads per rater, counted once per transaction that assigns adjudicators (null outside). */
+    private Map<String, Integer> loadInTx;
+
     private <T> T tx(String what, Work<T> work) throws RatingException {
+        loadInTx = null;
         try {
             c.setAutoCommit(false);
             try {
@@ -829,6 +868,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 c.rollback();
                 throw e;
             } finally {
+                loadInTx = null;
                 c.setAutoCommit(true);
             }
         } catch (SQLException e) {

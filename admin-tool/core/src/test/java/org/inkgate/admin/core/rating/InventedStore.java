@@ -15,9 +15,9 @@ import org.inkgate.admin.core.store.SqliteResultsStore;
  * (1-9, bands 1-3, 4-6, 7-9). Rows are written with plain SQL so the rating tests do not depend on
  * bundles and packages; the schema is the real one (SqliteResultsStore.open migrates it).
  */
-final class InventedStore {
+public final class InventedStore {
 
-    static final String EXAM = "invented-river-exam";
+    public static final String EXAM = "invented-river-exam";
     static final ExamSource.Rubric RUBRIC = new ExamSource.Rubric("rubric.yaml", List.of(
             criterion("content", "Content"), criterion("language", "Language")));
 
@@ -29,7 +29,7 @@ final class InventedStore {
                 new ExamSource.Band(4, 6, "adequate (invented)"), new ExamSource.Band(7, 9, "strong (invented)")));
     }
 
-    static Path make(Path dir, int candidates, List<String> tasks) throws Exception {
+    public static Path make(Path dir, int candidates, List<String> tasks) throws Exception {
         Path file = dir.resolve("results.db");
         try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
             try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file); Statement s = c.createStatement()) {
@@ -45,43 +45,52 @@ final class InventedStore {
                     s.execute("INSERT INTO tasks(exam_id, task_id, title, time_limit_seconds) VALUES ('" + EXAM + "', '" + t
                             + "', 'Invented task " + t + "', 1800)");
                 }
-                try (PreparedStatement cand = c.prepareStatement("INSERT INTO candidates(exam_id, candidate_number, level,"
-                        + " form_id) VALUES (?,?,?,'F1')");
-                        PreparedStatement sit = c.prepareStatement("INSERT INTO sittings(sitting_id, package_sha256,"
-                                + " package_id, content_sha256, exam_id, bundle_manifest_sha256, candidate_number, form_id,"
-                                + " installation_fingerprint, submitted_at, source_file, imported_at)"
-                                + " VALUES (?,?,?,?,?,'b0',?,'F1','inst','2026-12-01T10:00:00Z','f','2026-12-01T12:00:00Z')");
-                        PreparedStatement resp = c.prepareStatement("INSERT INTO responses(sitting_id, task_id, position,"
-                                + " condition_id, policy_id, tools_offered, text, word_count, extra_time_seconds, end_reason)"
-                                + " VALUES (?,?,?,?,1,'',?,?,0,'submitted')")) {
-                    for (int i = 0; i < candidates; i++) {
-                        String number = String.format("C%04d", i);
-                        cand.setString(1, EXAM);
-                        cand.setString(2, number);
-                        cand.setString(3, List.of("A2", "B1", "B2").get(i % 3));
-                        cand.executeUpdate();
-                        sit.setLong(1, i + 1);
-                        sit.setString(2, "pkg" + i);
-                        sit.setString(3, "P" + i);
-                        sit.setString(4, "content" + i);
-                        sit.setString(5, EXAM);
-                        sit.setString(6, number);
-                        sit.executeUpdate();
-                        for (int t = 0; t < tasks.size(); t++) {
-                            resp.setLong(1, i + 1);
-                            resp.setString(2, tasks.get(t));
-                            resp.setInt(3, t);
-                            resp.setString(4, (i + t) % 2 == 0 ? "with" : "without");
-                            resp.setString(5, "Invented response " + i + " to " + tasks.get(t) + ".");
-                            resp.setInt(6, 5);
-                            resp.executeUpdate();
-                        }
-                    }
-                }
                 c.commit();
             }
             store.registerRubric(EXAM, RUBRIC);
         }
+        addCandidates(file, 0, candidates, tasks);
         return file;
+    }
+
+    /** Adds candidates {@code from} .. {@code from + count - 1}, each with one sitting answering every task. */
+    public static void addCandidates(Path file, int from, int count, List<String> tasks) throws Exception {
+        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file)) {
+            c.setAutoCommit(false);
+            try (PreparedStatement cand = c.prepareStatement("INSERT INTO candidates(exam_id, candidate_number, level,"
+                    + " form_id) VALUES (?,?,?,'F1')");
+                    PreparedStatement sit = c.prepareStatement("INSERT INTO sittings(sitting_id, package_sha256,"
+                            + " package_id, content_sha256, exam_id, bundle_manifest_sha256, candidate_number, form_id,"
+                            + " installation_fingerprint, submitted_at, source_file, imported_at)"
+                            + " VALUES (?,?,?,?,?,'b0',?,'F1','inst','2026-12-01T10:00:00Z','f','2026-12-01T12:00:00Z')");
+                    PreparedStatement resp = c.prepareStatement("INSERT INTO responses(sitting_id, task_id, position,"
+                            + " condition_id, policy_id, tools_offered, text, word_count, extra_time_seconds, end_reason)"
+                            + " VALUES (?,?,?,?,1,'',?,?,0,'submitted')")) {
+                for (int i = from; i < from + count; i++) {
+                    String number = String.format("C%04d", i);
+                    cand.setString(1, EXAM);
+                    cand.setString(2, number);
+                    cand.setString(3, List.of("A2", "B1", "B2").get(i % 3));
+                    cand.executeUpdate();
+                    sit.setLong(1, i + 1);
+                    sit.setString(2, "pkg" + i);
+                    sit.setString(3, "P" + i);
+                    sit.setString(4, "content" + i);
+                    sit.setString(5, EXAM);
+                    sit.setString(6, number);
+                    sit.executeUpdate();
+                    for (int t = 0; t < tasks.size(); t++) {
+                        resp.setLong(1, i + 1);
+                        resp.setString(2, tasks.get(t));
+                        resp.setInt(3, t);
+                        resp.setString(4, (i + t) % 2 == 0 ? "with" : "without");
+                        resp.setString(5, "Invented response " + i + " to " + tasks.get(t) + ".");
+                        resp.setInt(6, 5);
+                        resp.executeUpdate();
+                    }
+                }
+            }
+            c.commit();
+        }
     }
 }

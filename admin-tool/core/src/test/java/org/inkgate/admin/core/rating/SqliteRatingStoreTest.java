@@ -124,6 +124,36 @@ class SqliteRatingStoreTest {
     }
 
     @Test
+    void assign_laterRunForLateResponses_balancesTotalsAndKeepsQueuesGrouped() throws Exception {
+        Path db = InventedStore.make(dir, 30, List.of("t1", "t2"));
+        try (SqliteRatingStore s = open(db)) {
+            addRaters(s, 3);
+            s.assign(2, 1L, false);
+            s.addRater("R04", "Invented late rater", null);
+        }
+        InventedStore.addCandidates(db, 30, 10, List.of("t1", "t2"));
+        try (SqliteRatingStore s = open(db)) {
+            assertEquals(20, s.unassignedResponses().size());
+            s.assign(2, 2L, false);
+            // by hand from the water-filling rule: 40 earlier ratings each for R01-R03, 40 new ratings of 20 responses.
+            // R04 takes each new response at most once (20); the level where R01-R03 cover the other 20 is 47
+            // (3 x 6 = 18 < 20 at 46, 3 x 7 = 21 at 47): totals 46 or 47 for R01-R03, 20 for R04
+            Map<String, Integer> totals = new java.util.TreeMap<>();
+            for (SqliteRatingStore.ProgressRow r : s.progressRows()) {
+                totals.merge(r.raterId(), r.total(), Integer::sum);
+            }
+            assertEquals(20, totals.get("R04"));
+            assertEquals(160, totals.values().stream().mapToInt(Integer::intValue).sum());
+            assertTrue(totals.get("R01") >= 46 && totals.get("R01") <= 47, totals.toString());
+            assertTrue(s.design().connected());
+            List<RatingDesk.QueueItem> q = s.queue("R01");
+            for (int i = 0; i < q.size(); i++) {
+                assertEquals(i + 1, q.get(i).position());
+            }
+        }
+    }
+
+    @Test
     void assign_unlinkableDesign_isRefusedAndNothingStored_unlessAllowed() throws Exception {
         Path db = InventedStore.make(dir, 3, List.of("t1"));
         try (SqliteRatingStore s = open(db)) {
@@ -261,6 +291,17 @@ class SqliteRatingStoreTest {
             assertEquals(2, s.pendingResponses());
             s.addRater("R03", "Invented third", null);
             assertEquals(0, s.review(), "flags are raised once");
+            List<SqliteRatingStore.Flag> now = s.flags();
+            assertEquals(List.of("R03", "R03"), now.stream().map(SqliteRatingStore.Flag::adjudicator).toList(),
+                    "a rater added later takes the waiting adjudications when the rule runs again");
+            // ADJUDICATOR method: the third rater's scores become the final score
+            s.submit("R03", now.get(0).adjudicatorBlindId(), sheet(4, 6));
+            List<SqliteRatingStore.FinalRow> finals = new ArrayList<>();
+            s.forEachFinalScore(finals::add);
+            assertEquals(List.of("adjudicator", "adjudicator"), finals.stream().map(SqliteRatingStore.FinalRow::method)
+                    .toList());
+            assertEquals(List.of(4.0, 6.0), finals.stream().map(SqliteRatingStore.FinalRow::score).toList());
+            assertEquals(1, s.pendingResponses());
         }
     }
 
