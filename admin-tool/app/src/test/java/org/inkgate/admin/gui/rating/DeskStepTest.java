@@ -39,7 +39,8 @@ class DeskStepTest {
     void ratingStep_storeWithRaters_opensTheDeskWindowWithTheRaters(FxRobot robot) throws Exception {
         RatedStore rated = RatedStore.make(dir, List.of("rater-a", "rater-b", "rater-c"));
         AdminSession session = new AdminSession();
-        robot.interact(() -> AdminWindow.show(stage, session));
+        javafx.scene.Scene[] admin = new javafx.scene.Scene[1];
+        robot.interact(() -> admin[0] = AdminWindow.show(stage, session));
         robot.press(KeyCode.CONTROL, KeyCode.DIGIT6).release(KeyCode.DIGIT6, KeyCode.CONTROL);
         WaitForAsyncUtils.waitForFxEvents();
         assertEquals(5, robot.lookup("#steps").queryListView().getSelectionModel().getSelectedIndex(), "Ctrl+6: step 6");
@@ -52,7 +53,12 @@ class DeskStepTest {
         assertEquals(List.of("rater-a", "rater-b", "rater-c"), raters(robot, desk).getItems().stream()
                 .map(r -> ((org.inkgate.admin.core.rating.RatingDesk.Rater) r).id()).toList());
         assertTrue(((Label) robot.lookup("#deskResult").query()).getText().startsWith("The rating desk is open"));
+        for (javafx.scene.Node n : robot.from(admin[0].getRoot()).lookup(".step").lookup((java.util.function.Predicate<javafx.scene.Node>)
+                n -> n instanceof TextInputControl).queryAll()) {
+            assertTrue(n.getAccessibleText() != null && !n.getAccessibleText().isBlank(), n + " has no accessible name");
+        }
         robot.interact(desk::close);
+        DeskShots.shoot(robot, admin[0], "admin-rating-desk.png");
     }
 
     @Test
