@@ -70,6 +70,8 @@ final class CriterionCard {
         message.textProperty().bind(score.message());
         message.visibleProperty().bind(score.message().isNotEmpty());
         message.managedProperty().bind(message.visibleProperty());
+        // JavaFX has no live regions: the message also becomes the box's help text, which screen readers read with it
+        field.accessibleHelpProperty().bind(score.message());
 
         VBox bands = new VBox(4);
         for (ExamSource.Band band : c.bands()) {
