@@ -164,6 +164,29 @@ class RatingAssignerTest {
     }
 
     @Test
+    void assign_fewCandidatesManyTasks_noCandidateTwiceInARowAcrossTaskBlocks() throws Exception {
+        // 3 candidates x 8 tasks, both raters get all 24: a random order would repeat a candidate at about one
+        // block boundary in three; over 20 seeds that cannot go unnoticed
+        for (long seed = 1; seed <= 20; seed++) {
+            List<RatingAssigner.Response> rs = responses(3, 8);
+            assertProperties(rs, RatingAssigner.assign(rs, raters(2), 2, seed), 2, 8);
+        }
+    }
+
+    @Test
+    void assign_duplicateResponsesOfOneCandidate_areSeparatedWithinTheTask() throws Exception {
+        // two copies of C0000's response to one task (a conflict in the store): 5 responses in one block
+        List<RatingAssigner.Response> rs = new ArrayList<>(responses(3, 1));
+        rs.add(new RatingAssigner.Response(99, "task-a", "C0000"));
+        rs.add(new RatingAssigner.Response(98, "task-a", "C0000"));
+        for (long seed = 1; seed <= 20; seed++) {
+            RatingAssigner.Plan plan = RatingAssigner.assign(rs, raters(2), 2, seed);
+            assertProperties(rs, plan, 2, 1);
+            assertTrue(plan.warnings().isEmpty(), plan.warnings().toString());
+        }
+    }
+
+    @Test
     void assign_capacities_respectedAndTheRestBalanced() throws Exception {
         List<RatingAssigner.Response> rs = responses(250, 2);
         List<RatingAssigner.RaterCapacity> raters = new ArrayList<>(raters(7));

@@ -319,6 +319,35 @@ class SqliteRatingStoreTest {
         return sxy / Math.sqrt(sxx * syy);
     }
 
+    @Test
+    void adjudicator_amongEquallyLoaded_avoidsAQueueEndingWithTheSameCandidate() throws Exception {
+        // a hand-made design: (C0000,t1) by R01 and R02; R03's queue ends with C0000's t2, R04's with C0001's t1;
+        // R03 and R04 carry 2 each. Over 8 seeds the adjudicator of (C0000,t1) must always be R04 (a coin would
+        // pick R03 about half the time)
+        for (int seed = 1; seed <= 8; seed++) {
+            Path db = InventedStore.make(Files.createDirectories(dir.resolve("s" + seed)), 2, List.of("t1", "t2"));
+            try (SqliteRatingStore s = open(db)) {
+                addRaters(s, 4);
+            }
+            try (var c = DriverManager.getConnection("jdbc:sqlite:" + db); var st = c.createStatement()) {
+                String[][] rows = {{"1", "t1", "R01", "1"}, {"1", "t1", "R02", "1"}, {"2", "t1", "R03", "1"},
+                    {"1", "t2", "R03", "2"}, {"1", "t2", "R04", "1"}, {"2", "t1", "R04", "2"}};
+                int n = 0;
+                for (String[] r : rows) {
+                    st.execute("INSERT INTO rating_assignments(sitting_id, task_id, rater_id, seed, created_at, blind_id,"
+                            + " kind, queue_position) VALUES (" + r[0] + ", '" + r[1] + "', '" + r[2] + "', " + seed
+                            + ", 't', 'TEST-000" + (n++) + "', 'rating', " + r[3] + ")");
+                }
+            }
+            try (SqliteRatingStore s = open(db)) {
+                s.setRule(new DiscrepancyRule(1, null, DiscrepancyRule.AdjudicatedScore.ADJUDICATOR));
+                s.submit("R01", "TEST-0000", sheet(1, 1));
+                s.submit("R02", "TEST-0001", sheet(9, 9));
+                assertEquals("R04", s.flags().get(0).adjudicator(), "seed " + seed);
+            }
+        }
+    }
+
     /** Per response (sitting/task) its assignments as [blind id, rater], in assignment order. */
     private static Map<String, List<String[]>> responses(Path db) throws Exception {
         Map<String, List<String[]>> out = new java.util.TreeMap<>();
