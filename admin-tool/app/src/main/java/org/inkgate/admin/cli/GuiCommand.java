@@ -6,7 +6,7 @@ import org.inkgate.admin.gui.AdminApp;
 import picocli.CommandLine.Command;
 
 /** {@code gui}: opens the admin window, the same steps as the commands over the same services. */
-@Command(name = "gui", description = "Open the admin window: exam check, forms, bundle, collect, missing responses.")
+@Command(name = "gui", description = "Open the admin window: exam check, forms, bundle, collect, missing responses, rating desk.")
 final class GuiCommand implements Callable<Integer> {
 
     @Override

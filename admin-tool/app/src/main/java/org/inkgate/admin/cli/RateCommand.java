@@ -38,7 +38,7 @@ import picocli.CommandLine.Spec;
                 + " settle disagreements and export ratings and final scores.",
         subcommands = {RateCommand.Raters.class, RateCommand.Assign.class, RateCommand.Progress.class,
             RateCommand.Sheet.class, RateCommand.Rule.class, RateCommand.Flags.class, RateCommand.Resolve.class,
-            RateCommand.Export.class, CommandLine.HelpCommand.class})
+            RateCommand.Export.class, DeskCommand.class, CommandLine.HelpCommand.class})
 final class RateCommand implements Callable<Integer> {
 
     @Spec

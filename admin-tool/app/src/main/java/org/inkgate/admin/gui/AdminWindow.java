@@ -27,9 +27,11 @@ import org.inkgate.admin.gui.forms.FormsModel;
 import org.inkgate.admin.gui.forms.FormsView;
 import org.inkgate.admin.gui.missing.MissingModel;
 import org.inkgate.admin.gui.missing.MissingView;
+import org.inkgate.admin.gui.rating.DeskStep;
+import org.inkgate.admin.gui.rating.DeskStepModel;
 
 /**
- * The admin window: the steps in a list on the left (Ctrl+1 to Ctrl+5 jump to them), the chosen
+ * The admin window: the steps in a list on the left (Ctrl+1 to Ctrl+6 jump to them), the chosen
  * step in the middle, and a status line with progress at the bottom.
  */
 public final class AdminWindow {
@@ -48,7 +50,8 @@ public final class AdminWindow {
                 new FormsView(new FormsModel(session)),
                 new BundleView(new BundleModel(session), work),
                 new CollectView(new CollectModel(session), work),
-                new MissingView(new MissingModel(session)));
+                new MissingView(new MissingModel(session)),
+                new DeskStep(new DeskStepModel(session), work));
         steps = new ListView<>(javafx.collections.FXCollections.observableArrayList(all));
         steps.setId("steps");
         steps.setAccessibleText("Steps");

@@ -1,0 +1,88 @@
+package org.inkgate.admin.gui.rating;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import javafx.stage.Stage;
+import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.gui.AdminSession;
+import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.Work;
+
+/** The admin window's rating step: opens the rating desk in its own window over the chosen results store. */
+public final class DeskStepModel {
+
+    private final AdminSession session;
+    private final StringProperty store = new SimpleStringProperty("");
+    private final StringProperty exam = new SimpleStringProperty("");
+    private final StringProperty result = new SimpleStringProperty("");
+
+    public DeskStepModel(AdminSession session) {
+        this.session = session;
+        session.store().addListener((o, was, now) -> {
+            if (now != null) {
+                store.set(now.toString());
+            }
+        });
+    }
+
+    public StringProperty store() {
+        return store;
+    }
+
+    /** The exam id; may stay empty when the store holds one exam. */
+    public StringProperty exam() {
+        return exam;
+    }
+
+    public StringProperty result() {
+        return result;
+    }
+
+    /** Opens the store off the JavaFX thread, then the desk in a new window; the store closes with it. */
+    public void open() {
+        Path file = Fields.path(store.get());
+        String examId = exam.get() == null || exam.get().isBlank() ? null : exam.get().strip();
+        if (file == null || !Files.isRegularFile(file)) {
+            result.set("There is no results store " + (file == null ? "named" : "at " + file) + ". Collect first (step 4)"
+                    + " or name the store file.");
+            return;
+        }
+        Work work = session.work();
+        work.run("Opening the rating desk", p -> open(file, examId), opened -> {
+            Stage stage = new Stage();
+            DeskWindow.show(stage, new DeskModel(opened), () -> close(opened));
+            result.set("The rating desk is open in its own window for exam " + opened.examId() + ". Raters sign in there;"
+                    + " closing that window ends the session.");
+        }, failure -> result.set("The rating desk did not open. " + failure));
+    }
+
+    private static SqliteRatingStore open(Path file, String examId) throws RatingException {
+        String id = examId;
+        if (id == null) {
+            List<String> exams = SqliteRatingStore.exams(file);
+            if (exams.size() != 1) {
+                throw new RatingException("the store holds " + exams.size() + " exams " + exams + "; type the exam id");
+            }
+            id = exams.get(0);
+        }
+        SqliteRatingStore s = SqliteRatingStore.open(file, id);
+        if (s.raters().isEmpty()) {
+            s.close();
+            throw new RatingException("exam " + id + " has no raters yet; add them and assign the responses first"
+                    + " (inkgate-admin rate raters add, rate assign; see the test owner guide)");
+        }
+        return s;
+    }
+
+    private static void close(SqliteRatingStore s) {
+        try {
+            s.close();
+        } catch (RatingException e) {
+            // every draft and rating was committed when its call returned; closing only ends the connection
+        }
+    }
+}
