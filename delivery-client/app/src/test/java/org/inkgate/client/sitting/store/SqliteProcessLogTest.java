@@ -173,6 +173,33 @@ class SqliteProcessLogTest {
         }
     }
 
+    @Test
+    void writeFails_eventsKeptInMemoryProblemReportedThenWrittenWhenTheDiskRecovers() throws Exception {
+        FakeClock clock = new FakeClock();
+        try (SqliteProcessLog log = SqliteProcessLog.open(dir.resolve("s" + SittingDatabase.SUFFIX), clock)) {
+            log.record(EventTypes.FOCUS_LOST, null, Map.of());
+            java.util.concurrent.CountDownLatch failing = new java.util.concurrent.CountDownLatch(2); // the second failure comes after the first was reported
+            java.util.concurrent.atomic.AtomicBoolean diskBroken = new java.util.concurrent.atomic.AtomicBoolean(true);
+            // a state write that fails until the test "repairs the disk", as a disk refusing writes would (SQLITE_IOERR)
+            log.persist(c -> {
+                if (diskBroken.get()) {
+                    failing.countDown();
+                    throw new java.sql.SQLException("disk I/O error (simulated)");
+                }
+            });
+            log.record(EventTypes.FOCUS_RETURNED, null, Map.of("awayMillis", 5));
+            failing.await();
+            assertTrue(log.problem().orElseThrow().contains("disk I/O error"), log.problem().toString());
+            log.record(EventTypes.NAV_SCREEN, null, Map.of("screen", "task"));
+            diskBroken.set(false);
+            List<ProcessEvent> events = log.events();
+            assertTrue(log.problem().isEmpty(), "a successful write clears the problem");
+            assertEquals(List.of(EventTypes.FOCUS_LOST, EventTypes.FOCUS_RETURNED, EventTypes.NAV_SCREEN),
+                    events.stream().map(ProcessEvent::type).toList());
+            assertEquals(List.of(1L, 2L, 3L), events.stream().map(ProcessEvent::seq).toList(), "no gap from the failed batches");
+        }
+    }
+
     private static String stored(SqliteProcessLog log) throws Exception {
         return log.read(c -> {
             try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT text FROM snapshots WHERE task = 't1'")) {
