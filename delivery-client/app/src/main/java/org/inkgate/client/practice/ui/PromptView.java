@@ -10,14 +10,14 @@ import javafx.scene.layout.VBox;
 import org.inkgate.client.practice.PromptText;
 
 /** A prompt's blocks as wrapped labels: headings, paragraphs and bulleted items. No web view. */
-final class PromptView extends VBox {
+public final class PromptView extends VBox {
 
-    PromptView() {
+    public PromptView() {
         getStyleClass().add("prompt-view");
         setAccessibleRole(AccessibleRole.TEXT);
     }
 
-    void show(PromptText text) {
+    public void show(PromptText text) {
         getChildren().clear();
         for (PromptText.Block block : text.blocks()) {
             getChildren().add(switch (block.kind()) {
