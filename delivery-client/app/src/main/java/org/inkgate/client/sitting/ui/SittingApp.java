@@ -62,8 +62,9 @@ public final class SittingApp extends Application {
         Map<String, String> named = getParameters().getNamed();
         String data = named.get(DATA);
         boolean demo = Boolean.parseBoolean(named.getOrDefault(DEMO, "false"));
-        flow = new SittingFlow(stage, new SittingFlow.Setup(load,
-                data == null ? null : Path.of(data), Workspaces.standard(), SittingClock.system(), demo, true));
+        String bundle = named.get(BUNDLE);
+        flow = new SittingFlow(stage, new SittingFlow.Setup(load, bundle == null ? null : Path.of(bundle),
+                data == null ? null : Path.of(data), Workspaces.standard(), SittingClock.system(), demo, true, null));
         flow.start();
     }
 

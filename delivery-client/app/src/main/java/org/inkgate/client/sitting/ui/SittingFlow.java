@@ -33,7 +33,12 @@ import org.inkgate.client.practice.PromptText;
 import org.inkgate.client.practice.TaskWording;
 import org.inkgate.client.practice.ui.RefusalView;
 import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.client.practice.WordCount;
 import org.inkgate.client.sitting.Sitting;
+import org.inkgate.client.sitting.replay.ReplayException;
+import org.inkgate.client.sitting.replay.TextReplay;
+import org.inkgate.client.sitting.submit.InstallationKey;
+import org.inkgate.client.sitting.submit.SubmissionResult;
 import org.inkgate.client.sitting.SittingClock;
 import org.inkgate.client.sitting.SittingPlan;
 import org.inkgate.client.sitting.SittingSignal;
@@ -98,18 +103,21 @@ public final class SittingFlow {
      * What a sitting window is made from.
      *
      * @param load       the opened bundle or its refusal
+     * @param bundleFile the bundle's path, recorded so recovery can name it (null: its file name only)
      * @param dataFolder the client data folder, or null for the standard one
      * @param workspaces builds each task's workspace
      * @param clock      monotonic and wall clocks
      * @param demo       the demo sitting (shows the demo-only note)
      * @param lock       lock the window (false only in tests that check the flow, not the lock)
+     * @param onExit     what exiting does after the window closed (null: end the JavaFX runtime)
      */
-    public record Setup(SittingLoad load, Path dataFolder, WorkspaceFactory workspaces, SittingClock clock,
-            boolean demo, boolean lock) {
+    public record Setup(SittingLoad load, Path bundleFile, Path dataFolder, WorkspaceFactory workspaces,
+            SittingClock clock, boolean demo, boolean lock, Runnable onExit) {
         public Setup {
             Objects.requireNonNull(load, "load");
             Objects.requireNonNull(workspaces, "workspaces");
             Objects.requireNonNull(clock, "clock");
+            onExit = Objects.requireNonNullElse(onExit, Platform::exit);
         }
     }
 
@@ -128,6 +136,7 @@ public final class SittingFlow {
     private ClientDataFolder data;
     private Path outputFolder;
     private String seat = "";
+    private String openForm;
     private Sitting sitting;
     private SittingPlan plan;
     private DisplaySettings display = DisplaySettings.standard();
@@ -138,6 +147,9 @@ public final class SittingFlow {
     private TaskScreen taskScreen;
     private boolean paused;
     private boolean taskEnding;
+    private boolean entryWaiting;
+    private SubmitScreen submitScreen;
+    private final Map<String, Integer> words = new LinkedHashMap<>();
     private final PausedCover pausedCover = new PausedCover();
     private PinPrompt pinPrompt;
     private InvigilatorPanel panel;
@@ -246,8 +258,10 @@ public final class SittingFlow {
         BundleManifest m = bundle.manifest();
         Path proposed = data.root().resolve("outbox");
         SetupScreen[] screen = new SetupScreen[1];
+        List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
+                ? m.forms().stream().map(f -> f.id()).toList() : List.of();
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
-                setup.demo() ? DEMO_NOTE : null, input -> checkSetup(screen[0], input));
+                setup.demo() ? DEMO_NOTE : null, openForms, input -> checkSetup(screen[0], input));
         shell.show(screen[0].root());
         screen[0].focus();
     }
@@ -276,6 +290,8 @@ public final class SittingFlow {
                     bundle.unseal(input.releaseCode());
                 } catch (FormatRefusal e) {
                     return e.getMessage();
+                } catch (IOException e) {
+                    return "The sealed bundle could not be read (" + e.getMessage() + "). Check the disk and try again.";
                 }
             }
             return null;
@@ -287,6 +303,7 @@ public final class SittingFlow {
             }
             outputFolder = input.outputFolder().toAbsolutePath();
             seat = input.seat();
+            openForm = input.formId();
             showSignIn();
         });
     }
@@ -308,13 +325,13 @@ public final class SittingFlow {
         SittingPlan candidate;
         try {
             candidate = SittingPlan.forCandidate(bundle.manifest(), bundle.manifestSha256(), bundleFile(), number, seat,
-                    null, clientVersion());
+                    openForm, clientVersion());
         } catch (IllegalArgumentException e) {
             screen.showError(sentence(e.getMessage()));
             return;
         }
         try {
-            sitting = Sitting.start(data, candidate, outputFolder, setup.clock());
+            sitting = Sitting.begin(candidate, data, setup.clock());
         } catch (IOException | RuntimeException e) {
             screen.showError("The sitting could not be started on this machine (" + e.getMessage()
                     + "). Ask the invigilator.");
@@ -336,14 +353,14 @@ public final class SittingFlow {
 
     private void showInstructions() {
         current = Screen.INSTRUCTIONS;
-        sitting.screen("instructions");
+        sitting.showScreen("instructions");
         BundleManifest m = plan.manifest();
         PromptText instructions = readPrompt(m.instructionsFile());
         List<String> lines = new ArrayList<>();
         for (FormSlot slot : plan.form().slots()) {
             TaskSpec task = m.task(slot.taskId()).orElseThrow();
-            lines.add(task.title() + " (" + TaskWording.time(task.timeLimitSeconds(), plan.extraTimePercent()) + "; "
-                    + TaskWording.tools(slot.policy()) + ")");
+            lines.add(task.title() + " (" + timeText(task, plan.extraTimePercent()) + "; "
+                    + String.join(", ", TaskWording.tools(slot.policy())).toLowerCase(java.util.Locale.ROOT) + ")");
         }
         InstructionsScreen screen = new InstructionsScreen(m.title(), "Candidate " + plan.candidateNumber() + ", form "
                 + plan.formId(), instructions, lines, this::afterInstructions);
@@ -354,13 +371,16 @@ public final class SittingFlow {
 
     private void startTools(InstructionsScreen screen) {
         if (shelf != null) {
+            if (screen != null) {
+                shelf.allReady().thenRun(() -> Platform.runLater(() -> screen.toolsStatus("The writing tools are ready.")));
+            }
             return;
         }
-        screen.toolsStatus("Preparing the writing tools...");
+        status(screen, "Preparing the writing tools...");
         try {
             packs = new BundlePacks(bundle);
         } catch (IOException e) {
-            screen.toolsStatus("The writing tools could not be prepared (" + e.getMessage() + "). Ask the invigilator.");
+            status(screen, "The writing tools could not be prepared (" + e.getMessage() + "). Ask the invigilator.");
             return;
         }
         List<ToolShelf.Order> orders = new ArrayList<>();
@@ -369,7 +389,13 @@ public final class SittingFlow {
             orders.add(new ToolShelf.Order(task.id(), slot.policy(), ExamWords.of(readText(task.promptFile()))));
         }
         shelf = new ToolShelf(packs.broker(), variant(), orders);
-        shelf.allReady().thenRun(() -> Platform.runLater(() -> screen.toolsStatus("The writing tools are ready.")));
+        shelf.allReady().thenRun(() -> Platform.runLater(() -> status(screen, "The writing tools are ready.")));
+    }
+
+    private static void status(InstructionsScreen screen, String text) {
+        if (screen != null) {
+            screen.toolsStatus(text);
+        }
     }
 
     private EnglishVariant variant() {
@@ -394,10 +420,10 @@ public final class SittingFlow {
 
     private void showQuestionnaire(String id, Runnable then) {
         current = Screen.QUESTIONNAIRE;
-        sitting.screen("questionnaire");
+        sitting.showScreen("questionnaire");
         QuestionnaireSpec q = plan.manifest().questionnaire(id).orElseThrow();
         QuestionnaireScreen screen = new QuestionnaireScreen(q, answers -> {
-            sitting.answer(new QuestionnaireAnswers(q.id(), answers));
+            answers.forEach((item, value) -> sitting.answer(q.id(), item, value));
             then.run();
         });
         shell.show(screen.root());
@@ -407,22 +433,19 @@ public final class SittingFlow {
     // ---- tasks ----
 
     private void startNextTask() {
-        int next = nextUnfinishedTask();
-        if (next < 0) {
-            afterTasks();
+        Optional<String> next = sitting.nextTask();
+        if (next.isEmpty()) {
+            afterTasks(false);
             return;
         }
-        enterTask(next);
-    }
-
-    private int nextUnfinishedTask() {
         List<FormSlot> slots = plan.form().slots();
         for (int i = 0; i < slots.size(); i++) {
-            if (!sitting.taskEnded(slots.get(i).taskId())) {
-                return i;
+            if (slots.get(i).taskId().equals(next.get())) {
+                enterTask(i);
+                return;
             }
         }
-        return -1;
+        throw new IllegalStateException("task " + next.get() + " is not in form " + plan.formId());
     }
 
     private void enterTask(int index) {
@@ -430,8 +453,22 @@ public final class SittingFlow {
         taskIndex = index;
         taskEnding = false;
         FormSlot slot = plan.form().slots().get(index);
-        TaskStart start = sitting.enterTask(slot.taskId());
-        shell.show(new javafx.scene.control.Label("Preparing the task..."));
+        if (paused) {
+            // a sitting recovered while paused: the task begins when the invigilator resumes
+            entryWaiting = true;
+            return;
+        }
+        sitting.showScreen("task");
+        TaskStart start;
+        try {
+            start = sitting.enterTask(slot.taskId());
+        } catch (IOException e) {
+            shell.announcer().announce("Invigilator: the task could not be started, because the saved work could not"
+                    + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
+            return;
+        }
+        shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
+                Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
         shelf.take(slot.taskId()).whenComplete((tools, failure) -> Platform.runLater(() -> {
             if (failure != null) {
                 shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
@@ -446,7 +483,7 @@ public final class SittingFlow {
             shell.show(taskScreen.root());
             shell.announcer().clear();
             if (start.mismatch().isPresent()) {
-                shell.announcer().announce("Note for the invigilator: " + start.mismatch().get().getMessage());
+                focusLine("Recovery note: " + start.mismatch().get().describe());
             }
             updateClock();
             ticker.play();
@@ -480,12 +517,23 @@ public final class SittingFlow {
             shell.time(null, "", false);
             return;
         }
-        long left = sitting.remainingMillis();
-        if (left == Long.MAX_VALUE) {
+        Optional<java.time.Duration> left = remainingNow();
+        if (left.isEmpty()) {
             shell.time("Untimed", "This task is untimed", false);
         } else {
-            shell.time(TimeText.clock(left), TimeText.spoken(left), left < 5 * 60_000);
+            long ms = left.get().toMillis();
+            shell.time(TimeText.clock(ms), TimeText.spoken(ms), ms < 5 * 60_000);
         }
+    }
+
+    /** Time left in the current task, or in the whole sitting when that is shorter; empty when neither is timed. */
+    private Optional<java.time.Duration> remainingNow() {
+        Optional<java.time.Duration> task = currentTaskId() == null ? Optional.empty() : sitting.remaining(currentTaskId());
+        Optional<java.time.Duration> whole = sitting.sittingRemaining();
+        if (task.isPresent() && whole.isPresent()) {
+            return Optional.of(task.get().compareTo(whole.get()) <= 0 ? task.get() : whole.get());
+        }
+        return task.isPresent() ? task : whole;
     }
 
     private void timeUp(boolean wholeSitting) {
@@ -512,14 +560,14 @@ public final class SittingFlow {
     private void finishTask(EndReason reason, boolean endSitting) {
         ticker.stop();
         FormSlot slot = plan.form().slots().get(taskIndex);
-        sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.caret(), workspace.wordCount(),
-                workspace.toolUse());
+        words.put(slot.taskId(), workspace.wordCount());
+        sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
         workspace.close();
         workspace = null;
         taskScreen = null;
         shell.announcer().clear();
         if (endSitting) {
-            sitting.endRemainingTasks(EndReason.TIME_UP);
+            sitting.endUnstartedTasks(EndReason.TIME_UP);
         }
         startNextTask();
     }
@@ -535,10 +583,10 @@ public final class SittingFlow {
 
     // ---- after the tasks ----
 
-    private void afterTasks() {
-        current = Screen.REVIEW;
+    /** After the last task: the post-task questionnaire (unless it was done before a restart), then the review. */
+    private void afterTasks(boolean questionnaireDone) {
         String post = plan.form().postQuestionnaire();
-        if (post != null && !sitting.answered(post)) {
+        if (post != null && !questionnaireDone) {
             showQuestionnaire(post, this::showReview);
         } else {
             showReview();
@@ -547,11 +595,11 @@ public final class SittingFlow {
 
     private void showReview() {
         current = Screen.REVIEW;
-        sitting.screen("review");
+        sitting.showScreen("review");
         List<ReviewScreen.Row> rows = new ArrayList<>();
         for (FormSlot slot : plan.form().slots()) {
             TaskSpec task = plan.manifest().task(slot.taskId()).orElseThrow();
-            rows.add(new ReviewScreen.Row(task.title(), sitting.wordCount(task.id()), guidance(task.words())));
+            rows.add(new ReviewScreen.Row(task.title(), wordsOf(task.id()), guidance(task.words())));
         }
         ReviewScreen screen = new ReviewScreen(rows, this::submit);
         shell.show(screen.root());
@@ -569,33 +617,40 @@ public final class SittingFlow {
                 : "suggested: " + words.min() + " to " + words.max();
     }
 
+    /** Words in an ended task: counted at its end, or rebuilt from the log for tasks ended before a restart. */
+    private int wordsOf(String taskId) {
+        Integer counted = words.get(taskId);
+        if (counted != null) {
+            return counted;
+        }
+        try {
+            return WordCount.of(TextReplay.replay(taskId, sitting.log().events(taskId, 0)).text());
+        } catch (IOException | ReplayException e) {
+            return 0;
+        }
+    }
+
     private void submit() {
         current = Screen.SUBMIT;
-        SubmitScreen screen = new SubmitScreen(() -> deliver(null));
-        submitScreen = screen;
-        shell.show(screen.root());
-        screen.working();
-        work(() -> sitting.submit(), this::delivered);
-    }
-
-    private SubmitScreen submitScreen;
-
-    private void deliver(Path newFolder) {
-        if (submitScreen == null) {
-            return;
-        }
+        submitScreen = new SubmitScreen(this::retryDelivery);
+        shell.show(submitScreen.root());
         submitScreen.working();
-        work(() -> sitting.retryDelivery(newFolder == null ? outputFolder : newFolder), this::delivered);
+        workOrFail(() -> sitting.submit(outputFolder, InstallationKey.loadOrCreate(data)), this::delivered);
     }
 
-    private void delivered(Sitting.Delivery delivery) {
-        if (delivery.failure().isPresent()) {
-            DeliveryFailure failure = delivery.failure().get();
-            focusLine("Hand-in failed: " + failure.message());
+    private void retryDelivery() {
+        submitScreen.working();
+        workOrFail(() -> sitting.retryDelivery(outputFolder), this::delivered);
+    }
+
+    private void delivered(SubmissionResult result) {
+        if (result.failure().isPresent()) {
+            DeliveryFailure failure = result.failure().get();
+            focusLine("Hand-in to the output folder failed: " + failure.message());
             submitScreen.failed(failure.message());
             return;
         }
-        showFinished(delivery.delivered().orElseThrow(), delivery.localCopy());
+        showFinished(result.delivered().orElseThrow(), result.localCopy());
     }
 
     private void showFinished(Path delivered, Path localCopy) {
@@ -612,57 +667,108 @@ public final class SittingFlow {
     private void showRecovery(UnfinishedSitting found) {
         current = Screen.RECOVERY;
         Instant now = setup.clock().now();
-        long down = found.downtime(now).toMillis();
+        java.time.Duration down = found.downtime(now);
         List<String> facts = new ArrayList<>();
         facts.add("Candidate: " + found.candidateNumber() + ", form " + found.formId());
-        facts.add("Task on screen: " + found.currentTask().flatMap(id -> bundle.manifest().task(id))
-                .map(TaskSpec::title).orElse("none (" + found.screen() + ")"));
-        Sitting.Found details = Sitting.inspect(found, bundle.manifest());
-        facts.add("Time left in that task: " + (details.remainingMillis() == Long.MAX_VALUE ? "untimed"
-                : TimeText.duration(details.remainingMillis())));
-        facts.add("Last saved: " + CLOCK.format(found.lastActivity()) + ", " + TimeText.duration(down) + " ago");
+        facts.add("On screen when it stopped: " + found.currentTask().flatMap(id -> bundle.manifest().task(id))
+                .map(t -> "the task \"" + t.title() + "\"").orElse(found.screen().isEmpty() ? "the start" : "the "
+                        + found.screen() + " screen"));
+        facts.add("Last saved: " + CLOCK.format(found.lastActivity()) + ", " + TimeText.duration(down.toMillis())
+                + " ago (measured on the system clock, so a changed clock distorts it)");
+        if (found.paused()) {
+            facts.add("The exam was paused by the invigilator when it stopped; it continues paused.");
+        }
         if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
             facts.add("The answers were handed in and saved on this machine, but not yet written to the output folder.");
         }
-        String creditText = "_Give back the " + TimeText.duration(down) + " the machine was down";
+        String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
-        screen[0] = new RecoveryScreen(facts, creditText, (pin, credit) -> resume(screen[0], found, pin, credit));
+        screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
+                input -> resume(screen[0], found, input, down));
         shell.show(screen[0].root());
         screen[0].focus();
     }
 
-    private void resume(RecoveryScreen screen, UnfinishedSitting found, char[] pin, boolean credit) {
-        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), pin), ok -> {
+    private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
+            java.time.Duration down) {
+        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin()), ok -> {
             if (!ok) {
                 screen.showError("That is not this exam's invigilator PIN. Enter it again.");
                 return;
             }
+            if (input.outputFolder() == null) {
+                screen.showError("Enter the output folder where response packages go.");
+                return;
+            }
             try {
-                sitting = Sitting.resume(data, found, bundle.manifest(), credit, setup.clock());
+                sitting = Sitting.resume(found, bundle.manifest(), bundle.manifestSha256(),
+                        input.credit() ? down : java.time.Duration.ZERO, data, setup.clock());
             } catch (IOException | RuntimeException e) {
                 screen.showError("The sitting could not be resumed (" + e.getMessage() + "). The saved answers are"
-                        + " still in " + found.database() + "; ask the test owner's support.");
+                        + " still in " + found.database() + "; keep that file and contact the test owner's support.");
                 return;
             }
             plan = sitting.plan();
-            outputFolder = sitting.outputFolder();
+            outputFolder = input.outputFolder().toAbsolutePath();
             seat = plan.seat();
             applyDisplay();
-            if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
-                current = Screen.SUBMIT;
-                submitScreen = new SubmitScreen(() -> deliver(null));
-                shell.show(submitScreen.root());
-                deliver(null);
-                return;
-            }
-            startTools(new InstructionsScreen(plan.manifest().title(), "", new PromptText(List.of()), List.of(), () -> {
-            }));
-            if (found.currentTask().isPresent()) {
+            focusLine("Sitting resumed after " + TimeText.duration(down.toMillis()) + (input.credit()
+                    ? "; that time was given back" : "; that time was not given back"));
+            continueRecovered(found);
+        });
+    }
+
+    /** Shows what the candidate continues with after a restart, with the time left after the invigilator's choice. */
+    private void continueRecovered(UnfinishedSitting found) {
+        if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY || sitting.submitted()) {
+            current = Screen.SUBMIT;
+            submitScreen = new SubmitScreen(this::retryDelivery);
+            shell.show(submitScreen.root());
+            retryDelivery();
+            return;
+        }
+        paused = sitting.paused();
+        if (paused) {
+            shell.cover(pausedCover);
+        }
+        Optional<String> next = sitting.nextTask();
+        String where;
+        if (next.isPresent() && found.currentTask().isPresent()) {
+            TaskSpec task = plan.manifest().task(next.get()).orElseThrow();
+            where = "The task \"" + task.title() + "\" continues with the text saved so far. "
+                    + sitting.remaining(task.id()).map(d -> TimeText.duration(d.toMillis()) + " left in it.")
+                            .orElse("It is untimed.");
+        } else if (next.isEmpty()) {
+            where = "All tasks had ended; the candidate continues with the last questions and hands in.";
+        } else {
+            where = "The candidate continues where the sitting stopped.";
+        }
+        String screenAtStop = found.screen();
+        Runnable go = () -> {
+            if (next.isEmpty()) {
+                prepareToolsQuietly();
+                afterTasks("review".equals(screenAtStop));
+            } else if (found.currentTask().isPresent() || "task".equals(screenAtStop)) {
+                prepareToolsQuietly();
                 startNextTask();
+            } else if ("questionnaire".equals(screenAtStop)) {
+                prepareToolsQuietly();
+                afterInstructions();
             } else {
                 showInstructions();
             }
-        });
+        };
+        current = Screen.RECOVERY;
+        shell.show(Parts.card("resumedScreen", Parts.heading("The sitting is ready to continue"),
+                Parts.text("Candidate " + plan.candidateNumber() + ", form " + plan.formId() + "."),
+                Parts.text(where), Parts.primary("continueButton", "_Continue", go)));
+    }
+
+    /** After a restart the instructions screen may be skipped, but the tools must still be prepared. */
+    private void prepareToolsQuietly() {
+        if (shelf == null) {
+            startTools(null);
+        }
     }
 
     // ---- invigilator ----
@@ -706,7 +812,7 @@ public final class SittingFlow {
             @Override
             public void addMinutes(int minutes) {
                 if (current == Screen.TASK && sitting != null) {
-                    sitting.addTime(minutes * 60L);
+                    sitting.addTime(java.time.Duration.ofMinutes(minutes));
                     shell.announcer().announce(minutes + (minutes == 1 ? " minute was" : " minutes were")
                             + " added to this task.");
                     updateClock();
@@ -754,8 +860,7 @@ public final class SittingFlow {
                 TaskSpec task = plan.manifest().task(plan.form().slots().get(taskIndex).taskId()).orElseThrow();
                 state.append("Task ").append(taskIndex + 1).append(" of ").append(plan.form().slots().size())
                         .append(": ").append(task.title()).append(", ");
-                long left = sitting.remainingMillis();
-                state.append(left == Long.MAX_VALUE ? "untimed" : TimeText.duration(left) + " left");
+                state.append(remainingNow().map(d -> TimeText.duration(d.toMillis()) + " left").orElse("untimed"));
                 state.append(". ");
             } else {
                 state.append("Screen: ").append(current.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '))
@@ -788,12 +893,17 @@ public final class SittingFlow {
                 freeze(false);
             }
             shell.announcer().announce("The exam has resumed. Your time is running again.");
+            if (entryWaiting) {
+                entryWaiting = false;
+                startNextTask();
+            }
         }
     }
 
     private void exitByInvigilator() {
-        if (sitting != null) {
-            sitting.exitByInvigilator();
+        if (sitting != null && !sitting.submitted()) {
+            // not an end of the sitting: it stays in the data folder and resumes on the next start
+            sitting.log().record(EventTypes.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
         }
         exitApplication();
     }
@@ -853,7 +963,15 @@ public final class SittingFlow {
     }
 
     private String bundleFile() {
-        return bundle.fileName();
+        return setup.bundleFile() == null ? bundle.fileName() : setup.bundleFile().toString();
+    }
+
+    private static String timeText(TaskSpec task, int extraPercent) {
+        if (task.timeLimitSeconds() <= 0) {
+            return "untimed";
+        }
+        long seconds = task.timeLimitSeconds() + task.timeLimitSeconds() * (long) extraPercent / 100;
+        return TimeText.duration(seconds * 1000) + (extraPercent > 0 ? " with your extra time" : "");
     }
 
     private static String clientVersion() {
@@ -878,6 +996,32 @@ public final class SittingFlow {
         return s.endsWith(".") ? s : s + ".";
     }
 
+    /** Work that may fail with an I/O error. */
+    @FunctionalInterface
+    private interface IoJob<T> {
+        T run() throws IOException;
+    }
+
+    /** As {@link #work}, for submission: an I/O failure keeps the retry screen up with its message. */
+    private <T> void workOrFail(IoJob<T> job, java.util.function.Consumer<T> then) {
+        CompletableFuture.supplyAsync(() -> {
+            try {
+                return job.run();
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        }, background).whenComplete((result, failure) -> Platform.runLater(() -> {
+            if (failure != null) {
+                String message = "The answers could not be saved as a response package (" + rootMessage(failure)
+                        + "). Everything typed is still in this machine's sitting database.";
+                focusLine(message);
+                submitScreen.failed(message);
+                return;
+            }
+            then.accept(result);
+        }));
+    }
+
     /** Runs slow work (PIN hashing, disk) off the JavaFX thread and hands the result back to it. */
     private <T> void work(Supplier<T> job, java.util.function.Consumer<T> then) {
         CompletableFuture.supplyAsync(job, background).whenComplete((result, failure) -> Platform.runLater(() -> {
@@ -895,7 +1039,7 @@ public final class SittingFlow {
             lock.release();
         }
         stage.close();
-        Platform.exit();
+        setup.onExit().run();
     }
 
     /** Closes what the sitting holds (tools, bundle, core); never throws. */

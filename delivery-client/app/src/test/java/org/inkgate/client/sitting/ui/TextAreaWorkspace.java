@@ -100,6 +100,11 @@ public final class TextAreaWorkspace implements TaskWorkspace {
         return use;
     }
 
+    /** Whether the text can be changed now (false while frozen). */
+    public boolean textEditable() {
+        return area.isEditable();
+    }
+
     /** True once the flow closed this workspace. */
     public boolean closed() {
         return closed;

@@ -4,7 +4,9 @@ import java.io.File;
 import java.nio.file.Path;
 import java.util.function.Consumer;
 import javafx.scene.Parent;
+import java.util.List;
 import javafx.scene.control.Button;
+import javafx.scene.control.ComboBox;
 import javafx.scene.control.Label;
 import javafx.scene.control.PasswordField;
 import javafx.scene.control.TextField;
@@ -21,13 +23,14 @@ import org.inkgate.client.sitting.ui.Parts;
 public final class SetupScreen {
 
     /** What the invigilator entered; the flow checks it and answers with {@link #showError}. */
-    public record Input(char[] pin, Path outputFolder, String seat, char[] releaseCode) {
+    public record Input(char[] pin, Path outputFolder, String seat, char[] releaseCode, String formId) {
     }
 
     private final PasswordField pin = new PasswordField();
     private final TextField output = new TextField();
     private final TextField seat = new TextField();
     private final PasswordField release = new PasswordField();
+    private final ComboBox<String> form = new ComboBox<>();
     private final Label error = Parts.errorLine("setupError");
     private final Button go;
     private final Parent root;
@@ -38,9 +41,10 @@ public final class SetupScreen {
      * @param sealed      whether a release code is needed
      * @param defaultOutput the folder proposed for response packages
      * @param demoNote    a demo-only hint (PIN of the demo bundle), or null for a real bundle
+     * @param openForms   the forms to choose from when the bundle has no roster and several forms; else empty
      */
     public SetupScreen(String examTitle, String signer, boolean sealed, Path defaultOutput, String demoNote,
-            Consumer<Input> onContinue) {
+            List<String> openForms, Consumer<Input> onContinue) {
         pin.setId("setupPin");
         pin.setAccessibleText("Invigilator PIN");
         output.setId("setupOutput");
@@ -50,32 +54,40 @@ public final class SetupScreen {
         seat.setAccessibleText("Seat or machine label");
         release.setId("setupRelease");
         release.setAccessibleText("Release code");
+        form.setId("setupForm");
+        form.setAccessibleText("Form for the candidates at this machine");
+        form.getItems().setAll(openForms);
+        form.getSelectionModel().selectFirst();
         HBox.setHgrow(output, Priority.ALWAYS);
         Button browse = Parts.plain("setupBrowse", "_Choose...", this::browse);
         go = Parts.primary("setupContinue", "_Continue", () -> onContinue.accept(new Input(pin.getText().toCharArray(),
                 output.getText().isBlank() ? null : Path.of(output.getText().strip()), seat.getText().strip(),
-                sealed ? release.getText().toCharArray() : null)));
+                sealed ? release.getText().toCharArray() : null, form.getValue())));
 
-        VBox form = new VBox(10,
+        VBox fields = new VBox(10,
                 Parts.heading("Invigilator set-up"),
                 Parts.text(examTitle),
                 Parts.quiet("Signed by key " + signer + ". Compare it with the fingerprint the test owner published."),
                 Parts.fieldLabel("Invigilator _PIN", pin), pin,
                 Parts.fieldLabel("_Output folder for the response packages", output), new HBox(10, output, browse),
-                Parts.quiet("Each candidate's response package is written here when they submit, and a copy is"
+                Parts.quiet("Each candidate's response package is written here when they hand in, and a copy is"
                         + " always kept on this machine as well."),
                 Parts.fieldLabel("_Seat or machine label (optional)", seat), seat);
         if (sealed) {
-            form.getChildren().addAll(Parts.fieldLabel("_Release code (as printed, with dashes)", release), release);
+            fields.getChildren().addAll(Parts.fieldLabel("_Release code (as printed, with dashes)", release), release);
+        }
+        if (!openForms.isEmpty()) {
+            fields.getChildren().addAll(Parts.fieldLabel("_Form: this bundle has no roster, so choose the form the"
+                    + " test owner assigned to this machine", form), form);
         }
         if (demoNote != null) {
             Label demo = Parts.text(demoNote);
             demo.setId("demoNote");
             demo.getStyleClass().add("demo-note");
-            form.getChildren().add(demo);
+            fields.getChildren().add(demo);
         }
-        form.getChildren().addAll(error, go);
-        root = Parts.card("setupScreen", form);
+        fields.getChildren().addAll(error, go);
+        root = Parts.card("setupScreen", fields);
     }
 
     public Parent root() {
