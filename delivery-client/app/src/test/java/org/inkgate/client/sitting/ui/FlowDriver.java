@@ -145,6 +145,13 @@ final class FlowDriver {
         await("editor", Node.class);
     }
 
+    /** Types through the robot (real key events, through the lock's filters) into the task's editor. */
+    void typeInEditor(String text) {
+        robot.interact(() -> workspace().focusEditor());
+        robot.write(text);
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
     void finishTask() {
         press("finishTaskButton");
         press("confirmFinishButton");

@@ -117,13 +117,16 @@ class SittingFlowTest {
         d.press("startButton");
 
         d.awaitTask("A note to a neighbour");
-        robot.clickOn("#editor").write("Dear Sam, thank you.");
+        d.typeInEditor("Dear Sam, thank you.");
         String first = d.workspace().text();
+        // another program takes the screen and gives it back (set as the platform does; Monocle cannot switch windows)
+        robot.interact(() -> com.sun.javafx.stage.WindowHelper.setFocused(stage, false));
+        robot.interact(() -> com.sun.javafx.stage.WindowHelper.setFocused(stage, true));
+        assertEquals(2, d.flow.focusLines().size(), d.flow.focusLines().toString());
         d.finishTask();
 
         d.awaitTask("The empty shop on Mill Street");
-        robot.interact(() -> d.workspace().focusEditor());
-        robot.write("The shop could be a cafe.");
+        d.typeInEditor("The shop could be a cafe.");
         String second = d.workspace().text();
         d.finishTask();
 
@@ -159,8 +162,36 @@ class SittingFlowTest {
         assertEquals(TaskResponse.EndReason.SUBMITTED, tasks.get(0).endReason());
         assertEquals("4", opened.response().questionnaires().getFirst().answers().get("clear-instructions"));
         List<String> types = opened.events().stream().map(ProcessEvent::type).toList();
-        assertTrue(types.containsAll(List.of("sitting.start", "task.start", "text.insert", "task.end", "sitting.end")),
-                types.toString());
+        assertTrue(types.containsAll(List.of("sitting.start", "task.start", "text.insert", "task.end", "sitting.end",
+                "focus.lost", "focus.returned")), types.toString());
+    }
+
+    @Test
+    void handIn_outputFolderGone_showsRetryAndDeliversOnceItIsBack(FxRobot robot) throws Exception {
+        FlowDriver d = driver();
+        Path out = temp.resolve("stick");
+        d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
+        d.setUp(FlowDriver.demoPin(), out);
+        d.signIn("D1002");
+        d.press("startButton");
+        d.awaitTask("The empty shop on Mill Street");
+        d.finishTask();
+        d.awaitTask("A note to a neighbour");
+        d.finishTask();
+        d.press("questionnaireDone");
+        d.check("confirmCheck");
+        // the stick is pulled out before the hand-in
+        Files.delete(out);
+        d.press("submitButton");
+
+        d.awaitText("submitError", "not there");
+        assertTrue(d.text("submitStatus").contains("safe on this machine"), d.text("submitStatus"));
+        Files.createDirectories(out);
+        d.press("retryButton");
+        d.await("finishedScreen", Node.class);
+        try (Stream<Path> files = Files.list(out)) {
+            assertEquals(1, files.filter(p -> p.toString().endsWith(".inkresp")).count());
+        }
     }
 
     @Test
@@ -189,6 +220,7 @@ class SittingFlowTest {
 
         d.press("pauseButton");
         assertTrue(robot.lookup("#pausedCover").tryQuery().isPresent(), "no pause cover");
+        assertTrue(d.text("invigilatorState").contains("PAUSED"), d.text("invigilatorState"));
         assertFalse(d.workspace().textEditable(), "editor still editable while paused");
         clock.advance(java.time.Duration.ofSeconds(300));
         WaitForAsyncUtils.sleep(500, java.util.concurrent.TimeUnit.MILLISECONDS);
@@ -240,7 +272,7 @@ class SittingFlowTest {
         first.press("startButton");
         // D1002 sits form B: mill-street-shop first (sitting.json, exam.json)
         first.awaitTask("The empty shop on Mill Street");
-        robot.clickOn("#editor").write("Saved before the crash.");
+        first.typeInEditor("Saved before the crash.");
         String typed = first.workspace().text();
         // the log is durable within 0.5 s; wait well past that, then drop the window as a crash would
         WaitForAsyncUtils.sleep(1500, java.util.concurrent.TimeUnit.MILLISECONDS);
