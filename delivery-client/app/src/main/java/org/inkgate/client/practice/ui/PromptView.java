@@ -9,7 +9,7 @@ import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.inkgate.client.practice.PromptText;
 
-/** A prompt's blocks as wrapped labels: headings, paragraphs and bulleted items. No web view. */
+/** A prompt's blocks as wrapped labels: headings, paragraphs and bulleted items. No web view. Also shown in a sitting's task workspace. */
 public final class PromptView extends VBox {
 
     public PromptView() {
