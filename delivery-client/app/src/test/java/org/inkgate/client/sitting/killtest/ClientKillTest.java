@@ -21,7 +21,6 @@ import org.inkgate.format.testutil.SampleExam;
 import org.inkgate.format.testutil.TestKeys;
 import org.inkgate.packs.policy.ResourcePolicy;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The issue's kill test on the real client: {@link HookedClient} runs the real launcher (live
@@ -34,14 +33,16 @@ import org.junit.jupiter.api.io.TempDir;
 class ClientKillTest {
 
     private static final long SEED = 20261202L;
-    private static final int KILLS = 24;
+    /** 24 kills; a smaller number may be asked for while working on the test (-Dinkgate.killtest.kills=N). */
+    private static final int KILLS = Integer.getInteger("inkgate.killtest.kills", 24);
     private static final String PIN = "kill-test-pin-4711";
-
-    @TempDir
-    Path dir;
 
     @Test
     void sigkillAtRandomMoments_restartedClientKeepsEverythingTypedMoreThanHalfASecondBefore() throws Exception {
+        // kept under target/ after the run, so that a failure can be examined (child stderr, sitting databases)
+        Path dir = Path.of("target", "kill-test", "client-run").toAbsolutePath();
+        deleteTree(dir);
+        Files.createDirectories(dir);
         Path bundle = testBundle(dir);
         Path data = Files.createDirectories(dir.resolve("data"));
         Path output = Files.createDirectories(dir.resolve("out"));
@@ -103,6 +104,17 @@ class ClientKillTest {
             return s.length() > 4000 ? s.substring(s.length() - 4000) : s;
         } catch (java.io.IOException e) {
             return e.getMessage();
+        }
+    }
+
+    static void deleteTree(Path dir) throws java.io.IOException {
+        if (!Files.exists(dir)) {
+            return;
+        }
+        try (var paths = Files.walk(dir)) {
+            for (Path p : paths.sorted(java.util.Comparator.reverseOrder()).toList()) {
+                Files.delete(p);
+            }
         }
     }
 }

@@ -107,6 +107,8 @@ public final class HookedClient {
         final String candidate;
         GenericStyledArea<?, ?, ?> area;
         long lastAction;
+        /** Buttons already pressed: each is pressed once, as a person would, never again while its screen waits. */
+        final java.util.Set<Node> pressed = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
 
         Flow(String pin, Path output, String candidate) {
             this.pin = pin;
@@ -133,16 +135,16 @@ public final class HookedClient {
                     }
                     return Optional.empty();
                 }
-                // one action per step and at most one a second, so the flow can answer in between
-                if (System.nanoTime() - lastAction < TimeUnit.SECONDS.toNanos(1)) {
+                // one action per step and at most one every 0.3 s, so the flow can answer in between
+                if (System.nanoTime() - lastAction < TimeUnit.MILLISECONDS.toNanos(300)) {
                     return Optional.empty();
                 }
-                if (fill(root, "recoveryPin", pin)) {
+                if (ready(root, "resumeButton") && fill(root, "recoveryPin", pin)) {
                     act(root, "resumeButton");
-                } else if (fill(root, "setupPin", pin)) {
+                } else if (ready(root, "setupContinue") && fill(root, "setupPin", pin)) {
                     fill(root, "setupOutput", output.toString());
                     act(root, "setupContinue");
-                } else if (fill(root, "candidateNumber", candidate)) {
+                } else if (ready(root, "signInButton") && fill(root, "candidateNumber", candidate)) {
                     act(root, "signInButton");
                 } else {
                     for (String id : new String[] {"continueButton", "startButton"}) {
@@ -163,12 +165,17 @@ public final class HookedClient {
             return false;
         }
 
-        private boolean act(Parent root, String id) {
+        /** Whether the button is showing, enabled and not yet pressed. */
+        private boolean ready(Parent root, String id) {
             Node node = root.lookup("#" + id);
-            if (node instanceof ButtonBase button && shown(button) && !button.isDisabled()) {
-                if (button instanceof CheckBox) {
-                    return false;
-                }
+            return node instanceof ButtonBase button && !(button instanceof CheckBox) && shown(button) && !button.isDisabled()
+                    && !pressed.contains(button);
+        }
+
+        private boolean act(Parent root, String id) {
+            if (ready(root, id)) {
+                ButtonBase button = (ButtonBase) root.lookup("#" + id);
+                pressed.add(button);
                 button.fire();
                 lastAction = System.nanoTime();
                 return true;

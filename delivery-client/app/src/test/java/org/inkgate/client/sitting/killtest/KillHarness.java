@@ -235,6 +235,9 @@ final class KillHarness {
         try (BufferedReader r = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
             for (String line = r.readLine(); line != null; line = r.readLine()) {
                 lines.add(new Object[] {line, System.nanoTime()});
+                if (!line.startsWith(TypingProtocol.ACK)) {
+                    System.err.println("[child] " + (line.length() > 200 ? line.substring(0, 200) + "..." : line));
+                }
             }
         } catch (IOException e) {
             // the process was killed

@@ -200,6 +200,20 @@ class SqliteProcessLogTest {
         }
     }
 
+    @Test
+    void open_sittingAlreadyOpen_isRefusedUntilTheFirstLogCloses() throws Exception {
+        Path file = dir.resolve("s" + SittingDatabase.SUFFIX);
+        FakeClock clock = new FakeClock();
+        try (SqliteProcessLog first = SqliteProcessLog.open(file, clock)) {
+            first.record(EventTypes.FOCUS_LOST, null, Map.of());
+            java.io.IOException e = assertThrows(java.io.IOException.class, () -> SqliteProcessLog.open(file, clock));
+            assertTrue(e.getMessage().contains("already open"), e.getMessage());
+        }
+        try (SqliteProcessLog again = SqliteProcessLog.open(file, clock)) {
+            assertEquals(1, again.events().size());
+        }
+    }
+
     private static String stored(SqliteProcessLog log) throws Exception {
         return log.read(c -> {
             try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT text FROM snapshots WHERE task = 't1'")) {
