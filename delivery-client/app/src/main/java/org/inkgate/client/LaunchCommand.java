@@ -1,23 +1,38 @@
 package org.inkgate.client;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Objects;
+import java.util.Set;
 
 /** What the launcher was asked to do, parsed from its arguments. */
 public sealed interface LaunchCommand {
 
     /** The usage text {@code --help} prints. */
     String USAGE = """
-            Usage: inkgate-client --practice [FILE.inkexam]
+            Usage: inkgate-client --sitting FILE.inkexam --owner-key FINGERPRINT [--data FOLDER]
+                   inkgate-client FILE.inkexam --owner-key FINGERPRINT [--data FOLDER]
+                   inkgate-client --demo [--data FOLDER]
+                   inkgate-client --practice [FILE.inkexam]
                    inkgate-client --help
 
-              --practice              open the built-in demo exam (invented content) in practice mode
+              --sitting FILE.inkexam  open a live sitting: locked full screen, invigilator PIN, roster
+              --owner-key FINGERPRINT the test owner's published key fingerprint; only a bundle signed
+                                      by that key is opened (repeat the option to allow several)
+              --data FOLDER           where this machine keeps sittings in progress, logs and local
+                                      copies of response packages (default: the user's data folder)
+              --demo                  open the invented demo exam as a locked sitting; its PIN and
+                                      candidate numbers are printed here (DEMO ONLY, NOT SECRET)
+              --practice              open the demo exam (invented content) in practice mode
               --practice FILE.inkexam open a practice bundle in practice mode
               --help                  show this help
 
-            Practice mode does not lock the machine and submits nothing. It opens only practice
-            bundles; a bundle made for a live sitting is refused. This version has no live mode yet.""";
+            A live sitting locks the window as far as an application can; the operating system's own
+            kiosk or assigned-access setting must do the rest (see docs/invigilator-guide.md).
+            Practice mode does not lock the machine and submits nothing; it opens only practice
+            bundles.""";
 
     /** Print the usage text. */
     record ShowHelp() implements LaunchCommand {
@@ -34,6 +49,24 @@ public sealed interface LaunchCommand {
         }
     }
 
+    /** The locked sitting on the demo's live bundle, trusting the published demo key. */
+    record DemoSitting(Path dataFolder) implements LaunchCommand {
+    }
+
+    /**
+     * A live sitting.
+     *
+     * @param bundle     the exam bundle
+     * @param ownerKeys  fingerprints of the owner keys to trust
+     * @param dataFolder the data folder, or null for the default
+     */
+    record Sitting(Path bundle, Set<String> ownerKeys, Path dataFolder) implements LaunchCommand {
+        public Sitting {
+            Objects.requireNonNull(bundle, "bundle");
+            ownerKeys = Set.copyOf(ownerKeys);
+        }
+    }
+
     /**
      * Parses the launcher's arguments.
      *
@@ -41,16 +74,84 @@ public sealed interface LaunchCommand {
      */
     static LaunchCommand parse(List<String> args) {
         if (args.isEmpty()) {
-            throw new IllegalArgumentException("no mode was given. This version has only practice mode:"
-                    + " run with --practice to open the demo exam, or --practice FILE.inkexam.");
+            throw new IllegalArgumentException("no mode was given. Run with --sitting FILE.inkexam --owner-key"
+                    + " FINGERPRINT for a live sitting, --demo for the demo sitting, or --practice to practise.");
         }
         String first = args.getFirst();
         return switch (first) {
             case "--help", "-h" -> onlyArgument(args, new ShowHelp());
             case "--practice" -> practice(args.subList(1, args.size()));
-            default -> throw new IllegalArgumentException("unknown argument \"" + first
-                    + "\". Use --practice [FILE.inkexam] or --help.");
+            case "--demo" -> demo(args.subList(1, args.size()));
+            case "--sitting" -> sitting(args.subList(1, args.size()));
+            default -> {
+                if (!first.startsWith("-")) {
+                    yield sitting(args);
+                }
+                throw new IllegalArgumentException("unknown argument \"" + first
+                        + "\". Use --sitting FILE.inkexam --owner-key FINGERPRINT, --demo, --practice [FILE.inkexam] or --help.");
+            }
         };
+    }
+
+    private static LaunchCommand demo(List<String> rest) {
+        Options options = Options.parse(rest);
+        if (!options.files().isEmpty()) {
+            throw new IllegalArgumentException("--demo opens the built-in demo bundle and takes no bundle file; got "
+                    + String.join(" ", options.files()) + ". For another bundle use --sitting FILE.inkexam.");
+        }
+        if (!options.ownerKeys().isEmpty()) {
+            throw new IllegalArgumentException("--demo trusts only the published demo key; leave out --owner-key.");
+        }
+        return new DemoSitting(options.dataFolder());
+    }
+
+    private static LaunchCommand sitting(List<String> rest) {
+        Options options = Options.parse(rest);
+        if (options.files().size() != 1) {
+            throw new IllegalArgumentException("a live sitting needs exactly one bundle file, got "
+                    + (options.files().isEmpty() ? "none" : String.join(" ", options.files())) + ".");
+        }
+        if (options.ownerKeys().isEmpty()) {
+            throw new IllegalArgumentException("a live sitting opens only bundles signed by the test owner's key:"
+                    + " give the fingerprint the test owner published with --owner-key FINGERPRINT.");
+        }
+        return new Sitting(Path.of(options.files().getFirst()), options.ownerKeys(), options.dataFolder());
+    }
+
+    /** The options of --sitting and --demo. */
+    record Options(List<String> files, Set<String> ownerKeys, Path dataFolder) {
+        static Options parse(List<String> args) {
+            List<String> files = new ArrayList<>();
+            Set<String> keys = new LinkedHashSet<>();
+            Path data = null;
+            for (int i = 0; i < args.size(); i++) {
+                String arg = args.get(i);
+                switch (arg) {
+                    case "--owner-key" -> keys.add(value(args, i++, arg));
+                    case "--data" -> {
+                        if (data != null) {
+                            throw new IllegalArgumentException("--data is given twice; give one data folder.");
+                        }
+                        data = Path.of(value(args, i++, arg));
+                    }
+                    default -> {
+                        if (arg.startsWith("-")) {
+                            throw new IllegalArgumentException("unknown option \"" + arg
+                                    + "\". A sitting takes --owner-key FINGERPRINT and --data FOLDER.");
+                        }
+                        files.add(arg);
+                    }
+                }
+            }
+            return new Options(files, keys, data);
+        }
+
+        private static String value(List<String> args, int i, String option) {
+            if (i + 1 >= args.size() || args.get(i + 1).startsWith("--")) {
+                throw new IllegalArgumentException(option + " needs a value after it.");
+            }
+            return args.get(i + 1);
+        }
     }
 
     private static LaunchCommand practice(List<String> rest) {

@@ -5,8 +5,11 @@ import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.nio.charset.StandardCharsets;
+import java.util.Set;
 import javafx.application.Application;
 import org.inkgate.client.practice.ui.PracticeApp;
+import org.inkgate.client.sitting.ui.SittingApp;
 
 /**
  * The client's entry point. A plain class on purpose: a main class that extends Application
@@ -17,6 +20,15 @@ public final class Launcher {
 
     /** Where the build puts the demo practice bundle (invented content, signed with published demo keys). */
     static final String DEMO_BUNDLE = "/org/inkgate/client/demo/demo.inkexam";
+    /** Where the build puts the demo's live-sitting bundle (same invented exam, demo PIN and roster). */
+    static final String DEMO_SITTING_BUNDLE = "/org/inkgate/client/demo/demo-sitting.inkexam";
+    /** The demo sitting's console note (PIN, candidate numbers), written by the build beside the bundle. */
+    static final String DEMO_SITTING_NOTE = DEMO_SITTING_BUNDLE + ".note.txt";
+    /**
+     * Fingerprint of the published demo owner key (src/demo/keys, DEMO ONLY, NOT SECRET); the demo
+     * sitting trusts it and nothing else. docs/formats.md quotes the same value.
+     */
+    static final String DEMO_OWNER_KEY = "ea65-29d8-0e73-07ce-4539-0272-4901-ddde";
 
     private static final int USAGE_ERROR = 2;
 
@@ -39,6 +51,12 @@ public final class Launcher {
                 case LaunchCommand.ShowHelp help -> System.out.println(LaunchCommand.USAGE);
                 case LaunchCommand.PracticeDemo demo -> practise(demoBundleCopy());
                 case LaunchCommand.PracticeFile file -> practise(file.bundle());
+                case LaunchCommand.DemoSitting demo -> {
+                    System.out.println(demoNote());
+                    sit(copyResource(DEMO_SITTING_BUNDLE, "demo-sitting.inkexam"), Set.of(DEMO_OWNER_KEY),
+                            demo.dataFolder(), true);
+                }
+                case LaunchCommand.Sitting sitting -> sit(sitting.bundle(), sitting.ownerKeys(), sitting.dataFolder(), false);
             }
         } catch (CannotStart e) {
             System.err.println("inkgate-client: " + e.getMessage());
@@ -50,19 +68,41 @@ public final class Launcher {
         Application.launch(PracticeApp.class, "--" + PracticeApp.BUNDLE_PARAMETER + "=" + bundle.toAbsolutePath());
     }
 
+    private static void sit(Path bundle, Set<String> ownerKeys, Path dataFolder, boolean demo) {
+        Application.launch(SittingApp.class, SittingApp.arguments(bundle.toAbsolutePath(), ownerKeys,
+                dataFolder == null ? null : dataFolder.toAbsolutePath(), demo).toArray(String[]::new));
+    }
+
+    /** The demo sitting's PIN and candidate numbers, as the build wrote them (DEMO ONLY, NOT SECRET). */
+    static String demoNote() throws CannotStart {
+        try (InputStream in = Launcher.class.getResourceAsStream(DEMO_SITTING_NOTE)) {
+            if (in == null) {
+                throw new CannotStart("the demo sitting is not in this build (" + DEMO_SITTING_NOTE
+                        + "). Build the client with Maven, which writes it from delivery-client/app/src/demo.");
+            }
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8).strip();
+        } catch (IOException e) {
+            throw new CannotStart("could not read the demo sitting's note (" + e.getMessage() + ")");
+        }
+    }
+
     /**
      * Copies the embedded demo bundle to a private temporary file, because the bundle reader
      * reads files, not class path resources. The copy is deleted when the client exits.
      */
     static Path demoBundleCopy() throws CannotStart {
-        try (InputStream in = Launcher.class.getResourceAsStream(DEMO_BUNDLE)) {
+        return copyResource(DEMO_BUNDLE, "demo.inkexam");
+    }
+
+    private static Path copyResource(String resource, String fileName) throws CannotStart {
+        try (InputStream in = Launcher.class.getResourceAsStream(resource)) {
             if (in == null) {
-                throw new CannotStart("the demo bundle is not in this build (" + DEMO_BUNDLE
+                throw new CannotStart("the demo bundle is not in this build (" + resource
                         + "). Build the client with Maven, which writes it from delivery-client/app/src/demo.");
             }
             Path folder = Files.createTempDirectory("inkgate-demo-");
             folder.toFile().deleteOnExit();
-            Path copy = folder.resolve("demo.inkexam");
+            Path copy = folder.resolve(fileName);
             copy.toFile().deleteOnExit();
             Files.copy(in, copy);
             return copy;

@@ -25,6 +25,21 @@ class ArchitectureTest {
             .because("the demo bundle build runs inside Maven, without a display");
 
     @ArchTest
+    static final ArchRule sittingCore_importsNoJavaFx = noClasses()
+            .that().resideInAPackage("org.inkgate.client.sitting..")
+            .and().resideOutsideOfPackage("org.inkgate.client.sitting.ui..")
+            .should().dependOnClassesThat().resideInAPackage("javafx..")
+            .because("the sitting core (log, state, timers, recovery, submission) runs and is tested without a display;"
+                    + " only sitting.ui binds it to JavaFX");
+
+    @ArchTest
+    static final ArchRule sittingCore_doesNotWriteToStandardStreams = noClasses()
+            .that().resideInAPackage("org.inkgate.client.sitting..")
+            .and().resideOutsideOfPackage("org.inkgate.client.sitting.ui..")
+            .should(ACCESS_STANDARD_STREAMS)
+            .because("the sitting core reports through return values and signals; the UI decides what people see");
+
+    @ArchTest
     static final ArchRule practiceModel_doesNotDependOnViews = noClasses()
             .that().resideInAPackage("org.inkgate.client.practice")
             .should().dependOnClassesThat().resideInAPackage("org.inkgate.client.practice.ui..");

@@ -9,15 +9,15 @@ import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.inkgate.client.practice.PromptText;
 
-/** A prompt's blocks as wrapped labels: headings, paragraphs and bulleted items. No web view. */
-final class PromptView extends VBox {
+/** A prompt's blocks as wrapped labels: headings, paragraphs and bulleted items. No web view. Also shown in a sitting's task workspace. */
+public final class PromptView extends VBox {
 
-    PromptView() {
+    public PromptView() {
         getStyleClass().add("prompt-view");
         setAccessibleRole(AccessibleRole.TEXT);
     }
 
-    void show(PromptText text) {
+    public void show(PromptText text) {
         getChildren().clear();
         for (PromptText.Block block : text.blocks()) {
             getChildren().add(switch (block.kind()) {

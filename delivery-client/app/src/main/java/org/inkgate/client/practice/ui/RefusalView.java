@@ -7,7 +7,7 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.VBox;
 
 /** Shown instead of the exam when a bundle is refused: the reason and nothing from the bundle. */
-final class RefusalView extends VBox {
+public final class RefusalView extends VBox {
 
     static final String HEADING = "This exam bundle was not opened";
     static final String ADVICE = "Nothing from this bundle is shown. Follow the advice above, or ask the person"
@@ -15,7 +15,7 @@ final class RefusalView extends VBox {
 
     private final Button close = new Button("_Close");
 
-    RefusalView(String message, Runnable onClose) {
+    public RefusalView(String message, Runnable onClose) {
         getStyleClass().add("refusal-view");
         setAlignment(Pos.TOP_LEFT);
         Label heading = new Label(HEADING);
@@ -40,7 +40,7 @@ final class RefusalView extends VBox {
         getChildren().add(card);
     }
 
-    Button closeButton() {
+    public Button closeButton() {
         return close;
     }
 }

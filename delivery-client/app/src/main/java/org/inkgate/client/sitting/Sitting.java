@@ -1,0 +1,848 @@
+package org.inkgate.client.sitting;
+
+import com.fasterxml.jackson.core.type.TypeReference;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Duration;
+import java.security.PublicKey;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.Base64;
+import java.util.EnumMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.TreeSet;
+import java.util.UUID;
+import java.util.concurrent.TimeUnit;
+import java.util.stream.Collectors;
+import org.inkgate.client.sitting.recovery.RecoveryScan;
+import org.inkgate.client.sitting.recovery.TextRecovery;
+import org.inkgate.client.sitting.recovery.UnfinishedSitting;
+import org.inkgate.client.sitting.replay.ReplayException;
+import org.inkgate.client.sitting.replay.ReplayMismatch;
+import org.inkgate.client.sitting.replay.TextReplay;
+import org.inkgate.client.sitting.store.ClientDataFolder;
+import org.inkgate.client.sitting.store.SittingDatabase;
+import org.inkgate.client.sitting.store.SqliteProcessLog;
+import org.inkgate.client.sitting.submit.InstallationKey;
+import org.inkgate.client.sitting.submit.PackageDelivery;
+import org.inkgate.client.sitting.submit.SubmissionResult;
+import org.inkgate.client.sitting.timing.Countdown;
+import org.inkgate.format.bundle.BundleManifest;
+import org.inkgate.format.bundle.FormSlot;
+import org.inkgate.format.bundle.QuestionItem;
+import org.inkgate.format.bundle.QuestionnaireSpec;
+import org.inkgate.format.bundle.TaskSpec;
+import org.inkgate.format.crypto.X25519;
+import org.inkgate.format.io.AtomicFiles;
+import org.inkgate.format.json.Json;
+import org.inkgate.format.response.ProcessEvent;
+import org.inkgate.format.response.QuestionnaireAnswers;
+import org.inkgate.format.response.ResponseDocument;
+import org.inkgate.format.response.ResponsePackageWriter;
+import org.inkgate.format.response.TaskResponse;
+import org.inkgate.format.response.TaskResponse.EndReason;
+import org.inkgate.format.response.ToolUse;
+import org.inkgate.packs.policy.ResourcePolicy;
+import org.inkgate.packs.policy.Tool;
+
+/**
+ * One candidate's sitting: the operations the sitting flow needs (enter and end tasks, answer
+ * questionnaires, pause, add time, submit), each recorded in the process log and kept durable in
+ * the sitting's database, so that {@link #resume} can carry on after a crash. Time is counted by
+ * {@link Countdown}s on the monotonic clock; the UI drives them by calling {@link #poll()} from a
+ * timeline (a few times a second) and acting on the {@link SittingSignal}s it returns.
+ *
+ * <p>Not thread-safe: call every method from one thread (the JavaFX application thread). Only
+ * the process log's own writer thread touches the disk, except {@link #submit} and
+ * {@link #retryDelivery}, which write the package and should run off the UI thread.
+ */
+public final class Sitting implements AutoCloseable {
+
+    /** Timer state is written at least this often while time runs, so a restart loses at most this much. */
+    public static final long CHECKPOINT_MILLIS = 1_000;
+
+    private static final DateTimeFormatter FILE_TIME = DateTimeFormatter.ofPattern("yyyyMMdd-HHmmss").withZone(ZoneOffset.UTC);
+
+    /** What the sitting knows about one task of the form. */
+    private static final class TaskRecord {
+        final int order;
+        final FormSlot slot;
+        final TaskSpec spec;
+        final Optional<Countdown> countdown;
+        Instant startedAt;
+        Instant endedAt;
+        EndReason endReason;
+
+        TaskRecord(int order, FormSlot slot, TaskSpec spec, Optional<Countdown> countdown) {
+            this.order = order;
+            this.slot = slot;
+            this.spec = spec;
+            this.countdown = countdown;
+        }
+    }
+
+    private final String sittingId;
+    private final SittingPlan plan;
+    private final ClientDataFolder folder;
+    private final SittingClock clock;
+    private final SqliteProcessLog log;
+    private final Instant startedAt;
+    private final Map<String, TaskRecord> tasks = new LinkedHashMap<>();
+    private final Optional<Countdown> sittingCountdown;
+    private boolean sittingClockStarted;
+    private String currentTask;
+    private String screen;
+    private boolean paused;
+    private long pauseStartedMono;
+    private long lastCheckpointMono;
+    private String reportedProblem;
+    private String packageId;
+    private Path localCopy;
+    private boolean submitted;
+    private boolean closed;
+
+    private Sitting(String sittingId, SittingPlan plan, ClientDataFolder folder, SittingClock clock, SqliteProcessLog log,
+            Instant startedAt, Map<String, long[]> usedAdded, Map<String, Set<Integer>> warned, long sittingUsed,
+            long sittingAdded) {
+        this.sittingId = sittingId;
+        this.plan = plan;
+        this.folder = folder;
+        this.clock = clock;
+        this.log = log;
+        this.startedAt = startedAt;
+        List<FormSlot> slots = plan.form().slots();
+        for (int i = 0; i < slots.size(); i++) {
+            FormSlot slot = slots.get(i);
+            TaskSpec spec = plan.manifest().task(slot.taskId()).orElseThrow(
+                    () -> new IllegalArgumentException("form " + plan.formId() + " names task " + slot.taskId()
+                            + " that the bundle does not define"));
+            long[] ua = usedAdded.getOrDefault(spec.id(), new long[2]);
+            Optional<Countdown> countdown = spec.timeLimitSeconds() <= 0 ? Optional.empty()
+                    : Optional.of(new Countdown(clock, TimeUnit.SECONDS.toMillis(spec.timeLimitSeconds()), plan.extraTimePercent(),
+                            spec.warningMinutes(), ua[0], ua[1], warned.getOrDefault(spec.id(), Set.of())));
+            tasks.put(spec.id(), new TaskRecord(i, slot, spec, countdown));
+        }
+        int sittingLimit = plan.form().sittingLimitSeconds();
+        this.sittingCountdown = sittingLimit <= 0 ? Optional.empty()
+                : Optional.of(new Countdown(clock, TimeUnit.SECONDS.toMillis(sittingLimit), plan.extraTimePercent(), List.of(),
+                        sittingUsed, sittingAdded, Set.of()));
+        this.lastCheckpointMono = clock.monoNanos();
+    }
+
+    // -- starting and resuming --
+
+    /** Starts a new sitting: creates its database in the client data folder and logs {@code sitting.start}. */
+    public static Sitting begin(SittingPlan plan, ClientDataFolder folder, SittingClock clock) throws IOException {
+        folder.create();
+        String id = UUID.randomUUID().toString();
+        Instant now = clock.now();
+        Path file = folder.sittings().resolve(FILE_TIME.format(now) + "-" + safe(plan.candidateNumber()) + "-" + id
+                + SittingDatabase.SUFFIX);
+        SqliteProcessLog log = SqliteProcessLog.open(file, clock);
+        Sitting s = new Sitting(id, plan, folder, clock, log, now, Map.of(), Map.of(), 0, 0);
+        s.screen = "";
+        log.persist(c -> {
+            try (PreparedStatement ps = c.prepareStatement("INSERT INTO sitting(id, sitting_id, bundle_sha256, bundle_file, exam_id,"
+                    + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, screen, current_task)"
+                    + " VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL)")) {
+                ps.setString(1, id);
+                ps.setString(2, plan.manifestSha256());
+                ps.setString(3, plan.bundleFile());
+                ps.setString(4, plan.manifest().examId());
+                ps.setString(5, plan.candidateNumber());
+                ps.setString(6, plan.formId());
+                ps.setString(7, plan.seat());
+                ps.setInt(8, plan.extraTimePercent());
+                ps.setString(9, now.toString());
+                ps.setString(10, RecoveryScan.IN_PROGRESS);
+                ps.setString(11, now.toString());
+                ps.executeUpdate();
+            }
+            try (PreparedStatement ps = c.prepareStatement("INSERT INTO tasks(task_id, ord, condition_id, policy) VALUES (?, ?, ?, ?)")) {
+                for (TaskRecord t : s.tasks.values()) {
+                    ps.setString(1, t.spec.id());
+                    ps.setInt(2, t.order);
+                    ps.setString(3, t.slot.conditionId());
+                    ps.setString(4, policyJson(t.slot.policy()));
+                    ps.executeUpdate();
+                }
+            }
+        });
+        log.record(EventTypes.SITTING_START, null, Map.of("bundle", plan.manifestSha256(), "form", plan.formId(),
+                "candidate", plan.candidateNumber()));
+        log.flush();
+        return s;
+    }
+
+    /**
+     * Carries on an unfinished sitting after a restart, once the invigilator has given the PIN.
+     * The time the machine was down ({@link UnfinishedSitting#downtime}) counts as used unless the
+     * invigilator credits it: {@code credited} (0 up to the downtime) is given back and logged,
+     * with the downtime, in {@code sitting.resume}.
+     *
+     * @param manifest       the bundle's manifest, opened again and verified
+     * @param manifestSha256 its digest, which must be the one the sitting began with
+     */
+    public static Sitting resume(UnfinishedSitting found, BundleManifest manifest, String manifestSha256, Duration credited,
+            ClientDataFolder folder, SittingClock clock) throws IOException {
+        if (!found.bundleSha256().equals(manifestSha256)) {
+            throw new IllegalArgumentException("this is not the bundle the sitting began with (manifest SHA-256 "
+                    + manifestSha256 + ", the sitting used " + found.bundleSha256() + "); open the bundle " + found.bundleFile());
+        }
+        SqliteProcessLog log = SqliteProcessLog.open(found.database(), clock);
+        try {
+            return log.read(c -> load(c, found, manifest, credited, folder, clock, log));
+        } catch (IOException | RuntimeException e) {
+            log.close();
+            throw e;
+        }
+    }
+
+    private static Sitting load(Connection c, UnfinishedSitting found, BundleManifest manifest, Duration credited,
+            ClientDataFolder folder, SittingClock clock, SqliteProcessLog log) throws SQLException {
+        Map<String, long[]> usedAdded = new TreeMap<>();
+        Map<String, Set<Integer>> warned = new TreeMap<>();
+        Map<String, Object[]> progress = new TreeMap<>();
+        try (PreparedStatement ps = c.prepareStatement(
+                "SELECT task_id, used_ms, added_ms, warned, started_at, ended_at, end_reason FROM tasks");
+                ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                usedAdded.put(rs.getString(1), new long[] {rs.getLong(2), rs.getLong(3)});
+                Set<Integer> w = new TreeSet<>();
+                for (String part : rs.getString(4).split(",")) {
+                    if (!part.isBlank()) {
+                        w.add(Integer.parseInt(part.strip()));
+                    }
+                }
+                warned.put(rs.getString(1), w);
+                progress.put(rs.getString(1), new Object[] {rs.getString(5), rs.getString(6), rs.getString(7)});
+            }
+        }
+        try (PreparedStatement ps = c.prepareStatement("SELECT seat, extra_percent, started_at, sitting_used_ms, sitting_added_ms,"
+                + " screen, current_task, paused, package_id, local_copy, status FROM sitting WHERE id = 1");
+                ResultSet rs = ps.executeQuery()) {
+            if (!rs.next()) {
+                throw new SQLException(found.database() + " holds no sitting");
+            }
+            int extra = rs.getInt(2);
+            var entry = manifest.roster().stream().filter(r -> r.candidateNumber().equals(found.candidateNumber())).findFirst();
+            SittingPlan plan = new SittingPlan(manifest, found.bundleSha256(), found.bundleFile(), found.candidateNumber(),
+                    rs.getString(1), found.formId(), extra, entry.map(r -> r.largePrint()).orElse(false),
+                    entry.map(r -> r.highContrast()).orElse(false), null);
+            Sitting s = new Sitting(found.sittingId(), plan, folder, clock, log, Instant.parse(rs.getString(3)), usedAdded, warned,
+                    rs.getLong(4), rs.getLong(5));
+            s.screen = Objects.requireNonNullElse(rs.getString(6), "");
+            s.currentTask = rs.getString(7);
+            s.paused = rs.getInt(8) != 0;
+            s.pauseStartedMono = clock.monoNanos();
+            s.packageId = rs.getString(9);
+            s.localCopy = rs.getString(10) == null ? null : Path.of(rs.getString(10));
+            s.submitted = !RecoveryScan.IN_PROGRESS.equals(rs.getString(11));
+            for (Map.Entry<String, Object[]> p : progress.entrySet()) {
+                TaskRecord t = s.tasks.get(p.getKey());
+                if (t != null) {
+                    t.startedAt = p.getValue()[0] == null ? null : Instant.parse((String) p.getValue()[0]);
+                    t.endedAt = p.getValue()[1] == null ? null : Instant.parse((String) p.getValue()[1]);
+                    t.endReason = p.getValue()[2] == null ? null : EndReason.valueOf((String) p.getValue()[2]);
+                }
+            }
+            s.sittingClockStarted = s.tasks.values().stream().anyMatch(t -> t.startedAt != null);
+            s.creditDowntime(found.downtime(clock.now()), credited);
+            return s;
+        }
+    }
+
+    private void creditDowntime(Duration down, Duration credited) {
+        long downMs = down.toMillis();
+        long creditMs = Math.max(0, Math.min(downMs, Objects.requireNonNullElse(credited, Duration.ZERO).toMillis()));
+        TaskRecord running = currentTask == null ? null : tasks.get(currentTask);
+        boolean taskWasRunning = !paused && !submitted && running != null && running.startedAt != null && running.endedAt == null;
+        boolean sittingWasRunning = !paused && !submitted && sittingClockStarted;
+        if (taskWasRunning) {
+            running.countdown.ifPresent(cd -> cd.charge(downMs));
+        }
+        if (sittingWasRunning) {
+            sittingCountdown.ifPresent(cd -> cd.charge(downMs));
+        }
+        log.record(EventTypes.SITTING_RESUME, null, Map.of("downSeconds", downMs / 1000.0, "creditedSeconds", creditMs / 1000.0,
+                "by", "invigilator"));
+        if (creditMs > 0 && (taskWasRunning || sittingWasRunning)) {
+            if (taskWasRunning) {
+                running.countdown.ifPresent(cd -> cd.add(creditMs));
+            }
+            if (sittingWasRunning) {
+                sittingCountdown.ifPresent(cd -> cd.add(creditMs));
+            }
+            log.record(EventTypes.TIME_ADDED, taskWasRunning ? currentTask : null,
+                    Map.of("seconds", creditMs / 1000.0, "reason", "crash-credit"));
+        }
+        checkpoint();
+    }
+
+    // -- what the flow reads --
+
+    /** The sitting's id (also in its database file name). */
+    public String id() {
+        return sittingId;
+    }
+
+    /** Bundle, candidate, form and accommodations. */
+    public SittingPlan plan() {
+        return plan;
+    }
+
+    /** The process log for the task workspaces. */
+    public SqliteProcessLog log() {
+        return log;
+    }
+
+    /** Wall-clock start of the sitting. */
+    public Instant startedAt() {
+        return startedAt;
+    }
+
+    /** The form's slots in the order sat. */
+    public List<FormSlot> slots() {
+        return plan.form().slots();
+    }
+
+    /** Where every task stands, in form order. */
+    public List<TaskProgress> progress() {
+        return tasks.values().stream().map(t -> new TaskProgress(t.spec.id(), Optional.ofNullable(t.startedAt),
+                Optional.ofNullable(t.endedAt), Optional.ofNullable(t.endReason))).toList();
+    }
+
+    /** The first task that has not ended, in form order; empty when all have ended. */
+    public Optional<String> nextTask() {
+        return tasks.values().stream().filter(t -> t.endedAt == null).map(t -> t.spec.id()).findFirst();
+    }
+
+    /** The task on screen, if any. */
+    public Optional<String> currentTask() {
+        return Optional.ofNullable(currentTask);
+    }
+
+    /** The screen last shown ({@link #showScreen}). */
+    public String screen() {
+        return screen;
+    }
+
+    /** Whether the invigilator has paused the sitting. */
+    public boolean paused() {
+        return paused;
+    }
+
+    /** Whether the response package has been written (delivered or awaiting delivery). */
+    public boolean submitted() {
+        return submitted;
+    }
+
+    /** Time left in a task; empty for an untimed task. */
+    public Optional<Duration> remaining(String taskId) {
+        return record(taskId).countdown.map(cd -> Duration.ofMillis(cd.remainingMillis()));
+    }
+
+    /** Time allowed in a task (limit, roster extra time, additions); empty for an untimed task. */
+    public Optional<Duration> allowed(String taskId) {
+        return record(taskId).countdown.map(cd -> Duration.ofMillis(cd.allowedMillis()));
+    }
+
+    /** Time left in the whole sitting; empty when the form sets no sitting limit. */
+    public Optional<Duration> sittingRemaining() {
+        return sittingCountdown.map(cd -> Duration.ofMillis(cd.remainingMillis()));
+    }
+
+    // -- what the flow does --
+
+    /** Logs that a screen of the flow is shown ({@code nav.screen}) and remembers it for recovery. */
+    public void showScreen(String name) {
+        requireOpen();
+        screen = Objects.requireNonNull(name, "name");
+        log.record(EventTypes.NAV_SCREEN, currentTask, Map.of("screen", name));
+        log.persist(c -> update(c, "UPDATE sitting SET screen = ? WHERE id = 1", name));
+    }
+
+    /**
+     * Begins the next task, or re-enters the current one after a restart: logs {@code task.start}
+     * with the policy and the tools offered, starts its time, and returns the text to start from
+     * (recovered from snapshot and log after a restart).
+     *
+     * @throws IllegalStateException when the task has ended, an earlier task has not, or the sitting is paused
+     */
+    public TaskStart enterTask(String taskId) throws IOException {
+        requireOpen();
+        TaskRecord t = record(taskId);
+        if (t.endedAt != null) {
+            throw new IllegalStateException("task " + taskId + " has already ended (" + t.endReason + ")");
+        }
+        String earlier = nextTask().orElseThrow();
+        if (!earlier.equals(taskId)) {
+            throw new IllegalStateException("task " + earlier + " comes before " + taskId + " in form " + plan.formId()
+                    + " and has not ended");
+        }
+        if (paused) {
+            throw new IllegalStateException("the sitting is paused; resume it before entering a task");
+        }
+        boolean resumed = t.startedAt != null;
+        TextRecovery.Recovered recovered = resumed ? log.read(c -> TextRecovery.recover(c, taskId))
+                : new TextRecovery.Recovered("", 0, 0, 0, Optional.empty(), Optional.empty());
+        Instant now = clock.now();
+        if (!resumed) {
+            t.startedAt = now;
+            log.persist(c -> update(c, "UPDATE tasks SET started_at = ? WHERE task_id = ?", now.toString(), taskId));
+        }
+        currentTask = taskId;
+        log.persist(c -> update(c, "UPDATE sitting SET current_task = ? WHERE id = 1", taskId));
+        ResourcePolicy policy = t.slot.policy();
+        log.record(EventTypes.TASK_START, taskId, Map.of("policy", policyJson(policy), "tools", toolNames(policy.offeredTools()),
+                "resumed", resumed, "condition", t.slot.conditionId()));
+        if (!resumed) {
+            t.countdown.filter(cd -> cd.rosterExtraMillis() > 0).ifPresent(cd -> log.record(EventTypes.TIME_ADDED, taskId,
+                    Map.of("seconds", cd.rosterExtraMillis() / 1000.0, "reason", "roster")));
+        }
+        recovered.problem().ifPresent(p -> log.record(EventTypes.SITTING_RESUME, taskId, Map.of("replayProblem", p)));
+        t.countdown.ifPresent(Countdown::start);
+        sittingCountdown.ifPresent(Countdown::start);
+        sittingClockStarted = true;
+        checkpoint();
+        return new TaskStart(t.slot, t.spec, recovered.text(), recovered.caret(), resumed, recovered.mismatch());
+    }
+
+    /**
+     * Ends the current task: stops its time, logs {@code task.end} and stores the final text,
+     * word count and tool use (only for tools the policy offered) for the response.
+     */
+    public void endTask(String taskId, EndReason reason, String finalText, int wordCount, Map<Tool, ToolUse> toolUse) {
+        requireOpen();
+        TaskRecord t = record(taskId);
+        if (!taskId.equals(currentTask) || t.endedAt != null) {
+            throw new IllegalStateException("task " + taskId + " is not the task in progress");
+        }
+        Objects.requireNonNull(reason, "reason");
+        Objects.requireNonNull(finalText, "finalText");
+        t.countdown.ifPresent(Countdown::stop);
+        Instant now = clock.now();
+        t.endedAt = now;
+        t.endReason = reason;
+        Set<Tool> offered = t.slot.policy().offeredTools();
+        Map<String, ToolUse> use = new TreeMap<>();
+        Objects.requireNonNullElse(toolUse, Map.<Tool, ToolUse>of()).forEach((tool, u) -> {
+            if (offered.contains(tool)) {
+                use.put(tool.name(), u);
+            }
+        });
+        log.snapshot(taskId, finalText, finalText.length());
+        log.record(EventTypes.TASK_END, taskId, Map.of("reason", reasonName(reason), "words", wordCount));
+        long used = t.countdown.map(Countdown::usedMillis).orElse(0L);
+        String useJson = new String(Json.writeLine(use), java.nio.charset.StandardCharsets.UTF_8);
+        log.persist(c -> {
+            try (PreparedStatement ps = c.prepareStatement("UPDATE tasks SET ended_at = ?, end_reason = ?, final_text = ?,"
+                    + " word_count = ?, tool_use = ?, used_ms = ? WHERE task_id = ?")) {
+                ps.setString(1, now.toString());
+                ps.setString(2, reason.name());
+                ps.setString(3, finalText);
+                ps.setInt(4, wordCount);
+                ps.setString(5, useJson);
+                ps.setLong(6, used);
+                ps.setString(7, taskId);
+                ps.executeUpdate();
+            }
+            update(c, "UPDATE sitting SET current_task = NULL WHERE id = 1");
+        });
+        currentTask = null;
+    }
+
+    /**
+     * Ends every task not yet begun, with empty text (the sitting's time ran out, or the
+     * invigilator ended the sitting); they appear in the response with that reason.
+     */
+    public void endUnstartedTasks(EndReason reason) {
+        requireOpen();
+        Instant now = clock.now();
+        for (TaskRecord t : tasks.values()) {
+            if (t.startedAt == null && t.endedAt == null) {
+                t.endedAt = now;
+                t.endReason = reason;
+                String id = t.spec.id();
+                log.record(EventTypes.TASK_END, id, Map.of("reason", reasonName(reason), "words", 0, "begun", false));
+                log.persist(c -> update(c, "UPDATE tasks SET ended_at = ?, end_reason = ?, final_text = '', word_count = 0,"
+                        + " tool_use = '{}' WHERE task_id = ?", now.toString(), reason.name(), id));
+            }
+        }
+    }
+
+    /**
+     * Records a questionnaire answer (replacing an earlier one to the same item): a Likert point
+     * (1-based, as text) or free text.
+     *
+     * @throws IllegalArgumentException when the questionnaire is not this form's, the item is not
+     *                                  in it, or a Likert answer is not one of its points
+     */
+    public void answer(String questionnaireId, String itemId, String value) {
+        requireOpen();
+        if (!questionnaireId.equals(plan.form().preQuestionnaire()) && !questionnaireId.equals(plan.form().postQuestionnaire())) {
+            throw new IllegalArgumentException("questionnaire " + questionnaireId + " is not asked in form " + plan.formId());
+        }
+        QuestionnaireSpec q = plan.manifest().questionnaire(questionnaireId).orElseThrow(
+                () -> new IllegalArgumentException("questionnaire " + questionnaireId + " is not in the bundle"));
+        QuestionItem item = q.items().stream().filter(i -> i.id().equals(itemId)).findFirst().orElseThrow(
+                () -> new IllegalArgumentException("questionnaire " + questionnaireId + " has no item " + itemId));
+        Objects.requireNonNull(value, "value");
+        if (isLikert(item)) {
+            int points = item.labels().size();
+            boolean ok;
+            try {
+                int v = Integer.parseInt(value);
+                ok = v >= 1 && v <= points;
+            } catch (NumberFormatException e) {
+                ok = false;
+            }
+            if (!ok) {
+                throw new IllegalArgumentException("item " + itemId + " of " + questionnaireId + " takes a point from 1 to " + points
+                        + ", not \"" + value + "\"");
+            }
+        }
+        log.persist(c -> update(c, "INSERT OR REPLACE INTO answers(questionnaire_id, item_id, value) VALUES (?, ?, ?)",
+                questionnaireId, itemId, value));
+    }
+
+    /** Pauses the sitting (the invigilator's emergency pause): time stops, {@code pause.start} is logged. */
+    public void pauseAll() {
+        requireOpen();
+        if (paused) {
+            return;
+        }
+        running().flatMap(t -> t.countdown).ifPresent(Countdown::stop);
+        sittingCountdown.ifPresent(Countdown::stop);
+        paused = true;
+        pauseStartedMono = clock.monoNanos();
+        log.record(EventTypes.PAUSE_START, currentTask, Map.of("scope", "all"));
+        checkpoint();
+    }
+
+    /** Ends the pause: time runs again, {@code pause.end} is logged with how long it lasted. */
+    public void resumeAll() {
+        requireOpen();
+        if (!paused) {
+            return;
+        }
+        paused = false;
+        long pausedMillis = TimeUnit.NANOSECONDS.toMillis(clock.monoNanos() - pauseStartedMono);
+        log.record(EventTypes.PAUSE_END, currentTask, Map.of("pausedMillis", pausedMillis));
+        running().flatMap(t -> t.countdown).ifPresent(Countdown::start);
+        if (sittingClockStarted && !submitted) {
+            sittingCountdown.ifPresent(Countdown::start);
+        }
+        checkpoint();
+    }
+
+    /**
+     * Adds time for this candidate (an invigilator's accommodation): to the task in progress, or
+     * the next one when none is, and to the sitting limit when the form sets one. Logged as
+     * {@code time.added} with reason "invigilator".
+     */
+    public void addTime(Duration time) {
+        requireOpen();
+        long ms = time.toMillis();
+        if (ms <= 0) {
+            throw new IllegalArgumentException("time added must be positive, not " + time);
+        }
+        String target = currentTask != null ? currentTask : nextTask().orElse(null);
+        if (target != null) {
+            tasks.get(target).countdown.ifPresent(cd -> cd.add(ms));
+        }
+        sittingCountdown.ifPresent(cd -> cd.add(ms));
+        log.record(EventTypes.TIME_ADDED, target, Map.of("seconds", ms / 1000.0, "reason", "invigilator"));
+        checkpoint();
+    }
+
+    /**
+     * Advances the timers: logs and returns warnings and expiries that became due since the last
+     * call, and reports trouble writing the log. Call it from a timeline a few times a second.
+     */
+    public List<SittingSignal> poll() {
+        List<SittingSignal> signals = new ArrayList<>();
+        Optional<String> problem = log.problem();
+        if (problem.isPresent() && !problem.get().equals(reportedProblem)) {
+            reportedProblem = problem.get();
+            signals.add(new SittingSignal.StorageTrouble(reportedProblem));
+        } else if (problem.isEmpty() && reportedProblem != null) {
+            reportedProblem = null;
+            signals.add(new SittingSignal.StorageRecovered());
+        }
+        if (submitted || paused) {
+            return signals;
+        }
+        Optional<TaskRecord> running = running();
+        if (running.isPresent() && running.get().countdown.isPresent()) {
+            Countdown cd = running.get().countdown.get();
+            String id = running.get().spec.id();
+            OptionalInt warning = cd.dueWarning();
+            if (warning.isPresent()) {
+                log.record(EventTypes.TIMER_WARNING, id, Map.of("minutesLeft", warning.getAsInt()));
+                signals.add(new SittingSignal.TimeWarning(id, warning.getAsInt()));
+            }
+            if (cd.expiredNow()) {
+                log.record(EventTypes.TIMER_EXPIRED, id, Map.of("scope", "task"));
+                signals.add(new SittingSignal.TaskTimeUp(id));
+            }
+        }
+        if (sittingCountdown.isPresent() && sittingClockStarted && sittingCountdown.get().expiredNow()) {
+            log.record(EventTypes.TIMER_EXPIRED, null, Map.of("scope", "sitting"));
+            signals.add(new SittingSignal.SittingTimeUp());
+        }
+        if (clock.monoNanos() - lastCheckpointMono >= TimeUnit.MILLISECONDS.toNanos(CHECKPOINT_MILLIS)) {
+            checkpoint();
+        }
+        return signals;
+    }
+
+    /**
+     * Checks every ended task's stored final text against a replay of its log from the start;
+     * empty when all agree. A disagreement means the log misses a change: the stored text is
+     * what is submitted, and the test owner should be told.
+     */
+    public List<ReplayMismatch> verifyReplay() throws IOException {
+        List<ProcessEvent> events = log.events();
+        Map<String, String> finals = log.read(c -> {
+            Map<String, String> m = new TreeMap<>();
+            try (PreparedStatement ps = c.prepareStatement("SELECT task_id, final_text FROM tasks WHERE final_text IS NOT NULL");
+                    ResultSet rs = ps.executeQuery()) {
+                while (rs.next()) {
+                    m.put(rs.getString(1), rs.getString(2));
+                }
+            }
+            return m;
+        });
+        List<ReplayMismatch> mismatches = new ArrayList<>();
+        for (Map.Entry<String, String> f : finals.entrySet()) {
+            try {
+                TextReplay.compare(f.getKey(), f.getValue(), TextReplay.replay(f.getKey(), events).text()).ifPresent(mismatches::add);
+            } catch (ReplayException e) {
+                mismatches.add(ReplayMismatch.unreplayable(f.getKey(), f.getValue().length(), e));
+            }
+        }
+        return mismatches;
+    }
+
+    // -- submission --
+
+    /**
+     * Final submission: logs {@code sitting.end}, builds the response package (signed with the
+     * installation key, encrypted to the test owner), writes the local copy in the client data
+     * folder first, then delivers it to {@code outputFolder}. A delivery that fails is reported in
+     * the result and can be retried with {@link #retryDelivery}; the package is never lost.
+     * Writes files: call it off the UI thread.
+     *
+     * @throws IllegalStateException when a task has not ended
+     * @throws IOException           when even the local copy cannot be written (the database still holds everything)
+     */
+    public SubmissionResult submit(Path outputFolder, InstallationKey key) throws IOException {
+        requireOpen();
+        Optional<String> open = nextTask();
+        if (open.isPresent()) {
+            throw new IllegalStateException("task " + open.get() + " has not ended; end it (or end the unstarted tasks) first");
+        }
+        if (packageId == null) {
+            packageId = UUID.randomUUID().toString();
+            String id = packageId;
+            log.persist(c -> update(c, "UPDATE sitting SET package_id = ? WHERE id = 1", id));
+        }
+        sittingCountdown.ifPresent(Countdown::stop);
+        log.record(EventTypes.SITTING_END, null, Map.of("reason", "submitted"));
+        checkpoint();
+        Instant submittedAt = clock.now();
+        List<ProcessEvent> events = log.events();
+        ResponseDocument document = log.read(c -> responseDocument(c, submittedAt));
+        PublicKey ownerKey = X25519.publicFromRaw(Base64.getDecoder().decode(plan.manifest().ownerKeys().encryption()));
+        byte[] bytes = new ResponsePackageWriter(key.key(), ownerKey).encode(document, events);
+        Path local = folder.responses().resolve(packageFileName());
+        AtomicFiles.write(local, out -> out.write(bytes));
+        localCopy = local;
+        submitted = true;
+        log.persist(c -> update(c, "UPDATE sitting SET status = ?, submitted_at = ?, local_copy = ? WHERE id = 1",
+                RecoveryScan.AWAITING_DELIVERY, submittedAt.toString(), local.toString()));
+        log.flush();
+        return deliver(bytes, outputFolder);
+    }
+
+    /** Delivers the saved package again (after a failure, or to a second folder). */
+    public SubmissionResult retryDelivery(Path outputFolder) throws IOException {
+        requireOpen();
+        if (localCopy == null) {
+            throw new IllegalStateException("nothing has been submitted yet");
+        }
+        return deliver(Files.readAllBytes(localCopy), outputFolder);
+    }
+
+    /** The local copy of the response package, once submitted. */
+    public Optional<Path> localCopy() {
+        return Optional.ofNullable(localCopy);
+    }
+
+    private SubmissionResult deliver(byte[] bytes, Path outputFolder) throws IOException {
+        PackageDelivery.Outcome outcome = delivery.deliver(bytes, outputFolder, packageFileName());
+        if (outcome.delivered().isPresent()) {
+            String to = outcome.delivered().get().toString();
+            log.persist(c -> update(c, "UPDATE sitting SET status = ?, delivered_to = ? WHERE id = 1", RecoveryScan.DELIVERED, to));
+            log.flush();
+        }
+        return new SubmissionResult(packageId, localCopy, outcome.delivered(), outcome.failure());
+    }
+
+    private PackageDelivery delivery = PackageDelivery.local();
+
+    /** Replaces the file-system access of deliveries (tests stand in a full or read-only disk). */
+    public void useDelivery(PackageDelivery replacement) {
+        delivery = Objects.requireNonNull(replacement, "replacement");
+    }
+
+    private String packageFileName() {
+        return safe(plan.manifest().examId()) + "-" + safe(plan.candidateNumber()) + "-" + packageId + ".inkresp";
+    }
+
+    private ResponseDocument responseDocument(Connection c, Instant submittedAt) throws SQLException {
+        List<TaskResponse> responses = new ArrayList<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT task_id, final_text, word_count, tool_use, started_at, ended_at,"
+                + " end_reason, added_ms FROM tasks ORDER BY ord"); ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                TaskRecord t = tasks.get(rs.getString(1));
+                Map<String, ToolUse> stored;
+                try {
+                    stored = Json.mapper().readValue(Objects.requireNonNullElse(rs.getString(4), "{}"),
+                            new TypeReference<Map<String, ToolUse>>() { });
+                } catch (IOException e) {
+                    throw new SQLException("task " + t.spec.id() + " has unreadable tool use: " + e.getMessage(), e);
+                }
+                Map<Tool, ToolUse> use = new EnumMap<>(Tool.class);
+                stored.forEach((name, u) -> use.put(Tool.valueOf(name), u));
+                long extraMs = t.countdown.map(cd -> cd.rosterExtraMillis() + cd.addedMillis()).orElse(rs.getLong(8));
+                responses.add(new TaskResponse(t.spec.id(), t.slot.conditionId(), Objects.requireNonNullElse(rs.getString(2), ""),
+                        rs.getInt(3), parse(rs.getString(5)), parse(rs.getString(6)), extraMs / 1000, t.slot.policy(),
+                        t.slot.policy().offeredTools(), use, EndReason.valueOf(rs.getString(7))));
+            }
+        }
+        Map<String, Map<String, String>> answers = new TreeMap<>();
+        try (PreparedStatement ps = c.prepareStatement("SELECT questionnaire_id, item_id, value FROM answers");
+                ResultSet rs = ps.executeQuery()) {
+            while (rs.next()) {
+                answers.computeIfAbsent(rs.getString(1), k -> new TreeMap<>()).put(rs.getString(2), rs.getString(3));
+            }
+        }
+        List<QuestionnaireAnswers> questionnaires = answers.entrySet().stream()
+                .map(e -> new QuestionnaireAnswers(e.getKey(), e.getValue())).toList();
+        return new ResponseDocument(ResponseDocument.FORMAT, ResponseDocument.SCHEMA_VERSION, packageId, plan.manifest().examId(),
+                plan.manifestSha256(), plan.candidateNumber(), plan.seat(), plan.formId(), plan.clientVersion(), startedAt,
+                submittedAt, responses, questionnaires);
+    }
+
+    /** Writes the timer state and closes the database; the sitting stays resumable until submitted. */
+    @Override
+    public void close() throws IOException {
+        if (closed) {
+            return;
+        }
+        checkpoint();
+        closed = true;
+        log.close();
+    }
+
+    // -- helpers --
+
+    private void checkpoint() {
+        lastCheckpointMono = clock.monoNanos();
+        Instant now = clock.now();
+        long sittingUsed = sittingCountdown.map(Countdown::usedMillis).orElse(0L);
+        long sittingAdded = sittingCountdown.map(Countdown::addedMillis).orElse(0L);
+        boolean isPaused = paused;
+        List<Object[]> taskTimes = new ArrayList<>();
+        for (TaskRecord t : tasks.values()) {
+            t.countdown.ifPresent(cd -> taskTimes.add(new Object[] {cd.usedMillis(), cd.addedMillis(),
+                    cd.warned().stream().sorted().map(String::valueOf).collect(Collectors.joining(",")), t.spec.id()}));
+        }
+        log.persist(c -> {
+            update(c, "UPDATE sitting SET sitting_used_ms = ?, sitting_added_ms = ?, paused = ?, checkpoint_at = ? WHERE id = 1",
+                    sittingUsed, sittingAdded, isPaused ? 1 : 0, now.toString());
+            for (Object[] row : taskTimes) {
+                update(c, "UPDATE tasks SET used_ms = ?, added_ms = ?, warned = ? WHERE task_id = ?", row);
+            }
+        });
+    }
+
+    private Optional<TaskRecord> running() {
+        if (currentTask == null) {
+            return Optional.empty();
+        }
+        TaskRecord t = tasks.get(currentTask);
+        return t.endedAt == null ? Optional.of(t) : Optional.empty();
+    }
+
+    private TaskRecord record(String taskId) {
+        TaskRecord t = tasks.get(taskId);
+        if (t == null) {
+            throw new IllegalArgumentException("task \"" + taskId + "\" is not in form " + plan.formId());
+        }
+        return t;
+    }
+
+    private void requireOpen() {
+        if (closed) {
+            throw new IllegalStateException("the sitting " + sittingId + " is closed");
+        }
+    }
+
+    private static void update(Connection c, String sql, Object... args) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(sql)) {
+            for (int i = 0; i < args.length; i++) {
+                ps.setObject(i + 1, args[i]);
+            }
+            ps.executeUpdate();
+        }
+    }
+
+    private static Instant parse(String text) {
+        return text == null ? null : Instant.parse(text);
+    }
+
+    private static boolean isLikert(QuestionItem item) {
+        return item.kind() == QuestionItem.Kind.LIKERT;
+    }
+
+    static String policyJson(ResourcePolicy policy) {
+        return new String(Json.writeLine(policy), java.nio.charset.StandardCharsets.UTF_8);
+    }
+
+    static String toolNames(Set<Tool> tools) {
+        return tools.stream().sorted().map(t -> t.name().toLowerCase(Locale.ROOT)).collect(Collectors.joining(","));
+    }
+
+    /** The reason as response.json spells it. */
+    static String reasonName(EndReason reason) {
+        return switch (reason) {
+            case SUBMITTED -> "submitted";
+            case TIME_UP -> "time-up";
+            case ENDED_BY_INVIGILATOR -> "ended-by-invigilator";
+        };
+    }
+
+    private static String safe(String s) {
+        String cleaned = s.replaceAll("[^A-Za-z0-9._-]", "_");
+        return cleaned.isEmpty() ? "_" : cleaned;
+    }
+
+}

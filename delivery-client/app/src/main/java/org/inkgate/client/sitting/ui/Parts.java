@@ -1,0 +1,96 @@
+package org.inkgate.client.sitting.ui;
+
+import javafx.geometry.Pos;
+import javafx.scene.AccessibleRole;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.Region;
+import javafx.scene.layout.VBox;
+
+/** Small building blocks every sitting screen shares, so they look and read alike. */
+public final class Parts {
+
+    private Parts() {
+    }
+
+    /** A screen's heading, read as a heading by screen readers. */
+    public static Label heading(String text) {
+        Label label = wrapped(text, "screen-heading");
+        label.setAccessibleRole(AccessibleRole.TEXT);
+        return label;
+    }
+
+    /** A wrapped paragraph. */
+    public static Label text(String text) {
+        return wrapped(text, "screen-text");
+    }
+
+    /** A wrapped paragraph in the quieter colour. */
+    public static Label quiet(String text) {
+        return wrapped(text, "quiet-note");
+    }
+
+    /** A label for a field; its mnemonic (the letter after "_") moves focus to the field. */
+    public static Label fieldLabel(String text, Node field) {
+        Label label = new Label(text);
+        label.setMnemonicParsing(true);
+        label.setLabelFor(field);
+        label.getStyleClass().add("field-label");
+        return label;
+    }
+
+    /** An error line under a form, empty until the flow says what is wrong. */
+    public static Label errorLine(String id) {
+        Label label = wrapped("", "field-error");
+        label.setId(id);
+        label.setAccessibleRole(AccessibleRole.TEXT);
+        return label;
+    }
+
+    /** The button that moves the flow on; Enter presses it. */
+    public static Button primary(String id, String text, Runnable action) {
+        Button button = new Button(text);
+        button.setId(id);
+        button.setMnemonicParsing(true);
+        button.getStyleClass().add("primary");
+        button.setDefaultButton(true);
+        button.setOnAction(e -> action.run());
+        return button;
+    }
+
+    /** A plain button. */
+    public static Button plain(String id, String text, Runnable action) {
+        Button button = new Button(text);
+        button.setId(id);
+        button.setMnemonicParsing(true);
+        button.setOnAction(e -> action.run());
+        return button;
+    }
+
+    /** A centred card on a scrollable screen: the layout of every form-like screen. */
+    public static ScrollPane card(String id, Node... children) {
+        VBox card = new VBox();
+        card.getStyleClass().add("screen-card");
+        card.getChildren().addAll(children);
+        card.setMaxWidth(860);
+        VBox screen = new VBox(card);
+        screen.setId(id);
+        screen.getStyleClass().add("screen");
+        screen.setAlignment(Pos.TOP_CENTER);
+        ScrollPane scroller = new ScrollPane(screen);
+        scroller.setFitToWidth(true);
+        scroller.setFocusTraversable(false);
+        scroller.getStyleClass().add("screen-scroller");
+        return scroller;
+    }
+
+    private static Label wrapped(String text, String styleClass) {
+        Label label = new Label(text);
+        label.setWrapText(true);
+        label.setMinHeight(Region.USE_PREF_SIZE);
+        label.getStyleClass().add(styleClass);
+        return label;
+    }
+}

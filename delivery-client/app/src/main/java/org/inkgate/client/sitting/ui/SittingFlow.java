@@ -1,0 +1,1109 @@
+package org.inkgate.client.sitting.ui;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.time.ZoneId;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.function.Supplier;
+import javafx.animation.KeyFrame;
+import javafx.animation.PauseTransition;
+import javafx.animation.Timeline;
+import javafx.application.Platform;
+import javafx.scene.Node;
+import javafx.scene.Parent;
+import javafx.scene.Scene;
+import javafx.scene.input.KeyCode;
+import javafx.scene.input.KeyCodeCombination;
+import javafx.scene.input.KeyCombination;
+import javafx.scene.input.KeyEvent;
+import javafx.stage.Stage;
+import javafx.util.Duration;
+import org.inkgate.client.practice.PromptText;
+import org.inkgate.client.practice.TaskWording;
+import org.inkgate.client.practice.ui.RefusalView;
+import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.client.practice.WordCount;
+import org.inkgate.client.sitting.Sitting;
+import org.inkgate.client.sitting.replay.ReplayException;
+import org.inkgate.client.sitting.replay.TextReplay;
+import org.inkgate.client.sitting.submit.InstallationKey;
+import org.inkgate.client.sitting.submit.SubmissionResult;
+import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.SittingPlan;
+import org.inkgate.client.sitting.SittingSignal;
+import org.inkgate.client.sitting.TaskStart;
+import org.inkgate.client.sitting.recovery.RecoveryScan;
+import org.inkgate.client.sitting.recovery.UnfinishedSitting;
+import org.inkgate.client.sitting.store.ClientDataFolder;
+import org.inkgate.client.sitting.submit.DeliveryFailure;
+import org.inkgate.client.sitting.ui.lock.StageLock;
+import org.inkgate.client.sitting.ui.open.SittingLoad;
+import org.inkgate.client.sitting.ui.overlay.InvigilatorPanel;
+import org.inkgate.client.sitting.ui.overlay.PausedCover;
+import org.inkgate.client.sitting.ui.overlay.PinPrompt;
+import org.inkgate.client.sitting.ui.screen.FinishedScreen;
+import org.inkgate.client.sitting.ui.screen.InstructionsScreen;
+import org.inkgate.client.sitting.ui.screen.QuestionnaireScreen;
+import org.inkgate.client.sitting.ui.screen.RecoveryScreen;
+import org.inkgate.client.sitting.ui.screen.ReviewScreen;
+import org.inkgate.client.sitting.ui.screen.SetupScreen;
+import org.inkgate.client.sitting.ui.screen.SignInScreen;
+import org.inkgate.client.sitting.ui.screen.SubmitScreen;
+import org.inkgate.client.sitting.ui.screen.TaskScreen;
+import org.inkgate.client.sitting.ui.tools.BundlePacks;
+import org.inkgate.client.sitting.ui.tools.ExamWords;
+import org.inkgate.client.sitting.ui.tools.ToolShelf;
+import org.inkgate.client.task.DisplaySettings;
+import org.inkgate.client.task.TaskContext;
+import org.inkgate.client.task.TaskWorkspace;
+import org.inkgate.format.bundle.BundleManifest;
+import org.inkgate.format.bundle.FormSlot;
+import org.inkgate.format.bundle.OpenedBundle;
+import org.inkgate.format.bundle.PinHasher;
+import org.inkgate.format.bundle.QuestionnaireSpec;
+import org.inkgate.format.bundle.TaskSpec;
+import org.inkgate.format.bundle.WordGuidance;
+import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.response.QuestionnaireAnswers;
+import org.inkgate.format.response.TaskResponse.EndReason;
+import org.inkgate.packs.spelling.EnglishVariant;
+
+/**
+ * The live sitting from the bundle to the finished screen: invigilator set-up, candidate sign-in,
+ * instructions (while the tools warm up), questionnaires, the tasks in the form's order, review,
+ * hand-in with retry, and the invigilator's overlay (pause, add time, end the task, exit) behind
+ * the PIN. Every state change goes through the sitting core, which logs it and makes it durable;
+ * this class only decides what is on screen.
+ */
+public final class SittingFlow {
+
+    /** Opens the invigilator's PIN prompt during the sitting. */
+    public static final KeyCombination INVIGILATOR_KEYS =
+            new KeyCodeCombination(KeyCode.F12, KeyCombination.SHORTCUT_DOWN, KeyCombination.SHIFT_DOWN);
+    /** How often the timers are read; the display shows whole seconds. */
+    static final Duration TICK = Duration.millis(200);
+    /** How long "time is up" stays on screen before the next task. */
+    static final Duration TIME_UP_PAUSE = Duration.seconds(4);
+    static final String DEMO_NOTE = "DEMO ONLY: this is the invented demo sitting. Its PIN and candidate numbers are"
+            + " published (printed on the console and in docs/invigilator-guide.md), so it protects nothing.";
+    private static final DateTimeFormatter CLOCK = DateTimeFormatter.ofPattern("HH:mm:ss").withZone(ZoneId.systemDefault());
+
+    /**
+     * What a sitting window is made from.
+     *
+     * @param load       the opened bundle or its refusal
+     * @param bundleFile the bundle's path, recorded so recovery can name it (null: its file name only)
+     * @param dataFolder the client data folder, or null for the standard one
+     * @param workspaces builds each task's workspace
+     * @param clock      monotonic and wall clocks
+     * @param demo       the demo sitting (shows the demo-only note)
+     * @param lock       lock the window (false only in tests that check the flow, not the lock)
+     * @param onExit     what exiting does after the window closed (null: end the JavaFX runtime)
+     */
+    public record Setup(SittingLoad load, Path bundleFile, Path dataFolder, WorkspaceFactory workspaces,
+            SittingClock clock, boolean demo, boolean lock, Runnable onExit) {
+        public Setup {
+            Objects.requireNonNull(load, "load");
+            Objects.requireNonNull(workspaces, "workspaces");
+            Objects.requireNonNull(clock, "clock");
+            onExit = Objects.requireNonNullElse(onExit, Platform::exit);
+        }
+    }
+
+    private final Stage stage;
+    private final Setup setup;
+    private final ExecutorService background = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "inkgate-sitting-work");
+        t.setDaemon(true);
+        return t;
+    });
+    private final Timeline ticker;
+    private SittingShell shell;
+    private Scene scene;
+    private StageLock lock;
+    private OpenedBundle bundle;
+    private ClientDataFolder data;
+    private Path outputFolder;
+    private String seat = "";
+    private String openForm;
+    private Sitting sitting;
+    private SittingPlan plan;
+    private DisplaySettings display = DisplaySettings.standard();
+    private BundlePacks packs;
+    private ToolShelf shelf;
+    private int taskIndex = -1;
+    private TaskWorkspace workspace;
+    private TaskScreen taskScreen;
+    private boolean paused;
+    private boolean taskEnding;
+    private boolean entryWaiting;
+    private SubmitScreen submitScreen;
+    private final Map<String, Integer> words = new LinkedHashMap<>();
+    private final PausedCover pausedCover = new PausedCover();
+    private PinPrompt pinPrompt;
+    private InvigilatorPanel panel;
+    private final List<String> focusLines = new ArrayList<>();
+    private Screen current = Screen.NONE;
+
+    /** Where the flow is; the invigilator panel and the lock depend on it. */
+    enum Screen { NONE, REFUSED, RECOVERY, SETUP, SIGN_IN, INSTRUCTIONS, QUESTIONNAIRE, TASK, REVIEW, SUBMIT, FINISHED }
+
+    public SittingFlow(Stage stage, Setup setup) {
+        this.stage = Objects.requireNonNull(stage, "stage");
+        this.setup = setup;
+        ticker = new Timeline(new KeyFrame(TICK, e -> tick()));
+        ticker.setCycleCount(Timeline.INDEFINITE);
+    }
+
+    /** Shows the first screen: the refusal, a found unfinished sitting, or the invigilator set-up. */
+    public void start() {
+        switch (setup.load()) {
+            case SittingLoad.Refused refused -> showRefusal(refused.message());
+            case SittingLoad.Opened opened -> open(opened.bundle());
+        }
+    }
+
+    // ---- opening ----
+
+    private void showRefusal(String message) {
+        current = Screen.REFUSED;
+        RefusalView refusal = new RefusalView(message, this::exitApplication);
+        shell = new SittingShell("Inkgate sitting");
+        shell.show(refusal);
+        showStage("Inkgate - exam bundle not opened");
+        refusal.closeButton().requestFocus();
+    }
+
+    private void open(OpenedBundle opened) {
+        this.bundle = opened;
+        BundleManifest m = opened.manifest();
+        shell = new SittingShell(m.title());
+        showStage("Inkgate - " + m.title());
+        if (setup.lock()) {
+            lock = StageLock.apply(stage, new StageLock.FocusListener() {
+                @Override
+                public void focusLost() {
+                    onFocusLost();
+                }
+
+                @Override
+                public void focusReturned(long awayMillis) {
+                    onFocusReturned(awayMillis);
+                }
+            }, () -> setup.clock().monoNanos() / 1_000_000);
+        }
+        scene.addEventFilter(KeyEvent.KEY_PRESSED, e -> {
+            if (INVIGILATOR_KEYS.match(e)) {
+                e.consume();
+                openInvigilator();
+            }
+        });
+        try {
+            data = (setup.dataFolder() == null ? ClientDataFolder.standard() : new ClientDataFolder(setup.dataFolder()))
+                    .create();
+        } catch (IOException | RuntimeException e) {
+            showRefusal("The client data folder cannot be used (" + e.getMessage() + "). The sitting keeps every"
+                    + " keystroke there, so it cannot start without it. Start the client with --data FOLDER on a"
+                    + " writable disk.");
+            return;
+        }
+        Optional<UnfinishedSitting> unfinished = findUnfinished(opened.manifestSha256());
+        if (unfinished.isPresent()) {
+            showRecovery(unfinished.get());
+        } else {
+            showSetup();
+        }
+    }
+
+    private Optional<UnfinishedSitting> findUnfinished(String manifestSha256) {
+        try {
+            return RecoveryScan.find(data).stream().filter(u -> u.bundleSha256().equals(manifestSha256)).findFirst();
+        } catch (IOException e) {
+            // the set-up screen says nothing about it; the invigilator sees the data folder problem on start
+            shell.announcer().announce("Unfinished sittings could not be looked for in " + data.root() + ": "
+                    + e.getMessage());
+            return Optional.empty();
+        }
+    }
+
+    private void showStage(String title) {
+        if (scene == null) {
+            scene = new Scene(shell.root(), 1280, 800);
+            SittingTheme.install(scene);
+            stage.setScene(scene);
+        } else {
+            scene.setRoot(shell.root());
+        }
+        stage.setTitle(title);
+        stage.show();
+        // since JavaFX 20 a newly shown stage may not get focus by itself
+        stage.requestFocus();
+    }
+
+    // ---- invigilator set-up ----
+
+    private void showSetup() {
+        current = Screen.SETUP;
+        BundleManifest m = bundle.manifest();
+        Path proposed = data.root().resolve("outbox");
+        SetupScreen[] screen = new SetupScreen[1];
+        List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
+                ? m.forms().stream().map(f -> f.id()).toList() : List.of();
+        screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
+                setup.demo() ? DEMO_NOTE : null, openForms, input -> checkSetup(screen[0], input));
+        shell.show(screen[0].root());
+        screen[0].focus();
+    }
+
+    private void checkSetup(SetupScreen screen, SetupScreen.Input input) {
+        if (input.outputFolder() == null) {
+            screen.showError("Enter the output folder where response packages go.");
+            return;
+        }
+        screen.busy(true);
+        work(() -> {
+            if (!PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())) {
+                return "That is not this exam's invigilator PIN. Enter it again.";
+            }
+            try {
+                Files.createDirectories(input.outputFolder());
+            } catch (IOException e) {
+                return "The output folder " + input.outputFolder() + " cannot be created (" + e.getMessage()
+                        + "). Choose a folder on a writable disk.";
+            }
+            if (!Files.isWritable(input.outputFolder())) {
+                return "The output folder " + input.outputFolder() + " is not writable. Choose another folder.";
+            }
+            if (bundle.sealed()) {
+                try {
+                    bundle.unseal(input.releaseCode());
+                } catch (FormatRefusal e) {
+                    return e.getMessage();
+                } catch (IOException e) {
+                    return "The sealed bundle could not be read (" + e.getMessage() + "). Check the disk and try again.";
+                }
+            }
+            return null;
+        }, problem -> {
+            screen.busy(false);
+            if (problem != null) {
+                screen.showError(problem);
+                return;
+            }
+            outputFolder = input.outputFolder().toAbsolutePath();
+            seat = input.seat();
+            openForm = input.formId();
+            showSignIn();
+        });
+    }
+
+    // ---- candidate sign-in ----
+
+    private void showSignIn() {
+        current = Screen.SIGN_IN;
+        BundleManifest m = bundle.manifest();
+        String hint = m.roster().isEmpty() ? "Type the number on your admission details."
+                : "Type the number on your admission details, exactly as it is printed.";
+        SignInScreen[] screen = new SignInScreen[1];
+        screen[0] = new SignInScreen(m.title(), hint, number -> signIn(screen[0], number));
+        shell.show(screen[0].root());
+        screen[0].focus();
+    }
+
+    private void signIn(SignInScreen screen, String number) {
+        SittingPlan candidate;
+        try {
+            candidate = SittingPlan.forCandidate(bundle.manifest(), bundle.manifestSha256(), bundleFile(), number, seat,
+                    openForm, clientVersion());
+        } catch (IllegalArgumentException e) {
+            screen.showError(sentence(e.getMessage()));
+            return;
+        }
+        try {
+            sitting = Sitting.begin(candidate, data, setup.clock());
+        } catch (IOException | RuntimeException e) {
+            screen.showError("The sitting could not be started on this machine (" + e.getMessage()
+                    + "). Ask the invigilator.");
+            return;
+        }
+        plan = candidate;
+        applyDisplay();
+        showInstructions();
+    }
+
+    private void applyDisplay() {
+        display = SittingTheme.of(plan.manifest().roster().stream()
+                .filter(r -> r.candidateNumber().equals(plan.candidateNumber())).findFirst().orElse(null));
+        SittingTheme.apply(shell.root(), display);
+        shell.who("Candidate " + plan.candidateNumber());
+    }
+
+    // ---- instructions, with the tools warming up ----
+
+    private void showInstructions() {
+        current = Screen.INSTRUCTIONS;
+        sitting.showScreen("instructions");
+        BundleManifest m = plan.manifest();
+        PromptText instructions = readPrompt(m.instructionsFile());
+        List<String> lines = new ArrayList<>();
+        for (FormSlot slot : plan.form().slots()) {
+            TaskSpec task = m.task(slot.taskId()).orElseThrow();
+            lines.add(task.title() + " (" + timeText(task, plan.extraTimePercent()) + "; "
+                    + String.join(", ", TaskWording.tools(slot.policy())).toLowerCase(java.util.Locale.ROOT) + ")");
+        }
+        InstructionsScreen screen = new InstructionsScreen(m.title(), "Candidate " + plan.candidateNumber() + ", form "
+                + plan.formId(), instructions, lines, this::afterInstructions);
+        shell.show(screen.root());
+        screen.focus();
+        startTools(screen);
+    }
+
+    private void startTools(InstructionsScreen screen) {
+        if (shelf != null) {
+            if (screen != null) {
+                shelf.allReady().thenRun(() -> Platform.runLater(() -> screen.toolsStatus("The writing tools are ready.")));
+            }
+            return;
+        }
+        status(screen, "Preparing the writing tools...");
+        try {
+            packs = new BundlePacks(bundle);
+        } catch (IOException e) {
+            status(screen, "The writing tools could not be prepared (" + e.getMessage() + "). Ask the invigilator.");
+            return;
+        }
+        List<ToolShelf.Order> orders = new ArrayList<>();
+        for (FormSlot slot : plan.form().slots()) {
+            TaskSpec task = plan.manifest().task(slot.taskId()).orElseThrow();
+            orders.add(new ToolShelf.Order(task.id(), slot.policy(), ExamWords.of(readText(task.promptFile()))));
+        }
+        shelf = new ToolShelf(packs.broker(), variant(), orders);
+        shelf.allReady().thenRun(() -> Platform.runLater(() -> status(screen, "The writing tools are ready.")));
+    }
+
+    private static void status(InstructionsScreen screen, String text) {
+        if (screen != null) {
+            screen.toolsStatus(text);
+        }
+    }
+
+    private EnglishVariant variant() {
+        try {
+            return EnglishVariant.fromTag(plan.manifest().language());
+        } catch (IllegalArgumentException e) {
+            // the checker is only built for tasks that allow it; a non-English exam offering it fails there, visibly
+            return EnglishVariant.EN_GB;
+        }
+    }
+
+    private void afterInstructions() {
+        String pre = plan.form().preQuestionnaire();
+        if (pre != null) {
+            showQuestionnaire(pre, this::startNextTask);
+        } else {
+            startNextTask();
+        }
+    }
+
+    // ---- questionnaires ----
+
+    private void showQuestionnaire(String id, Runnable then) {
+        current = Screen.QUESTIONNAIRE;
+        sitting.showScreen("questionnaire");
+        QuestionnaireSpec q = plan.manifest().questionnaire(id).orElseThrow();
+        QuestionnaireScreen screen = new QuestionnaireScreen(q, answers -> {
+            answers.forEach((item, value) -> sitting.answer(q.id(), item, value));
+            then.run();
+        });
+        shell.show(screen.root());
+        screen.focus();
+    }
+
+    // ---- tasks ----
+
+    private void startNextTask() {
+        Optional<String> next = sitting.nextTask();
+        if (next.isEmpty()) {
+            afterTasks(false);
+            return;
+        }
+        List<FormSlot> slots = plan.form().slots();
+        for (int i = 0; i < slots.size(); i++) {
+            if (slots.get(i).taskId().equals(next.get())) {
+                enterTask(i);
+                return;
+            }
+        }
+        throw new IllegalStateException("task " + next.get() + " is not in form " + plan.formId());
+    }
+
+    private void enterTask(int index) {
+        current = Screen.TASK;
+        taskIndex = index;
+        taskEnding = false;
+        FormSlot slot = plan.form().slots().get(index);
+        if (paused) {
+            // a sitting recovered while paused: the task begins when the invigilator resumes
+            entryWaiting = true;
+            return;
+        }
+        sitting.showScreen("task");
+        TaskStart start;
+        try {
+            start = sitting.enterTask(slot.taskId());
+        } catch (IOException e) {
+            shell.announcer().announce("Invigilator: the task could not be started, because the saved work could not"
+                    + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
+            return;
+        }
+        shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
+                Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
+        shelf.take(slot.taskId()).whenComplete((tools, failure) -> Platform.runLater(() -> {
+            if (failure != null) {
+                shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
+                return;
+            }
+            TaskContext context = new TaskContext(start.task(), readText(start.task().promptFile()), tools,
+                    sitting.log(), start.text(), start.caret(), display);
+            workspace = setup.workspaces().create(context);
+            int total = plan.form().slots().size();
+            taskScreen = new TaskScreen("Task " + (index + 1) + " of " + total + ": " + start.task().title(),
+                    workspace.view(), () -> endTask(EndReason.SUBMITTED));
+            shell.show(taskScreen.root());
+            shell.announcer().clear();
+            if (start.mismatch().isPresent()) {
+                focusLine("Recovery note: " + start.mismatch().get().describe());
+            }
+            updateClock();
+            ticker.play();
+            if (paused) {
+                freeze(true);
+            } else {
+                workspace.focusEditor();
+            }
+        }));
+    }
+
+    private void tick() {
+        if (sitting == null) {
+            return;
+        }
+        for (SittingSignal signal : sitting.poll()) {
+            switch (signal) {
+                case SittingSignal.TimeWarning warning -> shell.announcer().announce(warning.minutesLeft()
+                        + (warning.minutesLeft() == 1 ? " minute" : " minutes") + " left in this task.");
+                case SittingSignal.TaskTimeUp up -> timeUp(false);
+                case SittingSignal.SittingTimeUp up -> timeUp(true);
+                case SittingSignal.StorageTrouble trouble -> storageTrouble(trouble.message());
+                case SittingSignal.StorageRecovered ok -> focusLine("Saving works again.");
+            }
+        }
+        updateClock();
+    }
+
+    private void updateClock() {
+        if (current != Screen.TASK || sitting == null) {
+            shell.time(null, "", false);
+            return;
+        }
+        Optional<java.time.Duration> left = remainingNow();
+        if (left.isEmpty()) {
+            shell.time("Untimed", "This task is untimed", false);
+        } else {
+            long ms = left.get().toMillis();
+            shell.time(TimeText.clock(ms), TimeText.spoken(ms), ms < 5 * 60_000);
+        }
+    }
+
+    /** Time left in the current task, or in the whole sitting when that is shorter; empty when neither is timed. */
+    private Optional<java.time.Duration> remainingNow() {
+        Optional<java.time.Duration> task = currentTaskId() == null ? Optional.empty() : sitting.remaining(currentTaskId());
+        Optional<java.time.Duration> whole = sitting.sittingRemaining();
+        if (task.isPresent() && whole.isPresent()) {
+            return Optional.of(task.get().compareTo(whole.get()) <= 0 ? task.get() : whole.get());
+        }
+        return task.isPresent() ? task : whole;
+    }
+
+    private void timeUp(boolean wholeSitting) {
+        if (current != Screen.TASK || taskEnding) {
+            return;
+        }
+        taskEnding = true;
+        freeze(true);
+        shell.announcer().announce(wholeSitting ? "The time for the whole exam is up. Your answers have been saved."
+                : "The time for this task is up. Your answer has been saved.");
+        PauseTransition wait = new PauseTransition(TIME_UP_PAUSE);
+        wait.setOnFinished(e -> finishTask(EndReason.TIME_UP, wholeSitting));
+        wait.play();
+    }
+
+    private void endTask(EndReason reason) {
+        if (current != Screen.TASK || taskEnding) {
+            return;
+        }
+        taskEnding = true;
+        finishTask(reason, false);
+    }
+
+    private void finishTask(EndReason reason, boolean endSitting) {
+        ticker.stop();
+        FormSlot slot = plan.form().slots().get(taskIndex);
+        words.put(slot.taskId(), workspace.wordCount());
+        sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
+        workspace.close();
+        workspace = null;
+        taskScreen = null;
+        shell.announcer().clear();
+        if (endSitting) {
+            sitting.endUnstartedTasks(EndReason.TIME_UP);
+        }
+        startNextTask();
+    }
+
+    private void freeze(boolean frozen) {
+        if (workspace != null) {
+            workspace.setFrozen(frozen);
+        }
+        if (taskScreen != null) {
+            taskScreen.frozen(frozen);
+        }
+    }
+
+    // ---- after the tasks ----
+
+    /** After the last task: the post-task questionnaire (unless it was done before a restart), then the review. */
+    private void afterTasks(boolean questionnaireDone) {
+        String post = plan.form().postQuestionnaire();
+        if (post != null && !questionnaireDone) {
+            showQuestionnaire(post, this::showReview);
+        } else {
+            showReview();
+        }
+    }
+
+    private void showReview() {
+        current = Screen.REVIEW;
+        sitting.showScreen("review");
+        List<ReviewScreen.Row> rows = new ArrayList<>();
+        for (FormSlot slot : plan.form().slots()) {
+            TaskSpec task = plan.manifest().task(slot.taskId()).orElseThrow();
+            rows.add(new ReviewScreen.Row(task.title(), wordsOf(task.id()), guidance(task.words())));
+        }
+        ReviewScreen screen = new ReviewScreen(rows, this::submit);
+        shell.show(screen.root());
+        screen.focus();
+    }
+
+    private static String guidance(WordGuidance words) {
+        if (words == null || (words.min() == 0 && words.max() == 0)) {
+            return null;
+        }
+        if (words.max() == 0) {
+            return "suggested: at least " + words.min();
+        }
+        return words.min() == 0 ? "suggested: up to " + words.max()
+                : "suggested: " + words.min() + " to " + words.max();
+    }
+
+    /** Words in an ended task: counted at its end, or rebuilt from the log for tasks ended before a restart. */
+    private int wordsOf(String taskId) {
+        Integer counted = words.get(taskId);
+        if (counted != null) {
+            return counted;
+        }
+        try {
+            return WordCount.of(TextReplay.replay(taskId, sitting.log().events(taskId, 0)).text());
+        } catch (IOException | ReplayException e) {
+            return 0;
+        }
+    }
+
+    private void submit() {
+        current = Screen.SUBMIT;
+        submitScreen = new SubmitScreen(this::retryDelivery);
+        shell.show(submitScreen.root());
+        submitScreen.working();
+        workOrFail(() -> sitting.submit(outputFolder, InstallationKey.loadOrCreate(data)), this::delivered);
+    }
+
+    private void retryDelivery() {
+        submitScreen.working();
+        workOrFail(() -> sitting.retryDelivery(outputFolder), this::delivered);
+    }
+
+    private void delivered(SubmissionResult result) {
+        if (result.failure().isPresent()) {
+            DeliveryFailure failure = result.failure().get();
+            focusLine("Hand-in to the output folder failed: " + failure.message());
+            submitScreen.failed(failure.message());
+            return;
+        }
+        showFinished(result.delivered().orElseThrow(), result.localCopy());
+    }
+
+    private void showFinished(Path delivered, Path localCopy) {
+        current = Screen.FINISHED;
+        ticker.stop();
+        shell.time(null, "", false);
+        FinishedScreen screen = new FinishedScreen("For the invigilator: the response package is " + delivered
+                + "; a copy is kept at " + localCopy + ". Open the invigilator screen (Ctrl+Shift+F12) to exit.");
+        shell.show(screen.root());
+    }
+
+    // ---- recovery ----
+
+    private void showRecovery(UnfinishedSitting found) {
+        current = Screen.RECOVERY;
+        Instant now = setup.clock().now();
+        java.time.Duration down = found.downtime(now);
+        List<String> facts = new ArrayList<>();
+        facts.add("Candidate: " + found.candidateNumber() + ", form " + found.formId());
+        facts.add("On screen when it stopped: " + found.currentTask().flatMap(id -> bundle.manifest().task(id))
+                .map(t -> "the task \"" + t.title() + "\"").orElse(found.screen().isEmpty() ? "the start" : "the "
+                        + found.screen() + " screen"));
+        facts.add("Last saved: " + CLOCK.format(found.lastActivity()) + ", " + TimeText.duration(down.toMillis())
+                + " ago (measured on the system clock, so a changed clock distorts it)");
+        if (found.paused()) {
+            facts.add("The exam was paused by the invigilator when it stopped; it continues paused.");
+        }
+        if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
+            facts.add("The answers were handed in and saved on this machine, but not yet written to the output folder.");
+        }
+        String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
+        RecoveryScreen[] screen = new RecoveryScreen[1];
+        screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
+                input -> resume(screen[0], found, input, down));
+        shell.show(screen[0].root());
+        screen[0].focus();
+    }
+
+    private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
+            java.time.Duration down) {
+        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin()), ok -> {
+            if (!ok) {
+                screen.showError("That is not this exam's invigilator PIN. Enter it again.");
+                return;
+            }
+            if (input.outputFolder() == null) {
+                screen.showError("Enter the output folder where response packages go.");
+                return;
+            }
+            try {
+                sitting = Sitting.resume(found, bundle.manifest(), bundle.manifestSha256(),
+                        input.credit() ? down : java.time.Duration.ZERO, data, setup.clock());
+            } catch (IOException | RuntimeException e) {
+                screen.showError("The sitting could not be resumed (" + e.getMessage() + "). The saved answers are"
+                        + " still in " + found.database() + "; keep that file and contact the test owner's support.");
+                return;
+            }
+            plan = sitting.plan();
+            outputFolder = input.outputFolder().toAbsolutePath();
+            seat = plan.seat();
+            applyDisplay();
+            focusLine("Sitting resumed after " + TimeText.duration(down.toMillis()) + (input.credit()
+                    ? "; that time was given back" : "; that time was not given back"));
+            continueRecovered(found);
+        });
+    }
+
+    /** Shows what the candidate continues with after a restart, with the time left after the invigilator's choice. */
+    private void continueRecovered(UnfinishedSitting found) {
+        if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY || sitting.submitted()) {
+            current = Screen.SUBMIT;
+            submitScreen = new SubmitScreen(this::retryDelivery);
+            shell.show(submitScreen.root());
+            retryDelivery();
+            return;
+        }
+        paused = sitting.paused();
+        if (paused) {
+            shell.cover(pausedCover);
+        }
+        Optional<String> next = sitting.nextTask();
+        String where;
+        if (next.isPresent() && found.currentTask().isPresent()) {
+            TaskSpec task = plan.manifest().task(next.get()).orElseThrow();
+            where = "The task \"" + task.title() + "\" continues with the text saved so far. "
+                    + sitting.remaining(task.id()).map(d -> TimeText.duration(d.toMillis()) + " left in it.")
+                            .orElse("It is untimed.");
+        } else if (next.isEmpty()) {
+            where = "All tasks had ended; the candidate continues with the last questions and hands in.";
+        } else {
+            where = "The candidate continues where the sitting stopped.";
+        }
+        String screenAtStop = found.screen();
+        Runnable go = () -> {
+            if (next.isEmpty()) {
+                prepareToolsQuietly();
+                afterTasks("review".equals(screenAtStop));
+            } else if (found.currentTask().isPresent() || "task".equals(screenAtStop)) {
+                prepareToolsQuietly();
+                startNextTask();
+            } else if ("questionnaire".equals(screenAtStop)) {
+                prepareToolsQuietly();
+                afterInstructions();
+            } else {
+                showInstructions();
+            }
+        };
+        current = Screen.RECOVERY;
+        shell.show(Parts.card("resumedScreen", Parts.heading("The sitting is ready to continue"),
+                Parts.text("Candidate " + plan.candidateNumber() + ", form " + plan.formId() + "."),
+                Parts.text(where), Parts.primary("continueButton", "_Continue", go)));
+    }
+
+    /** After a restart the instructions screen may be skipped, but the tools must still be prepared. */
+    private void prepareToolsQuietly() {
+        if (shelf == null) {
+            startTools(null);
+        }
+    }
+
+    // ---- invigilator ----
+
+    private void openInvigilator() {
+        if (current == Screen.NONE || current == Screen.REFUSED || current == Screen.SETUP
+                || current == Screen.RECOVERY || (pinPrompt != null && shell.covered(pinPrompt))
+                || (panel != null && shell.covered(panel))) {
+            return;
+        }
+        pinPrompt = new PinPrompt(this::checkInvigilatorPin, this::closePinPrompt);
+        shell.cover(pinPrompt);
+        pinPrompt.reset();
+    }
+
+    private void checkInvigilatorPin(char[] pin) {
+        pinPrompt.busy();
+        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), pin), ok -> {
+            if (!ok) {
+                pinPrompt.wrong("That is not the invigilator PIN.");
+                return;
+            }
+            shell.uncover(pinPrompt);
+            showPanel();
+        });
+    }
+
+    private void closePinPrompt() {
+        shell.uncover(pinPrompt);
+        refocus();
+    }
+
+    private void showPanel() {
+        panel = new InvigilatorPanel(new InvigilatorPanel.Actions() {
+            @Override
+            public void pauseOrResume() {
+                setPaused(!paused);
+                updatePanel();
+            }
+
+            @Override
+            public void addMinutes(int minutes) {
+                if (current == Screen.TASK && sitting != null) {
+                    sitting.addTime(java.time.Duration.ofMinutes(minutes));
+                    shell.announcer().announce(minutes + (minutes == 1 ? " minute was" : " minutes were")
+                            + " added to this task.");
+                    updateClock();
+                    updatePanel();
+                }
+            }
+
+            @Override
+            public void endTask() {
+                shell.uncover(panel);
+                SittingFlow.this.endTask(EndReason.ENDED_BY_INVIGILATOR);
+            }
+
+            @Override
+            public void exitSitting() {
+                exitByInvigilator();
+            }
+
+            @Override
+            public void close() {
+                shell.uncover(panel);
+                refocus();
+            }
+        });
+        focusLines.forEach(panel::focusEvent);
+        updatePanel();
+        shell.cover(panel);
+        panel.focus();
+    }
+
+    private void updatePanel() {
+        if (panel == null) {
+            return;
+        }
+        StringBuilder state = new StringBuilder();
+        if (plan == null) {
+            state.append("No candidate has signed in yet.");
+        } else {
+            state.append("Candidate ").append(plan.candidateNumber()).append(", form ").append(plan.formId());
+            if (plan.extraTimePercent() > 0) {
+                state.append(", ").append(plan.extraTimePercent()).append("% extra time (roster)");
+            }
+            state.append(". ");
+            if (current == Screen.TASK && taskIndex >= 0) {
+                TaskSpec task = plan.manifest().task(plan.form().slots().get(taskIndex).taskId()).orElseThrow();
+                state.append("Task ").append(taskIndex + 1).append(" of ").append(plan.form().slots().size())
+                        .append(": ").append(task.title()).append(", ");
+                state.append(remainingNow().map(d -> TimeText.duration(d.toMillis()) + " left").orElse("untimed"));
+                state.append(". ");
+            } else {
+                state.append("Screen: ").append(current.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '))
+                        .append(". ");
+            }
+        }
+        state.append(paused ? "The exam is PAUSED." : "The exam is running.");
+        panel.update(state.toString(), paused, current == Screen.TASK);
+    }
+
+    private void setPaused(boolean pause) {
+        if (pause == paused || sitting == null) {
+            return;
+        }
+        paused = pause;
+        if (pause) {
+            sitting.pauseAll();
+            freeze(true);
+            shell.cover(pausedCover);
+            if (panel != null && shell.covered(panel)) {
+                // keep the invigilator's panel above the cover
+                shell.uncover(panel);
+                shell.cover(panel);
+            }
+            shell.announcer().announce(PausedCover.HEADING + ".");
+        } else {
+            sitting.resumeAll();
+            shell.uncover(pausedCover);
+            if (!taskEnding) {
+                freeze(false);
+            }
+            shell.announcer().announce("The exam has resumed. Your time is running again.");
+            if (entryWaiting) {
+                entryWaiting = false;
+                startNextTask();
+            }
+        }
+    }
+
+    private void exitByInvigilator() {
+        if (sitting != null && !sitting.submitted()) {
+            // not an end of the sitting: it stays in the data folder and resumes on the next start
+            sitting.log().record(EventTypes.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
+        }
+        exitApplication();
+    }
+
+    private void refocus() {
+        if (workspace != null && !paused) {
+            workspace.focusEditor();
+        }
+    }
+
+    // ---- focus, storage ----
+
+    private void onFocusLost() {
+        focusLine("Focus lost");
+        if (sitting != null) {
+            sitting.log().record(EventTypes.FOCUS_LOST, currentTaskId(), Map.of());
+        }
+    }
+
+    private void onFocusReturned(long awayMillis) {
+        focusLine("Focus returned after " + TimeText.duration(awayMillis));
+        if (sitting != null) {
+            sitting.log().record(EventTypes.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
+        }
+    }
+
+    private String currentTaskId() {
+        return current == Screen.TASK && taskIndex >= 0 ? plan.form().slots().get(taskIndex).taskId() : null;
+    }
+
+    private void focusLine(String what) {
+        String line = CLOCK.format(setup.clock().now()) + "  " + what;
+        focusLines.add(line);
+        if (panel != null) {
+            panel.focusEvent(line);
+        }
+    }
+
+    private void storageTrouble(String message) {
+        focusLine("Saving failed: " + message);
+        shell.announcer().announce("Invigilator: this machine cannot save the work at the moment (" + message
+                + "). Keep the program open; do not switch the machine off.");
+    }
+
+    // ---- helpers ----
+
+    private PromptText readPrompt(String entry) {
+        return entry == null ? new PromptText(List.of()) : PromptText.parse(readText(entry));
+    }
+
+    private String readText(String entry) {
+        try {
+            return bundle.readText(entry);
+        } catch (IOException e) {
+            throw new IllegalStateException("the bundle entry " + entry + " could not be read again: " + e.getMessage(), e);
+        }
+    }
+
+    private String bundleFile() {
+        return setup.bundleFile() == null ? bundle.fileName() : setup.bundleFile().toString();
+    }
+
+    private static String timeText(TaskSpec task, int extraPercent) {
+        if (task.timeLimitSeconds() <= 0) {
+            return "untimed";
+        }
+        long seconds = task.timeLimitSeconds() + task.timeLimitSeconds() * (long) extraPercent / 100;
+        return TimeText.duration(seconds * 1000) + (extraPercent > 0 ? " with your extra time" : "");
+    }
+
+    private static String clientVersion() {
+        return Objects.requireNonNullElse(SittingFlow.class.getPackage().getImplementationVersion(), "development");
+    }
+
+    private static String rootMessage(Throwable t) {
+        Throwable cause = t;
+        while (cause.getCause() != null && (cause instanceof java.util.concurrent.CompletionException
+                || cause instanceof java.util.concurrent.ExecutionException)) {
+            cause = cause.getCause();
+        }
+        return cause.getMessage();
+    }
+
+    /** A message from a core exception as a sentence on screen. */
+    static String sentence(String message) {
+        if (message == null || message.isBlank()) {
+            return "Something went wrong.";
+        }
+        String s = Character.toUpperCase(message.charAt(0)) + message.substring(1);
+        return s.endsWith(".") ? s : s + ".";
+    }
+
+    /** Work that may fail with an I/O error. */
+    @FunctionalInterface
+    private interface IoJob<T> {
+        T run() throws IOException;
+    }
+
+    /** As {@link #work}, for submission: an I/O failure keeps the retry screen up with its message. */
+    private <T> void workOrFail(IoJob<T> job, java.util.function.Consumer<T> then) {
+        CompletableFuture.supplyAsync(() -> {
+            try {
+                return job.run();
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException(e);
+            }
+        }, background).whenComplete((result, failure) -> Platform.runLater(() -> {
+            if (failure != null) {
+                String message = "The answers could not be saved as a response package (" + rootMessage(failure)
+                        + "). Everything typed is still in this machine's sitting database.";
+                focusLine(message);
+                submitScreen.failed(message);
+                return;
+            }
+            then.accept(result);
+        }));
+    }
+
+    /** Runs slow work (PIN hashing, disk) off the JavaFX thread and hands the result back to it. */
+    private <T> void work(Supplier<T> job, java.util.function.Consumer<T> then) {
+        CompletableFuture.supplyAsync(job, background).whenComplete((result, failure) -> Platform.runLater(() -> {
+            if (failure != null) {
+                shell.announcer().announce("Something went wrong: " + rootMessage(failure));
+                return;
+            }
+            then.accept(result);
+        }));
+    }
+
+    private void exitApplication() {
+        closeQuietly();
+        if (lock != null) {
+            lock.release();
+        }
+        stage.close();
+        setup.onExit().run();
+    }
+
+    /** Closes what the sitting holds (tools, bundle, core); never throws. */
+    public void closeQuietly() {
+        ticker.stop();
+        if (workspace != null) {
+            workspace.close();
+            workspace = null;
+        }
+        if (shelf != null) {
+            shelf.close();
+        }
+        try {
+            if (sitting != null) {
+                sitting.close();
+            }
+        } catch (RuntimeException | IOException ignored) {
+            // the log is durable within half a second; closing only flushes the rest
+        }
+        try {
+            if (packs != null) {
+                packs.close();
+            }
+            if (bundle != null) {
+                bundle.close();
+            }
+        } catch (IOException ignored) {
+            // temporary folders only
+        }
+        background.shutdown();
+    }
+
+    // ---- for tests ----
+
+    /** The window's shell, for tests and screenshots. */
+    SittingShell shell() {
+        return shell;
+    }
+
+    /** The lock, when applied. */
+    StageLock lock() {
+        return lock;
+    }
+
+    /** Focus log lines, oldest first. */
+    List<String> focusLines() {
+        return List.copyOf(focusLines);
+    }
+
+    Screen screen() {
+        return current;
+    }
+
+    /** Which parts of the screen exist (for tests naming nodes). */
+    Map<String, Node> parts() {
+        Map<String, Node> parts = new LinkedHashMap<>();
+        parts.put("pausedCover", pausedCover);
+        if (panel != null) {
+            parts.put("panel", panel);
+        }
+        return parts;
+    }
+
+    Parent root() {
+        return shell.root();
+    }
+}

@@ -1,0 +1,131 @@
+package org.inkgate.client.sitting.ui.screen;
+
+import java.io.File;
+import java.nio.file.Path;
+import java.util.function.Consumer;
+import javafx.scene.Parent;
+import java.util.List;
+import javafx.scene.control.Button;
+import javafx.scene.control.ComboBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.PasswordField;
+import javafx.scene.control.TextField;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
+import javafx.scene.layout.VBox;
+import javafx.stage.DirectoryChooser;
+import org.inkgate.client.sitting.ui.Parts;
+
+/**
+ * The invigilator's set-up before any candidate signs in: the PIN, the output folder for the
+ * response packages, the seat label and, for a sealed bundle, the release code.
+ */
+public final class SetupScreen {
+
+    /** What the invigilator entered; the flow checks it and answers with {@link #showError}. */
+    public record Input(char[] pin, Path outputFolder, String seat, char[] releaseCode, String formId) {
+    }
+
+    private final PasswordField pin = new PasswordField();
+    private final TextField output = new TextField();
+    private final TextField seat = new TextField();
+    private final PasswordField release = new PasswordField();
+    private final ComboBox<String> form = new ComboBox<>();
+    private final Label error = Parts.errorLine("setupError");
+    private final Button go;
+    private final Parent root;
+
+    /**
+     * @param examTitle   the bundle's title
+     * @param signer      the signer's fingerprint, for comparing with the published one
+     * @param sealed      whether a release code is needed
+     * @param defaultOutput the folder proposed for response packages
+     * @param demoNote    a demo-only hint (PIN of the demo bundle), or null for a real bundle
+     * @param openForms   the forms to choose from when the bundle has no roster and several forms; else empty
+     */
+    public SetupScreen(String examTitle, String signer, boolean sealed, Path defaultOutput, String demoNote,
+            List<String> openForms, Consumer<Input> onContinue) {
+        pin.setId("setupPin");
+        pin.setAccessibleText("Invigilator PIN");
+        output.setId("setupOutput");
+        output.setAccessibleText("Output folder for response packages");
+        output.setText(defaultOutput == null ? "" : defaultOutput.toString());
+        seat.setId("setupSeat");
+        seat.setAccessibleText("Seat or machine label");
+        release.setId("setupRelease");
+        release.setAccessibleText("Release code");
+        form.setId("setupForm");
+        form.setAccessibleText("Form for the candidates at this machine");
+        form.getItems().setAll(openForms);
+        form.getSelectionModel().selectFirst();
+        HBox.setHgrow(output, Priority.ALWAYS);
+        Button browse = Parts.plain("setupBrowse", "_Choose...", this::browse);
+        go = Parts.primary("setupContinue", "_Continue", () -> onContinue.accept(new Input(pin.getText().toCharArray(),
+                output.getText().isBlank() ? null : Path.of(output.getText().strip()), seat.getText().strip(),
+                sealed ? release.getText().toCharArray() : null, form.getValue())));
+
+        VBox fields = new VBox(10,
+                Parts.heading("Invigilator set-up"),
+                Parts.text(examTitle),
+                Parts.quiet("Signed by key " + signer + ". Compare it with the fingerprint the test owner published."),
+                Parts.fieldLabel("Invigilator _PIN", pin), pin,
+                Parts.fieldLabel("_Output folder for the response packages", output), new HBox(10, output, browse),
+                Parts.quiet("Each candidate's response package is written here when they hand in, and a copy is"
+                        + " always kept on this machine as well."),
+                Parts.fieldLabel("_Seat or machine label (optional)", seat), seat);
+        if (sealed) {
+            fields.getChildren().addAll(Parts.fieldLabel("_Release code (as printed, with dashes)", release), release);
+        }
+        if (!openForms.isEmpty()) {
+            fields.getChildren().addAll(Parts.fieldLabel("_Form: this bundle has no roster, so choose the form the"
+                    + " test owner assigned to this machine", form), form);
+        }
+        if (demoNote != null) {
+            Label demo = Parts.text(demoNote);
+            demo.setId("demoNote");
+            demo.getStyleClass().add("demo-note");
+            fields.getChildren().add(demo);
+        }
+        fields.getChildren().addAll(error, go);
+        root = Parts.card("setupScreen", fields);
+    }
+
+    public Parent root() {
+        return root;
+    }
+
+    /** Where focus starts. */
+    public void focus() {
+        pin.requestFocus();
+    }
+
+    /** Says what is wrong and clears the secret fields. */
+    public void showError(String message) {
+        error.setText(message);
+        error.setAccessibleText(message);
+        pin.clear();
+        release.clear();
+        pin.requestFocus();
+    }
+
+    /** Disables the form while the flow checks it (PIN hashing takes a moment). */
+    public void busy(boolean busy) {
+        go.setDisable(busy);
+        if (busy) {
+            error.setText("Checking...");
+        }
+    }
+
+    private void browse() {
+        DirectoryChooser chooser = new DirectoryChooser();
+        chooser.setTitle("Output folder for response packages");
+        File current = output.getText().isBlank() ? null : new File(output.getText());
+        if (current != null && current.isDirectory()) {
+            chooser.setInitialDirectory(current);
+        }
+        File chosen = chooser.showDialog(root.getScene() == null ? null : root.getScene().getWindow());
+        if (chosen != null) {
+            output.setText(chosen.getAbsolutePath());
+        }
+    }
+}

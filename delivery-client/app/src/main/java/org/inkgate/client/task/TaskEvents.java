@@ -1,0 +1,58 @@
+package org.inkgate.client.task;
+
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Objects;
+import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.client.sitting.ProcessLog;
+import org.inkgate.packs.event.ToolEvent;
+import org.inkgate.packs.policy.Tool;
+
+/** The workspace's door to the process log: one task's events, with the fields {@link EventTypes} names. */
+final class TaskEvents {
+
+    private final ProcessLog log;
+    private final String taskId;
+
+    TaskEvents(ProcessLog log, String taskId) {
+        this.log = Objects.requireNonNull(log, "log");
+        this.taskId = Objects.requireNonNull(taskId, "taskId");
+    }
+
+    /** Records an event with fields given as name, value, name, value... in the order written. */
+    void record(String type, Object... nameValue) {
+        if (nameValue.length % 2 != 0) {
+            throw new IllegalArgumentException("fields come in name/value pairs: " + nameValue.length + " given for " + type);
+        }
+        Map<String, Object> data = new LinkedHashMap<>();
+        for (int k = 0; k < nameValue.length; k += 2) {
+            data.put((String) nameValue[k], nameValue[k + 1]);
+        }
+        log.record(type, taskId, data);
+    }
+
+    void snapshot(String text, int caret) {
+        log.snapshot(taskId, text, caret);
+    }
+
+    /** A lookup, an opened entry or a check, as the resource engines reported it. */
+    void tool(ToolEvent e) {
+        switch (e.action()) {
+            case QUERY -> record(EventTypes.TOOL_QUERY, "tool", wire(e.tool()), "pack", e.packId(), "query", e.query(),
+                    "hits", e.hitCount(), "micros", e.elapsedMicros());
+            case OPEN_ENTRY -> record(EventTypes.TOOL_OPEN, "tool", wire(e.tool()), "pack", e.packId(), "entry", e.entryId());
+            case CHECK -> record(EventTypes.CHECK_RUN, "issues", e.hitCount(), "micros", e.elapsedMicros());
+            case IGNORE_WORD -> throw new IllegalArgumentException("an ignored word is logged with its rule: use ignored(...)");
+        }
+    }
+
+    /** The name a tool has in the log and in response packages ({@code spelling}, {@code glossary}...). */
+    static String wire(Tool tool) {
+        return tool.name().toLowerCase(Locale.ROOT);
+    }
+
+    String taskId() {
+        return taskId;
+    }
+}

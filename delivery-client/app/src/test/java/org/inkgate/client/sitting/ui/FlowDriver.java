@@ -1,0 +1,163 @@
+package org.inkgate.client.sitting.ui;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.concurrent.atomic.AtomicReference;
+import javafx.scene.Node;
+import javafx.scene.control.CheckBox;
+import javafx.scene.control.Label;
+import javafx.scene.control.TextInputControl;
+import javafx.stage.Stage;
+import org.inkgate.client.demo.DemoSittingBuild;
+import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.ui.open.SittingBundleOpener;
+import org.inkgate.client.sitting.ui.open.SittingLoad;
+import org.inkgate.client.testutil.DemoBundles;
+import org.inkgate.format.bundle.BundleReader;
+import org.inkgate.format.crypto.Ed25519;
+import org.inkgate.format.crypto.Fingerprint;
+import org.inkgate.format.crypto.Hex;
+import org.inkgate.format.trust.TrustPolicy;
+import org.testfx.api.FxRobot;
+import org.testfx.util.WaitForAsyncUtils;
+
+/** Drives the sitting flow headless: builds the demo sitting bundle, opens the window, fills screens by node id. */
+final class FlowDriver {
+
+    /** The demo owner key's fingerprint, computed from the published demo seed (src/demo/keys). */
+    static String demoOwnerKey() throws Exception {
+        byte[] seed = Hex.parse(Files.readString(DemoBundles.SOURCE.resolve(
+                "keys/demo-only-not-secret-owner-signing.ed25519-seed.hex")).strip());
+        return Fingerprint.of(Ed25519.rawPublic(Ed25519.publicOf(Ed25519.privateFromSeed(seed))));
+    }
+
+    /** The demo sitting's published PIN, read from src/demo/sitting.json (DEMO ONLY). */
+    static String demoPin() throws Exception {
+        return DemoSittingBuild.readSitting(DemoBundles.SOURCE).invigilatorPin();
+    }
+
+    static Path buildDemoSitting(Path folder) throws Exception {
+        Path out = folder.resolve("demo-sitting.inkexam");
+        DemoSittingBuild.build(DemoBundles.SOURCE, out);
+        return out;
+    }
+
+    final FxRobot robot;
+    final Stage stage;
+    final Path data;
+    final List<TextAreaWorkspace> workspaces = new ArrayList<>();
+    final AtomicBoolean exited = new AtomicBoolean();
+    SittingFlow flow;
+
+    FlowDriver(FxRobot robot, Stage stage, Path data) {
+        this.robot = robot;
+        this.stage = stage;
+        this.data = data;
+    }
+
+    /** Opens the flow on the bundle, trusting the demo key. */
+    SittingFlow open(Path bundle, SittingClock clock, boolean lock) throws Exception {
+        SittingLoad load = new SittingBundleOpener(Set.of(demoOwnerKey())).open(bundle);
+        AtomicReference<SittingFlow> made = new AtomicReference<>();
+        robot.interact(() -> {
+            SittingFlow f = new SittingFlow(stage, new SittingFlow.Setup(load, bundle, data, context -> {
+                TextAreaWorkspace w = new TextAreaWorkspace(context);
+                workspaces.add(w);
+                return w;
+            }, clock, false, lock, () -> exited.set(true)));
+            made.set(f);
+            f.start();
+        });
+        flow = made.get();
+        return flow;
+    }
+
+    /** Waits until a node with this id is showing. */
+    <T extends Node> T await(String id, Class<T> type) {
+        try {
+            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> robot.lookup("#" + id).tryQuery().map(Node::isVisible)
+                    .orElse(false));
+        } catch (java.util.concurrent.TimeoutException e) {
+            throw new AssertionError("#" + id + " did not appear within 60 s; screen is " + flow.screen(), e);
+        }
+        return robot.lookup("#" + id).queryAs(type);
+    }
+
+    void type(String id, String text) {
+        TextInputControl field = await(id, TextInputControl.class);
+        robot.interact(() -> field.setText(text));
+    }
+
+    void press(String id) {
+        Node button = await(id, Node.class);
+        robot.interact(() -> ((javafx.scene.control.ButtonBase) button).fire());
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    void check(String id) {
+        CheckBox box = await(id, CheckBox.class);
+        robot.interact(() -> box.setSelected(true));
+    }
+
+    String text(String id) {
+        return await(id, Label.class).getText();
+    }
+
+    /** Waits until the label with this id shows text containing {@code part}. */
+    void awaitText(String id, String part) {
+        try {
+            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> robot.lookup("#" + id).tryQuery()
+                    .map(n -> n instanceof Label l && l.getText().contains(part)).orElse(false));
+        } catch (java.util.concurrent.TimeoutException e) {
+            throw new AssertionError("#" + id + " never showed \"" + part + "\"; it shows \""
+                    + robot.lookup("#" + id).tryQuery().map(n -> ((Label) n).getText()).orElse("(nothing)") + "\"", e);
+        }
+    }
+
+    /** Set-up with the demo PIN and an output folder. */
+    void setUp(String pin, Path output) {
+        type("setupPin", pin);
+        type("setupOutput", output.toString());
+        press("setupContinue");
+    }
+
+    void signIn(String number) {
+        type("candidateNumber", number);
+        press("signInButton");
+    }
+
+    /** The workspace of the task on screen. */
+    TextAreaWorkspace workspace() {
+        assertTrue(!workspaces.isEmpty(), "no task workspace was made");
+        return workspaces.getLast();
+    }
+
+    /** Waits for the task screen whose position line contains {@code title}. */
+    void awaitTask(String title) {
+        awaitText("taskPosition", title);
+        await("editor", Node.class);
+    }
+
+    /** Types through the robot (real key events, through the lock's filters) into the task's editor. */
+    void typeInEditor(String text) {
+        robot.interact(() -> workspace().focusEditor());
+        robot.write(text);
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
+    void finishTask() {
+        press("finishTaskButton");
+        press("confirmFinishButton");
+    }
+
+    static BundleReader demoReader() throws Exception {
+        return new BundleReader(TrustPolicy.trusting(Set.of(demoOwnerKey())));
+    }
+}
