@@ -107,12 +107,12 @@ public final class SittingFlow {
      * @param dataFolder the client data folder, or null for the standard one
      * @param workspaces builds each task's workspace
      * @param clock      monotonic and wall clocks
-     * @param demo       the demo sitting (shows the demo-only note)
+     * @param demoNote   for the demo sitting only: its published PIN and candidate numbers, shown at set-up; else null
      * @param lock       lock the window (false only in tests that check the flow, not the lock)
      * @param onExit     what exiting does after the window closed (null: end the JavaFX runtime)
      */
     public record Setup(SittingLoad load, Path bundleFile, Path dataFolder, WorkspaceFactory workspaces,
-            SittingClock clock, boolean demo, boolean lock, Runnable onExit) {
+            SittingClock clock, String demoNote, boolean lock, Runnable onExit) {
         public Setup {
             Objects.requireNonNull(load, "load");
             Objects.requireNonNull(workspaces, "workspaces");
@@ -261,7 +261,7 @@ public final class SittingFlow {
         List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
                 ? m.forms().stream().map(f -> f.id()).toList() : List.of();
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
-                setup.demo() ? DEMO_NOTE : null, openForms, input -> checkSetup(screen[0], input));
+                setup.demoNote() == null ? null : DEMO_NOTE + "\n\n" + setup.demoNote(), openForms, input -> checkSetup(screen[0], input));
         shell.show(screen[0].root());
         screen[0].focus();
     }
