@@ -150,10 +150,7 @@ public final class SittingFlow {
     private boolean entryWaiting;
     private SubmitScreen submitScreen;
     private final Map<String, Integer> words = new LinkedHashMap<>();
-    private final PausedCover pausedCover = new PausedCover();
-    private PinPrompt pinPrompt;
-    private InvigilatorPanel panel;
-    private final List<String> focusLines = new ArrayList<>();
+    private InvigilatorDesk desk;
     private Screen current = Screen.NONE;
 
     /** Where the flow is; the invigilator panel and the lock depend on it. */
@@ -180,6 +177,7 @@ public final class SittingFlow {
         current = Screen.REFUSED;
         RefusalView refusal = new RefusalView(message, this::exitApplication);
         shell = new SittingShell("Inkgate sitting");
+        desk = new InvigilatorDesk(shell, setup.clock(), deskHost());
         shell.show(refusal);
         showStage("Inkgate - exam bundle not opened");
         refusal.closeButton().requestFocus();
@@ -189,6 +187,7 @@ public final class SittingFlow {
         this.bundle = opened;
         BundleManifest m = opened.manifest();
         shell = new SittingShell(m.title());
+        desk = new InvigilatorDesk(shell, setup.clock(), deskHost());
         showStage("Inkgate - " + m.title());
         if (setup.lock()) {
             lock = StageLock.apply(stage, new StageLock.FocusListener() {
@@ -510,6 +509,7 @@ public final class SittingFlow {
             }
         }
         updateClock();
+        desk.refresh();
     }
 
     private void updateClock() {
@@ -729,7 +729,7 @@ public final class SittingFlow {
         }
         paused = sitting.paused();
         if (paused) {
-            shell.cover(pausedCover);
+            desk.coverPaused(true);
         }
         Optional<String> next = sitting.nextTask();
         String where;
@@ -775,38 +775,37 @@ public final class SittingFlow {
 
     private void openInvigilator() {
         if (current == Screen.NONE || current == Screen.REFUSED || current == Screen.SETUP
-                || current == Screen.RECOVERY || (pinPrompt != null && shell.covered(pinPrompt))
-                || (panel != null && shell.covered(panel))) {
+                || current == Screen.RECOVERY) {
             return;
         }
-        pinPrompt = new PinPrompt(this::checkInvigilatorPin, this::closePinPrompt);
-        shell.cover(pinPrompt);
-        pinPrompt.reset();
+        desk.open();
     }
 
-    private void checkInvigilatorPin(char[] pin) {
-        pinPrompt.busy();
-        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), pin), ok -> {
-            if (!ok) {
-                pinPrompt.wrong("That is not the invigilator PIN.");
-                return;
-            }
-            shell.uncover(pinPrompt);
-            showPanel();
-        });
-    }
-
-    private void closePinPrompt() {
-        shell.uncover(pinPrompt);
-        refocus();
-    }
-
-    private void showPanel() {
-        panel = new InvigilatorPanel(new InvigilatorPanel.Actions() {
+    private InvigilatorDesk.Host deskHost() {
+        return new InvigilatorDesk.Host() {
             @Override
-            public void pauseOrResume() {
-                setPaused(!paused);
-                updatePanel();
+            public boolean pinMatches(char[] pin) {
+                return PinHasher.matches(bundle.manifest().invigilatorPin(), pin);
+            }
+
+            @Override
+            public String stateLine() {
+                return SittingFlow.this.stateLine();
+            }
+
+            @Override
+            public boolean paused() {
+                return paused;
+            }
+
+            @Override
+            public boolean inTask() {
+                return current == Screen.TASK;
+            }
+
+            @Override
+            public void setPaused(boolean pause) {
+                SittingFlow.this.setPaused(pause);
             }
 
             @Override
@@ -816,37 +815,32 @@ public final class SittingFlow {
                     shell.announcer().announce(minutes + (minutes == 1 ? " minute was" : " minutes were")
                             + " added to this task.");
                     updateClock();
-                    updatePanel();
                 }
             }
 
             @Override
             public void endTask() {
-                shell.uncover(panel);
                 SittingFlow.this.endTask(EndReason.ENDED_BY_INVIGILATOR);
             }
 
             @Override
-            public void exitSitting() {
+            public void exit() {
                 exitByInvigilator();
             }
 
             @Override
-            public void close() {
-                shell.uncover(panel);
+            public void backToCandidate() {
                 refocus();
             }
-        });
-        focusLines.forEach(panel::focusEvent);
-        updatePanel();
-        shell.cover(panel);
-        panel.focus();
+
+            @Override
+            public <T> void work(Supplier<T> job, java.util.function.Consumer<T> then) {
+                SittingFlow.this.work(job, then);
+            }
+        };
     }
 
-    private void updatePanel() {
-        if (panel == null) {
-            return;
-        }
+    private String stateLine() {
         StringBuilder state = new StringBuilder();
         if (plan == null) {
             state.append("No candidate has signed in yet.");
@@ -868,7 +862,7 @@ public final class SittingFlow {
             }
         }
         state.append(paused ? "The exam is PAUSED." : "The exam is running.");
-        panel.update(state.toString(), paused, current == Screen.TASK);
+        return state.toString();
     }
 
     private void setPaused(boolean pause) {
@@ -879,16 +873,11 @@ public final class SittingFlow {
         if (pause) {
             sitting.pauseAll();
             freeze(true);
-            shell.cover(pausedCover);
-            if (panel != null && shell.covered(panel)) {
-                // keep the invigilator's panel above the cover
-                shell.uncover(panel);
-                shell.cover(panel);
-            }
+            desk.coverPaused(true);
             shell.announcer().announce(PausedCover.HEADING + ".");
         } else {
             sitting.resumeAll();
-            shell.uncover(pausedCover);
+            desk.coverPaused(false);
             if (!taskEnding) {
                 freeze(false);
             }
@@ -935,11 +924,7 @@ public final class SittingFlow {
     }
 
     private void focusLine(String what) {
-        String line = CLOCK.format(setup.clock().now()) + "  " + what;
-        focusLines.add(line);
-        if (panel != null) {
-            panel.focusEvent(line);
-        }
+        desk.note(what);
     }
 
     private void storageTrouble(String message) {
@@ -1084,23 +1069,13 @@ public final class SittingFlow {
         return lock;
     }
 
-    /** Focus log lines, oldest first. */
+    /** Lines the invigilator screen lists (focus changes, hand-in trouble), oldest first. */
     List<String> focusLines() {
-        return List.copyOf(focusLines);
+        return desk.lines();
     }
 
     Screen screen() {
         return current;
-    }
-
-    /** Which parts of the screen exist (for tests naming nodes). */
-    Map<String, Node> parts() {
-        Map<String, Node> parts = new LinkedHashMap<>();
-        parts.put("pausedCover", pausedCover);
-        if (panel != null) {
-            parts.put("panel", panel);
-        }
-        return parts;
     }
 
     Parent root() {
