@@ -107,7 +107,6 @@ final class DictionaryPage implements ToolPage {
         if (actions.insertAllowed()) {
             root.getChildren().add(insertRow());
         }
-        root.disableProperty().bind(actions.frozen());
     }
 
     private Node insertRow() {

@@ -87,6 +87,9 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         }
         this.keys = new ToolKeys(pages.stream().map(ToolPage::tool).toList());
         this.panel = pages.isEmpty() ? null : new ResourcePanel(pages, events, keys.help());
+        if (panel != null) {
+            panel.disableProperty().bind(frozen); // frozen: the panel answers nothing
+        }
 
         layout(context);
         listen();
