@@ -148,6 +148,7 @@ public final class SittingFlow {
     private boolean paused;
     private boolean taskEnding;
     private boolean entryWaiting;
+    private String startText;
     private SubmitScreen submitScreen;
     private final Map<String, Integer> words = new LinkedHashMap<>();
     private InvigilatorDesk desk;
@@ -338,6 +339,8 @@ public final class SittingFlow {
         }
         plan = candidate;
         applyDisplay();
+        // the timeline runs from sign-in to the end: it drives the timers and reports saving trouble on every screen
+        ticker.play();
         showInstructions();
     }
 
@@ -448,15 +451,15 @@ public final class SittingFlow {
     }
 
     private void enterTask(int index) {
-        current = Screen.TASK;
-        taskIndex = index;
-        taskEnding = false;
         FormSlot slot = plan.form().slots().get(index);
         if (paused) {
             // a sitting recovered while paused: the task begins when the invigilator resumes
             entryWaiting = true;
             return;
         }
+        current = Screen.TASK;
+        taskIndex = index;
+        taskEnding = false;
         sitting.showScreen("task");
         TaskStart start;
         try {
@@ -466,9 +469,17 @@ public final class SittingFlow {
                     + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
             return;
         }
+        startText = start.text();
         shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
                 Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
         shelf.take(slot.taskId()).whenComplete((tools, failure) -> Platform.runLater(() -> {
+            if (current != Screen.TASK || taskIndex != index || taskEnding) {
+                // the task ended (time, invigilator) while its tools were being prepared
+                if (tools != null) {
+                    tools.close();
+                }
+                return;
+            }
             if (failure != null) {
                 shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
                 return;
@@ -550,7 +561,8 @@ public final class SittingFlow {
     }
 
     private void endTask(EndReason reason) {
-        if (current != Screen.TASK || taskEnding) {
+        // no workspace yet: the task's tools are still being prepared, and there is nothing to end
+        if (current != Screen.TASK || taskEnding || workspace == null) {
             return;
         }
         taskEnding = true;
@@ -558,14 +570,23 @@ public final class SittingFlow {
     }
 
     private void finishTask(EndReason reason, boolean endSitting) {
-        ticker.stop();
         FormSlot slot = plan.form().slots().get(taskIndex);
-        words.put(slot.taskId(), workspace.wordCount());
-        sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
-        workspace.close();
+        if (workspace != null) {
+            words.put(slot.taskId(), workspace.wordCount());
+            sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
+            workspace.close();
+        } else {
+            // the time ran out before the task's tools were ready: the text is what was there when it began
+            String text = startText == null ? "" : startText;
+            words.put(slot.taskId(), WordCount.of(text));
+            sitting.endTask(slot.taskId(), reason, text, WordCount.of(text), Map.of());
+        }
         workspace = null;
+        startText = null;
         taskScreen = null;
         shell.announcer().clear();
+        current = Screen.NONE;
+        updateClock();
         if (endSitting) {
             sitting.endUnstartedTasks(EndReason.TIME_UP);
         }
@@ -709,6 +730,7 @@ public final class SittingFlow {
                 return;
             }
             plan = sitting.plan();
+            ticker.play();
             outputFolder = input.outputFolder().toAbsolutePath();
             seat = plan.seat();
             applyDisplay();

@@ -112,8 +112,9 @@ class SittingScreenshotTest {
     @Test
     void snapshots_accommodationsAndRecovery_writePngs(FxRobot robot) throws Exception {
         Path bundle = FlowDriver.buildDemoSitting(temp);
+        ManualClock clock = new ManualClock();
         FlowDriver d = new FlowDriver(robot, stage, temp.resolve("data"));
-        d.openReal(bundle, SittingClock.system());
+        d.openReal(bundle, clock);
         d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
         // D1003: large print, high contrast, 25% extra time (src/demo/sitting.json)
         d.signIn("D1003");
@@ -123,11 +124,18 @@ class SittingScreenshotTest {
         WaitForAsyncUtils.sleep(1500, TimeUnit.MILLISECONDS);
         save(robot, "sitting-13-large-print-high-contrast.png");
         robot.interact(() -> d.flow.closeQuietly());
+        // the machine is down for three minutes (invented, for the picture)
+        clock.advance(Duration.ofMinutes(3));
 
         FlowDriver again = new FlowDriver(robot, stage, temp.resolve("data"));
-        again.openReal(bundle, SittingClock.system());
+        again.openReal(bundle, clock);
         again.await("recoveryScreen", Node.class);
+        again.check("creditDowntime");
         save(robot, "sitting-14-recovery.png");
+        again.type("recoveryPin", FlowDriver.demoPin());
+        again.press("resumeButton");
+        again.await("continueButton", Node.class);
+        save(robot, "sitting-15-resumed.png");
     }
 
     @Test
