@@ -500,9 +500,38 @@ public final class SittingFlow {
             if (paused) {
                 freeze(true);
             } else {
-                workspace.focusEditor();
+                focusEditorOnceShown(workspace);
             }
         }));
+    }
+
+    /**
+     * Puts the caret in the new task's editor. The editor takes focus only once its skin is laid
+     * out, which can take a few pulses; until then the scene gives focus to the first button it
+     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most a
+     * second), and never after the task has changed or the exam is paused.
+     */
+    private void focusEditorOnceShown(TaskWorkspace shown) {
+        Timeline retry = new Timeline();
+        retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
+            if (workspace != shown || paused || focusInside(shown.view())) {
+                retry.stop();
+                return;
+            }
+            shown.focusEditor();
+        }));
+        retry.setCycleCount(34);
+        shown.focusEditor();
+        retry.play();
+    }
+
+    private boolean focusInside(Node container) {
+        for (Node n = scene.getFocusOwner(); n != null; n = n.getParent()) {
+            if (n == container) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private void tick() {

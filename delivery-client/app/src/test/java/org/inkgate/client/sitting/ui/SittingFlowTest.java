@@ -203,6 +203,9 @@ class SittingFlowTest {
         d.signIn("D1001");
         d.press("startButton");
         d.awaitTask("A note to a neighbour");
+        // the caret is in the editor without anyone clicking it
+        WaitForAsyncUtils.waitFor(10, java.util.concurrent.TimeUnit.SECONDS,
+                () -> stage.getScene().getFocusOwner() != null && "editor".equals(stage.getScene().getFocusOwner().getId()));
         // the first task allows 1200 s (exam.json) and D1001 has no extra time (sitting.json)
         d.awaitText("timeLeft", "20:00");
 
