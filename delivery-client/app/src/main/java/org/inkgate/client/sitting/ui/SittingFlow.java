@@ -261,7 +261,8 @@ public final class SittingFlow {
         List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
                 ? m.forms().stream().map(f -> f.id()).toList() : List.of();
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
-                setup.demoNote() == null ? null : DEMO_NOTE + "\n\n" + setup.demoNote(), openForms, input -> checkSetup(screen[0], input));
+                setup.demoNote() == null ? null : DEMO_NOTE + "\n\n" + setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
+                this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
     }
@@ -734,7 +735,7 @@ public final class SittingFlow {
         String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
         screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
-                input -> resume(screen[0], found, input, down));
+                input -> resume(screen[0], found, input, down), this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
     }

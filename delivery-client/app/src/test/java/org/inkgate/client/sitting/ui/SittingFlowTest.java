@@ -95,6 +95,19 @@ class SittingFlowTest {
     }
 
     @Test
+    void setUp_exit_closesTheLockedWindowWithoutStartingASitting(FxRobot robot) throws Exception {
+        FlowDriver d = driver();
+        d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), true);
+        d.await("setupPin", Node.class);
+
+        d.press("setupExit");
+
+        assertTrue(d.exited.get(), "exit did not end the client");
+        assertFalse(d.flow.lock().locked(), "the lock outlived the exit");
+        assertFalse(stage.isShowing());
+    }
+
+    @Test
     void signIn_unknownCandidateNumber_saysItIsNotOnTheRoster(FxRobot robot) throws Exception {
         FlowDriver d = driver();
         d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
