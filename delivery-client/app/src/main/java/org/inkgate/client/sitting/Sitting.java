@@ -634,7 +634,7 @@ public final class Sitting implements AutoCloseable {
             try {
                 TextReplay.compare(f.getKey(), f.getValue(), TextReplay.replay(f.getKey(), events).text()).ifPresent(mismatches::add);
             } catch (ReplayException e) {
-                mismatches.add(new ReplayMismatch(f.getKey(), 0, f.getValue().length(), -1));
+                mismatches.add(ReplayMismatch.unreplayable(f.getKey(), f.getValue().length(), e));
             }
         }
         return mismatches;

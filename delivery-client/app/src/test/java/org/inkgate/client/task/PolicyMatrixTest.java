@@ -89,7 +89,7 @@ class PolicyMatrixTest {
             Tool.SPELLING, "#flagList");
     private static final Map<Tool, KeyCode> SHORTCUT = Map.of(Tool.DICTIONARY, KeyCode.D, Tool.GLOSSARY, KeyCode.G, Tool.SPELLING, KeyCode.K);
 
-    @ParameterizedTest
+    @ParameterizedTest(name = "{0}")
     @MethodSource("everyPolicy")
     void workspace_everyPolicy_offersExactlyTheAllowedTools(ResourcePolicy policy, FxRobot robot) throws Exception {
         RecordingLog log = new RecordingLog();

@@ -84,9 +84,11 @@ class ScriptedSessionReplayTest {
         robot.clickOn(robot.lookup("#dictionaryResults .list-cell").nth(0).queryAs(javafx.scene.Node.class));
         ListView<String> words = robot.lookup("#dictionaryInsertable").queryListView();
         Shown.until("the entry's words", () -> !words.getItems().isEmpty());
-        Shown.onFx(robot, () -> workspace.area().moveTo(workspace.area().getLength()));
+        Shown.onFx(robot, () -> {
+            workspace.focusEditor();
+            workspace.area().moveTo(workspace.area().getLength());
+        });
         robot.write(" ");
-        robot.press(KeyCode.CONTROL, KeyCode.SHIFT, KeyCode.D).release(KeyCode.D, KeyCode.SHIFT, KeyCode.CONTROL);
         robot.clickOn(robot.lookup("#dictionaryInsertable .list-cell").nth(0).queryAs(javafx.scene.Node.class));
         String word = words.getSelectionModel().getSelectedItem();
         robot.clickOn("#dictionaryInsert");

@@ -68,7 +68,7 @@ public final class TextRecovery {
             Replayed before = TextReplay.replay(taskId, all.stream().filter(e -> e.seq() <= upTo).toList());
             mismatch = TextReplay.compare(taskId, snapText, before.text());
         } catch (ReplayException e) {
-            mismatch = Optional.of(new ReplayMismatch(taskId, 0, snapText.length(), -1));
+            mismatch = Optional.of(ReplayMismatch.unreplayable(taskId, snapText.length(), e));
             problem = Optional.of(e.getMessage());
         }
         List<ProcessEvent> tail = all.stream().filter(e -> e.seq() > upTo).toList();

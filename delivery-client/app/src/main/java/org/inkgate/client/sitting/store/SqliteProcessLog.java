@@ -2,8 +2,12 @@ package org.inkgate.client.sitting.store;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.channels.FileChannel;
+import java.nio.channels.FileLock;
+import java.nio.channels.OverlappingFileLockException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
@@ -39,6 +43,9 @@ import org.inkgate.format.response.ProcessEvent;
  */
 public final class SqliteProcessLog implements ProcessLog, AutoCloseable {
 
+    /** Suffix of the lock file beside a sitting database while a log writes it. */
+    public static final String LOCK_SUFFIX = ".writer-lock";
+
     /** How long a batch stays open after its first item. */
     public static final long BATCH_MILLIS = 100;
     /** Snapshots of one task are written at most this often while typing goes on. */
@@ -72,6 +79,7 @@ public final class SqliteProcessLog implements ProcessLog, AutoCloseable {
     }
 
     private final Path file;
+    private final FileLock writerLock;
     private final Connection connection;
     private final SittingClock clock;
     private final LinkedBlockingQueue<Item> queue = new LinkedBlockingQueue<>();
@@ -83,26 +91,40 @@ public final class SqliteProcessLog implements ProcessLog, AutoCloseable {
     private volatile String problem;
     private volatile boolean closed;
 
-    private SqliteProcessLog(Path file, Connection connection, SittingClock clock, long lastSeq) {
+    private SqliteProcessLog(Path file, FileLock writerLock, Connection connection, SittingClock clock, long lastSeq) {
         this.file = file;
+        this.writerLock = writerLock;
         this.connection = connection;
         this.clock = clock;
         this.lastSeq = lastSeq;
         this.writer = Thread.ofPlatform().name("inkgate-process-log").daemon(true).unstarted(this::run);
     }
 
-    /** Opens the log of the sitting database {@code file}; numbering continues after its last event. */
+    /**
+     * Opens the log of the sitting database {@code file}; numbering continues after its last event.
+     * Only one log may write a sitting at a time (in this process or any other): a second open is
+     * refused while the first is open, because two writers would number events twice. The lock is
+     * a file beside the database ({@value #LOCK_SUFFIX}), released by the operating system if the
+     * process dies.
+     */
     public static SqliteProcessLog open(Path file, SittingClock clock) throws IOException {
         Objects.requireNonNull(clock, "clock");
-        Connection c = SittingDatabase.open(file);
+        FileLock lock = lockWriter(file);
+        Connection c;
         long last;
-        try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT COALESCE(MAX(seq), 0) FROM events")) {
-            last = rs.getLong(1);
-        } catch (SQLException e) {
-            closeQuietly(c);
-            throw new IOException(file + ": cannot read the process log: " + e.getMessage(), e);
+        try {
+            c = SittingDatabase.open(file);
+            try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT COALESCE(MAX(seq), 0) FROM events")) {
+                last = rs.getLong(1);
+            } catch (SQLException e) {
+                closeQuietly(c);
+                throw new IOException(file + ": cannot read the process log: " + e.getMessage(), e);
+            }
+        } catch (IOException | RuntimeException e) {
+            release(lock);
+            throw e;
         }
-        SqliteProcessLog log = new SqliteProcessLog(file, c, clock, last);
+        SqliteProcessLog log = new SqliteProcessLog(file, lock, c, clock, last);
         log.writer.start();
         return log;
     }
@@ -206,6 +228,33 @@ public final class SqliteProcessLog implements ProcessLog, AutoCloseable {
         }
     }
 
+    private static FileLock lockWriter(Path file) throws IOException {
+        Path lockFile = file.resolveSibling(file.getFileName() + LOCK_SUFFIX);
+        java.nio.file.Files.createDirectories(lockFile.toAbsolutePath().getParent());
+        FileChannel channel = FileChannel.open(lockFile, StandardOpenOption.CREATE, StandardOpenOption.WRITE);
+        FileLock lock;
+        try {
+            lock = channel.tryLock();
+        } catch (OverlappingFileLockException e) {
+            lock = null;
+        }
+        if (lock == null) {
+            channel.close();
+            throw new IOException(file + ": this sitting is already open in a running client (or a second time in this"
+                    + " one); only one may write it at a time. Close the other client, or wait for the first resume to finish.");
+        }
+        return lock;
+    }
+
+    private static void release(FileLock lock) {
+        try {
+            lock.release();
+            lock.channel().close();
+        } catch (IOException e) {
+            // the operating system drops the lock with the process anyway
+        }
+    }
+
     // -- reading (also used by recovery before a log is opened) --
 
     /** Reads every event of an open connection, in order. */
@@ -282,7 +331,11 @@ public final class SqliteProcessLog implements ProcessLog, AutoCloseable {
                 continue;
             }
             if (closing) {
-                closeQuietly(connection);
+                try {
+                    closeQuietly(connection);
+                } finally {
+                    release(writerLock);
+                }
                 return;
             }
         }
