@@ -90,6 +90,35 @@ class SittingFlowTest {
     }
 
     @Test
+    void poll_whileTheDatabaseRefusesWrites_signalsTroubleThenRecovery() throws Exception {
+        try (Sitting s = Sitting.begin(SittingFixtures.candidate1001(), new ClientDataFolder(dir), new FakeClock())) {
+            java.util.concurrent.atomic.AtomicBoolean broken = new java.util.concurrent.atomic.AtomicBoolean(true);
+            s.log().persist(c -> {
+                if (broken.get()) {
+                    throw new java.sql.SQLException("disk I/O error (simulated)");
+                }
+            });
+            List<SittingSignal> signals = pollUntil(s, SittingSignal.StorageTrouble.class);
+            assertTrue(((SittingSignal.StorageTrouble) signals.getFirst()).message().contains("kept in memory"), signals.toString());
+            broken.set(false);
+            pollUntil(s, SittingSignal.StorageRecovered.class);
+        }
+    }
+
+    /** Polls until a signal of the type comes (the writer thread retries every 250 ms); gives up after 30 s. */
+    private static List<SittingSignal> pollUntil(Sitting s, Class<? extends SittingSignal> type) throws InterruptedException {
+        long until = System.nanoTime() + java.util.concurrent.TimeUnit.SECONDS.toNanos(30);
+        while (System.nanoTime() < until) {
+            List<SittingSignal> signals = s.poll().stream().filter(type::isInstance).toList();
+            if (!signals.isEmpty()) {
+                return signals;
+            }
+            Thread.sleep(20);
+        }
+        throw new AssertionError("no " + type.getSimpleName() + " within 30 s");
+    }
+
+    @Test
     void enterTask_outOfFormOrder_isRefused() throws Exception {
         try (Sitting s = Sitting.begin(SittingFixtures.candidate1001(), new ClientDataFolder(dir), new FakeClock())) {
             IllegalStateException e = assertThrows(IllegalStateException.class, () -> s.enterTask("t2"));
