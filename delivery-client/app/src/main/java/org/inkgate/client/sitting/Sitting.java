@@ -362,7 +362,12 @@ public final class Sitting implements AutoCloseable {
         return record(taskId).countdown.map(cd -> Duration.ofMillis(cd.allowedMillis()));
     }
 
-    /** Time left in the whole sitting; empty when the form sets no sitting limit. */
+    /**
+     * Time left in the whole sitting; empty when the form sets no sitting limit. The sitting limit
+     * counts from the start of the first task to submission (questionnaires and the time between
+     * tasks included, pauses excluded), with the roster's extra time and the invigilator's
+     * additions applied as to task limits.
+     */
     public Optional<Duration> sittingRemaining() {
         return sittingCountdown.map(cd -> Duration.ofMillis(cd.remainingMillis()));
     }
