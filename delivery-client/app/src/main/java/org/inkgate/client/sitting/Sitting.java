@@ -115,6 +115,7 @@ public final class Sitting implements AutoCloseable {
     private Path localCopy;
     private boolean submitted;
     private boolean closed;
+    private boolean endRecorded;
 
     private Sitting(String sittingId, SittingPlan plan, ClientDataFolder folder, SittingClock clock, SqliteProcessLog log,
             Instant startedAt, Map<String, long[]> usedAdded, Map<String, Set<Integer>> warned, long sittingUsed,
@@ -669,7 +670,11 @@ public final class Sitting implements AutoCloseable {
             log.persist(c -> update(c, "UPDATE sitting SET package_id = ? WHERE id = 1", id));
         }
         sittingCountdown.ifPresent(Countdown::stop);
-        log.record(EventTypes.SITTING_END, null, Map.of("reason", "submitted"));
+        if (!endRecorded) {
+            // a retry after the local copy failed does not end the sitting twice
+            log.record(EventTypes.SITTING_END, null, Map.of("reason", "submitted"));
+            endRecorded = true;
+        }
         checkpoint();
         Instant submittedAt = clock.now();
         List<ProcessEvent> events = log.events();
