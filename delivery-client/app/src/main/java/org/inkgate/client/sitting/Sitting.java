@@ -159,8 +159,8 @@ public final class Sitting implements AutoCloseable {
         s.screen = "";
         log.persist(c -> {
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO sitting(id, sitting_id, bundle_sha256, bundle_file, exam_id,"
-                    + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, screen, current_task)"
-                    + " VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL)")) {
+                    + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, client_version, screen,"
+                    + " current_task) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL)")) {
                 ps.setString(1, id);
                 ps.setString(2, plan.manifestSha256());
                 ps.setString(3, plan.bundleFile());
@@ -172,6 +172,7 @@ public final class Sitting implements AutoCloseable {
                 ps.setString(9, now.toString());
                 ps.setString(10, RecoveryScan.IN_PROGRESS);
                 ps.setString(11, now.toString());
+                ps.setString(12, plan.clientVersion());
                 ps.executeUpdate();
             }
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO tasks(task_id, ord, condition_id, policy) VALUES (?, ?, ?, ?)")) {
@@ -235,7 +236,7 @@ public final class Sitting implements AutoCloseable {
             }
         }
         try (PreparedStatement ps = c.prepareStatement("SELECT seat, extra_percent, started_at, sitting_used_ms, sitting_added_ms,"
-                + " screen, current_task, paused, package_id, local_copy, status FROM sitting WHERE id = 1");
+                + " screen, current_task, paused, package_id, local_copy, status, client_version FROM sitting WHERE id = 1");
                 ResultSet rs = ps.executeQuery()) {
             if (!rs.next()) {
                 throw new SQLException(found.database() + " holds no sitting");
@@ -244,7 +245,7 @@ public final class Sitting implements AutoCloseable {
             var entry = manifest.roster().stream().filter(r -> r.candidateNumber().equals(found.candidateNumber())).findFirst();
             SittingPlan plan = new SittingPlan(manifest, found.bundleSha256(), found.bundleFile(), found.candidateNumber(),
                     rs.getString(1), found.formId(), extra, entry.map(r -> r.largePrint()).orElse(false),
-                    entry.map(r -> r.highContrast()).orElse(false), null);
+                    entry.map(r -> r.highContrast()).orElse(false), rs.getString(12));
             Sitting s = new Sitting(found.sittingId(), plan, folder, clock, log, Instant.parse(rs.getString(3)), usedAdded, warned,
                     rs.getLong(4), rs.getLong(5));
             s.screen = Objects.requireNonNullElse(rs.getString(6), "");

@@ -73,6 +73,8 @@ class SittingFlowTest {
                 .open(result.delivered().orElseThrow());
         assertEquals("1001", opened.response().candidateNumber());
         assertEquals("A", opened.response().formId());
+        assertEquals("seat 4", opened.response().seat());
+        assertEquals("test", opened.response().clientVersion());
         assertEquals(SittingFixtures.SHA, opened.response().bundleManifestSha256());
         TaskResponse r1 = opened.response().tasks().get(0);
         assertEquals("t1", r1.taskId());
