@@ -19,6 +19,7 @@ import javafx.scene.input.MouseButton;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.inkgate.packs.dictionary.Dictionary;
 import org.inkgate.packs.dictionary.DictionaryEntry;
@@ -65,6 +66,7 @@ final class DictionaryPage implements ToolPage {
         Button go = new Button("Look up");
         go.setId("dictionaryLookUp");
         go.setOnAction(e -> lookUp(query.getText()));
+        go.setMinWidth(Region.USE_PREF_SIZE); // never shortened to "..." in large print
         HBox.setHgrow(query, Priority.ALWAYS);
         HBox search = new HBox(8, query, go);
         search.setAlignment(Pos.CENTER_LEFT);
@@ -107,7 +109,6 @@ final class DictionaryPage implements ToolPage {
         if (actions.insertAllowed()) {
             root.getChildren().add(insertRow());
         }
-        root.disableProperty().bind(actions.frozen());
     }
 
     private Node insertRow() {

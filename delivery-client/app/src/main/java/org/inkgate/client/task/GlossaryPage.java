@@ -104,7 +104,6 @@ final class GlossaryPage implements ToolPage {
         if (actions.insertAllowed()) {
             root.getChildren().add(insertRow());
         }
-        root.disableProperty().bind(actions.frozen());
     }
 
     static String describe(GlossaryHit hit) {

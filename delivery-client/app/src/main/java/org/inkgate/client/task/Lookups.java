@@ -76,8 +76,17 @@ final class Lookups implements AutoCloseable {
         return new Channel(failed);
     }
 
+    /**
+     * Stops taking requests and lets a lookup under way finish (briefly), so the packs can be closed
+     * after it; no interrupt, which could close a Lucene file channel mid-read.
+     */
     @Override
     public void close() {
-        worker.shutdownNow();
+        worker.shutdown();
+        try {
+            worker.awaitTermination(2, java.util.concurrent.TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
     }
 }

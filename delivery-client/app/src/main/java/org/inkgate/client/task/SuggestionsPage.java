@@ -76,7 +76,6 @@ final class SuggestionsPage implements ToolPage {
                 : "Words the spelling check marked. Choose one to see suggestions.", "panel-note");
         root = new VBox(10, intro, flags, message, options, new HBox(8, use, ignore));
         root.getStyleClass().add("tool-page");
-        root.disableProperty().bind(actions.frozen());
     }
 
     /** Shows the current flags (called whenever they change). */

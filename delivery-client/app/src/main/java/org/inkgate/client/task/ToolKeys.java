@@ -1,7 +1,7 @@
 package org.inkgate.client.task;
 
 import java.util.ArrayList;
-import java.util.EnumMap;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import javafx.scene.input.KeyCode;
@@ -22,7 +22,7 @@ final class ToolKeys {
     /** Moves between the answer and the panel (a common desktop key for switching panes). */
     static final KeyCombination SWITCH = new KeyCodeCombination(KeyCode.F6);
 
-    private final Map<Tool, KeyCombination> keys = new EnumMap<>(Tool.class);
+    private final Map<Tool, KeyCombination> keys = new LinkedHashMap<>(); // in tab order, for the help line
 
     ToolKeys(List<Tool> withPages) {
         for (Tool t : withPages) {

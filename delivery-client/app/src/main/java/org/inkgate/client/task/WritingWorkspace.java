@@ -19,6 +19,7 @@ import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
 import org.fxmisc.flowless.VirtualizedScrollPane;
 import org.inkgate.client.practice.PromptText;
@@ -87,6 +88,9 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         }
         this.keys = new ToolKeys(pages.stream().map(ToolPage::tool).toList());
         this.panel = pages.isEmpty() ? null : new ResourcePanel(pages, events, keys.help());
+        if (panel != null) {
+            panel.disableProperty().bind(frozen); // frozen: the panel answers nothing
+        }
 
         layout(context);
         listen();
@@ -107,10 +111,15 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
 
         PromptView prompt = new PromptView();
         prompt.setId("prompt");
-        prompt.show(PromptText.parse(context.promptMarkdown() == null ? "" : context.promptMarkdown()));
-        Label title = ToolPage.wrapped(context.task().title(), "task-title");
-        title.setId("taskTitle");
-        VBox promptBox = new VBox(12, title, prompt);
+        PromptText text = PromptText.parse(context.promptMarkdown() == null ? "" : context.promptMarkdown());
+        prompt.show(text);
+        VBox promptBox = new VBox(12, prompt);
+        // the task's title heads the prompt, unless the prompt opens with its own heading
+        if (text.blocks().isEmpty() || text.blocks().get(0).kind() != PromptText.Kind.HEADING) {
+            Label title = ToolPage.wrapped(context.task().title(), "task-title");
+            title.setId("taskTitle");
+            promptBox.getChildren().add(0, title);
+        }
         promptBox.getStyleClass().add("prompt-box");
         ScrollPane promptScroll = new ScrollPane(promptBox);
         promptScroll.setId("promptScroll");
@@ -125,8 +134,11 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         heading.getStyleClass().add("answer-heading");
         VirtualizedScrollPane<AnswerArea> scroll = new VirtualizedScrollPane<>(area);
         scroll.getStyleClass().add("answer-scroll");
-        VBox.setVgrow(scroll, Priority.ALWAYS);
-        VBox answer = new VBox(8, heading, scroll, status);
+        // the frame draws the border and the focus ring (the scroll pane lays its content over its own insets)
+        StackPane frame = new StackPane(scroll);
+        frame.getStyleClass().add("answer-frame");
+        VBox.setVgrow(frame, Priority.ALWAYS);
+        VBox answer = new VBox(8, heading, frame, status);
         answer.getStyleClass().add("answer-column");
 
         SplitPane columns = new SplitPane();

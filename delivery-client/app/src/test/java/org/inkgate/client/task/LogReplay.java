@@ -1,42 +1,34 @@
 package org.inkgate.client.task;
 
+import java.time.Instant;
+import java.util.ArrayList;
 import java.util.List;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.client.sitting.replay.ReplayException;
+import org.inkgate.client.sitting.replay.TextReplay;
+import org.inkgate.format.response.ProcessEvent;
 
 /**
- * Rebuilds an answer from the process log alone, as a researcher would: applies every
- * text.insert and text.delete in order, checking that each delete removes exactly the text it
- * names. Written here because the sitting core's replay was not yet on this branch.
+ * Rebuilds an answer from the recorded events alone with the sitting core's {@link TextReplay}
+ * (the replay the recovery and the researcher's checks use), which refuses any delete that does
+ * not remove exactly the text it names.
  */
 final class LogReplay {
 
     private LogReplay() {
     }
 
-    static String replay(String startText, List<RecordingLog.Event> events) {
-        StringBuilder text = new StringBuilder(startText);
-        for (RecordingLog.Event e : events) {
-            switch (e.type()) {
-                case EventTypes.TEXT_INSERT -> {
-                    int pos = (Integer) e.get("pos");
-                    String inserted = (String) e.get("text");
-                    if ((Integer) e.get("len") != inserted.length()) {
-                        throw new AssertionError("len does not match text in " + e);
-                    }
-                    text.insert(pos, inserted);
-                }
-                case EventTypes.TEXT_DELETE -> {
-                    int pos = (Integer) e.get("pos");
-                    int len = (Integer) e.get("len");
-                    String removed = text.substring(pos, pos + len);
-                    if (!removed.equals(e.get("text"))) {
-                        throw new AssertionError("delete at " + pos + " names \"" + e.get("text") + "\" but the replayed text holds \"" + removed + "\"");
-                    }
-                    text.delete(pos, pos + len);
-                }
-                default -> { }
-            }
+    static String replay(String startText, List<RecordingLog.Event> recorded) {
+        List<ProcessEvent> events = new ArrayList<>();
+        long seq = 0;
+        String task = null;
+        for (RecordingLog.Event e : recorded) {
+            events.add(new ProcessEvent(++seq, Instant.EPOCH, seq, e.type(), e.taskId(), e.data()));
+            task = task == null ? e.taskId() : task;
         }
-        return text.toString();
+        try {
+            return TextReplay.replay(startText, startText.length(), task == null ? TestTools.TASK.id() : task, events).text();
+        } catch (ReplayException e) {
+            throw new AssertionError("the log does not replay: " + e.getMessage(), e);
+        }
     }
 }

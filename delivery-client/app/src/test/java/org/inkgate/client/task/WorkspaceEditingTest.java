@@ -6,6 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Map;
+import javafx.event.Event;
+import javafx.scene.input.InputMethodEvent;
+import javafx.scene.input.InputMethodHighlight;
+import javafx.scene.input.InputMethodTextRun;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.inkgate.client.sitting.EventTypes;
@@ -157,6 +161,22 @@ class WorkspaceEditingTest {
         robot.write(" three");
         assertEquals("one three", workspace.text());
         assertEquals(workspace.text(), replayed(""));
+    }
+
+    @Test
+    void inputMethod_committedTextGoesInAndIsLoggedAsTyping(FxRobot robot) throws Exception {
+        open(robot, PastePolicy.NONE, new FakeClipboard(null), "");
+        assertTrue(workspace.area().getInputMethodRequests() != null, "the editor answers input-method requests");
+        // a composition in progress, then its commit, as an input method for Japanese sends them
+        Shown.onFx(robot, () -> {
+            Event.fireEvent(workspace.area(), new InputMethodEvent(InputMethodEvent.INPUT_METHOD_TEXT_CHANGED,
+                    List.of(new InputMethodTextRun("\u306F\u3057", InputMethodHighlight.UNSELECTED_RAW)), "", 2));
+            Event.fireEvent(workspace.area(), new InputMethodEvent(InputMethodEvent.INPUT_METHOD_TEXT_CHANGED,
+                    List.of(), "\u6A4B", 0));
+        });
+        assertEquals("\u6A4B", workspace.text());
+        assertEquals(workspace.text(), replayed(""));
+        assertEquals("typing", log.events(EventTypes.TEXT_INSERT).get(log.events(EventTypes.TEXT_INSERT).size() - 1).get("source"));
     }
 
     @Test
