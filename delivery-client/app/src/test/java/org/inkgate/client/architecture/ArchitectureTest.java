@@ -57,4 +57,11 @@ class ArchitectureTest {
             .and().doNotHaveSimpleName("PracticeApp")
             .should(ACCESS_STANDARD_STREAMS)
             .because("only the entry points (Launcher, PracticeApp, DemoBundleBuild) talk to the console");
+
+    @ArchTest
+    static final ArchRule sittingViews_doNotWriteToStandardStreams = noClasses()
+            .that().resideInAPackage("org.inkgate.client.sitting.ui..")
+            .and().doNotHaveSimpleName("SittingApp")
+            .should(ACCESS_STANDARD_STREAMS)
+            .because("the sitting shows what people need on screen; only its entry point (SittingApp) uses the console");
 }

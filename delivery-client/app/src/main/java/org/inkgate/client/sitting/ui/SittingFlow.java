@@ -107,12 +107,12 @@ public final class SittingFlow {
      * @param dataFolder the client data folder, or null for the standard one
      * @param workspaces builds each task's workspace
      * @param clock      monotonic and wall clocks
-     * @param demo       the demo sitting (shows the demo-only note)
+     * @param demoNote   for the demo sitting only: its published PIN and candidate numbers, shown at set-up; else null
      * @param lock       lock the window (false only in tests that check the flow, not the lock)
      * @param onExit     what exiting does after the window closed (null: end the JavaFX runtime)
      */
     public record Setup(SittingLoad load, Path bundleFile, Path dataFolder, WorkspaceFactory workspaces,
-            SittingClock clock, boolean demo, boolean lock, Runnable onExit) {
+            SittingClock clock, String demoNote, boolean lock, Runnable onExit) {
         public Setup {
             Objects.requireNonNull(load, "load");
             Objects.requireNonNull(workspaces, "workspaces");
@@ -148,12 +148,10 @@ public final class SittingFlow {
     private boolean paused;
     private boolean taskEnding;
     private boolean entryWaiting;
+    private String startText;
     private SubmitScreen submitScreen;
     private final Map<String, Integer> words = new LinkedHashMap<>();
-    private final PausedCover pausedCover = new PausedCover();
-    private PinPrompt pinPrompt;
-    private InvigilatorPanel panel;
-    private final List<String> focusLines = new ArrayList<>();
+    private InvigilatorDesk desk;
     private Screen current = Screen.NONE;
 
     /** Where the flow is; the invigilator panel and the lock depend on it. */
@@ -180,6 +178,7 @@ public final class SittingFlow {
         current = Screen.REFUSED;
         RefusalView refusal = new RefusalView(message, this::exitApplication);
         shell = new SittingShell("Inkgate sitting");
+        desk = new InvigilatorDesk(shell, setup.clock(), deskHost());
         shell.show(refusal);
         showStage("Inkgate - exam bundle not opened");
         refusal.closeButton().requestFocus();
@@ -189,6 +188,7 @@ public final class SittingFlow {
         this.bundle = opened;
         BundleManifest m = opened.manifest();
         shell = new SittingShell(m.title());
+        desk = new InvigilatorDesk(shell, setup.clock(), deskHost());
         showStage("Inkgate - " + m.title());
         if (setup.lock()) {
             lock = StageLock.apply(stage, new StageLock.FocusListener() {
@@ -261,7 +261,7 @@ public final class SittingFlow {
         List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
                 ? m.forms().stream().map(f -> f.id()).toList() : List.of();
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
-                setup.demo() ? DEMO_NOTE : null, openForms, input -> checkSetup(screen[0], input));
+                setup.demoNote() == null ? null : DEMO_NOTE + "\n\n" + setup.demoNote(), openForms, input -> checkSetup(screen[0], input));
         shell.show(screen[0].root());
         screen[0].focus();
     }
@@ -339,6 +339,8 @@ public final class SittingFlow {
         }
         plan = candidate;
         applyDisplay();
+        // the timeline runs from sign-in to the end: it drives the timers and reports saving trouble on every screen
+        ticker.play();
         showInstructions();
     }
 
@@ -449,15 +451,15 @@ public final class SittingFlow {
     }
 
     private void enterTask(int index) {
-        current = Screen.TASK;
-        taskIndex = index;
-        taskEnding = false;
         FormSlot slot = plan.form().slots().get(index);
         if (paused) {
             // a sitting recovered while paused: the task begins when the invigilator resumes
             entryWaiting = true;
             return;
         }
+        current = Screen.TASK;
+        taskIndex = index;
+        taskEnding = false;
         sitting.showScreen("task");
         TaskStart start;
         try {
@@ -467,9 +469,17 @@ public final class SittingFlow {
                     + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
             return;
         }
+        startText = start.text();
         shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
                 Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
         shelf.take(slot.taskId()).whenComplete((tools, failure) -> Platform.runLater(() -> {
+            if (current != Screen.TASK || taskIndex != index || taskEnding) {
+                // the task ended (time, invigilator) while its tools were being prepared
+                if (tools != null) {
+                    tools.close();
+                }
+                return;
+            }
             if (failure != null) {
                 shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
                 return;
@@ -510,6 +520,7 @@ public final class SittingFlow {
             }
         }
         updateClock();
+        desk.refresh();
     }
 
     private void updateClock() {
@@ -550,7 +561,8 @@ public final class SittingFlow {
     }
 
     private void endTask(EndReason reason) {
-        if (current != Screen.TASK || taskEnding) {
+        // no workspace yet: the task's tools are still being prepared, and there is nothing to end
+        if (current != Screen.TASK || taskEnding || workspace == null) {
             return;
         }
         taskEnding = true;
@@ -558,14 +570,23 @@ public final class SittingFlow {
     }
 
     private void finishTask(EndReason reason, boolean endSitting) {
-        ticker.stop();
         FormSlot slot = plan.form().slots().get(taskIndex);
-        words.put(slot.taskId(), workspace.wordCount());
-        sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
-        workspace.close();
+        if (workspace != null) {
+            words.put(slot.taskId(), workspace.wordCount());
+            sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
+            workspace.close();
+        } else {
+            // the time ran out before the task's tools were ready: the text is what was there when it began
+            String text = startText == null ? "" : startText;
+            words.put(slot.taskId(), WordCount.of(text));
+            sitting.endTask(slot.taskId(), reason, text, WordCount.of(text), Map.of());
+        }
         workspace = null;
+        startText = null;
         taskScreen = null;
         shell.announcer().clear();
+        current = Screen.NONE;
+        updateClock();
         if (endSitting) {
             sitting.endUnstartedTasks(EndReason.TIME_UP);
         }
@@ -709,6 +730,7 @@ public final class SittingFlow {
                 return;
             }
             plan = sitting.plan();
+            ticker.play();
             outputFolder = input.outputFolder().toAbsolutePath();
             seat = plan.seat();
             applyDisplay();
@@ -729,7 +751,7 @@ public final class SittingFlow {
         }
         paused = sitting.paused();
         if (paused) {
-            shell.cover(pausedCover);
+            desk.coverPaused(true);
         }
         Optional<String> next = sitting.nextTask();
         String where;
@@ -775,38 +797,37 @@ public final class SittingFlow {
 
     private void openInvigilator() {
         if (current == Screen.NONE || current == Screen.REFUSED || current == Screen.SETUP
-                || current == Screen.RECOVERY || (pinPrompt != null && shell.covered(pinPrompt))
-                || (panel != null && shell.covered(panel))) {
+                || current == Screen.RECOVERY) {
             return;
         }
-        pinPrompt = new PinPrompt(this::checkInvigilatorPin, this::closePinPrompt);
-        shell.cover(pinPrompt);
-        pinPrompt.reset();
+        desk.open();
     }
 
-    private void checkInvigilatorPin(char[] pin) {
-        pinPrompt.busy();
-        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), pin), ok -> {
-            if (!ok) {
-                pinPrompt.wrong("That is not the invigilator PIN.");
-                return;
-            }
-            shell.uncover(pinPrompt);
-            showPanel();
-        });
-    }
-
-    private void closePinPrompt() {
-        shell.uncover(pinPrompt);
-        refocus();
-    }
-
-    private void showPanel() {
-        panel = new InvigilatorPanel(new InvigilatorPanel.Actions() {
+    private InvigilatorDesk.Host deskHost() {
+        return new InvigilatorDesk.Host() {
             @Override
-            public void pauseOrResume() {
-                setPaused(!paused);
-                updatePanel();
+            public boolean pinMatches(char[] pin) {
+                return PinHasher.matches(bundle.manifest().invigilatorPin(), pin);
+            }
+
+            @Override
+            public String stateLine() {
+                return SittingFlow.this.stateLine();
+            }
+
+            @Override
+            public boolean paused() {
+                return paused;
+            }
+
+            @Override
+            public boolean inTask() {
+                return current == Screen.TASK;
+            }
+
+            @Override
+            public void setPaused(boolean pause) {
+                SittingFlow.this.setPaused(pause);
             }
 
             @Override
@@ -816,37 +837,32 @@ public final class SittingFlow {
                     shell.announcer().announce(minutes + (minutes == 1 ? " minute was" : " minutes were")
                             + " added to this task.");
                     updateClock();
-                    updatePanel();
                 }
             }
 
             @Override
             public void endTask() {
-                shell.uncover(panel);
                 SittingFlow.this.endTask(EndReason.ENDED_BY_INVIGILATOR);
             }
 
             @Override
-            public void exitSitting() {
+            public void exit() {
                 exitByInvigilator();
             }
 
             @Override
-            public void close() {
-                shell.uncover(panel);
+            public void backToCandidate() {
                 refocus();
             }
-        });
-        focusLines.forEach(panel::focusEvent);
-        updatePanel();
-        shell.cover(panel);
-        panel.focus();
+
+            @Override
+            public <T> void work(Supplier<T> job, java.util.function.Consumer<T> then) {
+                SittingFlow.this.work(job, then);
+            }
+        };
     }
 
-    private void updatePanel() {
-        if (panel == null) {
-            return;
-        }
+    private String stateLine() {
         StringBuilder state = new StringBuilder();
         if (plan == null) {
             state.append("No candidate has signed in yet.");
@@ -868,7 +884,7 @@ public final class SittingFlow {
             }
         }
         state.append(paused ? "The exam is PAUSED." : "The exam is running.");
-        panel.update(state.toString(), paused, current == Screen.TASK);
+        return state.toString();
     }
 
     private void setPaused(boolean pause) {
@@ -879,16 +895,11 @@ public final class SittingFlow {
         if (pause) {
             sitting.pauseAll();
             freeze(true);
-            shell.cover(pausedCover);
-            if (panel != null && shell.covered(panel)) {
-                // keep the invigilator's panel above the cover
-                shell.uncover(panel);
-                shell.cover(panel);
-            }
+            desk.coverPaused(true);
             shell.announcer().announce(PausedCover.HEADING + ".");
         } else {
             sitting.resumeAll();
-            shell.uncover(pausedCover);
+            desk.coverPaused(false);
             if (!taskEnding) {
                 freeze(false);
             }
@@ -935,11 +946,7 @@ public final class SittingFlow {
     }
 
     private void focusLine(String what) {
-        String line = CLOCK.format(setup.clock().now()) + "  " + what;
-        focusLines.add(line);
-        if (panel != null) {
-            panel.focusEvent(line);
-        }
+        desk.note(what);
     }
 
     private void storageTrouble(String message) {
@@ -1084,23 +1091,13 @@ public final class SittingFlow {
         return lock;
     }
 
-    /** Focus log lines, oldest first. */
+    /** Lines the invigilator screen lists (focus changes, hand-in trouble), oldest first. */
     List<String> focusLines() {
-        return List.copyOf(focusLines);
+        return desk.lines();
     }
 
     Screen screen() {
         return current;
-    }
-
-    /** Which parts of the screen exist (for tests naming nodes). */
-    Map<String, Node> parts() {
-        Map<String, Node> parts = new LinkedHashMap<>();
-        parts.put("pausedCover", pausedCover);
-        if (panel != null) {
-            parts.put("panel", panel);
-        }
-        return parts;
     }
 
     Parent root() {

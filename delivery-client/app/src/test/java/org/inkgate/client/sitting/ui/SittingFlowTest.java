@@ -265,8 +265,9 @@ class SittingFlowTest {
     @Test
     void recovery_abandonedSitting_resumesTheSameTaskWithItsText(FxRobot robot) throws Exception {
         Path bundle = FlowDriver.buildDemoSitting(temp);
+        ManualClock clock = new ManualClock();
         FlowDriver first = driver();
-        first.open(bundle, SittingClock.system(), false);
+        first.open(bundle, clock, false);
         first.setUp(FlowDriver.demoPin(), temp.resolve("out"));
         first.signIn("D1002");
         first.press("startButton");
@@ -274,12 +275,15 @@ class SittingFlowTest {
         first.awaitTask("The empty shop on Mill Street");
         first.typeInEditor("Saved before the crash.");
         String typed = first.workspace().text();
+        clock.advance(java.time.Duration.ofSeconds(100));
         // the log is durable within 0.5 s; wait well past that, then drop the window as a crash would
         WaitForAsyncUtils.sleep(1500, java.util.concurrent.TimeUnit.MILLISECONDS);
         robot.interact(() -> first.flow.closeQuietly());
+        // the machine stays down for 200 s
+        clock.advance(java.time.Duration.ofSeconds(200));
 
         FlowDriver second = driver();
-        second.open(bundle, SittingClock.system(), false);
+        second.open(bundle, clock, false);
         second.await("recoveryScreen", Node.class);
         List<String> facts = robot.lookup("#recoveryFacts").queryAs(javafx.scene.layout.VBox.class).getChildren()
                 .stream().map(n -> ((Label) n).getText()).toList();
@@ -288,9 +292,13 @@ class SittingFlowTest {
         second.type("recoveryPin", "999999");
         second.press("resumeButton");
         second.awaitText("recoveryError", "not this exam's invigilator PIN");
-        second.check("creditDowntime");
+        assertTrue(facts.get(2).contains("3 minutes ago"), facts.toString());
+        // not credited: 1800 s (exam.json) - 100 s written - 200 s down = 1500 s = 25 minutes left
         second.type("recoveryPin", FlowDriver.demoPin());
         second.press("resumeButton");
+        second.await("continueButton", Node.class);
+        assertTrue(robot.lookup("#resumedScreen").queryAs(javafx.scene.Parent.class).lookupAll(".label").stream()
+                .anyMatch(n -> ((Label) n).getText().contains("25 minutes left")), "time left after no credit");
         second.press("continueButton");
         second.awaitTask("The empty shop on Mill Street");
         assertEquals(typed, second.workspace().text());

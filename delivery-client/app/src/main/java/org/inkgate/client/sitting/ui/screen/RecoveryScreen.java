@@ -71,7 +71,8 @@ public final class RecoveryScreen {
     }
 
     public void focus() {
-        pin.requestFocus();
+        // after the scene has laid the screen out; a request before that can land on the first control
+        javafx.application.Platform.runLater(pin::requestFocus);
     }
 
     public void showError(String message) {
