@@ -33,6 +33,13 @@ class ArchitectureTest {
                     + " only sitting.ui binds it to JavaFX");
 
     @ArchTest
+    static final ArchRule sittingCore_doesNotDependOnScreens = noClasses()
+            .that().resideInAPackage("org.inkgate.client.sitting..")
+            .and().resideOutsideOfPackage("org.inkgate.client.sitting.ui..")
+            .should().dependOnClassesThat().resideInAnyPackage("org.inkgate.client.sitting.ui..", "org.inkgate.client.task..")
+            .because("the screens and the task workspace call the sitting core, never the other way round");
+
+    @ArchTest
     static final ArchRule sittingCore_doesNotWriteToStandardStreams = noClasses()
             .that().resideInAPackage("org.inkgate.client.sitting..")
             .and().resideOutsideOfPackage("org.inkgate.client.sitting.ui..")
