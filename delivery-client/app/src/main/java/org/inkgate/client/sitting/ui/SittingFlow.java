@@ -95,8 +95,6 @@ public final class SittingFlow {
     static final Duration TICK = Duration.millis(200);
     /** How long "time is up" stays on screen before the next task. */
     static final Duration TIME_UP_PAUSE = Duration.seconds(4);
-    static final String DEMO_NOTE = "DEMO ONLY: this is the invented demo sitting. Its PIN and candidate numbers are"
-            + " published (printed on the console and in docs/invigilator-guide.md), so it protects nothing.";
     private static final DateTimeFormatter CLOCK = DateTimeFormatter.ofPattern("HH:mm:ss").withZone(ZoneId.systemDefault());
 
     /**
@@ -261,7 +259,7 @@ public final class SittingFlow {
         List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
                 ? m.forms().stream().map(f -> f.id()).toList() : List.of();
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
-                setup.demoNote() == null ? null : DEMO_NOTE + "\n\n" + setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
+                setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
                 this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
