@@ -52,11 +52,12 @@ public final class Launcher {
                 case LaunchCommand.PracticeDemo demo -> practise(demoBundleCopy());
                 case LaunchCommand.PracticeFile file -> practise(file.bundle());
                 case LaunchCommand.DemoSitting demo -> {
-                    System.out.println(demoNote());
+                    String note = demoNote();
+                    System.out.println(note);
                     sit(copyResource(DEMO_SITTING_BUNDLE, "demo-sitting.inkexam"), Set.of(DEMO_OWNER_KEY),
-                            demo.dataFolder(), true);
+                            demo.dataFolder(), note);
                 }
-                case LaunchCommand.Sitting sitting -> sit(sitting.bundle(), sitting.ownerKeys(), sitting.dataFolder(), false);
+                case LaunchCommand.Sitting sitting -> sit(sitting.bundle(), sitting.ownerKeys(), sitting.dataFolder(), null);
             }
         } catch (CannotStart e) {
             System.err.println("inkgate-client: " + e.getMessage());
@@ -68,9 +69,9 @@ public final class Launcher {
         Application.launch(PracticeApp.class, "--" + PracticeApp.BUNDLE_PARAMETER + "=" + bundle.toAbsolutePath());
     }
 
-    private static void sit(Path bundle, Set<String> ownerKeys, Path dataFolder, boolean demo) {
+    private static void sit(Path bundle, Set<String> ownerKeys, Path dataFolder, String demoNote) {
         Application.launch(SittingApp.class, SittingApp.arguments(bundle.toAbsolutePath(), ownerKeys,
-                dataFolder == null ? null : dataFolder.toAbsolutePath(), demo).toArray(String[]::new));
+                dataFolder == null ? null : dataFolder.toAbsolutePath(), demoNote).toArray(String[]::new));
     }
 
     /** The demo sitting's PIN and candidate numbers, as the build wrote them (DEMO ONLY, NOT SECRET). */

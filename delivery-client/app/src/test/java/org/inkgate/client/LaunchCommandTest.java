@@ -58,4 +58,59 @@ class LaunchCommandTest {
         assertEquals("demo.inkexam", copy.getFileName().toString());
         assertTrue(java.nio.file.Files.size(copy) > 0);
     }
+
+    @Test
+    void parse_sittingWithOwnerKeyAndData_opensALiveSitting() {
+        assertEquals(new LaunchCommand.Sitting(Path.of("exam.inkexam"), java.util.Set.of("ea65-29d8"), Path.of("d")),
+                LaunchCommand.parse(List.of("--sitting", "exam.inkexam", "--owner-key", "ea65-29d8", "--data", "d")));
+    }
+
+    @Test
+    void parse_bundleFileFirst_isASitting() {
+        assertEquals(new LaunchCommand.Sitting(Path.of("exam.inkexam"), java.util.Set.of("k1", "k2"), null),
+                LaunchCommand.parse(List.of("exam.inkexam", "--owner-key", "k1", "--owner-key", "k2")));
+    }
+
+    @Test
+    void parse_sittingWithoutOwnerKey_isRefusedAskingForTheFingerprint() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> LaunchCommand.parse(List.of("--sitting", "exam.inkexam")));
+        assertTrue(e.getMessage().contains("--owner-key"), e.getMessage());
+    }
+
+    @Test
+    void parse_ownerKeyWithoutValue_isRefused() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> LaunchCommand.parse(List.of("--sitting", "exam.inkexam", "--owner-key")));
+        assertTrue(e.getMessage().contains("needs a value"), e.getMessage());
+    }
+
+    @Test
+    void parse_demo_opensTheDemoSitting() {
+        assertEquals(new LaunchCommand.DemoSitting(null), LaunchCommand.parse(List.of("--demo")));
+        assertEquals(new LaunchCommand.DemoSitting(Path.of("x")), LaunchCommand.parse(List.of("--demo", "--data", "x")));
+    }
+
+    @Test
+    void parse_demoWithABundle_isRefused() {
+        assertThrows(IllegalArgumentException.class, () -> LaunchCommand.parse(List.of("--demo", "exam.inkexam")));
+    }
+
+    @Test
+    void demoOwnerKey_isTheFingerprintOfThePublishedDemoSeed() throws Exception {
+        // the key the demo sitting trusts must be the demo keys' own (src/demo/keys, DEMO ONLY)
+        byte[] seed = org.inkgate.format.crypto.Hex.parse(java.nio.file.Files.readString(
+                org.inkgate.client.testutil.DemoBundles.SOURCE.resolve("keys/demo-only-not-secret-owner-signing.ed25519-seed.hex")).strip());
+        assertEquals(org.inkgate.format.crypto.Fingerprint.of(org.inkgate.format.crypto.Ed25519.rawPublic(
+                org.inkgate.format.crypto.Ed25519.publicOf(org.inkgate.format.crypto.Ed25519.privateFromSeed(seed)))),
+                Launcher.DEMO_OWNER_KEY);
+    }
+
+    @Test
+    void demoNote_builtClient_namesThePinAndMarksItDemoOnly() throws Exception {
+        String note = Launcher.demoNote();
+        assertTrue(note.startsWith("DEMO ONLY, NOT SECRET"), note);
+        assertTrue(note.contains(org.inkgate.client.demo.DemoSittingBuild.readSitting(
+                org.inkgate.client.testutil.DemoBundles.SOURCE).invigilatorPin()), note);
+    }
 }

@@ -115,6 +115,7 @@ public final class Sitting implements AutoCloseable {
     private Path localCopy;
     private boolean submitted;
     private boolean closed;
+    private boolean endRecorded;
 
     private Sitting(String sittingId, SittingPlan plan, ClientDataFolder folder, SittingClock clock, SqliteProcessLog log,
             Instant startedAt, Map<String, long[]> usedAdded, Map<String, Set<Integer>> warned, long sittingUsed,
@@ -158,8 +159,8 @@ public final class Sitting implements AutoCloseable {
         s.screen = "";
         log.persist(c -> {
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO sitting(id, sitting_id, bundle_sha256, bundle_file, exam_id,"
-                    + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, screen, current_task)"
-                    + " VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL)")) {
+                    + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, client_version, screen,"
+                    + " current_task) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL)")) {
                 ps.setString(1, id);
                 ps.setString(2, plan.manifestSha256());
                 ps.setString(3, plan.bundleFile());
@@ -171,6 +172,7 @@ public final class Sitting implements AutoCloseable {
                 ps.setString(9, now.toString());
                 ps.setString(10, RecoveryScan.IN_PROGRESS);
                 ps.setString(11, now.toString());
+                ps.setString(12, plan.clientVersion());
                 ps.executeUpdate();
             }
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO tasks(task_id, ord, condition_id, policy) VALUES (?, ?, ?, ?)")) {
@@ -234,7 +236,7 @@ public final class Sitting implements AutoCloseable {
             }
         }
         try (PreparedStatement ps = c.prepareStatement("SELECT seat, extra_percent, started_at, sitting_used_ms, sitting_added_ms,"
-                + " screen, current_task, paused, package_id, local_copy, status FROM sitting WHERE id = 1");
+                + " screen, current_task, paused, package_id, local_copy, status, client_version FROM sitting WHERE id = 1");
                 ResultSet rs = ps.executeQuery()) {
             if (!rs.next()) {
                 throw new SQLException(found.database() + " holds no sitting");
@@ -243,7 +245,7 @@ public final class Sitting implements AutoCloseable {
             var entry = manifest.roster().stream().filter(r -> r.candidateNumber().equals(found.candidateNumber())).findFirst();
             SittingPlan plan = new SittingPlan(manifest, found.bundleSha256(), found.bundleFile(), found.candidateNumber(),
                     rs.getString(1), found.formId(), extra, entry.map(r -> r.largePrint()).orElse(false),
-                    entry.map(r -> r.highContrast()).orElse(false), null);
+                    entry.map(r -> r.highContrast()).orElse(false), rs.getString(12));
             Sitting s = new Sitting(found.sittingId(), plan, folder, clock, log, Instant.parse(rs.getString(3)), usedAdded, warned,
                     rs.getLong(4), rs.getLong(5));
             s.screen = Objects.requireNonNullElse(rs.getString(6), "");
@@ -362,7 +364,12 @@ public final class Sitting implements AutoCloseable {
         return record(taskId).countdown.map(cd -> Duration.ofMillis(cd.allowedMillis()));
     }
 
-    /** Time left in the whole sitting; empty when the form sets no sitting limit. */
+    /**
+     * Time left in the whole sitting; empty when the form sets no sitting limit. The sitting limit
+     * counts from the start of the first task to submission (questionnaires and the time between
+     * tasks included, pauses excluded), with the roster's extra time and the invigilator's
+     * additions applied as to task limits.
+     */
     public Optional<Duration> sittingRemaining() {
         return sittingCountdown.map(cd -> Duration.ofMillis(cd.remainingMillis()));
     }
@@ -664,7 +671,11 @@ public final class Sitting implements AutoCloseable {
             log.persist(c -> update(c, "UPDATE sitting SET package_id = ? WHERE id = 1", id));
         }
         sittingCountdown.ifPresent(Countdown::stop);
-        log.record(EventTypes.SITTING_END, null, Map.of("reason", "submitted"));
+        if (!endRecorded) {
+            // a retry after the local copy failed does not end the sitting twice
+            log.record(EventTypes.SITTING_END, null, Map.of("reason", "submitted"));
+            endRecorded = true;
+        }
         checkpoint();
         Instant submittedAt = clock.now();
         List<ProcessEvent> events = log.events();

@@ -33,6 +33,13 @@ class ArchitectureTest {
                     + " only sitting.ui binds it to JavaFX");
 
     @ArchTest
+    static final ArchRule sittingCore_doesNotDependOnScreens = noClasses()
+            .that().resideInAPackage("org.inkgate.client.sitting..")
+            .and().resideOutsideOfPackage("org.inkgate.client.sitting.ui..")
+            .should().dependOnClassesThat().resideInAnyPackage("org.inkgate.client.sitting.ui..", "org.inkgate.client.task..")
+            .because("the screens and the task workspace call the sitting core, never the other way round");
+
+    @ArchTest
     static final ArchRule sittingCore_doesNotWriteToStandardStreams = noClasses()
             .that().resideInAPackage("org.inkgate.client.sitting..")
             .and().resideOutsideOfPackage("org.inkgate.client.sitting.ui..")
@@ -50,4 +57,11 @@ class ArchitectureTest {
             .and().doNotHaveSimpleName("PracticeApp")
             .should(ACCESS_STANDARD_STREAMS)
             .because("only the entry points (Launcher, PracticeApp, DemoBundleBuild) talk to the console");
+
+    @ArchTest
+    static final ArchRule sittingViews_doNotWriteToStandardStreams = noClasses()
+            .that().resideInAPackage("org.inkgate.client.sitting.ui..")
+            .and().doNotHaveSimpleName("SittingApp")
+            .should(ACCESS_STANDARD_STREAMS)
+            .because("the sitting shows what people need on screen; only its entry point (SittingApp) uses the console");
 }

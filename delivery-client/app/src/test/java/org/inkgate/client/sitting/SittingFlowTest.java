@@ -73,6 +73,8 @@ class SittingFlowTest {
                 .open(result.delivered().orElseThrow());
         assertEquals("1001", opened.response().candidateNumber());
         assertEquals("A", opened.response().formId());
+        assertEquals("seat 4", opened.response().seat());
+        assertEquals("test", opened.response().clientVersion());
         assertEquals(SittingFixtures.SHA, opened.response().bundleManifestSha256());
         TaskResponse r1 = opened.response().tasks().get(0);
         assertEquals("t1", r1.taskId());
@@ -87,6 +89,35 @@ class SittingFlowTest {
         assertEquals(EventTypes.SITTING_START, types.getFirst());
         assertEquals(EventTypes.SITTING_END, types.getLast());
         assertTrue(types.containsAll(List.of(EventTypes.TASK_START, EventTypes.TASK_END, EventTypes.TIMER_EXPIRED, EventTypes.NAV_SCREEN)));
+    }
+
+    @Test
+    void poll_whileTheDatabaseRefusesWrites_signalsTroubleThenRecovery() throws Exception {
+        try (Sitting s = Sitting.begin(SittingFixtures.candidate1001(), new ClientDataFolder(dir), new FakeClock())) {
+            java.util.concurrent.atomic.AtomicBoolean broken = new java.util.concurrent.atomic.AtomicBoolean(true);
+            s.log().persist(c -> {
+                if (broken.get()) {
+                    throw new java.sql.SQLException("disk I/O error (simulated)");
+                }
+            });
+            List<SittingSignal> signals = pollUntil(s, SittingSignal.StorageTrouble.class);
+            assertTrue(((SittingSignal.StorageTrouble) signals.getFirst()).message().contains("kept in memory"), signals.toString());
+            broken.set(false);
+            pollUntil(s, SittingSignal.StorageRecovered.class);
+        }
+    }
+
+    /** Polls until a signal of the type comes (the writer thread retries every 250 ms); gives up after 30 s. */
+    private static List<SittingSignal> pollUntil(Sitting s, Class<? extends SittingSignal> type) throws InterruptedException {
+        long until = System.nanoTime() + java.util.concurrent.TimeUnit.SECONDS.toNanos(30);
+        while (System.nanoTime() < until) {
+            List<SittingSignal> signals = s.poll().stream().filter(type::isInstance).toList();
+            if (!signals.isEmpty()) {
+                return signals;
+            }
+            Thread.sleep(20);
+        }
+        throw new AssertionError("no " + type.getSimpleName() + " within 30 s");
     }
 
     @Test

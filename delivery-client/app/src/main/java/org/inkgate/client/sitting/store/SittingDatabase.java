@@ -50,6 +50,7 @@ public final class SittingDatabase {
           candidate TEXT NOT NULL,
           form_id TEXT NOT NULL,
           seat TEXT NOT NULL,
+          client_version TEXT NOT NULL,
           extra_percent INTEGER NOT NULL,
           started_at TEXT NOT NULL,
           status TEXT NOT NULL,

@@ -27,15 +27,20 @@ public final class SittingApp extends Application {
     private SittingLoad load;
     private SittingFlow flow;
 
-    /** The application's parameters for a bundle, the trusted owner keys, a data folder (or null) and the demo flag. */
-    public static List<String> arguments(Path bundle, Set<String> ownerKeys, Path dataFolder, boolean demo) {
+    /**
+     * The application's parameters for a bundle, the trusted owner keys, a data folder (or null) and,
+     * for the demo sitting only, its published note (PIN, candidate numbers) to show at set-up.
+     */
+    public static List<String> arguments(Path bundle, Set<String> ownerKeys, Path dataFolder, String demoNote) {
         List<String> args = new ArrayList<>();
         args.add("--" + BUNDLE + "=" + bundle);
         args.add("--" + OWNER_KEYS + "=" + String.join(",", ownerKeys));
         if (dataFolder != null) {
             args.add("--" + DATA + "=" + dataFolder);
         }
-        args.add("--" + DEMO + "=" + demo);
+        if (demoNote != null) {
+            args.add("--" + DEMO + "=" + demoNote);
+        }
         return args;
     }
 
@@ -61,7 +66,7 @@ public final class SittingApp extends Application {
     public void start(Stage stage) {
         Map<String, String> named = getParameters().getNamed();
         String data = named.get(DATA);
-        boolean demo = Boolean.parseBoolean(named.getOrDefault(DEMO, "false"));
+        String demo = named.get(DEMO);
         String bundle = named.get(BUNDLE);
         flow = new SittingFlow(stage, new SittingFlow.Setup(load, bundle == null ? null : Path.of(bundle),
                 data == null ? null : Path.of(data), Workspaces.standard(), SittingClock.system(), demo, true, null));

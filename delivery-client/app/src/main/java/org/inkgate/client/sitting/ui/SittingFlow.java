@@ -95,8 +95,6 @@ public final class SittingFlow {
     static final Duration TICK = Duration.millis(200);
     /** How long "time is up" stays on screen before the next task. */
     static final Duration TIME_UP_PAUSE = Duration.seconds(4);
-    static final String DEMO_NOTE = "DEMO ONLY: this is the invented demo sitting. Its PIN and candidate numbers are"
-            + " published (printed on the console and in docs/invigilator-guide.md), so it protects nothing.";
     private static final DateTimeFormatter CLOCK = DateTimeFormatter.ofPattern("HH:mm:ss").withZone(ZoneId.systemDefault());
 
     /**
@@ -107,12 +105,12 @@ public final class SittingFlow {
      * @param dataFolder the client data folder, or null for the standard one
      * @param workspaces builds each task's workspace
      * @param clock      monotonic and wall clocks
-     * @param demo       the demo sitting (shows the demo-only note)
+     * @param demoNote   for the demo sitting only: its published PIN and candidate numbers, shown at set-up; else null
      * @param lock       lock the window (false only in tests that check the flow, not the lock)
      * @param onExit     what exiting does after the window closed (null: end the JavaFX runtime)
      */
     public record Setup(SittingLoad load, Path bundleFile, Path dataFolder, WorkspaceFactory workspaces,
-            SittingClock clock, boolean demo, boolean lock, Runnable onExit) {
+            SittingClock clock, String demoNote, boolean lock, Runnable onExit) {
         public Setup {
             Objects.requireNonNull(load, "load");
             Objects.requireNonNull(workspaces, "workspaces");
@@ -148,12 +146,10 @@ public final class SittingFlow {
     private boolean paused;
     private boolean taskEnding;
     private boolean entryWaiting;
+    private String startText;
     private SubmitScreen submitScreen;
     private final Map<String, Integer> words = new LinkedHashMap<>();
-    private final PausedCover pausedCover = new PausedCover();
-    private PinPrompt pinPrompt;
-    private InvigilatorPanel panel;
-    private final List<String> focusLines = new ArrayList<>();
+    private InvigilatorDesk desk;
     private Screen current = Screen.NONE;
 
     /** Where the flow is; the invigilator panel and the lock depend on it. */
@@ -180,6 +176,7 @@ public final class SittingFlow {
         current = Screen.REFUSED;
         RefusalView refusal = new RefusalView(message, this::exitApplication);
         shell = new SittingShell("Inkgate sitting");
+        desk = new InvigilatorDesk(shell, setup.clock(), deskHost());
         shell.show(refusal);
         showStage("Inkgate - exam bundle not opened");
         refusal.closeButton().requestFocus();
@@ -189,6 +186,7 @@ public final class SittingFlow {
         this.bundle = opened;
         BundleManifest m = opened.manifest();
         shell = new SittingShell(m.title());
+        desk = new InvigilatorDesk(shell, setup.clock(), deskHost());
         showStage("Inkgate - " + m.title());
         if (setup.lock()) {
             lock = StageLock.apply(stage, new StageLock.FocusListener() {
@@ -261,7 +259,8 @@ public final class SittingFlow {
         List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
                 ? m.forms().stream().map(f -> f.id()).toList() : List.of();
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
-                setup.demo() ? DEMO_NOTE : null, openForms, input -> checkSetup(screen[0], input));
+                setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
+                this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
     }
@@ -339,6 +338,8 @@ public final class SittingFlow {
         }
         plan = candidate;
         applyDisplay();
+        // the timeline runs from sign-in to the end: it drives the timers and reports saving trouble on every screen
+        ticker.play();
         showInstructions();
     }
 
@@ -449,15 +450,15 @@ public final class SittingFlow {
     }
 
     private void enterTask(int index) {
-        current = Screen.TASK;
-        taskIndex = index;
-        taskEnding = false;
         FormSlot slot = plan.form().slots().get(index);
         if (paused) {
             // a sitting recovered while paused: the task begins when the invigilator resumes
             entryWaiting = true;
             return;
         }
+        current = Screen.TASK;
+        taskIndex = index;
+        taskEnding = false;
         sitting.showScreen("task");
         TaskStart start;
         try {
@@ -467,9 +468,17 @@ public final class SittingFlow {
                     + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
             return;
         }
+        startText = start.text();
         shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
                 Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
         shelf.take(slot.taskId()).whenComplete((tools, failure) -> Platform.runLater(() -> {
+            if (current != Screen.TASK || taskIndex != index || taskEnding) {
+                // the task ended (time, invigilator) while its tools were being prepared
+                if (tools != null) {
+                    tools.close();
+                }
+                return;
+            }
             if (failure != null) {
                 shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
                 return;
@@ -490,9 +499,38 @@ public final class SittingFlow {
             if (paused) {
                 freeze(true);
             } else {
-                workspace.focusEditor();
+                focusEditorOnceShown(workspace);
             }
         }));
+    }
+
+    /**
+     * Puts the caret in the new task's editor. The editor takes focus only once its skin is laid
+     * out, which can take a few pulses; until then the scene gives focus to the first button it
+     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most a
+     * second), and never after the task has changed or the exam is paused.
+     */
+    private void focusEditorOnceShown(TaskWorkspace shown) {
+        Timeline retry = new Timeline();
+        retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
+            if (workspace != shown || paused || focusInside(shown.view())) {
+                retry.stop();
+                return;
+            }
+            shown.focusEditor();
+        }));
+        retry.setCycleCount(34);
+        shown.focusEditor();
+        retry.play();
+    }
+
+    private boolean focusInside(Node container) {
+        for (Node n = scene.getFocusOwner(); n != null; n = n.getParent()) {
+            if (n == container) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private void tick() {
@@ -510,6 +548,7 @@ public final class SittingFlow {
             }
         }
         updateClock();
+        desk.refresh();
     }
 
     private void updateClock() {
@@ -550,7 +589,8 @@ public final class SittingFlow {
     }
 
     private void endTask(EndReason reason) {
-        if (current != Screen.TASK || taskEnding) {
+        // no workspace yet: the task's tools are still being prepared, and there is nothing to end
+        if (current != Screen.TASK || taskEnding || workspace == null) {
             return;
         }
         taskEnding = true;
@@ -558,14 +598,23 @@ public final class SittingFlow {
     }
 
     private void finishTask(EndReason reason, boolean endSitting) {
-        ticker.stop();
         FormSlot slot = plan.form().slots().get(taskIndex);
-        words.put(slot.taskId(), workspace.wordCount());
-        sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
-        workspace.close();
+        if (workspace != null) {
+            words.put(slot.taskId(), workspace.wordCount());
+            sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
+            workspace.close();
+        } else {
+            // the time ran out before the task's tools were ready: the text is what was there when it began
+            String text = startText == null ? "" : startText;
+            words.put(slot.taskId(), WordCount.of(text));
+            sitting.endTask(slot.taskId(), reason, text, WordCount.of(text), Map.of());
+        }
         workspace = null;
+        startText = null;
         taskScreen = null;
         shell.announcer().clear();
+        current = Screen.NONE;
+        updateClock();
         if (endSitting) {
             sitting.endUnstartedTasks(EndReason.TIME_UP);
         }
@@ -684,7 +733,7 @@ public final class SittingFlow {
         String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
         screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
-                input -> resume(screen[0], found, input, down));
+                input -> resume(screen[0], found, input, down), this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
     }
@@ -709,6 +758,7 @@ public final class SittingFlow {
                 return;
             }
             plan = sitting.plan();
+            ticker.play();
             outputFolder = input.outputFolder().toAbsolutePath();
             seat = plan.seat();
             applyDisplay();
@@ -729,7 +779,7 @@ public final class SittingFlow {
         }
         paused = sitting.paused();
         if (paused) {
-            shell.cover(pausedCover);
+            desk.coverPaused(true);
         }
         Optional<String> next = sitting.nextTask();
         String where;
@@ -775,38 +825,37 @@ public final class SittingFlow {
 
     private void openInvigilator() {
         if (current == Screen.NONE || current == Screen.REFUSED || current == Screen.SETUP
-                || current == Screen.RECOVERY || (pinPrompt != null && shell.covered(pinPrompt))
-                || (panel != null && shell.covered(panel))) {
+                || current == Screen.RECOVERY) {
             return;
         }
-        pinPrompt = new PinPrompt(this::checkInvigilatorPin, this::closePinPrompt);
-        shell.cover(pinPrompt);
-        pinPrompt.reset();
+        desk.open();
     }
 
-    private void checkInvigilatorPin(char[] pin) {
-        pinPrompt.busy();
-        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), pin), ok -> {
-            if (!ok) {
-                pinPrompt.wrong("That is not the invigilator PIN.");
-                return;
-            }
-            shell.uncover(pinPrompt);
-            showPanel();
-        });
-    }
-
-    private void closePinPrompt() {
-        shell.uncover(pinPrompt);
-        refocus();
-    }
-
-    private void showPanel() {
-        panel = new InvigilatorPanel(new InvigilatorPanel.Actions() {
+    private InvigilatorDesk.Host deskHost() {
+        return new InvigilatorDesk.Host() {
             @Override
-            public void pauseOrResume() {
-                setPaused(!paused);
-                updatePanel();
+            public boolean pinMatches(char[] pin) {
+                return PinHasher.matches(bundle.manifest().invigilatorPin(), pin);
+            }
+
+            @Override
+            public String stateLine() {
+                return SittingFlow.this.stateLine();
+            }
+
+            @Override
+            public boolean paused() {
+                return paused;
+            }
+
+            @Override
+            public boolean inTask() {
+                return current == Screen.TASK;
+            }
+
+            @Override
+            public void setPaused(boolean pause) {
+                SittingFlow.this.setPaused(pause);
             }
 
             @Override
@@ -816,37 +865,32 @@ public final class SittingFlow {
                     shell.announcer().announce(minutes + (minutes == 1 ? " minute was" : " minutes were")
                             + " added to this task.");
                     updateClock();
-                    updatePanel();
                 }
             }
 
             @Override
             public void endTask() {
-                shell.uncover(panel);
                 SittingFlow.this.endTask(EndReason.ENDED_BY_INVIGILATOR);
             }
 
             @Override
-            public void exitSitting() {
+            public void exit() {
                 exitByInvigilator();
             }
 
             @Override
-            public void close() {
-                shell.uncover(panel);
+            public void backToCandidate() {
                 refocus();
             }
-        });
-        focusLines.forEach(panel::focusEvent);
-        updatePanel();
-        shell.cover(panel);
-        panel.focus();
+
+            @Override
+            public <T> void work(Supplier<T> job, java.util.function.Consumer<T> then) {
+                SittingFlow.this.work(job, then);
+            }
+        };
     }
 
-    private void updatePanel() {
-        if (panel == null) {
-            return;
-        }
+    private String stateLine() {
         StringBuilder state = new StringBuilder();
         if (plan == null) {
             state.append("No candidate has signed in yet.");
@@ -868,7 +912,7 @@ public final class SittingFlow {
             }
         }
         state.append(paused ? "The exam is PAUSED." : "The exam is running.");
-        panel.update(state.toString(), paused, current == Screen.TASK);
+        return state.toString();
     }
 
     private void setPaused(boolean pause) {
@@ -879,16 +923,11 @@ public final class SittingFlow {
         if (pause) {
             sitting.pauseAll();
             freeze(true);
-            shell.cover(pausedCover);
-            if (panel != null && shell.covered(panel)) {
-                // keep the invigilator's panel above the cover
-                shell.uncover(panel);
-                shell.cover(panel);
-            }
+            desk.coverPaused(true);
             shell.announcer().announce(PausedCover.HEADING + ".");
         } else {
             sitting.resumeAll();
-            shell.uncover(pausedCover);
+            desk.coverPaused(false);
             if (!taskEnding) {
                 freeze(false);
             }
@@ -935,11 +974,7 @@ public final class SittingFlow {
     }
 
     private void focusLine(String what) {
-        String line = CLOCK.format(setup.clock().now()) + "  " + what;
-        focusLines.add(line);
-        if (panel != null) {
-            panel.focusEvent(line);
-        }
+        desk.note(what);
     }
 
     private void storageTrouble(String message) {
@@ -1084,23 +1119,13 @@ public final class SittingFlow {
         return lock;
     }
 
-    /** Focus log lines, oldest first. */
+    /** Lines the invigilator screen lists (focus changes, hand-in trouble), oldest first. */
     List<String> focusLines() {
-        return List.copyOf(focusLines);
+        return desk.lines();
     }
 
     Screen screen() {
         return current;
-    }
-
-    /** Which parts of the screen exist (for tests naming nodes). */
-    Map<String, Node> parts() {
-        Map<String, Node> parts = new LinkedHashMap<>();
-        parts.put("pausedCover", pausedCover);
-        if (panel != null) {
-            parts.put("panel", panel);
-        }
-        return parts;
     }
 
     Parent root() {

@@ -28,13 +28,14 @@ final class KillHarness {
 
     /** What one run measured. */
     record Figures(int kills, int earlyKills, long keystrokesAcknowledged, int keystrokesLost, long maxLostMillis,
-            int finalLength) {
+            int finalLength, long medianReadyMillis, long maxReadyMillis) {
 
         String describe() {
             return "kills=" + kills + " (of which before the editor was ready: " + earlyKills + ")"
                     + ", keystrokes acknowledged=" + keystrokesAcknowledged + ", keystrokes lost=" + keystrokesLost
                     + ", max lost window=" + maxLostMillis + " ms (age at the kill of the oldest lost keystroke)"
-                    + ", final text " + finalLength + " chars";
+                    + ", final text " + finalLength + " chars; start to typable editor: median " + medianReadyMillis
+                    + " ms, max " + maxReadyMillis + " ms";
         }
     }
 
@@ -69,10 +70,12 @@ final class KillHarness {
         long acked = 0;
         int lost = 0;
         long maxLostMillis = 0;
+        List<Long> readyMillis = new ArrayList<>();
         for (int k = 0; k <= kills; k++) {
             boolean last = k == kills;
             // about one kill in six lands while the process is still starting or recovering
             boolean killEarly = !last && random.nextInt(6) == 0;
+            long spawned = System.nanoTime();
             Process p = new ProcessBuilder(command).redirectError(ProcessBuilder.Redirect.appendTo(stderr.toFile())).start();
             LinkedBlockingQueue<Object[]> lines = new LinkedBlockingQueue<>();
             Thread reader = Thread.ofPlatform().daemon(true).start(() -> readLines(p, lines));
@@ -88,6 +91,7 @@ final class KillHarness {
                 p.destroyForcibly();
             } else {
                 recovered = awaitReady(p, lines);
+                readyMillis.add(TimeUnit.NANOSECONDS.toMillis(System.nanoTime() - spawned));
                 if (recovered == null) {
                     p.destroyForcibly();
                     failures.add("run " + k + ": the process did not become ready within " + readyTimeoutMillis
@@ -107,7 +111,9 @@ final class KillHarness {
                     stdin.close();
                     p.destroyForcibly();
                     p.waitFor(30, TimeUnit.SECONDS);
-                    return new Figures(kills, early, acked, lost, maxLostMillis, recovered.length());
+                    long[] ready = readyMillis.stream().mapToLong(Long::longValue).sorted().toArray();
+                    return new Figures(kills, early, acked, lost, maxLostMillis, recovered.length(), ready[ready.length / 2],
+                            ready[ready.length - 1]);
                 }
                 long typingMillis = 300 + random.nextInt(2700);
                 long until = System.nanoTime() + TimeUnit.MILLISECONDS.toNanos(typingMillis);

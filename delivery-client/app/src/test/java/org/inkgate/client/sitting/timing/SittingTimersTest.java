@@ -156,6 +156,7 @@ class SittingTimersTest {
             r.enterTask("t1");
             // 1200 - 400 - 120 + 90
             assertEquals(Duration.ofSeconds(770), r.remaining("t1").orElseThrow());
+            assertEquals("test", r.plan().clientVersion(), "the response names the client version the sitting began on");
             ProcessEvent resume = r.log().events().stream().filter(e -> e.type().equals(EventTypes.SITTING_RESUME)).findFirst()
                     .orElseThrow();
             assertEquals(120.0, ((Number) resume.data().get("downSeconds")).doubleValue());

@@ -43,6 +43,15 @@ final class FlowDriver {
         return DemoSittingBuild.readSitting(DemoBundles.SOURCE).invigilatorPin();
     }
 
+    /** The console note the demo build writes (PIN, candidate numbers), as the launcher passes it. */
+    static String demoNote() {
+        try {
+            return DemoSittingBuild.note(DemoSittingBuild.readSitting(DemoBundles.SOURCE)).strip();
+        } catch (Exception e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
     static Path buildDemoSitting(Path folder) throws Exception {
         Path out = folder.resolve("demo-sitting.inkexam");
         DemoSittingBuild.build(DemoBundles.SOURCE, out);
@@ -53,7 +62,9 @@ final class FlowDriver {
     final Stage stage;
     final Path data;
     final List<TextAreaWorkspace> workspaces = new ArrayList<>();
+    final List<org.inkgate.client.task.TaskWorkspace> realWorkspaces = new ArrayList<>();
     final AtomicBoolean exited = new AtomicBoolean();
+    private boolean real;
     SittingFlow flow;
 
     FlowDriver(FxRobot robot, Stage stage, Path data) {
@@ -62,16 +73,33 @@ final class FlowDriver {
         this.data = data;
     }
 
-    /** Opens the flow on the bundle, trusting the demo key. */
+    /** Opens the flow on the bundle, trusting the demo key, with the plain-text test workspace. */
     SittingFlow open(Path bundle, SittingClock clock, boolean lock) throws Exception {
+        return open(bundle, clock, lock, false, context -> {
+            TextAreaWorkspace w = new TextAreaWorkspace(context);
+            workspaces.add(w);
+            return w;
+        });
+    }
+
+    /** Opens the flow with the real task workspace (screenshots, demo note shown). */
+    SittingFlow openReal(Path bundle, SittingClock clock) throws Exception {
+        real = true;
+        return open(bundle, clock, false, true, context -> {
+            org.inkgate.client.task.TaskWorkspace w = Workspaces.standard().create(context);
+            realWorkspaces.add(w);
+            return w;
+        });
+    }
+
+    private SittingFlow open(Path bundle, SittingClock clock, boolean lock, boolean demo, WorkspaceFactory factory)
+            throws Exception {
         SittingLoad load = new SittingBundleOpener(Set.of(demoOwnerKey())).open(bundle);
         AtomicReference<SittingFlow> made = new AtomicReference<>();
         robot.interact(() -> {
-            SittingFlow f = new SittingFlow(stage, new SittingFlow.Setup(load, bundle, data, context -> {
-                TextAreaWorkspace w = new TextAreaWorkspace(context);
-                workspaces.add(w);
-                return w;
-            }, clock, false, lock, () -> exited.set(true)));
+            SittingFlow f = new SittingFlow(stage, new SittingFlow.Setup(load, bundle, data, factory, clock,
+                    demo ? demoNote() : null, lock,
+                    () -> exited.set(true)));
             made.set(f);
             f.start();
         });
@@ -142,12 +170,12 @@ final class FlowDriver {
     /** Waits for the task screen whose position line contains {@code title}. */
     void awaitTask(String title) {
         awaitText("taskPosition", title);
-        await("editor", Node.class);
+        await(real ? "answer" : "editor", Node.class);
     }
 
     /** Types through the robot (real key events, through the lock's filters) into the task's editor. */
     void typeInEditor(String text) {
-        robot.interact(() -> workspace().focusEditor());
+        robot.interact(() -> (real ? realWorkspaces.getLast() : workspace()).focusEditor());
         robot.write(text);
         WaitForAsyncUtils.waitForFxEvents();
     }

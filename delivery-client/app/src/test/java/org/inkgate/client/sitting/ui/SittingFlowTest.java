@@ -95,6 +95,19 @@ class SittingFlowTest {
     }
 
     @Test
+    void setUp_exit_closesTheLockedWindowWithoutStartingASitting(FxRobot robot) throws Exception {
+        FlowDriver d = driver();
+        d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), true);
+        d.await("setupPin", Node.class);
+
+        d.press("setupExit");
+
+        assertTrue(d.exited.get(), "exit did not end the client");
+        assertFalse(d.flow.lock().locked(), "the lock outlived the exit");
+        assertFalse(stage.isShowing());
+    }
+
+    @Test
     void signIn_unknownCandidateNumber_saysItIsNotOnTheRoster(FxRobot robot) throws Exception {
         FlowDriver d = driver();
         d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
@@ -203,6 +216,9 @@ class SittingFlowTest {
         d.signIn("D1001");
         d.press("startButton");
         d.awaitTask("A note to a neighbour");
+        // the caret is in the editor without anyone clicking it
+        WaitForAsyncUtils.waitFor(10, java.util.concurrent.TimeUnit.SECONDS,
+                () -> stage.getScene().getFocusOwner() != null && "editor".equals(stage.getScene().getFocusOwner().getId()));
         // the first task allows 1200 s (exam.json) and D1001 has no extra time (sitting.json)
         d.awaitText("timeLeft", "20:00");
 
@@ -265,8 +281,9 @@ class SittingFlowTest {
     @Test
     void recovery_abandonedSitting_resumesTheSameTaskWithItsText(FxRobot robot) throws Exception {
         Path bundle = FlowDriver.buildDemoSitting(temp);
+        ManualClock clock = new ManualClock();
         FlowDriver first = driver();
-        first.open(bundle, SittingClock.system(), false);
+        first.open(bundle, clock, false);
         first.setUp(FlowDriver.demoPin(), temp.resolve("out"));
         first.signIn("D1002");
         first.press("startButton");
@@ -274,12 +291,15 @@ class SittingFlowTest {
         first.awaitTask("The empty shop on Mill Street");
         first.typeInEditor("Saved before the crash.");
         String typed = first.workspace().text();
+        clock.advance(java.time.Duration.ofSeconds(100));
         // the log is durable within 0.5 s; wait well past that, then drop the window as a crash would
         WaitForAsyncUtils.sleep(1500, java.util.concurrent.TimeUnit.MILLISECONDS);
         robot.interact(() -> first.flow.closeQuietly());
+        // the machine stays down for 200 s
+        clock.advance(java.time.Duration.ofSeconds(200));
 
         FlowDriver second = driver();
-        second.open(bundle, SittingClock.system(), false);
+        second.open(bundle, clock, false);
         second.await("recoveryScreen", Node.class);
         List<String> facts = robot.lookup("#recoveryFacts").queryAs(javafx.scene.layout.VBox.class).getChildren()
                 .stream().map(n -> ((Label) n).getText()).toList();
@@ -288,9 +308,13 @@ class SittingFlowTest {
         second.type("recoveryPin", "999999");
         second.press("resumeButton");
         second.awaitText("recoveryError", "not this exam's invigilator PIN");
-        second.check("creditDowntime");
+        assertTrue(facts.get(2).contains("3 minutes ago"), facts.toString());
+        // not credited: 1800 s (exam.json) - 100 s written - 200 s down = 1500 s = 25 minutes left
         second.type("recoveryPin", FlowDriver.demoPin());
         second.press("resumeButton");
+        second.await("continueButton", Node.class);
+        assertTrue(robot.lookup("#resumedScreen").queryAs(javafx.scene.Parent.class).lookupAll(".label").stream()
+                .anyMatch(n -> ((Label) n).getText().contains("25 minutes left")), "time left after no credit");
         second.press("continueButton");
         second.awaitTask("The empty shop on Mill Street");
         assertEquals(typed, second.workspace().text());

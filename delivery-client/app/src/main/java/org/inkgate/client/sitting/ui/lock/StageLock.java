@@ -39,6 +39,8 @@ public final class StageLock {
     /**
      * Key combinations consumed before any control sees them: window closing, quitting, printing,
      * saving, opening, new windows and tabs, help and full-screen toggles. Ctrl and Meta (Cmd) both.
+     * Escape and the context-menu key stay free: with no full-screen exit key they cannot leave the
+     * window, and candidates need them to close pop-ups and open suggestions from the keyboard.
      */
     public static final List<KeyCombination> BLOCKED_KEYS = List.of(
             new KeyCodeCombination(KeyCode.F4, KeyCombination.ALT_DOWN),
@@ -53,11 +55,9 @@ public final class StageLock {
             new KeyCodeCombination(KeyCode.M, KeyCombination.SHORTCUT_DOWN),
             new KeyCodeCombination(KeyCode.H, KeyCombination.SHORTCUT_DOWN),
             new KeyCodeCombination(KeyCode.F, KeyCombination.SHORTCUT_DOWN, KeyCombination.CONTROL_DOWN),
-            new KeyCodeCombination(KeyCode.ESCAPE),
             new KeyCodeCombination(KeyCode.F1),
             new KeyCodeCombination(KeyCode.F11),
             new KeyCodeCombination(KeyCode.PRINTSCREEN),
-            new KeyCodeCombination(KeyCode.CONTEXT_MENU),
             new KeyCodeCombination(KeyCode.WINDOWS),
             new KeyCodeCombination(KeyCode.COMMAND));
 

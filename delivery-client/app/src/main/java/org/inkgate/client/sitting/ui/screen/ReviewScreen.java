@@ -35,8 +35,10 @@ public final class ReviewScreen {
             HBox.setHgrow(title, Priority.ALWAYS);
             Label words = new Label(row.words() + (row.words() == 1 ? " word" : " words"));
             words.getStyleClass().add("review-words");
+            words.setMinWidth(120);
             Label guidance = new Label(row.guidance() == null ? "" : row.guidance());
             guidance.getStyleClass().add("quiet-note");
+            guidance.setMinWidth(220);
             HBox line = new HBox(title, words, guidance);
             line.getStyleClass().add("review-row");
             line.setAccessibleText(row.title() + ": " + words.getText() + ". " + guidance.getText());

@@ -16,9 +16,11 @@ import org.inkgate.packs.spelling.EnglishVariant;
 
 /**
  * Prepares each task's tools while the candidate reads the instructions: the broker's
- * {@code toolsFor} once per task (only the tools the task's policy allows are built), then the
- * spelling engine's warm-up, on one background thread so the window stays responsive. A task
- * takes its tools once; tools never taken are closed with the shelf.
+ * {@code toolsFor} once per task (only the tools the task's policy allows are built) on one
+ * background thread, then the spelling engine's warm-up on the engine's own thread. A task's
+ * tools are handed out as soon as they are built, not after the warm-up, so the editor is
+ * typable at once; the first checks simply wait behind the warm-up. A task takes its tools
+ * once; tools never taken are closed with the shelf.
  */
 public final class ToolShelf implements AutoCloseable {
 
@@ -33,6 +35,7 @@ public final class ToolShelf implements AutoCloseable {
     });
     private final Map<String, CompletableFuture<TaskTools>> shelf = new LinkedHashMap<>();
     private final List<CompletableFuture<TaskTools>> untaken = new ArrayList<>();
+    private final List<CompletableFuture<Void>> warmUps = new ArrayList<>();
 
     /** Starts preparing every task's tools, in the form's order. */
     public ToolShelf(ResourceBroker broker, EnglishVariant variant, List<Order> orders) {
@@ -40,21 +43,22 @@ public final class ToolShelf implements AutoCloseable {
         for (Order order : orders) {
             CompletableFuture<TaskTools> tools = CompletableFuture.supplyAsync(() -> {
                 try {
-                    TaskTools built = broker.toolsFor(order.policy(), variant, order.examWords());
-                    built.spelling().ifPresent(checker -> checker.warmUp().join());
-                    return built;
+                    return broker.toolsFor(order.policy(), variant, order.examWords());
                 } catch (org.inkgate.packs.pack.PackRefusal e) {
                     throw new ToolsNotReady(order.taskId(), e.getMessage(), e);
                 }
             }, worker);
             shelf.put(order.taskId(), tools);
             untaken.add(tools);
+            warmUps.add(tools.thenCompose(built -> built.spelling()
+                    .map(checker -> checker.warmUp())
+                    .orElse(CompletableFuture.completedFuture(null))));
         }
     }
 
     /** All tools are built and warmed up (or failed). */
     public CompletableFuture<Void> allReady() {
-        return CompletableFuture.allOf(shelf.values().toArray(CompletableFuture[]::new)).exceptionally(e -> null);
+        return CompletableFuture.allOf(warmUps.toArray(CompletableFuture[]::new)).exceptionally(e -> null);
     }
 
     /**
