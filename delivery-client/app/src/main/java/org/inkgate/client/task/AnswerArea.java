@@ -4,6 +4,7 @@ import java.util.Objects;
 import java.util.function.Consumer;
 import javafx.scene.AccessibleRole;
 import javafx.scene.input.DragEvent;
+import javafx.scene.input.InputMethodEvent;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
 import org.fxmisc.richtext.StyleClassedTextArea;
@@ -37,6 +38,8 @@ final class AnswerArea extends StyleClassedTextArea {
         setOnSelectionDropped(e -> { });
         addEventFilter(DragEvent.ANY, DragEvent::consume);
         setAccessibleRole(AccessibleRole.TEXT_AREA);
+        // input methods (IME): RichTextFX sets its own handler and InputMethodRequests where the
+        // platform supports them; nothing here filters or consumes InputMethodEvents
         // Tab types a tab, as in any text area; Ctrl+Tab (Shift for backwards) leaves the answer
         addEventFilter(KeyEvent.KEY_PRESSED, e -> {
             if (e.getCode() == KeyCode.TAB && e.isShortcutDown()) {
@@ -103,5 +106,10 @@ final class AnswerArea extends StyleClassedTextArea {
         if (isEditable()) {
             changeAs(ChangeSource.REDO, super::redo);
         }
+    }
+
+    /** Passes an input-method event to RichTextFX's own handling (tests on platforms without input methods). */
+    void inputMethodEvent(InputMethodEvent e) {
+        handleInputMethodEvent(e);
     }
 }

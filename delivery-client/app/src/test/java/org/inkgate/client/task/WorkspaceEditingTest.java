@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Map;
-import javafx.event.Event;
 import javafx.scene.input.InputMethodEvent;
 import javafx.scene.input.InputMethodHighlight;
 import javafx.scene.input.InputMethodTextRun;
@@ -164,14 +163,52 @@ class WorkspaceEditingTest {
     }
 
     @Test
+    void setFrozen_panelAnswersNothingAndInsertIsIgnored(FxRobot robot) throws Exception {
+        ResourcePolicy policy = new ResourcePolicy(SpellingMode.OFF, TestTools.GLOSSARY, null, true, true, PastePolicy.NONE);
+        workspace = Shown.show(robot, stage, TestTools.context(TestTools.toolsFor(policy, TestTools.realPacks()), log, "Text.",
+                DisplaySettings.standard()), new FakeClipboard(null));
+        Shown.onFx(robot, () -> workspace.setFrozen(true));
+        assertTrue(robot.lookup("#resourcePanel").query().isDisabled());
+        robot.press(KeyCode.CONTROL, KeyCode.SHIFT, KeyCode.G).release(KeyCode.G, KeyCode.SHIFT, KeyCode.CONTROL);
+        assertTrue(workspace.area().isFocused(), "the glossary shortcut does nothing while frozen");
+        Shown.onFx(robot, () -> workspace.insert(org.inkgate.packs.policy.Tool.GLOSSARY, "f001", "ferry"));
+        assertEquals("Text.", workspace.text());
+        assertTrue(log.events(EventTypes.TOOL_INSERT).isEmpty());
+        assertTrue(log.events(EventTypes.TOOL_QUERY).isEmpty());
+    }
+
+    @Test
+    void close_releasesTheToolsAndLogsThePanelClosed(FxRobot robot) throws Exception {
+        ScriptedChecker[] made = new ScriptedChecker[1];
+        ResourcePolicy policy = new ResourcePolicy(SpellingMode.SUGGESTIONS, TestTools.GLOSSARY, null, false, true, PastePolicy.NONE);
+        TaskTools tools = TestTools.toolsFor(policy, new TestTools.CountingFactory(TestTools.realPacks(), (m, words) -> {
+            made[0] = new ScriptedChecker(m, Map.of());
+            return made[0];
+        }));
+        WritingWorkspace w = Shown.show(robot, stage, TestTools.context(tools, log, "", DisplaySettings.standard()), new FakeClipboard(null));
+        robot.interact(w::close);
+        assertTrue(made[0].closed, "the checker's thread is stopped");
+        assertEquals(List.of("glossary"), log.events(EventTypes.PANEL_CLOSE).stream().map(e -> e.get("tool")).toList());
+        robot.interact(w::close); // a second close changes nothing
+        assertEquals(1, log.events(EventTypes.PANEL_CLOSE).size());
+    }
+
+    @Test
     void inputMethod_committedTextGoesInAndIsLoggedAsTyping(FxRobot robot) throws Exception {
         open(robot, PastePolicy.NONE, new FakeClipboard(null), "");
-        assertTrue(workspace.area().getInputMethodRequests() != null, "the editor answers input-method requests");
+        boolean[] registered = {true};
+        Shown.onFx(robot, () -> {
+            if (javafx.application.Platform.isSupported(javafx.application.ConditionalFeature.INPUT_METHOD)) {
+                // where the platform has input methods, RichTextFX must have registered for them (Monocle headless has none)
+                registered[0] = workspace.area().getInputMethodRequests() != null && workspace.area().getOnInputMethodTextChanged() != null;
+            }
+        });
+        assertTrue(registered[0], "the editor takes input-method events where the platform has them");
         // a composition in progress, then its commit, as an input method for Japanese sends them
         Shown.onFx(robot, () -> {
-            Event.fireEvent(workspace.area(), new InputMethodEvent(InputMethodEvent.INPUT_METHOD_TEXT_CHANGED,
+            workspace.area().inputMethodEvent(new InputMethodEvent(InputMethodEvent.INPUT_METHOD_TEXT_CHANGED,
                     List.of(new InputMethodTextRun("\u306F\u3057", InputMethodHighlight.UNSELECTED_RAW)), "", 2));
-            Event.fireEvent(workspace.area(), new InputMethodEvent(InputMethodEvent.INPUT_METHOD_TEXT_CHANGED,
+            workspace.area().inputMethodEvent(new InputMethodEvent(InputMethodEvent.INPUT_METHOD_TEXT_CHANGED,
                     List.of(), "\u6A4B", 0));
         });
         assertEquals("\u6A4B", workspace.text());

@@ -97,6 +97,7 @@ class WorkspaceScreenshotTest {
         FxRobot robot = new FxRobot();
         open(robot, new ResourcePolicy(SpellingMode.SUGGESTIONS, TestTools.GLOSSARY, null, false, true, PastePolicy.NONE),
                 new DisplaySettings(1.0, 0.0, true));
+        org.junit.jupiter.api.Assertions.assertTrue(workspace.view().getStyleClass().contains("high-contrast"));
         robot.press(KeyCode.CONTROL, KeyCode.SHIFT, KeyCode.G).release(KeyCode.G, KeyCode.SHIFT, KeyCode.CONTROL);
         robot.write("gang");
         Shown.until("glossary hits", () -> !robot.lookup("#glossaryResults").queryListView().getItems().isEmpty());
@@ -108,6 +109,10 @@ class WorkspaceScreenshotTest {
         FxRobot robot = new FxRobot();
         open(robot, new ResourcePolicy(SpellingMode.UNDERLINE_ONLY, null, TestTools.DICTIONARY, false, true, PastePolicy.NONE),
                 new DisplaySettings(DisplaySettings.LARGE_PRINT_SCALE, 0.8, false));
+        // 16 px x 1.5 = 24 px type, line spacing 0.8 x 24 = 19.2 px (DisplayStyle's own rule)
+        javafx.scene.text.Text first = robot.lookup(".answer-area .text").queryAs(javafx.scene.text.Text.class);
+        assertEquals(24.0, first.getFont().getSize(), 0.01);
+        assertEquals(19.2, robot.lookup(".answer-area .paragraph-text").queryAs(javafx.scene.text.TextFlow.class).getLineSpacing(), 0.01);
         write(robot, "task-workspace-large-print.png");
     }
 
