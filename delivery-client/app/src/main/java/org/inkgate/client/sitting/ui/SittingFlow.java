@@ -261,7 +261,8 @@ public final class SittingFlow {
         List<String> openForms = m.roster().isEmpty() && m.forms().size() > 1
                 ? m.forms().stream().map(f -> f.id()).toList() : List.of();
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
-                setup.demoNote() == null ? null : DEMO_NOTE + "\n\n" + setup.demoNote(), openForms, input -> checkSetup(screen[0], input));
+                setup.demoNote() == null ? null : DEMO_NOTE + "\n\n" + setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
+                this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
     }
@@ -500,9 +501,38 @@ public final class SittingFlow {
             if (paused) {
                 freeze(true);
             } else {
-                workspace.focusEditor();
+                focusEditorOnceShown(workspace);
             }
         }));
+    }
+
+    /**
+     * Puts the caret in the new task's editor. The editor takes focus only once its skin is laid
+     * out, which can take a few pulses; until then the scene gives focus to the first button it
+     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most a
+     * second), and never after the task has changed or the exam is paused.
+     */
+    private void focusEditorOnceShown(TaskWorkspace shown) {
+        Timeline retry = new Timeline();
+        retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
+            if (workspace != shown || paused || focusInside(shown.view())) {
+                retry.stop();
+                return;
+            }
+            shown.focusEditor();
+        }));
+        retry.setCycleCount(34);
+        shown.focusEditor();
+        retry.play();
+    }
+
+    private boolean focusInside(Node container) {
+        for (Node n = scene.getFocusOwner(); n != null; n = n.getParent()) {
+            if (n == container) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private void tick() {
@@ -705,7 +735,7 @@ public final class SittingFlow {
         String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
         screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
-                input -> resume(screen[0], found, input, down));
+                input -> resume(screen[0], found, input, down), this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
     }

@@ -95,6 +95,19 @@ class SittingFlowTest {
     }
 
     @Test
+    void setUp_exit_closesTheLockedWindowWithoutStartingASitting(FxRobot robot) throws Exception {
+        FlowDriver d = driver();
+        d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), true);
+        d.await("setupPin", Node.class);
+
+        d.press("setupExit");
+
+        assertTrue(d.exited.get(), "exit did not end the client");
+        assertFalse(d.flow.lock().locked(), "the lock outlived the exit");
+        assertFalse(stage.isShowing());
+    }
+
+    @Test
     void signIn_unknownCandidateNumber_saysItIsNotOnTheRoster(FxRobot robot) throws Exception {
         FlowDriver d = driver();
         d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
@@ -203,6 +216,9 @@ class SittingFlowTest {
         d.signIn("D1001");
         d.press("startButton");
         d.awaitTask("A note to a neighbour");
+        // the caret is in the editor without anyone clicking it
+        WaitForAsyncUtils.waitFor(10, java.util.concurrent.TimeUnit.SECONDS,
+                () -> stage.getScene().getFocusOwner() != null && "editor".equals(stage.getScene().getFocusOwner().getId()));
         // the first task allows 1200 s (exam.json) and D1001 has no extra time (sitting.json)
         d.awaitText("timeLeft", "20:00");
 

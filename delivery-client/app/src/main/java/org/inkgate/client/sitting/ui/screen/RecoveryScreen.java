@@ -35,7 +35,8 @@ public final class RecoveryScreen {
      * @param defaultOutput the output folder proposed for the response package
      * @param onResume  PIN, whether to credit the downtime, and the output folder
      */
-    public RecoveryScreen(List<String> facts, String creditText, Path defaultOutput, Consumer<Input> onResume) {
+    public RecoveryScreen(List<String> facts, String creditText, Path defaultOutput, Consumer<Input> onResume,
+            Runnable onExit) {
         VBox found = new VBox(6);
         found.setId("recoveryFacts");
         for (String fact : facts) {
@@ -62,7 +63,8 @@ public final class RecoveryScreen {
                         + " owner's regulations; the choice is recorded in the sitting's log."),
                 Parts.fieldLabel("_Output folder for the response package", output), output,
                 Parts.fieldLabel("Invigilator _PIN", pin), pin,
-                error, resume);
+                error, new javafx.scene.layout.HBox(12, resume, Parts.plain("recoveryExit",
+                        "E_xit without resuming", onExit)));
         root = Parts.card("recoveryScreen", box);
     }
 

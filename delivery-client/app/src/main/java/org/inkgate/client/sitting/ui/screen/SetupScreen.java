@@ -42,9 +42,10 @@ public final class SetupScreen {
      * @param defaultOutput the folder proposed for response packages
      * @param demoNote    a demo-only hint (PIN of the demo bundle), or null for a real bundle
      * @param openForms   the forms to choose from when the bundle has no roster and several forms; else empty
+     * @param onExit      closes the client (nothing has started yet, so nothing is lost)
      */
     public SetupScreen(String examTitle, String signer, boolean sealed, Path defaultOutput, String demoNote,
-            List<String> openForms, Consumer<Input> onContinue) {
+            List<String> openForms, Consumer<Input> onContinue, Runnable onExit) {
         pin.setId("setupPin");
         pin.setAccessibleText("Invigilator PIN");
         output.setId("setupOutput");
@@ -86,7 +87,8 @@ public final class SetupScreen {
             demo.getStyleClass().add("demo-note");
             fields.getChildren().add(demo);
         }
-        fields.getChildren().addAll(error, go);
+        Button exit = Parts.plain("setupExit", "E_xit", onExit);
+        fields.getChildren().addAll(error, new HBox(12, go, exit));
         root = Parts.card("setupScreen", fields);
     }
 

@@ -82,6 +82,14 @@ public final class SittingStartBench {
         System.exit(0);
     }
 
+    static {
+        // a failed run must end the process, not leave the JavaFX thread holding it open
+        Thread.setDefaultUncaughtExceptionHandler((t, e) -> {
+            e.printStackTrace();
+            System.exit(1);
+        });
+    }
+
     private static double[] once(Path bundle, String ownerKey, String pin, Path data, Path output) throws Exception {
         long t0 = System.nanoTime();
         SittingLoad load = new SittingBundleOpener(Set.of(ownerKey)).open(bundle);
@@ -90,6 +98,7 @@ public final class SittingStartBench {
             throw new IllegalStateException(refused.message());
         }
         Stage stage = fx(Stage::new);
+        watched = stage;
         SittingFlow flow = fx(() -> {
             SittingFlow f = new SittingFlow(stage, new SittingFlow.Setup(load, bundle, data, Workspaces.standard(),
                     SittingClock.system(), null, false, () -> { }));
@@ -109,8 +118,9 @@ public final class SittingStartBench {
         long t3 = System.nanoTime();
         press(stage, "startButton");
         waitFor(() -> fxQuiet(() -> {
+            // the focus owner, not isFocused(): a headless window may never be the focused window
             Node answer = stage.getScene().lookup("#answer");
-            return answer != null && answer.isFocused() && !answer.isDisabled();
+            return answer != null && stage.getScene().getFocusOwner() == answer && !answer.isDisabled();
         }));
         long t4 = System.nanoTime();
         fx(() -> {
@@ -140,13 +150,25 @@ public final class SittingStartBench {
         });
     }
 
+    private static Stage watched;
+
     private static void waitFor(BooleanSupplier condition) throws InterruptedException {
         long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(120);
         while (!condition.getAsBoolean()) {
             if (System.nanoTime() > deadline) {
-                throw new IllegalStateException("the sitting did not reach the expected screen within 120 s");
+                String owner = fxQuietText(() -> String.valueOf(watched.getScene().getFocusOwner()));
+                throw new IllegalStateException("the sitting did not reach the expected screen within 120 s; focus is on "
+                        + owner);
             }
             Thread.sleep(2);
+        }
+    }
+
+    private static String fxQuietText(Callable<String> text) {
+        try {
+            return fx(text);
+        } catch (Exception e) {
+            return "(unknown: " + e + ")";
         }
     }
 
