@@ -70,7 +70,9 @@ class ClientKillTest {
         System.out.println(report);
         assertNotNull(figures, () -> harness.failures() + "\n" + tail(stderr));
         assertEquals(List.of(), harness.failures());
-        assertTrue(figures.keystrokesAcknowledged() > 300, "the test typed too little to mean anything: " + report);
+        // a floor against a vacuous run, not a speed check: typing is timed, so a loaded machine acknowledges
+        // fewer keystrokes (about 800 are sent over 24 kills; a run at load 13-15 acknowledged 332)
+        assertTrue(figures.keystrokesAcknowledged() > 150, "the test typed too little to mean anything: " + report);
     }
 
     /**

@@ -43,7 +43,9 @@ class CoreKillTest {
         System.out.println(report);
         assertNotNull(figures, () -> harness.failures() + " " + readQuietly(stderr));
         assertEquals(List.of(), harness.failures());
-        assertTrue(figures.keystrokesAcknowledged() > 200, "the test typed too little to mean anything: " + report);
+        // a floor against a vacuous run, not a speed check: typing is timed, so a loaded machine acknowledges
+        // fewer keystrokes (about 400 are sent over 10 kills; one run with five builds beside it fell short of 200)
+        assertTrue(figures.keystrokesAcknowledged() > 100, "the test typed too little to mean anything: " + report);
     }
 
     private static String readQuietly(Path file) {

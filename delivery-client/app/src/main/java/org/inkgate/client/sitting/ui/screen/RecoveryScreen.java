@@ -50,9 +50,12 @@ public final class RecoveryScreen {
         output.setId("recoveryOutput");
         output.setAccessibleText("Output folder for the response package");
         output.setText(defaultOutput == null ? "" : defaultOutput.toString());
-        resume = Parts.primary("resumeButton", "_Resume the sitting",
-                () -> onResume.accept(new Input(pin.getText().toCharArray(), credit.isSelected(),
-                        output.getText().isBlank() ? null : Path.of(output.getText().strip()))));
+        // disabled until the PIN check answers: a second press would open the sitting's log twice
+        resume = Parts.primary("resumeButton", "_Resume the sitting", () -> {
+            resumeButton().setDisable(true);
+            onResume.accept(new Input(pin.getText().toCharArray(), credit.isSelected(),
+                    output.getText().isBlank() ? null : Path.of(output.getText().strip())));
+        });
         VBox box = new VBox(12,
                 Parts.heading("An unfinished sitting was found"),
                 Parts.text("This machine stopped during a sitting. The answers written so far were saved."
@@ -77,7 +80,12 @@ public final class RecoveryScreen {
         javafx.application.Platform.runLater(pin::requestFocus);
     }
 
+    private Button resumeButton() {
+        return resume;
+    }
+
     public void showError(String message) {
+        resume.setDisable(false);
         error.setText(message);
         error.setAccessibleText(message);
         pin.clear();
