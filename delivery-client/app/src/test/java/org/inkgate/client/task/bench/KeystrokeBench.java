@@ -173,8 +173,30 @@ public final class KeystrokeBench {
         report(out, "latency (due -> handled)", latency);
         report(out, "latency + CSS/layout pulse", Arrays.stream(withLayout).filter(v -> v > 0).toArray());
         out.printf(Locale.ROOT, "keys whose pulse was shared with the next key (no own layout figure): %d%n", layoutMissing);
+        reportHeap(out);
         runAndWait(() -> made.get().close());
         Platform.exit();
+    }
+
+    /**
+     * The issue's heap figure for a sitting with all tools: the largest heap the JVM may take (the
+     * profile sets -Xmx), the peak the heap pools reached while typing, and what is still live
+     * after a full collection with every tool open.
+     */
+    private static void reportHeap(PrintStream out) {
+        long peak = 0;
+        for (java.lang.management.MemoryPoolMXBean pool : java.lang.management.ManagementFactory.getMemoryPoolMXBeans()) {
+            if (pool.getType() == java.lang.management.MemoryType.HEAP) {
+                peak += pool.getPeakUsage().getUsed();
+            }
+        }
+        for (int i = 0; i < 3; i++) {
+            System.gc();
+        }
+        Runtime rt = Runtime.getRuntime();
+        long live = rt.totalMemory() - rt.freeMemory();
+        out.printf(Locale.ROOT, "heap: max %d MiB, peak of the heap pools %d MiB, live after full GC %d MiB (all tools open)%n",
+                rt.maxMemory() >> 20, peak >> 20, live >> 20);
     }
 
     private static void type(Node target, char c) {
