@@ -656,7 +656,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
             }
             // among the least loaded, a rater whose queue would end with this candidate's other response is
             // passed over (common practice against the halo effect); then a seeded random choice
-            int adjacent = candidate.equals(lastCandidate(r)) ? 1 : 0;
+            int adjacent = candidate.equals(lastCandidateInTx(r)) ? 1 : 0;
             long key = ((long) adjacent << 20) + rng.nextInt(1 << 20);
             if (key < bestKey) {
                 bestKey = key;
@@ -672,8 +672,42 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         } while (!query("SELECT 1 FROM rating_assignments WHERE blind_id=?", rs -> 1, blind).isEmpty());
         update("INSERT INTO rating_assignments(sitting_id, task_id, rater_id, seed, created_at, run_id, blind_id, kind,"
                 + " queue_position) VALUES (?,?,?,?,?,NULL,?,'adjudication',?)", sittingId, taskId, best, seed, now,
-                blind, nextPosition(best));
+                blind, nextPositionInTx(best));
         load.merge(best, 1, Integer::sum);
+        // the new item is now the end of that rater's queue
+        lastCandidateInTx(best);
+        tailInTx.put(best, Optional.of(candidate));
+        nextPositionInTx.merge(best, 1, Integer::sum);
+    }
+
+    /**
+     * {@link #lastCandidate} remembered for the rest of the transaction: a review of thousands of
+     * flags would otherwise sort a rater's whole queue for every flag. Only
+     * {@link #assignAdjudicator} adds to queues while a review runs, and it keeps this up to date.
+     */
+    private String lastCandidateInTx(String rater) throws SQLException {
+        if (tailInTx == null) {
+            tailInTx = new HashMap<>();
+        }
+        Optional<String> tail = tailInTx.get(rater);
+        if (tail == null) {
+            tail = Optional.ofNullable(lastCandidate(rater));
+            tailInTx.put(rater, tail);
+        }
+        return tail.orElse(null);
+    }
+
+    /** {@link #nextPosition} remembered for the rest of the transaction, like {@link #lastCandidateInTx}. */
+    private int nextPositionInTx(String rater) throws SQLException {
+        if (nextPositionInTx == null) {
+            nextPositionInTx = new HashMap<>();
+        }
+        Integer next = nextPositionInTx.get(rater);
+        if (next == null) {
+            next = nextPosition(rater);
+            nextPositionInTx.put(rater, next);
+        }
+        return next;
     }
 
     /** The candidate behind the last item of a rater's queue in this exam, or null for an empty queue. */
@@ -869,9 +903,13 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
 
     /** Workloads per rater, counted once per transaction that assigns adjudicators (null outside). */
     private Map<String, Integer> loadInTx;
+    private Map<String, Optional<String>> tailInTx;
+    private Map<String, Integer> nextPositionInTx;
 
     private <T> T tx(String what, Work<T> work) throws RatingException {
         loadInTx = null;
+        tailInTx = null;
+        nextPositionInTx = null;
         try {
             c.setAutoCommit(false);
             try {
@@ -883,6 +921,8 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 throw e;
             } finally {
                 loadInTx = null;
+                tailInTx = null;
+                nextPositionInTx = null;
                 c.setAutoCommit(true);
             }
         } catch (SQLException e) {
