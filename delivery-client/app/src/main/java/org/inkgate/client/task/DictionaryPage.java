@@ -47,9 +47,8 @@ final class DictionaryPage implements ToolPage {
     private final FlowPane nearSpellings = new FlowPane(8, 4);
     private final ListView<DictionaryEntry> results = new ListView<>();
     private final VBox entryView = new VBox(10);
-    private final ListView<String> insertable = new ListView<>();
+    private final InsertRow insertRow;
     private final VBox root;
-    private String openEntryId;
 
     DictionaryPage(Dictionary dictionary, TaskEvents events, ToolTally tally, PanelActions actions, Lookups lookups) {
         this.dictionary = dictionary;
@@ -106,34 +105,9 @@ final class DictionaryPage implements ToolPage {
 
         root = new VBox(10, search, status, nearSpellings, results, entryScroll);
         root.getStyleClass().add("tool-page");
+        insertRow = new InsertRow(Tool.DICTIONARY, actions, "dictionary", "word");
         if (actions.insertAllowed()) {
-            root.getChildren().add(insertRow());
-        }
-    }
-
-    private Node insertRow() {
-        insertable.setId("dictionaryInsertable");
-        insertable.setAccessibleText("Words from this entry you may insert");
-        insertable.setPrefHeight(96);
-        Button insert = new Button("Insert into answer");
-        insert.setId("dictionaryInsert");
-        insert.disableProperty().bind(insertable.getSelectionModel().selectedItemProperty().isNull());
-        insert.setOnAction(e -> insertSelected());
-        insertable.setOnKeyPressed(e -> {
-            if (e.getCode() == KeyCode.ENTER) {
-                insertSelected();
-                e.consume();
-            }
-        });
-        VBox box = new VBox(6, ToolPage.wrapped("Insert a word from this entry at the cursor:", "panel-note"), insertable, insert);
-        box.getStyleClass().add("insert-box");
-        return box;
-    }
-
-    private void insertSelected() {
-        String word = insertable.getSelectionModel().getSelectedItem();
-        if (word != null && openEntryId != null) {
-            actions.insert(Tool.DICTIONARY, openEntryId, word);
+            root.getChildren().add(insertRow.node());
         }
     }
 
@@ -181,8 +155,7 @@ final class DictionaryPage implements ToolPage {
         results.getItems().setAll(lookup.entries());
         nearSpellings.getChildren().clear();
         entryView.getChildren().clear();
-        insertable.getItems().clear();
-        openEntryId = null;
+        insertRow.clear();
         if (lookup.entries().isEmpty()) {
             status.setText(lookup.suggestions().isEmpty()
                     ? "No entry for \u201C" + lookup.query() + "\u201D."
@@ -223,7 +196,6 @@ final class DictionaryPage implements ToolPage {
             return;
         }
         DictionaryEntry e = timed.value().get();
-        openEntryId = e.id();
         entryView.getChildren().setAll(ToolPage.wrapped(e.lemma() + " \u00B7 " + e.partOfSpeech().label(), "entry-heading"));
         Set<String> words = new LinkedHashSet<>();
         words.add(e.lemma());
@@ -249,7 +221,7 @@ final class DictionaryPage implements ToolPage {
             }
             entryView.getChildren().add(sense);
         }
-        insertable.getItems().setAll(words);
+        insertRow.show(e.id(), words);
     }
 
     private void failed(RuntimeException e) {

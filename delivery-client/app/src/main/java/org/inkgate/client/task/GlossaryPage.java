@@ -46,10 +46,9 @@ final class GlossaryPage implements ToolPage {
     private final Label status = ToolPage.wrapped("", "panel-status");
     private final ListView<GlossaryHit> results = new ListView<>();
     private final VBox entryView = new VBox(10);
-    private final ListView<String> insertable = new ListView<>();
+    private final InsertRow insertRow;
     private final PauseTransition typingPause = new PauseTransition(SEARCH_AFTER);
     private final VBox root;
-    private String openEntryId;
 
     GlossaryPage(Glossary glossary, TaskEvents events, ToolTally tally, PanelActions actions, Lookups lookups) {
         this.glossary = glossary;
@@ -101,8 +100,9 @@ final class GlossaryPage implements ToolPage {
 
         root = new VBox(10, query, status, results, entryScroll);
         root.getStyleClass().add("tool-page");
+        insertRow = new InsertRow(Tool.GLOSSARY, actions, "glossary", "term");
         if (actions.insertAllowed()) {
-            root.getChildren().add(insertRow());
+            root.getChildren().add(insertRow.node());
         }
     }
 
@@ -112,32 +112,6 @@ final class GlossaryPage implements ToolPage {
             b.append("  \u2192 ").append(e.term()).append(" [").append(e.language()).append(']');
         }
         return b.toString();
-    }
-
-    private Node insertRow() {
-        insertable.setId("glossaryInsertable");
-        insertable.setAccessibleText("Terms from this entry you may insert");
-        insertable.setPrefHeight(96);
-        Button insert = new Button("Insert into answer");
-        insert.setId("glossaryInsert");
-        insert.disableProperty().bind(insertable.getSelectionModel().selectedItemProperty().isNull());
-        insert.setOnAction(e -> insertSelected());
-        insertable.setOnKeyPressed(e -> {
-            if (e.getCode() == KeyCode.ENTER) {
-                insertSelected();
-                e.consume();
-            }
-        });
-        VBox box = new VBox(6, ToolPage.wrapped("Insert a term from this entry at the cursor:", "panel-note"), insertable, insert);
-        box.getStyleClass().add("insert-box");
-        return box;
-    }
-
-    private void insertSelected() {
-        String term = insertable.getSelectionModel().getSelectedItem();
-        if (term != null && openEntryId != null) {
-            actions.insert(Tool.GLOSSARY, openEntryId, term);
-        }
     }
 
     @Override
@@ -215,7 +189,6 @@ final class GlossaryPage implements ToolPage {
             return;
         }
         GlossaryEntry e = timed.value().get();
-        openEntryId = e.id();
         entryView.getChildren().clear();
         if (e.subjectField() != null) {
             entryView.getChildren().add(ToolPage.wrapped("Subject: " + e.subjectField(), "entry-related"));
@@ -249,7 +222,7 @@ final class GlossaryPage implements ToolPage {
         for (String note : e.notes()) {
             entryView.getChildren().add(ToolPage.wrapped("Note: " + note, "entry-related"));
         }
-        insertable.getItems().setAll(terms);
+        insertRow.show(e.id(), terms);
     }
 
     private void failed(RuntimeException e) {
