@@ -39,16 +39,7 @@ import picocli.CommandLine.Spec;
         subcommands = {RateCommand.Raters.class, RateCommand.Assign.class, RateCommand.Progress.class,
             RateCommand.Sheet.class, RateCommand.Rule.class, RateCommand.Flags.class, RateCommand.Resolve.class,
             RateCommand.Export.class, DeskCommand.class, CommandLine.HelpCommand.class})
-final class RateCommand implements Callable<Integer> {
-
-    @Spec
-    CommandSpec spec;
-
-    @Override
-    public Integer call() {
-        spec.commandLine().usage(spec.commandLine().getOut());
-        return InkgateAdmin.OK;
-    }
+final class RateCommand extends GroupCommand {
 
     /** --store and --exam, shared by every rating step. */
     static final class StoreOptions {
@@ -104,15 +95,7 @@ final class RateCommand implements Callable<Integer> {
 
     @Command(name = "raters", mixinStandardHelpOptions = true, description = "Add or list raters.",
             subcommands = {Raters.Add.class, Raters.ListRaters.class})
-    static final class Raters implements Callable<Integer> {
-        @Spec
-        CommandSpec spec;
-
-        @Override
-        public Integer call() {
-            spec.commandLine().usage(spec.commandLine().getOut());
-            return InkgateAdmin.OK;
-        }
+    static final class Raters extends GroupCommand {
 
         @Command(name = "add", mixinStandardHelpOptions = true,
                 description = "Add a rater (or change the label and capacity of one already added).")
@@ -203,15 +186,7 @@ final class RateCommand implements Callable<Integer> {
     @Command(name = "sheet", mixinStandardHelpOptions = true,
             description = "Rating sheets (CSV) for raters who work without the rating desk.",
             subcommands = {Sheet.ExportSheet.class, Sheet.ImportSheet.class})
-    static final class Sheet implements Callable<Integer> {
-        @Spec
-        CommandSpec spec;
-
-        @Override
-        public Integer call() {
-            spec.commandLine().usage(spec.commandLine().getOut());
-            return InkgateAdmin.OK;
-        }
+    static final class Sheet extends GroupCommand {
 
         @Command(name = "export", mixinStandardHelpOptions = true,
                 description = "Write a rater's queue as a sheet: blind_id, task, one column per criterion, comment.")

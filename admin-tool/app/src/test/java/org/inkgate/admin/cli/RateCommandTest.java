@@ -42,6 +42,15 @@ class RateCommandTest {
     }
 
     @Test
+    void groupRunBare_printsItsUsageAndSucceeds() {
+        for (List<String> group : List.of(List.of("rate"), List.of("rate", "raters"), List.of("rate", "sheet"))) {
+            Result r = run(group.toArray(String[]::new));
+            assertEquals(0, r.code(), group.toString());
+            assertTrue(r.out().startsWith("Usage: inkgate-admin " + String.join(" ", group) + " "), r.out());
+        }
+    }
+
+    @Test
     void rate_noSuchStore_exitsOneSayingWhichFileToGive() {
         Result r = run("rate", "progress", "--store", dir.resolve("none.db").toString());
         assertEquals(InkgateAdmin.PROBLEMS, r.code(), r.err());
