@@ -10,7 +10,6 @@ import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.sql.Statement;
 import java.time.Clock;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -24,6 +23,9 @@ import java.util.Set;
 import java.util.TreeMap;
 import java.util.function.Consumer;
 import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.admin.core.store.Sql;
+import org.inkgate.admin.core.store.Sql.RowMapper;
+import org.inkgate.admin.core.store.Sql.RowSink;
 import org.inkgate.admin.core.store.Migrations;
 import org.sqlite.SQLiteConfig;
 
@@ -893,14 +895,6 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         T run() throws SQLException;
     }
 
-    private interface RowMapper<T> {
-        T map(ResultSet rs) throws SQLException;
-    }
-
-    private interface RowSink {
-        void accept(ResultSet rs) throws SQLException;
-    }
-
     /** Workloads per rater, counted once per transaction that assigns adjudicators (null outside). */
     private Map<String, Integer> loadInTx;
     private Map<String, Optional<String>> tailInTx;
@@ -941,28 +935,12 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         }
     }
 
-    private static void bind(PreparedStatement ps, Object... args) throws SQLException {
-        for (int i = 0; i < args.length; i++) {
-            ps.setObject(i + 1, args[i]);
-        }
-    }
-
     private int update(String sql, Object... args) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(sql)) {
-            bind(ps, args);
-            return ps.executeUpdate();
-        }
+        return Sql.update(c, sql, args);
     }
 
     private long insert(String sql, Object... args) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(sql, Statement.RETURN_GENERATED_KEYS)) {
-            bind(ps, args);
-            ps.executeUpdate();
-            try (ResultSet keys = ps.getGeneratedKeys()) {
-                keys.next();
-                return keys.getLong(1);
-            }
-        }
+        return Sql.insert(c, sql, args);
     }
 
     private int count(String sql, Object... args) throws SQLException {
@@ -970,30 +948,14 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     }
 
     private <T> List<T> query(String sql, RowMapper<T> mapper, Object... args) throws SQLException {
-        return query(c, sql, mapper, args);
+        return Sql.list(c, sql, mapper, args);
     }
 
     private static <T> List<T> query(Connection c, String sql, RowMapper<T> mapper, Object... args) throws SQLException {
-        List<T> out = new ArrayList<>();
-        try (PreparedStatement ps = c.prepareStatement(sql)) {
-            bind(ps, args);
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    out.add(mapper.map(rs));
-                }
-            }
-        }
-        return out;
+        return Sql.list(c, sql, mapper, args);
     }
 
     private void each(String sql, RowSink sink, Object... args) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(sql)) {
-            bind(ps, args);
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    sink.accept(rs);
-                }
-            }
-        }
+        Sql.each(c, sql, sink, args);
     }
 }

@@ -10,7 +10,6 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.time.Instant;
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -250,7 +249,7 @@ public final class SqliteResultsStore implements ResultsStore {
                     + " exam_id, bundle_manifest_sha256, candidate_number, form_id, seat, client_version,"
                     + " installation_fingerprint, started_at, submitted_at, source_file, imported_at)"
                     + " VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?)", Statement.RETURN_GENERATED_KEYS)) {
-                bind(ps, opened.packageSha256(), d.packageId(), contentSha256, d.examId(), d.bundleManifestSha256(),
+                Sql.bind(ps, opened.packageSha256(), d.packageId(), contentSha256, d.examId(), d.bundleManifestSha256(),
                         d.candidateNumber(), d.formId(), d.seat(), d.clientVersion(), opened.installationFingerprint(),
                         str(d.startedAt()), str(d.submittedAt()), sourceFile, Instant.now().toString());
                 ps.executeUpdate();
@@ -459,14 +458,6 @@ public final class SqliteResultsStore implements ResultsStore {
 
     // --- small JDBC helpers ---
 
-    private interface RowMapper<T> {
-        T map(ResultSet rs) throws SQLException;
-    }
-
-    private interface RowSink {
-        void accept(ResultSet rs) throws SQLException;
-    }
-
     private interface SqlRunnable {
         Object run() throws SQLException;
     }
@@ -479,22 +470,13 @@ public final class SqliteResultsStore implements ResultsStore {
         }
     }
 
-    private static void bind(PreparedStatement ps, Object... args) throws SQLException {
-        for (int i = 0; i < args.length; i++) {
-            ps.setObject(i + 1, args[i]);
-        }
-    }
-
     private int update(String sql, Object... args) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(sql)) {
-            bind(ps, args);
-            return ps.executeUpdate();
-        }
+        return Sql.update(c, sql, args);
     }
 
     private Optional<Object[]> first(String sql, int columns, Object... args) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement(sql)) {
-            bind(ps, args);
+            Sql.bind(ps, args);
             try (ResultSet rs = ps.executeQuery()) {
                 if (!rs.next()) {
                     return Optional.empty();
@@ -508,20 +490,11 @@ public final class SqliteResultsStore implements ResultsStore {
         }
     }
 
-    private <T> List<T> list(String sql, RowMapper<T> mapper, Object... args) throws SQLException {
-        List<T> out = new ArrayList<>();
-        each(sql, rs -> out.add(mapper.map(rs)), args);
-        return out;
+    private <T> List<T> list(String sql, Sql.RowMapper<T> mapper, Object... args) throws SQLException {
+        return Sql.list(c, sql, mapper, args);
     }
 
-    private void each(String sql, RowSink sink, Object... args) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(sql)) {
-            bind(ps, args);
-            try (ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    sink.accept(rs);
-                }
-            }
-        }
+    private void each(String sql, Sql.RowSink sink, Object... args) throws SQLException {
+        Sql.each(c, sql, sink, args);
     }
 }
