@@ -68,6 +68,8 @@ class RehearsalTest {
     private static final Map<String, Integer> SEVERITY = new LinkedHashMap<>(Map.of("S1", -1, "S2", 0, "S3", 1));
 
     private final List<String> failures = new ArrayList<>();
+    private final List<String> timings = new ArrayList<>();
+    private long phaseStart = System.nanoTime();
 
     @Start
     void start(Stage primary) {
@@ -108,6 +110,7 @@ class RehearsalTest {
         CandidateScript killed = room.stream().filter(c -> !toolsOf.get(c.number()).get(0)).findFirst()
                 .orElseThrow(() -> new AssertionError("no form starts without tools: " + toolsOf));
 
+        phase("preparation (keys, exam check, roster, forms, bundle)");
         // ---- 2. the sitting
         Path responses = Files.createDirectories(dir.resolve("responses"));
         Map<String, ScriptedSitting.Done> done = new LinkedHashMap<>();
@@ -123,9 +126,10 @@ class RehearsalTest {
             try (Seat seat = new Seat(new ScriptedClock())) {
                 seat.open(bundle, data, owner);
                 ScriptedSitting sitting = new ScriptedSitting(seat, c);
-                done.put(c.number(), c == killed ? sitting.sitFromRecovery(PIN, typedBeforeKill, toolsOf.get(c.number()))
+                done.put(c.number(), c == killed ? sitting.sitFromRecovery(PIN, responses, typedBeforeKill, toolsOf.get(c.number()))
                         : sitting.sitFromStart(PIN, responses, toolsOf.get(c.number())));
             }
+            phase("sitting of " + c.number() + (c == killed ? " (killed and recovered)" : ""));
         }
         check("text the recovered client showed after the kill (" + killed.number() + ")", typedBeforeKill,
                 done.get(killed.number()).recoveredText);
@@ -144,6 +148,7 @@ class RehearsalTest {
                 "REHEARSAL_PASSPHRASE"));
         check("collect's count", true, collect.out().contains("Imported " + CANDIDATES + ","));
 
+        phase("collect");
         // ---- 4. what the store holds
         try (Connection db = DriverManager.getConnection("jdbc:sqlite:" + store)) {
             checkStore(db, room, tasksOf, toolsOf, done, killed, typedBeforeKill);
@@ -154,6 +159,7 @@ class RehearsalTest {
         ok(admin.run("export", "--store", store.toString(), "--out", export.toString()));
         checkExport(export.resolve("rehearsal-island-ferry/csv"), room, tasksOf, toolsOf, killed, typedBeforeKill);
 
+        phase("store and export checks");
         // ---- 6. scripted raters through the rating commands
         for (String rater : SEVERITY.keySet()) {
             ok(admin.run("rate", "raters", "add", rater, "--label", "Invented rater " + rater, "--store", store.toString()));
@@ -172,11 +178,14 @@ class RehearsalTest {
         ok(admin.run("rate", "export", "--out", ratingExport.toString(), "--store", store.toString()));
         Map<String, String> pairOf = checkRatings(ratingExport.resolve("ratings.csv"), levelOf, room.size());
 
+        phase("rating");
         // ---- 7. the report from the store
         Path report = dir.resolve("report");
         ok(admin.run("analyse", "--store", store.toString(), "--out", report.toString()));
         checkReport(report, room, done, pairOf);
 
+        phase("analyse and report checks");
+        Files.writeString(dir.resolve("timings.txt"), String.join("\n", timings) + "\n");
         Files.writeString(dir.resolve("failures.txt"), String.join("\n", failures) + "\n");
         assertEquals(List.of(), failures, failures.size() + " figure(s) differ from the script (also in "
                 + dir.resolve("failures.txt") + ")");
@@ -443,6 +452,13 @@ class RehearsalTest {
     }
 
     // ---- helpers
+
+    /** Wall time of each phase, for docs/benchmarks.md (never asserted: the machine is shared). */
+    private void phase(String name) {
+        long now = System.nanoTime();
+        timings.add(String.format(java.util.Locale.ROOT, "%6.1f s  %s", (now - phaseStart) / 1e9, name));
+        phaseStart = now;
+    }
 
     private Admin.Run ok(Admin.Run run) {
         assertEquals(0, run.code(), run.out());

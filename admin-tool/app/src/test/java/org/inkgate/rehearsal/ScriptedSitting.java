@@ -59,8 +59,10 @@ final class ScriptedSitting {
      * A sitting whose client was killed in its first task (without tools) after typing
      * {@code typedBefore}: the invigilator's recovery PIN, downtime not credited, then the rest.
      */
-    Done sitFromRecovery(String pin, String typedBefore, List<Boolean> withTools) {
+    Done sitFromRecovery(String pin, Path output, String typedBefore, List<Boolean> withTools) {
         seat.await("recoveryScreen", javafx.scene.Node.class);
+        // the screen proposes the data folder's outbox, not the folder chosen at set-up: the invigilator types the room's
+        seat.fill("recoveryOutput", output.toString());
         seat.fill("recoveryPin", pin);
         seat.press("resumeButton");
         seat.press("continueButton");

@@ -283,7 +283,9 @@ final class Seat implements AutoCloseable {
 
     private static void collectIds(Node node, List<String> ids) {
         if (node.getId() != null && shown(node)) {
-            ids.add(node.getId());
+            String text = node instanceof javafx.scene.control.Labeled l ? l.getText()
+                    : node instanceof TextInputControl t ? t.getText() : null;
+            ids.add(text == null || text.isEmpty() ? node.getId() : node.getId() + "=\"" + text + "\"");
         }
         if (node instanceof Parent p) {
             for (Node c : p.getChildrenUnmodifiable()) {
