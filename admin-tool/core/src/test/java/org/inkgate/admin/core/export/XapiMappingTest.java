@@ -63,6 +63,32 @@ class XapiMappingTest {
     }
 
     @Test
+    void dataDictionary_verbTable_saysWhatTheMappingDoes() throws Exception {
+        List<String> lines = Files.readAllLines(Path.of(System.getProperty("user.dir")).resolve("../../docs/data-dictionary.md"));
+        Map<String, String> documented = new java.util.LinkedHashMap<>();
+        boolean inTable = false;
+        for (String line : lines) {
+            if (line.equals("| event type | verb |")) {
+                inTable = true;
+            } else if (inTable && line.startsWith("| `")) {
+                String[] cells = line.split("\\|");
+                documented.put(cells[1].trim().replace("`", ""), cells[2].trim().replace("`", ""));
+            } else if (inTable && !line.startsWith("| ---")) {
+                break;
+            }
+        }
+        Map<String, String> defined = new java.util.LinkedHashMap<>();
+        for (EventType t : EventType.values()) {
+            defined.put(t.wireName(), switch (XapiExport.mapping(t)) {
+                case XapiExport.Mapping.NotExported x -> "not exported";
+                case XapiExport.Mapping.Statement(String verb) -> (verb.startsWith("http://adlnet.gov/") ? "ADL "
+                        : "Activity Streams ") + verb.substring(verb.lastIndexOf('/') + 1);
+            });
+        }
+        assertEquals(defined, documented, "docs/data-dictionary.md, xAPI verb table");
+    }
+
+    @Test
     void write_storeWithEveryEventType_exportsExactlyTheMappedTypes(@TempDir Path dir) throws Exception {
         Sitting sitting = Sitting.make(dir, 3);
         SimulatedSitting client = new SimulatedSitting(sitting.manifest(), sitting.manifestSha256(),
