@@ -40,12 +40,17 @@ final class ExportCommand implements Callable<Integer> {
                 Path dir = out.resolve(id);
                 long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
                 int qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"));
-                long statements = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"));
+                XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"));
                 w.println(id + " -> " + dir);
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
                         + rows[2] + " rows");
-                w.println("  qti-results/ " + qti + " assessmentResult files; xapi-statements.jsonl " + statements
-                        + " statements");
+                w.println("  qti-results/ " + qti + " assessmentResult files; xapi-statements.jsonl " + xapi.statements()
+                        + " statements (" + xapi.notExported() + " events of the client, timer or invigilator not exported;"
+                        + " docs/data-dictionary.md)");
+                if (xapi.unknownType() > 0) {
+                    w.println("  NOTE: " + xapi.unknownType() + " stored events have a type this version does not know and"
+                            + " are not in the statements; they stay in csv/events.csv.");
+                }
                 List<Rows.Conflict> conflicts = store.conflicts(id);
                 if (!conflicts.isEmpty()) {
                     w.println("  NOTE: " + conflicts.size() + " candidate-task pairs have more than one response; every copy"
