@@ -27,6 +27,7 @@ import org.inkgate.client.sitting.ui.open.SittingLoad;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.RosterEntry;
+import org.inkgate.format.response.EventType;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.framework.junit5.ApplicationExtension;
@@ -182,7 +183,7 @@ class RehearsalTest {
         // ---- 7. the report from the store
         Path report = dir.resolve("report");
         ok(admin.run("analyse", "--store", store.toString(), "--out", report.toString()));
-        checkReport(report, room, done, pairOf);
+        checkReport(report, room, done, pairOf, killed);
 
         phase("analyse and report checks");
         Files.writeString(dir.resolve("timings.txt"), String.join("\n", timings) + "\n");
@@ -233,14 +234,14 @@ class RehearsalTest {
                 List<List<String>> events = query(db, "SELECT e.type, e.mono, e.data_json FROM process_events e JOIN sittings s"
                         + " ON s.sitting_id = e.sitting_id WHERE s.candidate_number = ? AND e.task_id = ? ORDER BY e.seq",
                         c.number(), tasks.get(k));
-                long panelInserts = events.stream().filter(ev -> ev.get(0).equals("text.insert")
+                long panelInserts = events.stream().filter(ev -> ev.get(0).equals(EventType.TEXT_INSERT.wireName())
                         && ev.get(2).contains("\"source\":\"panel\"")).count();
                 check(where + " text.insert events from the panel", (long) (expected.get("glossary").get(6)
                         + expected.get("dictionary").get(6)), panelInserts);
                 check(where + " suggestion.accept events", (long) expected.get("spelling").get(4),
-                        events.stream().filter(ev -> ev.get(0).equals("suggestion.accept")).count());
+                        events.stream().filter(ev -> ev.get(0).equals(EventType.SUGGESTION_ACCEPT.wireName())).count());
                 check(where + " tool.query events", (long) c.lookups(),
-                        events.stream().filter(ev -> ev.get(0).equals("tool.query")).count());
+                        events.stream().filter(ev -> ev.get(0).equals(EventType.TOOL_QUERY.wireName())).count());
                 check(where + " milliseconds each tool's page was in view (panel.open to panel.close)",
                         done.get(c.number()).pageInView.toString(), pagesInView(events).toString());
             }
@@ -254,14 +255,14 @@ class RehearsalTest {
         }
         check("sittings in the store", String.valueOf(room.size()), query(db, "SELECT count(*) FROM sittings").get(0).get(0));
         List<List<String>> resumed = query(db, "SELECT s.candidate_number FROM process_events e JOIN sittings s ON"
-                + " s.sitting_id = e.sitting_id WHERE e.type = 'sitting.resume'");
+                + " s.sitting_id = e.sitting_id WHERE e.type = ?", EventType.SITTING_RESUME.wireName());
         check("candidates whose log shows a resumed sitting", List.of(List.of(killed.number())).toString(), resumed.toString());
         // the killed client's keystrokes are in the log once each: the typed text is rebuilt from them
         String first = tasksOf.get(killed.number()).get(0);
         StringBuilder replay = new StringBuilder();
         for (List<String> row : query(db, "SELECT e.data_json FROM process_events e JOIN sittings s ON s.sitting_id = e.sitting_id"
-                + " WHERE s.candidate_number = ? AND e.task_id = ? AND e.type = 'text.insert' ORDER BY e.seq",
-                killed.number(), first)) {
+                + " WHERE s.candidate_number = ? AND e.task_id = ? AND e.type = ? ORDER BY e.seq",
+                killed.number(), first, EventType.TEXT_INSERT.wireName())) {
             replay.append(new com.fasterxml.jackson.databind.ObjectMapper().readTree(row.get(0)).path("text").asText());
         }
         check(killed.number() + "'s first task rebuilt from its logged insertions (before and after the kill)",
@@ -277,10 +278,10 @@ class RehearsalTest {
             String tool = e.get(2) == null ? "" : new com.fasterxml.jackson.databind.ObjectMapper().readTree(e.get(2))
                     .path("tool").asText();
             long ms = Long.parseLong(e.get(1)) / 1_000_000L;
-            if (e.get(0).equals("panel.open")) {
+            if (e.get(0).equals(EventType.PANEL_OPEN.wireName())) {
                 open = tool;
                 since = ms;
-            } else if (e.get(0).equals("panel.close") && tool.equals(open)) {
+            } else if (e.get(0).equals(EventType.PANEL_CLOSE.wireName()) && tool.equals(open)) {
                 out.merge(tool, ms - since, Long::sum);
                 open = null;
             }
@@ -381,7 +382,7 @@ class RehearsalTest {
     // ---- the report
 
     private void checkReport(Path report, List<CandidateScript> room, Map<String, ScriptedSitting.Done> done,
-            Map<String, String> pairOf) throws Exception {
+            Map<String, String> pairOf, CandidateScript killed) throws Exception {
         Path tables = report.resolve("tables");
         com.fasterxml.jackson.databind.JsonNode summary = new com.fasterxml.jackson.databind.ObjectMapper()
                 .readTree(report.resolve("summary.json").toFile());
@@ -426,6 +427,20 @@ class RehearsalTest {
             checkNumber(where + "time in resource panel (s) mean", panel, row.get("time in resource panel (s) mean"));
             String key = "process.with_tools." + level.toLowerCase(java.util.Locale.ROOT) + ".panel_time_s.mean";
             checkNumber("summary.json " + key, panel, text(summary, key));
+            // task.start to task.end: the task's whole time on the scripted clock
+            checkNumber(where + "time on task (s) mean", panel, row.get("time on task (s) mean"));
+            // without tools: the plain text typed at the candidate's speed, start to finish (the killed
+            // candidate's task spans two processes' clocks, so its level is left out)
+            if (at.stream().noneMatch(c -> c == killed)) {
+                Map<String, String> plain = process.stream().filter(x -> x.get("condition").equals("without-tools")
+                        && x.get("level").equals(level)).findFirst().orElse(Map.of());
+                double typing = at.stream().mapToLong(c -> c.msPerChar() * CandidateScript.PLAIN_TEXT.length()).average()
+                        .orElseThrow() / 1000.0;
+                checkNumber("process_measures without-tools/" + level + " time on task (s) mean", typing,
+                        plain.get("time on task (s) mean"));
+                checkNumber("process_measures without-tools/" + level + " time in resource panel (s) mean", 0,
+                        plain.get("time in resource panel (s) mean"));
+            }
         }
         // rater agreement inputs: each rater's ratings and mean, and the pairs' agreement per criterion
         List<Map<String, String>> individual = table(tables.resolve("raters_individual.csv"));
