@@ -331,7 +331,23 @@ public final class Migrations {
                       decided_at TEXT NOT NULL,
                       PRIMARY KEY (sitting_id, task_id, criterion_id),
                       FOREIGN KEY (sitting_id, task_id) REFERENCES responses(sitting_id, task_id)
-                    )""")));
+                    )""")),
+            new Migration(4, "questionnaire definitions (items with kind and scale) and the questionnaires each form asks",
+                    List.of(
+                    """
+                    CREATE TABLE questionnaire_items (
+                      exam_id TEXT NOT NULL REFERENCES exams(exam_id),
+                      questionnaire_id TEXT NOT NULL,
+                      position INTEGER NOT NULL,
+                      item_id TEXT NOT NULL,
+                      kind TEXT NOT NULL,
+                      text TEXT NOT NULL,
+                      labels_json TEXT NOT NULL,
+                      PRIMARY KEY (exam_id, questionnaire_id, item_id),
+                      UNIQUE (exam_id, questionnaire_id, position)
+                    )""",
+                    "ALTER TABLE forms ADD COLUMN pre_questionnaire TEXT",
+                    "ALTER TABLE forms ADD COLUMN post_questionnaire TEXT")));
 
     private Migrations() {
     }
