@@ -87,7 +87,7 @@ public final class QuestionnaireCsv {
         private static final long serialVersionUID = 1L;
         private final transient List<Problem> problems;
 
-        Refused(List<Problem> problems) {
+        public Refused(List<Problem> problems) {
             super(problems.size() + " problem(s) in the questionnaire table; nothing was read");
             this.problems = List.copyOf(problems);
         }
@@ -95,6 +95,11 @@ public final class QuestionnaireCsv {
         public List<Problem> problems() {
             return problems;
         }
+    }
+
+    /** The contract's kind of a wire name, or empty for any other text (an item without a stored definition). */
+    public static java.util.Optional<QuestionItem.Kind> kindOf(String wireName) {
+        return java.util.Arrays.stream(QuestionItem.Kind.values()).filter(k -> wireName(k).equals(wireName)).findFirst();
     }
 
     /** The contract's name of a kind, e.g. {@code free-text}. */
