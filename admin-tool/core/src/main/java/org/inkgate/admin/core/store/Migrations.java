@@ -346,8 +346,15 @@ public final class Migrations {
                       PRIMARY KEY (exam_id, questionnaire_id, item_id),
                       UNIQUE (exam_id, questionnaire_id, position)
                     )""",
-                    "ALTER TABLE forms ADD COLUMN pre_questionnaire TEXT",
-                    "ALTER TABLE forms ADD COLUMN post_questionnaire TEXT")));
+                    """
+                    CREATE TABLE form_questionnaires (
+                      exam_id TEXT NOT NULL,
+                      form_id TEXT NOT NULL,
+                      timing TEXT NOT NULL CHECK (timing IN ('before', 'after')),
+                      questionnaire_id TEXT NOT NULL,
+                      PRIMARY KEY (exam_id, form_id, timing),
+                      FOREIGN KEY (exam_id, form_id) REFERENCES forms(exam_id, form_id)
+                    )""")));
 
     private Migrations() {
     }

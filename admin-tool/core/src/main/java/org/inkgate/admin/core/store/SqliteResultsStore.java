@@ -132,8 +132,12 @@ public final class SqliteResultsStore implements ResultsStore {
             registerQuestionnaires(m);
             for (FormSpec f : m.forms()) {
                 update("INSERT OR IGNORE INTO forms(exam_id, form_id) VALUES (?,?)", m.examId(), f.id());
-                update("UPDATE forms SET pre_questionnaire=?, post_questionnaire=? WHERE exam_id=? AND form_id=?",
-                        f.preQuestionnaire(), f.postQuestionnaire(), m.examId(), f.id());
+                for (String[] q : new String[][] {{"before", f.preQuestionnaire()}, {"after", f.postQuestionnaire()}}) {
+                    if (q[1] != null) {
+                        update("INSERT OR REPLACE INTO form_questionnaires(exam_id, form_id, timing, questionnaire_id)"
+                                + " VALUES (?,?,?,?)", m.examId(), f.id(), q[0], q[1]);
+                    }
+                }
                 for (int i = 0; i < f.slots().size(); i++) {
                     FormSlot s = f.slots().get(i);
                     long policy = policyId(s.policy());
@@ -477,21 +481,19 @@ public final class SqliteResultsStore implements ResultsStore {
                 + "   WHERE r.sitting_id = s.sitting_id ORDER BY r.position)),";
         String candidate = " LEFT JOIN candidates c ON c.exam_id = s.exam_id AND c.candidate_number = s.candidate_number";
         read("reading questionnaire answers", () -> {
-            each("SELECT " + sitting + " q.questionnaire_id,"
-                    + " CASE WHEN q.questionnaire_id = f.pre_questionnaire THEN 'before' ELSE 'after' END,"
+            each("SELECT " + sitting + " q.questionnaire_id, fq.timing,"
                     + " q.position, q.item_id, q.kind, q.text, q.labels_json, a.value"
-                    + " FROM sittings s JOIN forms f ON f.exam_id = s.exam_id AND f.form_id = s.form_id"
-                    + " JOIN questionnaire_items q ON q.exam_id = s.exam_id"
-                    + "   AND q.questionnaire_id IN (f.pre_questionnaire, f.post_questionnaire)"
+                    + " FROM sittings s JOIN form_questionnaires fq ON fq.exam_id = s.exam_id AND fq.form_id = s.form_id"
+                    + " JOIN questionnaire_items q ON q.exam_id = s.exam_id AND q.questionnaire_id = fq.questionnaire_id"
                     + " LEFT JOIN questionnaire_answers a ON a.sitting_id = s.sitting_id"
                     + "   AND a.questionnaire_id = q.questionnaire_id AND a.item_id = q.item_id" + candidate
                     + " WHERE s.exam_id=?"
                     + " UNION ALL SELECT " + sitting + " a.questionnaire_id, NULL, NULL, a.item_id, NULL, NULL, NULL, a.value"
-                    + " FROM questionnaire_answers a JOIN sittings s ON s.sitting_id = a.sitting_id"
-                    + " JOIN forms f ON f.exam_id = s.exam_id AND f.form_id = s.form_id" + candidate
-                    + " WHERE s.exam_id=? AND NOT EXISTS (SELECT 1 FROM questionnaire_items q WHERE q.exam_id = s.exam_id"
-                    + "   AND q.questionnaire_id = a.questionnaire_id AND q.item_id = a.item_id"
-                    + "   AND q.questionnaire_id IN (f.pre_questionnaire, f.post_questionnaire))"
+                    + " FROM questionnaire_answers a JOIN sittings s ON s.sitting_id = a.sitting_id" + candidate
+                    + " WHERE s.exam_id=? AND NOT EXISTS (SELECT 1 FROM form_questionnaires fq JOIN questionnaire_items q"
+                    + "   ON q.exam_id = fq.exam_id AND q.questionnaire_id = fq.questionnaire_id"
+                    + "   WHERE fq.exam_id = s.exam_id AND fq.form_id = s.form_id"
+                    + "   AND q.questionnaire_id = a.questionnaire_id AND q.item_id = a.item_id)"
                     + " ORDER BY 2, 6, 9 DESC, 10, 11", // candidate, sitting, before then after, position, item
                     rs -> sink.accept(new Rows.QuestionnaireAnswer(rs.getString(1), rs.getString(2), rs.getString(3),
                             rs.getString(4), rs.getString(5), rs.getString(7), rs.getString(8), rs.getString(9),
