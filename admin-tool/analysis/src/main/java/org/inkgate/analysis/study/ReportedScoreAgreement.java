@@ -31,7 +31,8 @@ final class ReportedScoreAgreement {
 
     /** Adds the two tables and the {@code reported_score.*} keys to the raters section. */
     static void addTo(Section.Builder s, List<Rating> ratings, ScoreRule rule) {
-        List<Pair> pairs = pairs(ratings, rule);
+        int[] leftOut = {0};
+        List<Pair> pairs = pairs(ratings, rule, leftOut);
         String scale = rule == ScoreRule.SUM ? "total over criteria" : "mean over criteria";
         Table.Builder agree = Table.builder("raters_score_agreement",
                 "Agreement on the reported score (" + scale + "), first and second rater")
@@ -53,7 +54,8 @@ final class ReportedScoreAgreement {
         }
         byTask.forEach((t, list) -> scopes.put("task " + t, list));
         byCondition.forEach((c, list) -> scopes.put("condition " + c, list));
-        s.put("reported_score.rule", rule.name().toLowerCase(java.util.Locale.ROOT)).put("reported_score.pairs", pairs.size());
+        s.put("reported_score.rule", rule.name().toLowerCase(java.util.Locale.ROOT)).put("reported_score.pairs", pairs.size())
+                .put("reported_score.left_out", leftOut[0]);
         for (var e : scopes.entrySet()) {
             String scope = e.getKey();
             List<Pair> p = e.getValue();
@@ -98,6 +100,10 @@ final class ReportedScoreAgreement {
                 + " input order are compared. Exact and adjacent agreement compare the two raters' totals over"
                 + " criteria: exact = equal totals; adjacent = totals differ by at most 1 point, i.e. one point on one"
                 + " criterion (on the mean scale, 1 divided by the number of criteria).");
+        if (leftOut[0] > 0) {
+            agree.note(leftOut[0] + " response(s) rated by two or more raters are left out: fewer than two of their raters"
+                    + " scored every criterion, so no two complete reported scores can be compared.");
+        }
         agree.note("The test owner's reported score may instead be an adjudicated or resolved score; these figures"
                 + " describe the raters' independent scores before any adjudication.");
         s.table(agree.build());
@@ -117,7 +123,7 @@ final class ReportedScoreAgreement {
             double secondTotal) {
     }
 
-    private static List<Pair> pairs(List<Rating> ratings, ScoreRule rule) {
+    private static List<Pair> pairs(List<Rating> ratings, ScoreRule rule, int[] leftOut) {
         // response -> rater (input order) -> criterion -> score; response -> criteria rated by anyone
         Map<ResponseKey, Map<String, Map<String, Double>>> byResponse = new LinkedHashMap<>();
         Map<ResponseKey, Rating> first = new LinkedHashMap<>();
@@ -138,6 +144,9 @@ final class ReportedScoreAgreement {
                     double total = scores.values().stream().mapToDouble(Double::doubleValue).sum();
                     complete.add(new double[] {rule == ScoreRule.SUM ? total : total / c, total});
                 }
+            }
+            if (complete.size() < 2 && e.getValue().size() >= 2) {
+                leftOut[0]++;
             }
             if (complete.size() == 2) {
                 Rating r = first.get(e.getKey());
