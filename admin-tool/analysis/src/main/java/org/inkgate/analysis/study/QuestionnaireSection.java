@@ -169,7 +169,8 @@ public final class QuestionnaireSection {
             s.put(gk + "mean", mean).put(gk + "sd", sd).put(gk + "median", median);
             if (group.level.equals(ALL)) {
                 for (int p = 1; p <= item.points(); p++) {
-                    chart.addValue(count[p], group.conditions, p + " " + item.labels().get(p - 1));
+                    chart.addValue(count[p], group.conditions.equals(ALL) ? "all candidates" : group.conditions,
+                            p + " " + item.labels().get(p - 1));
                 }
             }
         }
@@ -177,7 +178,17 @@ public final class QuestionnaireSection {
                 item.id() + " (" + item.questionnaire() + "): answers per point",
                 "Counts of each point, all candidates asked and by the conditions they sat (in the order sat)."
                         + (item.text().isEmpty() ? "" : " Item: " + item.text()),
-                Charts.bars("answer", "candidates", chart), 760, 360));
+                countChart(chart), 760, 380));
+    }
+
+    /** Bars of counts: whole-number ticks, and labels wrapped rather than cut short. */
+    private static org.jfree.chart.JFreeChart countChart(DefaultCategoryDataset data) {
+        org.jfree.chart.JFreeChart chart = Charts.bars("answer", "candidates", data);
+        var plot = chart.getCategoryPlot();
+        plot.getDomainAxis().setMaximumCategoryLabelLines(3);
+        ((org.jfree.chart.axis.NumberAxis) plot.getRangeAxis()).setStandardTickUnits(
+                org.jfree.chart.axis.NumberAxis.createIntegerTickUnits());
+        return chart;
     }
 
     private static void toolUse(Section.Builder s, String k, QuestionnaireItem item, List<QuestionnaireAnswer> answers,
