@@ -61,9 +61,11 @@ public final class QuestionnaireInput {
                     kind(r.kind()), r.labels()));
             String earlier = packageOf.putIfAbsent(r.candidateNumber() + '\u0000' + itemKey, r.packageId());
             if (earlier != null) {
-                problems.add(new QuestionnaireCsv.Problem(file, line, "package_id", "candidate " + r.candidateNumber()
-                        + " has two answers to item " + r.itemId() + " of " + r.questionnaireId() + " (packages " + earlier
-                        + " and " + r.packageId() + "): decide which package counts (column copies of responses.csv),"
+                problems.add(new QuestionnaireCsv.Problem(file, line, "package_id", "candidate "
+                        + QuestionnaireCsv.shown(r.candidateNumber()) + " has two answers to item "
+                        + QuestionnaireCsv.shown(r.itemId()) + " of " + QuestionnaireCsv.shown(r.questionnaireId())
+                        + " (packages " + QuestionnaireCsv.shown(earlier) + " and " + QuestionnaireCsv.shown(r.packageId())
+                        + "): decide which package counts (column copies of responses.csv),"
                         + " then give --questionnaire with that package's rows only"));
                 continue;
             }

@@ -211,11 +211,11 @@ public final class QuestionnaireCsv {
                 labels = c.labels();
                 boolean isPoint = answer.matches("[1-9][0-9]{0,5}") && Integer.parseInt(answer) <= labels.size();
                 if (!answer.isEmpty() && !labels.isEmpty() && !isPoint) {
-                    problems.add(new Problem(file, line, "answer", "'" + answer + "' is not a point of this Likert item;"
+                    problems.add(new Problem(file, line, "answer", "'" + shown(answer) + "' is not a point of this Likert item;"
                             + " give a whole number from 1 to " + labels.size() + ", or leave it empty (not answered)"));
                 }
             } else if (!kind.equals(wireName(QuestionItem.Kind.FREE_TEXT)) && !kind.equals(UNDEFINED_KIND)) {
-                problems.add(new Problem(file, line, "kind", "'" + kind + "' is not a kind; use "
+                problems.add(new Problem(file, line, "kind", "'" + shown(kind) + "' is not a kind; use "
                         + wireName(QuestionItem.Kind.LIKERT) + ", " + wireName(QuestionItem.Kind.FREE_TEXT)
                         + " or leave it empty (no definition)"));
             }
@@ -223,14 +223,14 @@ public final class QuestionnaireCsv {
             String itemKey = questionnaire + "\u0000" + item;
             String earlier = definitions.putIfAbsent(itemKey, definition);
             if (earlier != null && !earlier.equals(definition)) {
-                problems.add(new Problem(file, line, "kind", "item " + item + " of questionnaire " + questionnaire
+                problems.add(new Problem(file, line, "kind", "item " + shown(item) + " of questionnaire " + shown(questionnaire)
                         + " has another kind or scale than in an earlier row; one item has one definition"));
             }
             String packageId = c.get("package_id");
-            String who = packageId.isEmpty() ? "candidate " + candidate : "package " + packageId;
+            String who = packageId.isEmpty() ? "candidate " + shown(candidate) : "package " + shown(packageId);
             if (!seen.add(who + "\u0000" + itemKey)) {
-                problems.add(new Problem(file, line, "item_id", who + " has a second row for item " + item
-                        + " of questionnaire " + questionnaire + "; give one row per sitting and item"));
+                problems.add(new Problem(file, line, "item_id", who + " has a second row for item " + shown(item)
+                        + " of questionnaire " + shown(questionnaire) + "; give one row per sitting and item"));
             }
             String position = c.get("item_position");
             out.add(new Row(c.get("exam_id"), candidate, c.get("level"), c.get("form_id"), packageId, c.get("conditions"),
@@ -241,6 +241,17 @@ public final class QuestionnaireCsv {
             throw new Refused(problems);
         }
         return out;
+    }
+
+    /**
+     * A cell's text as it may appear in a message on the terminal: control and other invisible
+     * characters shown as '?', at most 60 characters, so a hostile file cannot steer the terminal.
+     */
+    public static String shown(String cell) {
+        StringBuilder b = new StringBuilder();
+        cell.codePoints().limit(60).forEach(c -> b.appendCodePoint(Character.isISOControl(c)
+                || Character.getType(c) == Character.FORMAT || Character.getType(c) == Character.UNASSIGNED ? '?' : c));
+        return cell.codePointCount(0, cell.length()) > 60 ? b + "..." : b.toString();
     }
 
     private static char[] readAll(Reader in) throws IOException {
@@ -274,7 +285,7 @@ public final class QuestionnaireCsv {
         List<String> labels() {
             String points = get("scale_points");
             if (!points.matches("[0-9]{1,3}") || Integer.parseInt(points) < 2) {
-                problems.add(new Problem(file, line, "scale_points", "'" + points + "' is not a Likert scale; give the"
+                problems.add(new Problem(file, line, "scale_points", "'" + shown(points) + "' is not a Likert scale; give the"
                         + " number of points (2 or more)"));
                 return List.of();
             }

@@ -149,6 +149,12 @@ class QuestionnaireCsvTest {
     }
 
     @Test
+    void read_controlCharactersInACell_neverReachTheMessage() {
+        List<String> p = problems(HEADER + row("C1", "q1", "lik\u001b[2Jert", "", "", "1"));
+        assertTrue(p.get(0).contains("'lik?[2Jert' is not a kind"), p.toString());
+    }
+
+    @Test
     void read_missingColumn_namesIt() {
         List<String> p = problems("candidate_number,item_id\r\nC1,q1\r\n");
         assertTrue(p.get(0).contains("required column 'level' is missing"), p.toString());
