@@ -296,6 +296,20 @@ class RehearsalTest {
         List<Map<String, String>> responses = table(csv.resolve("responses.csv"));
         List<Map<String, String>> toolUse = table(csv.resolve("tool_use.csv"));
         check("rows of responses.csv", room.size() * 2, responses.size());
+        List<Map<String, String>> answers = table(csv.resolve("questionnaire_answers.csv"));
+        List<String> labels = List.of("Strongly disagree", "Disagree", "Neither", "Agree", "Strongly agree");
+        for (CandidateScript c : room) {
+            Map<String, String> got = new TreeMap<>();
+            for (Map<String, String> a : answers) {
+                if (a.get("candidate_number").equals(c.number())) {
+                    got.put(a.get("item_id"), a.get("answer") + (a.get("answer_label").isEmpty() ? "" : " " + a.get("answer_label")));
+                }
+            }
+            check("questionnaire_answers.csv " + c.number(), new TreeMap<>(Map.of(
+                    "tools-helped", c.toolsHelped() + " " + labels.get(c.toolsHelped() - 1),
+                    "time-enough", c.timeEnough() + " " + labels.get(c.timeEnough() - 1),
+                    "comments", c.comment())).toString(), got.toString());
+        }
         for (CandidateScript c : room) {
             for (int k = 0; k < 2; k++) {
                 String task = tasksOf.get(c.number()).get(k);
@@ -441,6 +455,24 @@ class RehearsalTest {
                 checkNumber("process_measures without-tools/" + level + " time in resource panel (s) mean", 0,
                         plain.get("time in resource panel (s) mean"));
             }
+        }
+        // questionnaire: Likert descriptives by level, every free-text answer listed
+        List<Map<String, String>> likert = table(tables.resolve("questionnaire_likert_descriptives.csv"));
+        for (String level : LEVELS) {
+            List<CandidateScript> at = room.stream().filter(c -> c.level().equals(level)).toList();
+            for (String item : List.of("tools-helped", "time-enough")) {
+                Map<String, String> row = likert.stream().filter(x -> x.get("item").equals(item)
+                        && x.get("conditions").equals("all") && x.get("level").equals(level)).findFirst().orElse(Map.of());
+                double mean = at.stream().mapToInt(c -> item.equals("tools-helped") ? c.toolsHelped() : c.timeEnough())
+                        .average().orElseThrow();
+                checkNumber("questionnaire_likert_descriptives " + item + "/" + level + " n", at.size(), row.get("n"));
+                checkNumber("questionnaire_likert_descriptives " + item + "/" + level + " mean", mean, row.get("mean"));
+            }
+        }
+        List<Map<String, String>> freeText = table(tables.resolve("questionnaire_free_text.csv"));
+        for (CandidateScript c : room) {
+            check("questionnaire_free_text " + c.number(), List.of(c.comment()).toString(), freeText.stream()
+                    .filter(x -> x.get("candidate").equals(c.number())).map(x -> x.get("answer")).toList().toString());
         }
         // rater agreement inputs: each rater's ratings and mean, and the pairs' agreement per criterion
         List<Map<String, String>> individual = table(tables.resolve("raters_individual.csv"));
