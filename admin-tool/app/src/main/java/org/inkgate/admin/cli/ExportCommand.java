@@ -1,12 +1,16 @@
 package org.inkgate.admin.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.inkgate.admin.core.export.OutputFolder;
 import org.inkgate.admin.core.export.QtiResultsExport;
 import org.inkgate.admin.core.export.TidyCsvExport;
 import org.inkgate.admin.core.export.XapiExport;
+import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.SqliteRatingStore;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.core.store.SqliteResultsStore;
@@ -17,7 +21,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code export}: tidy CSV, QTI 3.0 results and xAPI statements from the results store. */
 @Command(name = "export", description = "Export responses, tool use and process events: tidy CSV (see"
-        + " docs/data-dictionary.md), QTI 3.0 results per candidate, xAPI statements as JSON lines.")
+        + " docs/data-dictionary.md), QTI 3.0 results per response package (with the scores once ratings exist), xAPI statements as JSON lines.")
 final class ExportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -31,21 +35,39 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--exam-id", paramLabel = "ID", description = "only this exam (default: every exam in the store)")
     String examId;
 
+    /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */
+    private QtiResultsExport.Scoring scoring(String id) throws IOException {
+        try {
+            if (!SqliteRatingStore.hasRubric(storeFile, id)) {
+                return QtiResultsExport.Scoring.NONE;
+            }
+            try (SqliteRatingStore rating = SqliteRatingStore.open(storeFile, id)) {
+                return new QtiResultsExport.Scoring(rating.rubric(), rating.scoresByResponse());
+            }
+        } catch (RatingException e) {
+            throw new IOException("reading the ratings of " + id + " for the QTI results failed: " + e.getMessage(), e);
+        }
+    }
+
     @Override
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
         try (ResultsStore store = SqliteResultsStore.open(storeFile)) {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
-                Path dir = out.resolve(id);
+                Path dir = OutputFolder.file(out, id);
                 long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
-                int qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"));
+                QtiResultsExport.Written qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"), scoring(id));
                 long statements = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"));
                 w.println(id + " -> " + dir);
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
                         + rows[2] + " rows");
-                w.println("  qti-results/ " + qti + " assessmentResult files; xapi-statements.jsonl " + statements
-                        + " statements");
+                w.println("  qti-results/ " + qti.files() + " assessmentResult files (" + qti.scored()
+                        + " task results with a final score); xapi-statements.jsonl " + statements + " statements");
+                if (qti.replaced() > 0) {
+                    w.println("  NOTE: " + qti.replaced() + " characters that XML 1.0 forbids (control characters) were"
+                            + " written as U+FFFD in qti-results; csv/responses.csv keeps the texts exactly.");
+                }
                 List<Rows.Conflict> conflicts = store.conflicts(id);
                 if (!conflicts.isEmpty()) {
                     w.println("  NOTE: " + conflicts.size() + " candidate-task pairs have more than one response; every copy"
