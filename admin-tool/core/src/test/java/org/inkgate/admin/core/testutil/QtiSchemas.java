@@ -34,6 +34,8 @@ public final class QtiSchemas {
     public static final String ITEMS = "qtiv3p0/imsqti_asiv3p0_sbacv1p0_v1p0.xsd";
     public static final String MANIFEST = "qtiv3p0/imsqtiv3p0_imscpv1p2_v1p0.xsd";
     public static final String PNP = "qtiv3p0/imsqtiv3p0_afa3p0pnp_v1p0.xsd";
+    /** The item schema together with Inkgate's extension schema (main resources), for items with ink: elements. */
+    public static final String ITEMS_WITH_INKGATE = ITEMS + "+inkgate";
 
     private static final Map<String, Schema> LOADED = new ConcurrentHashMap<>();
 
@@ -61,6 +63,12 @@ public final class QtiSchemas {
             f.setResourceResolver(new Offline(f.getResourceResolver()));
             f.setProperty(XMLConstants.ACCESS_EXTERNAL_SCHEMA, "file");
             f.setProperty(XMLConstants.ACCESS_EXTERNAL_DTD, "file");
+            if (file.endsWith("+inkgate")) {
+                var own = QtiSchemas.class.getResource(org.inkgate.admin.core.qti.QtiNames.INKGATE_SCHEMA);
+                return f.newSchema(new javax.xml.transform.Source[] {
+                    new StreamSource(folder().resolve(file.substring(0, file.length() - "+inkgate".length())).toFile()),
+                    new StreamSource(own.toString())});
+            }
             return f.newSchema(folder().resolve(file).toFile());
         } catch (org.xml.sax.SAXException e) {
             throw new IllegalStateException("cannot load " + file + ": " + e.getMessage(), e);
@@ -105,6 +113,16 @@ public final class QtiSchemas {
         return out;
     }
 
+    /**
+     * The copies of w3/mathml3 and w3/ssml11 declare the later namespaces (2010), while the QTI item
+     * profile imports MathML and SSML under http://www.w3.org/1998/Math/MathML and
+     * http://www.w3.org/2001/10/synthesis; the JDK refuses that mismatch (XML Schema 1.0,
+     * src-import.3.1). Those two imports are answered with the MathML 2 schema and SSML 1.0's core
+     * schema of the same folder, in exactly those namespaces. Inkgate's documents use neither.
+     */
+    private static final String MATHML = "http://www.w3.org/1998/Math/MathML";
+    private static final String SSML = "http://www.w3.org/2001/10/synthesis";
+
     private record Offline(LSResourceResolver fallback) implements LSResourceResolver {
         @Override
         public LSInput resolveResource(String type, String namespace, String publicId, String systemId, String baseUri) {
@@ -112,6 +130,22 @@ public final class QtiSchemas {
                 String empty = "<xs:schema xmlns:xs='http://www.w3.org/2001/XMLSchema' targetNamespace='" + namespace
                         + "'/>";
                 return new Input(systemId, baseUri, new ByteArrayInputStream(empty.getBytes(StandardCharsets.UTF_8)));
+            }
+            if (MATHML.equals(namespace) && systemId != null && systemId.endsWith("mathml3.xsd")) {
+                Path file = folder().resolve("w3/mathml2/mathml2.xsd");
+                try {
+                    return new Input(file.toUri().toString(), baseUri, Files.newInputStream(file));
+                } catch (IOException e) {
+                    throw new IllegalStateException(e);
+                }
+            }
+            if (SSML.equals(namespace) && systemId != null && systemId.endsWith("ssmlv1p1-core.xsd")) {
+                // SSML 1.0's namespace-less core, taken into the imported namespace (a chameleon include)
+                String wrapper = "<xs:schema xmlns:xs='http://www.w3.org/2001/XMLSchema' targetNamespace='" + SSML
+                        + "' elementFormDefault='qualified'><xs:include schemaLocation='"
+                        + folder().resolve("w3/ssml10/synthesis-core.xsd").toUri() + "'/></xs:schema>";
+                return new Input(folder().resolve("w3/ssml10/wrapper.xsd").toUri().toString(), baseUri,
+                        new ByteArrayInputStream(wrapper.getBytes(StandardCharsets.UTF_8)));
             }
             return fallback == null ? null : fallback.resolveResource(type, namespace, publicId, systemId, baseUri);
         }
