@@ -105,6 +105,47 @@ class QtiCommandTest {
         assertTrue(help.out().contains("--out"), help.out());
     }
 
+    @Test
+    void demoRoster_pnpOutAndBack_validatesAndRestoresTheAccommodations() throws Exception {
+        Path assignment = dir.resolve("assignment.csv");
+        assertEquals(0, admin("forms", DEMO.toString(), "--roster", "src/demo/roster.csv", "--seed", "20261202", "--out",
+                assignment.toString()).code());
+        Path pnp = dir.resolve("pnp");
+        Run export = admin("qti", "export-pnp", DEMO.toString(), "--roster", "src/demo/roster.csv", "--assignment",
+                assignment.toString(), "--out", pnp.toString());
+        assertEquals(0, export.code(), export.out() + export.err());
+        List<Path> files;
+        try (var s = Files.list(pnp)) {
+            files = s.sorted().toList();
+        }
+        assertEquals(12, files.size(), "one per candidate on the demo roster");
+        for (Path f : files) {
+            assertEquals(List.of(), QtiSchemas.problems(QtiSchemas.PNP, f), f.getFileName().toString());
+        }
+        // back into the roster with the accommodation columns emptied
+        List<String> lines = Files.readAllLines(Path.of("src/demo/roster.csv"));
+        StringBuilder bare = new StringBuilder(lines.get(0)).append('\n');
+        for (String line : lines.subList(1, lines.size())) {
+            String[] f = line.split(",", -1);
+            f[3] = "0";
+            f[4] = "no";
+            f[5] = "no";
+            bare.append(String.join(",", f)).append('\n');
+        }
+        Path bareRoster = dir.resolve("bare.csv");
+        Files.writeString(bareRoster, bare);
+        Path merged = dir.resolve("merged.csv");
+        Run imported = admin("qti", "import-pnp", pnp.toString(), "--roster", bareRoster.toString(), "--out",
+                merged.toString());
+        assertEquals(InkgateAdmin.ATTENTION, imported.code(), "tools in the documents are listed: " + imported.out());
+        assertEquals(org.inkgate.admin.core.roster.RosterReader.read(Path.of("src/demo/roster.csv")),
+                org.inkgate.admin.core.roster.RosterReader.read(merged));
+        Run again = admin("qti", "import-pnp", pnp.toString(), "--roster", bareRoster.toString(), "--out",
+                merged.toString());
+        assertEquals(InkgateAdmin.PROBLEMS, again.code());
+        assertTrue(again.err().contains("nothing is overwritten"), again.err());
+    }
+
     private static ExamSource moved(ExamSource s) {
         return new ExamSource(Path.of("."), s.examId(), s.title(), s.language(), s.instructionsFile(), s.practice(),
                 s.tasks(), s.conditions(), s.design(), s.questionnaires(), s.packs(), s.rubric());
