@@ -310,7 +310,14 @@ public final class QtiExamImport {
                 }
                 case "qti-response-declaration", "responseDeclaration" -> {
                 }
-                case "qti-outcome-declaration", "outcomeDeclaration", "qti-response-processing", "responseProcessing" ->
+                case "qti-outcome-declaration", "outcomeDeclaration" -> {
+                    // the human-scored SCORE Inkgate writes only repeats the rubric's range
+                    if (!attribute(child, "external-scored", "externalScored").equals("human")) {
+                        notes.add(where + ": " + local(child) + " " + child.getAttribute("identifier")
+                                + " left out (raters score Inkgate tasks)");
+                    }
+                }
+                case "qti-response-processing", "responseProcessing" ->
                         notes.add(where + ": " + local(child) + " left out (raters score Inkgate tasks)");
                 default -> notes.add(where + ": " + local(child) + " has no place in Inkgate; left out");
             }

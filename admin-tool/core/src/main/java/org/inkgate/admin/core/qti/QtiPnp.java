@@ -234,10 +234,11 @@ public final class QtiPnp {
                 }
                 case "high-contrast" -> contrast = true;
                 case "activate-as-option-set", "prohibit-set", "activate-at-initialization-set" -> {
-                    List<String> tools = new ArrayList<>();
-                    children(e, null).forEach(t -> tools.add(t.getLocalName()));
-                    notes.add(where + ": " + e.getLocalName() + " " + tools + ": a roster holds no tools (exam.yaml sets"
-                            + " them per task and condition); check they match the candidate's form");
+                    String note = where + ": tool settings (activate-as-option-set, prohibit-set) have no place in a roster:"
+                            + " exam.yaml sets tools per task and condition; check they match the candidate's form";
+                    if (!notes.contains(note)) {
+                        notes.add(note);
+                    }
                 }
                 default -> notes.add(where + ": " + e.getLocalName() + " has no place in an Inkgate roster");
             }

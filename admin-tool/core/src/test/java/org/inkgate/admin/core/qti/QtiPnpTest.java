@@ -71,7 +71,7 @@ class QtiPnpTest {
                 + "B3,B2,Invented Three\n");
         QtiPnp.ImportReport read = QtiPnp.read(out);
         assertEquals(3, read.byCandidate().size());
-        assertTrue(String.join("\n", read.notes()).contains("a roster holds no tools"), read.notes().toString());
+        assertTrue(String.join("\n", read.notes()).contains("tool settings (activate-as-option-set, prohibit-set) have no place in a roster"), read.notes().toString());
         Path merged = dir.resolve("merged.csv");
         assertEquals(List.of(), QtiPnp.mergeIntoRoster(bare, read, merged));
         Map<String, RosterCandidate> back = new java.util.HashMap<>();
