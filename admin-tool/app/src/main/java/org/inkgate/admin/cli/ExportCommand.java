@@ -58,15 +58,21 @@ final class ExportCommand implements Callable<Integer> {
                 Path dir = OutputFolder.file(out, id);
                 long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
                 QtiResultsExport.Written qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"), scoring(id));
-                long statements = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"));
+                XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"));
                 w.println(id + " -> " + dir);
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
                         + rows[2] + " rows");
                 w.println("  qti-results/ " + qti.files() + " assessmentResult files (" + qti.scored()
-                        + " task results with a final score); xapi-statements.jsonl " + statements + " statements");
+                        + " task results with a final score)");
+                w.println("  xapi-statements.jsonl " + xapi.statements() + " statements (" + xapi.notExported()
+                        + " events of the client, timer or invigilator not exported; docs/data-dictionary.md)");
                 if (qti.replaced() > 0) {
                     w.println("  NOTE: " + qti.replaced() + " characters that XML 1.0 forbids (control characters) were"
                             + " written as U+FFFD in qti-results; csv/responses.csv keeps the texts exactly.");
+                }
+                if (xapi.unknownType() > 0) {
+                    w.println("  NOTE: " + xapi.unknownType() + " stored events have a type this version does not know and"
+                            + " are not in the statements; they stay in csv/events.csv.");
                 }
                 List<Rows.Conflict> conflicts = store.conflicts(id);
                 if (!conflicts.isEmpty()) {
