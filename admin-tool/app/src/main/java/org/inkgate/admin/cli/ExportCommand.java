@@ -35,6 +35,14 @@ final class ExportCommand implements Callable<Integer> {
     @Option(names = "--exam-id", paramLabel = "ID", description = "only this exam (default: every exam in the store)")
     String examId;
 
+    @Option(names = "--xapi-base", paramLabel = "IRI", description = "IRI base of the xAPI activities, extensions and"
+            + " account home page, under a domain you control (default: the placeholder " + XapiExport.BASE + ")")
+    String xapiBase = XapiExport.BASE;
+
+    @Option(names = "--xapi-light", description = "leave the per-keystroke statements (text.insert, text.delete) out of"
+            + " the xAPI export: tool use, task and sitting boundaries, focus and navigation remain")
+    boolean xapiLight;
+
     /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */
     private QtiResultsExport.Scoring scoring(String id) throws IOException {
         try {
@@ -52,20 +60,23 @@ final class ExportCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
+        XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
         try (ResultsStore store = SqliteResultsStore.open(storeFile)) {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
                 Path dir = OutputFolder.file(out, id);
                 long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
                 QtiResultsExport.Written qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"), scoring(id));
-                XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"));
+                XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"),
+                        xapiOptions);
                 w.println(id + " -> " + dir);
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
                         + rows[2] + " rows");
                 w.println("  qti-results/ " + qti.files() + " assessmentResult files (" + qti.scored()
                         + " task results with a final score)");
                 w.println("  xapi-statements.jsonl " + xapi.statements() + " statements (" + xapi.notExported()
-                        + " events of the client, timer or invigilator not exported; docs/data-dictionary.md)");
+                        + " events of the client, timer or invigilator not exported" + (xapiLight ? ", " + xapi.keystrokesLeftOut()
+                        + " keystroke events left out (--xapi-light)" : "") + "; docs/data-dictionary.md)");
                 if (qti.replaced() > 0) {
                     w.println("  NOTE: " + qti.replaced() + " characters that XML 1.0 forbids (control characters) were"
                             + " written as U+FFFD in qti-results; csv/responses.csv keeps the texts exactly.");

@@ -213,8 +213,16 @@ class CommandLineTest {
      */
     private void exportWithScores(String store) throws Exception {
         Path out = dir.resolve("export-rated");
-        Run export = admin("export", "--store", store, "--out", out.toString());
+        Run export = admin("export", "--store", store, "--out", out.toString(), "--xapi-base",
+                "https://assessment.invented-owner.test/xapi", "--xapi-light");
         assertEquals(0, export.code(), export.out());
+        assertTrue(export.out().contains("keystroke events left out (--xapi-light)"), export.out());
+        String statements = Files.readString(out.resolve("demo-harbourside-placement/xapi-statements.jsonl"));
+        assertTrue(statements.contains("https://assessment.invented-owner.test/xapi/exams/")
+                && !statements.contains("inkgate.example") && !statements.contains("\"text.insert\""));
+        Run badBase = admin("export", "--store", store, "--out", dir.resolve("never").toString(), "--xapi-base", "ftp://x/");
+        assertEquals(InkgateAdmin.PROBLEMS, badBase.code(), badBase.out());
+        assertTrue(badBase.out().contains("must be an http(s) address"), badBase.out());
         assertTrue(export.out().contains("qti-results/ 11 assessmentResult files (22 task results with a final score)"),
                 export.out());
         List<Path> files;
