@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.export.OutputFolder;
 import org.inkgate.admin.core.export.QtiResultsExport;
+import org.inkgate.admin.core.export.QuestionnaireCsv;
 import org.inkgate.admin.core.export.TidyCsvExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.rating.RatingException;
@@ -20,8 +21,9 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code export}: tidy CSV, QTI 3.0 results and xAPI statements from the results store. */
-@Command(name = "export", description = "Export responses, tool use and process events: tidy CSV (see"
-        + " docs/data-dictionary.md), QTI 3.0 results per response package (with the scores once ratings exist), xAPI statements as JSON lines.")
+@Command(name = "export", description = "Export responses, tool use, process events and questionnaire answers: tidy"
+        + " CSV (see docs/data-dictionary.md), QTI 3.0 results per response package (with the scores once ratings"
+        + " exist), xAPI statements as JSON lines.")
 final class ExportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -69,9 +71,14 @@ final class ExportCommand implements Callable<Integer> {
                 QtiResultsExport.Written qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"), scoring(id));
                 XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"),
                         xapiOptions);
+                long questionnaire;
+                try (var csv = java.nio.file.Files.newBufferedWriter(dir.resolve("csv").resolve(QuestionnaireCsv.FILE_NAME),
+                        java.nio.charset.StandardCharsets.UTF_8)) {
+                    questionnaire = QuestionnaireCsv.write(store, id, csv);
+                }
                 w.println(id + " -> " + dir);
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
-                        + rows[2] + " rows");
+                        + rows[2] + " rows, csv/" + QuestionnaireCsv.FILE_NAME + " " + questionnaire + " rows");
                 w.println("  qti-results/ " + qti.files() + " assessmentResult files (" + qti.scored()
                         + " task results with a final score)");
                 w.println("  xapi-statements.jsonl " + xapi.statements() + " statements (" + xapi.notExported()
