@@ -275,14 +275,9 @@ public final class SittingFlow {
             if (!PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())) {
                 return "That is not this exam's invigilator PIN. Enter it again.";
             }
-            try {
-                Files.createDirectories(input.outputFolder());
-            } catch (IOException e) {
-                return "The output folder " + input.outputFolder() + " cannot be created (" + e.getMessage()
-                        + "). Choose a folder on a writable disk.";
-            }
-            if (!Files.isWritable(input.outputFolder())) {
-                return "The output folder " + input.outputFolder() + " is not writable. Choose another folder.";
+            String outputProblem = outputProblem(input.outputFolder());
+            if (outputProblem != null) {
+                return outputProblem;
             }
             if (bundle.sealed()) {
                 try {
@@ -740,13 +735,13 @@ public final class SittingFlow {
 
     private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
             java.time.Duration down) {
-        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin()), ok -> {
-            if (!ok) {
-                screen.showError("That is not this exam's invigilator PIN. Enter it again.");
-                return;
-            }
-            if (input.outputFolder() == null) {
-                screen.showError("Enter the output folder where response packages go.");
+        // the output folder is made and checked as at set-up: the folder proposed here (data/outbox) may not exist yet
+        work(() -> !PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())
+                ? "That is not this exam's invigilator PIN. Enter it again."
+                : input.outputFolder() == null ? "Enter the output folder where response packages go."
+                : outputProblem(input.outputFolder()), problem -> {
+            if (problem != null) {
+                screen.showError(problem);
                 return;
             }
             try {
@@ -766,6 +761,20 @@ public final class SittingFlow {
                     ? "; that time was given back" : "; that time was not given back"));
             continueRecovered(found);
         });
+    }
+
+    /** Makes the output folder if needed; what is wrong with it, or null when packages can be written there. */
+    private static String outputProblem(Path folder) {
+        try {
+            Files.createDirectories(folder);
+        } catch (IOException e) {
+            return "The output folder " + folder + " cannot be created (" + e.getMessage()
+                    + "). Choose a folder on a writable disk.";
+        }
+        if (!Files.isWritable(folder)) {
+            return "The output folder " + folder + " is not writable. Choose another folder.";
+        }
+        return null;
     }
 
     /** Shows what the candidate continues with after a restart, with the time left after the invigilator's choice. */
