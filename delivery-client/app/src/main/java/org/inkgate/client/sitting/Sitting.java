@@ -409,6 +409,8 @@ public final class Sitting implements AutoCloseable {
         boolean resumed = t.startedAt != null;
         TextRecovery.Recovered recovered = resumed ? log.read(c -> TextRecovery.recover(c, taskId))
                 : new TextRecovery.Recovered("", 0, 0, 0, Optional.empty(), Optional.empty());
+        // read before this process logs anything for the task: what the crashed process logged
+        List<ProcessEvent> loggedBefore = resumed ? log.read(c -> SqliteProcessLog.readTaskEvents(c, taskId, 0)) : List.of();
         Instant now = clock.now();
         if (!resumed) {
             t.startedAt = now;
@@ -428,7 +430,7 @@ public final class Sitting implements AutoCloseable {
         sittingCountdown.ifPresent(Countdown::start);
         sittingClockStarted = true;
         checkpoint();
-        return new TaskStart(t.slot, t.spec, recovered.text(), recovered.caret(), resumed, recovered.mismatch());
+        return new TaskStart(t.slot, t.spec, recovered.text(), recovered.caret(), resumed, recovered.mismatch(), loggedBefore);
     }
 
     /**

@@ -479,7 +479,7 @@ public final class SittingFlow {
                 return;
             }
             TaskContext context = new TaskContext(start.task(), readText(start.task().promptFile()), tools,
-                    sitting.log(), start.text(), start.caret(), display);
+                    sitting.log(), start.text(), start.caret(), display, start.loggedBefore());
             workspace = setup.workspaces().create(context);
             int total = plan.form().slots().size();
             taskScreen = new TaskScreen("Task " + (index + 1) + " of " + total + ": " + start.task().title(),
