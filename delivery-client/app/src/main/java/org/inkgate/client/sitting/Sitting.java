@@ -148,8 +148,17 @@ public final class Sitting implements AutoCloseable {
 
     // -- starting and resuming --
 
-    /** Starts a new sitting: creates its database in the client data folder and logs {@code sitting.start}. */
+    /** Starts a new sitting whose output folder is not known here (tests, tools): see the four-argument form. */
     public static Sitting begin(SittingPlan plan, ClientDataFolder folder, SittingClock clock) throws IOException {
+        return begin(plan, folder, clock, null);
+    }
+
+    /**
+     * Starts a new sitting: creates its database in the client data folder, remembers the output
+     * folder the invigilator chose at set-up (so recovery proposes it again) and logs {@code sitting.start}.
+     */
+    public static Sitting begin(SittingPlan plan, ClientDataFolder folder, SittingClock clock, Path outputFolder)
+            throws IOException {
         folder.create();
         String id = UUID.randomUUID().toString();
         Instant now = clock.now();
@@ -161,7 +170,7 @@ public final class Sitting implements AutoCloseable {
         log.persist(c -> {
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO sitting(id, sitting_id, bundle_sha256, bundle_file, exam_id,"
                     + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, client_version, screen,"
-                    + " current_task) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL)")) {
+                    + " current_task, output_folder) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL, ?)")) {
                 ps.setString(1, id);
                 ps.setString(2, plan.manifestSha256());
                 ps.setString(3, plan.bundleFile());
@@ -174,6 +183,7 @@ public final class Sitting implements AutoCloseable {
                 ps.setString(10, RecoveryScan.IN_PROGRESS);
                 ps.setString(11, now.toString());
                 ps.setString(12, plan.clientVersion());
+                ps.setString(13, outputFolder == null ? null : outputFolder.toAbsolutePath().toString());
                 ps.executeUpdate();
             }
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO tasks(task_id, ord, condition_id, policy) VALUES (?, ?, ?, ?)")) {

@@ -325,7 +325,7 @@ public final class SittingFlow {
             return;
         }
         try {
-            sitting = Sitting.begin(candidate, data, setup.clock());
+            sitting = Sitting.begin(candidate, data, setup.clock(), outputFolder);
         } catch (IOException | RuntimeException e) {
             screen.showError("The sitting could not be started on this machine (" + e.getMessage()
                     + "). Ask the invigilator.");
@@ -727,7 +727,8 @@ public final class SittingFlow {
         }
         String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
-        screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
+        // the folder chosen at set-up (the room's stick), remembered in the sitting's database
+        screen[0] = new RecoveryScreen(facts, creditText, found.outputFolder().orElse(data.root().resolve("outbox")),
                 input -> resume(screen[0], found, input, down), this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
@@ -735,7 +736,7 @@ public final class SittingFlow {
 
     private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
             java.time.Duration down) {
-        // the output folder is made and checked as at set-up: the folder proposed here (data/outbox) may not exist yet
+        // the output folder is made and checked as at set-up: the folder proposed here may not exist (the stick was taken out)
         work(() -> !PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())
                 ? "That is not this exam's invigilator PIN. Enter it again."
                 : input.outputFolder() == null ? "Enter the output folder where response packages go."
