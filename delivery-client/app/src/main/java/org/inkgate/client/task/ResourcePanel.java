@@ -12,15 +12,26 @@ import org.inkgate.packs.policy.Tool;
 
 /**
  * The resource panel: one tab per tool the task offers, built only from the pages it is given
- * (so it cannot show a tool the broker did not construct). Which tool's page is in view is logged
- * as panel.open / panel.close.
+ * (so it cannot show a tool the broker did not construct).
+ *
+ * <p>The panel stands beside the answer for the whole task, so being on screen says nothing about
+ * use. The candidate is <em>in the panel</em> while keyboard focus is inside it (a click into it,
+ * a tool's shortcut, F6 from the answer) and the window has focus; {@code panel.open} is logged
+ * with the page in view when they come in, {@code panel.close} when focus goes back to the
+ * answer or elsewhere, the window loses focus (another program took it: focus.lost) or the
+ * workspace closes. A tab switch while in the panel closes one page and opens the other at the
+ * same moment. So time in the panel is time spent using it, as the researcher needs it.
  */
 final class ResourcePanel extends VBox {
 
     private final List<ToolPage> pages;
     private final TabPane tabs = new TabPane();
     private final TaskEvents events;
+    /** The page whose tab is selected. */
     private ToolPage inView;
+    /** The page logged as open (the candidate is in the panel), or null. */
+    private ToolPage logged;
+    private boolean closed;
 
     ResourcePanel(List<ToolPage> pages, TaskEvents events, String shortcutsHelp) {
         if (pages.isEmpty()) {
@@ -44,8 +55,13 @@ final class ResourcePanel extends VBox {
         Label keys = ToolPage.wrapped(shortcutsHelp, "panel-note");
         keys.setId("panelKeys");
         getChildren().addAll(heading, tabs, keys);
-        tabs.getSelectionModel().selectedItemProperty().addListener((o, was, now) -> switched(now == null ? null : (ToolPage) now.getUserData()));
-        switched(pages.get(0));
+        inView = pages.get(0);
+        tabs.getSelectionModel().selectedItemProperty().addListener((o, was, now) -> {
+            inView = now == null ? null : (ToolPage) now.getUserData();
+            update();
+        });
+        // focus within is false while the window has no focus (JavaFX sets a node focused only in a focused window)
+        focusWithinProperty().addListener((o, was, now) -> update());
     }
 
     /** The pages, in tab order. */
@@ -76,19 +92,22 @@ final class ResourcePanel extends VBox {
         }
     }
 
-    /** Logs the page in view as closed (the workspace is going away). */
+    /** Ends the candidate's time in the panel, if they are in it (the workspace is going away). */
     void closed() {
-        switched(null);
+        closed = true;
+        update();
     }
 
-    private void switched(ToolPage now) {
-        if (inView == now) {
+    /** Logs the transitions of (in the panel, page in view): out to in opens, in to out closes, a switch does both. */
+    private void update() {
+        ToolPage now = !closed && isFocusWithin() ? inView : null;
+        if (logged == now) {
             return;
         }
-        if (inView != null) {
-            events.record(EventType.PANEL_CLOSE, "tool", TaskEvents.wire(inView.tool()));
+        if (logged != null) {
+            events.record(EventType.PANEL_CLOSE, "tool", TaskEvents.wire(logged.tool()));
         }
-        inView = now;
+        logged = now;
         if (now != null) {
             events.record(EventType.PANEL_OPEN, "tool", TaskEvents.wire(now.tool()));
         }
