@@ -2,11 +2,16 @@ package org.inkgate.client.task;
 
 import java.util.List;
 import java.util.Optional;
+import javafx.beans.InvalidationListener;
+import javafx.beans.value.ChangeListener;
+import javafx.scene.Node;
+import javafx.scene.Scene;
 import javafx.scene.control.Label;
 import javafx.scene.control.Tab;
 import javafx.scene.control.TabPane;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
+import javafx.stage.Window;
 import org.inkgate.format.response.EventType;
 import org.inkgate.packs.policy.Tool;
 
@@ -32,6 +37,11 @@ final class ResourcePanel extends VBox {
     /** The page logged as open (the candidate is in the panel), or null. */
     private ToolPage logged;
     private boolean closed;
+    private final InvalidationListener changed = o -> update();
+    private final ChangeListener<Window> windowSwap = (o, before, after) -> {
+        watchWindow(before, after);
+        update();
+    };
 
     ResourcePanel(List<ToolPage> pages, TaskEvents events, String shortcutsHelp) {
         if (pages.isEmpty()) {
@@ -60,8 +70,52 @@ final class ResourcePanel extends VBox {
             inView = now == null ? null : (ToolPage) now.getUserData();
             update();
         });
-        // focus within is false while the window has no focus (JavaFX sets a node focused only in a focused window)
-        focusWithinProperty().addListener((o, was, now) -> update());
+        // read from the scene's focus owner and the window's focus, not focusWithin (which the rehearsal saw
+        // stay true after focus had gone back to the answer)
+        sceneProperty().addListener((o, was, now) -> {
+            detach(was);
+            attach(now);
+            update();
+        });
+    }
+
+    private void attach(Scene scene) {
+        if (scene != null) {
+            scene.focusOwnerProperty().addListener(changed);
+            scene.windowProperty().addListener(windowSwap);
+            watchWindow(null, scene.getWindow());
+        }
+    }
+
+    private void detach(Scene scene) {
+        if (scene != null) {
+            scene.focusOwnerProperty().removeListener(changed);
+            scene.windowProperty().removeListener(windowSwap);
+            watchWindow(scene.getWindow(), null);
+        }
+    }
+
+    private void watchWindow(Window before, Window after) {
+        if (before != null) {
+            before.focusedProperty().removeListener(changed);
+        }
+        if (after != null) {
+            after.focusedProperty().addListener(changed);
+        }
+    }
+
+    /** Whether keyboard focus is inside the panel, in a focused window. */
+    private boolean focusInside() {
+        Scene scene = getScene();
+        if (scene == null || scene.getWindow() == null || !scene.getWindow().isFocused()) {
+            return false;
+        }
+        for (Node n = scene.getFocusOwner(); n != null; n = n.getParent()) {
+            if (n == this) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** The pages, in tab order. */
@@ -96,11 +150,12 @@ final class ResourcePanel extends VBox {
     void closed() {
         closed = true;
         update();
+        detach(getScene()); // the scene and window outlive the task
     }
 
     /** Logs the transitions of (in the panel, page in view): out to in opens, in to out closes, a switch does both. */
     private void update() {
-        ToolPage now = !closed && isFocusWithin() ? inView : null;
+        ToolPage now = !closed && focusInside() ? inView : null;
         if (logged == now) {
             return;
         }
