@@ -142,7 +142,7 @@ public final class ForeignZipReader implements AutoCloseable {
      * checks size and CRC-32 against the central directory at the end.
      */
     public void copy(ArchiveEntry entry, OutputStream out, MessageDigest digest) throws FormatRefusal, IOException {
-        if (entries.get(entry.name()) != entry) {
+        if (!entry.equals(entries.get(entry.name()))) {
             throw new IllegalArgumentException("entry \"" + entry.name() + "\" is not from this archive");
         }
         CRC32 crc = new CRC32();

@@ -148,6 +148,12 @@ class ForeignZipReaderTest {
         ArchiveLimits small = new ArchiveLimits(1 << 20, 10, 100, 1 << 20, 100);
         SizeLimitExceeded size = assertThrows(SizeLimitExceeded.class, () -> ForeignZipReader.open("p.zip", zip, small));
         assertTrue(size.getMessage().contains("items/ferry.xml"), size.getMessage());
+        ArchiveLimits total = new ArchiveLimits(1 << 20, 10, 1000, 500, 100);
+        SizeLimitExceeded all = assertThrows(SizeLimitExceeded.class, () -> ForeignZipReader.open("p.zip", zip, total));
+        assertTrue(all.getMessage().contains("unpacked size of all entries"), all.getMessage());
+        ArchiveLimits file = new ArchiveLimits(100, 10, 1000, 1000, 100);
+        SizeLimitExceeded archive = assertThrows(SizeLimitExceeded.class, () -> ForeignZipReader.open("p.zip", zip, file));
+        assertTrue(archive.getMessage().contains("the archive's size"), archive.getMessage());
     }
 
     @Test
@@ -201,6 +207,13 @@ class ForeignZipReaderTest {
         put32(zip64, centralHeader(zip64, "items/ferry.xml") + 24, -1); // unpacked size 0xFFFFFFFF: in a ZIP64 field
         UnsupportedArchiveFeature z = assertThrows(UnsupportedArchiveFeature.class, () -> open(zip64));
         assertTrue(z.getMessage().contains("ZIP64"), z.getMessage());
+        // a ZIP64 end-of-central-directory locator (APPNOTE 4.3.15) right before the end record
+        byte[] located = new byte[zip.length + 20];
+        System.arraycopy(zip, 0, located, 0, end);
+        put32(located, end, 0x07064b50);
+        System.arraycopy(zip, end, located, end + 20, zip.length - end);
+        UnsupportedArchiveFeature l = assertThrows(UnsupportedArchiveFeature.class, () -> open(located));
+        assertTrue(l.getMessage().contains("the archive uses ZIP64 records"), l.getMessage());
     }
 
     @Test
