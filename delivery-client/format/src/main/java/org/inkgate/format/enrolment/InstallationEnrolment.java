@@ -79,6 +79,15 @@ public record InstallationEnrolment(String fingerprint, byte[] signingKey, Strin
                 e.createdAt().toString(), b64.encodeToString(signature)));
     }
 
+    /** Reads and checks an enrolment file on disk, refusing an oversized one before reading it. */
+    public static InstallationEnrolment read(java.nio.file.Path file) throws java.io.IOException, FormatRefusal {
+        long size = java.nio.file.Files.size(file);
+        if (size > MAX_FILE_BYTES) {
+            throw new SizeLimitExceeded(file.toString(), "the enrolment file (" + size + " bytes)", MAX_FILE_BYTES);
+        }
+        return read(file.toString(), java.nio.file.Files.readAllBytes(file));
+    }
+
     /**
      * Reads and checks an enrolment file.
      *
