@@ -17,12 +17,12 @@ import picocli.CommandLine.Spec;
  * {@code installations enrol} and {@code installations list}: the client installations whose
  * response packages {@code collect --installations FILE} trusts.
  */
-@Command(name = "installations", description = "Enrol client installations from the enrolment files the invigilator"
+@Command(name = "installations", mixinStandardHelpOptions = true, description = "Enrol client installations from the enrolment files the invigilator"
         + " hands over (inkgate-client --installation writes them), or list the enrolled ones.",
         subcommands = {InstallationsCommand.Enrol.class, InstallationsCommand.ListEnrolled.class})
 final class InstallationsCommand {
 
-    @Command(name = "enrol", description = "Check each enrolment file's signature and add its installation to the"
+    @Command(name = "enrol", mixinStandardHelpOptions = true, description = "Check each enrolment file's signature and add its installation to the"
             + " installations list (created when missing). If any file is damaged, changed or not an enrolment"
             + " file, nothing is added.")
     static final class Enrol implements Callable<Integer> {
@@ -56,13 +56,13 @@ final class InstallationsCommand {
         }
 
         private static String label(InstallationEnrolment e) {
-            String machine = e.machine().isEmpty() ? "(no label)" : InstallationList.shown(e.machine());
-            return machine + (e.hostName().isEmpty() ? "" : " (host " + InstallationList.shown(e.hostName()) + ")")
+            String machine = e.machine().isEmpty() ? "(no label)" : InstallationList.shown(e.machine(), 80);
+            return machine + (e.hostName().isEmpty() ? "" : " (host " + InstallationList.shown(e.hostName(), 80) + ")")
                     + ", written " + e.createdAt();
         }
     }
 
-    @Command(name = "list", description = "List the installations in an installations list, with their notes.")
+    @Command(name = "list", mixinStandardHelpOptions = true, description = "List the installations in an installations list, with their notes.")
     static final class ListEnrolled implements Callable<Integer> {
         @Spec
         CommandSpec spec;
@@ -75,7 +75,7 @@ final class InstallationsCommand {
             PrintWriter out = spec.commandLine().getOut();
             List<InstallationList.Entry> entries = InstallationList.read(list);
             for (InstallationList.Entry e : entries) {
-                out.println(e.fingerprint() + (e.note().isEmpty() ? "" : "  " + InstallationList.shown(e.note())));
+                out.println(e.fingerprint() + (e.note().isEmpty() ? "" : "  " + InstallationList.shown(e.note(), 200)));
             }
             out.println(entries.size() + " installation" + (entries.size() == 1 ? "" : "s") + " enrolled in " + list + ".");
             return InkgateAdmin.OK;

@@ -111,6 +111,10 @@ class InstallationEnrolmentTest {
         assertTrue(again.out().contains("already in " + seat14.fingerprint()), again.out());
         Run listed = adminHere("installations", "list", "--list", list.toString());
         assertTrue(listed.out().contains("1 installation enrolled"), listed.out());
+        assertTrue(listed.out().contains(seat14.fingerprint() + "  Room 2, seat 14"), listed.out());
+        Run help = adminHere("installations", "enrol", "--help");
+        assertEquals(0, help.code(), help.out());
+        assertTrue(help.out().contains("--list=FILE"), help.out());
 
         Path packages = dir.resolve("packages");
         Files.createDirectories(packages);

@@ -72,7 +72,7 @@ public final class InstallationList {
                 String normal = Fingerprint.normalise(print);
                 entries.putIfAbsent(normal, new Entry(normal, note));
             } catch (IllegalArgumentException e) {
-                throw new IOException(list + ", line " + (i + 1) + ": \"" + shown(print) + "\" is not an installation"
+                throw new IOException(list + ", line " + (i + 1) + ": \"" + shown(print, 80) + "\" is not an installation"
                         + " fingerprint (32 hex digits in groups, like 3f2a-09c1-...). Correct or delete the line, or"
                         + " start it with # to keep it as a note.");
             }
@@ -138,14 +138,15 @@ public final class InstallationList {
 
     /**
      * Text from a file as it may appear on a terminal: control, format and unassigned characters
-     * shown as '?', at most 80 characters, so a hand-edited or hostile list cannot steer the terminal.
+     * shown as '?', at most {@code limit} characters, so a hand-edited or hostile list cannot steer
+     * the terminal.
      */
-    public static String shown(String text) {
+    public static String shown(String text, int limit) {
         StringBuilder b = new StringBuilder();
-        text.codePoints().limit(80).forEach(c -> b.appendCodePoint(Character.isISOControl(c)
+        text.codePoints().limit(limit).forEach(c -> b.appendCodePoint(Character.isISOControl(c)
                 || Character.getType(c) == Character.FORMAT || Character.getType(c) == Character.UNASSIGNED
                 || Character.getType(c) == Character.LINE_SEPARATOR
                 || Character.getType(c) == Character.PARAGRAPH_SEPARATOR ? '?' : c));
-        return text.codePointCount(0, text.length()) > 80 ? b + "..." : b.toString();
+        return text.codePointCount(0, text.length()) > limit ? b + "..." : b.toString();
     }
 }
