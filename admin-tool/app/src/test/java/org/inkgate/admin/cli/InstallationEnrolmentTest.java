@@ -166,7 +166,7 @@ class InstallationEnrolmentTest {
         Files.write(foreign, new byte[] {'P', 'K', 3, 4, 0x1b, '[', '2', 'J'});
         Run notJson = adminHere("installations", "enrol", "--list", list.toString(), foreign.toString());
         assertEquals(InkgateAdmin.PROBLEMS, notJson.code());
-        assertTrue(notJson.out().contains("bundle.inkenrol"), notJson.out());
+        assertTrue(notJson.out().contains("bundle.inkenrol: this is not an installation enrolment file"), notJson.out());
         assertFalse(notJson.out().contains("\u001b"), "no terminal escape reaches the output");
 
         Path other = dir.resolve("other.inkenrol");

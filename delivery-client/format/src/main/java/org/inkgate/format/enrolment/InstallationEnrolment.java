@@ -99,6 +99,10 @@ public record InstallationEnrolment(String fingerprint, byte[] signingKey, Strin
         if (bytes.length > MAX_FILE_BYTES) {
             throw new SizeLimitExceeded(file, "the enrolment file (" + bytes.length + " bytes)", MAX_FILE_BYTES);
         }
+        if (!startsLikeAnObject(bytes)) {
+            throw new UnsupportedSchema(file, "this is not an installation enrolment file (it is not a JSON object)."
+                    + " Use the file that  inkgate-client --installation  wrote on the client machine");
+        }
         var tree = Json.tree(file, "enrolment", bytes);
         if (!tree.isObject() || !FORMAT.equals(tree.path("format").asText(null))) {
             throw new UnsupportedSchema(file, "this is not an installation enrolment file (its \"format\" is not \""
@@ -183,6 +187,15 @@ public record InstallationEnrolment(String fingerprint, byte[] signingKey, Strin
     /** The file name the client gives this enrolment: made of the fingerprint only, never of a label. */
     public String fileName() {
         return "installation-" + fingerprint + FILE_SUFFIX;
+    }
+
+    private static boolean startsLikeAnObject(byte[] bytes) {
+        for (byte b : bytes) {
+            if (b != ' ' && b != '\t' && b != '\r' && b != '\n') {
+                return b == '{';
+            }
+        }
+        return false;
     }
 
     private static byte[] base64(String file, String field, String value) throws InvalidContent {

@@ -75,7 +75,9 @@ class InstallationEnrolmentTest {
     void foreignAndDamagedFilesAreRefusedWithTheReason() {
         assertThrows(UnsupportedSchema.class, () -> InstallationEnrolment.read("x.json",
                 "{\"format\":\"inkgate-response-content\",\"schemaVersion\":1}".getBytes(StandardCharsets.UTF_8)));
-        assertThrows(MalformedJson.class, () -> InstallationEnrolment.read("x.inkresp", new byte[] {'P', 'K', 3, 4, 0}));
+        UnsupportedSchema zip = assertThrows(UnsupportedSchema.class,
+                () -> InstallationEnrolment.read("x.inkresp", new byte[] {'P', 'K', 3, 4, 0}));
+        assertTrue(zip.getMessage().contains("not an installation enrolment file"), zip.getMessage());
         String cut = written("seat 3");
         assertThrows(MalformedJson.class, () -> InstallationEnrolment.read("x.inkenrol",
                 cut.substring(0, cut.length() / 2).getBytes(StandardCharsets.UTF_8)));
