@@ -110,12 +110,14 @@ public final class SetupScreen {
         Button write = Parts.plain("setupWriteEnrolment", "Write _enrolment file", () -> onWrite.accept(
                 output.getText().isBlank() ? null : Path.of(output.getText().strip()), seat.getText().strip()));
         enrolmentStatus.setId("setupEnrolmentStatus");
+        enrolmentStatus.managedProperty().bind(enrolmentStatus.textProperty().isNotEmpty());
         HBox row = new HBox(12, print, write);
         row.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
-        int at = fields.getChildren().indexOf(error);
+        // beside the seat label, which the enrolment file records
+        int at = fields.getChildren().indexOf(seat) + 1;
         fields.getChildren().addAll(at, List.of(
-                Parts.fieldLabel("This machine's installation fingerprint (the test owner enrols it so that"
-                        + " this machine's packages are trusted)", print),
+                Parts.quiet("This machine's installation fingerprint. The test owner enrols it so that response"
+                        + " packages from this machine are trusted; the file is written to the output folder above."),
                 row, enrolmentStatus));
     }
 
