@@ -104,6 +104,10 @@ public final class InstallationList {
         StringBuilder added = new StringBuilder();
         for (Path file : files) {
             String name = file.toString();
+            if (!Files.isRegularFile(file)) {
+                throw new IOException(name + ": there is no such file. Give the enrolment files (.inkenrol) that"
+                        + "  inkgate-client --installation  wrote; nothing was added to " + list + ".");
+            }
             InstallationEnrolment e = InstallationEnrolment.read(file);
             if (known.add(e.fingerprint())) {
                 outcomes.add(new Enrolled.Added(name, e));
