@@ -175,6 +175,10 @@ class InstallationEnrolmentTest {
         assertEquals(InkgateAdmin.PROBLEMS, wrongKind.code());
         assertTrue(wrongKind.out().contains("not an installation enrolment file"), wrongKind.out());
 
+        Run missing = adminHere("installations", "enrol", "--list", list.toString(), dir.resolve("nowhere.inkenrol").toString());
+        assertEquals(InkgateAdmin.PROBLEMS, missing.code());
+        assertTrue(missing.out().contains("nowhere.inkenrol: there is no such file"), missing.out());
+
         Files.writeString(list, "# kept by hand\nnot-a-fingerprint\n");
         Run badList = adminHere("installations", "list", "--list", list.toString());
         assertEquals(InkgateAdmin.PROBLEMS, badList.code());
