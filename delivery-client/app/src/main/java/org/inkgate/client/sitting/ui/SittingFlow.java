@@ -36,6 +36,7 @@ import org.inkgate.client.practice.WordCount;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.replay.ReplayException;
 import org.inkgate.client.sitting.replay.TextReplay;
+import org.inkgate.client.sitting.submit.EnrolmentExport;
 import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.sitting.submit.SubmissionResult;
 import org.inkgate.client.sitting.SittingClock;
@@ -261,8 +262,35 @@ public final class SittingFlow {
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
                 setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
                 this::exitApplication);
+        offerEnrolment(screen[0]);
         shell.show(screen[0].root());
         screen[0].focus();
+    }
+
+    /** Shows this installation's fingerprint on the set-up screen and writes its enrolment file on request. */
+    private void offerEnrolment(SetupScreen screen) {
+        InstallationKey key;
+        try {
+            key = InstallationKey.loadOrCreate(data);
+        } catch (IOException | RuntimeException e) {
+            screen.showEnrolment("This machine's installation key cannot be read (" + e.getMessage() + "). Packages"
+                    + " cannot be signed until it can; see the invigilator guide, \"Enrolling the machines\".");
+            return;
+        }
+        screen.showInstallation(key.fingerprint(), (folder, seatLabel) -> {
+            if (folder == null) {
+                screen.showEnrolment("Enter the output folder first: the enrolment file is written there.");
+                return;
+            }
+            work(() -> {
+                try {
+                    return "Enrolment file written: " + EnrolmentExport.write(key, seatLabel, folder, setup.clock().now())
+                            + ". Hand it to the test owner.";
+                } catch (IllegalArgumentException | IOException e) {
+                    return "The enrolment file could not be written to " + folder + " (" + e.getMessage() + ").";
+                }
+            }, screen::showEnrolment);
+        });
     }
 
     private void checkSetup(SetupScreen screen, SetupScreen.Input input) {
