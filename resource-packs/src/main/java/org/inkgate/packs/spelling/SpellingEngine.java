@@ -66,6 +66,14 @@ public final class SpellingEngine implements SpellingChecker {
     private final Set<String> ignored = Collections.synchronizedSet(new LinkedHashSet<>());
     // touched only on the executor thread
     private JLanguageTool tool;
+    /**
+     * Ids of the dictionary-based spelling rules. A match is told spelling or grammar by its rule's
+     * id, not by asking its rule object: a sentence LanguageTool answers from its result cache comes
+     * back with stand-in rule objects that say no dictionary rule made them, so a spelling flag in a
+     * sentence unchanged since the last check would be dropped (spelling-only modes) or called
+     * grammar (spelling and grammar).
+     */
+    private final Set<String> spellingRuleIds = new java.util.HashSet<>();
     private final Map<String, List<CheckIssue>> paragraphCache = new LinkedHashMap<>(256, 0.75f, true) {
         @Override
         protected boolean removeEldestEntry(Map.Entry<String, List<CheckIssue>> eldest) {
@@ -221,7 +229,7 @@ public final class SpellingEngine implements SpellingChecker {
         List<CheckIssue> out = new ArrayList<>(matches.size());
         for (RuleMatch m : matches) {
             Rule rule = m.getRule();
-            boolean spelling = rule.isDictionaryBasedSpellingRule();
+            boolean spelling = spellingRuleIds.contains(rule.getId());
             if (!spelling && !mode.checksGrammar()) {
                 continue; // defensive: such rules are disabled in this mode
             }
@@ -253,6 +261,11 @@ public final class SpellingEngine implements SpellingChecker {
         }
         Language language = Languages.getLanguageForShortCode(variant.tag());
         JLanguageTool lt = new JLanguageTool(language, null, new ResultCache(SENTENCE_CACHE), new UserConfig());
+        for (Rule r : lt.getAllRules()) {
+            if (r.isDictionaryBasedSpellingRule()) {
+                spellingRuleIds.add(r.getId());
+            }
+        }
         if (!mode.checksGrammar()) {
             List<String> off = new ArrayList<>();
             for (Rule r : lt.getAllRules()) {

@@ -36,6 +36,7 @@ import org.inkgate.client.practice.WordCount;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.replay.ReplayException;
 import org.inkgate.client.sitting.replay.TextReplay;
+import org.inkgate.client.sitting.submit.EnrolmentExport;
 import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.sitting.submit.SubmissionResult;
 import org.inkgate.client.sitting.SittingClock;
@@ -261,8 +262,35 @@ public final class SittingFlow {
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
                 setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
                 this::exitApplication);
+        offerEnrolment(screen[0]);
         shell.show(screen[0].root());
         screen[0].focus();
+    }
+
+    /** Shows this installation's fingerprint on the set-up screen and writes its enrolment file on request. */
+    private void offerEnrolment(SetupScreen screen) {
+        InstallationKey key;
+        try {
+            key = InstallationKey.loadOrCreate(data);
+        } catch (IOException | RuntimeException e) {
+            screen.showEnrolment("This machine's installation key cannot be read (" + e.getMessage() + "). Packages"
+                    + " cannot be signed until it can; see the invigilator guide, \"Enrolling the machines\".");
+            return;
+        }
+        screen.showInstallation(key.fingerprint(), (folder, seatLabel) -> {
+            if (folder == null) {
+                screen.showEnrolment("Enter the output folder first: the enrolment file is written there.");
+                return;
+            }
+            work(() -> {
+                try {
+                    return "Enrolment file written: " + EnrolmentExport.write(key, seatLabel, folder, setup.clock().now())
+                            + ". Hand it to the test owner.";
+                } catch (IllegalArgumentException | IOException e) {
+                    return "The enrolment file could not be written to " + folder + " (" + e.getMessage() + ").";
+                }
+            }, screen::showEnrolment);
+        });
     }
 
     private void checkSetup(SetupScreen screen, SetupScreen.Input input) {
@@ -275,14 +303,9 @@ public final class SittingFlow {
             if (!PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())) {
                 return "That is not this exam's invigilator PIN. Enter it again.";
             }
-            try {
-                Files.createDirectories(input.outputFolder());
-            } catch (IOException e) {
-                return "The output folder " + input.outputFolder() + " cannot be created (" + e.getMessage()
-                        + "). Choose a folder on a writable disk.";
-            }
-            if (!Files.isWritable(input.outputFolder())) {
-                return "The output folder " + input.outputFolder() + " is not writable. Choose another folder.";
+            String outputProblem = outputProblem(input.outputFolder());
+            if (outputProblem != null) {
+                return outputProblem;
             }
             if (bundle.sealed()) {
                 try {
@@ -740,13 +763,13 @@ public final class SittingFlow {
 
     private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
             java.time.Duration down) {
-        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin()), ok -> {
-            if (!ok) {
-                screen.showError("That is not this exam's invigilator PIN. Enter it again.");
-                return;
-            }
-            if (input.outputFolder() == null) {
-                screen.showError("Enter the output folder where response packages go.");
+        // the output folder is made and checked as at set-up: the folder proposed here (data/outbox) may not exist yet
+        work(() -> !PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())
+                ? "That is not this exam's invigilator PIN. Enter it again."
+                : input.outputFolder() == null ? "Enter the output folder where response packages go."
+                : outputProblem(input.outputFolder()), problem -> {
+            if (problem != null) {
+                screen.showError(problem);
                 return;
             }
             try {
@@ -766,6 +789,20 @@ public final class SittingFlow {
                     ? "; that time was given back" : "; that time was not given back"));
             continueRecovered(found);
         });
+    }
+
+    /** Makes the output folder if needed; what is wrong with it, or null when packages can be written there. */
+    private static String outputProblem(Path folder) {
+        try {
+            Files.createDirectories(folder);
+        } catch (IOException e) {
+            return "The output folder " + folder + " cannot be created (" + e.getMessage()
+                    + "). Choose a folder on a writable disk.";
+        }
+        if (!Files.isWritable(folder)) {
+            return "The output folder " + folder + " is not writable. Choose another folder.";
+        }
+        return null;
     }
 
     /** Shows what the candidate continues with after a restart, with the time left after the invigilator's choice. */

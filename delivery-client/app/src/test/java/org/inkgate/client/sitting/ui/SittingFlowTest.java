@@ -95,6 +95,30 @@ class SittingFlowTest {
     }
 
     @Test
+    void setUp_showsTheInstallationFingerprintAndWritesAnEnrolmentFileTheAdminToolAccepts(FxRobot robot)
+            throws Exception {
+        FlowDriver d = driver();
+        d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
+        d.await("setupPin", Node.class);
+        // the key the client signs packages with, read independently of the screen
+        String fingerprint = org.inkgate.client.sitting.submit.InstallationKey
+                .loadOrCreate(new org.inkgate.client.sitting.store.ClientDataFolder(temp.resolve("data"))).fingerprint();
+
+        assertEquals(fingerprint, d.text("setupInstallationFingerprint"));
+        Path out = temp.resolve("out");
+        d.type("setupOutput", out.toString());
+        d.type("setupSeat", "Room 2, seat 14");
+        d.press("setupWriteEnrolment");
+
+        d.awaitText("setupEnrolmentStatus", "Enrolment file written");
+        Path file = out.resolve("installation-" + fingerprint + ".inkenrol");
+        var enrolment = org.inkgate.format.enrolment.InstallationEnrolment.read(file);
+        assertEquals(fingerprint, enrolment.fingerprint());
+        assertEquals("Room 2, seat 14", enrolment.machine());
+        assertEquals(SittingFlow.Screen.SETUP, d.flow.screen(), "writing the file does not start the sitting");
+    }
+
+    @Test
     void setUp_exit_closesTheLockedWindowWithoutStartingASitting(FxRobot robot) throws Exception {
         FlowDriver d = driver();
         d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), true);
@@ -318,6 +342,47 @@ class SittingFlowTest {
         second.press("continueButton");
         second.awaitTask("The empty shop on Mill Street");
         assertEquals(typed, second.workspace().text());
+    }
+
+    /**
+     * Found by the rehearsal (issue 14): the recovery screen proposes the data folder's outbox as
+     * the output folder but never made it, so the hand-in after a resumed sitting failed with
+     * "not there" until someone created the folder by hand. It is made and checked as at set-up.
+     */
+    @Test
+    void recovery_proposedOutputFolder_handInAfterResumingDelivers(FxRobot robot) throws Exception {
+        Path bundle = FlowDriver.buildDemoSitting(temp);
+        ManualClock clock = new ManualClock();
+        FlowDriver first = driver();
+        first.open(bundle, clock, false);
+        first.setUp(FlowDriver.demoPin(), temp.resolve("stick"));
+        first.signIn("D1002");
+        first.press("startButton");
+        first.awaitTask("The empty shop on Mill Street");
+        first.typeInEditor("Written before the crash.");
+        WaitForAsyncUtils.sleep(1500, java.util.concurrent.TimeUnit.MILLISECONDS);
+        robot.interact(() -> first.flow.closeQuietly());
+
+        FlowDriver second = driver();
+        second.open(bundle, clock, false);
+        second.await("recoveryScreen", Node.class);
+        Path proposed = Path.of(second.await("recoveryOutput", javafx.scene.control.TextField.class).getText());
+        assertFalse(Files.exists(proposed), "the test needs a proposed folder that does not exist yet: " + proposed);
+        second.type("recoveryPin", FlowDriver.demoPin());
+        second.press("resumeButton");
+        second.press("continueButton");
+        second.awaitTask("The empty shop on Mill Street");
+        second.finishTask();
+        second.awaitTask("A note to a neighbour");
+        second.finishTask();
+        second.press("questionnaireDone");
+        second.check("confirmCheck");
+        second.press("submitButton");
+
+        second.await("finishedScreen", Node.class);
+        try (Stream<Path> files = Files.list(proposed)) {
+            assertEquals(1, files.filter(p -> p.toString().endsWith(".inkresp")).count());
+        }
     }
 
     private static java.security.PrivateKey demoOwnerPrivateKey() throws Exception {
