@@ -483,12 +483,15 @@ public final class AnalyseCommand implements Callable<Integer> {
             levels.put(c.id(), c.level());
             c.attributes().forEach((name, group) -> attributes.computeIfAbsent(name, k -> new HashMap<>()).put(c.id(), group));
         });
-        Candidate.attributeNames(data.candidates()).forEach(name -> attributes.putIfAbsent(name, Map.of()));
         List<String> columns = new ArrayList<>(o.facets());
         for (FacetPair p : o.biasPairs()) {
             for (String c : List.of(p.first(), p.second())) {
                 if (!RatingData.CANDIDATE.equals(c) && !columns.contains(c)) {
                     columns.add(c);
+                }
+                // a declared attribute nobody has a value for: refused per rating below, not an unknown column
+                if (!RatingData.CANDIDATE.equals(c) && !StudyRatings.COLUMNS.contains(c)) {
+                    attributes.putIfAbsent(c, Map.of());
                 }
             }
         }

@@ -151,4 +151,19 @@ class AnalyseAttributesTest {
                 "rater,first_language"), "an attribute is not a facet");
         assertTrue(err.toString().contains("use it in --mfrm-bias"), err.toString());
     }
+
+    @Test
+    void analyse_mfrmBiasOnAnAttributeNobodyHas_refusesOnlyTheRaschSection(@TempDir Path dir) throws Exception {
+        Path[] in = raschInput(dir, false);
+        StringBuilder blank = new StringBuilder("candidate,level,first_language\n");
+        Files.readAllLines(in[1]).stream().skip(1).forEach(l -> blank.append(l, 0, l.indexOf(',')).append(",B1,\n"));
+        Path cands = Files.writeString(dir.resolve("blank.csv"), blank);
+        Path report = dir.resolve("r");
+        assertEquals(0, run("--ratings", in[0].toString(), "--candidates", cands.toString(), "--attribute",
+                "first_language", "--out", report.toString(), "--mfrm-facets", "task,rater", "--mfrm-bias",
+                "condition:first_language"), err.toString());
+        JsonNode s = new ObjectMapper().readTree(report.resolve("summary.json").toFile());
+        assertFalse(s.get("mfrm.available").asBoolean());
+        assertTrue(s.get("mfrm.refusal").toString().contains("gives no 'first_language'"), s.get("mfrm.refusal").toString());
+    }
 }
