@@ -32,7 +32,6 @@ import javafx.util.Duration;
 import org.inkgate.client.practice.PromptText;
 import org.inkgate.client.practice.TaskWording;
 import org.inkgate.client.practice.ui.RefusalView;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.practice.WordCount;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.replay.ReplayException;
@@ -75,6 +74,7 @@ import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.bundle.TaskSpec;
 import org.inkgate.format.bundle.WordGuidance;
 import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.TaskResponse.EndReason;
 import org.inkgate.packs.spelling.EnglishVariant;
@@ -942,7 +942,7 @@ public final class SittingFlow {
     private void exitByInvigilator() {
         if (sitting != null && !sitting.submitted()) {
             // not an end of the sitting: it stays in the data folder and resumes on the next start
-            sitting.log().record(EventTypes.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
+            sitting.log().record(EventType.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
         }
         exitApplication();
     }
@@ -958,14 +958,14 @@ public final class SittingFlow {
     private void onFocusLost() {
         focusLine("Focus lost");
         if (sitting != null) {
-            sitting.log().record(EventTypes.FOCUS_LOST, currentTaskId(), Map.of());
+            sitting.log().record(EventType.FOCUS_LOST, currentTaskId(), Map.of());
         }
     }
 
     private void onFocusReturned(long awayMillis) {
         focusLine("Focus returned after " + TimeText.duration(awayMillis));
         if (sitting != null) {
-            sitting.log().record(EventTypes.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
+            sitting.log().record(EventType.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
         }
     }
 
