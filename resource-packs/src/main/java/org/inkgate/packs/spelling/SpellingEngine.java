@@ -38,6 +38,12 @@ import org.languagetool.rules.spelling.SpellingCheckRule;
  * paragraph content, and LanguageTool's own sentence cache makes a re-check of an edited
  * paragraph cost about one sentence.
  *
+ * <p>LanguageTool's {@link ResultCache} keeps a sentence's matches serialized and hands them back
+ * with a stand-in rule object that keeps the rule's id and category but none of its behaviour
+ * ({@code isDictionaryBasedSpellingRule()} is false on it). So whether a match is a spelling
+ * match is decided by rule id, against the ids of this engine's real spelling rules, never by
+ * asking the match's rule object.
+ *
  * <p>In modes without grammar every rule except the dictionary-based spelling rule is disabled
  * before the first check, so grammar rules never run. In {@link SpellingMode#UNDERLINE_ONLY}
  * suggestions are never asked for and the message is a fixed text that names no correction.
@@ -66,6 +72,8 @@ public final class SpellingEngine implements SpellingChecker {
     private final Set<String> ignored = Collections.synchronizedSet(new LinkedHashSet<>());
     // touched only on the executor thread
     private JLanguageTool tool;
+    /** Ids of the dictionary-based spelling rules of {@link #tool}, learnt from the real rule objects. */
+    private Set<String> spellingRuleIds = Set.of();
     private final Map<String, List<CheckIssue>> paragraphCache = new LinkedHashMap<>(256, 0.75f, true) {
         @Override
         protected boolean removeEldestEntry(Map.Entry<String, List<CheckIssue>> eldest) {
@@ -221,7 +229,8 @@ public final class SpellingEngine implements SpellingChecker {
         List<CheckIssue> out = new ArrayList<>(matches.size());
         for (RuleMatch m : matches) {
             Rule rule = m.getRule();
-            boolean spelling = rule.isDictionaryBasedSpellingRule();
+            // by id: a match from LanguageTool's sentence cache carries a stand-in rule (see the class comment)
+            boolean spelling = spellingRuleIds.contains(rule.getId());
             if (!spelling && !mode.checksGrammar()) {
                 continue; // defensive: such rules are disabled in this mode
             }
@@ -253,6 +262,13 @@ public final class SpellingEngine implements SpellingChecker {
         }
         Language language = Languages.getLanguageForShortCode(variant.tag());
         JLanguageTool lt = new JLanguageTool(language, null, new ResultCache(SENTENCE_CACHE), new UserConfig());
+        Set<String> spellingIds = new LinkedHashSet<>();
+        for (Rule r : lt.getAllRules()) {
+            if (r.isDictionaryBasedSpellingRule()) {
+                spellingIds.add(r.getId());
+            }
+        }
+        spellingRuleIds = Set.copyOf(spellingIds);
         if (!mode.checksGrammar()) {
             List<String> off = new ArrayList<>();
             for (Rule r : lt.getAllRules()) {
