@@ -66,6 +66,8 @@ public final class SpellingEngine implements SpellingChecker {
     private final SpellingMode mode;
     private final List<String> examWords;
     private final Clock clock;
+    /** False only for the reference engine of the tests: every check from scratch. */
+    private final boolean caching;
     private final ExecutorService executor;
     private final AtomicLong generation = new AtomicLong();
     private final AtomicReference<CompletableFuture<CheckResult>> pending = new AtomicReference<>();
@@ -81,7 +83,8 @@ public final class SpellingEngine implements SpellingChecker {
         }
     };
 
-    private SpellingEngine(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock) {
+    private SpellingEngine(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock, boolean caching) {
+        this.caching = caching;
         this.variant = Objects.requireNonNull(variant, "variant");
         this.mode = Objects.requireNonNull(mode, "mode");
         this.examWords = List.copyOf(examWords);
@@ -100,10 +103,25 @@ public final class SpellingEngine implements SpellingChecker {
      * @throws IllegalArgumentException for {@link SpellingMode#OFF}: a task without checking gets no checker
      */
     public static SpellingEngine create(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock) {
+        refuseOff(mode);
+        return new SpellingEngine(variant, mode, examWords, clock, true);
+    }
+
+    private static void refuseOff(SpellingMode mode) {
         if (mode == SpellingMode.OFF) {
             throw new IllegalArgumentException("spelling mode is OFF: no checker is built for a task that allows none");
         }
-        return new SpellingEngine(variant, mode, examWords, clock);
+    }
+
+    /**
+     * A checker that keeps no cache at all, neither ours nor LanguageTool's: every check is made
+     * from scratch, as a newly built engine would make it. It is the reference the property tests
+     * compare the caching engine with (a newly built engine per text would take seconds each);
+     * several times slower on long texts, never used in a sitting.
+     */
+    public static SpellingEngine withoutCaches(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock) {
+        refuseOff(mode);
+        return new SpellingEngine(variant, mode, examWords, clock, false);
     }
 
     @Override
@@ -194,10 +212,12 @@ public final class SpellingEngine implements SpellingChecker {
             int end = nl < 0 ? text.length() : nl;
             String paragraph = text.substring(offset, end);
             paragraphs++;
-            List<CheckIssue> found = paragraphCache.get(paragraph);
+            List<CheckIssue> found = caching ? paragraphCache.get(paragraph) : null;
             if (found == null) {
                 found = paragraph.isBlank() ? List.of() : toIssues(lt.check(paragraph));
-                paragraphCache.put(paragraph, found);
+                if (caching) {
+                    paragraphCache.put(paragraph, found);
+                }
                 checked++;
             }
             for (CheckIssue i : found) {
@@ -261,7 +281,7 @@ public final class SpellingEngine implements SpellingChecker {
             return tool;
         }
         Language language = Languages.getLanguageForShortCode(variant.tag());
-        JLanguageTool lt = new JLanguageTool(language, null, new ResultCache(SENTENCE_CACHE), new UserConfig());
+        JLanguageTool lt = new JLanguageTool(language, null, caching ? new ResultCache(SENTENCE_CACHE) : null, new UserConfig());
         Set<String> spellingIds = new LinkedHashSet<>();
         for (Rule r : lt.getAllRules()) {
             if (r.isDictionaryBasedSpellingRule()) {
