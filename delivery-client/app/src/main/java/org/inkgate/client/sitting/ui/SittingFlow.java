@@ -129,6 +129,8 @@ public final class SittingFlow {
     private final Timeline ticker;
     private SittingShell shell;
     private Scene scene;
+    /** Keys typed on the way into a task the candidate asked for, kept until its editor has focus. */
+    private TypeAhead typeAhead;
     private StageLock lock;
     private OpenedBundle bundle;
     private ClientDataFolder data;
@@ -238,6 +240,7 @@ public final class SittingFlow {
     private void showStage(String title) {
         if (scene == null) {
             scene = new Scene(shell.root(), 1280, 800);
+            typeAhead = new TypeAhead(scene);
             SittingTheme.install(scene);
             stage.setScene(scene);
         } else {
@@ -411,10 +414,16 @@ public final class SittingFlow {
     private void afterInstructions() {
         String pre = plan.form().preQuestionnaire();
         if (pre != null) {
-            showQuestionnaire(pre, this::startNextTask);
+            showQuestionnaire(pre, this::startAskedForTask);
         } else {
-            startNextTask();
+            startAskedForTask();
         }
+    }
+
+    /** The candidate asked for the next task (Begin, Done, Yes, finish this task): what they type at once goes into it. */
+    private void startAskedForTask() {
+        typeAhead.hold();
+        startNextTask();
     }
 
     // ---- questionnaires ----
@@ -436,6 +445,7 @@ public final class SittingFlow {
     private void startNextTask() {
         Optional<String> next = sitting.nextTask();
         if (next.isEmpty()) {
+            typeAhead.drop();
             afterTasks(false);
             return;
         }
@@ -453,6 +463,7 @@ public final class SittingFlow {
         FormSlot slot = plan.form().slots().get(index);
         if (paused) {
             // a sitting recovered while paused: the task begins when the invigilator resumes
+            typeAhead.drop();
             entryWaiting = true;
             return;
         }
@@ -464,6 +475,7 @@ public final class SittingFlow {
         try {
             start = sitting.enterTask(slot.taskId());
         } catch (IOException e) {
+            typeAhead.drop();
             shell.announcer().announce("Invigilator: the task could not be started, because the saved work could not"
                     + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
             return;
@@ -480,6 +492,7 @@ public final class SittingFlow {
                 return;
             }
             if (failure != null) {
+                typeAhead.drop();
                 shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
                 return;
             }
@@ -497,6 +510,7 @@ public final class SittingFlow {
             updateClock();
             ticker.play();
             if (paused) {
+                typeAhead.drop();
                 freeze(true);
             } else {
                 focusEditorOnceShown(workspace);
@@ -505,21 +519,30 @@ public final class SittingFlow {
     }
 
     /**
-     * Puts the caret in the new task's editor. The editor takes focus only once its skin is laid
-     * out, which can take a few pulses; until then the scene gives focus to the first button it
-     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most a
-     * second), and never after the task has changed or the exam is paused.
+     * Puts the caret in the new task's editor and hands it the keys typed on the way in. The
+     * editor takes focus only once its skin is laid out, which can take a few pulses (more in
+     * large print, on a busy machine); until then the scene gives focus to the first button it
+     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most
+     * five seconds), and never after the task has changed, the exam is paused or the invigilator's
+     * screen is open; keys typed meanwhile are kept ({@link TypeAhead}) and delivered in order.
      */
     private void focusEditorOnceShown(TaskWorkspace shown) {
         Timeline retry = new Timeline();
         retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
-            if (workspace != shown || paused || focusInside(shown.view())) {
+            if (workspace != shown || paused || desk.showing()) {
+                typeAhead.drop();
+                retry.stop();
+                return;
+            }
+            if (focusInside(shown.view())) {
+                typeAhead.deliverTo(scene.getFocusOwner());
                 retry.stop();
                 return;
             }
             shown.focusEditor();
         }));
-        retry.setCycleCount(34);
+        retry.setCycleCount(167);
+        retry.setOnFinished(e -> typeAhead.drop());
         shown.focusEditor();
         retry.play();
     }
@@ -580,6 +603,7 @@ public final class SittingFlow {
             return;
         }
         taskEnding = true;
+        typeAhead.drop(); // keys typed after the time is up belong to no task
         freeze(true);
         shell.announcer().announce(wholeSitting ? "The time for the whole exam is up. Your answers have been saved."
                 : "The time for this task is up. Your answer has been saved.");
@@ -594,6 +618,11 @@ public final class SittingFlow {
             return;
         }
         taskEnding = true;
+        if (reason == EndReason.SUBMITTED) {
+            typeAhead.hold(); // the candidate moves on: what they type now belongs to the next task
+        } else {
+            typeAhead.drop(); // time or the invigilator ended it: keys typed now belong to no task
+        }
         finishTask(reason, false);
     }
 
@@ -828,6 +857,7 @@ public final class SittingFlow {
                 || current == Screen.RECOVERY) {
             return;
         }
+        typeAhead.drop(); // the PIN typed next is never the candidate's text
         desk.open();
     }
 
@@ -921,6 +951,7 @@ public final class SittingFlow {
         }
         paused = pause;
         if (pause) {
+            typeAhead.drop();
             sitting.pauseAll();
             freeze(true);
             desk.coverPaused(true);
