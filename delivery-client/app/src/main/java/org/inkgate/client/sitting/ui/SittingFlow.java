@@ -69,6 +69,7 @@ import org.inkgate.client.task.TaskContext;
 import org.inkgate.client.task.TaskWorkspace;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.FormSlot;
+import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.bundle.PinHasher;
 import org.inkgate.format.bundle.QuestionnaireSpec;
@@ -370,10 +371,10 @@ public final class SittingFlow {
                 + plan.formId(), instructions, lines, this::afterInstructions);
         shell.show(screen.root());
         screen.focus();
-        startTools(screen);
+        startTools(screen, plan.form());
     }
 
-    private void startTools(InstructionsScreen screen) {
+    private void startTools(InstructionsScreen screen, FormSpec form) {
         if (shelf != null) {
             if (screen != null) {
                 shelf.allReady().thenRun(() -> Platform.runLater(() -> screen.toolsStatus("The writing tools are ready.")));
@@ -388,8 +389,8 @@ public final class SittingFlow {
             return;
         }
         List<ToolShelf.Order> orders = new ArrayList<>();
-        for (FormSlot slot : plan.form().slots()) {
-            TaskSpec task = plan.manifest().task(slot.taskId()).orElseThrow();
+        for (FormSlot slot : form.slots()) {
+            TaskSpec task = bundle.manifest().task(slot.taskId()).orElseThrow();
             orders.add(new ToolShelf.Order(task.id(), slot.policy(), ExamWords.of(readText(task.promptFile()))));
         }
         shelf = new ToolShelf(packs.broker(), variant(), orders);
@@ -404,7 +405,7 @@ public final class SittingFlow {
 
     private EnglishVariant variant() {
         try {
-            return EnglishVariant.fromTag(plan.manifest().language());
+            return EnglishVariant.fromTag(bundle.manifest().language());
         } catch (IllegalArgumentException e) {
             // the checker is only built for tasks that allow it; a non-English exam offering it fails there, visibly
             return EnglishVariant.EN_GB;
@@ -759,6 +760,11 @@ public final class SittingFlow {
         if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
             facts.add("The answers were handed in and saved on this machine, but not yet written to the output folder.");
         }
+        if (found.stage() != UnfinishedSitting.Stage.AWAITING_DELIVERY) {
+            // the writing tools start while the invigilator reads this screen, so the restored text is
+            // checked as soon as the task shows, not after LanguageTool's start (seconds on a busy machine)
+            bundle.manifest().form(found.formId()).ifPresent(form -> startTools(null, form));
+        }
         String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
         screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
@@ -846,7 +852,7 @@ public final class SittingFlow {
     /** After a restart the instructions screen may be skipped, but the tools must still be prepared. */
     private void prepareToolsQuietly() {
         if (shelf == null) {
-            startTools(null);
+            startTools(null, plan.form());
         }
     }
 
@@ -1148,6 +1154,11 @@ public final class SittingFlow {
     /** The lock, when applied. */
     StageLock lock() {
         return lock;
+    }
+
+    /** Whether the writing tools are being prepared (or ready); for tests. */
+    boolean toolsStarted() {
+        return shelf != null;
     }
 
     /** Lines the invigilator screen lists (focus changes, hand-in trouble), oldest first. */

@@ -1,6 +1,7 @@
 package org.inkgate.client.sitting.ui;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.util.Collection;
@@ -117,6 +118,8 @@ class SittingTypingTest {
         FlowDriver second = driver();
         second.openReal(bundle, clock);
         second.await("recoveryScreen", Node.class);
+        // LanguageTool takes seconds to start: it starts while the invigilator reads the recovery screen
+        assertTrue(second.flow.toolsStarted(), "the writing tools wait for the invigilator's PIN");
         second.type("recoveryPin", FlowDriver.demoPin());
         second.press("resumeButton");
         second.press("continueButton");
