@@ -124,19 +124,22 @@ final class RatersSection {
                 + " compared as 'first' and 'second' rating. Raters usually differ between responses, so the"
                 + " one-way ICC (ICC1, Shrout-Fleiss case 1) fits the design; the two-way forms treat 'first' and"
                 + " 'second' as fixed judges. Krippendorff's alpha uses every rating of every unit.");
+        s.paragraph("Each figure names its level: 'criterion' (the ratings of one criterion), 'pooled criterion"
+                + " ratings' (the criterion rating pairs of every criterion taken together), or 'reported score' (each"
+                + " rater's score of a whole response under the score rule, the score a test owner reports).");
         Table.Builder agree = Table.builder("raters_agreement", "Agreement between first and second rating")
                 .method("Pearson r (Fisher-z CI), Spearman rho, exact and adjacent (|difference| <= 1) agreement,"
                         + " Cohen's kappa unweighted, linear and quadratic weighted with large-sample SEs and 95% CIs",
                         "Cohen 1960, 1968; Fleiss, Cohen & Everitt 1969")
-                .columns("criterion", "pairs", "Pearson r", "r lower", "r upper", "Spearman rho", "exact", "adjacent",
+                .columns("level", "criterion", "pairs", "Pearson r", "r lower", "r upper", "Spearman rho", "exact", "adjacent",
                         "kappa", "kappa SE", "kappa lower", "kappa upper", "linear kappa", "linear SE",
                         "quadratic kappa", "quadratic SE");
         Table.Builder icc = Table.builder("raters_icc", "Intraclass correlations (first and second rating)")
                 .method("ICC in the six Shrout-Fleiss forms with F-based 95% CIs", "Shrout & Fleiss 1979; McGraw & Wong 1996")
-                .columns("criterion", "form", "description", "ICC", "lower", "upper", "F", "df1", "df2", "p");
+                .columns("level", "criterion", "form", "description", "ICC", "lower", "upper", "F", "df1", "df2", "p");
         Table.Builder kripp = Table.builder("raters_krippendorff", "Krippendorff's alpha (all ratings)")
                 .method("coincidence-matrix alpha, ordinal and interval metrics", "Krippendorff 2011")
-                .columns("criterion", "pairable units", "ordinal alpha", "interval alpha");
+                .columns("level", "criterion", "pairable units", "ordinal alpha", "interval alpha");
         List<String> criteria = new ArrayList<>(pairsByCriterion.keySet());
         List<double[]> pooled = new ArrayList<>();
         pairsByCriterion.values().forEach(pooled::addAll);
@@ -145,6 +148,7 @@ final class RatersSection {
         criteria.add("all criteria");
         for (String criterion : criteria) {
             boolean all = criterion.equals("all criteria");
+            String level = all ? "pooled criterion ratings" : "criterion";
             List<double[]> p = all ? pooled : pairsByCriterion.get(criterion);
             double[] x = new double[p.size()], y = new double[p.size()];
             for (int i = 0; i < x.length; i++) {
@@ -157,7 +161,7 @@ final class RatersSection {
             Kappa k0 = Kappa.of(x, y, Kappa.Weights.UNWEIGHTED);
             Kappa k1 = Kappa.of(x, y, Kappa.Weights.LINEAR);
             Kappa k2 = Kappa.of(x, y, Kappa.Weights.QUADRATIC);
-            agree.row(criterion, (long) x.length, pr.r(), pr.lower(), pr.upper(), sp.r(), ag.exact(), ag.adjacent(),
+            agree.row(level, criterion, (long) x.length, pr.r(), pr.lower(), pr.upper(), sp.r(), ag.exact(), ag.adjacent(),
                     k0.kappa(), k0.se(), k0.lower(), k0.upper(), k1.kappa(), k1.se(), k2.kappa(), k2.se());
             pr.cautions().forEach(c -> agree.note(criterion + ": " + c));
             k0.cautions().forEach(c -> agree.note(criterion + ": " + c));
@@ -173,7 +177,7 @@ final class RatersSection {
             }
             Icc ic = Icc.of(table, 0.95);
             for (Icc.Form f : ic.forms()) {
-                icc.row(criterion, f.name(), f.description(), f.value(), f.lower(), f.upper(), f.f(), f.df1(), f.df2(),
+                icc.row(level, criterion, f.name(), f.description(), f.value(), f.lower(), f.upper(), f.f(), f.df1(), f.df2(),
                         f.p());
                 s.put(key + Keys.slug(f.name()), f.value()).put(key + Keys.slug(f.name()) + "_lower", f.lower())
                         .put(key + Keys.slug(f.name()) + "_upper", f.upper());
@@ -182,7 +186,7 @@ final class RatersSection {
             List<double[]> vals = all ? pooledValues : valuesByCriterion.get(criterion);
             Krippendorff.Result ord = Krippendorff.alpha(vals, Krippendorff.Metric.ORDINAL);
             Krippendorff.Result itv = Krippendorff.alpha(vals, Krippendorff.Metric.INTERVAL);
-            kripp.row(criterion, (long) ord.units(), ord.alpha(), itv.alpha());
+            kripp.row(level, criterion, (long) ord.units(), ord.alpha(), itv.alpha());
             ord.cautions().forEach(c -> kripp.note(criterion + ": " + c));
             s.put(key + "krippendorff_ordinal", ord.alpha()).put(key + "krippendorff_interval", itv.alpha());
         }
@@ -192,6 +196,7 @@ final class RatersSection {
         s.table(icc.build());
         kripp.note("'all criteria' pools units of every criterion (each response-criterion is one unit).");
         s.table(kripp.build());
+        ReportedScoreAgreement.addTo(s, ratings, options.scoreRule());
         Table.Builder raters = Table.builder("raters_individual", "Raters")
                 .method("per rater: number of ratings, mean score, share of their paired ratings that differ from the"
                         + " other rating by more than 1 point (discrepant; common practice)", "")

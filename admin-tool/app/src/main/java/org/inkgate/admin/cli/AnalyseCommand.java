@@ -12,9 +12,11 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.inkgate.admin.core.export.QuestionnaireCsv;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.SqliteResultsStore;
 import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.study.QuestionnaireInput;
 import org.inkgate.admin.study.StoreRatings;
 import org.inkgate.admin.study.StoreStudyInput;
 import org.inkgate.analysis.data.Candidate;
@@ -22,6 +24,7 @@ import org.inkgate.analysis.data.CandidatesReader;
 import org.inkgate.analysis.data.InputRejected;
 import org.inkgate.analysis.data.ProcessEvent;
 import org.inkgate.analysis.data.ProcessLogReader;
+import org.inkgate.analysis.data.QuestionnaireData;
 import org.inkgate.analysis.data.Rating;
 import org.inkgate.analysis.data.RatingsReader;
 import org.inkgate.analysis.data.ToolUse;
@@ -38,6 +41,7 @@ import org.inkgate.analysis.report.Report;
 import org.inkgate.analysis.report.ReportWriter;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.scores.ScoreRule;
+import org.inkgate.analysis.study.QuestionnaireSection;
 import org.inkgate.analysis.study.StudyAnalysis;
 import org.inkgate.analysis.study.StudyData;
 import org.inkgate.analysis.study.StudyOptions;
@@ -58,7 +62,7 @@ import picocli.CommandLine.Spec;
  */
 @Command(name = "analyse", mixinStandardHelpOptions = true,
         description = {"Analyse ratings: descriptive statistics, the with/without-resources comparison, proficiency"
-                + " levels, rater agreement, rubric consistency, resource use and writing process; with"
+                + " levels, rater agreement, rubric consistency, resource use, writing process and questionnaire answers; with"
                 + " --mfrm-facets also many-facet Rasch measurement.",
             "Writes report.html (self-contained), tables/*.csv and summary.json into the output folder."})
 public final class AnalyseCommand implements Callable<Integer> {
@@ -85,6 +89,11 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--process", paramLabel = "FILE.csv",
             description = "Optional process log: candidate,task,time_ms,type,position,text")
     private Path process;
+
+    @Option(names = "--questionnaire", paramLabel = "FILE.csv",
+            description = "Optional: questionnaire answers in the table export writes (csv/questionnaire_answers.csv);"
+                    + " with --store it takes the place of the store's answers")
+    private Path questionnaire;
 
     @Option(names = "--store", paramLabel = "FILE.db",
             description = "Optional results store (from collect): candidates' levels, tool use and process events of"
@@ -143,6 +152,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         PrintWriter outWriter = spec.commandLine().getOut();
         MfrmOptions mfrmOptions = mfrmOptions();
         StudyData data;
+        QuestionnaireData answers = null;
         StudyOptions options;
         try {
             options = StudyOptions.DEFAULT.withScoreRule(scoreRule).withBaseline(baseline).withTitle(title)
@@ -195,6 +205,21 @@ public final class AnalyseCommand implements Callable<Integer> {
                 p = fromStore.processLog();
             }
             data = new StudyData(r, cands, c == null ? List.of() : c.items(), u, p);
+            if (questionnaire != null) {
+                try (Reader in = open(questionnaire)) {
+                    answers = QuestionnaireInput.read(questionnaire.getFileName().toString(), in);
+                }
+            } else if (store != null) {
+                answers = readStoreQuestionnaire(err);
+                if (answers == null) {
+                    return INPUT_REFUSED;
+                }
+            }
+        } catch (QuestionnaireCsv.Refused e) {
+            err.println("inkgate-admin analyse: " + e.getMessage() + ":");
+            e.problems().stream().limit(20).forEach(x -> err.println("  " + x.describe()));
+            err.println("Fix the rows above and run again; no report was written.");
+            return INPUT_REFUSED;
         } catch (InputRejected e) {
             err.println("inkgate-admin analyse: " + e.getMessage());
             err.println("Fix the rows above and run again; no report was written.");
@@ -214,6 +239,9 @@ public final class AnalyseCommand implements Callable<Integer> {
             return INPUT_REFUSED;
         }
         List<Section> extra = new ArrayList<>();
+        if (answers != null && !answers.isEmpty()) {
+            extra.add(QuestionnaireSection.build(answers, data.toolUse()));
+        }
         if (mfrmOptions != null) {
             Section mfrm = mfrmSection(data, mfrmOptions);
             if (Boolean.FALSE.equals(mfrm.summary().get(MfrmSection.ID + ".available"))) {
@@ -285,6 +313,20 @@ public final class AnalyseCommand implements Callable<Integer> {
                 return null;
             }
             return exam;
+        } catch (StoreException e) {
+            err.println("inkgate-admin analyse: could not read the results store " + store + ": " + e.getMessage());
+            return null;
+        }
+    }
+
+    /** The store's questionnaire answers of the chosen exam, or null after saying on err why they cannot be read. */
+    private QuestionnaireData readStoreQuestionnaire(PrintWriter err) throws IOException, QuestionnaireCsv.Refused {
+        String chosen = chooseExam(err);
+        if (chosen == null) {
+            return null;
+        }
+        try (ResultsStore s = SqliteResultsStore.open(store)) {
+            return QuestionnaireInput.read(s, chosen, store.getFileName().toString());
         } catch (StoreException e) {
             err.println("inkgate-admin analyse: could not read the results store " + store + ": " + e.getMessage());
             return null;

@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.export.QtiResultsExport;
+import org.inkgate.admin.core.export.QuestionnaireCsv;
 import org.inkgate.admin.core.export.TidyCsvExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.store.ResultsStore;
@@ -16,7 +17,7 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /** {@code export}: tidy CSV, QTI 3.0 results and xAPI statements from the results store. */
-@Command(name = "export", description = "Export responses, tool use and process events: tidy CSV (see"
+@Command(name = "export", description = "Export responses, tool use, process events and questionnaire answers: tidy CSV (see"
         + " docs/data-dictionary.md), QTI 3.0 results per candidate, xAPI statements as JSON lines.")
 final class ExportCommand implements Callable<Integer> {
     @Spec
@@ -41,9 +42,14 @@ final class ExportCommand implements Callable<Integer> {
                 long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
                 int qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"));
                 long statements = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"));
+                long questionnaire;
+                try (var csv = java.nio.file.Files.newBufferedWriter(dir.resolve("csv").resolve(QuestionnaireCsv.FILE_NAME),
+                        java.nio.charset.StandardCharsets.UTF_8)) {
+                    questionnaire = QuestionnaireCsv.write(store, id, csv);
+                }
                 w.println(id + " -> " + dir);
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
-                        + rows[2] + " rows");
+                        + rows[2] + " rows, csv/" + QuestionnaireCsv.FILE_NAME + " " + questionnaire + " rows");
                 w.println("  qti-results/ " + qti + " assessmentResult files; xapi-statements.jsonl " + statements
                         + " statements");
                 List<Rows.Conflict> conflicts = store.conflicts(id);

@@ -103,6 +103,7 @@ class CommandLineTest {
         assertEquals(0, export.code(), export.out());
         assertTrue(Files.exists(dir.resolve("export/demo-harbourside-placement/csv/responses.csv")));
         assertEquals(11, Files.list(dir.resolve("export/demo-harbourside-placement/qti-results")).count());
+        assertTrue(export.out().contains("csv/questionnaire_answers.csv 22 rows"), "11 sittings x 2 items: " + export.out());
 
         // ratings come from a CSV (the rating desk comes later); levels, tool use and process events from the store
         Path ratings = dir.resolve("ratings.csv");
@@ -113,6 +114,8 @@ class CommandLineTest {
         String summary = Files.readString(report.resolve("summary.json"));
         assertTrue(summary.contains("\"usage."), "tool use read from the store: " + summary.substring(0, 400));
         assertTrue(summary.contains("\"process."), "process events read from the store");
+        assertTrue(summary.contains("\"questionnaire.after_writing.time_enough.all.answered\" : 11"),
+                "questionnaire answers read from the store");
 
         rateThroughToAnalysis(store);
     }

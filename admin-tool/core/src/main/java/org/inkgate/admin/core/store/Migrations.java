@@ -331,6 +331,29 @@ public final class Migrations {
                       decided_at TEXT NOT NULL,
                       PRIMARY KEY (sitting_id, task_id, criterion_id),
                       FOREIGN KEY (sitting_id, task_id) REFERENCES responses(sitting_id, task_id)
+                    )""")),
+            new Migration(4, "questionnaire definitions (items with kind and scale) and the questionnaires each form asks",
+                    List.of(
+                    """
+                    CREATE TABLE questionnaire_items (
+                      exam_id TEXT NOT NULL REFERENCES exams(exam_id),
+                      questionnaire_id TEXT NOT NULL,
+                      position INTEGER NOT NULL,
+                      item_id TEXT NOT NULL,
+                      kind TEXT NOT NULL,
+                      text TEXT NOT NULL,
+                      labels_json TEXT NOT NULL,
+                      PRIMARY KEY (exam_id, questionnaire_id, item_id),
+                      UNIQUE (exam_id, questionnaire_id, position)
+                    )""",
+                    """
+                    CREATE TABLE form_questionnaires (
+                      exam_id TEXT NOT NULL,
+                      form_id TEXT NOT NULL,
+                      timing TEXT NOT NULL CHECK (timing IN ('before', 'after')),
+                      questionnaire_id TEXT NOT NULL,
+                      PRIMARY KEY (exam_id, form_id, timing),
+                      FOREIGN KEY (exam_id, form_id) REFERENCES forms(exam_id, form_id)
                     )""")));
 
     private Migrations() {

@@ -68,6 +68,13 @@ public interface ResultsStore extends AutoCloseable {
 
     void forEachEvent(String examId, Consumer<Rows.Event> sink) throws StoreException;
 
+    /**
+     * Every questionnaire item each sitting's form asked, answered or not, with its definition, and
+     * every stored answer to an item the store has no definition of; by candidate, sitting, before
+     * the tasks then after, item position.
+     */
+    void forEachQuestionnaireAnswer(String examId, Consumer<Rows.QuestionnaireAnswer> sink) throws StoreException;
+
     /** Row counts per table, for reports and tests. */
     java.util.Map<String, Long> counts() throws StoreException;
 

@@ -43,4 +43,16 @@ public final class Rows {
     public record Event(String examId, String candidateNumber, String packageId, String registration, long seq,
             String at, long mono, String type, String taskId, String dataJson) {
     }
+
+    /**
+     * One questionnaire item asked in one sitting, with the answer if one was given. {@code timing} is
+     * {@code before} or {@code after} the tasks; {@code kind} ({@code likert} or {@code free-text}),
+     * {@code position}, {@code text} and {@code labelsJson} are null when the store holds no definition
+     * of the item; {@code value} is null when the item was not answered. {@code conditions} lists the
+     * conditions of the sitting's responses in the order sat, separated by spaces.
+     */
+    public record QuestionnaireAnswer(String examId, String candidateNumber, String level, String formId,
+            String packageId, String conditions, String questionnaireId, String timing, Integer position,
+            String itemId, String kind, String text, String labelsJson, String value) {
+    }
 }

@@ -21,6 +21,8 @@ import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.FormSlot;
 import org.inkgate.format.bundle.FormSpec;
+import org.inkgate.format.bundle.QuestionItem;
+import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.bundle.RosterEntry;
 import org.inkgate.format.bundle.TaskSpec;
 import org.inkgate.format.json.Json;
@@ -127,8 +129,15 @@ public final class SqliteResultsStore implements ResultsStore {
             }
             m.conditions().forEach(cd -> unchecked(() -> update(
                     "INSERT OR IGNORE INTO conditions(exam_id, condition_id, label) VALUES (?,?,?)", m.examId(), cd.id(), cd.label())));
+            registerQuestionnaires(m);
             for (FormSpec f : m.forms()) {
                 update("INSERT OR IGNORE INTO forms(exam_id, form_id) VALUES (?,?)", m.examId(), f.id());
+                for (String[] q : new String[][] {{"before", f.preQuestionnaire()}, {"after", f.postQuestionnaire()}}) {
+                    if (q[1] != null) {
+                        update("INSERT OR REPLACE INTO form_questionnaires(exam_id, form_id, timing, questionnaire_id)"
+                                + " VALUES (?,?,?,?)", m.examId(), f.id(), q[0], q[1]);
+                    }
+                }
                 for (int i = 0; i < f.slots().size(); i++) {
                     FormSlot s = f.slots().get(i);
                     long policy = policyId(s.policy());
@@ -156,6 +165,35 @@ public final class SqliteResultsStore implements ResultsStore {
             }
             return null;
         });
+    }
+
+    /**
+     * The bundle's questionnaire items, as the contract ({@link QuestionItem}) defines them, so that
+     * exports and the analysis take kinds and scales from the bundle rather than guessing them.
+     */
+    private void registerQuestionnaires(BundleManifest m) throws SQLException {
+        for (QuestionnaireSpec q : m.questionnaires()) {
+            for (int i = 0; i < q.items().size(); i++) {
+                QuestionItem item = q.items().get(i);
+                String kind = Json.mapper().valueToTree(item.kind()).asText();
+                String labels = new String(Json.writeLine(item.labels()), StandardCharsets.UTF_8).strip();
+                Optional<Object[]> existing = first("SELECT position, kind, text, labels_json FROM questionnaire_items"
+                        + " WHERE exam_id=? AND questionnaire_id=? AND item_id=?", 4, m.examId(), q.id(), item.id());
+                if (existing.isPresent()) {
+                    Object[] e = existing.get();
+                    if (((Number) e[0]).intValue() != i + 1 || !kind.equals(e[1]) || !item.text().equals(e[2])
+                            || !labels.equals(e[3])) {
+                        throw new SQLException("item " + item.id() + " of questionnaire " + q.id() + " of exam " + m.examId()
+                                + " differs from the item of that id in a bundle registered before; give a changed"
+                                + " questionnaire a new id (or the exam a new exam id)");
+                    }
+                } else {
+                    update("INSERT INTO questionnaire_items(exam_id, questionnaire_id, position, item_id, kind, text,"
+                            + " labels_json) VALUES (?,?,?,?,?,?,?)", m.examId(), q.id(), i + 1, item.id(), kind,
+                            item.text(), labels);
+                }
+            }
+        }
     }
 
     private long policyId(ResourcePolicy p) throws SQLException {
@@ -430,6 +468,37 @@ public final class SqliteResultsStore implements ResultsStore {
                     rs -> sink.accept(new Rows.Event(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
                             rs.getLong(5), rs.getString(6), rs.getLong(7), rs.getString(8), rs.getString(9),
                             rs.getString(10))), examId);
+            return null;
+        });
+    }
+
+    @Override
+    public void forEachQuestionnaireAnswer(String examId, Consumer<Rows.QuestionnaireAnswer> sink) throws StoreException {
+        // every item the sitting's form asks (answered or not), then every stored answer to an item the
+        // store has no definition of, so that nothing stored is left out of an export
+        String sitting = "s.exam_id, s.candidate_number, c.level, s.form_id, s.package_id, s.sitting_id,"
+                + " (SELECT group_concat(condition_id, ' ') FROM (SELECT r.condition_id FROM responses r"
+                + "   WHERE r.sitting_id = s.sitting_id ORDER BY r.position)),";
+        String candidate = " LEFT JOIN candidates c ON c.exam_id = s.exam_id AND c.candidate_number = s.candidate_number";
+        read("reading questionnaire answers", () -> {
+            each("SELECT " + sitting + " q.questionnaire_id, fq.timing,"
+                    + " q.position, q.item_id, q.kind, q.text, q.labels_json, a.value"
+                    + " FROM sittings s JOIN form_questionnaires fq ON fq.exam_id = s.exam_id AND fq.form_id = s.form_id"
+                    + " JOIN questionnaire_items q ON q.exam_id = s.exam_id AND q.questionnaire_id = fq.questionnaire_id"
+                    + " LEFT JOIN questionnaire_answers a ON a.sitting_id = s.sitting_id"
+                    + "   AND a.questionnaire_id = q.questionnaire_id AND a.item_id = q.item_id" + candidate
+                    + " WHERE s.exam_id=?"
+                    + " UNION ALL SELECT " + sitting + " a.questionnaire_id, NULL, NULL, a.item_id, NULL, NULL, NULL, a.value"
+                    + " FROM questionnaire_answers a JOIN sittings s ON s.sitting_id = a.sitting_id" + candidate
+                    + " WHERE s.exam_id=? AND NOT EXISTS (SELECT 1 FROM form_questionnaires fq JOIN questionnaire_items q"
+                    + "   ON q.exam_id = fq.exam_id AND q.questionnaire_id = fq.questionnaire_id"
+                    + "   WHERE fq.exam_id = s.exam_id AND fq.form_id = s.form_id"
+                    + "   AND q.questionnaire_id = a.questionnaire_id AND q.item_id = a.item_id)"
+                    + " ORDER BY 2, 6, 9 DESC, 10, 11", // candidate, sitting, before then after, position, item
+                    rs -> sink.accept(new Rows.QuestionnaireAnswer(rs.getString(1), rs.getString(2), rs.getString(3),
+                            rs.getString(4), rs.getString(5), rs.getString(7), rs.getString(8), rs.getString(9),
+                            rs.getObject(10) == null ? null : rs.getInt(10), rs.getString(11), rs.getString(12),
+                            rs.getString(13), rs.getString(14), rs.getString(15))), examId, examId);
             return null;
         });
     }

@@ -124,6 +124,35 @@ class MigrationsTest {
     }
 
     @Test
+    void migration4_storeAtVersion3WithAnAnswer_keepsItAndListsItWithoutADefinition() throws Exception {
+        Path file = dir.resolve("r.db");
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 3)) {
+            try (Statement s = store.connection().createStatement()) {
+                s.execute("INSERT INTO exams VALUES ('e1', 'Invented', 'en', 0)");
+                s.execute("INSERT INTO bundles VALUES ('b', 'e1', 'fp', 't')");
+                s.execute("INSERT INTO forms VALUES ('e1', 'F')");
+                s.execute("INSERT INTO sittings(sitting_id, package_sha256, package_id, content_sha256, exam_id,"
+                        + " bundle_manifest_sha256, candidate_number, form_id, installation_fingerprint, source_file,"
+                        + " imported_at) VALUES (1, 'p', 'P', 'c', 'e1', 'b', 'C1', 'F', 'i', 'f', 't')");
+                s.execute("INSERT INTO questionnaire_answers VALUES (1, 'after', 'q1', '2')");
+            }
+            assertFalse(objects(store.connection(), "table").contains("questionnaire_items"));
+        }
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 4)) {
+            Connection c = store.connection();
+            assertEquals(4, Migrations.version(c));
+            assertTrue(objects(c, "table").contains("questionnaire_items"));
+            java.util.List<Rows.QuestionnaireAnswer> rows = new java.util.ArrayList<>();
+            store.forEachQuestionnaireAnswer("e1", rows::add);
+            assertEquals(1, rows.size(), "an answer stored before its item was registered is still listed");
+            Rows.QuestionnaireAnswer a = rows.get(0);
+            assertEquals("q1", a.itemId());
+            assertEquals("2", a.value());
+            assertEquals(null, a.kind(), "no definition: the kind is not guessed");
+        }
+    }
+
+    @Test
     void open_storeFromANewerProgram_isRefusedAndLeftAlone() throws Exception {
         Path file = dir.resolve("r.db");
         try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
@@ -142,7 +171,7 @@ class MigrationsTest {
     void open_latest_isTheLastMigration() throws Exception {
         try (SqliteResultsStore store = SqliteResultsStore.open(dir.resolve("r.db"))) {
             assertEquals(Migrations.latest(), Migrations.version(store.connection()));
-            assertEquals(3, Migrations.latest());
+            assertEquals(4, Migrations.latest());
         }
     }
 }
