@@ -530,7 +530,11 @@ public final class SittingFlow {
     private void focusEditorOnceShown(TaskWorkspace shown) {
         Timeline retry = new Timeline();
         retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
-            if (workspace != shown || paused || desk.showing()) {
+            if (workspace != shown) {
+                retry.stop(); // a later task took over, with its own keys and retry
+                return;
+            }
+            if (paused || desk.showing()) {
                 typeAhead.drop();
                 retry.stop();
                 return;
@@ -543,7 +547,11 @@ public final class SittingFlow {
             shown.focusEditor();
         }));
         retry.setCycleCount(167);
-        retry.setOnFinished(e -> typeAhead.drop());
+        retry.setOnFinished(e -> {
+            if (workspace == shown) {
+                typeAhead.drop(); // focus never reached the editor: keys typed now go where focus is
+            }
+        });
         shown.focusEditor();
         retry.play();
     }
