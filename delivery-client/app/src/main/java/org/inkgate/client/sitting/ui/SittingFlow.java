@@ -547,6 +547,7 @@ public final class SittingFlow {
             shown.focusEditor();
         }));
         retry.setCycleCount(167);
+        typeAhead.awaitFocusIn(shown.view());
         retry.setOnFinished(e -> {
             if (workspace == shown) {
                 typeAhead.drop(); // focus never reached the editor: keys typed now go where focus is

@@ -18,17 +18,30 @@ import javafx.scene.input.KeyEvent;
  */
 final class TypeAhead {
 
+    private final Scene scene;
     private final List<KeyEvent> held = new ArrayList<>();
     private boolean holding;
+    /** Where the editor the keys are for lives, once it is on screen. */
+    private Node awaited;
 
     TypeAhead(Scene scene) {
+        this.scene = scene;
         scene.addEventFilter(KeyEvent.ANY, this::filter);
     }
 
     /** From now on, writing keys are kept for the next editor. */
     void hold() {
         held.clear();
+        awaited = null;
         holding = true;
+    }
+
+    /**
+     * The editor is on screen inside this node: the first key typed once focus is inside it
+     * hands over the kept keys before itself, so keys arrive in order whoever notices first.
+     */
+    void awaitFocusIn(Node container) {
+        awaited = container;
     }
 
     /** Whether keys are being kept. */
@@ -39,6 +52,7 @@ final class TypeAhead {
     /** Hands the kept keys to the editor (which has focus), in the order typed, and stops keeping. */
     void deliverTo(Node editor) {
         holding = false;
+        awaited = null;
         List<KeyEvent> keys = List.copyOf(held);
         held.clear();
         for (KeyEvent e : keys) {
@@ -49,12 +63,18 @@ final class TypeAhead {
     /** Forgets the kept keys (the next screen is not a task) and stops keeping. */
     void drop() {
         holding = false;
+        awaited = null;
         held.clear();
     }
 
     private void filter(KeyEvent e) {
         if (!holding || e.isShortcutDown() || e.isControlDown() || e.isAltDown() || e.isMetaDown()) {
             return;
+        }
+        Node focus = scene.getFocusOwner();
+        if (awaited != null && focus != null && inside(focus, awaited)) {
+            deliverTo(focus);
+            return; // this key follows the kept ones, on its usual way
         }
         if (e.getEventType() == KeyEvent.KEY_TYPED) {
             String c = e.getCharacter();
@@ -66,6 +86,15 @@ final class TypeAhead {
         }
         // every other key is stopped too: a Space or Enter must not press a button the screen focused meanwhile
         e.consume();
+    }
+
+    private static boolean inside(Node node, Node container) {
+        for (Node n = node; n != null; n = n.getParent()) {
+            if (n == container) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static boolean isWritingKey(KeyCode code) {

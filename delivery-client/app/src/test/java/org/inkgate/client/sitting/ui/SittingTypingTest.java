@@ -78,6 +78,29 @@ class SittingTypingTest {
         awaitText(d, 2, "The shop");
     }
 
+    @Test
+    void keysTypedAfterTheTimeIsUp_goIntoNoTask(FxRobot robot) throws Exception {
+        ManualClock clock = new ManualClock();
+        FlowDriver d = driver();
+        d.openReal(FlowDriver.buildDemoSitting(temp), clock);
+        d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
+        d.signIn("D1001");
+        d.press("startButton");
+        d.awaitTask("A note to a neighbour");
+        d.typeInEditor("Dear Sam,");
+        // the first task allows 1200 s (exam.json); the candidate is still typing when it ends
+        clock.advance(java.time.Duration.ofSeconds(1200));
+        d.awaitText("announcement", "time for this task is up");
+        robot.interact(() -> typeNow(stage.getScene(), " and more"));
+        d.awaitTask("The empty shop on Mill Street");
+        // once the next editor has focus, anything kept would have been handed to it
+        WaitForAsyncUtils.waitFor(30, TimeUnit.SECONDS, () -> stage.getScene().getFocusOwner() != null
+                && "answer".equals(stage.getScene().getFocusOwner().getId()));
+        WaitForAsyncUtils.waitForFxEvents();
+        assertEquals("Dear Sam,", d.realWorkspaces.get(0).text());
+        assertEquals("", d.realWorkspaces.get(1).text(), "keys typed after the time was up went into the next task");
+    }
+
     /**
      * Keys as the platform delivers them to the scene (press, typed, release), before anything
      * queued after them runs. Space presses whatever button has focus, so a lost key shows.
