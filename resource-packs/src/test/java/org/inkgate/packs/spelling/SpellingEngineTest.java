@@ -174,6 +174,31 @@ class SpellingEngineTest {
         assertEquals(found, issues(e, paragraph + " "));
     }
 
+    /**
+     * Found by the rehearsal (issue 14): LanguageTool answers a sentence unchanged since the last
+     * check from its result cache, with stand-in rule objects; the misspelling in the first sentence
+     * must stay flagged, as spelling, while the candidate goes on typing the second. Fresh engines,
+     * so no other test's checks fill the cache first.
+     */
+    @Test
+    void check_sentenceUnchangedSinceTheLastCheck_staysFlaggedAsSpelling() {
+        String typing = "The ferry will recieve a new timetable. Passengers shoud buy a ";
+        String typed = typing + "ticket.";
+        for (SpellingMode mode : List.of(SpellingMode.SUGGESTIONS, SpellingMode.UNDERLINE_ONLY, SpellingMode.SPELLING_AND_GRAMMAR)) {
+            SpellingEngine e = SpellingEngine.create(EnglishVariant.EN_GB, mode, List.of(), Clock.systemUTC());
+            try {
+                issues(e, typing);
+                List<CheckIssue> found = issues(e, typed);
+                for (String word : List.of("recieve", "shoud")) {
+                    assertTrue(found.stream().anyMatch(i -> typed.substring(i.start(), i.end()).equals(word)
+                            && i.kind() == CheckIssue.Kind.SPELLING), mode + ": " + word + " not flagged as spelling in " + found);
+                }
+            } finally {
+                e.close();
+            }
+        }
+    }
+
     @Test
     void check_newerCheck_cancelsTheStaleOne() throws Exception {
         CountDownLatch hold = new CountDownLatch(1);

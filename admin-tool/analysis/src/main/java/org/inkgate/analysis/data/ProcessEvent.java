@@ -1,17 +1,19 @@
 package org.inkgate.analysis.data;
 
 /**
- * One event of the writing-process log of a response. Types: {@code text.insert} (text inserted
- * at position), {@code text.delete} (text removed from position; text = the removed characters),
- * {@code tool.open}, {@code tool.close} (the resource panel), {@code tool.query} (text = the
- * word or phrase looked up). Time in milliseconds from any fixed origin.
+ * One event of the writing-process log of a response. Types: {@code task.start}, {@code task.end}
+ * (the task's bounds), {@code text.insert} (text inserted at position), {@code text.delete} (text
+ * removed from position; text = the removed characters), {@code panel.open}, {@code panel.close}
+ * (a tool's page came into or left view in the resource panel), {@code tool.query} (text = the word
+ * or phrase looked up). The names are those of the response format's process log; the admin tool
+ * maps a results store onto them in one place. Time in milliseconds from any fixed origin.
  */
 public record ProcessEvent(String candidate, String task, long timeMs, Type type, int position, String text) {
 
     /** The event types the measures use. */
     public enum Type {
-        INSERT("text.insert"), DELETE("text.delete"), TOOL_OPEN("tool.open"), TOOL_CLOSE("tool.close"),
-        TOOL_QUERY("tool.query");
+        TASK_START("task.start"), TASK_END("task.end"), INSERT("text.insert"), DELETE("text.delete"),
+        PANEL_OPEN("panel.open"), PANEL_CLOSE("panel.close"), TOOL_QUERY("tool.query");
 
         private final String name;
 

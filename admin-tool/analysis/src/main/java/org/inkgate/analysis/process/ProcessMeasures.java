@@ -12,7 +12,10 @@ import org.inkgate.analysis.data.ProcessEvent;
  * <p>Definitions (after Chenoweth &amp; Hayes 2001, Written Communication 18:80-98; Wengelin 2006;
  * Leijten &amp; Van Waes 2013 for the product/process ratio):
  * <ul>
- * <li>time on task: last event time minus first event time;</li>
+ * <li>the task: its events up to and including its {@code task.end}; events logged after it (the
+ * client closes the resource panel just after ending the task) are not part of it;</li>
+ * <li>time on task: last event time minus first event time (with a store's log: {@code task.start}
+ * to {@code task.end});</li>
  * <li>inter-key interval: time between consecutive text events (insert or delete);</li>
  * <li>pause: an inter-key interval of at least the threshold (default 2 s, common practice);</li>
  * <li>active writing time: the sum of inter-key intervals below the threshold;</li>
@@ -23,8 +26,10 @@ import org.inkgate.analysis.data.ProcessEvent;
  * the end of the log is counted as a P-burst;</li>
  * <li>product/process ratio: characters in the final text / characters inserted;</li>
  * <li>characters per minute: characters inserted per minute of time on task;</li>
- * <li>time in the resource panel: sum of tool.open to tool.close spans (an open panel at the end
- * of the log is closed at the last event);</li>
+ * <li>time in the resource panel: sum of the spans from a {@code panel.open} to the next
+ * {@code panel.close} (a tab switch closes one page and opens another at the same moment; a
+ * second {@code panel.open} while a span is open continues it); a span still open at the end of
+ * the task closes there ({@code task.end}, or the last event);</li>
  * <li>lookup followed by use: a tool.query whose text (case-insensitive) appears in the text
  * inserted within the window after it (default 60 s).</li>
  * </ul>
@@ -49,6 +54,12 @@ public record ProcessMeasures(String candidate, String task, double timeOnTaskS,
     public static ProcessMeasures of(List<ProcessEvent> events, Parameters params) {
         List<ProcessEvent> ev = new ArrayList<>(events);
         ev.sort(Comparator.comparingLong(ProcessEvent::timeMs)); // stable: ties keep log order
+        for (int i = 0; i < ev.size(); i++) {
+            if (ev.get(i).type() == ProcessEvent.Type.TASK_END) {
+                ev = new ArrayList<>(ev.subList(0, i + 1));
+                break;
+            }
+        }
         String candidate = ev.get(0).candidate();
         String task = ev.get(0).task();
         long first = ev.get(0).timeMs();
@@ -107,18 +118,21 @@ public record ProcessMeasures(String candidate, String task, double timeOnTaskS,
                         length = Math.max(0, length - e.text().length());
                     }
                 }
-                case TOOL_OPEN -> {
+                case PANEL_OPEN -> {
                     if (panelOpenedAt < 0) {
                         panelOpenedAt = e.timeMs();
                     }
                 }
-                case TOOL_CLOSE -> {
+                case PANEL_CLOSE -> {
                     if (panelOpenedAt >= 0) {
                         panelTime += e.timeMs() - panelOpenedAt;
                         panelOpenedAt = -1;
                     }
                 }
                 case TOOL_QUERY -> queries.add(e);
+                case TASK_START, TASK_END -> {
+                    // bounds only: they set time on task through first and last
+                }
             }
         }
         if (panelOpenedAt >= 0) {

@@ -24,7 +24,7 @@ class ProcessMeasuresTest {
                 e(4000, Type.INSERT, 6, "t"),
                 e(4200, Type.DELETE, 6, "t"), e(4300, Type.DELETE, 5, "a"),
                 e(4500, Type.INSERT, 5, "o"), e(4700, Type.INSERT, 6, "w"),
-                e(5000, Type.TOOL_OPEN, -1, ""), e(6000, Type.TOOL_QUERY, -1, "cow"), e(8000, Type.TOOL_CLOSE, -1, ""),
+                e(5000, Type.PANEL_OPEN, -1, ""), e(6000, Type.TOOL_QUERY, -1, "cow"), e(8000, Type.PANEL_CLOSE, -1, ""),
                 e(9000, Type.INSERT, 7, " cow"));
         ProcessMeasures m = ProcessMeasures.of(log, ProcessMeasures.Parameters.DEFAULT);
         assertEquals(9.0, m.timeOnTaskS(), 1e-12);
@@ -45,6 +45,29 @@ class ProcessMeasuresTest {
         assertEquals(3.0, m.panelTimeS(), 1e-12);
         assertEquals(1, m.lookups());
         assertEquals(1, m.lookupsUsed());
+    }
+
+    @Test
+    void measures_taskBoundsAndPanelSpans_followTheDefinitions() {
+        // worked by hand from the definitions in ProcessMeasures: the task runs 0-10 s; the glossary's page is in
+        // view 1-3 s, a tab switch at 3 s brings the dictionary's page, still in view when the task ends at 10 s
+        // (the client logs that page's close at 10.5 s, after task.end; the insert at 11 s is not in the task)
+        List<ProcessEvent> log = List.of(e(0, Type.TASK_START, -1, ""), e(1000, Type.PANEL_OPEN, -1, ""),
+                e(2000, Type.INSERT, 0, "a"), e(3000, Type.PANEL_CLOSE, -1, ""), e(3000, Type.PANEL_OPEN, -1, ""),
+                e(4000, Type.INSERT, 1, "b"), e(10_000, Type.TASK_END, -1, ""), e(10_500, Type.PANEL_CLOSE, -1, ""),
+                e(11_000, Type.INSERT, 2, "c"));
+        ProcessMeasures m = ProcessMeasures.of(log, ProcessMeasures.Parameters.DEFAULT);
+        assertEquals(9.0, m.panelTimeS(), 1e-12, "(3 - 1) + (10 - 3) s");
+        assertEquals(10.0, m.timeOnTaskS(), 1e-12);
+        assertEquals(2, m.charsInserted());
+    }
+
+    @Test
+    void measures_panelOpenAtTheEndOfALogWithoutTaskEnd_closesAtTheLastEvent() {
+        List<ProcessEvent> log = List.of(e(0, Type.INSERT, 0, "a"), e(2000, Type.PANEL_OPEN, -1, ""),
+                e(2500, Type.PANEL_OPEN, -1, ""), e(6000, Type.INSERT, 1, "b"));
+        assertEquals(4.0, ProcessMeasures.of(log, ProcessMeasures.Parameters.DEFAULT).panelTimeS(), 1e-12,
+                "a second open continues the span: 6 - 2 s");
     }
 
     @Test

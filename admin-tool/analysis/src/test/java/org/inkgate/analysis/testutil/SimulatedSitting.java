@@ -114,9 +114,9 @@ public final class SimulatedSitting {
                         t += rnd.nextDouble() < 0.1 ? 2000 + rnd.nextInt(6000) : 80 + rnd.nextInt(300);
                         if (task.equals(resourcesTask(c)) && rnd.nextDouble() < 0.03) {
                             String q = words[rnd.nextInt(words.length)];
-                            w.write(String.format("C%06d,%s,%d,tool.open,,%n", c, task, t));
+                            w.write(String.format("C%06d,%s,%d,panel.open,,%n", c, task, t));
                             w.write(String.format("C%06d,%s,%d,tool.query,,%s%n", c, task, t + 500, q));
-                            w.write(String.format("C%06d,%s,%d,tool.close,,%n", c, task, t + 3000));
+                            w.write(String.format("C%06d,%s,%d,panel.close,,%n", c, task, t + 3000));
                             t += 3500;
                             w.write(String.format("C%06d,%s,%d,text.insert,%d,%s%n", c, task, t, len, " " + q));
                             len += q.length() + 1;

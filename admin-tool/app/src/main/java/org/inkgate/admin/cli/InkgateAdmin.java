@@ -24,6 +24,7 @@ import picocli.CommandLine.Command;
             MissingCommand.class,
             ExportCommand.class,
             RateCommand.class,
+            QtiCommand.class,
             AnalyseCommand.class,
             GuiCommand.class,
             org.inkgate.packs.cli.PackCommand.class,

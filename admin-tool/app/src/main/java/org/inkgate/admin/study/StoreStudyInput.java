@@ -1,7 +1,5 @@
 package org.inkgate.admin.study;
 
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -22,13 +20,12 @@ import org.inkgate.analysis.data.ToolUse;
  *   <li>a candidate's level is the roster's level; personal fields are never read;</li>
  *   <li>a tool's {@code uses} in a response are the candidate's own actions with it: queries,
  *       suggestions accepted and suggestions ignored (suggestions merely shown do not count);</li>
- *   <li>process events keep their type, task, monotonic time (as milliseconds) and the
- *       {@code pos} and {@code text} fields of their data; a deletion logged with only {@code len}
- *       gets a placeholder of that length, because the measures use its length only.</li>
+ *   <li>process events are mapped by {@link AnalysisEvents}: task bounds, text changes, the
+ *       resource panel's {@code panel.open}/{@code panel.close} and lookups, with their task,
+ *       monotonic time (as milliseconds) and the {@code pos}, {@code text} or {@code query} of their data.</li>
  * </ul>
  */
 public final class StoreStudyInput {
-    private static final ObjectMapper JSON = new ObjectMapper();
 
     /** The three tables of one exam. */
     public record Tables(List<Candidate> candidates, List<ToolUse> toolUse, List<ProcessEvent> processLog) {
@@ -43,12 +40,7 @@ public final class StoreStudyInput {
         List<ToolUse> toolUse = new ArrayList<>();
         store.forEachToolUse(examId, row -> toolUse.add(toolUse(row)));
         List<ProcessEvent> events = new ArrayList<>();
-        store.forEachEvent(examId, row -> {
-            ProcessEvent e = processEvent(row);
-            if (e != null) {
-                events.add(e);
-            }
-        });
+        store.forEachEvent(examId, row -> AnalysisEvents.of(row).ifPresent(events::add));
         return new Tables(candidates, toolUse, events);
     }
 
@@ -62,40 +54,8 @@ public final class StoreStudyInput {
                 row.suggestionsAccepted(), row.suggestionsIgnored());
     }
 
-    /** The analysis's view of one stored event, or null for event types the measures do not use. */
+    /** The analysis's view of one stored event (the mapping is {@link AnalysisEvents}), or null when it is not used. */
     static ProcessEvent processEvent(Rows.Event row) {
-        ProcessEvent.Type type = typeOf(row.type());
-        if (type == null || row.taskId() == null || row.taskId().isEmpty()) {
-            return null;
-        }
-        JsonNode data = parse(row);
-        int position = data.path("pos").asInt(0);
-        String text = switch (type) {
-            case INSERT -> data.path("text").asText("");
-            case DELETE -> data.hasNonNull("text") ? data.get("text").asText()
-                    : "\uFFFD".repeat(Math.max(0, data.path("len").asInt(0)));
-            case TOOL_QUERY -> data.path("query").asText(data.path("text").asText(""));
-            case TOOL_OPEN, TOOL_CLOSE -> "";
-        };
-        return new ProcessEvent(row.candidateNumber(), row.taskId(), Math.floorDiv(row.mono(), 1_000_000L), type,
-                position, text);
-    }
-
-    private static ProcessEvent.Type typeOf(String logName) {
-        for (ProcessEvent.Type t : ProcessEvent.Type.values()) {
-            if (t.logName().equals(logName)) {
-                return t;
-            }
-        }
-        return null;
-    }
-
-    private static JsonNode parse(Rows.Event row) {
-        try {
-            return JSON.readTree(row.dataJson() == null ? "{}" : row.dataJson());
-        } catch (java.io.IOException e) {
-            throw new IllegalStateException("event " + row.seq() + " of package " + row.packageId()
-                    + " has data that is not JSON; the store may be damaged: " + e.getMessage(), e);
-        }
+        return AnalysisEvents.of(row).orElse(null);
     }
 }

@@ -206,6 +206,41 @@ class CommandLineTest {
         Run analyse = admin("analyse", "--store", store, "--out", report.toString());
         assertEquals(0, analyse.code(), analyse.out());
         assertTrue(analyse.out().contains("(" + read.size() + " ratings;"), analyse.out());
+
+        exportWithScores(store);
+    }
+
+    /**
+     * After rating, export writes the scores into the QTI results; every file validates against the
+     * official QTI 3.0 results schema (test resources of the admin core, standards/qti3).
+     */
+    private void exportWithScores(String store) throws Exception {
+        Path out = dir.resolve("export-rated");
+        Run export = admin("export", "--store", store, "--out", out.toString(), "--xapi-base",
+                "https://assessment.invented-owner.test/xapi", "--xapi-light");
+        assertEquals(0, export.code(), export.out());
+        assertTrue(export.out().contains("keystroke events left out (--xapi-light)"), export.out());
+        String statements = Files.readString(out.resolve("demo-harbourside-placement/xapi-statements.jsonl"));
+        assertTrue(statements.contains("https://assessment.invented-owner.test/xapi/exams/")
+                && !statements.contains("inkgate.example") && !statements.contains("\"text.insert\""));
+        Run badBase = admin("export", "--store", store, "--out", dir.resolve("never").toString(), "--xapi-base", "ftp://x/");
+        assertEquals(InkgateAdmin.PROBLEMS, badBase.code(), badBase.out());
+        assertTrue(badBase.out().contains("must be an http(s) address"), badBase.out());
+        assertTrue(export.out().contains("qti-results/ 11 assessmentResult files (22 task results with a final score)"),
+                export.out());
+        List<Path> files;
+        try (var s = Files.list(out.resolve("demo-harbourside-placement/qti-results"))) {
+            files = s.sorted().toList();
+        }
+        assertEquals(11, files.size());
+        for (Path file : files) {
+            assertEquals(List.of(), org.inkgate.admin.core.testutil.QtiSchemas.problems(
+                    org.inkgate.admin.core.testutil.QtiSchemas.RESULTS, file));
+            String xml = Files.readString(file);
+            assertTrue(xml.contains("<outcomeVariable identifier=\"SCORE\""), file + " carries the final score");
+            assertTrue(xml.contains("identifier=\"RATING_R01_") || xml.contains("identifier=\"RATING_R02_")
+                    || xml.contains("identifier=\"RATING_R03_"), file + " carries the raters' scores");
+        }
     }
 
     /** Fills every criterion of every row of a sheet with one invented score, keeping rows already scored. */

@@ -37,6 +37,36 @@ class StoreStudyInputTest {
     }
 
     @Test
+    void processEvent_panelEventsAreThePanelAndAnOpenedEntryIsNot() {
+        assertEquals(new ProcessEvent("C001", "t1", 3, ProcessEvent.Type.PANEL_OPEN, -1, ""),
+                StoreStudyInput.processEvent(event("panel.open", "t1", 3_000_000L, "{\"tool\":\"glossary\"}")));
+        assertEquals(ProcessEvent.Type.PANEL_CLOSE,
+                StoreStudyInput.processEvent(event("panel.close", "t1", 0, "{\"tool\":\"glossary\"}")).type());
+        assertNull(StoreStudyInput.processEvent(event("tool.open", "t1", 0,
+                "{\"tool\":\"glossary\",\"pack\":\"p\",\"entry\":\"e1\"}")));
+        assertEquals(ProcessEvent.Type.TASK_END,
+                StoreStudyInput.processEvent(event("task.end", "t1", 0, "{\"reason\":\"submitted\",\"words\":3}")).type());
+    }
+
+    @Test
+    void typeFor_everyEventType_isDecidedAndOnlyTheMeasuresTypesAreKept() {
+        java.util.Map<String, String> kept = new java.util.TreeMap<>();
+        for (org.inkgate.format.response.EventType t : org.inkgate.format.response.EventType.values()) {
+            AnalysisEvents.typeFor(t).ifPresent(a -> kept.put(t.wireName(), a.logName()));
+        }
+        // the analysis's names are the format's wire names (docs/analysis.md, "Process log")
+        assertEquals(java.util.Map.of("task.start", "task.start", "task.end", "task.end", "text.insert", "text.insert",
+                "text.delete", "text.delete", "panel.open", "panel.open", "panel.close", "panel.close",
+                "tool.query", "tool.query"), kept);
+        assertEquals(ProcessEvent.Type.values().length, kept.size(), "every analysis type has its source event");
+    }
+
+    @Test
+    void processEvent_typeUnknownToThisVersion_isLeftOut() {
+        assertNull(StoreStudyInput.processEvent(event("tool.close", "t1", 0, "{}")));
+    }
+
+    @Test
     void processEvent_sittingLevelOrUnusedType_isLeftOut() {
         assertNull(StoreStudyInput.processEvent(event("focus.lost", "t1", 0, "{}")));
         assertNull(StoreStudyInput.processEvent(event("text.insert", "", 0, "{\"pos\":0,\"text\":\"a\"}")));

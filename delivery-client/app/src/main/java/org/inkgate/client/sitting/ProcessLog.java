@@ -1,10 +1,11 @@
 package org.inkgate.client.sitting;
 
 import java.util.Map;
+import org.inkgate.format.response.EventType;
 
 /**
  * Where everything a candidate does in a sitting goes. The researcher's whole view of the writing
- * process is this log, so callers record every event named in {@link EventTypes}. Implementations
+ * process is this log, so callers record every event of {@link EventType} (the format's vocabulary). Implementations
  * stamp each event with the monotonic and wall clocks when it is recorded, return at once (never
  * block the UI thread on disk), and make it durable within half a second.
  */
@@ -13,11 +14,12 @@ public interface ProcessLog {
     /**
      * Records one event now.
      *
-     * @param type   one of the {@link EventTypes} constants
-     * @param taskId the task it happened in, or null for sitting-level events
-     * @param data   the type's data fields, as listed in {@link EventTypes} (strings, numbers, booleans)
+     * @param type   the event's type
+     * @param taskId the task it happened in, or null for sitting-level events (as the type's level says)
+     * @param data   the type's data keys ({@link EventType#requiredKeys()}, {@link EventType#optionalKeys()}):
+     *               strings, numbers, booleans
      */
-    void record(String type, String taskId, Map<String, Object> data);
+    void record(EventType type, String taskId, Map<String, Object> data);
 
     /**
      * Offers the task's whole current text, so recovery does not have to replay the log from the
@@ -30,7 +32,7 @@ public interface ProcessLog {
     static ProcessLog discarding() {
         return new ProcessLog() {
             @Override
-            public void record(String type, String taskId, Map<String, Object> data) {
+            public void record(EventType type, String taskId, Map<String, Object> data) {
             }
 
             @Override

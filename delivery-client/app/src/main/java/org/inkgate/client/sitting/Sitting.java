@@ -50,6 +50,7 @@ import org.inkgate.format.bundle.TaskSpec;
 import org.inkgate.format.crypto.X25519;
 import org.inkgate.format.io.AtomicFiles;
 import org.inkgate.format.json.Json;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.ResponseDocument;
@@ -185,7 +186,7 @@ public final class Sitting implements AutoCloseable {
                 }
             }
         });
-        log.record(EventTypes.SITTING_START, null, Map.of("bundle", plan.manifestSha256(), "form", plan.formId(),
+        log.record(EventType.SITTING_START, null, Map.of("bundle", plan.manifestSha256(), "form", plan.formId(),
                 "candidate", plan.candidateNumber()));
         log.flush();
         return s;
@@ -281,7 +282,7 @@ public final class Sitting implements AutoCloseable {
         if (sittingWasRunning) {
             sittingCountdown.ifPresent(cd -> cd.charge(downMs));
         }
-        log.record(EventTypes.SITTING_RESUME, null, Map.of("downSeconds", downMs / 1000.0, "creditedSeconds", creditMs / 1000.0,
+        log.record(EventType.SITTING_RESUME, null, Map.of("downSeconds", downMs / 1000.0, "creditedSeconds", creditMs / 1000.0,
                 "by", "invigilator"));
         if (creditMs > 0 && (taskWasRunning || sittingWasRunning)) {
             if (taskWasRunning) {
@@ -290,7 +291,7 @@ public final class Sitting implements AutoCloseable {
             if (sittingWasRunning) {
                 sittingCountdown.ifPresent(cd -> cd.add(creditMs));
             }
-            log.record(EventTypes.TIME_ADDED, taskWasRunning ? currentTask : null,
+            log.record(EventType.TIME_ADDED, taskWasRunning ? currentTask : null,
                     Map.of("seconds", creditMs / 1000.0, "reason", "crash-credit"));
         }
         checkpoint();
@@ -380,7 +381,7 @@ public final class Sitting implements AutoCloseable {
     public void showScreen(String name) {
         requireOpen();
         screen = Objects.requireNonNull(name, "name");
-        log.record(EventTypes.NAV_SCREEN, currentTask, Map.of("screen", name));
+        log.record(EventType.NAV_SCREEN, currentTask, Map.of("screen", name));
         log.persist(c -> update(c, "UPDATE sitting SET screen = ? WHERE id = 1", name));
     }
 
@@ -416,13 +417,13 @@ public final class Sitting implements AutoCloseable {
         currentTask = taskId;
         log.persist(c -> update(c, "UPDATE sitting SET current_task = ? WHERE id = 1", taskId));
         ResourcePolicy policy = t.slot.policy();
-        log.record(EventTypes.TASK_START, taskId, Map.of("policy", policyJson(policy), "tools", toolNames(policy.offeredTools()),
+        log.record(EventType.TASK_START, taskId, Map.of("policy", policyJson(policy), "tools", toolNames(policy.offeredTools()),
                 "resumed", resumed, "condition", t.slot.conditionId()));
         if (!resumed) {
-            t.countdown.filter(cd -> cd.rosterExtraMillis() > 0).ifPresent(cd -> log.record(EventTypes.TIME_ADDED, taskId,
+            t.countdown.filter(cd -> cd.rosterExtraMillis() > 0).ifPresent(cd -> log.record(EventType.TIME_ADDED, taskId,
                     Map.of("seconds", cd.rosterExtraMillis() / 1000.0, "reason", "roster")));
         }
-        recovered.problem().ifPresent(p -> log.record(EventTypes.SITTING_RESUME, taskId, Map.of("replayProblem", p)));
+        recovered.problem().ifPresent(p -> log.record(EventType.TASK_REPLAY_PROBLEM, taskId, Map.of("problem", p)));
         t.countdown.ifPresent(Countdown::start);
         sittingCountdown.ifPresent(Countdown::start);
         sittingClockStarted = true;
@@ -454,7 +455,7 @@ public final class Sitting implements AutoCloseable {
             }
         });
         log.snapshot(taskId, finalText, finalText.length());
-        log.record(EventTypes.TASK_END, taskId, Map.of("reason", reasonName(reason), "words", wordCount));
+        log.record(EventType.TASK_END, taskId, Map.of("reason", reasonName(reason), "words", wordCount));
         long used = t.countdown.map(Countdown::usedMillis).orElse(0L);
         String useJson = new String(Json.writeLine(use), java.nio.charset.StandardCharsets.UTF_8);
         log.persist(c -> {
@@ -486,7 +487,7 @@ public final class Sitting implements AutoCloseable {
                 t.endedAt = now;
                 t.endReason = reason;
                 String id = t.spec.id();
-                log.record(EventTypes.TASK_END, id, Map.of("reason", reasonName(reason), "words", 0, "begun", false));
+                log.record(EventType.TASK_END, id, Map.of("reason", reasonName(reason), "words", 0, "begun", false));
                 log.persist(c -> update(c, "UPDATE tasks SET ended_at = ?, end_reason = ?, final_text = '', word_count = 0,"
                         + " tool_use = '{}' WHERE task_id = ?", now.toString(), reason.name(), id));
             }
@@ -538,7 +539,7 @@ public final class Sitting implements AutoCloseable {
         sittingCountdown.ifPresent(Countdown::stop);
         paused = true;
         pauseStartedMono = clock.monoNanos();
-        log.record(EventTypes.PAUSE_START, currentTask, Map.of("scope", "all"));
+        log.record(EventType.PAUSE_START, currentTask, Map.of("scope", "all"));
         checkpoint();
     }
 
@@ -550,7 +551,7 @@ public final class Sitting implements AutoCloseable {
         }
         paused = false;
         long pausedMillis = TimeUnit.NANOSECONDS.toMillis(clock.monoNanos() - pauseStartedMono);
-        log.record(EventTypes.PAUSE_END, currentTask, Map.of("pausedMillis", pausedMillis));
+        log.record(EventType.PAUSE_END, currentTask, Map.of("pausedMillis", pausedMillis));
         running().flatMap(t -> t.countdown).ifPresent(Countdown::start);
         if (sittingClockStarted && !submitted) {
             sittingCountdown.ifPresent(Countdown::start);
@@ -574,7 +575,7 @@ public final class Sitting implements AutoCloseable {
             tasks.get(target).countdown.ifPresent(cd -> cd.add(ms));
         }
         sittingCountdown.ifPresent(cd -> cd.add(ms));
-        log.record(EventTypes.TIME_ADDED, target, Map.of("seconds", ms / 1000.0, "reason", "invigilator"));
+        log.record(EventType.TIME_ADDED, target, Map.of("seconds", ms / 1000.0, "reason", "invigilator"));
         checkpoint();
     }
 
@@ -601,16 +602,16 @@ public final class Sitting implements AutoCloseable {
             String id = running.get().spec.id();
             OptionalInt warning = cd.dueWarning();
             if (warning.isPresent()) {
-                log.record(EventTypes.TIMER_WARNING, id, Map.of("minutesLeft", warning.getAsInt()));
+                log.record(EventType.TIMER_WARNING, id, Map.of("minutesLeft", warning.getAsInt()));
                 signals.add(new SittingSignal.TimeWarning(id, warning.getAsInt()));
             }
             if (cd.expiredNow()) {
-                log.record(EventTypes.TIMER_EXPIRED, id, Map.of("scope", "task"));
+                log.record(EventType.TIMER_EXPIRED, id, Map.of("scope", "task"));
                 signals.add(new SittingSignal.TaskTimeUp(id));
             }
         }
         if (sittingCountdown.isPresent() && sittingClockStarted && sittingCountdown.get().expiredNow()) {
-            log.record(EventTypes.TIMER_EXPIRED, null, Map.of("scope", "sitting"));
+            log.record(EventType.TIMER_EXPIRED, null, Map.of("scope", "sitting"));
             signals.add(new SittingSignal.SittingTimeUp());
         }
         if (clock.monoNanos() - lastCheckpointMono >= TimeUnit.MILLISECONDS.toNanos(CHECKPOINT_MILLIS)) {
@@ -673,7 +674,7 @@ public final class Sitting implements AutoCloseable {
         sittingCountdown.ifPresent(Countdown::stop);
         if (!endRecorded) {
             // a retry after the local copy failed does not end the sitting twice
-            log.record(EventTypes.SITTING_END, null, Map.of("reason", "submitted"));
+            log.record(EventType.SITTING_END, null, Map.of("reason", "submitted"));
             endRecorded = true;
         }
         checkpoint();

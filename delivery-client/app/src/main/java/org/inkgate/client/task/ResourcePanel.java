@@ -7,7 +7,7 @@ import javafx.scene.control.Tab;
 import javafx.scene.control.TabPane;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.packs.policy.Tool;
 
 /**
@@ -86,11 +86,11 @@ final class ResourcePanel extends VBox {
             return;
         }
         if (inView != null) {
-            events.record(EventTypes.PANEL_CLOSE, "tool", TaskEvents.wire(inView.tool()));
+            events.record(EventType.PANEL_CLOSE, "tool", TaskEvents.wire(inView.tool()));
         }
         inView = now;
         if (now != null) {
-            events.record(EventTypes.PANEL_OPEN, "tool", TaskEvents.wire(now.tool()));
+            events.record(EventType.PANEL_OPEN, "tool", TaskEvents.wire(now.tool()));
         }
     }
 }

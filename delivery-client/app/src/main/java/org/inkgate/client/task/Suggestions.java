@@ -5,7 +5,7 @@ import java.util.List;
 import javafx.scene.control.ContextMenu;
 import javafx.scene.control.MenuItem;
 import javafx.scene.control.SeparatorMenuItem;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.packs.policy.Tool;
 import org.inkgate.packs.spelling.CheckIssue;
 import org.inkgate.packs.spelling.SpellingChecker;
@@ -45,7 +45,7 @@ final class Suggestions {
 
     /** Records that the suggestions for this flag were put in front of the candidate. */
     void shown(CheckIssue i) {
-        events.record(EventTypes.SUGGESTION_SHOW, "tool", TaskEvents.wire(toolOf(i)), "rule", i.ruleId(), "pos", i.start(),
+        events.record(EventType.SUGGESTION_SHOW, "tool", TaskEvents.wire(toolOf(i)), "rule", i.ruleId(), "pos", i.start(),
                 "len", i.end() - i.start(), "word", word(i), "suggestions", String.join(" | ", i.suggestions()));
         tally.shown(toolOf(i));
     }
@@ -56,7 +56,7 @@ final class Suggestions {
             return; // frozen, or the flag went stale while the menu was open
         }
         String from = word(i);
-        events.record(EventTypes.SUGGESTION_ACCEPT, "tool", TaskEvents.wire(toolOf(i)), "rule", i.ruleId(), "pos", i.start(),
+        events.record(EventType.SUGGESTION_ACCEPT, "tool", TaskEvents.wire(toolOf(i)), "rule", i.ruleId(), "pos", i.start(),
                 "from", from, "to", replacement);
         tally.accepted(toolOf(i));
         area.changeAs(ChangeSource.SUGGESTION, () -> area.replaceText(i.start(), i.end(), replacement));
@@ -73,7 +73,7 @@ final class Suggestions {
             return;
         }
         checker.ignoreWord(word);
-        events.record(EventTypes.SUGGESTION_IGNORE, "tool", TaskEvents.wire(Tool.SPELLING), "rule", i.ruleId(), "word", word);
+        events.record(EventType.SUGGESTION_IGNORE, "tool", TaskEvents.wire(Tool.SPELLING), "rule", i.ruleId(), "word", word);
         tally.ignored(Tool.SPELLING);
         List<CheckIssue> same = new ArrayList<>();
         for (CheckIssue f : marks.flags().all()) {

@@ -4,12 +4,12 @@ import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.sitting.ProcessLog;
+import org.inkgate.format.response.EventType;
 import org.inkgate.packs.event.ToolEvent;
 import org.inkgate.packs.policy.Tool;
 
-/** The workspace's door to the process log: one task's events, with the fields {@link EventTypes} names. */
+/** The workspace's door to the process log: one task's events, with the data keys of its {@link EventType}. */
 final class TaskEvents {
 
     private final ProcessLog log;
@@ -21,7 +21,7 @@ final class TaskEvents {
     }
 
     /** Records an event with fields given as name, value, name, value... in the order written. */
-    void record(String type, Object... nameValue) {
+    void record(EventType type, Object... nameValue) {
         if (nameValue.length % 2 != 0) {
             throw new IllegalArgumentException("fields come in name/value pairs: " + nameValue.length + " given for " + type);
         }
@@ -39,10 +39,10 @@ final class TaskEvents {
     /** A lookup, an opened entry or a check, as the resource engines reported it. */
     void tool(ToolEvent e) {
         switch (e.action()) {
-            case QUERY -> record(EventTypes.TOOL_QUERY, "tool", wire(e.tool()), "pack", e.packId(), "query", e.query(),
+            case QUERY -> record(EventType.TOOL_QUERY, "tool", wire(e.tool()), "pack", e.packId(), "query", e.query(),
                     "hits", e.hitCount(), "micros", e.elapsedMicros());
-            case OPEN_ENTRY -> record(EventTypes.TOOL_OPEN, "tool", wire(e.tool()), "pack", e.packId(), "entry", e.entryId());
-            case CHECK -> record(EventTypes.CHECK_RUN, "issues", e.hitCount(), "micros", e.elapsedMicros());
+            case OPEN_ENTRY -> record(EventType.TOOL_OPEN, "tool", wire(e.tool()), "pack", e.packId(), "entry", e.entryId());
+            case CHECK -> record(EventType.CHECK_RUN, "issues", e.hitCount(), "micros", e.elapsedMicros());
             case IGNORE_WORD -> throw new IllegalArgumentException("an ignored word is logged with its rule: use ignored(...)");
         }
     }

@@ -25,7 +25,7 @@ import org.fxmisc.flowless.VirtualizedScrollPane;
 import org.inkgate.client.practice.PromptText;
 import org.inkgate.client.practice.WordCount;
 import org.inkgate.client.practice.ui.PromptView;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ToolUse;
 import org.inkgate.packs.broker.TaskTools;
 import org.inkgate.packs.policy.ResourcePolicy;
@@ -160,10 +160,10 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
             int pos = change.getPosition();
             String source = area.source().wire();
             if (!removed.isEmpty()) {
-                events.record(EventTypes.TEXT_DELETE, "pos", pos, "len", removed.length(), "text", removed, "source", source);
+                events.record(EventType.TEXT_DELETE, "pos", pos, "len", removed.length(), "text", removed, "source", source);
             }
             if (!inserted.isEmpty()) {
-                events.record(EventTypes.TEXT_INSERT, "pos", pos, "len", inserted.length(), "text", inserted, "source", source);
+                events.record(EventType.TEXT_INSERT, "pos", pos, "len", inserted.length(), "text", inserted, "source", source);
             }
             if (marks != null) {
                 marks.edited(new TextEdit(pos, removed, inserted));
@@ -284,7 +284,7 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
     }
 
     private void pasteRefused(PasteGate.Refuse refuse) {
-        events.record(EventTypes.PASTE_REFUSED, "reason", refuse.reason(), "len", refuse.length());
+        events.record(EventType.PASTE_REFUSED, "reason", refuse.reason(), "len", refuse.length());
         status.checkerNote(refuse.reason().equals(PasteGate.FORBIDDEN)
                 ? "Pasting is not allowed in this task."
                 : "Only text copied from your own answer can be pasted here.");
@@ -303,7 +303,7 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
             return;
         }
         IndexRange selection = area.getSelection();
-        events.record(EventTypes.TOOL_INSERT, "tool", TaskEvents.wire(tool), "entry", entryId, "pos", selection.getStart(), "text", text);
+        events.record(EventType.TOOL_INSERT, "tool", TaskEvents.wire(tool), "entry", entryId, "pos", selection.getStart(), "text", text);
         tally.inserted(tool);
         area.changeAs(ChangeSource.PANEL, () -> area.replaceSelection(text));
         area.requestFocus();

@@ -17,6 +17,7 @@ import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.sitting.submit.SubmissionResult;
 import org.inkgate.client.testutil.FakeClock;
 import org.inkgate.client.testutil.SittingFixtures;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.OpenedResponse;
 import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.ResponsePackageReader;
@@ -51,8 +52,8 @@ class SittingFlowTest {
             assertEquals("", t1.text());
             assertFalse(t1.resumed());
             type(s, "t1", "Dear Sam, plans changed.", clock);
-            s.log().record(EventTypes.TEXT_DELETE, "t1", Map.of("pos", 16, "len", 7, "text", "changed", "source", "typing"));
-            s.log().record(EventTypes.TEXT_INSERT, "t1", Map.of("pos", 16, "len", 5, "text", "moved", "source", "typing"));
+            s.log().record(EventType.TEXT_DELETE, "t1", Map.of("pos", 16, "len", 7, "text", "changed", "source", "typing"));
+            s.log().record(EventType.TEXT_INSERT, "t1", Map.of("pos", 16, "len", 5, "text", "moved", "source", "typing"));
             s.endTask("t1", EndReason.SUBMITTED, "Dear Sam, plans moved.", 4,
                     Map.of(Tool.SPELLING, new ToolUse(0, 0, 0, 2, 1, 0, 0), Tool.GLOSSARY, new ToolUse(9, 9, 9, 9, 9, 9, 9)));
             s.enterTask("t2");
@@ -86,9 +87,9 @@ class SittingFlowTest {
         assertEquals(Set.of(), r2.toolsOffered());
         assertEquals(Map.of("q1", "3"), opened.response().questionnaires().getFirst().answers());
         List<String> types = opened.events().stream().map(ProcessEvent::type).toList();
-        assertEquals(EventTypes.SITTING_START, types.getFirst());
-        assertEquals(EventTypes.SITTING_END, types.getLast());
-        assertTrue(types.containsAll(List.of(EventTypes.TASK_START, EventTypes.TASK_END, EventTypes.TIMER_EXPIRED, EventTypes.NAV_SCREEN)));
+        assertEquals(EventType.SITTING_START.wireName(), types.getFirst());
+        assertEquals(EventType.SITTING_END.wireName(), types.getLast());
+        assertTrue(types.containsAll(List.of(EventType.TASK_START.wireName(), EventType.TASK_END.wireName(), EventType.TIMER_EXPIRED.wireName(), EventType.NAV_SCREEN.wireName())));
     }
 
     @Test
@@ -149,7 +150,7 @@ class SittingFlowTest {
 
     private static void type(Sitting s, String task, String text, FakeClock clock) {
         for (int i = 0; i < text.length(); i++) {
-            s.log().record(EventTypes.TEXT_INSERT, task, Map.of("pos", i, "len", 1, "text", text.substring(i, i + 1), "source", "typing"));
+            s.log().record(EventType.TEXT_INSERT, task, Map.of("pos", i, "len", 1, "text", text.substring(i, i + 1), "source", "typing"));
             s.log().snapshot(task, text.substring(0, i + 1), i + 1);
             clock.advance(Duration.ofMillis(150));
         }

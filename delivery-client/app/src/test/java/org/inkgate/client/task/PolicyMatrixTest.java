@@ -14,7 +14,7 @@ import java.util.stream.Stream;
 import javafx.scene.Node;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.packs.broker.TaskTools;
 import org.inkgate.packs.policy.PastePolicy;
 import org.inkgate.packs.policy.ResourcePolicy;
@@ -141,11 +141,11 @@ class PolicyMatrixTest {
             robot.clickOn(start);
             assertTrue(inside(stage.getScene().getFocusOwner(), start), t + " control takes the click");
         }
-        for (RecordingLog.Event e : log.events(EventTypes.PANEL_OPEN)) {
+        for (RecordingLog.Event e : log.events(EventType.PANEL_OPEN)) {
             assertTrue(pages.contains(Tool.valueOf(((String) e.get("tool")).toUpperCase(java.util.Locale.ROOT))), "panel.open only for offered tools: " + e);
         }
         if (pages.isEmpty()) {
-            assertTrue(log.events(EventTypes.PANEL_OPEN).isEmpty());
+            assertTrue(log.events(EventType.PANEL_OPEN).isEmpty());
         }
     }
 

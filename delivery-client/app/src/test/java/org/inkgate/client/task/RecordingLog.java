@@ -3,7 +3,9 @@ package org.inkgate.client.task;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import org.inkgate.client.sitting.EventRecording;
 import org.inkgate.client.sitting.ProcessLog;
+import org.inkgate.format.response.EventType;
 
 /** A process log that keeps every event in memory, for tests (thread-safe: tools log from several threads). */
 final class RecordingLog implements ProcessLog {
@@ -21,8 +23,9 @@ final class RecordingLog implements ProcessLog {
     private final List<Snapshot> snapshots = new ArrayList<>();
 
     @Override
-    public synchronized void record(String type, String taskId, Map<String, Object> data) {
-        events.add(new Event(type, taskId, Map.copyOf(data.entrySet().stream()
+    public synchronized void record(EventType type, String taskId, Map<String, Object> data) {
+        assert EventRecording.keepsContract(type, taskId, data);
+        events.add(new Event(type.wireName(), taskId, Map.copyOf(data.entrySet().stream()
                 .filter(e -> e.getValue() != null).collect(java.util.stream.Collectors.toMap(Map.Entry::getKey, Map.Entry::getValue)))));
     }
 
@@ -35,8 +38,8 @@ final class RecordingLog implements ProcessLog {
         return List.copyOf(events);
     }
 
-    synchronized List<Event> events(String type) {
-        return events.stream().filter(e -> e.type().equals(type)).toList();
+    synchronized List<Event> events(EventType type) {
+        return events.stream().filter(e -> e.type().equals(type.wireName())).toList();
     }
 
     synchronized List<Snapshot> snapshots() {

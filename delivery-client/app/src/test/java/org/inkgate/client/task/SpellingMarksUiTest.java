@@ -11,7 +11,7 @@ import javafx.scene.control.ContextMenu;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import javafx.stage.Window;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.packs.broker.TaskTools;
 import org.inkgate.packs.policy.PastePolicy;
 import org.inkgate.packs.policy.ResourcePolicy;
@@ -69,7 +69,7 @@ class SpellingMarksUiTest {
         Shown.until("the flag on \"ferie\"", () -> workspace.marks().get().flags().all().size() == 1);
         assertEquals(List.of(SpellingMarks.SPELLING_STYLE), List.copyOf(styleAt(4)), "the word is underlined");
         assertEquals(List.of(), List.copyOf(styleAt(0)), "other words are not");
-        assertTrue(log.events(EventTypes.CHECK_RUN).size() >= 1);
+        assertTrue(log.events(EventType.CHECK_RUN).size() >= 1);
 
         // typing before the word moves its underline with it
         Shown.onFx(robot, () -> workspace.area().moveTo(0));
@@ -81,14 +81,14 @@ class SpellingMarksUiTest {
         Shown.onFx(robot, () -> workspace.area().moveTo(10));
         robot.press(KeyCode.SHIFT, KeyCode.F10).release(KeyCode.F10, KeyCode.SHIFT);
         Shown.until("the suggestion menu", () -> showingMenu() != null);
-        RecordingLog.Event shown = log.events(EventTypes.SUGGESTION_SHOW).get(0);
+        RecordingLog.Event shown = log.events(EventType.SUGGESTION_SHOW).get(0);
         assertEquals("ferie", shown.get("word"));
         assertEquals("ferry | fairy", shown.get("suggestions"));
         robot.clickOn("ferry");
         assertEquals("Oh. The ferry was late.", workspace.text());
-        RecordingLog.Event accepted = log.events(EventTypes.SUGGESTION_ACCEPT).get(0);
+        RecordingLog.Event accepted = log.events(EventType.SUGGESTION_ACCEPT).get(0);
         assertEquals(Map.of("tool", "spelling", "rule", "SCRIPTED_SPELLING", "pos", 8, "from", "ferie", "to", "ferry"), accepted.data());
-        assertTrue(log.events(EventTypes.TEXT_INSERT).stream().anyMatch(e -> "suggestion".equals(e.get("source")) && "ferry".equals(e.get("text"))));
+        assertTrue(log.events(EventType.TEXT_INSERT).stream().anyMatch(e -> "suggestion".equals(e.get("source")) && "ferry".equals(e.get("text"))));
         assertEquals(workspace.text(), LogReplay.replay("The ferie was late.", log.events()));
         assertEquals(1, workspace.toolUse().get(Tool.SPELLING).suggestionsShown());
         assertEquals(1, workspace.toolUse().get(Tool.SPELLING).suggestionsAccepted());
@@ -105,7 +105,7 @@ class SpellingMarksUiTest {
         robot.clickOn("Ignore this word in this task");
         assertEquals(0, workspace.marks().get().flags().all().size());
         assertEquals(Map.of("tool", "spelling", "rule", "SCRIPTED_SPELLING", "word", "ferie"),
-                log.events(EventTypes.SUGGESTION_IGNORE).get(0).data());
+                log.events(EventType.SUGGESTION_IGNORE).get(0).data());
         assertEquals(1, workspace.toolUse().get(Tool.SPELLING).suggestionsIgnored());
         assertTrue(styleAt(0).isEmpty() && styleAt(11).isEmpty());
     }
@@ -120,7 +120,7 @@ class SpellingMarksUiTest {
         robot.press(KeyCode.SHIFT, KeyCode.F10).release(KeyCode.F10, KeyCode.SHIFT);
         robot.rightClickOn("#answer");
         assertEquals(null, showingMenu(), "no menu at all");
-        assertTrue(log.events(EventTypes.SUGGESTION_SHOW).isEmpty());
+        assertTrue(log.events(EventType.SUGGESTION_SHOW).isEmpty());
         assertTrue(robot.lookup("#resourcePanel").tryQuery().isEmpty(), "underline-only alone offers nothing for a panel");
         assertEquals("The ferie was late.", workspace.text(), "Shift+F10 typed nothing");
     }
@@ -130,7 +130,7 @@ class SpellingMarksUiTest {
         open(robot, SpellingMode.OFF, "The ferie was late.");
         assertTrue(workspace.marks().isEmpty());
         assertTrue(styleAt(4).isEmpty());
-        assertTrue(log.events(EventTypes.CHECK_RUN).isEmpty());
+        assertTrue(log.events(EventType.CHECK_RUN).isEmpty());
         assertFalse(workspace.toolUse().containsKey(Tool.SPELLING));
     }
 }

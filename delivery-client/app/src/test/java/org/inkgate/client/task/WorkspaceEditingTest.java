@@ -11,7 +11,7 @@ import javafx.scene.input.InputMethodHighlight;
 import javafx.scene.input.InputMethodTextRun;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.packs.broker.TaskTools;
 import org.inkgate.packs.policy.PastePolicy;
 import org.inkgate.packs.policy.ResourcePolicy;
@@ -65,8 +65,8 @@ class WorkspaceEditingTest {
         robot.write("early.");
         assertEquals("The ferry is early.", workspace.text());
         assertEquals(replayed(""), workspace.text());
-        assertTrue(log.events(EventTypes.TEXT_INSERT).stream().allMatch(e -> "typing".equals(e.get("source"))));
-        assertEquals(4, log.events(EventTypes.TEXT_DELETE).size(), "each backspace is one delete");
+        assertTrue(log.events(EventType.TEXT_INSERT).stream().allMatch(e -> "typing".equals(e.get("source"))));
+        assertEquals(4, log.events(EventType.TEXT_DELETE).size(), "each backspace is one delete");
         assertEquals(4, workspace.wordCount());
         assertEquals("4 words", robot.lookup("#wordCount").queryLabeled().getText());
         assertEquals("The ferry is early.", log.snapshots().get(log.snapshots().size() - 1).text(), "the newest text is offered as a snapshot");
@@ -75,7 +75,7 @@ class WorkspaceEditingTest {
     @Test
     void startText_isNotLoggedAsTypingAndTheCaretGoesWhereAsked(FxRobot robot) throws Exception {
         open(robot, PastePolicy.NONE, new FakeClipboard(null), "Recovered words");
-        assertEquals(List.of(), log.events(EventTypes.TEXT_INSERT));
+        assertEquals(List.of(), log.events(EventType.TEXT_INSERT));
         assertEquals("Recovered words".length(), workspace.caret());
         robot.write(" and more");
         assertEquals("Recovered words and more", replayed("Recovered words"));
@@ -87,12 +87,12 @@ class WorkspaceEditingTest {
         robot.write("calm sea");
         robot.press(KeyCode.CONTROL, KeyCode.Z).release(KeyCode.Z, KeyCode.CONTROL);
         assertEquals("", workspace.text(), "undo takes back the typing");
-        List<RecordingLog.Event> undone = log.events(EventTypes.TEXT_DELETE);
+        List<RecordingLog.Event> undone = log.events(EventType.TEXT_DELETE);
         assertFalse(undone.isEmpty());
         assertTrue(undone.stream().allMatch(e -> "undo".equals(e.get("source"))), undone.toString());
         robot.press(KeyCode.CONTROL, KeyCode.Y).release(KeyCode.Y, KeyCode.CONTROL);
         assertEquals("calm sea", workspace.text());
-        RecordingLog.Event last = log.events(EventTypes.TEXT_INSERT).get(log.events(EventTypes.TEXT_INSERT).size() - 1);
+        RecordingLog.Event last = log.events(EventType.TEXT_INSERT).get(log.events(EventType.TEXT_INSERT).size() - 1);
         assertEquals("redo", last.get("source"));
         assertEquals(workspace.text(), replayed(""));
     }
@@ -103,7 +103,7 @@ class WorkspaceEditingTest {
         open(robot, PastePolicy.WITHIN_RESPONSE, clipboard, "My answer.");
         robot.press(KeyCode.CONTROL, KeyCode.V).release(KeyCode.V, KeyCode.CONTROL);
         assertEquals("My answer.", workspace.text());
-        RecordingLog.Event refused = log.events(EventTypes.PASTE_REFUSED).get(0);
+        RecordingLog.Event refused = log.events(EventType.PASTE_REFUSED).get(0);
         assertEquals(Map.of("reason", "outside-clipboard", "len", "text from another program".length()), refused.data());
         assertEquals("Only text copied from your own answer can be pasted here.", robot.lookup("#checkStatus").queryLabeled().getText());
     }
@@ -117,13 +117,13 @@ class WorkspaceEditingTest {
         Shown.onFx(robot, () -> workspace.area().moveTo(8));
         robot.press(KeyCode.CONTROL, KeyCode.V).release(KeyCode.V, KeyCode.CONTROL);
         assertEquals("harbour harbour", workspace.text());
-        RecordingLog.Event pasted = log.events(EventTypes.TEXT_INSERT).get(0);
+        RecordingLog.Event pasted = log.events(EventType.TEXT_INSERT).get(0);
         assertEquals("paste", pasted.get("source"));
         // another program replaces the clipboard: that text is refused
         clipboard.fromOutside("harbour!");
         robot.press(KeyCode.CONTROL, KeyCode.V).release(KeyCode.V, KeyCode.CONTROL);
         assertEquals("harbour harbour", workspace.text());
-        assertEquals("outside-clipboard", log.events(EventTypes.PASTE_REFUSED).get(0).get("reason"));
+        assertEquals("outside-clipboard", log.events(EventType.PASTE_REFUSED).get(0).get("reason"));
     }
 
     @Test
@@ -139,7 +139,7 @@ class WorkspaceEditingTest {
         clipboard.fromOutside("quay");
         robot.press(KeyCode.CONTROL, KeyCode.V).release(KeyCode.V, KeyCode.CONTROL);
         assertEquals("quay", workspace.text());
-        assertEquals("paste-forbidden", log.events(EventTypes.PASTE_REFUSED).get(0).get("reason"));
+        assertEquals("paste-forbidden", log.events(EventType.PASTE_REFUSED).get(0).get("reason"));
         assertEquals("Pasting is not allowed in this task.", robot.lookup("#checkStatus").queryLabeled().getText());
     }
 
@@ -173,8 +173,8 @@ class WorkspaceEditingTest {
         assertTrue(workspace.area().isFocused(), "the glossary shortcut does nothing while frozen");
         Shown.onFx(robot, () -> workspace.insert(org.inkgate.packs.policy.Tool.GLOSSARY, "f001", "ferry"));
         assertEquals("Text.", workspace.text());
-        assertTrue(log.events(EventTypes.TOOL_INSERT).isEmpty());
-        assertTrue(log.events(EventTypes.TOOL_QUERY).isEmpty());
+        assertTrue(log.events(EventType.TOOL_INSERT).isEmpty());
+        assertTrue(log.events(EventType.TOOL_QUERY).isEmpty());
     }
 
     @Test
@@ -188,9 +188,9 @@ class WorkspaceEditingTest {
         WritingWorkspace w = Shown.show(robot, stage, TestTools.context(tools, log, "", DisplaySettings.standard()), new FakeClipboard(null));
         robot.interact(w::close);
         assertTrue(made[0].closed, "the checker's thread is stopped");
-        assertEquals(List.of("glossary"), log.events(EventTypes.PANEL_CLOSE).stream().map(e -> e.get("tool")).toList());
+        assertEquals(List.of("glossary"), log.events(EventType.PANEL_CLOSE).stream().map(e -> e.get("tool")).toList());
         robot.interact(w::close); // a second close changes nothing
-        assertEquals(1, log.events(EventTypes.PANEL_CLOSE).size());
+        assertEquals(1, log.events(EventType.PANEL_CLOSE).size());
     }
 
     @Test
@@ -213,7 +213,7 @@ class WorkspaceEditingTest {
         });
         assertEquals("\u6A4B", workspace.text());
         assertEquals(workspace.text(), replayed(""));
-        assertEquals("typing", log.events(EventTypes.TEXT_INSERT).get(log.events(EventTypes.TEXT_INSERT).size() - 1).get("source"));
+        assertEquals("typing", log.events(EventType.TEXT_INSERT).get(log.events(EventType.TEXT_INSERT).size() - 1).get("source"));
     }
 
     @Test

@@ -22,7 +22,7 @@ public abstract sealed class FormatRefusal extends Exception
      * control, C1, bidirectional and line-separator characters are shown as \\uXXXX so that a
      * message can never forge console or log lines or reorder what an invigilator reads.
      */
-    static String printable(String text) {
+    public static String printable(String text) {
         StringBuilder out = new StringBuilder(text.length());
         text.codePoints().forEach(c -> {
             boolean hidden = c < 0x20 || (c >= 0x7f && c <= 0x9f) || c == 0x061c || c == 0x200e || c == 0x200f

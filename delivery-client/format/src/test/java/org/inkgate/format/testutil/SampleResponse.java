@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.UUID;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.ResponseDocument;
@@ -37,16 +38,16 @@ public final class SampleResponse {
         return document(UUID.nameUUIDFromBytes("sample".getBytes(java.nio.charset.StandardCharsets.UTF_8)).toString());
     }
 
-    /** A typing session of {@code count} events: inserts with a deletion every fifth. */
+    /** A typing session of {@code count} events in task t1: inserts with a deletion every fifth, keeping the event contract. */
     public static List<ProcessEvent> events(int count) {
         List<ProcessEvent> events = new ArrayList<>();
         for (int i = 1; i <= count; i++) {
             boolean delete = i % 5 == 0;
             Map<String, Object> data = delete
-                    ? Map.of("pos", i - 1, "len", 1, "text", "x")
-                    : Map.of("pos", i - 1, "len", 1, "text", String.valueOf((char) ('a' + i % 26)));
+                    ? Map.of("pos", i - 1, "len", 1, "text", "x", "source", "typing")
+                    : Map.of("pos", i - 1, "len", 1, "text", String.valueOf((char) ('a' + i % 26)), "source", "typing");
             events.add(new ProcessEvent(i, START.plusMillis(180L * i), 1_000_000_000L + 180_000_000L * i,
-                    delete ? "text.delete" : "text.insert", "t1", data));
+                    delete ? EventType.TEXT_DELETE : EventType.TEXT_INSERT, "t1", data));
         }
         return events;
     }

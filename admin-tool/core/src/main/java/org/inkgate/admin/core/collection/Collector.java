@@ -22,6 +22,7 @@ import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.crypto.Sha256;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.response.EventContract;
 import org.inkgate.format.response.OpenedResponse;
 import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.response.ResponsePackageReader;
@@ -37,8 +38,10 @@ import org.inkgate.admin.core.store.StoreException;
  * stored in file order by the calling thread, so a killed import leaves only whole packages and
  * a rerun imports the rest. Importing the same bytes again changes nothing; a copy with the
  * same package id and content changes nothing; a different package for a candidate who already
- * has one is kept beside it and shows up as a conflict; a refused package is listed with its
- * reason and changes nothing else.
+ * has one is kept beside it and shows up as a conflict; a package whose process log breaks the
+ * event contract ({@link EventContract}: unknown type, missing data key, wrong level, a task not in
+ * the form) is refused naming the events; a refused package is listed with its reason and changes
+ * nothing else.
  */
 public final class Collector {
 
@@ -184,6 +187,13 @@ public final class Collector {
             return refuse(r, "form-mismatch", name + ": " + mismatch + ". The client that wrote it did not follow the"
                     + " signed bundle; keep the file and report it");
         }
+        String broken = contractBreaches(d, opened.events());
+        if (broken != null) {
+            return refuse(r, "event-contract", name + ": " + broken + ". Nothing of it was counted. The client that wrote it"
+                    + " did not keep the event contract (docs/formats.md, \"Event types\"); keep the file and report it with"
+                    + " the client version \"" + org.inkgate.format.refusal.FormatRefusal.printable(shorten(d.clientVersion()))
+                    + "\"");
+        }
         if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()) {
             return new Outcome.SameAsImported(name, d.packageId());
         }
@@ -197,6 +207,33 @@ public final class Collector {
     private Outcome refuse(Read r, String reason, String message) throws StoreException {
         store.recordRefusal(r.sha256(), r.file().toString(), reason, message);
         return new Outcome.Refused(r.file().toString(), reason, message);
+    }
+
+    /** How many broken events a refusal lists before it only counts the rest. */
+    static final int LISTED_BREACHES = 5;
+
+    /**
+     * Null when every event keeps the contract of {@link EventContract}; otherwise what breaks it,
+     * event by event (seq and type), so a person can find the lines in events.jsonl.
+     */
+    static String contractBreaches(ResponseDocument d, List<org.inkgate.format.response.ProcessEvent> events) {
+        List<EventContract.Violation> v = EventContract.check(d, events);
+        if (v.isEmpty()) {
+            return null;
+        }
+        StringBuilder out = new StringBuilder("its process log (events.jsonl) breaks the event contract "
+                + v.size() + (v.size() == 1 ? " time: " : " times: "));
+        for (int i = 0; i < Math.min(LISTED_BREACHES, v.size()); i++) {
+            out.append(i == 0 ? "" : "; ").append(v.get(i).describe());
+        }
+        if (v.size() > LISTED_BREACHES) {
+            out.append("; and ").append(v.size() - LISTED_BREACHES).append(" more");
+        }
+        return out.toString();
+    }
+
+    private static String shorten(String s) {
+        return s == null ? "" : s.length() > 40 ? s.substring(0, 40) + "..." : s;
     }
 
     /** The response must follow its form in the signed bundle: the same tasks, conditions and policies in order. */

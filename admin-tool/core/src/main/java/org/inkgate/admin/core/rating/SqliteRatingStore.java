@@ -841,6 +841,57 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         });
     }
 
+    /**
+     * The current ratings and final scores of every rated response of the exam, by sitting and task
+     * (the QTI results export writes them per response package).
+     */
+    public synchronized Map<ResponseScores.Key, ResponseScores> scoresByResponse() throws RatingException {
+        return read("reading scores", () -> {
+            Map<ResponseScores.Key, Map<String, Map<String, Integer>>> ratings = new java.util.LinkedHashMap<>();
+            Map<ResponseScores.Key, Map<String, RatingDesk.Kind>> kinds = new HashMap<>();
+            each("SELECT a.sitting_id, a.task_id, a.rater_id, a.kind, g.criterion_id, g.score FROM ratings g"
+                    + " JOIN rating_assignments a ON a.assignment_id = g.assignment_id"
+                    + " JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=?"
+                    + " ORDER BY a.sitting_id, a.task_id, a.kind DESC, a.rater_id, g.criterion_id", rs -> {
+                        var key = new ResponseScores.Key(rs.getLong(1), rs.getString(2));
+                        ratings.computeIfAbsent(key, k -> new java.util.LinkedHashMap<>())
+                                .computeIfAbsent(rs.getString(3), k -> new TreeMap<>()).put(rs.getString(5), rs.getInt(6));
+                        kinds.computeIfAbsent(key, k -> new HashMap<>()).put(rs.getString(3), kind(rs.getString(4)));
+                    }, examId);
+            Map<ResponseScores.Key, Map<String, Double>> finals = new HashMap<>();
+            Map<ResponseScores.Key, String> methods = new HashMap<>();
+            each("SELECT f.sitting_id, f.task_id, f.criterion_id, f.score, f.method FROM final_scores f"
+                    + " JOIN sittings s ON s.sitting_id = f.sitting_id WHERE s.exam_id=?", rs -> {
+                        var key = new ResponseScores.Key(rs.getLong(1), rs.getString(2));
+                        finals.computeIfAbsent(key, k -> new TreeMap<>()).put(rs.getString(3), rs.getDouble(4));
+                        methods.put(key, rs.getString(5));
+                    }, examId);
+            Map<ResponseScores.Key, ResponseScores> out = new java.util.LinkedHashMap<>();
+            java.util.Set<ResponseScores.Key> keys = new java.util.LinkedHashSet<>(ratings.keySet());
+            keys.addAll(finals.keySet());
+            for (var key : keys) {
+                List<ResponseScores.Rating> list = new ArrayList<>();
+                ratings.getOrDefault(key, Map.of()).forEach((rater, scores) -> list.add(
+                        new ResponseScores.Rating(rater, kinds.get(key).get(rater), scores)));
+                out.put(key, new ResponseScores(list, finals.getOrDefault(key, Map.of()), methods.get(key)));
+            }
+            return out;
+        });
+    }
+
+    /** Whether the store holds a rubric for the exam, the precondition of {@link #open}; false when there is no store. */
+    public static boolean hasRubric(Path file, String examId) throws RatingException {
+        if (!Files.isRegularFile(file)) {
+            return false;
+        }
+        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath())) {
+            return !query(c, "SELECT 1 FROM sqlite_master WHERE type='table' AND name='rubric_criteria'", rs -> 1).isEmpty()
+                    && !query(c, "SELECT 1 FROM rubric_criteria WHERE exam_id=? LIMIT 1", rs -> 1, examId).isEmpty();
+        } catch (SQLException e) {
+            throw new RatingException("cannot read the results store " + file + ": " + e.getMessage(), e);
+        }
+    }
+
     /** Responses with a rating assignment but no final score yet. */
     public synchronized int pendingResponses() throws RatingException {
         return read("counting pending responses", () -> count("SELECT COUNT(*) FROM (SELECT DISTINCT a.sitting_id, a.task_id"

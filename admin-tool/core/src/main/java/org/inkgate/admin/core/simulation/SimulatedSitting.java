@@ -16,6 +16,8 @@ import org.inkgate.format.bundle.FormSlot;
 import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.QuestionItem;
 import org.inkgate.format.bundle.QuestionnaireSpec;
+import org.inkgate.format.json.Json;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.ResponseDocument;
@@ -87,30 +89,68 @@ public final class SimulatedSitting {
                 manifestSha256, candidateNumber, "seat-" + candidateNumber, formId, "simulated", START, t, tasks, answers);
     }
 
-    /** A typing log of {@code count} events spread over the document's tasks. */
+    /**
+     * A log of {@code count} events spread over the document's tasks, keeping the event contract
+     * ({@link EventType}): each task opens with {@code task.start} and, where it offers tools, the
+     * first page in view ({@code panel.open}, closed just before the task ends); typing appends a letter, every seventh event deletes
+     * the last one, every 97th is a lookup where a glossary or dictionary is offered; the task's
+     * last event is {@code task.end}. Replaying the text events gives a text of letters (the
+     * document's texts are filler words and do not match it).
+     */
     public static List<ProcessEvent> events(ResponseDocument d, int count, long seed) {
         SplittableRandom random = new SplittableRandom(seed);
         List<ProcessEvent> events = new ArrayList<>();
         int perTask = Math.max(1, count / Math.max(1, d.tasks().size()));
-        long mono = 1_000_000_000L;
+        long[] mono = {1_000_000_000L};
         for (TaskResponse task : d.tasks()) {
-            Instant at = task.startedAt();
-            for (int i = 0; i < perTask && events.size() < count; i++) {
-                String type = i == 0 ? "task.start" : !task.toolsOffered().isEmpty() && i % 97 == 0 ? "tool.query"
-                        : i % 7 == 0 ? "text.delete" : "text.insert";
-                Map<String, Object> data = switch (type) {
-                    case "text.insert" -> Map.of("pos", i, "len", 1, "text", String.valueOf((char) ('a' + random.nextInt(26))));
-                    case "text.delete" -> Map.of("pos", i, "len", 1);
-                    case "tool.query" -> Map.of("tool", "spelling", "query", "simulated");
-                    default -> Map.of();
-                };
+            Instant[] at = {task.startedAt()};
+            StringBuilder typed = new StringBuilder();
+            Tool page = task.toolsOffered().stream().sorted().findFirst().orElse(null);
+            Tool lookup = task.toolsOffered().contains(Tool.GLOSSARY) ? Tool.GLOSSARY
+                    : task.toolsOffered().contains(Tool.DICTIONARY) ? Tool.DICTIONARY : null;
+            java.util.function.BiConsumer<EventType, Map<String, Object>> add = (type, data) -> {
                 long step = 50 + random.nextInt(400);
-                at = at.plusMillis(step);
-                mono += step * 1_000_000L;
-                events.add(new ProcessEvent(events.size() + 1, at, mono, type, task.taskId(), data));
+                at[0] = at[0].plusMillis(step);
+                mono[0] += step * 1_000_000L;
+                events.add(new ProcessEvent(events.size() + 1, at[0], mono[0], type, task.taskId(), data));
+            };
+            for (int i = 0; i < perTask && events.size() < count; i++) {
+                boolean last = i == perTask - 1 || events.size() == count - 1;
+                if (i == 0) {
+                    add.accept(EventType.TASK_START, Map.of("policy", new String(Json.writeLine(task.policy()),
+                            java.nio.charset.StandardCharsets.UTF_8), "tools", toolNames(task.toolsOffered()),
+                            "condition", task.conditionId(), "resumed", false));
+                } else if (last) {
+                    add.accept(EventType.TASK_END, Map.of("reason", "submitted", "words", task.wordCount()));
+                } else if (i == 1 && page != null) {
+                    add.accept(EventType.PANEL_OPEN, Map.of("tool", wire(page)));
+                } else if (i == perTask - 2 && page != null) {
+                    add.accept(EventType.PANEL_CLOSE, Map.of("tool", wire(page)));
+                } else if (lookup != null && i % 97 == 0) {
+                    add.accept(EventType.TOOL_QUERY, Map.of("tool", wire(lookup), "pack", "simulated-pack",
+                            "query", "simulated", "hits", 0, "micros", 100));
+                } else if (i % 7 == 0 && !typed.isEmpty()) {
+                    int pos = typed.length() - 1;
+                    String removed = typed.substring(pos);
+                    typed.setLength(pos);
+                    add.accept(EventType.TEXT_DELETE, Map.of("pos", pos, "len", 1, "text", removed, "source", "typing"));
+                } else {
+                    String letter = String.valueOf((char) ('a' + random.nextInt(26)));
+                    add.accept(EventType.TEXT_INSERT, Map.of("pos", typed.length(), "len", 1, "text", letter,
+                            "source", "typing"));
+                    typed.append(letter);
+                }
             }
         }
         return events;
+    }
+
+    private static String wire(Tool tool) {
+        return tool.name().toLowerCase(java.util.Locale.ROOT);
+    }
+
+    private static String toolNames(java.util.Set<Tool> tools) {
+        return String.join(",", tools.stream().sorted().map(SimulatedSitting::wire).toList());
     }
 
     /** Writes one candidate's simulated package; returns its package id. */

@@ -26,10 +26,15 @@ public record Sitting(ExamSource exam, List<RosterCandidate> roster, Assignment 
         BundleManifest manifest, String manifestSha256) {
 
     public static Sitting make(Path dir, int seats) throws Exception {
+        return make(dir, seats, "C%03d");
+    }
+
+    /** The same, with candidate numbers from {@code numberFormat} (e.g. {@code %04d}: numbers that start with a digit). */
+    public static Sitting make(Path dir, int seats, String numberFormat) throws Exception {
         ExamSource exam = ExamSourceReader.read(ExamFolders.valid(dir.resolve("exam-source")));
         List<RosterCandidate> roster = new ArrayList<>();
         for (int i = 1; i <= seats; i++) {
-            roster.add(new RosterCandidate(String.format("C%03d", i), i % 3 == 0 ? "B2" : "B1", "", 0, false, false,
+            roster.add(new RosterCandidate(String.format(numberFormat, i), i % 3 == 0 ? "B2" : "B1", "", 0, false, false,
                     java.util.Map.of("invented_name", "Invented Person " + i)));
         }
         Assignment assignment = FormAssigner.assign(roster.stream()

@@ -2,7 +2,7 @@ package org.inkgate.client.sitting.replay;
 
 import java.util.List;
 import java.util.Objects;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 
 /**
@@ -33,8 +33,8 @@ public final class TextReplay {
             if (!taskId.equals(e.task())) {
                 continue;
             }
-            boolean insert = EventTypes.TEXT_INSERT.equals(e.type());
-            boolean delete = EventTypes.TEXT_DELETE.equals(e.type());
+            boolean insert = EventType.TEXT_INSERT.wireName().equals(e.type());
+            boolean delete = EventType.TEXT_DELETE.wireName().equals(e.type());
             if (!insert && !delete) {
                 continue;
             }

@@ -32,7 +32,6 @@ import javafx.util.Duration;
 import org.inkgate.client.practice.PromptText;
 import org.inkgate.client.practice.TaskWording;
 import org.inkgate.client.practice.ui.RefusalView;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.practice.WordCount;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.replay.ReplayException;
@@ -76,6 +75,7 @@ import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.bundle.TaskSpec;
 import org.inkgate.format.bundle.WordGuidance;
 import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.TaskResponse.EndReason;
 import org.inkgate.packs.spelling.EnglishVariant;
@@ -279,14 +279,9 @@ public final class SittingFlow {
             if (!PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())) {
                 return "That is not this exam's invigilator PIN. Enter it again.";
             }
-            try {
-                Files.createDirectories(input.outputFolder());
-            } catch (IOException e) {
-                return "The output folder " + input.outputFolder() + " cannot be created (" + e.getMessage()
-                        + "). Choose a folder on a writable disk.";
-            }
-            if (!Files.isWritable(input.outputFolder())) {
-                return "The output folder " + input.outputFolder() + " is not writable. Choose another folder.";
+            String outputProblem = outputProblem(input.outputFolder());
+            if (outputProblem != null) {
+                return outputProblem;
             }
             if (bundle.sealed()) {
                 try {
@@ -784,13 +779,13 @@ public final class SittingFlow {
 
     private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
             java.time.Duration down) {
-        work(() -> PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin()), ok -> {
-            if (!ok) {
-                screen.showError("That is not this exam's invigilator PIN. Enter it again.");
-                return;
-            }
-            if (input.outputFolder() == null) {
-                screen.showError("Enter the output folder where response packages go.");
+        // the output folder is made and checked as at set-up: the folder proposed here (data/outbox) may not exist yet
+        work(() -> !PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())
+                ? "That is not this exam's invigilator PIN. Enter it again."
+                : input.outputFolder() == null ? "Enter the output folder where response packages go."
+                : outputProblem(input.outputFolder()), problem -> {
+            if (problem != null) {
+                screen.showError(problem);
                 return;
             }
             try {
@@ -810,6 +805,20 @@ public final class SittingFlow {
                     ? "; that time was given back" : "; that time was not given back"));
             continueRecovered(found);
         });
+    }
+
+    /** Makes the output folder if needed; what is wrong with it, or null when packages can be written there. */
+    private static String outputProblem(Path folder) {
+        try {
+            Files.createDirectories(folder);
+        } catch (IOException e) {
+            return "The output folder " + folder + " cannot be created (" + e.getMessage()
+                    + "). Choose a folder on a writable disk.";
+        }
+        if (!Files.isWritable(folder)) {
+            return "The output folder " + folder + " is not writable. Choose another folder.";
+        }
+        return null;
     }
 
     /** Shows what the candidate continues with after a restart, with the time left after the invigilator's choice. */
@@ -988,7 +997,7 @@ public final class SittingFlow {
     private void exitByInvigilator() {
         if (sitting != null && !sitting.submitted()) {
             // not an end of the sitting: it stays in the data folder and resumes on the next start
-            sitting.log().record(EventTypes.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
+            sitting.log().record(EventType.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
         }
         exitApplication();
     }
@@ -1004,14 +1013,14 @@ public final class SittingFlow {
     private void onFocusLost() {
         focusLine("Focus lost");
         if (sitting != null) {
-            sitting.log().record(EventTypes.FOCUS_LOST, currentTaskId(), Map.of());
+            sitting.log().record(EventType.FOCUS_LOST, currentTaskId(), Map.of());
         }
     }
 
     private void onFocusReturned(long awayMillis) {
         focusLine("Focus returned after " + TimeText.duration(awayMillis));
         if (sitting != null) {
-            sitting.log().record(EventTypes.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
+            sitting.log().record(EventType.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
         }
     }
 

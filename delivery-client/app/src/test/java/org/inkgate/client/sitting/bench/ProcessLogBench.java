@@ -9,10 +9,10 @@ import java.sql.Statement;
 import java.util.Arrays;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicBoolean;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.sitting.SittingClock;
 import org.inkgate.client.sitting.store.SittingDatabase;
 import org.inkgate.client.sitting.store.SqliteProcessLog;
+import org.inkgate.format.response.EventType;
 
 /**
  * Bench command (not a test): how long {@link SqliteProcessLog#record} plus
@@ -50,7 +50,7 @@ public final class ProcessLogBench {
                     int pos = text.length();
                     text.append(key);
                     long t0 = System.nanoTime();
-                    log.record(EventTypes.TEXT_INSERT, "t1", Map.of("pos", pos, "len", 1, "text", key, "source", "typing"));
+                    log.record(EventType.TEXT_INSERT, "t1", Map.of("pos", pos, "len", 1, "text", key, "source", "typing"));
                     log.snapshot("t1", text.toString(), text.length());
                     long t1 = System.nanoTime();
                     callNanos[i] = t1 - t0;

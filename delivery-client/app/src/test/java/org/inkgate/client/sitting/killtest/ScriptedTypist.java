@@ -8,7 +8,6 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
 import java.util.Map;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.SittingClock;
 import org.inkgate.client.sitting.TaskStart;
@@ -16,6 +15,7 @@ import org.inkgate.client.sitting.recovery.RecoveryScan;
 import org.inkgate.client.sitting.recovery.UnfinishedSitting;
 import org.inkgate.client.sitting.store.ClientDataFolder;
 import org.inkgate.client.testutil.SittingFixtures;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.testutil.SampleExam;
 
 /**
@@ -51,14 +51,14 @@ public final class ScriptedTypist {
                     int from = Character.isLowSurrogate(text.charAt(end - 1)) && end >= 2 ? end - 2 : end - 1;
                     String removed = text.substring(from, end);
                     text.delete(from, end);
-                    sitting.log().record(EventTypes.TEXT_DELETE, task,
+                    sitting.log().record(EventType.TEXT_DELETE, task,
                             Map.of("pos", from, "len", removed.length(), "text", removed, "source", "typing"));
                 }
             } else {
                 String typed = Character.toString(key);
                 int pos = text.length();
                 text.append(typed);
-                sitting.log().record(EventTypes.TEXT_INSERT, task,
+                sitting.log().record(EventType.TEXT_INSERT, task,
                         Map.of("pos", pos, "len", typed.length(), "text", typed, "source", "typing"));
             }
             sitting.log().snapshot(task, text.toString(), text.length());

@@ -10,13 +10,13 @@ import java.sql.Statement;
 import java.time.Duration;
 import java.util.List;
 import java.util.Map;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.TaskStart;
 import org.inkgate.client.sitting.store.ClientDataFolder;
 import org.inkgate.client.sitting.store.SittingDatabase;
 import org.inkgate.client.testutil.FakeClock;
 import org.inkgate.client.testutil.SittingFixtures;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.TaskResponse.EndReason;
 import org.inkgate.format.testutil.SampleExam;
 import org.junit.jupiter.api.Test;
@@ -38,7 +38,7 @@ class RecoveryTest {
         clock.advance(Duration.ofSeconds(3));
         s.log().flush();
         insert(s, 9, " leaves");
-        s.log().record(EventTypes.TEXT_DELETE, "t1", Map.of("pos", 0, "len", 4, "text", "The ", "source", "typing"));
+        s.log().record(EventType.TEXT_DELETE, "t1", Map.of("pos", 0, "len", 4, "text", "The ", "source", "typing"));
         // no snapshot was offered after the last two changes, so closing leaves the snapshot as it was:
         // the state a killed process leaves (the kill tests do it for real)
         s.close();
@@ -108,6 +108,6 @@ class RecoveryTest {
     }
 
     private static void insert(Sitting s, int pos, String text) {
-        s.log().record(EventTypes.TEXT_INSERT, "t1", Map.of("pos", pos, "len", text.length(), "text", text, "source", "typing"));
+        s.log().record(EventType.TEXT_INSERT, "t1", Map.of("pos", pos, "len", text.length(), "text", text, "source", "typing"));
     }
 }

@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Random;
 import javax.swing.text.PlainDocument;
-import org.inkgate.client.sitting.EventTypes;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 import org.junit.jupiter.api.Test;
 
@@ -37,12 +37,12 @@ class TextReplayTest {
                 int len = 1 + random.nextInt(Math.min(8, length - pos));
                 String removed = reference.getText(pos, len);
                 reference.remove(pos, len);
-                events.add(event(i + 1, EventTypes.TEXT_DELETE, pos, removed));
+                events.add(event(i + 1, EventType.TEXT_DELETE.wireName(), pos, removed));
             } else {
                 int pos = random.nextInt(length + 1);
                 String piece = pieces[random.nextInt(pieces.length)];
                 reference.insertString(pos, piece, null);
-                events.add(event(i + 1, EventTypes.TEXT_INSERT, pos, piece));
+                events.add(event(i + 1, EventType.TEXT_INSERT.wireName(), pos, piece));
             }
         }
         Replayed replayed = TextReplay.replay("t1", events);
@@ -52,8 +52,8 @@ class TextReplayTest {
 
     @Test
     void replay_fromASnapshot_appliesOnlyTheTail() throws Exception {
-        List<ProcessEvent> tail = List.of(event(7, EventTypes.TEXT_INSERT, 5, " world"), event(8, EventTypes.TEXT_DELETE, 0, "H"),
-                event(9, EventTypes.TEXT_INSERT, 0, "h"));
+        List<ProcessEvent> tail = List.of(event(7, EventType.TEXT_INSERT.wireName(), 5, " world"), event(8, EventType.TEXT_DELETE.wireName(), 0, "H"),
+                event(9, EventType.TEXT_INSERT.wireName(), 0, "h"));
         Replayed r = TextReplay.replay("Hello", 5, "t1", tail);
         assertEquals("hello world", r.text());
         assertEquals(1, r.caret(), "the caret follows the last change");
@@ -62,15 +62,15 @@ class TextReplayTest {
 
     @Test
     void replay_eventsOfOtherTasksAndTypes_areIgnored() throws Exception {
-        List<ProcessEvent> events = List.of(event(1, EventTypes.TEXT_INSERT, 0, "abc"),
-                new ProcessEvent(2, AT, 2, EventTypes.TEXT_INSERT, "t2", Map.of("pos", 0, "len", 1, "text", "X")),
-                new ProcessEvent(3, AT, 3, EventTypes.TOOL_QUERY, "t1", Map.of("query", "abc")));
+        List<ProcessEvent> events = List.of(event(1, EventType.TEXT_INSERT.wireName(), 0, "abc"),
+                new ProcessEvent(2, AT, 2, EventType.TEXT_INSERT.wireName(), "t2", Map.of("pos", 0, "len", 1, "text", "X")),
+                new ProcessEvent(3, AT, 3, EventType.TOOL_QUERY.wireName(), "t1", Map.of("query", "abc")));
         assertEquals("abc", TextReplay.replay("t1", events).text());
     }
 
     @Test
     void replay_deleteOfTextThatIsNotThere_namesTheEvent() {
-        List<ProcessEvent> events = List.of(event(1, EventTypes.TEXT_INSERT, 0, "abc"), event(2, EventTypes.TEXT_DELETE, 1, "x"));
+        List<ProcessEvent> events = List.of(event(1, EventType.TEXT_INSERT.wireName(), 0, "abc"), event(2, EventType.TEXT_DELETE.wireName(), 1, "x"));
         ReplayException e = assertThrows(ReplayException.class, () -> TextReplay.replay("t1", events));
         assertEquals(2, e.seq());
         assertTrue(e.getMessage().contains("\"x\""), e.getMessage());
@@ -78,13 +78,13 @@ class TextReplayTest {
 
     @Test
     void replay_positionOutsideTheText_namesTheEvent() {
-        List<ProcessEvent> events = List.of(event(1, EventTypes.TEXT_INSERT, 0, "abc"), event(2, EventTypes.TEXT_INSERT, 9, "d"));
+        List<ProcessEvent> events = List.of(event(1, EventType.TEXT_INSERT.wireName(), 0, "abc"), event(2, EventType.TEXT_INSERT.wireName(), 9, "d"));
         assertEquals(2, assertThrows(ReplayException.class, () -> TextReplay.replay("t1", events)).seq());
     }
 
     @Test
     void replay_lengthDisagreeingWithText_namesTheEvent() {
-        List<ProcessEvent> events = List.of(new ProcessEvent(1, AT, 1, EventTypes.TEXT_INSERT, "t1",
+        List<ProcessEvent> events = List.of(new ProcessEvent(1, AT, 1, EventType.TEXT_INSERT.wireName(), "t1",
                 Map.of("pos", 0, "len", 2, "text", "abc")));
         assertEquals(1, assertThrows(ReplayException.class, () -> TextReplay.replay("t1", events)).seq());
     }

@@ -13,9 +13,9 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.testutil.FakeClock;
 import org.inkgate.format.response.EventChain;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -32,7 +32,7 @@ class SqliteProcessLogTest {
         try (SqliteProcessLog log = SqliteProcessLog.open(file, clock)) {
             Runnable typist = () -> {
                 for (int i = 0; i < 300; i++) {
-                    log.record(EventTypes.TEXT_INSERT, "t1", Map.of("pos", 0, "len", 1, "text", "a", "source", "typing"));
+                    log.record(EventType.TEXT_INSERT, "t1", Map.of("pos", 0, "len", 1, "text", "a", "source", "typing"));
                 }
             };
             Thread a = new Thread(typist);
@@ -60,11 +60,11 @@ class SqliteProcessLogTest {
         FakeClock clock = new FakeClock();
         Path file = dir.resolve("s" + SittingDatabase.SUFFIX);
         try (SqliteProcessLog log = SqliteProcessLog.open(file, clock)) {
-            log.record(EventTypes.FOCUS_LOST, null, Map.of());
-            log.record(EventTypes.FOCUS_RETURNED, null, Map.of("awayMillis", 1200));
+            log.record(EventType.FOCUS_LOST, null, Map.of());
+            log.record(EventType.FOCUS_RETURNED, null, Map.of("awayMillis", 1200));
         }
         try (SqliteProcessLog log = SqliteProcessLog.open(file, clock)) {
-            log.record(EventTypes.NAV_SCREEN, null, Map.of("screen", "task"));
+            log.record(EventType.NAV_SCREEN, null, Map.of("screen", "task"));
             List<ProcessEvent> events = log.events();
             assertEquals(List.of(1L, 2L, 3L), events.stream().map(ProcessEvent::seq).toList());
             assertEquals(1200, ((Number) events.get(1).data().get("awayMillis")).intValue());
@@ -77,7 +77,7 @@ class SqliteProcessLogTest {
         try (SqliteProcessLog log = SqliteProcessLog.open(dir.resolve("s" + SittingDatabase.SUFFIX), clock)) {
             long mono = clock.monoNanos();
             var at = clock.now();
-            log.record(EventTypes.FOCUS_LOST, null, Map.of());
+            log.record(EventType.FOCUS_LOST, null, Map.of());
             clock.advance(Duration.ofSeconds(5));
             ProcessEvent e = log.events().getFirst();
             assertEquals(mono, e.mono());
@@ -86,13 +86,17 @@ class SqliteProcessLogTest {
     }
 
     @Test
-    void record_typeOutsideTheVocabulary_isRefusedAndNothingWritten() throws Exception {
+    void record_eventAgainstTheContract_isRefusedAndNothingWritten() throws Exception {
+        // the vocabulary itself is a type now (EventType): what a writer can still get wrong is a type's keys or level
         try (SqliteProcessLog log = SqliteProcessLog.open(dir.resolve("s" + SittingDatabase.SUFFIX), new FakeClock())) {
-            IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                    () -> log.record("text.typed", "t1", Map.of()));
-            assertTrue(e.getMessage().contains("text.typed"));
+            IllegalArgumentException missing = assertThrows(IllegalArgumentException.class,
+                    () -> log.record(EventType.TOOL_QUERY, "t1", Map.of("tool", "glossary", "pack", "p", "hits", 0, "micros", 3)));
+            assertTrue(missing.getMessage().contains("data key \"query\" missing"), missing.getMessage());
+            IllegalArgumentException noTask = assertThrows(IllegalArgumentException.class,
+                    () -> log.record(EventType.PANEL_OPEN, null, Map.of("tool", "glossary")));
+            assertTrue(noTask.getMessage().contains("without a task"), noTask.getMessage());
             assertThrows(IllegalArgumentException.class,
-                    () -> log.record(EventTypes.TEXT_INSERT, "t1", Map.of("pos", List.of(1))));
+                    () -> log.record(EventType.TEXT_INSERT, "t1", Map.of("pos", List.of(1))));
             assertEquals(0, log.events().size());
         }
     }
@@ -110,7 +114,7 @@ class SqliteProcessLogTest {
             for (int i = 0; i < 15; i++) {
                 clock.advance(Duration.ofMillis(200));
                 text.append('b');
-                log.record(EventTypes.TEXT_INSERT, "t1", Map.of("pos", text.length() - 1, "len", 1, "text", "b", "source", "typing"));
+                log.record(EventType.TEXT_INSERT, "t1", Map.of("pos", text.length() - 1, "len", 1, "text", "b", "source", "typing"));
                 log.snapshot("t1", text.toString(), text.length());
                 log.flush();
                 seen.add(stored(log));
@@ -177,7 +181,7 @@ class SqliteProcessLogTest {
     void writeFails_eventsKeptInMemoryProblemReportedThenWrittenWhenTheDiskRecovers() throws Exception {
         FakeClock clock = new FakeClock();
         try (SqliteProcessLog log = SqliteProcessLog.open(dir.resolve("s" + SittingDatabase.SUFFIX), clock)) {
-            log.record(EventTypes.FOCUS_LOST, null, Map.of());
+            log.record(EventType.FOCUS_LOST, null, Map.of());
             java.util.concurrent.CountDownLatch failing = new java.util.concurrent.CountDownLatch(2); // the second failure comes after the first was reported
             java.util.concurrent.atomic.AtomicBoolean diskBroken = new java.util.concurrent.atomic.AtomicBoolean(true);
             // a state write that fails until the test "repairs the disk", as a disk refusing writes would (SQLITE_IOERR)
@@ -187,14 +191,14 @@ class SqliteProcessLogTest {
                     throw new java.sql.SQLException("disk I/O error (simulated)");
                 }
             });
-            log.record(EventTypes.FOCUS_RETURNED, null, Map.of("awayMillis", 5));
+            log.record(EventType.FOCUS_RETURNED, null, Map.of("awayMillis", 5));
             failing.await();
             assertTrue(log.problem().orElseThrow().contains("disk I/O error"), log.problem().toString());
-            log.record(EventTypes.NAV_SCREEN, null, Map.of("screen", "task"));
+            log.record(EventType.NAV_SCREEN, null, Map.of("screen", "task"));
             diskBroken.set(false);
             List<ProcessEvent> events = log.events();
             assertTrue(log.problem().isEmpty(), "a successful write clears the problem");
-            assertEquals(List.of(EventTypes.FOCUS_LOST, EventTypes.FOCUS_RETURNED, EventTypes.NAV_SCREEN),
+            assertEquals(List.of(EventType.FOCUS_LOST.wireName(), EventType.FOCUS_RETURNED.wireName(), EventType.NAV_SCREEN.wireName()),
                     events.stream().map(ProcessEvent::type).toList());
             assertEquals(List.of(1L, 2L, 3L), events.stream().map(ProcessEvent::seq).toList(), "no gap from the failed batches");
         }
@@ -205,7 +209,7 @@ class SqliteProcessLogTest {
         Path file = dir.resolve("s" + SittingDatabase.SUFFIX);
         FakeClock clock = new FakeClock();
         try (SqliteProcessLog first = SqliteProcessLog.open(file, clock)) {
-            first.record(EventTypes.FOCUS_LOST, null, Map.of());
+            first.record(EventType.FOCUS_LOST, null, Map.of());
             java.io.IOException e = assertThrows(java.io.IOException.class, () -> SqliteProcessLog.open(file, clock));
             assertTrue(e.getMessage().contains("already open"), e.getMessage());
         }

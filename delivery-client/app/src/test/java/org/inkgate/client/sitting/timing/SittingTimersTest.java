@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
 import java.util.Map;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.SittingPlan;
 import org.inkgate.client.sitting.SittingSignal;
@@ -16,6 +15,7 @@ import org.inkgate.client.sitting.recovery.UnfinishedSitting;
 import org.inkgate.client.sitting.store.ClientDataFolder;
 import org.inkgate.client.testutil.FakeClock;
 import org.inkgate.client.testutil.SittingFixtures;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.TaskResponse.EndReason;
 import org.inkgate.format.testutil.SampleExam;
@@ -49,10 +49,10 @@ class SittingTimersTest {
             assertEquals(List.of(new SittingSignal.TaskTimeUp("t1")), s.poll());
             assertEquals(List.of(), s.poll(), "time-up is signalled once");
             List<ProcessEvent> events = s.log().events();
-            assertEquals(1, events.stream().filter(e -> e.type().equals(EventTypes.TIMER_WARNING)).count());
-            assertEquals(5, ((Number) events.stream().filter(e -> e.type().equals(EventTypes.TIMER_WARNING)).findFirst()
+            assertEquals(1, events.stream().filter(e -> e.type().equals(EventType.TIMER_WARNING.wireName())).count());
+            assertEquals(5, ((Number) events.stream().filter(e -> e.type().equals(EventType.TIMER_WARNING.wireName())).findFirst()
                     .orElseThrow().data().get("minutesLeft")).intValue());
-            assertEquals(1, events.stream().filter(e -> e.type().equals(EventTypes.TIMER_EXPIRED)).count());
+            assertEquals(1, events.stream().filter(e -> e.type().equals(EventType.TIMER_EXPIRED.wireName())).count());
         }
     }
 
@@ -69,7 +69,7 @@ class SittingTimersTest {
             assertEquals(List.of(new SittingSignal.TimeWarning("t1", 5)), s.poll());
             clock.advance(Duration.ofSeconds(300));
             assertEquals(List.of(new SittingSignal.TaskTimeUp("t1")), s.poll());
-            ProcessEvent added = s.log().events().stream().filter(e -> e.type().equals(EventTypes.TIME_ADDED)).findFirst().orElseThrow();
+            ProcessEvent added = s.log().events().stream().filter(e -> e.type().equals(EventType.TIME_ADDED.wireName())).findFirst().orElseThrow();
             assertEquals(300.0, ((Number) added.data().get("seconds")).doubleValue());
             assertEquals("roster", added.data().get("reason"));
         }
@@ -88,7 +88,7 @@ class SittingTimersTest {
             s.resumeAll();
             clock.advance(Duration.ofSeconds(100));
             assertEquals(Duration.ofSeconds(1000), s.remaining("t1").orElseThrow());
-            ProcessEvent end = s.log().events().stream().filter(e -> e.type().equals(EventTypes.PAUSE_END)).findFirst().orElseThrow();
+            ProcessEvent end = s.log().events().stream().filter(e -> e.type().equals(EventType.PAUSE_END.wireName())).findFirst().orElseThrow();
             assertEquals(30 * 60_000L, ((Number) end.data().get("pausedMillis")).longValue());
         }
     }
@@ -157,7 +157,7 @@ class SittingTimersTest {
             // 1200 - 400 - 120 + 90
             assertEquals(Duration.ofSeconds(770), r.remaining("t1").orElseThrow());
             assertEquals("test", r.plan().clientVersion(), "the response names the client version the sitting began on");
-            ProcessEvent resume = r.log().events().stream().filter(e -> e.type().equals(EventTypes.SITTING_RESUME)).findFirst()
+            ProcessEvent resume = r.log().events().stream().filter(e -> e.type().equals(EventType.SITTING_RESUME.wireName())).findFirst()
                     .orElseThrow();
             assertEquals(120.0, ((Number) resume.data().get("downSeconds")).doubleValue());
             assertEquals(90.0, ((Number) resume.data().get("creditedSeconds")).doubleValue());

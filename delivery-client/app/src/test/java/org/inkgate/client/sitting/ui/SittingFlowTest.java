@@ -320,6 +320,47 @@ class SittingFlowTest {
         assertEquals(typed, second.workspace().text());
     }
 
+    /**
+     * Found by the rehearsal (issue 14): the recovery screen proposes the data folder's outbox as
+     * the output folder but never made it, so the hand-in after a resumed sitting failed with
+     * "not there" until someone created the folder by hand. It is made and checked as at set-up.
+     */
+    @Test
+    void recovery_proposedOutputFolder_handInAfterResumingDelivers(FxRobot robot) throws Exception {
+        Path bundle = FlowDriver.buildDemoSitting(temp);
+        ManualClock clock = new ManualClock();
+        FlowDriver first = driver();
+        first.open(bundle, clock, false);
+        first.setUp(FlowDriver.demoPin(), temp.resolve("stick"));
+        first.signIn("D1002");
+        first.press("startButton");
+        first.awaitTask("The empty shop on Mill Street");
+        first.typeInEditor("Written before the crash.");
+        WaitForAsyncUtils.sleep(1500, java.util.concurrent.TimeUnit.MILLISECONDS);
+        robot.interact(() -> first.flow.closeQuietly());
+
+        FlowDriver second = driver();
+        second.open(bundle, clock, false);
+        second.await("recoveryScreen", Node.class);
+        Path proposed = Path.of(second.await("recoveryOutput", javafx.scene.control.TextField.class).getText());
+        assertFalse(Files.exists(proposed), "the test needs a proposed folder that does not exist yet: " + proposed);
+        second.type("recoveryPin", FlowDriver.demoPin());
+        second.press("resumeButton");
+        second.press("continueButton");
+        second.awaitTask("The empty shop on Mill Street");
+        second.finishTask();
+        second.awaitTask("A note to a neighbour");
+        second.finishTask();
+        second.press("questionnaireDone");
+        second.check("confirmCheck");
+        second.press("submitButton");
+
+        second.await("finishedScreen", Node.class);
+        try (Stream<Path> files = Files.list(proposed)) {
+            assertEquals(1, files.filter(p -> p.toString().endsWith(".inkresp")).count());
+        }
+    }
+
     private static java.security.PrivateKey demoOwnerPrivateKey() throws Exception {
         return X25519.privateFromRaw(Hex.parse(Files.readString(DemoBundles.SOURCE.resolve(
                 "keys/demo-only-not-secret-owner-encryption.x25519.hex")).strip()));

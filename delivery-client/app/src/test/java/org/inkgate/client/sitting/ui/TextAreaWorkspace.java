@@ -7,9 +7,9 @@ import javafx.scene.control.TextArea;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.inkgate.client.practice.WordCount;
-import org.inkgate.client.sitting.EventTypes;
 import org.inkgate.client.task.TaskContext;
 import org.inkgate.client.task.TaskWorkspace;
+import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ToolUse;
 import org.inkgate.packs.policy.Tool;
 
@@ -50,11 +50,11 @@ public final class TextAreaWorkspace implements TaskWorkspace {
         }
         String task = context.task().id();
         if (oldEnd > start) {
-            context.log().record(EventTypes.TEXT_DELETE, task,
+            context.log().record(EventType.TEXT_DELETE, task,
                     Map.of("pos", start, "len", oldEnd - start, "text", old.substring(start, oldEnd), "source", "typing"));
         }
         if (newEnd > start) {
-            context.log().record(EventTypes.TEXT_INSERT, task,
+            context.log().record(EventType.TEXT_INSERT, task,
                     Map.of("pos", start, "len", newEnd - start, "text", now.substring(start, newEnd), "source", "typing"));
         }
         context.log().snapshot(task, now, area.getCaretPosition());
