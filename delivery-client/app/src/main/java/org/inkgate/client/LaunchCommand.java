@@ -16,6 +16,7 @@ public sealed interface LaunchCommand {
                    inkgate-client FILE.inkexam --owner-key FINGERPRINT [--data FOLDER]
                    inkgate-client --demo [--data FOLDER]
                    inkgate-client --practice [FILE.inkexam]
+                   inkgate-client --installation [--seat LABEL] [--out FOLDER] [--data FOLDER]
                    inkgate-client --help
 
               --sitting FILE.inkexam  open a live sitting: locked full screen, invigilator PIN, roster
@@ -27,6 +28,12 @@ public sealed interface LaunchCommand {
                                       candidate numbers are printed here (DEMO ONLY, NOT SECRET)
               --practice              open the demo exam (invented content) in practice mode
               --practice FILE.inkexam open a practice bundle in practice mode
+              --installation          print this installation's key fingerprint and write its enrolment
+                                      file (installation-FINGERPRINT.inkenrol) for the test owner, who
+                                      enrols it so that this machine's packages are trusted
+              --seat LABEL            with --installation: the seat or machine label to record
+                                      (default: the host name)
+              --out FOLDER            with --installation: where to write the file (default: here)
               --help                  show this help
 
             A live sitting locks the window as far as an application can; the operating system's own
@@ -51,6 +58,19 @@ public sealed interface LaunchCommand {
 
     /** The locked sitting on the demo's live bundle, trusting the published demo key. */
     record DemoSitting(Path dataFolder) implements LaunchCommand {
+    }
+
+    /**
+     * Show this installation's fingerprint and write its enrolment file.
+     *
+     * @param dataFolder   the data folder holding the installation key, or null for the default
+     * @param seat         the seat or machine label, or null for the host name
+     * @param outputFolder where the enrolment file goes
+     */
+    record ShowInstallation(Path dataFolder, String seat, Path outputFolder) implements LaunchCommand {
+        public ShowInstallation {
+            Objects.requireNonNull(outputFolder, "outputFolder");
+        }
     }
 
     /**
@@ -83,6 +103,7 @@ public sealed interface LaunchCommand {
             case "--practice" -> practice(args.subList(1, args.size()));
             case "--demo" -> demo(args.subList(1, args.size()));
             case "--sitting" -> sitting(args.subList(1, args.size()));
+            case "--installation" -> installation(args.subList(1, args.size()));
             default -> {
                 if (!first.startsWith("-")) {
                     yield sitting(args);
@@ -103,6 +124,30 @@ public sealed interface LaunchCommand {
             throw new IllegalArgumentException("--demo trusts only the published demo key; leave out --owner-key.");
         }
         return new DemoSitting(options.dataFolder());
+    }
+
+    private static LaunchCommand installation(List<String> rest) {
+        Path data = null;
+        Path out = null;
+        String seat = null;
+        for (int i = 0; i < rest.size(); i++) {
+            String arg = rest.get(i);
+            switch (arg) {
+                case "--data" -> data = Path.of(once(data, Options.value(rest, i++, arg), arg));
+                case "--out" -> out = Path.of(once(out, Options.value(rest, i++, arg), arg));
+                case "--seat" -> seat = once(seat, Options.value(rest, i++, arg), arg);
+                default -> throw new IllegalArgumentException("--installation takes --seat LABEL, --out FOLDER and"
+                        + " --data FOLDER; \"" + arg + "\" is not one of them.");
+            }
+        }
+        return new ShowInstallation(data, seat, out == null ? Path.of("") : out);
+    }
+
+    private static String once(Object previous, String value, String option) {
+        if (previous != null) {
+            throw new IllegalArgumentException(option + " is given twice; give it once.");
+        }
+        return value;
     }
 
     private static LaunchCommand sitting(List<String> rest) {

@@ -7,7 +7,11 @@ import java.nio.file.Path;
 import java.util.List;
 import java.nio.charset.StandardCharsets;
 import java.util.Set;
+import java.time.Instant;
 import javafx.application.Application;
+import org.inkgate.client.sitting.store.ClientDataFolder;
+import org.inkgate.client.sitting.submit.EnrolmentExport;
+import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.practice.ui.PracticeApp;
 import org.inkgate.client.sitting.ui.SittingApp;
 
@@ -57,12 +61,43 @@ public final class Launcher {
                     sit(copyResource(DEMO_SITTING_BUNDLE, "demo-sitting.inkexam"), Set.of(DEMO_OWNER_KEY),
                             demo.dataFolder(), note);
                 }
+                case LaunchCommand.ShowInstallation show -> showInstallation(show);
                 case LaunchCommand.Sitting sitting -> sit(sitting.bundle(), sitting.ownerKeys(), sitting.dataFolder(), null);
             }
         } catch (CannotStart e) {
             System.err.println("inkgate-client: " + e.getMessage());
             System.exit(1);
         }
+    }
+
+    /**
+     * Prints the fingerprint and writes the enrolment file; opens no window, so an invigilator can
+     * run it on each machine before the exam day.
+     */
+    static void showInstallation(LaunchCommand.ShowInstallation show) throws CannotStart {
+        ClientDataFolder data = show.dataFolder() == null ? ClientDataFolder.standard()
+                : new ClientDataFolder(show.dataFolder().toAbsolutePath());
+        InstallationKey key;
+        try {
+            key = InstallationKey.loadOrCreate(data);
+        } catch (IOException | RuntimeException e) {
+            throw new CannotStart("the installation key in " + data.root() + " cannot be read or made ("
+                    + e.getMessage() + "). Use --data FOLDER on a writable disk, the same folder the sittings use.");
+        }
+        Path file;
+        try {
+            file = EnrolmentExport.write(key, show.seat(), show.outputFolder().toAbsolutePath(), Instant.now());
+        } catch (IllegalArgumentException e) {
+            throw new CannotStart("--seat: " + e.getMessage());
+        } catch (IOException e) {
+            throw new CannotStart("the enrolment file cannot be written to " + show.outputFolder().toAbsolutePath()
+                    + " (" + e.getMessage() + "). Choose a writable folder with --out FOLDER.");
+        }
+        System.out.println("Installation fingerprint: " + key.fingerprint());
+        System.out.println("Data folder: " + data.root());
+        System.out.println("Enrolment file written: " + file);
+        System.out.println("Hand this file to the test owner, who enrols it with  inkgate-admin installations enrol;"
+                + " packages from this machine are then trusted when they are collected.");
     }
 
     private static void practise(Path bundle) {

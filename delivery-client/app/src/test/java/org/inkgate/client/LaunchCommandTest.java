@@ -22,6 +22,25 @@ class LaunchCommandTest {
     }
 
     @Test
+    void parse_installation_takesSeatOutputAndDataFolder() {
+        assertEquals(new LaunchCommand.ShowInstallation(Path.of("/d"), "seat 4", Path.of("/stick")),
+                LaunchCommand.parse(List.of("--installation", "--seat", "seat 4", "--out", "/stick", "--data", "/d")));
+        assertEquals(new LaunchCommand.ShowInstallation(null, null, Path.of("")),
+                LaunchCommand.parse(List.of("--installation")));
+    }
+
+    @Test
+    void parse_installation_refusesOtherOptionsAndRepeats() {
+        IllegalArgumentException other = assertThrows(IllegalArgumentException.class,
+                () -> LaunchCommand.parse(List.of("--installation", "--owner-key", "x")));
+        assertTrue(other.getMessage().contains("\"--owner-key\" is not one of them"), other.getMessage());
+        IllegalArgumentException twice = assertThrows(IllegalArgumentException.class,
+                () -> LaunchCommand.parse(List.of("--installation", "--seat", "a", "--seat", "b")));
+        assertTrue(twice.getMessage().contains("--seat is given twice"), twice.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> LaunchCommand.parse(List.of("--installation", "--out")));
+    }
+
+    @Test
     void parse_help_showsHelp() {
         assertEquals(new LaunchCommand.ShowHelp(), LaunchCommand.parse(List.of("--help")));
     }

@@ -38,6 +38,12 @@ import org.languagetool.rules.spelling.SpellingCheckRule;
  * paragraph content, and LanguageTool's own sentence cache makes a re-check of an edited
  * paragraph cost about one sentence.
  *
+ * <p>LanguageTool's {@link ResultCache} keeps a sentence's matches serialized and hands them back
+ * with a stand-in rule object that keeps the rule's id and category but none of its behaviour
+ * ({@code isDictionaryBasedSpellingRule()} is false on it). So whether a match is a spelling
+ * match is decided by rule id, against the ids of this engine's real spelling rules, never by
+ * asking the match's rule object.
+ *
  * <p>In modes without grammar every rule except the dictionary-based spelling rule is disabled
  * before the first check, so grammar rules never run. In {@link SpellingMode#UNDERLINE_ONLY}
  * suggestions are never asked for and the message is a fixed text that names no correction.
@@ -60,20 +66,16 @@ public final class SpellingEngine implements SpellingChecker {
     private final SpellingMode mode;
     private final List<String> examWords;
     private final Clock clock;
+    /** False only for the reference engine of the tests: every check from scratch. */
+    private final boolean caching;
     private final ExecutorService executor;
     private final AtomicLong generation = new AtomicLong();
     private final AtomicReference<CompletableFuture<CheckResult>> pending = new AtomicReference<>();
     private final Set<String> ignored = Collections.synchronizedSet(new LinkedHashSet<>());
     // touched only on the executor thread
     private JLanguageTool tool;
-    /**
-     * Ids of the dictionary-based spelling rules. A match is told spelling or grammar by its rule's
-     * id, not by asking its rule object: a sentence LanguageTool answers from its result cache comes
-     * back with stand-in rule objects that say no dictionary rule made them, so a spelling flag in a
-     * sentence unchanged since the last check would be dropped (spelling-only modes) or called
-     * grammar (spelling and grammar).
-     */
-    private final Set<String> spellingRuleIds = new java.util.HashSet<>();
+    /** Ids of the dictionary-based spelling rules of {@link #tool}, learnt from the real rule objects. */
+    private Set<String> spellingRuleIds = Set.of();
     private final Map<String, List<CheckIssue>> paragraphCache = new LinkedHashMap<>(256, 0.75f, true) {
         @Override
         protected boolean removeEldestEntry(Map.Entry<String, List<CheckIssue>> eldest) {
@@ -81,7 +83,8 @@ public final class SpellingEngine implements SpellingChecker {
         }
     };
 
-    private SpellingEngine(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock) {
+    private SpellingEngine(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock, boolean caching) {
+        this.caching = caching;
         this.variant = Objects.requireNonNull(variant, "variant");
         this.mode = Objects.requireNonNull(mode, "mode");
         this.examWords = List.copyOf(examWords);
@@ -100,10 +103,25 @@ public final class SpellingEngine implements SpellingChecker {
      * @throws IllegalArgumentException for {@link SpellingMode#OFF}: a task without checking gets no checker
      */
     public static SpellingEngine create(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock) {
+        refuseOff(mode);
+        return new SpellingEngine(variant, mode, examWords, clock, true);
+    }
+
+    private static void refuseOff(SpellingMode mode) {
         if (mode == SpellingMode.OFF) {
             throw new IllegalArgumentException("spelling mode is OFF: no checker is built for a task that allows none");
         }
-        return new SpellingEngine(variant, mode, examWords, clock);
+    }
+
+    /**
+     * A checker that keeps no cache at all, neither ours nor LanguageTool's: every check is made
+     * from scratch, as a newly built engine would make it. It is the reference the property tests
+     * compare the caching engine with (a newly built engine per text would take seconds each);
+     * several times slower on long texts, never used in a sitting.
+     */
+    public static SpellingEngine withoutCaches(EnglishVariant variant, SpellingMode mode, Collection<String> examWords, Clock clock) {
+        refuseOff(mode);
+        return new SpellingEngine(variant, mode, examWords, clock, false);
     }
 
     @Override
@@ -194,10 +212,12 @@ public final class SpellingEngine implements SpellingChecker {
             int end = nl < 0 ? text.length() : nl;
             String paragraph = text.substring(offset, end);
             paragraphs++;
-            List<CheckIssue> found = paragraphCache.get(paragraph);
+            List<CheckIssue> found = caching ? paragraphCache.get(paragraph) : null;
             if (found == null) {
                 found = paragraph.isBlank() ? List.of() : toIssues(lt.check(paragraph));
-                paragraphCache.put(paragraph, found);
+                if (caching) {
+                    paragraphCache.put(paragraph, found);
+                }
                 checked++;
             }
             for (CheckIssue i : found) {
@@ -229,6 +249,7 @@ public final class SpellingEngine implements SpellingChecker {
         List<CheckIssue> out = new ArrayList<>(matches.size());
         for (RuleMatch m : matches) {
             Rule rule = m.getRule();
+            // by id: a match from LanguageTool's sentence cache carries a stand-in rule (see the class comment)
             boolean spelling = spellingRuleIds.contains(rule.getId());
             if (!spelling && !mode.checksGrammar()) {
                 continue; // defensive: such rules are disabled in this mode
@@ -260,12 +281,14 @@ public final class SpellingEngine implements SpellingChecker {
             return tool;
         }
         Language language = Languages.getLanguageForShortCode(variant.tag());
-        JLanguageTool lt = new JLanguageTool(language, null, new ResultCache(SENTENCE_CACHE), new UserConfig());
+        JLanguageTool lt = new JLanguageTool(language, null, caching ? new ResultCache(SENTENCE_CACHE) : null, new UserConfig());
+        Set<String> spellingIds = new LinkedHashSet<>();
         for (Rule r : lt.getAllRules()) {
             if (r.isDictionaryBasedSpellingRule()) {
-                spellingRuleIds.add(r.getId());
+                spellingIds.add(r.getId());
             }
         }
+        spellingRuleIds = Set.copyOf(spellingIds);
         if (!mode.checksGrammar()) {
             List<String> off = new ArrayList<>();
             for (Rule r : lt.getAllRules()) {

@@ -26,7 +26,7 @@ import org.openjdk.jmh.annotations.Warmup;
  * Spelling/grammar checks of a 400-word essay (invented text) after warm-up. Every invocation
  * changes a number in every sentence ({@code full}) or in one sentence of one paragraph
  * ({@code oneParagraph}), so neither our paragraph cache nor LanguageTool's sentence cache can
- * answer the changed parts.
+ * answer the changed parts; {@code sentencesFromCache} adds a tiny new sentence to each paragraph.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.SampleTime)
@@ -60,6 +60,17 @@ public class SpellingBench {
         int k = n++;
         // a new number in every sentence: nothing is cached
         return engine.check(essay.replace(". ", " in " + k + " ways. ")).join();
+    }
+
+    /**
+     * Every sentence of the essay answered from LanguageTool's sentence cache (the path of issue
+     * 13's lost flags), plus one new two-character sentence per paragraph so our paragraph cache
+     * cannot answer: what a re-check costs when the candidate has only added a few characters.
+     */
+    @Benchmark
+    public Object sentencesFromCache() {
+        int k = n++;
+        return engine.check(essay.replace("\n", " " + (k + 10) + ".\n")).join();
     }
 
     @Benchmark

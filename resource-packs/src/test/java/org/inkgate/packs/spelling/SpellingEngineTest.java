@@ -150,6 +150,31 @@ class SpellingEngineTest {
     }
 
     /**
+     * Issue 13: a paragraph typed without stopping. The first sentence is checked while the next
+     * one is begun, so LanguageTool answers it from its sentence cache when the whole paragraph is
+     * checked; its misspellings must still come back, as spelling, as on the first check.
+     */
+    @ParameterizedTest
+    @ValueSource(strings = {"grammar", "suggestions", "underline", "british"})
+    void check_sentenceAnsweredFromLanguageToolsCache_keepsItsSpellingFlags(String which) {
+        SpellingEngine e = switch (which) {
+            case "grammar" -> grammar;
+            case "suggestions" -> suggestions;
+            case "underline" -> underline;
+            default -> british;
+        };
+        String paragraph = "I leeve on Saturday mornig. The folowing day is Sunday. Feed the cat in the evning.";
+        issues(e, "I leeve on Saturday mornig. T");
+        List<CheckIssue> found = issues(e, paragraph);
+        // the four invented misspellings of the issue's text; every other word is standard English
+        assertEquals(List.of("leeve", "mornig", "folowing", "evning"),
+                found.stream().map(i -> paragraph.substring(i.start(), i.end())).toList(), found.toString());
+        assertTrue(found.stream().allMatch(i -> i.kind() == CheckIssue.Kind.SPELLING), found.toString());
+        // the same sentence again (answered from the cache a second time) gives the same flags
+        assertEquals(found, issues(e, paragraph + " "));
+    }
+
+    /**
      * Found by the rehearsal (issue 14): LanguageTool answers a sentence unchanged since the last
      * check from its result cache, with stand-in rule objects; the misspelling in the first sentence
      * must stay flagged, as spelling, while the candidate goes on typing the second. Fresh engines,

@@ -32,10 +32,21 @@ public final class StudyRatings {
      * @throws MfrmRefusedException     scores that are not whole numbers from 0, or empty values in a used column
      */
     public static RatingData of(List<Rating> ratings, Map<String, String> levelOf, List<String> columns) {
+        return of(ratings, levelOf, Map.of(), columns);
+    }
+
+    /**
+     * Builds the rating data with candidates' categorical attributes as further grouping columns
+     * (each rating gets its candidate's group), for bias pairs such as condition x first_language.
+     *
+     * @param attributes attribute name to candidate to group, from the candidate table
+     */
+    public static RatingData of(List<Rating> ratings, Map<String, String> levelOf,
+            Map<String, Map<String, String>> attributes, List<String> columns) {
         for (String c : columns) {
-            if (!COLUMNS.contains(c)) {
-                throw new IllegalArgumentException("'" + c + "' is not a column of the ratings; use candidate or one of "
-                        + COLUMNS);
+            if (!COLUMNS.contains(c) && !attributes.containsKey(c)) {
+                throw new IllegalArgumentException("'" + c + "' is not a column of the ratings or an attribute of the"
+                        + " candidate table; use candidate, one of " + COLUMNS + " or one of " + attributes.keySet());
             }
         }
         List<String> cols = columns.stream().distinct().toList();
@@ -49,9 +60,12 @@ public final class StudyRatings {
                     + r.rater() + ", criterion " + r.criterion() + ")";
             String problem = null;
             for (int c = 0; c < cols.size() && problem == null; c++) {
-                values[c] = value(r, cols.get(c), levelOf);
+                boolean attribute = !COLUMNS.contains(cols.get(c));
+                values[c] = attribute ? attributes.get(cols.get(c)).get(r.candidate()) : value(r, cols.get(c), levelOf);
                 if (values[c] == null || values[c].isBlank()) {
-                    problem = where + ": column '" + cols.get(c) + "' is empty; every rating needs a value in a"
+                    problem = attribute ? where + ": the candidate table gives no '" + cols.get(c) + "' for candidate "
+                            + r.candidate() + "; give every rated candidate a value, or leave the pair out"
+                            : where + ": column '" + cols.get(c) + "' is empty; every rating needs a value in a"
                             + " column that is modelled or used in a bias pair";
                 }
             }

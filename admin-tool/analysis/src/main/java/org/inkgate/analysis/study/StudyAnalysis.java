@@ -42,6 +42,9 @@ public final class StudyAnalysis {
         builders.add(() -> DescriptivesSection.build(scores, options));
         builders.add(() -> ConditionSection.build(scores, options));
         builders.add(() -> LevelsSection.build(scores, options));
+        if (!Candidate.attributeNames(data.candidates()).isEmpty()) {
+            builders.add(() -> AttributesSection.build(data.candidates(), scores, options));
+        }
         builders.add(() -> RatersSection.build(data.ratings(), options));
         builders.add(() -> RubricSection.build(scores, options));
         if (!data.toolUse().isEmpty()) {

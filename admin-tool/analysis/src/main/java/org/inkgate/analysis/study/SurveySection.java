@@ -17,7 +17,8 @@ final class SurveySection {
 
     static Section build(List<Candidate> candidates, List<String> items) {
         Section.Builder s = Section.builder("survey", "Survey answers");
-        s.paragraph("Counts of each answer per item and level, from the candidate table's extra columns.");
+        s.paragraph("Counts of each answer per item and level, from the candidate table's survey items (its numeric"
+                + " extra columns; columns declared as attributes are in the candidate background section).");
         TreeSet<Double> answers = new TreeSet<>();
         for (Candidate c : candidates) {
             answers.addAll(c.survey().values());

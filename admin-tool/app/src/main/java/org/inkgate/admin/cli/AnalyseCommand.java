@@ -79,8 +79,21 @@ public final class AnalyseCommand implements Callable<Integer> {
     private Path ratings;
 
     @Option(names = "--candidates", paramLabel = "FILE.csv",
-            description = "Optional: candidate,level and survey items (numeric answers) as further columns")
+            description = "Optional: candidate,level and survey items (numeric answers) as further columns; columns"
+                    + " declared with --attribute are categorical groups instead")
     private Path candidates;
+
+    @Option(names = "--attribute", paramLabel = "NAME", split = ",",
+            description = {"A column of --candidates that is a categorical background attribute (e.g. first_language,"
+                + " gender): compared like proficiency levels, usable in --mfrm-bias (e.g. condition:first_language).",
+                "Repeatable. Values are group names even when they look like numbers."})
+    private List<String> attributes;
+
+    @Option(names = "--roster-attribute", paramLabel = "FIELD", split = ",",
+            description = {"With --store: use this roster field (first_language or a personal field such as gender) as"
+                + " a categorical attribute. Personal fields are not read otherwise: give this only when the test"
+                + " owner allows their use for research.", "Repeatable."})
+    private List<String> rosterAttributes;
 
     @Option(names = "--tool-usage", paramLabel = "FILE.csv",
             description = "Optional: candidate,task,tool,uses,empty_queries,suggestions_accepted,suggestions_ignored")
@@ -161,6 +174,20 @@ public final class AnalyseCommand implements Callable<Integer> {
             err.println("inkgate-admin analyse: " + e.getMessage());
             return INPUT_REFUSED;
         }
+        if (attributes != null && candidates == null) {
+            throw new ParameterException(spec.commandLine(), "--attribute names a column of --candidates FILE.csv;"
+                    + " give that file (or, with --store, --roster-attribute for a roster field)");
+        }
+        if (rosterAttributes != null && store == null) {
+            throw new ParameterException(spec.commandLine(), "--roster-attribute reads the roster in --store DB;"
+                    + " give the store");
+        }
+        for (String a : declared(rosterAttributes)) {
+            if (a.equals("candidate") || a.equals("level") || a.equals("score") || StudyRatings.COLUMNS.contains(a)) {
+                throw new ParameterException(spec.commandLine(), "--roster-attribute: '" + a + "' cannot be an"
+                        + " attribute (candidate, level and the ratings' columns are read as such)");
+            }
+        }
         if (ratings == null && store == null) {
             throw new ParameterException(spec.commandLine(), "give --ratings FILE.csv, or --store DB holding ratings");
         }
@@ -179,7 +206,7 @@ public final class AnalyseCommand implements Callable<Integer> {
             CandidatesReader.Result c = null;
             if (candidates != null) {
                 try (Reader in = open(candidates)) {
-                    c = CandidatesReader.read(candidates.getFileName().toString(), in);
+                    c = CandidatesReader.read(candidates.getFileName().toString(), in, declared(attributes));
                 }
             }
             List<ToolUse> u = List.of();
@@ -201,6 +228,20 @@ public final class AnalyseCommand implements Callable<Integer> {
                     return INPUT_REFUSED;
                 }
                 cands = c == null ? fromStore.candidates() : cands;
+                if (c != null && rosterAttributes != null) {
+                    err.println("inkgate-admin analyse: --roster-attribute reads the store's roster, but --candidates"
+                            + " replaces it; declare the column in the candidate table with --attribute instead");
+                    return INPUT_REFUSED;
+                }
+                List<String> found = Candidate.attributeNames(cands);
+                for (String a : declared(rosterAttributes)) {
+                    if (!found.contains(a)) {
+                        err.println("inkgate-admin analyse: --roster-attribute " + a + ": the roster in " + store
+                                + " gives no candidate of the exam a value for it; name first_language or a column"
+                                + " of the roster that was registered with collect --roster");
+                        return INPUT_REFUSED;
+                    }
+                }
                 u = fromStore.toolUse();
                 p = fromStore.processLog();
             }
@@ -358,7 +399,7 @@ public final class AnalyseCommand implements Callable<Integer> {
                 err.println("inkgate-admin analyse: the store holds no exam " + chosen + "; it holds " + exams);
                 return null;
             }
-            return StoreStudyInput.read(s, chosen);
+            return StoreStudyInput.read(s, chosen, declared(rosterAttributes));
         } catch (StoreException e) {
             err.println("inkgate-admin analyse: could not read the results store " + store + ": " + e.getMessage());
             return null;
@@ -376,6 +417,10 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
         List<String> facets = mfrmFacets.stream().map(String::trim).toList();
         for (String f : facets) {
+            if (isAttribute(f)) {
+                throw new ParameterException(spec.commandLine(), "--mfrm-facets: '" + f + "' is a candidate attribute,"
+                        + " not a facet (each candidate has one value); use it in --mfrm-bias, e.g. condition:" + f);
+            }
             if (!StudyRatings.COLUMNS.contains(f)) {
                 throw new ParameterException(spec.commandLine(), "--mfrm-facets: '" + f + "' is not a ratings column;"
                         + " use some of " + StudyRatings.COLUMNS + " (candidate is always modelled)");
@@ -388,7 +433,9 @@ public final class AnalyseCommand implements Callable<Integer> {
                 String[] ab = pair.trim().split(":", -1);
                 if (ab.length != 2 || !isColumn(ab[0]) || !isColumn(ab[1])) {
                     throw new IllegalArgumentException("--mfrm-bias: '" + pair + "' is not COLUMN:COLUMN with columns"
-                            + " among candidate and " + StudyRatings.COLUMNS + " (e.g. rater:task)");
+                            + " among candidate, " + StudyRatings.COLUMNS + " and the attributes declared with"
+                            + " --attribute or --roster-attribute " + declaredAttributes() + " (e.g. rater:task,"
+                            + " condition:first_language)");
                 }
                 b.bias(ab[0], ab[1]);
             }
@@ -398,8 +445,22 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
     }
 
-    private static boolean isColumn(String c) {
-        return RatingData.CANDIDATE.equals(c) || StudyRatings.COLUMNS.contains(c);
+    private boolean isColumn(String c) {
+        return RatingData.CANDIDATE.equals(c) || StudyRatings.COLUMNS.contains(c) || isAttribute(c);
+    }
+
+    private boolean isAttribute(String c) {
+        return declaredAttributes().contains(c);
+    }
+
+    private List<String> declaredAttributes() {
+        List<String> all = new ArrayList<>(declared(attributes));
+        all.addAll(declared(rosterAttributes));
+        return all;
+    }
+
+    private static List<String> declared(List<String> names) {
+        return names == null ? List.of() : names.stream().map(String::trim).filter(n -> !n.isEmpty()).distinct().toList();
     }
 
     private static ScaleStructure structure(String text) {
@@ -417,17 +478,25 @@ public final class AnalyseCommand implements Callable<Integer> {
     /** Runs the Rasch analysis on the ratings already read; a refusal becomes the section's text. */
     private static Section mfrmSection(StudyData data, MfrmOptions o) {
         Map<String, String> levels = new HashMap<>();
-        data.candidates().forEach(c -> levels.put(c.id(), c.level()));
+        Map<String, Map<String, String>> attributes = new HashMap<>();
+        data.candidates().forEach(c -> {
+            levels.put(c.id(), c.level());
+            c.attributes().forEach((name, group) -> attributes.computeIfAbsent(name, k -> new HashMap<>()).put(c.id(), group));
+        });
         List<String> columns = new ArrayList<>(o.facets());
         for (FacetPair p : o.biasPairs()) {
             for (String c : List.of(p.first(), p.second())) {
                 if (!RatingData.CANDIDATE.equals(c) && !columns.contains(c)) {
                     columns.add(c);
                 }
+                // a declared attribute nobody has a value for: refused per rating below, not an unknown column
+                if (!RatingData.CANDIDATE.equals(c) && !StudyRatings.COLUMNS.contains(c)) {
+                    attributes.putIfAbsent(c, Map.of());
+                }
             }
         }
         try {
-            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, columns), o);
+            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, attributes, columns), o);
         } catch (MfrmRefusedException e) {
             return MfrmSection.refused(e.reasons());
         }

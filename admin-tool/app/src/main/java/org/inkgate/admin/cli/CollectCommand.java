@@ -1,15 +1,13 @@
 package org.inkgate.admin.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 import java.util.concurrent.Callable;
-import java.util.stream.Collectors;
 import org.inkgate.admin.core.collection.CollectionRun;
 import org.inkgate.admin.core.collection.Outcome;
+import org.inkgate.admin.core.installations.InstallationList;
 import org.inkgate.admin.core.keys.OwnerKeyStore;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
@@ -50,8 +48,8 @@ final class CollectCommand implements Callable<Integer> {
 
     /** Which client installations' signatures are accepted. */
     static final class Trust {
-        @Option(names = "--installations", paramLabel = "FILE", description = "fingerprints of the installations enrolled"
-                + " for the sitting, one per line")
+        @Option(names = "--installations", paramLabel = "FILE", description = "the installations list: fingerprints of the"
+                + " installations enrolled for the sitting, one per line (see installations enrol)")
         Path installations;
 
         @Option(names = "--any-installation", description = "accept any installation and list each package's"
@@ -82,9 +80,7 @@ final class CollectCommand implements Callable<Integer> {
         if (trust.any) {
             installations = TrustPolicy.anySigner();
         } else {
-            Set<String> prints = Files.readAllLines(trust.installations).stream().map(String::strip)
-                    .filter(l -> !l.isEmpty() && !l.startsWith("#")).collect(Collectors.toSet());
-            installations = TrustPolicy.trusting(prints);
+            installations = InstallationList.policy(trust.installations);
         }
         ExamSource exam = null;
         char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);

@@ -74,7 +74,7 @@ final class FormsCommand implements Callable<Integer> {
                 .map(c -> new FormAssigner.Candidate(c.candidateNumber(), c.level())).toList(), forms, FormDesigner.blockSize(exam), usedSeed);
         w.println();
         w.println("Assignment of " + a.rows().size() + " candidates, seed " + usedSeed
-                + " (the same seed and roster give the same assignment):");
+                + " (the same seed and roster give the same assignment); candidates per level and form:");
         printCounts(w, a, forms);
         if (out != null) {
             AssignmentTable.write(a, out);
@@ -96,11 +96,6 @@ final class FormsCommand implements Callable<Integer> {
             forms.forEach(f -> row.append(String.format("%6d", counts.count(level, f.id()))));
             w.println(row);
         }
-        w.println("  task x condition (candidates):");
-        for (var e : counts.byTaskAndCondition().entrySet()) {
-            StringBuilder row = new StringBuilder("    " + e.getKey() + ":");
-            counts.conditions().forEach(c -> row.append("  ").append(c).append('=').append(e.getValue().getOrDefault(c, 0)));
-            w.println(row);
-        }
+        counts.lines().forEach(line -> w.println("  " + line));
     }
 }

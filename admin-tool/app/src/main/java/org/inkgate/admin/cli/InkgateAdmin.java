@@ -20,6 +20,7 @@ import picocli.CommandLine.Command;
             BundleCommand.class,
             InspectCommand.class,
             PreviewCommand.class,
+            InstallationsCommand.class,
             CollectCommand.class,
             MissingCommand.class,
             ExportCommand.class,

@@ -17,7 +17,9 @@ import org.inkgate.analysis.data.ToolUse;
  *
  * <p>The mapping is documented in docs/analysis.md ("Input from a results store"):
  * <ul>
- *   <li>a candidate's level is the roster's level; personal fields are never read;</li>
+ *   <li>a candidate's level is the roster's level; roster fields (first language, personal fields) are
+ *       read only when named by the caller, who must have the test owner's permission, and become
+ *       categorical attributes;</li>
  *   <li>a tool's {@code uses} in a response are the candidate's own actions with it: queries,
  *       suggestions accepted and suggestions ignored (suggestions merely shown do not count);</li>
  *   <li>process events are mapped by {@link AnalysisEvents}: task bounds, text changes, the
@@ -36,7 +38,19 @@ public final class StoreStudyInput {
 
     /** Reads the exam's candidates, tool use and process events from the store. */
     public static Tables read(ResultsStore store, String examId) throws StoreException {
-        List<Candidate> candidates = store.candidates(examId).stream().map(StoreStudyInput::candidate).toList();
+        return read(store, examId, List.of());
+    }
+
+    /**
+     * Reads the exam's candidates with the named roster fields as categorical attributes, tool use and
+     * process events.
+     */
+    public static Tables read(ResultsStore store, String examId, List<String> rosterFields) throws StoreException {
+        Map<String, Map<String, String>> fields = rosterFields.isEmpty() ? Map.of()
+                : store.rosterFields(examId, rosterFields);
+        List<Candidate> candidates = store.candidates(examId).stream()
+                .map(row -> withFields(candidate(row), rosterFields, fields.getOrDefault(row.candidateNumber(), Map.of())))
+                .toList();
         List<ToolUse> toolUse = new ArrayList<>();
         store.forEachToolUse(examId, row -> toolUse.add(toolUse(row)));
         List<ProcessEvent> events = new ArrayList<>();
@@ -46,6 +60,17 @@ public final class StoreStudyInput {
 
     static Candidate candidate(Rows.Candidate row) {
         return new Candidate(row.candidateNumber(), row.level() == null ? "" : row.level(), Map.of());
+    }
+
+    /** The candidate with the fields in the order asked for (absent when the roster gives none). */
+    private static Candidate withFields(Candidate c, List<String> names, Map<String, String> values) {
+        Map<String, String> attributes = new java.util.LinkedHashMap<>();
+        names.forEach(n -> {
+            if (values.containsKey(n)) {
+                attributes.put(n, values.get(n));
+            }
+        });
+        return new Candidate(c.id(), c.level(), c.survey(), attributes);
     }
 
     static ToolUse toolUse(Rows.ToolUseRow row) {

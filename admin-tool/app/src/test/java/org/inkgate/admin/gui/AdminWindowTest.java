@@ -150,8 +150,10 @@ class AdminWindowTest {
         // the rule: every task under every condition equally often; 12 candidates each sit both tasks
         // once under each condition, so 6 and 6 per task
         String cells = label(robot, "#taskConditionCounts");
-        assertTrue(cells.contains("ferry-complaint:  with-resources = 6  without-resources = 6"), cells);
-        assertTrue(cells.contains("market-square:  with-resources = 6  without-resources = 6"), cells);
+        assertTrue(cells.contains("ferry-complaint:  with-resources=6  without-resources=6"), cells);
+        assertTrue(cells.contains("market-square:  with-resources=6  without-resources=6"), cells);
+        // the same balance lines as the forms command: 6 of the 12 write each task first
+        assertTrue(cells.lines().anyMatch(l -> l.strip().matches("all levels +6 +6")), cells);
         assertTrue(Files.isRegularFile(session.assignment().get()));
         shoot(robot, scene.get(), "admin-forms.png");
 

@@ -80,7 +80,9 @@ class ScriptedSessionReplayTest {
         robot.press(KeyCode.CONTROL, KeyCode.SHIFT, KeyCode.D).release(KeyCode.D, KeyCode.SHIFT, KeyCode.CONTROL);
         robot.write("calm").type(KeyCode.ENTER);
         ListView<?> dictionaryResults = robot.lookup("#dictionaryResults").queryListView();
-        Shown.until("dictionary entries for calm", () -> !dictionaryResults.getItems().isEmpty());
+        // the cells come with the next layout pulse, later than the items on a busy machine
+        Shown.until("dictionary entries for calm", () -> !dictionaryResults.getItems().isEmpty()
+                && robot.lookup("#dictionaryResults .list-cell").tryQuery().isPresent());
         robot.clickOn(robot.lookup("#dictionaryResults .list-cell").nth(0).queryAs(javafx.scene.Node.class));
         ListView<String> words = robot.lookup("#dictionaryInsertable").queryListView();
         Shown.until("the entry's words", () -> !words.getItems().isEmpty());
@@ -98,7 +100,8 @@ class ScriptedSessionReplayTest {
         robot.press(KeyCode.CONTROL, KeyCode.SHIFT, KeyCode.G).release(KeyCode.G, KeyCode.SHIFT, KeyCode.CONTROL);
         robot.write("gangw");
         ListView<?> glossaryResults = robot.lookup("#glossaryResults").queryListView();
-        Shown.until("glossary hits for gangw", () -> !glossaryResults.getItems().isEmpty());
+        Shown.until("glossary hits for gangw", () -> !glossaryResults.getItems().isEmpty()
+                && robot.lookup("#glossaryResults .list-cell").tryQuery().isPresent());
         robot.clickOn(robot.lookup("#glossaryResults .list-cell").nth(0).queryAs(javafx.scene.Node.class));
         ListView<String> terms = robot.lookup("#glossaryInsertable").queryListView();
         Shown.until("the entry's terms", () -> terms.getItems().contains("gangway"));

@@ -118,15 +118,41 @@ public final class EntryNames {
                 }
             }
             files.add(key);
-            prefix.setLength(0);
-            for (int i = 0; i < parts.length - 1; i++) {
+            addFolders(parts, parts.length - 1);
+            return null;
+        }
+
+        /**
+         * Null when a directory entry (name without its trailing slash) can join the set, else the
+         * reason it cannot: a folder that is also a file, or lies inside one.
+         */
+        public String addFolder(String name) {
+            String key = folded(name);
+            String[] parts = key.split("/");
+            StringBuilder prefix = new StringBuilder();
+            for (int i = 0; i < parts.length; i++) {
+                if (i > 0) {
+                    prefix.append('/');
+                }
+                prefix.append(parts[i]);
+                if (files.contains(prefix.toString())) {
+                    return i == parts.length - 1 ? "is both a file and a folder"
+                            : "is inside \"" + prefix + "\", which is also a file";
+                }
+            }
+            addFolders(parts, parts.length);
+            return null;
+        }
+
+        private void addFolders(String[] parts, int count) {
+            StringBuilder prefix = new StringBuilder();
+            for (int i = 0; i < count; i++) {
                 if (i > 0) {
                     prefix.append('/');
                 }
                 prefix.append(parts[i]);
                 folders.add(prefix.toString());
             }
-            return null;
         }
     }
 }

@@ -8,7 +8,8 @@ package org.inkgate.format.refusal;
 public abstract sealed class FormatRefusal extends Exception
         permits BadSignature, DigestMismatch, BrokenHashChain, UnsupportedSchema, WrongReleaseCode,
         UnsafeEntryName, DuplicateEntry, SizeLimitExceeded, CompressionRatioExceeded, MissingEntry,
-        UnlistedEntry, MalformedJson, MalformedArchive, DecryptionFailed, UntrustedSigner, InvalidContent {
+        UnlistedEntry, MalformedJson, MalformedArchive, DecryptionFailed, UntrustedSigner, InvalidContent,
+        UnsupportedArchiveFeature {
 
     private final String file;
 

@@ -157,7 +157,7 @@ public final class ResponsePackageReader {
             checkSchemaVersion(name, tree, PackageManifest.SCHEMA_VERSION, "response package");
             String installation = Fingerprint.of(Ed25519.rawPublic(signer));
             if (!installations.trusts(installation)) {
-                throw new UntrustedSigner(name, installation);
+                throw UntrustedSigner.installation(name, installation);
             }
             PackageManifest manifest = Json.bind(name, PackageLayout.MANIFEST, manifestBytes, PackageManifest.class);
             if (!manifest.entries().keySet().equals(Set.of(PackageLayout.RESPONSE, PackageLayout.EVENTS))) {

@@ -1,12 +1,9 @@
 package org.inkgate.admin.gui.collect;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Set;
 import java.util.concurrent.atomic.AtomicLong;
-import java.util.stream.Collectors;
 import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleStringProperty;
@@ -15,6 +12,7 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.inkgate.admin.core.collection.CollectionRun;
 import org.inkgate.admin.core.collection.Outcome;
+import org.inkgate.admin.core.installations.InstallationList;
 import org.inkgate.admin.core.keys.OwnerKeyStore;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.gui.AdminSession;
@@ -95,7 +93,7 @@ public final class CollectModel {
             return;
         }
         if (!anyInstallation.get() && installationsFile == null) {
-            counts.set("Name the file of enrolled installation fingerprints, or tick \"accept any installation\".");
+            counts.set("Name the installations list (installations enrol writes it), or tick \"accept any installation\".");
             return;
         }
         boolean any = anyInstallation.get();
@@ -113,9 +111,7 @@ public final class CollectModel {
             if (any) {
                 trust = TrustPolicy.anySigner();
             } else {
-                Set<String> prints = Files.readAllLines(installationsFile).stream().map(String::strip)
-                        .filter(l -> !l.isEmpty() && !l.startsWith("#")).collect(Collectors.toSet());
-                trust = TrustPolicy.trusting(prints);
+                trust = InstallationList.policy(installationsFile);
             }
             var encryptionKey = keyStore.encryptionKey(pass);
             return CollectionRun.run(new CollectionRun.Request(storeFile, List.of(bundle), roots, encryptionKey,

@@ -92,12 +92,7 @@ public final class FormsView implements Step {
             }
             r++;
         }
-        StringBuilder b = new StringBuilder("Candidates per task and condition:");
-        counts.byTaskAndCondition().forEach((task, byCondition) -> {
-            b.append("\n  ").append(task).append(':');
-            counts.conditions().forEach(c -> b.append("  ").append(c).append(" = ").append(byCondition.getOrDefault(c, 0)));
-        });
-        taskConditions.setText(b.toString());
+        taskConditions.setText(String.join("\n", counts.lines()));
     }
 
     private static Label cell(String text, boolean head) {

@@ -13,16 +13,25 @@ import org.inkgate.format.bundle.FormSpec;
 /**
  * Assigns candidates to forms, stratified by proficiency level, seeded and reproducible.
  *
- * <p>The forms come in blocks ({@link FormDesigner#blockSize}): consecutive forms that together
- * give every task every condition once, and within which consecutive forms give each task the
- * next condition. Within each level the candidates are shuffled with the seed and every form gets
- * {@code n / forms} of them; of the few left over, whole blocks go to blocks taken in turn, and
- * the rest to consecutive forms of one block chosen by the seed, continuing across levels where
- * the previous level stopped. So, for each task, the counts under the different conditions are
- * equal when every level's size is a multiple of the number of forms, and at most one apart
- * otherwise, both within each level and overall; form counts are at most one apart within each
- * level. Overall form counts can differ by more (the leftovers of all levels meet in one block);
- * the task-by-condition balance is what the design exists for.
+ * <p>Within each level the candidates are shuffled with the seed and every form gets
+ * {@code n / forms} of them; the few left over go one each to distinct forms, chosen by
+ * {@link LeftoverSearch} so that three margins are as even as they can be within every level and
+ * over the whole roster: for each task, the condition it is written under; the task written first;
+ * the condition met first (ranked in that order, see {@link Imbalance}). What this guarantees:
+ * <ul>
+ * <li>within each level, form counts at most one apart;</li>
+ * <li>for each task, its counts under the different conditions at most one apart, within each
+ * level and overall (the earlier block construction reaches this and the search keeps nothing
+ * worse);</li>
+ * <li>no assignment with the two guarantees above has a first-task or first-condition count
+ * further from even than the one chosen, in the cases checked exhaustively by the tests
+ * (FormAssignerTest); for two tasks and two conditions (crossover, and the 2 x 2 Latin square with
+ * rotated conditions) every count is within 1 of even within each level and overall, and exactly
+ * even overall when the roster size is a multiple of 4.</li>
+ * </ul>
+ * Exactly even is not always possible: with two tasks and two conditions, a group of 4q + 2
+ * candidates cannot have all three margins even (they would need 2q + 1.5 candidates on one form).
+ * The achieved counts are in {@link AssignmentCounts}.
  */
 public final class FormAssigner {
 
@@ -41,22 +50,14 @@ public final class FormAssigner {
             throw new IllegalArgumentException("block size " + blockSize + " does not divide " + forms.size() + " forms");
         }
         SplittableRandom random = new SplittableRandom(seed);
-        int blocks = forms.size() / blockSize;
-        int partialBlock = random.nextInt(blocks);
-        int shift = random.nextInt(blockSize);
-        List<Integer> others = new ArrayList<>();
-        for (int b = 0; b < blocks; b++) {
-            if (b != partialBlock) {
-                others.add(b);
-            }
-        }
-        Collections.shuffle(others, new Random(random.nextLong()));
-        int nextOther = 0;
-
         Map<String, List<Candidate>> byLevel = new TreeMap<>();
         candidates.stream().sorted(Comparator.comparing(Candidate::candidateNumber))
                 .forEach(c -> byLevel.computeIfAbsent(c.level(), k -> new ArrayList<>()).add(c));
+        int[] leftovers = byLevel.values().stream().mapToInt(l -> l.size() % forms.size()).toArray();
+        List<int[]> extra = new LeftoverSearch(forms.size(), blockSize, BalanceMargins.of(forms), random)
+                .choose(leftovers);
         List<Assignment.Row> rows = new ArrayList<>();
+        int index = 0;
         for (Map.Entry<String, List<Candidate>> level : byLevel.entrySet()) {
             List<Candidate> members = new ArrayList<>(level.getValue());
             Collections.shuffle(members, new Random(random.nextLong()));
@@ -67,16 +68,8 @@ public final class FormAssigner {
                     picks.add(f);
                 }
             }
-            int left = n % forms.size();
-            for (int b = 0; b < left / blockSize; b++) {
-                int block = others.get(nextOther++ % others.size());
-                for (int s = 0; s < blockSize; s++) {
-                    picks.add(block * blockSize + s);
-                }
-            }
-            for (int i = 0; i < left % blockSize; i++) {
-                picks.add(partialBlock * blockSize + shift);
-                shift = (shift + 1) % blockSize;
+            for (int f : extra.get(index++)) {
+                picks.add(f);
             }
             Collections.shuffle(picks, new Random(random.nextLong()));
             for (int i = 0; i < n; i++) {

@@ -11,13 +11,13 @@ import java.util.Optional;
 import java.util.stream.Stream;
 import org.inkgate.format.archive.ArchiveLimits;
 import org.inkgate.format.archive.EntryNames;
-import org.inkgate.format.archive.SafeZipReader;
+import org.inkgate.format.archive.ForeignZipReader;
 import org.inkgate.format.refusal.FormatRefusal;
 
 /**
- * The files of a package to import, by path inside it: from a ZIP (read with the format module's
- * {@link SafeZipReader}: names checked against zip slip, sizes and compression ratios limited before
- * anything is unpacked), from an unpacked folder (regular files only, no links followed, the same
+ * The files of a package to import, by path inside it: from a ZIP, whichever program wrote it (read
+ * with the format module's {@link ForeignZipReader}: names checked against zip slip, sizes and
+ * compression ratios limited before anything is unpacked, CRC-32 checked), from an unpacked folder (regular files only, no links followed, the same
  * name rules and limits), or one XML file. Nothing is written.
  */
 public final class PackageFiles {
@@ -63,16 +63,14 @@ public final class PackageFiles {
             one.put(name, Files.readAllBytes(path));
             return new PackageFiles(name, one);
         }
-        try (SafeZipReader zip = SafeZipReader.open(path, LIMITS)) {
+        try (ForeignZipReader zip = ForeignZipReader.open(path, LIMITS)) {
             Map<String, byte[]> all = new LinkedHashMap<>();
             for (var e : zip.entries()) {
                 all.put(e.name(), zip.read(e));
             }
             return new PackageFiles(name, all);
         } catch (FormatRefusal e) {
-            throw new PackageRefusal(name + " cannot be read safely as a ZIP: " + e.getMessage()
-                    + ". Inkgate reads ZIPs in one strict layout (no directory entries, extra fields or data descriptors);"
-                    + " if another program wrote it, unpack it with that program and give the folder instead", e);
+            throw new PackageRefusal(name + " cannot be read safely as a ZIP: " + e.getMessage(), e);
         }
     }
 

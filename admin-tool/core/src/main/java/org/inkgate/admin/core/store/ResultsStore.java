@@ -1,6 +1,7 @@
 package org.inkgate.admin.core.store;
 
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.function.Consumer;
 import org.inkgate.admin.core.roster.RosterCandidate;
@@ -54,6 +55,13 @@ public interface ResultsStore extends AutoCloseable {
     List<Rows.Conflict> conflicts(String examId) throws StoreException;
 
     List<Rows.Candidate> candidates(String examId) throws StoreException;
+
+    /**
+     * The named roster fields of the exam's candidates: {@code first_language} from the roster's
+     * column of that name, any other name from the personal fields. Only for a caller the test owner
+     * has allowed to use them; candidate number to field to value, candidates without a value left out.
+     */
+    Map<String, Map<String, String>> rosterFields(String examId, List<String> fields) throws StoreException;
 
     List<Rows.Slot> formSlots(String examId) throws StoreException;
 

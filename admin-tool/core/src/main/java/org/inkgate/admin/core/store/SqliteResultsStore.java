@@ -403,6 +403,23 @@ public final class SqliteResultsStore implements ResultsStore {
     }
 
     @Override
+    public Map<String, Map<String, String>> rosterFields(String examId, List<String> fields) throws StoreException {
+        Map<String, Map<String, String>> out = new java.util.TreeMap<>();
+        for (String field : fields) {
+            String sql = "first_language".equals(field)
+                    ? "SELECT candidate_number, first_language FROM candidates WHERE exam_id=? AND first_language IS NOT NULL"
+                            + " AND first_language <> '' ORDER BY candidate_number"
+                    : "SELECT candidate_number, value FROM candidate_personal WHERE exam_id=? AND field=? AND value <> ''"
+                            + " ORDER BY candidate_number";
+            Object[] args = "first_language".equals(field) ? new Object[] {examId} : new Object[] {examId, field};
+            List<String[]> rows = read("reading roster fields", () -> list(sql, rs -> new String[] {rs.getString(1),
+                rs.getString(2)}, args));
+            rows.forEach(r -> out.computeIfAbsent(r[0], k -> new java.util.LinkedHashMap<>()).put(field, r[1]));
+        }
+        return out;
+    }
+
+    @Override
     public List<Rows.Slot> formSlots(String examId) throws StoreException {
         return read("listing forms", () -> list("SELECT form_id, position, task_id, condition_id FROM form_slots WHERE exam_id=?"
                 + " ORDER BY form_id, position", rs -> new Rows.Slot(rs.getString(1), rs.getInt(2), rs.getString(3),

@@ -82,6 +82,190 @@ class FormAssignerTest {
         }
     }
 
+    /**
+     * The issue's case: the demo roster (two levels of 6) on the demo's four Latin-square forms. The
+     * earlier assigner gave both levels' two leftovers to the same task order, so 8 candidates wrote
+     * one task first and 4 the other; 6 and 6 is possible (12 candidates, 4 forms: 3 each).
+     */
+    @Test
+    void assign_demoRoster_orderAndConditionOrderEvenOverall_withinOneInEachLevel() throws Exception {
+        List<FormSpec> forms = forms(2, 2);
+        for (long seed = 0; seed < 40; seed++) {
+            Assignment a = FormAssigner.assign(roster(6, 6), forms, 2, seed);
+            Map<String, Integer> first = firstTask(a, forms, null);
+            assertEquals(Map.of("t1", 6, "t2", 6), first, "seed " + seed);
+            assertEquals(Map.of("c1", 6, "c2", 6), firstCondition(a, forms, null), "seed " + seed);
+            cellCounts(a, forms, null).values().forEach(n -> assertEquals(6, n));
+            formCounts(a, null).values().forEach(n -> assertEquals(3, n));
+            for (String level : List.of("level-0", "level-1")) {
+                // 6 = 4q + 2: all three margins cannot be even in one level (the assigner's javadoc), so within 1
+                assertWithinOneOfEven(firstTask(a, forms, level), 3, level);
+                assertWithinOneOfEven(firstCondition(a, forms, level), 3, level);
+                cellCounts(a, forms, level).values().forEach(n -> assertEquals(3, n, level));
+            }
+        }
+    }
+
+    /** Levels of 5, 7 and 3 on 4 forms: 15 candidates, every margin within 1 of even per level and overall. */
+    @Test
+    void assign_levelsOf5_7_3_onFourForms_everyMarginWithinOneOfEven() throws Exception {
+        List<FormSpec> forms = forms(2, 2);
+        int[] sizes = {5, 7, 3};
+        for (long seed = 0; seed < 40; seed++) {
+            Assignment a = FormAssigner.assign(roster(sizes), forms, 2, seed);
+            for (int l = 0; l <= sizes.length; l++) {
+                String level = l < sizes.length ? "level-" + l : null;
+                double n = l < sizes.length ? sizes[l] : 15;
+                assertWithinOneOfEven(firstTask(a, forms, level), n / 2, level + " seed " + seed);
+                assertWithinOneOfEven(firstCondition(a, forms, level), n / 2, level + " seed " + seed);
+                assertWithinOneOfEven(cellCounts(a, forms, level), n / 2, level + " seed " + seed);
+                assertAtMostOneApart(formCounts(a, level), forms.size(), level + " seed " + seed);
+                // an odd group cannot split evenly in two, so "within 1" here means one apart
+                assertAtMostOneApart(firstTask(a, forms, level), 2, level + " seed " + seed);
+                assertAtMostOneApart(firstCondition(a, forms, level), 2, level + " seed " + seed);
+            }
+        }
+    }
+
+    /**
+     * The bound for two tasks and two conditions, over every combination of leftovers (level size
+     * modulo 4) for up to four levels: every first-task, first-condition and task x condition count
+     * within 1 of even in each level and overall, and exactly even overall when the roster is a
+     * multiple of 4.
+     */
+    @Test
+    void assign_twoByTwo_everyLeftoverCombination_withinOneOfEven() throws Exception {
+        List<FormSpec> latin = forms(2, 2);
+        List<FormSpec> crossover = FormDesigner.forms(ExamSourceReader.read(
+                ExamFolders.withTasks(dir.resolve("crossover"), 2, 2, "crossover", true)));
+        for (List<FormSpec> forms : List.of(latin, crossover)) {
+            for (int code = 0; code < 4 * 4 * 4 * 4; code++) {
+                int[] sizes = {8 + code % 4, 4 + code / 4 % 4, 12 + code / 16 % 4, 4 + code / 64};
+                int total = 0;
+                for (int n : sizes) {
+                    total += n;
+                }
+                Assignment a = FormAssigner.assign(roster(sizes), forms, 2, code);
+                for (int l = 0; l <= sizes.length; l++) {
+                    String level = l < sizes.length ? "level-" + l : null;
+                    double n = l < sizes.length ? sizes[l] : total;
+                    String what = java.util.Arrays.toString(sizes) + " " + level;
+                    assertWithinOneOfEven(firstTask(a, forms, level), n / firstTask(a, forms, level).size(), what);
+                    assertWithinOneOfEven(firstCondition(a, forms, level), n / 2, what);
+                    assertTaskConditionsAtMostOneApart(cellCounts(a, forms, level), what);
+                }
+                if (total % 4 == 0) {
+                    assertEquals(1, new java.util.HashSet<>(firstTask(a, forms, null).values()).size(),
+                            java.util.Arrays.toString(sizes));
+                    assertEquals(1, new java.util.HashSet<>(firstCondition(a, forms, null).values()).size(),
+                            java.util.Arrays.toString(sizes));
+                }
+            }
+        }
+    }
+
+    /**
+     * Best achievable: for small rosters on 2 x 2, 3 x 2 and 2 x 3 designs, no choice of leftover forms
+     * (one each, to distinct forms, in every level) ranks better than the assigner's by the order
+     * the assigner ranks imbalance; found by trying every combination.
+     */
+    @Test
+    void assign_smallRosters_reachTheBestCombination() throws Exception {
+        Random sizes = new Random(11);
+        int checked = 0;
+        for (int[] design : new int[][] {{2, 2}, {3, 2}, {2, 3}}) {
+            List<FormSpec> forms = FormDesigner.forms(ExamSourceReader.read(ExamFolders.withTasks(
+                    dir.resolve(design[0] + "x" + design[1]), design[0], design[1], "latin-square", true)));
+            int m = forms.size();
+            for (int trial = 0; trial < 25; trial++) {
+                int levels = 1 + sizes.nextInt(3);
+                int[] perLevel = new int[levels];
+                for (int l = 0; l < levels; l++) {
+                    perLevel[l] = 1 + sizes.nextInt(3 * m);
+                }
+                Assignment a = FormAssigner.assign(roster(perLevel), forms, design[1], trial);
+                Imbalance achieved = imbalance(a, forms);
+                Imbalance best = bestByTryingAll(perLevel, forms);
+                assertEquals(0, achieved.compareTo(best), java.util.Arrays.toString(perLevel) + " on " + design[0] + "x"
+                        + design[1] + ": " + achieved + " but " + best + " is possible");
+                checked++;
+            }
+        }
+        assertEquals(75, checked);
+    }
+
+    private static Imbalance imbalance(Assignment a, List<FormSpec> forms) {
+        List<BalanceMargins.Margin> margins = BalanceMargins.of(forms);
+        Map<String, int[]> perLevel = new java.util.TreeMap<>();
+        int[] overall = new int[forms.size()];
+        for (Assignment.Row r : a.rows()) {
+            int f = indexOf(forms, r.formId());
+            perLevel.computeIfAbsent(r.level(), k -> new int[forms.size()])[f]++;
+            overall[f]++;
+        }
+        Imbalance sum = Imbalance.NONE;
+        for (int[] x : perLevel.values()) {
+            sum = sum.plus(Imbalance.of(x, margins, false));
+        }
+        return sum.plus(Imbalance.of(overall, margins, true));
+    }
+
+    private static int indexOf(List<FormSpec> forms, String id) {
+        for (int i = 0; i < forms.size(); i++) {
+            if (forms.get(i).id().equals(id)) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException(id);
+    }
+
+    /** Every combination of within-level balanced counts (q rounds plus distinct leftover forms). */
+    private static Imbalance bestByTryingAll(int[] perLevel, List<FormSpec> forms) {
+        int m = forms.size();
+        List<List<int[]>> options = new ArrayList<>();
+        for (int n : perLevel) {
+            List<int[]> counts = new ArrayList<>();
+            for (int mask = 0; mask < 1 << m; mask++) {
+                if (Integer.bitCount(mask) == n % m) {
+                    int[] x = new int[m];
+                    for (int f = 0; f < m; f++) {
+                        x[f] = n / m + ((mask >> f) & 1);
+                    }
+                    counts.add(x);
+                }
+            }
+            options.add(counts);
+        }
+        List<BalanceMargins.Margin> margins = BalanceMargins.of(forms);
+        Imbalance[] best = {null};
+        tryAll(options, 0, new ArrayList<>(), margins, m, best);
+        return best[0];
+    }
+
+    private static void tryAll(List<List<int[]>> options, int level, List<int[]> chosen, List<BalanceMargins.Margin> margins,
+            int m, Imbalance[] best) {
+        if (level == options.size()) {
+            Imbalance sum = Imbalance.NONE;
+            int[] overall = new int[m];
+            for (int[] x : chosen) {
+                sum = sum.plus(Imbalance.of(x, margins, false));
+                for (int f = 0; f < m; f++) {
+                    overall[f] += x[f];
+                }
+            }
+            sum = sum.plus(Imbalance.of(overall, margins, true));
+            if (best[0] == null || sum.compareTo(best[0]) < 0) {
+                best[0] = sum;
+            }
+            return;
+        }
+        for (int[] x : options.get(level)) {
+            chosen.add(x);
+            tryAll(options, level + 1, chosen, margins, m, best);
+            chosen.removeLast();
+        }
+    }
+
     @Test
     void assign_sameSeed_sameAssignment_otherSeed_otherAssignment() throws Exception {
         List<FormSpec> forms = forms(2, 2);
@@ -99,6 +283,33 @@ class FormAssignerTest {
         Path file = dir.resolve("assignment.csv");
         AssignmentTable.write(a, file);
         assertEquals(a, AssignmentTable.read(file));
+    }
+
+    private static Map<String, Integer> firstTask(Assignment a, List<FormSpec> forms, String level) {
+        return firstSlot(a, forms, level, s -> s.taskId());
+    }
+
+    private static Map<String, Integer> firstCondition(Assignment a, List<FormSpec> forms, String level) {
+        return firstSlot(a, forms, level, s -> s.conditionId());
+    }
+
+    /** Counts per label of the forms' first slot, every label of the design present (0 when unused). */
+    private static Map<String, Integer> firstSlot(Assignment a, List<FormSpec> forms, String level,
+            java.util.function.Function<FormSlot, String> label) {
+        Map<String, FormSpec> byId = new HashMap<>();
+        Map<String, Integer> counts = new HashMap<>();
+        forms.forEach(f -> {
+            byId.put(f.id(), f);
+            counts.putIfAbsent(label.apply(f.slots().get(0)), 0);
+        });
+        a.rows().stream().filter(r -> level == null || r.level().equals(level))
+                .forEach(r -> counts.merge(label.apply(byId.get(r.formId()).slots().get(0)), 1, Integer::sum));
+        return counts;
+    }
+
+    private static void assertWithinOneOfEven(Map<String, Integer> counts, double even, String what) {
+        counts.forEach((k, n) -> assertTrue(Math.abs(n - even) <= 1 + 1e-9, what + ": " + k + " " + n + " vs even " + even
+                + " in " + counts));
     }
 
     private static Map<String, Integer> formCounts(Assignment a, String level) {

@@ -36,6 +36,7 @@ import org.inkgate.client.practice.WordCount;
 import org.inkgate.client.sitting.Sitting;
 import org.inkgate.client.sitting.replay.ReplayException;
 import org.inkgate.client.sitting.replay.TextReplay;
+import org.inkgate.client.sitting.submit.EnrolmentExport;
 import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.sitting.submit.SubmissionResult;
 import org.inkgate.client.sitting.SittingClock;
@@ -68,6 +69,7 @@ import org.inkgate.client.task.TaskContext;
 import org.inkgate.client.task.TaskWorkspace;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.FormSlot;
+import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.bundle.PinHasher;
 import org.inkgate.format.bundle.QuestionnaireSpec;
@@ -129,6 +131,8 @@ public final class SittingFlow {
     private final Timeline ticker;
     private SittingShell shell;
     private Scene scene;
+    /** Keys typed on the way into a task the candidate asked for, kept until its editor has focus. */
+    private TypeAhead typeAhead;
     private StageLock lock;
     private OpenedBundle bundle;
     private ClientDataFolder data;
@@ -238,6 +242,7 @@ public final class SittingFlow {
     private void showStage(String title) {
         if (scene == null) {
             scene = new Scene(shell.root(), 1280, 800);
+            typeAhead = new TypeAhead(scene);
             SittingTheme.install(scene);
             stage.setScene(scene);
         } else {
@@ -261,8 +266,35 @@ public final class SittingFlow {
         screen[0] = new SetupScreen(m.title(), bundle.signerFingerprint(), bundle.sealed(), proposed,
                 setup.demoNote(), openForms, input -> checkSetup(screen[0], input),
                 this::exitApplication);
+        offerEnrolment(screen[0]);
         shell.show(screen[0].root());
         screen[0].focus();
+    }
+
+    /** Shows this installation's fingerprint on the set-up screen and writes its enrolment file on request. */
+    private void offerEnrolment(SetupScreen screen) {
+        InstallationKey key;
+        try {
+            key = InstallationKey.loadOrCreate(data);
+        } catch (IOException | RuntimeException e) {
+            screen.showEnrolment("This machine's installation key cannot be read (" + e.getMessage() + "). Packages"
+                    + " cannot be signed until it can; see the invigilator guide, \"Enrolling the machines\".");
+            return;
+        }
+        screen.showInstallation(key.fingerprint(), (folder, seatLabel) -> {
+            if (folder == null) {
+                screen.showEnrolment("Enter the output folder first: the enrolment file is written there.");
+                return;
+            }
+            work(() -> {
+                try {
+                    return "Enrolment file written: " + EnrolmentExport.write(key, seatLabel, folder, setup.clock().now())
+                            + ". Hand it to the test owner.";
+                } catch (IllegalArgumentException | IOException e) {
+                    return "The enrolment file could not be written to " + folder + " (" + e.getMessage() + ").";
+                }
+            }, screen::showEnrolment);
+        });
     }
 
     private void checkSetup(SetupScreen screen, SetupScreen.Input input) {
@@ -362,10 +394,10 @@ public final class SittingFlow {
                 + plan.formId(), instructions, lines, this::afterInstructions);
         shell.show(screen.root());
         screen.focus();
-        startTools(screen);
+        startTools(screen, plan.form());
     }
 
-    private void startTools(InstructionsScreen screen) {
+    private void startTools(InstructionsScreen screen, FormSpec form) {
         if (shelf != null) {
             if (screen != null) {
                 shelf.allReady().thenRun(() -> Platform.runLater(() -> screen.toolsStatus("The writing tools are ready.")));
@@ -380,8 +412,8 @@ public final class SittingFlow {
             return;
         }
         List<ToolShelf.Order> orders = new ArrayList<>();
-        for (FormSlot slot : plan.form().slots()) {
-            TaskSpec task = plan.manifest().task(slot.taskId()).orElseThrow();
+        for (FormSlot slot : form.slots()) {
+            TaskSpec task = bundle.manifest().task(slot.taskId()).orElseThrow();
             orders.add(new ToolShelf.Order(task.id(), slot.policy(), ExamWords.of(readText(task.promptFile()))));
         }
         shelf = new ToolShelf(packs.broker(), variant(), orders);
@@ -396,7 +428,7 @@ public final class SittingFlow {
 
     private EnglishVariant variant() {
         try {
-            return EnglishVariant.fromTag(plan.manifest().language());
+            return EnglishVariant.fromTag(bundle.manifest().language());
         } catch (IllegalArgumentException e) {
             // the checker is only built for tasks that allow it; a non-English exam offering it fails there, visibly
             return EnglishVariant.EN_GB;
@@ -406,10 +438,16 @@ public final class SittingFlow {
     private void afterInstructions() {
         String pre = plan.form().preQuestionnaire();
         if (pre != null) {
-            showQuestionnaire(pre, this::startNextTask);
+            showQuestionnaire(pre, this::startAskedForTask);
         } else {
-            startNextTask();
+            startAskedForTask();
         }
+    }
+
+    /** The candidate asked for the next task (Begin, Done, Yes, finish this task): what they type at once goes into it. */
+    private void startAskedForTask() {
+        typeAhead.hold();
+        startNextTask();
     }
 
     // ---- questionnaires ----
@@ -431,6 +469,7 @@ public final class SittingFlow {
     private void startNextTask() {
         Optional<String> next = sitting.nextTask();
         if (next.isEmpty()) {
+            typeAhead.drop();
             afterTasks(false);
             return;
         }
@@ -448,6 +487,7 @@ public final class SittingFlow {
         FormSlot slot = plan.form().slots().get(index);
         if (paused) {
             // a sitting recovered while paused: the task begins when the invigilator resumes
+            typeAhead.drop();
             entryWaiting = true;
             return;
         }
@@ -459,6 +499,7 @@ public final class SittingFlow {
         try {
             start = sitting.enterTask(slot.taskId());
         } catch (IOException e) {
+            typeAhead.drop();
             shell.announcer().announce("Invigilator: the task could not be started, because the saved work could not"
                     + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
             return;
@@ -475,6 +516,7 @@ public final class SittingFlow {
                 return;
             }
             if (failure != null) {
+                typeAhead.drop();
                 shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
                 return;
             }
@@ -492,6 +534,7 @@ public final class SittingFlow {
             updateClock();
             ticker.play();
             if (paused) {
+                typeAhead.drop();
                 freeze(true);
             } else {
                 focusEditorOnceShown(workspace);
@@ -500,21 +543,39 @@ public final class SittingFlow {
     }
 
     /**
-     * Puts the caret in the new task's editor. The editor takes focus only once its skin is laid
-     * out, which can take a few pulses; until then the scene gives focus to the first button it
-     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most a
-     * second), and never after the task has changed or the exam is paused.
+     * Puts the caret in the new task's editor and hands it the keys typed on the way in. The
+     * editor takes focus only once its skin is laid out, which can take a few pulses (more in
+     * large print, on a busy machine); until then the scene gives focus to the first button it
+     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most
+     * five seconds), and never after the task has changed, the exam is paused or the invigilator's
+     * screen is open; keys typed meanwhile are kept ({@link TypeAhead}) and delivered in order.
      */
     private void focusEditorOnceShown(TaskWorkspace shown) {
         Timeline retry = new Timeline();
         retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
-            if (workspace != shown || paused || focusInside(shown.view())) {
+            if (workspace != shown) {
+                retry.stop(); // a later task took over, with its own keys and retry
+                return;
+            }
+            if (paused || desk.showing()) {
+                typeAhead.drop();
+                retry.stop();
+                return;
+            }
+            if (focusInside(shown.view())) {
+                typeAhead.deliverTo(scene.getFocusOwner());
                 retry.stop();
                 return;
             }
             shown.focusEditor();
         }));
-        retry.setCycleCount(34);
+        retry.setCycleCount(167);
+        typeAhead.awaitFocusIn(shown.view());
+        retry.setOnFinished(e -> {
+            if (workspace == shown) {
+                typeAhead.drop(); // focus never reached the editor: keys typed now go where focus is
+            }
+        });
         shown.focusEditor();
         retry.play();
     }
@@ -575,6 +636,7 @@ public final class SittingFlow {
             return;
         }
         taskEnding = true;
+        typeAhead.drop(); // keys typed after the time is up belong to no task
         freeze(true);
         shell.announcer().announce(wholeSitting ? "The time for the whole exam is up. Your answers have been saved."
                 : "The time for this task is up. Your answer has been saved.");
@@ -589,6 +651,11 @@ public final class SittingFlow {
             return;
         }
         taskEnding = true;
+        if (reason == EndReason.SUBMITTED) {
+            typeAhead.hold(); // the candidate moves on: what they type now belongs to the next task
+        } else {
+            typeAhead.drop(); // time or the invigilator ended it: keys typed now belong to no task
+        }
         finishTask(reason, false);
     }
 
@@ -725,6 +792,11 @@ public final class SittingFlow {
         if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
             facts.add("The answers were handed in and saved on this machine, but not yet written to the output folder.");
         }
+        if (found.stage() != UnfinishedSitting.Stage.AWAITING_DELIVERY) {
+            // the writing tools start while the invigilator reads this screen, so the restored text is
+            // checked as soon as the task shows, not after LanguageTool's start (seconds on a busy machine)
+            bundle.manifest().form(found.formId()).ifPresent(form -> startTools(null, form));
+        }
         String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
         // the folder chosen at set-up (the room's stick), remembered in the sitting's database
@@ -827,7 +899,7 @@ public final class SittingFlow {
     /** After a restart the instructions screen may be skipped, but the tools must still be prepared. */
     private void prepareToolsQuietly() {
         if (shelf == null) {
-            startTools(null);
+            startTools(null, plan.form());
         }
     }
 
@@ -838,6 +910,7 @@ public final class SittingFlow {
                 || current == Screen.RECOVERY) {
             return;
         }
+        typeAhead.drop(); // the PIN typed next is never the candidate's text
         desk.open();
     }
 
@@ -931,6 +1004,7 @@ public final class SittingFlow {
         }
         paused = pause;
         if (pause) {
+            typeAhead.drop();
             sitting.pauseAll();
             freeze(true);
             desk.coverPaused(true);
@@ -1127,6 +1201,11 @@ public final class SittingFlow {
     /** The lock, when applied. */
     StageLock lock() {
         return lock;
+    }
+
+    /** Whether the writing tools are being prepared (or ready); for tests. */
+    boolean toolsStarted() {
+        return shelf != null;
     }
 
     /** Lines the invigilator screen lists (focus changes, hand-in trouble), oldest first. */

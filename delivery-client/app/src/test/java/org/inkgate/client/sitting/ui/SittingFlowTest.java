@@ -95,6 +95,30 @@ class SittingFlowTest {
     }
 
     @Test
+    void setUp_showsTheInstallationFingerprintAndWritesAnEnrolmentFileTheAdminToolAccepts(FxRobot robot)
+            throws Exception {
+        FlowDriver d = driver();
+        d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
+        d.await("setupPin", Node.class);
+        // the key the client signs packages with, read independently of the screen
+        String fingerprint = org.inkgate.client.sitting.submit.InstallationKey
+                .loadOrCreate(new org.inkgate.client.sitting.store.ClientDataFolder(temp.resolve("data"))).fingerprint();
+
+        assertEquals(fingerprint, d.text("setupInstallationFingerprint"));
+        Path out = temp.resolve("out");
+        d.type("setupOutput", out.toString());
+        d.type("setupSeat", "Room 2, seat 14");
+        d.press("setupWriteEnrolment");
+
+        d.awaitText("setupEnrolmentStatus", "Enrolment file written");
+        Path file = out.resolve("installation-" + fingerprint + ".inkenrol");
+        var enrolment = org.inkgate.format.enrolment.InstallationEnrolment.read(file);
+        assertEquals(fingerprint, enrolment.fingerprint());
+        assertEquals("Room 2, seat 14", enrolment.machine());
+        assertEquals(SittingFlow.Screen.SETUP, d.flow.screen(), "writing the file does not start the sitting");
+    }
+
+    @Test
     void setUp_exit_closesTheLockedWindowWithoutStartingASitting(FxRobot robot) throws Exception {
         FlowDriver d = driver();
         d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), true);

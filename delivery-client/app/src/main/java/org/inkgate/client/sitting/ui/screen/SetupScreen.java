@@ -33,6 +33,8 @@ public final class SetupScreen {
     private final ComboBox<String> form = new ComboBox<>();
     private final Label error = Parts.errorLine("setupError");
     private final Button go;
+    private final VBox fields;
+    private final Label enrolmentStatus = Parts.quiet("");
     private final Parent root;
 
     /**
@@ -65,7 +67,7 @@ public final class SetupScreen {
                 output.getText().isBlank() ? null : Path.of(output.getText().strip()), seat.getText().strip(),
                 sealed ? release.getText().toCharArray() : null, form.getValue())));
 
-        VBox fields = new VBox(10,
+        fields = new VBox(10,
                 Parts.heading("Invigilator set-up"),
                 Parts.text(examTitle),
                 Parts.quiet("Signed by key " + signer + ". Compare it with the fingerprint the test owner published."),
@@ -90,6 +92,39 @@ public final class SetupScreen {
         Button exit = Parts.plain("setupExit", "E_xit", onExit);
         fields.getChildren().addAll(error, new HBox(12, go, exit));
         root = Parts.card("setupScreen", fields);
+    }
+
+    /**
+     * Shows this installation's fingerprint, which the test owner enrols so that the collector
+     * trusts this machine's packages, and offers to write the enrolment file to the output folder.
+     *
+     * @param fingerprint the installation key's fingerprint
+     * @param onWrite     writes the enrolment file for the output folder and seat label entered,
+     *                    and answers with {@link #showEnrolment}
+     */
+    public void showInstallation(String fingerprint, java.util.function.BiConsumer<Path, String> onWrite) {
+        Label print = Parts.text(fingerprint);
+        print.setId("setupInstallationFingerprint");
+        print.getStyleClass().add("fingerprint");
+        print.setAccessibleText("This machine's installation fingerprint: " + fingerprint);
+        Button write = Parts.plain("setupWriteEnrolment", "Write _enrolment file", () -> onWrite.accept(
+                output.getText().isBlank() ? null : Path.of(output.getText().strip()), seat.getText().strip()));
+        enrolmentStatus.setId("setupEnrolmentStatus");
+        enrolmentStatus.managedProperty().bind(enrolmentStatus.textProperty().isNotEmpty());
+        HBox row = new HBox(12, print, write);
+        row.setAlignment(javafx.geometry.Pos.CENTER_LEFT);
+        // beside the seat label, which the enrolment file records
+        int at = fields.getChildren().indexOf(seat) + 1;
+        fields.getChildren().addAll(at, List.of(
+                Parts.quiet("This machine's installation fingerprint. The test owner enrols it so that response"
+                        + " packages from this machine are trusted; the file is written to the output folder above."),
+                row, enrolmentStatus));
+    }
+
+    /** Says where the enrolment file was written, or why it was not. */
+    public void showEnrolment(String message) {
+        enrolmentStatus.setText(message);
+        enrolmentStatus.setAccessibleText(message);
     }
 
     public Parent root() {
