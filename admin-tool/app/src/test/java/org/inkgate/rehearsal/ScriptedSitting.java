@@ -17,7 +17,7 @@ final class ScriptedSitting {
 
     /** What the script did in one sitting, on its clock. */
     static final class Done {
-        /** Milliseconds each tool's page was in view in the tools task (dictionary, glossary, spelling). */
+        /** Milliseconds the candidate was in the panel (keyboard focus in it) on each tool's page, in the tools task. */
         final Map<String, Long> pageInView = new LinkedHashMap<>();
         /** From the tools task's start (its editor and panel shown) to its end (finish confirmed). */
         long toolsTaskMillis;
@@ -61,8 +61,12 @@ final class ScriptedSitting {
      */
     Done sitFromRecovery(String pin, Path output, String typedBefore, List<Boolean> withTools) {
         seat.await("recoveryScreen", javafx.scene.Node.class);
-        // the screen proposes the data folder's outbox, not the folder chosen at set-up: the invigilator types the room's
-        seat.fill("recoveryOutput", output.toString());
+        // the screen proposes the output folder chosen at set-up, remembered in the sitting's database: kept as proposed
+        javafx.scene.control.TextField field = seat.await("recoveryOutput", javafx.scene.control.TextField.class);
+        String proposed = Seat.onFx(field::getText);
+        if (!Path.of(proposed).toAbsolutePath().equals(output.toAbsolutePath())) {
+            throw new AssertionError("the recovery screen proposes " + proposed + ", not the set-up's output folder " + output);
+        }
         seat.fill("recoveryPin", pin);
         seat.press("resumeButton");
         seat.press("continueButton");
@@ -87,16 +91,15 @@ final class ScriptedSitting {
         ScriptedClock clock = seat.clock;
         long ms = script.msPerChar();
         int pause = 0;
-        // the panel shows the dictionary's page (the first tab) from the moment the task is shown
+        // the panel stands beside the answer from the start, but the candidate is in it only while
+        // keyboard focus is: from a tool's shortcut until the insertion or Esc hands focus back to the answer
         long start = clock.millis();
-        String inView = "dictionary";
-        long since = start;
+        long since;
 
         seat.type(CandidateScript.TOOLS_PART_1, ms);
 
         // glossary: look the term up, open the entry, insert it or type it
-        since = switchPage(inView, since, "glossary", KeyCode.G, "glossaryQuery");
-        inView = "glossary";
+        since = switchPage("glossary", KeyCode.G, "glossaryQuery");
         clock.advanceMillis(script.dwellMillis(pause++));
         seat.typeAndEnter(CandidateScript.GLOSSARY_QUERY);
         seat.waitUntil("the glossary's hits", () -> seat.textOf("glossaryStatus").contains("Choose one"));
@@ -107,18 +110,19 @@ final class ScriptedSitting {
         clock.advanceMillis(script.dwellMillis(pause++));
         if (script.insertsGlossaryTerm()) {
             seat.select("glossaryInsertable", CandidateScript.GLOSSARY_QUERY);
-            seat.press("glossaryInsert");
+            seat.press("glossaryInsert"); // the insertion puts focus back in the answer
+            leftPanel("glossary", since);
             seat.awaitTask(seat.workspaces.size());
         } else {
             backToAnswer();
+            leftPanel("glossary", since);
             seat.type(CandidateScript.GLOSSARY_QUERY, ms);
         }
 
         seat.type(CandidateScript.TOOLS_PART_2, ms);
 
         // dictionary: perhaps a lookup that finds nothing, then the word, its entry, insert or type
-        since = switchPage(inView, since, "dictionary", KeyCode.D, "dictionaryQuery");
-        inView = "dictionary";
+        since = switchPage("dictionary", KeyCode.D, "dictionaryQuery");
         if (script.makesEmptyLookup()) {
             clock.advanceMillis(script.dwellMillis(pause++));
             seat.typeAndEnter(CandidateScript.EMPTY_QUERY);
@@ -144,17 +148,18 @@ final class ScriptedSitting {
         if (script.insertsDictionaryWord()) {
             seat.select("dictionaryInsertable", CandidateScript.DICTIONARY_QUERY);
             seat.press("dictionaryInsert");
+            leftPanel("dictionary", since);
             seat.awaitTask(seat.workspaces.size());
         } else {
             backToAnswer();
+            leftPanel("dictionary", since);
             seat.type(CandidateScript.DICTIONARY_QUERY, ms);
         }
 
         seat.type(CandidateScript.TOOLS_PART_3, ms);
 
         // spelling: the planted misspellings are flagged; correct or ignore the first, ignore or leave the second
-        since = switchPage(inView, since, "spelling", KeyCode.K, "flagList");
-        inView = "spelling";
+        since = switchPage("spelling", KeyCode.K, "flagList");
         seat.waitUntil("both planted misspellings flagged", () -> flagged(CandidateScript.MISSPELT_1)
                 && flagged(CandidateScript.MISSPELT_2));
         clock.advanceMillis(script.dwellMillis(pause++));
@@ -178,21 +183,25 @@ final class ScriptedSitting {
         seat.focus("flagList");
         clock.advanceMillis(script.dwellMillis(pause++));
         backToAnswer();
+        leftPanel("spelling", since);
         clock.advanceMillis(1_000);
         long end = clock.millis();
-        done.pageInView.merge(inView, end - since, Long::sum);
         done.toolsTaskMillis = end - start;
         finishTask();
     }
 
-    /** Opens another tool's page with its shortcut; returns the moment it came into view. */
-    private long switchPage(String from, long since, String to, KeyCode key, String focusedId) {
+    /** Goes into the panel on a tool's page with its shortcut; returns the moment focus went in. */
+    private long switchPage(String to, KeyCode key, String focusedId) {
         long now = seat.clock.millis();
-        done.pageInView.merge(from, now - since, Long::sum);
         seat.shortcut(key);
         seat.waitUntil("#" + focusedId + " focused after the " + to + " shortcut",
                 () -> seat.showing(focusedId) && seat.await(focusedId, javafx.scene.Node.class).isFocused());
         return now;
+    }
+
+    /** Counts the time in the panel on this page, up to now (focus has just gone back to the answer). */
+    private void leftPanel(String page, long since) {
+        done.pageInView.merge(page, seat.clock.millis() - since, Long::sum);
     }
 
     private void backToAnswer() {

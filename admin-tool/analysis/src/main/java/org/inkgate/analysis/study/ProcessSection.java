@@ -94,10 +94,10 @@ final class ProcessSection {
             t.note(unmatched + " logged response(s) have no ratings and appear under '(not rated)'.");
         }
         t.note("Means leave out responses where a measure is undefined (e.g. mean pause with no pause).");
-        t.note("Time in resource panel is the time a tool's page was in view in the panel (panel.open to panel.close,"
-                + " up to the task's end). The client shows the panel beside the answer for the whole of a task that"
-                + " offers tools, so this figure is close to the time on task there and does not show use: read"
-                + " lookups and tool use for that.");
+        t.note("Time in resource panel is the time the candidate worked in the panel: keyboard focus inside it, with"
+                + " the window focused (panel.open to panel.close, up to the task's end). Reading the panel without"
+                + " moving focus there is not seen; packages from clients that logged the page in view from the"
+                + " task's start give about the time on task.");
         s.table(t.build());
         s.put("responses", byResponse.size());
         return s.build();

@@ -148,8 +148,17 @@ public final class Sitting implements AutoCloseable {
 
     // -- starting and resuming --
 
-    /** Starts a new sitting: creates its database in the client data folder and logs {@code sitting.start}. */
+    /** Starts a new sitting whose output folder is not known here (tests, tools): see the four-argument form. */
     public static Sitting begin(SittingPlan plan, ClientDataFolder folder, SittingClock clock) throws IOException {
+        return begin(plan, folder, clock, null);
+    }
+
+    /**
+     * Starts a new sitting: creates its database in the client data folder, remembers the output
+     * folder the invigilator chose at set-up (so recovery proposes it again) and logs {@code sitting.start}.
+     */
+    public static Sitting begin(SittingPlan plan, ClientDataFolder folder, SittingClock clock, Path outputFolder)
+            throws IOException {
         folder.create();
         String id = UUID.randomUUID().toString();
         Instant now = clock.now();
@@ -161,7 +170,7 @@ public final class Sitting implements AutoCloseable {
         log.persist(c -> {
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO sitting(id, sitting_id, bundle_sha256, bundle_file, exam_id,"
                     + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, client_version, screen,"
-                    + " current_task) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL)")) {
+                    + " current_task, output_folder) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL, ?)")) {
                 ps.setString(1, id);
                 ps.setString(2, plan.manifestSha256());
                 ps.setString(3, plan.bundleFile());
@@ -174,6 +183,7 @@ public final class Sitting implements AutoCloseable {
                 ps.setString(10, RecoveryScan.IN_PROGRESS);
                 ps.setString(11, now.toString());
                 ps.setString(12, plan.clientVersion());
+                ps.setString(13, outputFolder == null ? null : outputFolder.toAbsolutePath().toString());
                 ps.executeUpdate();
             }
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO tasks(task_id, ord, condition_id, policy) VALUES (?, ?, ?, ?)")) {
@@ -409,6 +419,8 @@ public final class Sitting implements AutoCloseable {
         boolean resumed = t.startedAt != null;
         TextRecovery.Recovered recovered = resumed ? log.read(c -> TextRecovery.recover(c, taskId))
                 : new TextRecovery.Recovered("", 0, 0, 0, Optional.empty(), Optional.empty());
+        // read before this process logs anything for the task: what the crashed process logged
+        List<ProcessEvent> loggedBefore = resumed ? log.read(c -> SqliteProcessLog.readTaskEvents(c, taskId, 0)) : List.of();
         Instant now = clock.now();
         if (!resumed) {
             t.startedAt = now;
@@ -428,7 +440,7 @@ public final class Sitting implements AutoCloseable {
         sittingCountdown.ifPresent(Countdown::start);
         sittingClockStarted = true;
         checkpoint();
-        return new TaskStart(t.slot, t.spec, recovered.text(), recovered.caret(), resumed, recovered.mismatch());
+        return new TaskStart(t.slot, t.spec, recovered.text(), recovered.caret(), resumed, recovered.mismatch(), loggedBefore);
     }
 
     /**

@@ -1,9 +1,11 @@
 package org.inkgate.client.sitting;
 
+import java.util.List;
 import java.util.Optional;
 import org.inkgate.client.sitting.replay.ReplayMismatch;
 import org.inkgate.format.bundle.FormSlot;
 import org.inkgate.format.bundle.TaskSpec;
+import org.inkgate.format.response.ProcessEvent;
 
 /**
  * A task as it (re)starts: what to build the workspace from.
@@ -14,7 +16,13 @@ import org.inkgate.format.bundle.TaskSpec;
  * @param caret    where the caret goes
  * @param resumed  true when the task had begun before (after a restart)
  * @param mismatch a disagreement between the saved snapshot and the log, to show the invigilator
+ * @param loggedBefore the task's events logged before the restart (empty for a new task), so the
+ *                 workspace counts its tool use on from them
  */
 public record TaskStart(FormSlot slot, TaskSpec task, String text, int caret, boolean resumed,
-        Optional<ReplayMismatch> mismatch) {
+        Optional<ReplayMismatch> mismatch, List<ProcessEvent> loggedBefore) {
+
+    public TaskStart {
+        loggedBefore = List.copyOf(loggedBefore);
+    }
 }

@@ -38,7 +38,6 @@ final class DictionaryPage implements ToolPage {
 
     private final Dictionary dictionary;
     private final TaskEvents events;
-    private final ToolTally tally;
     private final PanelActions actions;
     private final Lookups.Channel searches;
     private final Lookups.Channel entries;
@@ -50,10 +49,9 @@ final class DictionaryPage implements ToolPage {
     private final InsertRow insertRow;
     private final VBox root;
 
-    DictionaryPage(Dictionary dictionary, TaskEvents events, ToolTally tally, PanelActions actions, Lookups lookups) {
+    DictionaryPage(Dictionary dictionary, TaskEvents events, PanelActions actions, Lookups lookups) {
         this.dictionary = dictionary;
         this.events = events;
-        this.tally = tally;
         this.actions = actions;
         this.searches = lookups.channel(this::failed);
         this.entries = lookups.channel(this::failed);
@@ -141,10 +139,7 @@ final class DictionaryPage implements ToolPage {
         }
         status.setText("Looking up \u201C" + word.strip() + "\u201D\u2026");
         searches.submit(() -> dictionary.lookup(word),
-                timed -> {
-                    events.tool(timed.event());
-                    tally.query(Tool.DICTIONARY, timed.value().entries().size());
-                },
+                timed -> events.tool(timed.event()),
                 timed -> showLookup(timed.value()));
     }
 
@@ -182,12 +177,7 @@ final class DictionaryPage implements ToolPage {
         }
         String id = chosen.id();
         entries.submit(() -> dictionary.openEntry(id),
-                timed -> {
-                    events.tool(timed.event());
-                    if (timed.value().isPresent()) {
-                        tally.opened(Tool.DICTIONARY);
-                    }
-                },
+                timed -> events.tool(timed.event()),
                 this::showEntry);
     }
 

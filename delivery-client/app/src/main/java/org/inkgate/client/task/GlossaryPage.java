@@ -38,7 +38,6 @@ final class GlossaryPage implements ToolPage {
 
     private final Glossary glossary;
     private final TaskEvents events;
-    private final ToolTally tally;
     private final PanelActions actions;
     private final Lookups.Channel searches;
     private final Lookups.Channel entries;
@@ -50,10 +49,9 @@ final class GlossaryPage implements ToolPage {
     private final PauseTransition typingPause = new PauseTransition(SEARCH_AFTER);
     private final VBox root;
 
-    GlossaryPage(Glossary glossary, TaskEvents events, ToolTally tally, PanelActions actions, Lookups lookups) {
+    GlossaryPage(Glossary glossary, TaskEvents events, PanelActions actions, Lookups lookups) {
         this.glossary = glossary;
         this.events = events;
-        this.tally = tally;
         this.actions = actions;
         this.searches = lookups.channel(this::failed);
         this.entries = lookups.channel(this::failed);
@@ -146,10 +144,7 @@ final class GlossaryPage implements ToolPage {
             return;
         }
         searches.submit(() -> glossary.search(text, LIMIT),
-                timed -> {
-                    events.tool(timed.event());
-                    tally.query(Tool.GLOSSARY, timed.value().size());
-                },
+                timed -> events.tool(timed.event()),
                 timed -> showHits(text.strip(), timed.value()));
     }
 
@@ -175,12 +170,7 @@ final class GlossaryPage implements ToolPage {
         }
         String id = chosen.entryId();
         entries.submit(() -> glossary.openEntry(id),
-                timed -> {
-                    events.tool(timed.event());
-                    if (timed.value().isPresent()) {
-                        tally.opened(Tool.GLOSSARY);
-                    }
-                },
+                timed -> events.tool(timed.event()),
                 this::showEntry);
     }
 

@@ -20,9 +20,8 @@ final class Suggestions {
     private final SpellingChecker checker;
     private final SpellingMarks marks;
     private final TaskEvents events;
-    private final ToolTally tally;
 
-    Suggestions(AnswerArea area, SpellingChecker checker, SpellingMarks marks, TaskEvents events, ToolTally tally) {
+    Suggestions(AnswerArea area, SpellingChecker checker, SpellingMarks marks, TaskEvents events) {
         if (!checker.mode().offersSuggestions()) {
             throw new IllegalStateException("the task's spelling mode " + checker.mode() + " offers no suggestions");
         }
@@ -30,7 +29,6 @@ final class Suggestions {
         this.checker = checker;
         this.marks = marks;
         this.events = events;
-        this.tally = tally;
     }
 
     static Tool toolOf(CheckIssue i) {
@@ -47,7 +45,6 @@ final class Suggestions {
     void shown(CheckIssue i) {
         events.record(EventType.SUGGESTION_SHOW, "tool", TaskEvents.wire(toolOf(i)), "rule", i.ruleId(), "pos", i.start(),
                 "len", i.end() - i.start(), "word", word(i), "suggestions", String.join(" | ", i.suggestions()));
-        tally.shown(toolOf(i));
     }
 
     /** Replaces the flagged text by the chosen suggestion. */
@@ -58,7 +55,6 @@ final class Suggestions {
         String from = word(i);
         events.record(EventType.SUGGESTION_ACCEPT, "tool", TaskEvents.wire(toolOf(i)), "rule", i.ruleId(), "pos", i.start(),
                 "from", from, "to", replacement);
-        tally.accepted(toolOf(i));
         area.changeAs(ChangeSource.SUGGESTION, () -> area.replaceText(i.start(), i.end(), replacement));
         area.moveTo(i.start() + replacement.length());
     }
@@ -74,7 +70,6 @@ final class Suggestions {
         }
         checker.ignoreWord(word);
         events.record(EventType.SUGGESTION_IGNORE, "tool", TaskEvents.wire(Tool.SPELLING), "rule", i.ruleId(), "word", word);
-        tally.ignored(Tool.SPELLING);
         List<CheckIssue> same = new ArrayList<>();
         for (CheckIssue f : marks.flags().all()) {
             if (f.kind() == CheckIssue.Kind.SPELLING && word.equals(word(f))) {

@@ -1,8 +1,10 @@
 package org.inkgate.client.task;
 
+import java.util.List;
 import java.util.Objects;
 import org.inkgate.client.sitting.ProcessLog;
 import org.inkgate.format.bundle.TaskSpec;
+import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.packs.broker.TaskTools;
 
 /**
@@ -15,9 +17,17 @@ import org.inkgate.packs.broker.TaskTools;
  * @param startText     the answer so far (empty for a new task, the recovered text after a restart)
  * @param startCaret    where the caret goes
  * @param display       the candidate's display accommodations
+ * @param loggedBefore  the task's events logged before a restart (empty for a new task): the tool use
+ *                      they record is counted on, not lost
  */
 public record TaskContext(TaskSpec task, String promptMarkdown, TaskTools tools, ProcessLog log, String startText,
-        int startCaret, DisplaySettings display) {
+        int startCaret, DisplaySettings display, List<ProcessEvent> loggedBefore) {
+
+    /** A task begun afresh: nothing logged before. */
+    public TaskContext(TaskSpec task, String promptMarkdown, TaskTools tools, ProcessLog log, String startText,
+            int startCaret, DisplaySettings display) {
+        this(task, promptMarkdown, tools, log, startText, startCaret, display, List.of());
+    }
 
     public TaskContext {
         Objects.requireNonNull(task, "task");
@@ -25,5 +35,6 @@ public record TaskContext(TaskSpec task, String promptMarkdown, TaskTools tools,
         Objects.requireNonNull(log, "log");
         startText = Objects.requireNonNullElse(startText, "");
         Objects.requireNonNull(display, "display");
+        loggedBefore = List.copyOf(Objects.requireNonNullElse(loggedBefore, List.of()));
     }
 }

@@ -14,10 +14,13 @@ final class TaskEvents {
 
     private final ProcessLog log;
     private final String taskId;
+    private final ToolTally tally;
 
-    TaskEvents(ProcessLog log, String taskId) {
+    /** Events of one task; every event recorded is also counted in the tally (the one counting rule). */
+    TaskEvents(ProcessLog log, String taskId, ToolTally tally) {
         this.log = Objects.requireNonNull(log, "log");
         this.taskId = Objects.requireNonNull(taskId, "taskId");
+        this.tally = Objects.requireNonNull(tally, "tally");
     }
 
     /** Records an event with fields given as name, value, name, value... in the order written. */
@@ -30,6 +33,7 @@ final class TaskEvents {
             data.put((String) nameValue[k], nameValue[k + 1]);
         }
         log.record(type, taskId, data);
+        tally.count(type, data);
     }
 
     void snapshot(String text, int caret) {

@@ -59,8 +59,9 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
     WritingWorkspace(TaskContext context, ClipboardAccess clipboard) {
         this.tools = context.tools();
         this.policy = tools.policy();
-        this.events = new TaskEvents(context.log(), context.task().id());
-        this.tally = new ToolTally(tools.offered());
+        // a task re-entered after a crash counts on from its events logged before (none for a new task)
+        this.tally = ToolTally.rebuilt(tools.offered(), context.loggedBefore());
+        this.events = new TaskEvents(context.log(), context.task().id(), tally);
         this.lookups = new Lookups(context.task().id());
         this.area = new AnswerArea(new PasteGate(policy.paste()), clipboard, this::pasteRefused);
         area.setId("answer");
@@ -78,11 +79,11 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         Optional<SpellingChecker> checker = tools.spelling();
         this.marks = checker.map(c -> new SpellingMarks(area, c, events, this::flagsChanged, this::checkerFailed)).orElse(null);
         this.suggestions = checker.filter(c -> c.mode().offersSuggestions())
-                .map(c -> new Suggestions(area, c, marks, events, tally)).orElse(null);
+                .map(c -> new Suggestions(area, c, marks, events)).orElse(null);
 
         List<ToolPage> pages = new ArrayList<>();
-        tools.dictionary().ifPresent(d -> pages.add(new DictionaryPage(d, events, tally, this, lookups)));
-        tools.glossary().ifPresent(g -> pages.add(new GlossaryPage(g, events, tally, this, lookups)));
+        tools.dictionary().ifPresent(d -> pages.add(new DictionaryPage(d, events, this, lookups)));
+        tools.glossary().ifPresent(g -> pages.add(new GlossaryPage(g, events, this, lookups)));
         if (suggestions != null) {
             pages.add(new SuggestionsPage(suggestions, this, checker.get().mode().checksGrammar()));
         }
@@ -304,7 +305,6 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         }
         IndexRange selection = area.getSelection();
         events.record(EventType.TOOL_INSERT, "tool", TaskEvents.wire(tool), "entry", entryId, "pos", selection.getStart(), "text", text);
-        tally.inserted(tool);
         area.changeAs(ChangeSource.PANEL, () -> area.replaceSelection(text));
         area.requestFocus();
     }

@@ -186,6 +186,7 @@ class WorkspaceEditingTest {
             return made[0];
         }));
         WritingWorkspace w = Shown.show(robot, stage, TestTools.context(tools, log, "", DisplaySettings.standard()), new FakeClipboard(null));
+        robot.clickOn("#glossaryQuery"); // the candidate is in the panel when the task ends
         robot.interact(w::close);
         assertTrue(made[0].closed, "the checker's thread is stopped");
         assertEquals(List.of("glossary"), log.events(EventType.PANEL_CLOSE).stream().map(e -> e.get("tool")).toList());

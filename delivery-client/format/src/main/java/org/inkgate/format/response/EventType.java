@@ -53,9 +53,12 @@ public enum EventType {
     TEXT_DELETE("text.delete", Level.TASK, keys("pos", "len", "text", "source"), keys()),
     /** A paste was refused by the policy. */
     PASTE_REFUSED("paste.refused", Level.TASK, keys("reason", "len"), keys()),
-    /** A tool's page came into view in the resource panel (the first page when the task opens, then every switch). */
+    /**
+     * The candidate went into the resource panel (keyboard focus in it, window focused), on the page
+     * of {@code tool}; a tab switch while in the panel is a close and an open at the same moment.
+     */
     PANEL_OPEN("panel.open", Level.TASK, keys("tool"), keys()),
-    /** A tool's page left view (another page was chosen, or the workspace closed). */
+    /** The candidate left the resource panel or its page (focus back to the answer or elsewhere, window lost focus, workspace closed). */
     PANEL_CLOSE("panel.close", Level.TASK, keys("tool"), keys()),
     /** A glossary or dictionary lookup. */
     TOOL_QUERY("tool.query", Level.TASK, keys("tool", "pack", "query", "hits", "micros"), keys()),

@@ -61,6 +61,7 @@ public final class RecoveryScan {
                     lastEvent = Instant.parse(rs.getString(1));
                 }
             }
+            Optional<Path> outputFolder = outputFolder(c);
             try (ResultSet rs = s.executeQuery("SELECT sitting_id, bundle_sha256, bundle_file, exam_id, candidate, form_id,"
                     + " current_task, screen, status, checkpoint_at, paused FROM sitting WHERE id = 1")) {
                 if (!rs.next()) {
@@ -77,11 +78,29 @@ public final class RecoveryScan {
                         Optional.ofNullable(rs.getString(8)).orElse(""),
                         AWAITING_DELIVERY.equals(status) ? UnfinishedSitting.Stage.AWAITING_DELIVERY
                                 : UnfinishedSitting.Stage.IN_PROGRESS,
-                        last, rs.getInt(11) != 0));
+                        last, rs.getInt(11) != 0, outputFolder));
             }
         } catch (SQLException e) {
             throw new IOException(file + ": this sitting database cannot be read (" + e.getMessage() + "). Do not delete it:"
                     + " it may hold a candidate's work; give it to the test owner.", e);
+        }
+    }
+
+    /** The output folder chosen at set-up, when the database remembers one (layout 2 on). */
+    private static Optional<Path> outputFolder(Connection c) throws SQLException {
+        if (!SittingDatabase.hasColumn(c, "sitting", "output_folder")) {
+            return Optional.empty();
+        }
+        try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("SELECT output_folder FROM sitting WHERE id = 1")) {
+            String folder = rs.next() ? rs.getString(1) : null;
+            if (folder == null || folder.isBlank()) {
+                return Optional.empty();
+            }
+            try {
+                return Optional.of(Path.of(folder));
+            } catch (java.nio.file.InvalidPathException e) {
+                return Optional.empty(); // not a path on this machine: the invigilator types it again
+            }
         }
     }
 }

@@ -22,10 +22,24 @@ import java.util.Optional;
  * @param stage           how far it got
  * @param lastActivity    wall-clock time of the last thing written (event or timer checkpoint)
  * @param paused          whether the invigilator had paused it
+ * @param outputFolder    the output folder the invigilator chose at set-up (empty for a sitting of an
+ *                        earlier client, which did not remember it)
  */
 public record UnfinishedSitting(Path database, String sittingId, String bundleSha256, String bundleFile, String examId,
         String candidateNumber, String formId, Optional<String> currentTask, String screen, Stage stage,
-        Instant lastActivity, boolean paused) {
+        Instant lastActivity, boolean paused, Optional<Path> outputFolder) {
+
+    public UnfinishedSitting {
+        outputFolder = java.util.Objects.requireNonNullElse(outputFolder, Optional.empty());
+    }
+
+    /** A sitting whose set-up output folder is not known. */
+    public UnfinishedSitting(Path database, String sittingId, String bundleSha256, String bundleFile, String examId,
+            String candidateNumber, String formId, Optional<String> currentTask, String screen, Stage stage,
+            Instant lastActivity, boolean paused) {
+        this(database, sittingId, bundleSha256, bundleFile, examId, candidateNumber, formId, currentTask, screen, stage,
+                lastActivity, paused, Optional.empty());
+    }
 
     /** How far a sitting got. */
     public enum Stage {

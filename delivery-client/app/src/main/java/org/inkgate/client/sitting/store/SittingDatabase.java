@@ -18,7 +18,7 @@ import org.sqlite.SQLiteConfig;
 public final class SittingDatabase {
 
     /** Increased whenever the tables change; a client refuses a database newer than it knows. */
-    public static final int SCHEMA_VERSION = 1;
+    public static final int SCHEMA_VERSION = 2;
 
     /** File name suffix of sitting databases. */
     public static final String SUFFIX = ".sitting.db";
@@ -50,6 +50,7 @@ public final class SittingDatabase {
           candidate TEXT NOT NULL,
           form_id TEXT NOT NULL,
           seat TEXT NOT NULL,
+          output_folder TEXT,
           client_version TEXT NOT NULL,
           extra_percent INTEGER NOT NULL,
           started_at TEXT NOT NULL,
@@ -116,6 +117,10 @@ public final class SittingDatabase {
                 for (String sql : SCHEMA) {
                     s.execute(sql);
                 }
+                if (!hasColumn(c, "sitting", "output_folder")) {
+                    // layout 1 (before the set-up's output folder was remembered): the column is added, empty
+                    s.execute("ALTER TABLE sitting ADD COLUMN output_folder TEXT");
+                }
                 s.execute("PRAGMA user_version = " + SCHEMA_VERSION);
             }
             c.setAutoCommit(false);
@@ -125,5 +130,17 @@ public final class SittingDatabase {
             throw new IOException(file + ": cannot open the sitting database: " + e.getMessage()
                     + ". Check that the client data folder is on a local, writable disk.", e);
         }
+    }
+
+    /** Whether a table has a column (a database of an earlier layout may not). */
+    public static boolean hasColumn(Connection c, String table, String column) throws SQLException {
+        try (Statement s = c.createStatement(); var rs = s.executeQuery("PRAGMA table_info(" + table + ")")) {
+            while (rs.next()) {
+                if (column.equals(rs.getString("name"))) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 }

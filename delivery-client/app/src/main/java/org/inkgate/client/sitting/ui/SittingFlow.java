@@ -357,7 +357,7 @@ public final class SittingFlow {
             return;
         }
         try {
-            sitting = Sitting.begin(candidate, data, setup.clock());
+            sitting = Sitting.begin(candidate, data, setup.clock(), outputFolder);
         } catch (IOException | RuntimeException e) {
             screen.showError("The sitting could not be started on this machine (" + e.getMessage()
                     + "). Ask the invigilator.");
@@ -521,7 +521,7 @@ public final class SittingFlow {
                 return;
             }
             TaskContext context = new TaskContext(start.task(), readText(start.task().promptFile()), tools,
-                    sitting.log(), start.text(), start.caret(), display);
+                    sitting.log(), start.text(), start.caret(), display, start.loggedBefore());
             workspace = setup.workspaces().create(context);
             int total = plan.form().slots().size();
             taskScreen = new TaskScreen("Task " + (index + 1) + " of " + total + ": " + start.task().title(),
@@ -799,7 +799,8 @@ public final class SittingFlow {
         }
         String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
         RecoveryScreen[] screen = new RecoveryScreen[1];
-        screen[0] = new RecoveryScreen(facts, creditText, data.root().resolve("outbox"),
+        // the folder chosen at set-up (the room's stick), remembered in the sitting's database
+        screen[0] = new RecoveryScreen(facts, creditText, found.outputFolder().orElse(data.root().resolve("outbox")),
                 input -> resume(screen[0], found, input, down), this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
@@ -807,7 +808,7 @@ public final class SittingFlow {
 
     private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
             java.time.Duration down) {
-        // the output folder is made and checked as at set-up: the folder proposed here (data/outbox) may not exist yet
+        // the output folder is made and checked as at set-up: the folder proposed here may not exist (the stick was taken out)
         work(() -> !PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())
                 ? "That is not this exam's invigilator PIN. Enter it again."
                 : input.outputFolder() == null ? "Enter the output folder where response packages go."

@@ -345,9 +345,11 @@ class SittingFlowTest {
     }
 
     /**
-     * Found by the rehearsal (issue 14): the recovery screen proposes the data folder's outbox as
-     * the output folder but never made it, so the hand-in after a resumed sitting failed with
-     * "not there" until someone created the folder by hand. It is made and checked as at set-up.
+     * Found by the rehearsal (issue 14): the recovery screen proposed the data folder's outbox
+     * rather than the output folder chosen at set-up (so unless retyped the package went somewhere
+     * other than the room's stick), and never made it, so the hand-in failed with "not there". It
+     * proposes the set-up's folder, remembered in the sitting's database, and makes and checks it
+     * as at set-up (here the stick was taken out while the machine was down).
      */
     @Test
     void recovery_proposedOutputFolder_handInAfterResumingDelivers(FxRobot robot) throws Exception {
@@ -362,11 +364,14 @@ class SittingFlowTest {
         first.typeInEditor("Written before the crash.");
         WaitForAsyncUtils.sleep(1500, java.util.concurrent.TimeUnit.MILLISECONDS);
         robot.interact(() -> first.flow.closeQuietly());
+        Path stick = temp.resolve("stick");
+        Files.delete(stick); // empty: nothing was handed in yet
 
         FlowDriver second = driver();
         second.open(bundle, clock, false);
         second.await("recoveryScreen", Node.class);
         Path proposed = Path.of(second.await("recoveryOutput", javafx.scene.control.TextField.class).getText());
+        assertEquals(stick.toAbsolutePath(), proposed.toAbsolutePath(), "the recovery proposes the set-up's output folder");
         assertFalse(Files.exists(proposed), "the test needs a proposed folder that does not exist yet: " + proposed);
         second.type("recoveryPin", FlowDriver.demoPin());
         second.press("resumeButton");
