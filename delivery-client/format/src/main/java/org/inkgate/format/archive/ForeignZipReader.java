@@ -30,7 +30,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.zip.CRC32;
-import org.inkgate.format.refusal.CompressionRatioExceeded;
 import org.inkgate.format.refusal.DuplicateEntry;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.MalformedArchive;
@@ -237,7 +236,8 @@ public final class ForeignZipReader implements AutoCloseable {
                 if (clash != null) {
                     throw new DuplicateEntry(file, central.name(), clash);
                 }
-                checkLimits(central);
+                limits.checkEntry(file, central.name(), central.size(), central.packedSize(),
+                        central.method() == METHOD_DEFLATED);
                 total += central.size();
                 if (total > limits.maxTotalBytes()) {
                     throw new SizeLimitExceeded(file, "the unpacked size of all entries (" + total + " bytes so far)",
@@ -395,22 +395,6 @@ public final class ForeignZipReader implements AutoCloseable {
                 }
             }
             return null;
-        }
-
-        private void checkLimits(Central entry) throws FormatRefusal {
-            if (entry.size() > limits.maxEntryBytes()) {
-                throw new SizeLimitExceeded(file, "entry \"" + entry.name() + "\" (" + entry.size() + " bytes unpacked)",
-                        limits.maxEntryBytes());
-            }
-            if (entry.method() == METHOD_DEFLATED && entry.size() > 0) {
-                if (entry.packedSize() == 0) {
-                    throw new CompressionRatioExceeded(file, entry.name(), Long.MAX_VALUE, limits.maxRatio());
-                }
-                // exact comparison: size / packed > maxRatio, without integer division rounding down
-                if (entry.size() > entry.packedSize() * limits.maxRatio()) {
-                    throw new CompressionRatioExceeded(file, entry.name(), entry.size() / entry.packedSize(), limits.maxRatio());
-                }
-            }
         }
 
         private record Located(ArchiveEntry entry, Span span) {

@@ -16,7 +16,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import org.inkgate.format.refusal.CompressionRatioExceeded;
 import org.inkgate.format.refusal.DuplicateEntry;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.MalformedArchive;
@@ -152,7 +151,7 @@ public final class SafeZipReader implements AutoCloseable {
                 if (clash != null) {
                     throw new DuplicateEntry(file, entry.name(), clash);
                 }
-                checkLimits(entry);
+                limits.checkEntry(file, entry.name(), entry.size(), entry.packedSize(), entry.deflated());
                 total += entry.size();
                 if (total > limits.maxTotalBytes()) {
                     throw new SizeLimitExceeded(file, "the unpacked size of all entries (" + total + " bytes so far)",
@@ -220,22 +219,6 @@ public final class SafeZipReader implements AutoCloseable {
                 throw new MalformedArchive(file, "stored entry \"" + name + "\" has different packed and unpacked sizes");
             }
             return new ArchiveEntry(name, method, crc, packed, size, localOffset);
-        }
-
-        private void checkLimits(ArchiveEntry entry) throws FormatRefusal {
-            if (entry.size() > limits.maxEntryBytes()) {
-                throw new SizeLimitExceeded(file, "entry \"" + entry.name() + "\" (" + entry.size() + " bytes unpacked)",
-                        limits.maxEntryBytes());
-            }
-            if (entry.deflated() && entry.size() > 0) {
-                if (entry.packedSize() == 0) {
-                    throw new CompressionRatioExceeded(file, entry.name(), Long.MAX_VALUE, limits.maxRatio());
-                }
-                // exact comparison: size / packed > maxRatio, without integer division rounding down
-                if (entry.size() > entry.packedSize() * limits.maxRatio()) {
-                    throw new CompressionRatioExceeded(file, entry.name(), entry.size() / entry.packedSize(), limits.maxRatio());
-                }
-            }
         }
 
         private ArchiveEntry checkLocalHeader(ArchiveEntry central) throws FormatRefusal, IOException {
