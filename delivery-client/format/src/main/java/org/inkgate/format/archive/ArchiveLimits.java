@@ -1,5 +1,9 @@
 package org.inkgate.format.archive;
 
+import org.inkgate.format.refusal.CompressionRatioExceeded;
+import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.refusal.SizeLimitExceeded;
+
 /**
  * What a reader accepts before it refuses an archive as too large or too compressed. The
  * defaults leave room for a bundle with the whole WordNet dictionary and a few glossaries.
@@ -25,6 +29,25 @@ public record ArchiveLimits(long maxArchiveBytes, int maxEntries, long maxEntryB
         }
         if (maxArchiveBytes > 0xFFFF_FFFFL || maxEntryBytes > 0xFFFF_FFFFL) {
             throw new IllegalArgumentException("archive limits must stay under 4 GiB: Inkgate's archive profile has no ZIP64");
+        }
+    }
+
+    /**
+     * Refuses an entry too large unpacked or, if deflated, expanding more than {@code maxRatio}
+     * times; both readers check every entry with this on open, before anything is unpacked.
+     */
+    void checkEntry(String file, String name, long size, long packedSize, boolean deflated) throws FormatRefusal {
+        if (size > maxEntryBytes) {
+            throw new SizeLimitExceeded(file, "entry \"" + name + "\" (" + size + " bytes unpacked)", maxEntryBytes);
+        }
+        if (deflated && size > 0) {
+            if (packedSize == 0) {
+                throw new CompressionRatioExceeded(file, name, Long.MAX_VALUE, maxRatio);
+            }
+            // exact comparison: size / packed > maxRatio, without integer division rounding down
+            if (size > packedSize * maxRatio) {
+                throw new CompressionRatioExceeded(file, name, size / packedSize, maxRatio);
+            }
         }
     }
 }

@@ -1,17 +1,26 @@
 package org.inkgate.format.archive;
 
-import java.io.ByteArrayOutputStream;
+import static org.inkgate.format.archive.ZipLayout.CENTRAL_HEADER_BYTES;
+import static org.inkgate.format.archive.ZipLayout.CENTRAL_SIGNATURE;
+import static org.inkgate.format.archive.ZipLayout.END_RECORD_BYTES;
+import static org.inkgate.format.archive.ZipLayout.END_SIGNATURE;
+import static org.inkgate.format.archive.ZipLayout.FLAG_UTF8;
+import static org.inkgate.format.archive.ZipLayout.LOCAL_HEADER_BYTES;
+import static org.inkgate.format.archive.ZipLayout.LOCAL_SIGNATURE;
+import static org.inkgate.format.archive.ZipLayout.METHOD_DEFLATED;
+import static org.inkgate.format.archive.ZipLayout.METHOD_STORED;
+import static org.inkgate.format.archive.ZipLayout.u16;
+import static org.inkgate.format.archive.ZipLayout.u32;
+
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
-import java.nio.channels.FileChannel;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.Charset;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.nio.file.StandardOpenOption;
 import java.security.MessageDigest;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -21,9 +30,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.zip.CRC32;
-import java.util.zip.DataFormatException;
-import java.util.zip.Inflater;
-import org.inkgate.format.refusal.CompressionRatioExceeded;
 import org.inkgate.format.refusal.DuplicateEntry;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.MalformedArchive;
@@ -47,27 +53,18 @@ import org.inkgate.format.refusal.UnsupportedArchiveFeature;
  */
 public final class ForeignZipReader implements AutoCloseable {
 
-    private static final int LOCAL_SIGNATURE = 0x04034b50;
-    private static final int CENTRAL_SIGNATURE = 0x02014b50;
-    private static final int END_SIGNATURE = 0x06054b50;
     private static final int ZIP64_LOCATOR_SIGNATURE = 0x07064b50;
     private static final int ZIP64_LOCATOR_BYTES = 20;
-    private static final int LOCAL_HEADER_BYTES = 30;
-    private static final int CENTRAL_HEADER_BYTES = 46;
-    private static final int END_RECORD_BYTES = 22;
     private static final int MAX_COMMENT_BYTES = 0xFFFF;
 
     private static final int FLAG_ENCRYPTED = 0x0001;
     private static final int FLAG_DATA_DESCRIPTOR = 0x0008;
     private static final int FLAG_PATCHED = 0x0020;
     private static final int FLAG_STRONG_ENCRYPTION = 0x0040;
-    private static final int FLAG_UTF8 = 0x0800;
     private static final int FLAG_MASKED_HEADERS = 0x2000;
     /** Flags a local header must repeat: they change how its bytes are read. */
     private static final int FLAGS_REPEATED = FLAG_ENCRYPTED | FLAG_DATA_DESCRIPTOR | FLAG_UTF8;
 
-    private static final int METHOD_STORED = 0;
-    private static final int METHOD_DEFLATED = 8;
     private static final int METHOD_AES = 99;
     /** APPNOTE 4.5.2: Info-ZIP Unicode Path Extra Field. */
     private static final int UNICODE_PATH_EXTRA = 0x7075;
@@ -79,28 +76,28 @@ public final class ForeignZipReader implements AutoCloseable {
     /** APPNOTE appendix D: names without the UTF-8 flag are IBM code page 437; absent from a trimmed JDK. */
     private static final Charset CP437 = Charset.isSupported("IBM437") ? Charset.forName("IBM437") : null;
 
-    private final String fileName;
-    private final Source source;
+    private final ArchiveSource source;
     private final Map<String, ArchiveEntry> entries;
     private final int directories;
+    private final EntryData data;
 
-    private ForeignZipReader(String fileName, Source source, Map<String, ArchiveEntry> entries, int directories) {
-        this.fileName = fileName;
+    private ForeignZipReader(String fileName, ArchiveSource source, Map<String, ArchiveEntry> entries, int directories) {
         this.source = source;
         this.entries = entries;
         this.directories = directories;
+        this.data = new EntryData(source, fileName, EntryData.Wording.FOREIGN);
     }
 
     public static ForeignZipReader open(Path file, ArchiveLimits limits) throws FormatRefusal, IOException {
         String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
-        return open(name, new FileSource(FileChannel.open(file, StandardOpenOption.READ)), limits);
+        return open(name, ArchiveSource.open(file), limits);
     }
 
     public static ForeignZipReader open(String name, byte[] bytes, ArchiveLimits limits) throws FormatRefusal, IOException {
-        return open(name, new BytesSource(bytes), limits);
+        return open(name, ArchiveSource.of(bytes), limits);
     }
 
-    private static ForeignZipReader open(String name, Source source, ArchiveLimits limits) throws FormatRefusal, IOException {
+    private static ForeignZipReader open(String name, ArchiveSource source, ArchiveLimits limits) throws FormatRefusal, IOException {
         try {
             Structure structure = new Structure(name, source, limits);
             Map<String, ArchiveEntry> entries = structure.read();
@@ -132,9 +129,7 @@ public final class ForeignZipReader implements AutoCloseable {
 
     /** Reads one entry whole, checked. */
     public byte[] read(ArchiveEntry entry) throws FormatRefusal, IOException {
-        ByteArrayOutputStream out = new ByteArrayOutputStream((int) Math.min(entry.size(), 1 << 20));
-        copy(entry, out, null);
-        return out.toByteArray();
+        return data.read(fromThisArchive(entry));
     }
 
     /**
@@ -142,145 +137,19 @@ public final class ForeignZipReader implements AutoCloseable {
      * checks size and CRC-32 against the central directory at the end.
      */
     public void copy(ArchiveEntry entry, OutputStream out, MessageDigest digest) throws FormatRefusal, IOException {
+        data.copy(fromThisArchive(entry), out, digest);
+    }
+
+    private ArchiveEntry fromThisArchive(ArchiveEntry entry) {
         if (!entry.equals(entries.get(entry.name()))) {
             throw new IllegalArgumentException("entry \"" + entry.name() + "\" is not from this archive");
         }
-        CRC32 crc = new CRC32();
-        long produced = entry.deflated() ? inflate(entry, out, digest, crc) : copyStored(entry, out, digest, crc);
-        if (produced != entry.size()) {
-            throw MalformedArchive.foreign(fileName, "entry \"" + entry.name() + "\" unpacks to " + produced
-                    + " bytes where the central directory says " + entry.size());
-        }
-        if (crc.getValue() != entry.crc32()) {
-            throw MalformedArchive.foreign(fileName, "entry \"" + entry.name() + "\" fails its CRC-32 check");
-        }
-    }
-
-    private long copyStored(ArchiveEntry entry, OutputStream out, MessageDigest digest, CRC32 crc)
-            throws FormatRefusal, IOException {
-        long position = entry.dataOffset();
-        long remaining = entry.packedSize();
-        ByteBuffer buffer = ByteBuffer.allocate(64 * 1024);
-        while (remaining > 0) {
-            buffer.clear().limit((int) Math.min(buffer.capacity(), remaining));
-            int n = source.read(buffer, position);
-            if (n < 0) {
-                throw MalformedArchive.foreign(fileName, "the file ended inside entry \"" + entry.name() + "\"");
-            }
-            emit(buffer.array(), n, out, digest, crc);
-            position += n;
-            remaining -= n;
-        }
-        return entry.packedSize();
-    }
-
-    private long inflate(ArchiveEntry entry, OutputStream out, MessageDigest digest, CRC32 crc)
-            throws FormatRefusal, IOException {
-        Inflater inflater = new Inflater(true);
-        try {
-            long position = entry.dataOffset();
-            long remainingIn = entry.packedSize();
-            long produced = 0;
-            ByteBuffer in = ByteBuffer.allocate(64 * 1024);
-            byte[] outBuffer = new byte[64 * 1024];
-            while (!inflater.finished()) {
-                if (inflater.needsInput()) {
-                    if (remainingIn == 0) {
-                        throw MalformedArchive.foreign(fileName, "entry \"" + entry.name() + "\" has a truncated deflate stream");
-                    }
-                    in.clear().limit((int) Math.min(in.capacity(), remainingIn));
-                    int n = source.read(in, position);
-                    if (n < 0) {
-                        throw MalformedArchive.foreign(fileName, "the file ended inside entry \"" + entry.name() + "\"");
-                    }
-                    position += n;
-                    remainingIn -= n;
-                    inflater.setInput(in.array(), 0, n);
-                }
-                int n = inflater.inflate(outBuffer);
-                produced += n;
-                // never unpack past the central directory's size: that size already passed the limits
-                if (produced > entry.size()) {
-                    throw MalformedArchive.foreign(fileName, "entry \"" + entry.name() + "\" unpacks to more than the "
-                            + entry.size() + " bytes the central directory says");
-                }
-                emit(outBuffer, n, out, digest, crc);
-                if (n == 0 && !inflater.needsInput() && !inflater.finished()) {
-                    throw MalformedArchive.foreign(fileName, "entry \"" + entry.name() + "\" has a deflate stream that makes no progress");
-                }
-            }
-            if (remainingIn != 0 || inflater.getRemaining() != 0) {
-                throw MalformedArchive.foreign(fileName, "entry \"" + entry.name() + "\" has bytes after its deflate stream");
-            }
-            return produced;
-        } catch (DataFormatException e) {
-            throw MalformedArchive.foreign(fileName, "entry \"" + entry.name() + "\" has a corrupt deflate stream ("
-                    + e.getMessage() + ")");
-        } finally {
-            inflater.end();
-        }
-    }
-
-    private static void emit(byte[] bytes, int n, OutputStream out, MessageDigest digest, CRC32 crc) throws IOException {
-        crc.update(bytes, 0, n);
-        if (digest != null) {
-            digest.update(bytes, 0, n);
-        }
-        out.write(bytes, 0, n);
+        return entry;
     }
 
     @Override
     public void close() throws IOException {
         source.close();
-    }
-
-    /** Positional reads from a file or from memory. */
-    private interface Source extends AutoCloseable {
-        long size() throws IOException;
-
-        int read(ByteBuffer into, long position) throws IOException;
-
-        @Override
-        void close() throws IOException;
-    }
-
-    private record FileSource(FileChannel channel) implements Source {
-        @Override
-        public long size() throws IOException {
-            return channel.size();
-        }
-
-        @Override
-        public int read(ByteBuffer into, long position) throws IOException {
-            return channel.read(into, position);
-        }
-
-        @Override
-        public void close() throws IOException {
-            channel.close();
-        }
-    }
-
-    private record BytesSource(byte[] bytes) implements Source {
-        @Override
-        public long size() {
-            return bytes.length;
-        }
-
-        @Override
-        public int read(ByteBuffer into, long position) {
-            if (position >= bytes.length) {
-                return -1;
-            }
-            int n = (int) Math.min(into.remaining(), bytes.length - position);
-            into.put(bytes, (int) position, n);
-            return n;
-        }
-
-        @Override
-        public void close() {
-            // nothing held
-        }
     }
 
     /** One central directory record, before its local header is checked. */
@@ -295,11 +164,11 @@ public final class ForeignZipReader implements AutoCloseable {
     /** Parses and checks the archive's structure; reads headers only. */
     private static final class Structure {
         private final String file;
-        private final Source source;
+        private final ArchiveSource source;
         private final ArchiveLimits limits;
         private int directories;
 
-        Structure(String file, Source source, ArchiveLimits limits) {
+        Structure(String file, ArchiveSource source, ArchiveLimits limits) {
             this.file = file;
             this.source = source;
             this.limits = limits;
@@ -367,7 +236,8 @@ public final class ForeignZipReader implements AutoCloseable {
                 if (clash != null) {
                     throw new DuplicateEntry(file, central.name(), clash);
                 }
-                checkLimits(central);
+                limits.checkEntry(file, central.name(), central.size(), central.packedSize(),
+                        central.method() == METHOD_DEFLATED);
                 total += central.size();
                 if (total > limits.maxTotalBytes()) {
                     throw new SizeLimitExceeded(file, "the unpacked size of all entries (" + total + " bytes so far)",
@@ -527,22 +397,6 @@ public final class ForeignZipReader implements AutoCloseable {
             return null;
         }
 
-        private void checkLimits(Central entry) throws FormatRefusal {
-            if (entry.size() > limits.maxEntryBytes()) {
-                throw new SizeLimitExceeded(file, "entry \"" + entry.name() + "\" (" + entry.size() + " bytes unpacked)",
-                        limits.maxEntryBytes());
-            }
-            if (entry.method() == METHOD_DEFLATED && entry.size() > 0) {
-                if (entry.packedSize() == 0) {
-                    throw new CompressionRatioExceeded(file, entry.name(), Long.MAX_VALUE, limits.maxRatio());
-                }
-                // exact comparison: size / packed > maxRatio, without integer division rounding down
-                if (entry.size() > entry.packedSize() * limits.maxRatio()) {
-                    throw new CompressionRatioExceeded(file, entry.name(), entry.size() / entry.packedSize(), limits.maxRatio());
-                }
-            }
-        }
-
         private record Located(ArchiveEntry entry, Span span) {
         }
 
@@ -628,16 +482,7 @@ public final class ForeignZipReader implements AutoCloseable {
         }
 
         private ByteBuffer bytes(long position, long length) throws FormatRefusal, IOException {
-            if (position < 0 || length < 0 || position + length > source.size() || length > Integer.MAX_VALUE) {
-                throw MalformedArchive.foreign(file, "a header points outside the file");
-            }
-            ByteBuffer buffer = ByteBuffer.allocate((int) length).order(ByteOrder.LITTLE_ENDIAN);
-            while (buffer.hasRemaining()) {
-                if (source.read(buffer, position + buffer.position()) < 0) {
-                    throw MalformedArchive.foreign(file, "the file ended inside a header");
-                }
-            }
-            return buffer.flip();
+            return source.header(position, length, file, EntryData.Wording.FOREIGN);
         }
     }
 
@@ -654,13 +499,5 @@ public final class ForeignZipReader implements AutoCloseable {
             case 98 -> " (PPMd)";
             default -> "";
         };
-    }
-
-    private static int u16(ByteBuffer b) {
-        return Short.toUnsignedInt(b.getShort());
-    }
-
-    private static long u32(ByteBuffer b) {
-        return Integer.toUnsignedLong(b.getInt());
     }
 }

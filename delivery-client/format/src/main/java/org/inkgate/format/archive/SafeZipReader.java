@@ -1,26 +1,21 @@
 package org.inkgate.format.archive;
 
-import java.io.ByteArrayOutputStream;
+import static org.inkgate.format.archive.ZipLayout.u16;
+import static org.inkgate.format.archive.ZipLayout.u32;
+
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
-import java.nio.ByteOrder;
-import java.nio.channels.FileChannel;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.nio.file.StandardOpenOption;
 import java.security.MessageDigest;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
-import java.util.zip.CRC32;
-import java.util.zip.DataFormatException;
-import java.util.zip.Inflater;
-import org.inkgate.format.refusal.CompressionRatioExceeded;
 import org.inkgate.format.refusal.DuplicateEntry;
 import org.inkgate.format.refusal.FormatRefusal;
 import org.inkgate.format.refusal.MalformedArchive;
@@ -36,84 +31,35 @@ import org.inkgate.format.refusal.UnsafeEntryName;
  */
 public final class SafeZipReader implements AutoCloseable {
 
-    private final String fileName;
-    private final Source channel;
+    private final ArchiveSource channel;
     private final Map<String, ArchiveEntry> entries;
     private final ArchiveLimits limits;
+    private final EntryData data;
 
-    private SafeZipReader(String fileName, Source channel, Map<String, ArchiveEntry> entries, ArchiveLimits limits) {
-        this.fileName = fileName;
+    private SafeZipReader(String fileName, ArchiveSource channel, Map<String, ArchiveEntry> entries, ArchiveLimits limits) {
         this.channel = channel;
         this.entries = entries;
         this.limits = limits;
+        this.data = new EntryData(channel, fileName, EntryData.Wording.INKGATE);
     }
 
     public static SafeZipReader open(Path file, ArchiveLimits limits) throws FormatRefusal, IOException {
         String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
-        return open(name, new FileSource(FileChannel.open(file, StandardOpenOption.READ)), limits);
+        return open(name, ArchiveSource.open(file), limits);
     }
 
     /** Reads an archive held in memory (e.g. just decrypted), so its content never touches the disk. */
     public static SafeZipReader open(String name, byte[] bytes, ArchiveLimits limits) throws FormatRefusal, IOException {
-        return open(name, new BytesSource(bytes), limits);
+        return open(name, ArchiveSource.of(bytes), limits);
     }
 
-    private static SafeZipReader open(String name, Source source, ArchiveLimits limits) throws FormatRefusal, IOException {
+    private static SafeZipReader open(String name, ArchiveSource source, ArchiveLimits limits) throws FormatRefusal, IOException {
         try {
             Map<String, ArchiveEntry> entries = new Structure(name, source, limits).read();
             return new SafeZipReader(name, source, entries, limits);
         } catch (FormatRefusal | IOException | RuntimeException e) {
             source.close();
             throw e;
-        }
-    }
-
-    /** Positional reads from a file or from memory. */
-    private interface Source extends AutoCloseable {
-        long size() throws IOException;
-
-        int read(ByteBuffer into, long position) throws IOException;
-
-        @Override
-        void close() throws IOException;
-    }
-
-    private record FileSource(FileChannel channel) implements Source {
-        @Override
-        public long size() throws IOException {
-            return channel.size();
-        }
-
-        @Override
-        public int read(ByteBuffer into, long position) throws IOException {
-            return channel.read(into, position);
-        }
-
-        @Override
-        public void close() throws IOException {
-            channel.close();
-        }
-    }
-
-    private record BytesSource(byte[] bytes) implements Source {
-        @Override
-        public long size() {
-            return bytes.length;
-        }
-
-        @Override
-        public int read(ByteBuffer into, long position) {
-            if (position >= bytes.length) {
-                return -1;
-            }
-            int n = (int) Math.min(into.remaining(), bytes.length - position);
-            into.put(bytes, (int) position, n);
-            return n;
-        }
-
-        @Override
-        public void close() {
-            // nothing held
         }
     }
 
@@ -128,9 +74,7 @@ public final class SafeZipReader implements AutoCloseable {
 
     /** Reads one entry whole; for small entries such as manifests. */
     public byte[] read(ArchiveEntry entry) throws FormatRefusal, IOException {
-        ByteArrayOutputStream out = new ByteArrayOutputStream((int) Math.min(entry.size(), 1 << 20));
-        copy(entry, out, null);
-        return out.toByteArray();
+        return data.read(entry);
     }
 
     /**
@@ -138,88 +82,7 @@ public final class SafeZipReader implements AutoCloseable {
      * with the same bytes, and checks size and CRC-32 at the end.
      */
     public void copy(ArchiveEntry entry, OutputStream out, MessageDigest digest) throws FormatRefusal, IOException {
-        CRC32 crc = new CRC32();
-        long produced = entry.deflated() ? inflate(entry, out, digest, crc) : copyStored(entry, out, digest, crc);
-        if (produced != entry.size()) {
-            throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" unpacks to " + produced
-                    + " bytes where its header says " + entry.size());
-        }
-        if (crc.getValue() != entry.crc32()) {
-            throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" fails its CRC-32 check");
-        }
-    }
-
-    private long copyStored(ArchiveEntry entry, OutputStream out, MessageDigest digest, CRC32 crc) throws IOException {
-        long position = entry.dataOffset();
-        long remaining = entry.packedSize();
-        ByteBuffer buffer = ByteBuffer.allocate(64 * 1024);
-        while (remaining > 0) {
-            buffer.clear().limit((int) Math.min(buffer.capacity(), remaining));
-            int n = channel.read(buffer, position);
-            if (n < 0) {
-                throw new IOException("archive ended early while reading " + entry.name());
-            }
-            emit(buffer.array(), n, out, digest, crc);
-            position += n;
-            remaining -= n;
-        }
-        return entry.packedSize();
-    }
-
-    private long inflate(ArchiveEntry entry, OutputStream out, MessageDigest digest, CRC32 crc)
-            throws FormatRefusal, IOException {
-        Inflater inflater = new Inflater(true);
-        try {
-            long position = entry.dataOffset();
-            long remainingIn = entry.packedSize();
-            long produced = 0;
-            ByteBuffer in = ByteBuffer.allocate(64 * 1024);
-            byte[] outBuffer = new byte[64 * 1024];
-            while (!inflater.finished()) {
-                if (inflater.needsInput()) {
-                    if (remainingIn == 0) {
-                        throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" has a truncated deflate stream");
-                    }
-                    in.clear().limit((int) Math.min(in.capacity(), remainingIn));
-                    int n = channel.read(in, position);
-                    if (n < 0) {
-                        throw new IOException("archive ended early while reading " + entry.name());
-                    }
-                    position += n;
-                    remainingIn -= n;
-                    inflater.setInput(in.array(), 0, n);
-                }
-                int n = inflater.inflate(outBuffer);
-                produced += n;
-                // never unpack past the declared size: the declared size already passed the limits
-                if (produced > entry.size()) {
-                    throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" unpacks to more than the "
-                            + entry.size() + " bytes its header says");
-                }
-                emit(outBuffer, n, out, digest, crc);
-                if (n == 0 && !inflater.needsInput() && !inflater.finished()) {
-                    // no progress without a reason the stream states: a preset dictionary or a corrupt stream
-                    throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" has a deflate stream that makes no progress");
-                }
-            }
-            if (remainingIn != 0 || inflater.getRemaining() != 0) {
-                throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" has bytes after its deflate stream");
-            }
-            return produced;
-        } catch (DataFormatException e) {
-            throw new MalformedArchive(fileName, "entry \"" + entry.name() + "\" has a corrupt deflate stream ("
-                    + e.getMessage() + ")");
-        } finally {
-            inflater.end();
-        }
-    }
-
-    private static void emit(byte[] bytes, int n, OutputStream out, MessageDigest digest, CRC32 crc) throws IOException {
-        crc.update(bytes, 0, n);
-        if (digest != null) {
-            digest.update(bytes, 0, n);
-        }
-        out.write(bytes, 0, n);
+        data.copy(entry, out, digest);
     }
 
     public ArchiveLimits limits() {
@@ -234,10 +97,10 @@ public final class SafeZipReader implements AutoCloseable {
     /** Parses and checks the archive's structure; reads headers only. */
     private static final class Structure {
         private final String file;
-        private final Source channel;
+        private final ArchiveSource channel;
         private final ArchiveLimits limits;
 
-        Structure(String file, Source channel, ArchiveLimits limits) {
+        Structure(String file, ArchiveSource channel, ArchiveLimits limits) {
             this.file = file;
             this.channel = channel;
             this.limits = limits;
@@ -288,7 +151,7 @@ public final class SafeZipReader implements AutoCloseable {
                 if (clash != null) {
                     throw new DuplicateEntry(file, entry.name(), clash);
                 }
-                checkLimits(entry);
+                limits.checkEntry(file, entry.name(), entry.size(), entry.packedSize(), entry.deflated());
                 total += entry.size();
                 if (total > limits.maxTotalBytes()) {
                     throw new SizeLimitExceeded(file, "the unpacked size of all entries (" + total + " bytes so far)",
@@ -358,22 +221,6 @@ public final class SafeZipReader implements AutoCloseable {
             return new ArchiveEntry(name, method, crc, packed, size, localOffset);
         }
 
-        private void checkLimits(ArchiveEntry entry) throws FormatRefusal {
-            if (entry.size() > limits.maxEntryBytes()) {
-                throw new SizeLimitExceeded(file, "entry \"" + entry.name() + "\" (" + entry.size() + " bytes unpacked)",
-                        limits.maxEntryBytes());
-            }
-            if (entry.deflated() && entry.size() > 0) {
-                if (entry.packedSize() == 0) {
-                    throw new CompressionRatioExceeded(file, entry.name(), Long.MAX_VALUE, limits.maxRatio());
-                }
-                // exact comparison: size / packed > maxRatio, without integer division rounding down
-                if (entry.size() > entry.packedSize() * limits.maxRatio()) {
-                    throw new CompressionRatioExceeded(file, entry.name(), entry.size() / entry.packedSize(), limits.maxRatio());
-                }
-            }
-        }
-
         private ArchiveEntry checkLocalHeader(ArchiveEntry central) throws FormatRefusal, IOException {
             long offset = central.dataOffset();
             byte[] nameBytes = central.name().getBytes(StandardCharsets.UTF_8);
@@ -418,24 +265,7 @@ public final class SafeZipReader implements AutoCloseable {
         }
 
         private ByteBuffer bytes(long position, long length) throws FormatRefusal, IOException {
-            if (position < 0 || length < 0 || position + length > channel.size() || length > Integer.MAX_VALUE) {
-                throw new MalformedArchive(file, "a header points outside the file");
-            }
-            ByteBuffer buffer = ByteBuffer.allocate((int) length).order(ByteOrder.LITTLE_ENDIAN);
-            while (buffer.hasRemaining()) {
-                if (channel.read(buffer, position + buffer.position()) < 0) {
-                    throw new MalformedArchive(file, "the file ended inside a header");
-                }
-            }
-            return buffer.flip();
+            return channel.header(position, length, file, EntryData.Wording.INKGATE);
         }
-    }
-
-    private static int u16(ByteBuffer b) {
-        return Short.toUnsignedInt(b.getShort());
-    }
-
-    private static long u32(ByteBuffer b) {
-        return Integer.toUnsignedLong(b.getInt());
     }
 }
