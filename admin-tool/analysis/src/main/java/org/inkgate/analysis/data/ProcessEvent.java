@@ -4,7 +4,7 @@ package org.inkgate.analysis.data;
  * One event of the writing-process log of a response. Types: {@code task.start}, {@code task.end}
  * (the task's bounds), {@code text.insert} (text inserted at position), {@code text.delete} (text
  * removed from position; text = the removed characters), {@code panel.open}, {@code panel.close}
- * (a tool's page came into or left view in the resource panel), {@code tool.query} (text = the word
+ * (keyboard focus went into or left the resource panel, on a tool's page), {@code tool.query} (text = the word
  * or phrase looked up). The names are those of the response format's process log; the admin tool
  * maps a results store onto them in one place. Time in milliseconds from any fixed origin.
  */
