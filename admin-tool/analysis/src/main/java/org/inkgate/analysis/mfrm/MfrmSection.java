@@ -1,5 +1,7 @@
 package org.inkgate.analysis.mfrm;
 
+import static org.inkgate.analysis.report.StatisticColumns.*;
+
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashSet;
@@ -13,6 +15,8 @@ import org.inkgate.analysis.mfrm.chart.CategoryCurves;
 import org.inkgate.analysis.mfrm.chart.WrightMap;
 import org.inkgate.analysis.mfrm.fit.Separation;
 import org.inkgate.analysis.report.Chart;
+import org.inkgate.analysis.report.Column;
+import org.inkgate.analysis.report.PValueText;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.report.Table;
 
@@ -164,8 +168,9 @@ public final class MfrmSection {
                         + " (4G+1)/3 and the fixed chi-square that all elements are equal, over non-extreme elements;"
                         + " once from the model SEs and, for non-candidate facets, once from the joint SEs",
                         "Wright & Masters 1982, ch. 5; Wright 1996 (RMT 9:4)")
-                .columns("facet", "SE basis", "elements", "mean", "SD", "RMSE", "true SD", "separation",
-                        "reliability", "strata", "chi-square", "df", "p");
+                .columns(FACET, STANDARD_ERROR_BASIS, ELEMENTS, MEAN, STANDARD_DEVIATION, ROOT_MEAN_SQUARE_ERROR,
+                        TRUE_STANDARD_DEVIATION, SEPARATION, RELIABILITY, STRATA, CHI_SQUARE, DEGREES_OF_FREEDOM,
+                        P_VALUE);
         for (MfrmResult.Facet f : r.facets()) {
             separationRow(t, f.name(), "model", f.separation());
             if (f.separationJointSe() != null) {
@@ -178,9 +183,10 @@ public final class MfrmSection {
                 + " act on, not a quality to celebrate. For candidates, reliability is the share of observed variance"
                 + " that is true variance.");
         t.note("Extreme elements (every rating at one end of the scale) are left out of these summaries.");
-        if (r.facets().stream().anyMatch(f -> f.separation().p() == 0
-                || f.separationJointSe() != null && f.separationJointSe().p() == 0)) {
-            t.note("A p of 0 is below about 1e-15, the smallest tail probability double precision resolves here.");
+        if (r.facets().stream().anyMatch(f -> f.separation().p() < PValueText.FLOOR
+                || f.separationJointSe() != null && f.separationJointSe().p() < PValueText.FLOOR)) {
+            t.note("A p-value shown as " + PValueText.BELOW_FLOOR + " is below what double precision resolves; the CSV"
+                    + " keeps the computed number (often 0).");
         }
         if (r.facets().stream().anyMatch(f -> f.separation().count() == 2)) {
             t.note("With two elements (e.g. two conditions) separation and reliability rest on one difference and say"
@@ -203,9 +209,9 @@ public final class MfrmSection {
                         + " infit (information-weighted) and outfit (unweighted) mean-squares, standardised by the"
                         + " Wilson-Hilferty cube root; point-measure correlation",
                         "Linacre 1989; Wright & Masters 1982, ch. 5 and pp. 100-101")
-                .columns("element", "status", "measure", "SE", "joint SE", "ratings", "observed score",
-                        "expected score", "observed average", "infit MnSq", "infit ZStd", "outfit MnSq",
-                        "outfit ZStd", "point-measure r", "fit flag");
+                .columns(ELEMENT, STATUS, MEASURE, STANDARD_ERROR, JOINT_STANDARD_ERROR, RATINGS, OBSERVED_SCORE,
+                        EXPECTED_SCORE, OBSERVED_AVERAGE, INFIT_MEAN_SQUARE, INFIT_STANDARDISED, OUTFIT_MEAN_SQUARE,
+                        OUTFIT_STANDARDISED, POINT_MEASURE_CORRELATION, FIT_FLAG);
         List<MfrmResult.Element> sorted = new ArrayList<>(f.elements());
         sorted.sort(Comparator.comparingDouble((MfrmResult.Element e) -> Double.isNaN(e.measure())
                 ? Double.POSITIVE_INFINITY : -e.measure()));
@@ -265,8 +271,8 @@ public final class MfrmSection {
                 .method("Category counts, average and expected average measures, outfit mean-square; Rasch-Andrich"
                         + " thresholds F_k with model SE (own information) and joint SE",
                         partial ? "Masters 1982; Andrich 1978; Linacre 1989" : "Andrich 1978; Linacre 1989")
-                .columns("scale", "score", "ratings", "percent", "average measure", "expected average measure",
-                        "outfit MnSq", "threshold", "threshold SE", "threshold joint SE");
+                .columns(SCALE, SCORE, RATINGS, PERCENT, AVERAGE_MEASURE, EXPECTED_AVERAGE_MEASURE,
+                        OUTFIT_MEAN_SQUARE, THRESHOLD, THRESHOLD_STANDARD_ERROR, THRESHOLD_JOINT_STANDARD_ERROR);
         for (MfrmResult.Scale sc : r.scales()) {
             for (MfrmResult.Category c : sc.categories()) {
                 t.row(sc.label(), (long) c.score(), (long) c.count(), c.percent(), c.averageMeasure(),
@@ -286,7 +292,7 @@ public final class MfrmSection {
         Table.Builder t = Table.builder("mfrm_bias", "Bias / interaction pairs")
                 .method("One extra term per combination with every measure and threshold anchored; chi-square = sum"
                         + " of t^2 over non-extreme cells with df >= 1", "Linacre 1989")
-                .columns("pair", "cells", "chi-square", "df", "p", "cells with p < 0.05");
+                .columns(PAIR, CELLS, CHI_SQUARE, DEGREES_OF_FREEDOM, P_VALUE, SIGNIFICANT_CELLS);
         for (BiasPair b : pairs) {
             t.row(b.first() + " x " + b.second(), (long) b.cells().size(), b.chiSquare(), (long) b.df(), b.p(),
                     (long) b.significantCells());
@@ -301,8 +307,9 @@ public final class MfrmSection {
         Table.Builder t = Table.builder(id, "Bias: " + b.first() + " x " + b.second())
                 .method("Bias size by Newton-Raphson on the cell's ratings, SE = 1/sqrt(information), t = size/SE,"
                         + " df = ratings - 1, two-sided p from Student's t", "Linacre 1989")
-                .columns(b.first(), b.second(), "ratings", "observed score", "expected score",
-                        "observed - expected per rating", "bias size", "SE", "t", "df", "p", "extreme");
+                .columns(Column.of(b.first()), Column.of(b.second()), RATINGS, OBSERVED_SCORE, EXPECTED_SCORE,
+                        OBSERVED_MINUS_EXPECTED, BIAS_SIZE, STANDARD_ERROR, T_STATISTIC, DEGREES_OF_FREEDOM, P_VALUE,
+                        EXTREME);
         b.cells().stream()
                 .sorted(Comparator.comparingDouble((BiasCell c) -> Double.isNaN(c.t()) ? 0 : -Math.abs(c.t())))
                 .forEach(c -> t.row(c.first(), c.second(), (long) c.count(), c.observedScore(), c.expectedScore(),
@@ -311,20 +318,21 @@ public final class MfrmSection {
         t.note("Largest |t| first. Positive size: this combination scores higher than the main effects expect (e.g. a"
                 + " rater more lenient on this task, or a condition helping this level). Extreme cells (all ratings"
                 + " at one end) are estimated at a score 0.5 inwards and left out of the chi-square.");
-        t.note(String.format(Locale.ROOT, "All cells: chi-square %.2f, df %d, p %.4g; %d cell(s) with p < 0.05"
-                + " (unadjusted).", b.chiSquare(), b.df(), b.p(), b.significantCells()));
+        t.note(String.format(Locale.ROOT, "All cells: chi-square %.2f, %d degrees of freedom, p-value %s; %d cell(s)"
+                + " with p-value below 0.05 (unadjusted).", b.chiSquare(), b.df(), PValueText.of(b.p()),
+                b.significantCells()));
         return t.build();
     }
 
     private static Table unexpectedTable(MfrmResult r) {
         List<String> facets = r.model().facets();
-        List<String> cols = new ArrayList<>(List.of("rating no."));
-        cols.addAll(facets);
-        cols.addAll(List.of("score", "expected", "residual", "z"));
+        List<Column> cols = new ArrayList<>(List.of(RATING_NUMBER));
+        facets.forEach(f -> cols.add(Column.of(f)));
+        cols.addAll(List.of(SCORE, EXPECTED_SCORE, RESIDUAL, STANDARDISED_RESIDUAL));
         Table.Builder t = Table.builder("mfrm_unexpected", "Unexpected ratings")
                 .method("Ratings whose standardised residual z = (observed - expected) / sqrt(variance) is large,"
                         + " largest |z| first", "Wright & Masters 1982, ch. 5")
-                .columns(cols.toArray(String[]::new));
+                .columns(cols);
         for (MfrmResult.Unexpected u : r.unexpected()) {
             List<Object> row = new ArrayList<>();
             row.add((long) u.row());
@@ -335,7 +343,7 @@ public final class MfrmSection {
             row.addAll(List.of(u.expected(), u.residual(), u.z()));
             t.row(row.toArray());
         }
-        t.note("Rating no. counts ratings in input order from the first data row (blank lines not counted)."
+        t.note("The rating number counts ratings in input order from the first data row (blank lines not counted)."
                 + " Residuals are in category units. The |z| limit (3 by default; common practice uses 2 or 3) and the"
                 + " number listed are options of the analysis.");
         if (r.unexpected().isEmpty()) {
