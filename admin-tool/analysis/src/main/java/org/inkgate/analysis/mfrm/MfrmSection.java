@@ -4,9 +4,11 @@ import static org.inkgate.analysis.report.StatisticColumns.*;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
 import org.inkgate.analysis.mfrm.bias.BiasCell;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
@@ -49,11 +51,34 @@ public final class MfrmSection {
      * (see {@link #refused}) instead of an exception, so the rest of the report is unaffected.
      */
     public static Section analyse(RatingData data, MfrmOptions options) {
+        return analyse(data, options, Map.of());
+    }
+
+    /**
+     * As {@link #analyse(RatingData, MfrmOptions)}, with each candidate's level for the Wright map's
+     * distribution by level; a level column of the data, when there is one, is used first.
+     */
+    public static Section analyse(RatingData data, MfrmOptions options, Map<String, String> levelOf) {
         try {
-            return of(ManyFacetRasch.analyse(data, options));
+            return of(ManyFacetRasch.analyse(data, options), levelsOf(data, levelOf));
         } catch (MfrmRefusedException e) {
             return refused(e.reasons());
         }
+    }
+
+    private static Map<String, String> levelsOf(RatingData data, Map<String, String> levelOf) {
+        Map<String, String> out = new HashMap<>(levelOf);
+        int column = data.columns().indexOf("level");
+        if (column >= 0) {
+            String[] candidates = data.labels(-1);
+            String[] levels = data.labels(column);
+            int[] c = data.codesView(-1);
+            int[] l = data.codesView(column);
+            for (int i = 0; i < c.length; i++) {
+                out.putIfAbsent(candidates[c[i]], levels[l[i]]);
+            }
+        }
+        return out;
     }
 
     /** The section for a refused run: why nothing was estimated and what to do. */
@@ -74,8 +99,13 @@ public final class MfrmSection {
         return s.build();
     }
 
-    /** The section for a finished run. */
+    /** The section for a finished run, the candidates in one distribution on the Wright map. */
     public static Section of(MfrmResult r) {
+        return of(r, Map.of());
+    }
+
+    /** The section for a finished run, the Wright map's candidates by level (candidate label to level). */
+    public static Section of(MfrmResult r, Map<String, String> levelOf) {
         Section.Builder s = Section.builder(ID, TITLE);
         s.paragraph(READ_FIRST);
         s.paragraph(modelText(r));
@@ -86,12 +116,15 @@ public final class MfrmSection {
         } else {
             r.warnings().forEach(w -> s.paragraph("WARNING: " + w));
         }
-        s.chart(new Chart("chart_mfrm_wright_map", "Wright map", "All facets on one logit scale (Wright & Stone"
-                + " 1979; Linacre 1989). Candidates: histogram, more able higher up. Other facets: one tick per"
-                + " element, harder or more severe higher up. Thresholds: where two adjacent categories are equally"
-                + " likely. A candidate level with an element (the other facets at 0) has even odds of the"
-                + " average step; the vertical distance between them is the log-odds advantage. * marks anchored"
-                + " or extreme elements.", WrightMap.drawing(r)));
+        s.chart(new Chart("chart_mfrm_wright_map", "Wright map", "Candidates and the elements of every other facet"
+                + " on one logit scale (Wright & Stone 1979; Linacre 1989), more able or harder to the right. Top:"
+                + " the candidates' measures as a distribution per level (share of the level per quarter logit,"
+                + " median marked). Then each facet, one row per element, highest first: the point is the measure,"
+                + " the whisker its 95% interval (measure +- 1.96 standard errors, joint where available); two"
+                + " elements whose whiskers overlap widely are not clearly different. Last (or under each element"
+                + " with partial credit): the score zones, where each score is the most likely rating for a"
+                + " candidate at that point facing elements at 0, bounded by the Rasch-Andrich thresholds.",
+                WrightMap.drawing(r, levelOf)));
         s.table(facetTable(r));
         Set<String> ids = new HashSet<>();
         // the other facets first: they are few and usually what the study is about; the

@@ -496,7 +496,14 @@ public final class AnalyseCommand implements Callable<Integer> {
             }
         }
         try {
-            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, attributes, columns), o);
+            // the Wright map draws the candidates by level: the candidate table's level, else the ratings'
+            Map<String, String> levelOf = new HashMap<>(levels);
+            data.ratings().forEach(r -> {
+                if (levelOf.getOrDefault(r.candidate(), "").isBlank() && !r.level().isBlank()) {
+                    levelOf.put(r.candidate(), r.level());
+                }
+            });
+            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, attributes, columns), o, levelOf);
         } catch (MfrmRefusedException e) {
             return MfrmSection.refused(e.reasons());
         }

@@ -9,6 +9,8 @@ final class Palette {
     static final Color GRID = new Color(0xDD, 0xDD, 0xDD);
     static final Color BAR = new Color(0x4C, 0x72, 0xB0);
     static final Color MARK = new Color(0xC4, 0x4E, 0x52);
+    /** Points and whiskers of the Wright map. */
+    static final Color INK = new Color(0x1D, 0x3F, 0x6E);
     /** Okabe & Ito (2008) colour-blind-safe set, repeated for more series. */
     private static final Color[] SERIES = {
         new Color(0x00, 0x72, 0xB2), new Color(0xE6, 0x9F, 0x00), new Color(0x00, 0x9E, 0x73),
@@ -17,6 +19,7 @@ final class Palette {
     static final double TITLE = 14;
     static final double LABEL = 11;
     static final double SMALL = 10;
+    static final double TINY = 9;
 
     private Palette() {
     }
