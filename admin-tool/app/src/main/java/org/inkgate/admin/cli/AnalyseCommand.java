@@ -499,7 +499,8 @@ public final class AnalyseCommand implements Callable<Integer> {
             // the Wright map draws the candidates by level: the candidate table's level, else the ratings'
             Map<String, String> levelOf = new HashMap<>(levels);
             data.ratings().forEach(r -> {
-                if (levelOf.getOrDefault(r.candidate(), "").isBlank() && !r.level().isBlank()) {
+                if (levelOf.getOrDefault(r.candidate(), "").isBlank() && r.level() != null
+                        && !r.level().isBlank()) {
                     levelOf.put(r.candidate(), r.level());
                 }
             });
