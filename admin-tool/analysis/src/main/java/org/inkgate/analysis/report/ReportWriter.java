@@ -15,6 +15,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.inkgate.analysis.graphics.SeriesPalette;
 
 /**
  * Writes a report to a folder: {@code report.html} (self-contained: inline CSS and SVG charts,
@@ -57,6 +58,12 @@ public final class ReportWriter {
         Map<String, Object> v = new LinkedHashMap<>();
         v.put("title", report.title());
         v.put("preamble", report.preamble());
+        // the charts' series colours, as stylesheet properties: one palette for page and charts
+        List<Map<String, Object>> palette = new ArrayList<>();
+        for (int i = 0; i < SeriesPalette.size(); i++) {
+            palette.add(Map.of("n", i + 1, "hex", SeriesPalette.hex(i)));
+        }
+        v.put("palette", palette);
         List<Map<String, Object>> sections = new ArrayList<>();
         int tableNumber = 0;
         for (Section s : report.sections()) {

@@ -145,4 +145,19 @@ class ReportFormTest {
         }
         assertTrue(notP.contains("levels_anova.p") && notP.contains("comparison_paired.p_holm"), notP.toString());
     }
+
+    @Test
+    void charts_useASansSerifFace_andTheStylesheetCarriesTheChartsPalette() {
+        Matcher m = Pattern.compile("font-family(?::|=\")\\s*([^;\"]+)").matcher(html.substring(html.indexOf("<main>")));
+        int n = 0;
+        while (m.find()) {
+            assertEquals("sans-serif", m.group(1).trim(), "every chart text is sans-serif");
+            n++;
+        }
+        assertTrue(n > 10, "charts carry their font: " + n);
+        for (int i = 0; i < org.inkgate.analysis.graphics.SeriesPalette.size(); i++) {
+            assertTrue(html.contains("--series-" + (i + 1) + ": " + org.inkgate.analysis.graphics.SeriesPalette.hex(i)
+                    + ";"), "stylesheet palette " + i);
+        }
+    }
 }

@@ -20,7 +20,12 @@ interface Canvas {
     /** An unfilled circle. */
     void ring(double cx, double cy, double r, Color colour, double width);
 
-    void polyline(double[] xs, double[] ys, Color colour, double width);
+    default void polyline(double[] xs, double[] ys, Color colour, double width) {
+        polyline(xs, ys, colour, width, false);
+    }
+
+    /** A polyline, solid or dashed (series past the palette's size are dashed). */
+    void polyline(double[] xs, double[] ys, Color colour, double width, boolean dashed);
 
     /** Text with its baseline at y. */
     void text(String s, double x, double y, double size, boolean bold, Color colour, Anchor anchor);

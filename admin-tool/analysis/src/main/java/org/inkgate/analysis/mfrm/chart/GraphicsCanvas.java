@@ -50,14 +50,15 @@ final class GraphicsCanvas implements Canvas {
     }
 
     @Override
-    public void polyline(double[] xs, double[] ys, Color colour, double width) {
+    public void polyline(double[] xs, double[] ys, Color colour, double width, boolean dashed) {
         Path2D.Double p = new Path2D.Double();
         p.moveTo(xs[0], ys[0]);
         for (int i = 1; i < xs.length; i++) {
             p.lineTo(xs[i], ys[i]);
         }
         g.setColor(colour);
-        g.setStroke(new BasicStroke((float) width));
+        g.setStroke(dashed ? new BasicStroke((float) width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                new float[] {6f, 4f}, 0f) : new BasicStroke((float) width));
         g.draw(p);
     }
 

@@ -23,76 +23,15 @@ import org.junit.jupiter.api.Test;
  */
 class WrightMapLayoutTest {
 
-    /** A canvas that draws through the real Graphics2D canvas and keeps each text's box. */
-    private static final class Recording implements Canvas {
-        final GraphicsCanvas real;
-        final List<Rectangle2D> boxes = new ArrayList<>();
-        final List<String> texts = new ArrayList<>();
-        int points;
-
-        Recording(Graphics2D g) {
-            real = new GraphicsCanvas(g);
-        }
-
-        public void line(double x1, double y1, double x2, double y2, Color c, double w) {
-            real.line(x1, y1, x2, y2, c, w);
-        }
-
-        public void rect(double x, double y, double w, double h, Color fill) {
-            real.rect(x, y, w, h, fill);
-        }
-
-        public void circle(double cx, double cy, double r, Color fill) {
-            points++;
-            real.circle(cx, cy, r, fill);
-        }
-
-        public void ring(double cx, double cy, double r, Color c, double w) {
-            real.ring(cx, cy, r, c, w);
-        }
-
-        public void polyline(double[] xs, double[] ys, Color c, double w) {
-            real.polyline(xs, ys, c, w);
-        }
-
-        public void text(String s, double x, double y, double size, boolean bold, Color c, Anchor anchor) {
-            double w = real.textWidth(s, size, bold);
-            double left = switch (anchor) {
-                case START -> x;
-                case MIDDLE -> x - w / 2;
-                case END -> x - w;
-            };
-            double ascent = real.ascent(size, bold);
-            boxes.add(new Rectangle2D.Double(left, y - ascent, w, ascent + real.descent(size, bold)));
-            texts.add(s);
-            real.text(s, x, y, size, bold, c, anchor);
-        }
-
-        public double textWidth(String s, double size, boolean bold) {
-            return real.textWidth(s, size, bold);
-        }
-
-        public double ascent(double size, boolean bold) {
-            return real.ascent(size, bold);
-        }
-
-        public double descent(double size, boolean bold) {
-            return real.descent(size, bold);
-        }
-
-        public void verticalText(String s, double x, double y, double size, Color c) {
-            throw new AssertionError("the map draws no turned text");
-        }
-    }
-
-    private static Recording draw(MfrmResult r, Map<String, String> levels) {
+    private static RecordingCanvas draw(MfrmResult r, Map<String, String> levels) {
         WrightMap.Layout layout = new WrightMap.Layout(r, levels);
         int h = (int) Math.ceil(layout.height());
         BufferedImage image = new BufferedImage(WrightMap.WIDTH, h, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = image.createGraphics();
-        Recording rec = new Recording(g);
+        RecordingCanvas rec = new RecordingCanvas(g);
         WrightMap.paint(rec, layout);
         g.dispose();
+        assertEquals(0, rec.turned, "the map's labels are all upright");
         for (Rectangle2D b : rec.boxes) {
             assertTrue(b.getMinX() >= 0 && b.getMaxX() <= WrightMap.WIDTH && b.getMinY() >= 0 && b.getMaxY() <= h,
                     "label inside the canvas " + WrightMap.WIDTH + " x " + h + ": " + b);
@@ -100,7 +39,7 @@ class WrightMapLayoutTest {
         return rec;
     }
 
-    private static void assertNoOverlap(Recording rec) {
+    private static void assertNoOverlap(RecordingCanvas rec) {
         for (int i = 0; i < rec.boxes.size(); i++) {
             for (int j = i + 1; j < rec.boxes.size(); j++) {
                 Rectangle2D a = rec.boxes.get(i);
@@ -167,7 +106,7 @@ class WrightMapLayoutTest {
     void crowdedPartialCredit_labelsNeverOverlap_everyElementHasAPointAndARow() {
         Map<String, String> levels = new HashMap<>();
         MfrmResult r = crowded(levels);
-        Recording rec = draw(r, levels);
+        RecordingCanvas rec = draw(r, levels);
         assertNoOverlap(rec);
         // one point per rater and criterion (the anchored rater is a square, the extreme candidate is in the bars)
         assertEquals(44 + 6, rec.points);
@@ -189,7 +128,7 @@ class WrightMapLayoutTest {
         MfrmResult r = new MfrmResult(new MfrmResult.Model(pc.model().facets(), "rating scale", 12000, 11900, false,
                 1, List.of()), pc.convergence(), pc.facets(), List.of(scale("rating scale", -3, -1, 0.9, 1, 3.2)),
                 List.of(), List.of(), List.of());
-        Recording rec = draw(r, Map.of());
+        RecordingCanvas rec = draw(r, Map.of());
         assertNoOverlap(rec);
         assertTrue(rec.texts.contains("all (300)"), "without levels: one distribution of all candidates");
         assertTrue(rec.texts.contains("scores"), rec.texts.toString());
