@@ -126,7 +126,8 @@ public final class AnalyseCommand implements Callable<Integer> {
     private ScoreRule scoreRule;
 
     @Option(names = "--baseline", paramLabel = "CONDITION",
-            description = "The condition the other is compared against (default: the first in alphabetical order)")
+            description = "The condition the other is compared against (default: the one without resources, as the"
+                    + " tool-use table shows; else the first in alphabetical order)")
     private String baseline;
 
     @Option(names = "--pause-ms", paramLabel = "MS", defaultValue = "2000",
