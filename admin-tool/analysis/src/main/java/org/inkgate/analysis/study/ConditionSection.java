@@ -8,6 +8,7 @@ import org.inkgate.analysis.comparison.PairedComparison;
 import org.inkgate.analysis.comparison.WilcoxonSignedRank;
 import org.inkgate.analysis.descriptive.ShapiroWilk;
 import org.inkgate.analysis.report.Column;
+import org.inkgate.analysis.report.PValueText;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.report.Table;
 import org.inkgate.analysis.scores.ScoreTable;
@@ -87,7 +88,7 @@ final class ConditionSection {
             String measure = measures.get(i) == null ? "overall" : measures.get(i);
             PairedComparison c = pc[i];
             String normality = Double.isNaN(sw[i].p()) ? "not tested" : sw[i].rejects(options.alpha())
-                    ? "not normal (SW p " + String.format(java.util.Locale.ROOT, "%.3g", sw[i].p()) + "): read Wilcoxon"
+                    ? "not normal (SW p " + PValueText.of(sw[i].p()) + "): read Wilcoxon"
                     : "no departure found";
             Double holmT = i == 0 ? null : hT[i - 1];
             Double holmW = i == 0 ? null : hW[i - 1];

@@ -133,4 +133,23 @@ class WrightMapLayoutTest {
         assertTrue(rec.texts.contains("all (300)"), "without levels: one distribution of all candidates");
         assertTrue(rec.texts.contains("scores"), rec.texts.toString());
     }
+
+    @Test
+    void realPartialCreditRun_labelsNeverOverlap_andEachCriterionHasItsZones() throws Exception {
+        // simulated crossed design (RecoveryTest), anchored rater, partial credit by criterion
+        MfrmResult r = org.inkgate.analysis.mfrm.ManyFacetRasch.analyse(
+                org.inkgate.analysis.mfrm.RecoveryTestAccess.crossed(81),
+                org.inkgate.analysis.mfrm.MfrmOptions.builder(List.of("task", "rater", "criterion"))
+                        .structure(new org.inkgate.analysis.mfrm.ScaleStructure.PartialCredit("criterion"))
+                        .anchor("rater", "rater1", 0.0).build());
+        RecordingCanvas rec = draw(r, Map.of());
+        assertNoOverlap(rec);
+        assertTrue(rec.texts.contains("criterion (3 elements): each with its own score zones"), rec.texts.toString());
+        assertTrue(rec.texts.contains("rater1") && rec.texts.contains("rater12"), rec.texts.toString());
+        // kept under target/ for a look by eye
+        java.nio.file.Path dir = java.nio.file.Path.of(System.getProperty("inkgate.tmpdir",
+                System.getProperty("java.io.tmpdir")), "mfrm-charts");
+        java.nio.file.Files.createDirectories(dir);
+        java.nio.file.Files.write(dir.resolve("wright-map-partial-credit.png"), WrightMap.drawing(r).png());
+    }
 }
