@@ -7,17 +7,18 @@ import java.util.Objects;
 /**
  * One column of a report table: the label a reader sees in the HTML (full words), the stable
  * snake_case name the CSV header carries, an optional heading that groups neighbouring columns in
- * the HTML, and whether its cells are p-values (shown by {@link PValueText}). Statistics that
+ * the HTML (and a narrower subheading under it), and whether its cells are p-values (shown by {@link PValueText}). Statistics that
  * several tables share are defined once in {@link StatisticColumns}; a one-off column takes
  * {@link #of(String)}, whose name follows {@link #snakeCase(String)} (docs/analysis.md, "Table
  * columns").
  */
-public record Column(String label, String name, String group, boolean pValue) {
+public record Column(String label, String name, String group, String subgroup, boolean pValue) {
 
     public Column {
         Objects.requireNonNull(label, "label");
         Objects.requireNonNull(name, "name");
         group = group == null ? "" : group;
+        subgroup = subgroup == null ? "" : subgroup;
         if (!name.matches("[a-z][a-z0-9]*(_[a-z0-9]+)*")) {
             throw new IllegalArgumentException("CSV column name '" + name + "' (label '" + label + "') must be"
                     + " snake_case: lower-case letters and digits joined by single underscores, starting with a letter");
@@ -26,27 +27,32 @@ public record Column(String label, String name, String group, boolean pValue) {
 
     /** A column with this label and name. */
     public static Column of(String label, String name) {
-        return new Column(label, name, "", false);
+        return new Column(label, name, "", "", false);
     }
 
     /** A column whose CSV name is the label in snake case; a label ending in "p" (e.g. "Welch p") is a p-value. */
     public static Column of(String label) {
-        return new Column(label, snakeCase(label), "", looksLikePValue(label));
+        return new Column(label, snakeCase(label), "", "", looksLikePValue(label));
     }
 
     /** A p-value column with this label and name. */
     public static Column pValue(String label, String name) {
-        return new Column(label, name, "", true);
+        return new Column(label, name, "", "", true);
     }
 
     /** The same column under a group heading (HTML only; the CSV keeps one header row). */
     public Column in(String heading) {
-        return new Column(label, name, heading, pValue);
+        return new Column(label, name, heading, subgroup, pValue);
+    }
+
+    /** The same column under a second, narrower heading (HTML only), e.g. the measure over "mean" and "SD". */
+    public Column under(String subheading) {
+        return new Column(label, name, group, subheading, pValue);
     }
 
     /** The same column with another label and name prefix, e.g. "mean" of a measure: "time on task mean". */
     public Column prefixed(String labelPrefix, String namePrefix) {
-        return new Column(labelPrefix + label, namePrefix + name, group, pValue);
+        return new Column(labelPrefix + label, namePrefix + name, group, subgroup, pValue);
     }
 
     /**

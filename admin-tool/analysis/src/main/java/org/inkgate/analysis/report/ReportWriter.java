@@ -98,22 +98,30 @@ public final class ReportWriter {
         tv.put("method", t.method());
         tv.put("source", t.source());
         tv.put("columns", t.header().stream().map(c -> Map.of("label", c.label(), "name", c.name())).toList());
-        List<Map<String, Object>> groups = new ArrayList<>();
-        if (t.header().stream().anyMatch(c -> !c.group().isEmpty())) {
-            for (Column c : t.header()) {
-                Map<String, Object> last = groups.isEmpty() ? null : groups.get(groups.size() - 1);
-                if (last != null && last.get("label").equals(c.group())) {
-                    last.put("span", (Integer) last.get("span") + 1);
-                } else {
-                    Map<String, Object> g = new LinkedHashMap<>();
-                    g.put("label", c.group());
-                    g.put("span", 1);
-                    groups.add(g);
-                }
+        List<Map<String, Object>> headingRows = new ArrayList<>();
+        for (java.util.function.Function<Column, String> level : List.<java.util.function.Function<Column, String>>of(
+                c -> c.group(), c -> c.group() + '\u0000' + c.subgroup())) {
+            if (t.header().stream().allMatch(c -> level.apply(c).replace("\u0000", "").isEmpty())) {
+                continue;
             }
+            List<Map<String, Object>> cells = new ArrayList<>();
+            String last = null;
+            for (Column c : t.header()) {
+                String key = level.apply(c);
+                if (key.equals(last)) {
+                    Map<String, Object> cell = cells.get(cells.size() - 1);
+                    cell.put("span", (Integer) cell.get("span") + 1);
+                } else {
+                    Map<String, Object> cell = new LinkedHashMap<>();
+                    cell.put("label", key.substring(key.indexOf('\u0000') + 1));
+                    cell.put("span", 1);
+                    cells.add(cell);
+                }
+                last = key;
+            }
+            headingRows.add(Map.of("cells", cells));
         }
-        tv.put("groups", groups);
-        tv.put("grouped", !groups.isEmpty());
+        tv.put("headingRows", headingRows);
         List<Map<String, Object>> rows = new ArrayList<>();
         for (List<Object> r : t.rows()) {
             List<Map<String, Object>> cells = new ArrayList<>();

@@ -86,8 +86,9 @@ final class ProcessSection {
             cols.add(Column.of(c).in("Which responses"));
         }
         for (Measure m : MEASURES) {
-            cols.add(Column.of(m.name() + ", mean", m.key() + "_mean").in(m.question()));
-            cols.add(Column.of(m.name() + ", standard deviation", m.key() + "_sd").in(m.question()));
+            // the measure's name heads its two columns, the question heads the measures that answer it
+            cols.add(Column.of("mean", m.key() + "_mean").in(m.question()).under(m.name()));
+            cols.add(Column.of("standard deviation", m.key() + "_sd").in(m.question()).under(m.name()));
         }
         Table.Builder t = Table.builder("process_measures", "Writing-process measures by condition and level,"
                         + " grouped by what they answer")
