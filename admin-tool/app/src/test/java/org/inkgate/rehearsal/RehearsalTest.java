@@ -413,12 +413,12 @@ class RehearsalTest {
                 long empty = at.stream().mapToInt(c -> c.toolUse().get(tool).get(1)).sum();
                 long using = at.stream().filter(c -> CandidateScript.uses(c.toolUse().get(tool)) > 0).count();
                 String where = "usage_by_level " + tool + "/" + level + " ";
-                checkNumber(where + "candidates offered", at.size(), row.get("candidates offered"));
-                checkNumber(where + "candidates using", using, row.get("candidates using"));
-                checkNumber(where + "uses per candidate", uses / at.size(), row.get("uses per candidate"));
-                checkNumber(where + "queries finding nothing", empty, row.get("queries finding nothing"));
-                checkNumber(where + "suggestions accepted", accepted, row.get("suggestions accepted"));
-                checkNumber(where + "suggestions ignored", ignored, row.get("suggestions ignored"));
+                checkNumber(where + "candidates offered", at.size(), row.get("candidates_offered"));
+                checkNumber(where + "candidates using", using, row.get("candidates_using"));
+                checkNumber(where + "uses per candidate", uses / at.size(), row.get("uses_per_candidate"));
+                checkNumber(where + "queries finding nothing", empty, row.get("queries_finding_nothing"));
+                checkNumber(where + "suggestions accepted", accepted, row.get("suggestions_accepted"));
+                checkNumber(where + "suggestions ignored", ignored, row.get("suggestions_ignored"));
                 String key = "usage.tool." + tool + ".level." + level.toLowerCase(java.util.Locale.ROOT) + ".";
                 checkNumber("summary.json " + key + "uses_per_candidate", uses / at.size(), text(summary, key + "uses_per_candidate"));
                 checkNumber("summary.json " + key + "suggestions_accepted", accepted, text(summary, key + "suggestions_accepted"));
@@ -433,18 +433,18 @@ class RehearsalTest {
             String where = "process_measures with-tools/" + level + " ";
             checkNumber(where + "responses", at.size(), row.get("responses"));
             checkNumber(where + "lookups mean", at.stream().mapToInt(CandidateScript::lookups).average().orElseThrow(),
-                    row.get("lookups mean"));
+                    row.get("lookups_mean"));
             checkNumber(where + "lookups followed by use mean", at.stream().mapToInt(CandidateScript::lookupsUsed).average()
-                    .orElseThrow(), row.get("lookups followed by use mean"));
+                    .orElseThrow(), row.get("lookups_used_mean"));
             // panel.open to panel.close: the scripted spans with keyboard focus in the panel (shortcut to insertion or Esc)
             double panel = at.stream().mapToLong(c -> done.get(c.number()).pageInView.values().stream()
                     .mapToLong(Long::longValue).sum()).average().orElseThrow() / 1000.0;
-            checkNumber(where + "time in resource panel (s) mean", panel, row.get("time in resource panel (s) mean"));
+            checkNumber(where + "time in resource panel (s) mean", panel, row.get("panel_time_s_mean"));
             String key = "process.with_tools." + level.toLowerCase(java.util.Locale.ROOT) + ".panel_time_s.mean";
             checkNumber("summary.json " + key, panel, text(summary, key));
             // task.start to task.end: the task's whole time on the scripted clock
             double onTask = at.stream().mapToLong(c -> done.get(c.number()).toolsTaskMillis).average().orElseThrow() / 1000.0;
-            checkNumber(where + "time on task (s) mean", onTask, row.get("time on task (s) mean"));
+            checkNumber(where + "time on task (s) mean", onTask, row.get("time_on_task_s_mean"));
             check(where + "time in the panel is shorter than time on task", "true", String.valueOf(panel < onTask));
             // without tools: the plain text typed at the candidate's speed, start to finish (the killed
             // candidate's task spans two processes' clocks, so its level is left out)
@@ -454,9 +454,9 @@ class RehearsalTest {
                 double typing = at.stream().mapToLong(c -> c.msPerChar() * CandidateScript.PLAIN_TEXT.length()).average()
                         .orElseThrow() / 1000.0;
                 checkNumber("process_measures without-tools/" + level + " time on task (s) mean", typing,
-                        plain.get("time on task (s) mean"));
+                        plain.get("time_on_task_s_mean"));
                 checkNumber("process_measures without-tools/" + level + " time in resource panel (s) mean", 0,
-                        plain.get("time in resource panel (s) mean"));
+                        plain.get("panel_time_s_mean"));
             }
         }
         // questionnaire: Likert descriptives by level, every free-text answer listed
@@ -486,7 +486,7 @@ class RehearsalTest {
                     .map(x -> Integer.valueOf(x.get("score"))).toList();
             checkNumber("raters_individual " + rater + " ratings", scores.size(), row.get("ratings"));
             checkNumber("raters_individual " + rater + " mean score", scores.stream().mapToInt(i -> i).average().orElse(Double.NaN),
-                    row.get("mean score"));
+                    row.get("mean_score"));
         }
         long farApart = pairOf.values().stream().filter(p -> p.equals("S1 S3")).count();
         List<Map<String, String>> agreement = table(tables.resolve("raters_agreement.csv"));

@@ -2,6 +2,7 @@ package org.inkgate.analysis.graphics;
 
 import java.awt.Color;
 import java.awt.Dimension;
+import java.awt.Font;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
 import java.awt.image.BufferedImage;
@@ -47,6 +48,11 @@ public final class Drawings {
         ctx.setIDGenerator(new PrefixedIds(id));
         ctx.setComment(null);
         ctx.setEmbeddedFontsOn(false);
+        // Batik's default graphic context names the JDK's logical font 'Dialog', which no browser
+        // knows (it falls back to a serif face); start every drawing in a sans-serif face instead
+        SVGGeneratorContext.GraphicContextDefaults defaults = new SVGGeneratorContext.GraphicContextDefaults();
+        defaults.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
+        ctx.setGraphicContextDefaults(defaults);
         SVGGraphics2D g = new SVGGraphics2D(ctx, false);
         g.setSVGCanvasSize(new Dimension(width, height));
         paintWhite(g, width, height);
@@ -59,6 +65,7 @@ public final class Drawings {
         titleElement.setTextContent(Objects.requireNonNullElse(title, ""));
         root.insertBefore(titleElement, root.getFirstChild());
         prefixFixedIds(root, id);
+        sansSerifFamilies(root);
         StringWriter out = new StringWriter();
         try {
             g.stream(root, out, true, false);
@@ -113,6 +120,24 @@ public final class Drawings {
             Element e = (Element) all.item(i);
             if ("genericDefs".equals(e.getAttribute("id"))) {
                 e.setAttribute("id", prefix + "-genericDefs");
+            }
+        }
+    }
+
+    /** The JDK's logical font names, which mean nothing to a browser. */
+    private static final java.util.regex.Pattern LOGICAL_FAMILY = java.util.regex.Pattern.compile(
+            "font-family:\\s*'?(Dialog|DialogInput|SansSerif|Serif|Monospaced)'?");
+
+    // every text of a chart is sans-serif: a logical family left by a library becomes the CSS generic
+    private static void sansSerifFamilies(Element root) {
+        NodeList all = root.getElementsByTagNameNS(SVG_NS, "*");
+        for (int i = -1; i < all.getLength(); i++) {
+            Element e = i < 0 ? root : (Element) all.item(i);
+            if (e.hasAttribute("style")) {
+                e.setAttribute("style", LOGICAL_FAMILY.matcher(e.getAttribute("style")).replaceAll("font-family:sans-serif"));
+            }
+            if (e.hasAttribute("font-family")) {
+                e.setAttribute("font-family", "sans-serif");
             }
         }
     }

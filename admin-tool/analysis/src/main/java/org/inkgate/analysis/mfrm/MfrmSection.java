@@ -1,10 +1,14 @@
 package org.inkgate.analysis.mfrm;
 
+import static org.inkgate.analysis.report.StatisticColumns.*;
+
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.Set;
 import org.inkgate.analysis.mfrm.bias.BiasCell;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
@@ -13,6 +17,8 @@ import org.inkgate.analysis.mfrm.chart.CategoryCurves;
 import org.inkgate.analysis.mfrm.chart.WrightMap;
 import org.inkgate.analysis.mfrm.fit.Separation;
 import org.inkgate.analysis.report.Chart;
+import org.inkgate.analysis.report.Column;
+import org.inkgate.analysis.report.PValueText;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.report.Table;
 
@@ -45,11 +51,34 @@ public final class MfrmSection {
      * (see {@link #refused}) instead of an exception, so the rest of the report is unaffected.
      */
     public static Section analyse(RatingData data, MfrmOptions options) {
+        return analyse(data, options, Map.of());
+    }
+
+    /**
+     * As {@link #analyse(RatingData, MfrmOptions)}, with each candidate's level for the Wright map's
+     * distribution by level; a level column of the data, when there is one, is used first.
+     */
+    public static Section analyse(RatingData data, MfrmOptions options, Map<String, String> levelOf) {
         try {
-            return of(ManyFacetRasch.analyse(data, options));
+            return of(ManyFacetRasch.analyse(data, options), levelsOf(data, levelOf));
         } catch (MfrmRefusedException e) {
             return refused(e.reasons());
         }
+    }
+
+    private static Map<String, String> levelsOf(RatingData data, Map<String, String> levelOf) {
+        Map<String, String> out = new HashMap<>(levelOf);
+        int column = data.columns().indexOf("level");
+        if (column >= 0) {
+            String[] candidates = data.labels(-1);
+            String[] levels = data.labels(column);
+            int[] c = data.codesView(-1);
+            int[] l = data.codesView(column);
+            for (int i = 0; i < c.length; i++) {
+                out.putIfAbsent(candidates[c[i]], levels[l[i]]);
+            }
+        }
+        return out;
     }
 
     /** The section for a refused run: why nothing was estimated and what to do. */
@@ -70,8 +99,13 @@ public final class MfrmSection {
         return s.build();
     }
 
-    /** The section for a finished run. */
+    /** The section for a finished run, the candidates in one distribution on the Wright map. */
     public static Section of(MfrmResult r) {
+        return of(r, Map.of());
+    }
+
+    /** The section for a finished run, the Wright map's candidates by level (candidate label to level). */
+    public static Section of(MfrmResult r, Map<String, String> levelOf) {
         Section.Builder s = Section.builder(ID, TITLE);
         s.paragraph(READ_FIRST);
         s.paragraph(modelText(r));
@@ -82,12 +116,15 @@ public final class MfrmSection {
         } else {
             r.warnings().forEach(w -> s.paragraph("WARNING: " + w));
         }
-        s.chart(new Chart("chart_mfrm_wright_map", "Wright map", "All facets on one logit scale (Wright & Stone"
-                + " 1979; Linacre 1989). Candidates: histogram, more able higher up. Other facets: one tick per"
-                + " element, harder or more severe higher up. Thresholds: where two adjacent categories are equally"
-                + " likely. A candidate level with an element (the other facets at 0) has even odds of the"
-                + " average step; the vertical distance between them is the log-odds advantage. * marks anchored"
-                + " or extreme elements.", WrightMap.drawing(r)));
+        s.chart(new Chart("chart_mfrm_wright_map", "Wright map", "Candidates and the elements of every other facet"
+                + " on one logit scale (Wright & Stone 1979; Linacre 1989), more able or harder to the right. Top:"
+                + " the candidates' measures as a distribution per level (share of the level per quarter logit,"
+                + " median marked). Then each facet, one row per element, highest first: the point is the measure,"
+                + " the whisker its 95% interval (measure +- 1.96 standard errors, joint where available); two"
+                + " elements whose whiskers overlap widely are not clearly different. Last (or under each element"
+                + " with partial credit): the score zones, where each score is the most likely rating for a"
+                + " candidate at that point facing elements at 0, bounded by the Rasch-Andrich thresholds.",
+                WrightMap.drawing(r, levelOf)));
         s.table(facetTable(r));
         Set<String> ids = new HashSet<>();
         // the other facets first: they are few and usually what the study is about; the
@@ -164,8 +201,9 @@ public final class MfrmSection {
                         + " (4G+1)/3 and the fixed chi-square that all elements are equal, over non-extreme elements;"
                         + " once from the model SEs and, for non-candidate facets, once from the joint SEs",
                         "Wright & Masters 1982, ch. 5; Wright 1996 (RMT 9:4)")
-                .columns("facet", "SE basis", "elements", "mean", "SD", "RMSE", "true SD", "separation",
-                        "reliability", "strata", "chi-square", "df", "p");
+                .columns(FACET, STANDARD_ERROR_BASIS, ELEMENTS, MEAN, STANDARD_DEVIATION, ROOT_MEAN_SQUARE_ERROR,
+                        TRUE_STANDARD_DEVIATION, SEPARATION, RELIABILITY, STRATA, CHI_SQUARE, DEGREES_OF_FREEDOM,
+                        P_VALUE);
         for (MfrmResult.Facet f : r.facets()) {
             separationRow(t, f.name(), "model", f.separation());
             if (f.separationJointSe() != null) {
@@ -178,9 +216,10 @@ public final class MfrmSection {
                 + " act on, not a quality to celebrate. For candidates, reliability is the share of observed variance"
                 + " that is true variance.");
         t.note("Extreme elements (every rating at one end of the scale) are left out of these summaries.");
-        if (r.facets().stream().anyMatch(f -> f.separation().p() == 0
-                || f.separationJointSe() != null && f.separationJointSe().p() == 0)) {
-            t.note("A p of 0 is below about 1e-15, the smallest tail probability double precision resolves here.");
+        if (r.facets().stream().anyMatch(f -> f.separation().p() < PValueText.FLOOR
+                || f.separationJointSe() != null && f.separationJointSe().p() < PValueText.FLOOR)) {
+            t.note("A p-value shown as " + PValueText.BELOW_FLOOR + " is below what double precision resolves; the CSV"
+                    + " keeps the computed number (often 0).");
         }
         if (r.facets().stream().anyMatch(f -> f.separation().count() == 2)) {
             t.note("With two elements (e.g. two conditions) separation and reliability rest on one difference and say"
@@ -203,9 +242,9 @@ public final class MfrmSection {
                         + " infit (information-weighted) and outfit (unweighted) mean-squares, standardised by the"
                         + " Wilson-Hilferty cube root; point-measure correlation",
                         "Linacre 1989; Wright & Masters 1982, ch. 5 and pp. 100-101")
-                .columns("element", "status", "measure", "SE", "joint SE", "ratings", "observed score",
-                        "expected score", "observed average", "infit MnSq", "infit ZStd", "outfit MnSq",
-                        "outfit ZStd", "point-measure r", "fit flag");
+                .columns(ELEMENT, STATUS, MEASURE, STANDARD_ERROR, JOINT_STANDARD_ERROR, RATINGS, OBSERVED_SCORE,
+                        EXPECTED_SCORE, OBSERVED_AVERAGE, INFIT_MEAN_SQUARE, INFIT_STANDARDISED, OUTFIT_MEAN_SQUARE,
+                        OUTFIT_STANDARDISED, POINT_MEASURE_CORRELATION, FIT_FLAG);
         List<MfrmResult.Element> sorted = new ArrayList<>(f.elements());
         sorted.sort(Comparator.comparingDouble((MfrmResult.Element e) -> Double.isNaN(e.measure())
                 ? Double.POSITIVE_INFINITY : -e.measure()));
@@ -265,8 +304,8 @@ public final class MfrmSection {
                 .method("Category counts, average and expected average measures, outfit mean-square; Rasch-Andrich"
                         + " thresholds F_k with model SE (own information) and joint SE",
                         partial ? "Masters 1982; Andrich 1978; Linacre 1989" : "Andrich 1978; Linacre 1989")
-                .columns("scale", "score", "ratings", "percent", "average measure", "expected average measure",
-                        "outfit MnSq", "threshold", "threshold SE", "threshold joint SE");
+                .columns(SCALE, SCORE, RATINGS, PERCENT, AVERAGE_MEASURE, EXPECTED_AVERAGE_MEASURE,
+                        OUTFIT_MEAN_SQUARE, THRESHOLD, THRESHOLD_STANDARD_ERROR, THRESHOLD_JOINT_STANDARD_ERROR);
         for (MfrmResult.Scale sc : r.scales()) {
             for (MfrmResult.Category c : sc.categories()) {
                 t.row(sc.label(), (long) c.score(), (long) c.count(), c.percent(), c.averageMeasure(),
@@ -286,7 +325,7 @@ public final class MfrmSection {
         Table.Builder t = Table.builder("mfrm_bias", "Bias / interaction pairs")
                 .method("One extra term per combination with every measure and threshold anchored; chi-square = sum"
                         + " of t^2 over non-extreme cells with df >= 1", "Linacre 1989")
-                .columns("pair", "cells", "chi-square", "df", "p", "cells with p < 0.05");
+                .columns(PAIR, CELLS, CHI_SQUARE, DEGREES_OF_FREEDOM, P_VALUE, SIGNIFICANT_CELLS);
         for (BiasPair b : pairs) {
             t.row(b.first() + " x " + b.second(), (long) b.cells().size(), b.chiSquare(), (long) b.df(), b.p(),
                     (long) b.significantCells());
@@ -301,8 +340,9 @@ public final class MfrmSection {
         Table.Builder t = Table.builder(id, "Bias: " + b.first() + " x " + b.second())
                 .method("Bias size by Newton-Raphson on the cell's ratings, SE = 1/sqrt(information), t = size/SE,"
                         + " df = ratings - 1, two-sided p from Student's t", "Linacre 1989")
-                .columns(b.first(), b.second(), "ratings", "observed score", "expected score",
-                        "observed - expected per rating", "bias size", "SE", "t", "df", "p", "extreme");
+                .columns(Column.of(b.first()), Column.of(b.second()), RATINGS, OBSERVED_SCORE, EXPECTED_SCORE,
+                        OBSERVED_MINUS_EXPECTED, BIAS_SIZE, STANDARD_ERROR, T_STATISTIC, DEGREES_OF_FREEDOM, P_VALUE,
+                        EXTREME);
         b.cells().stream()
                 .sorted(Comparator.comparingDouble((BiasCell c) -> Double.isNaN(c.t()) ? 0 : -Math.abs(c.t())))
                 .forEach(c -> t.row(c.first(), c.second(), (long) c.count(), c.observedScore(), c.expectedScore(),
@@ -311,20 +351,21 @@ public final class MfrmSection {
         t.note("Largest |t| first. Positive size: this combination scores higher than the main effects expect (e.g. a"
                 + " rater more lenient on this task, or a condition helping this level). Extreme cells (all ratings"
                 + " at one end) are estimated at a score 0.5 inwards and left out of the chi-square.");
-        t.note(String.format(Locale.ROOT, "All cells: chi-square %.2f, df %d, p %.4g; %d cell(s) with p < 0.05"
-                + " (unadjusted).", b.chiSquare(), b.df(), b.p(), b.significantCells()));
+        t.note(String.format(Locale.ROOT, "All cells: chi-square %.2f, %d degrees of freedom, p-value %s; %d cell(s)"
+                + " with p-value below 0.05 (unadjusted).", b.chiSquare(), b.df(), PValueText.of(b.p()),
+                b.significantCells()));
         return t.build();
     }
 
     private static Table unexpectedTable(MfrmResult r) {
         List<String> facets = r.model().facets();
-        List<String> cols = new ArrayList<>(List.of("rating no."));
-        cols.addAll(facets);
-        cols.addAll(List.of("score", "expected", "residual", "z"));
+        List<Column> cols = new ArrayList<>(List.of(RATING_NUMBER));
+        facets.forEach(f -> cols.add(Column.of(f)));
+        cols.addAll(List.of(SCORE, EXPECTED_SCORE, RESIDUAL, STANDARDISED_RESIDUAL));
         Table.Builder t = Table.builder("mfrm_unexpected", "Unexpected ratings")
                 .method("Ratings whose standardised residual z = (observed - expected) / sqrt(variance) is large,"
                         + " largest |z| first", "Wright & Masters 1982, ch. 5")
-                .columns(cols.toArray(String[]::new));
+                .columns(cols);
         for (MfrmResult.Unexpected u : r.unexpected()) {
             List<Object> row = new ArrayList<>();
             row.add((long) u.row());
@@ -335,7 +376,7 @@ public final class MfrmSection {
             row.addAll(List.of(u.expected(), u.residual(), u.z()));
             t.row(row.toArray());
         }
-        t.note("Rating no. counts ratings in input order from the first data row (blank lines not counted)."
+        t.note("The rating number counts ratings in input order from the first data row (blank lines not counted)."
                 + " Residuals are in category units. The |z| limit (3 by default; common practice uses 2 or 3) and the"
                 + " number listed are options of the analysis.");
         if (r.unexpected().isEmpty()) {

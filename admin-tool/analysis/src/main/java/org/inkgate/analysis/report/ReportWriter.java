@@ -15,6 +15,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.inkgate.analysis.graphics.SeriesPalette;
 
 /**
  * Writes a report to a folder: {@code report.html} (self-contained: inline CSS and SVG charts,
@@ -57,7 +58,14 @@ public final class ReportWriter {
         Map<String, Object> v = new LinkedHashMap<>();
         v.put("title", report.title());
         v.put("preamble", report.preamble());
+        // the charts' series colours, as stylesheet properties: one palette for page and charts
+        List<Map<String, Object>> palette = new ArrayList<>();
+        for (int i = 0; i < SeriesPalette.size(); i++) {
+            palette.add(Map.of("n", i + 1, "hex", SeriesPalette.hex(i)));
+        }
+        v.put("palette", palette);
         List<Map<String, Object>> sections = new ArrayList<>();
+        int tableNumber = 0;
         for (Section s : report.sections()) {
             Map<String, Object> sv = new LinkedHashMap<>();
             sv.put("id", s.id());
@@ -70,24 +78,7 @@ public final class ReportWriter {
             sv.put("charts", charts);
             List<Map<String, Object>> tables = new ArrayList<>();
             for (Table t : s.tables()) {
-                Map<String, Object> tv = new LinkedHashMap<>();
-                tv.put("id", t.id());
-                tv.put("title", t.title());
-                tv.put("method", t.method());
-                tv.put("source", t.source());
-                tv.put("columns", t.columns());
-                List<Map<String, Object>> rows = new ArrayList<>();
-                for (List<Object> r : t.rows()) {
-                    List<Map<String, Object>> cells = new ArrayList<>();
-                    for (Object o : r) {
-                        cells.add(Map.of("text", NumberText.html(o), "numeric", o instanceof Number));
-                    }
-                    rows.add(Map.of("cells", cells));
-                }
-                tv.put("rows", rows);
-                tv.put("notes", t.notes());
-                tv.put("csv", "tables/" + t.id() + ".csv");
-                tables.add(tv);
+                tables.add(tableView(t, ++tableNumber));
             }
             sv.put("tables", tables);
             sections.add(sv);
@@ -95,6 +86,57 @@ public final class ReportWriter {
         v.put("sections", sections);
         v.put("toc", report.sections().stream().map(s -> Map.of("id", s.id(), "title", s.title())).toList());
         return v;
+    }
+
+    // Caption "Table n. title"; a first header row of group headings when any column has one
+    // (spanning its neighbours of the same heading); p-values written by PValueText.
+    private static Map<String, Object> tableView(Table t, int number) {
+        Map<String, Object> tv = new LinkedHashMap<>();
+        tv.put("id", t.id());
+        tv.put("number", number);
+        tv.put("title", t.title());
+        tv.put("method", t.method());
+        tv.put("source", t.source());
+        tv.put("columns", t.header().stream().map(c -> Map.of("label", c.label(), "name", c.name())).toList());
+        List<Map<String, Object>> headingRows = new ArrayList<>();
+        for (java.util.function.Function<Column, String> level : List.<java.util.function.Function<Column, String>>of(
+                c -> c.group(), c -> c.group() + '\u0000' + c.subgroup())) {
+            if (t.header().stream().allMatch(c -> level.apply(c).replace("\u0000", "").isEmpty())) {
+                continue;
+            }
+            List<Map<String, Object>> cells = new ArrayList<>();
+            String last = null;
+            for (Column c : t.header()) {
+                String key = level.apply(c);
+                if (key.equals(last)) {
+                    Map<String, Object> cell = cells.get(cells.size() - 1);
+                    cell.put("span", (Integer) cell.get("span") + 1);
+                } else {
+                    Map<String, Object> cell = new LinkedHashMap<>();
+                    cell.put("label", key.substring(key.indexOf('\u0000') + 1));
+                    cell.put("span", 1);
+                    cells.add(cell);
+                }
+                last = key;
+            }
+            headingRows.add(Map.of("cells", cells));
+        }
+        tv.put("headingRows", headingRows);
+        List<Map<String, Object>> rows = new ArrayList<>();
+        for (List<Object> r : t.rows()) {
+            List<Map<String, Object>> cells = new ArrayList<>();
+            for (int i = 0; i < r.size(); i++) {
+                Object o = r.get(i);
+                String text = t.header().get(i).pValue() && o instanceof Number n ? PValueText.of(n.doubleValue())
+                        : NumberText.html(o);
+                cells.add(Map.of("text", text, "numeric", o instanceof Number));
+            }
+            rows.add(Map.of("cells", cells));
+        }
+        tv.put("rows", rows);
+        tv.put("notes", t.notes());
+        tv.put("csv", "tables/" + t.id() + ".csv");
+        return tv;
     }
 
     /** The chart as an SVG element; ids prefixed by the chart id so several charts share one page. */
@@ -105,7 +147,7 @@ public final class ReportWriter {
 
     static void writeCsv(Table t, Path file) throws IOException {
         try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
-            w.write(line(new ArrayList<>(t.columns())));
+            w.write(line(new ArrayList<>(t.names())));
             for (List<Object> r : t.rows()) {
                 List<String> cells = new ArrayList<>();
                 for (Object o : r) {

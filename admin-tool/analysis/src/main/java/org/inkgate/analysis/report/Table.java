@@ -5,11 +5,12 @@ import java.util.List;
 import java.util.Objects;
 
 /**
- * One table of the report: an id (also the CSV file name), a title, the method and its source,
- * column names, rows of cells (String, Number or null), and notes (cautions, how to read it).
+ * One table of the report: an id (also the CSV file name), a title (the HTML caption), the method
+ * and its source, the columns (full-word label for the HTML, snake_case name for the CSV: see
+ * {@link Column}), rows of cells (String, Number or null), and notes (cautions, how to read it).
  * Doubles keep full precision here; the HTML rounds them, the CSV does not.
  */
-public record Table(String id, String title, String method, String source, List<String> columns,
+public record Table(String id, String title, String method, String source, List<Column> header,
         List<List<Object>> rows, List<String> notes) {
 
     public Table {
@@ -17,15 +18,35 @@ public record Table(String id, String title, String method, String source, List<
         if (!id.matches("[a-z0-9][a-z0-9_-]*")) {
             throw new IllegalArgumentException("table id must be lower-case letters, digits, - or _: " + id);
         }
-        columns = List.copyOf(columns);
+        header = List.copyOf(header);
+        if (title == null || title.isBlank()) {
+            throw new IllegalArgumentException("table " + id + " needs a title: it is the table's caption");
+        }
+        java.util.Set<String> names = new java.util.HashSet<>();
+        for (Column c : header) {
+            if (!names.add(c.name())) {
+                throw new IllegalArgumentException("table " + id + ": two columns share the CSV name " + c.name()
+                        + "; give one of them its own name with Column.of(label, name)");
+            }
+        }
         rows = rows.stream().map(r -> java.util.Collections.unmodifiableList(new ArrayList<>(r))).toList();
         notes = List.copyOf(notes);
         for (List<Object> r : rows) {
-            if (r.size() != columns.size()) {
+            if (r.size() != header.size()) {
                 throw new IllegalArgumentException("table " + id + ": a row has " + r.size() + " cells for "
-                        + columns.size() + " columns");
+                        + header.size() + " columns");
             }
         }
+    }
+
+    /** The columns' labels, as the HTML shows them. */
+    public List<String> columns() {
+        return header.stream().map(Column::label).toList();
+    }
+
+    /** The columns' CSV names. */
+    public List<String> names() {
+        return header.stream().map(Column::name).toList();
     }
 
     /** Added to every table with a value that cannot be computed (shown as a dash, empty in CSV, null in JSON). */
@@ -43,7 +64,7 @@ public record Table(String id, String title, String method, String source, List<
         private final String title;
         private String method = "";
         private String source = "";
-        private List<String> columns = List.of();
+        private List<Column> columns = List.of();
         private final List<List<Object>> rows = new ArrayList<>();
         private final List<String> notes = new ArrayList<>();
 
@@ -58,8 +79,20 @@ public record Table(String id, String title, String method, String source, List<
             return this;
         }
 
+        /** Columns by label; each CSV name is the label in snake case ({@link Column#of(String)}). */
         public Builder columns(String... columns) {
+            this.columns = java.util.Arrays.stream(columns).map(Column::of).toList();
+            return this;
+        }
+
+        /** Columns with their own labels and CSV names (see {@link StatisticColumns}). */
+        public Builder columns(Column... columns) {
             this.columns = List.of(columns);
+            return this;
+        }
+
+        public Builder columns(List<Column> columns) {
+            this.columns = List.copyOf(columns);
             return this;
         }
 

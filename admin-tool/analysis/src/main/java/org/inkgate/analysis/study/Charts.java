@@ -27,16 +27,23 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
- * The report's charts, drawn with JFreeChart. Colours come from one palette chosen for
- * distinguishability in colour-blind vision (Okabe &amp; Ito 2008, "Color Universal Design").
+ * The report's charts, drawn with JFreeChart. Colours come from the report's one palette
+ * ({@link org.inkgate.analysis.graphics.SeriesPalette}), text in a sans-serif face.
  */
 final class Charts {
 
-    static final Color[] PALETTE = {new Color(0x0072B2), new Color(0xE69F00), new Color(0x009E73),
-        new Color(0xCC79A7), new Color(0x56B4E9), new Color(0xD55E00), new Color(0xF0E442), Color.BLACK};
+    static final Color[] PALETTE = palette();
     private static final Font FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
 
     private Charts() {
+    }
+
+    private static Color[] palette() {
+        Color[] c = new Color[org.inkgate.analysis.graphics.SeriesPalette.size()];
+        for (int i = 0; i < c.length; i++) {
+            c[i] = org.inkgate.analysis.graphics.SeriesPalette.colour(i);
+        }
+        return c;
     }
 
     /** Overlaid histograms of values per series (e.g. candidate scores per condition). */
@@ -122,7 +129,7 @@ final class Charts {
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer();
         r.setSeriesLinesVisible(0, false);
         r.setSeriesShape(0, new java.awt.geom.Ellipse2D.Double(-2, -2, 4, 4));
-        r.setSeriesPaint(0, new Color(0, 114, 178, 90));
+        r.setSeriesPaint(0, new Color(PALETTE[0].getRed(), PALETTE[0].getGreen(), PALETTE[0].getBlue(), 90));
         r.setSeriesShapesVisible(1, false);
         r.setSeriesPaint(1, Color.DARK_GRAY);
         chart.getXYPlot().setRenderer(r);
@@ -187,7 +194,7 @@ final class Charts {
         @Override
         public java.awt.Paint getPaint(double value) {
             double v = Math.max(-1, Math.min(1, Double.isNaN(value) ? 0 : value));
-            Color end = v >= 0 ? PALETTE[0] : PALETTE[5];
+            Color end = v >= 0 ? PALETTE[0] : PALETTE[1];
             double t = Math.abs(v);
             return new Color((int) Math.round(255 + (end.getRed() - 255) * t),
                     (int) Math.round(255 + (end.getGreen() - 255) * t), (int) Math.round(255 + (end.getBlue() - 255) * t));

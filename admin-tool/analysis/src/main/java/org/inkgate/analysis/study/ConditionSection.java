@@ -7,6 +7,8 @@ import org.inkgate.analysis.comparison.Holm;
 import org.inkgate.analysis.comparison.PairedComparison;
 import org.inkgate.analysis.comparison.WilcoxonSignedRank;
 import org.inkgate.analysis.descriptive.ShapiroWilk;
+import org.inkgate.analysis.report.Column;
+import org.inkgate.analysis.report.PValueText;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.report.Table;
 import org.inkgate.analysis.scores.ScoreTable;
@@ -17,7 +19,19 @@ final class ConditionSection {
     private ConditionSection() {
     }
 
-    static Section build(ScoreTable scores, StudyOptions options) {
+    // the two means are named by role in the CSV, so the header does not change with the conditions' names
+    private static List<Column> columns(String a, String b) {
+        List<Column> c = new ArrayList<>(List.of(Column.of("measure"), Column.of("pairs"),
+                Column.of("mean " + a, "baseline_mean"), Column.of("mean " + b, "other_mean")));
+        for (String label : List.of("difference", "CI lower", "CI upper", "t", "df", "p", "p (Holm)", "d_z",
+                "d_z lower", "d_z upper", "d_av", "d_av lower", "d_av upper", "Wilcoxon V", "Wilcoxon p",
+                "Wilcoxon p (Holm)", "normality of differences")) {
+            c.add(Column.of(label));
+        }
+        return c;
+    }
+
+    static Section build(ScoreTable scores, StudyOptions options, ComparisonDirection direction) {
         Section.Builder s = Section.builder("comparison", "Scores with and without resources (paired)");
         List<String> conditions = StudyAnalysis.orderedConditions(scores, options);
         if (conditions.size() != 2) {
@@ -31,13 +45,12 @@ final class ConditionSection {
                 + " with a score under both. The paired t-test is read when the differences are roughly normal;"
                 + " the Wilcoxon signed-rank test beside it does not assume normality. Criterion p-values are"
                 + " adjusted by Holm's method across criteria (the overall row is not part of that family).");
+        s.paragraph(direction.reason());
         Table.Builder t = Table.builder("comparison_paired", "Paired comparison: " + b + " minus " + a)
                 .method("paired t-test with mean difference and 95% CI; Cohen's d_z and d_av with 95% CIs by"
                         + " inverting the noncentral t; Wilcoxon signed-rank test; Holm adjustment across criteria",
                         "Student 1908; Lakens 2013; Wilcoxon 1945; Holm 1979")
-                .columns("measure", "pairs", "mean " + a, "mean " + b, "difference", "CI lower", "CI upper", "t", "df",
-                        "p", "p (Holm)", "d_z", "d_z lower", "d_z upper", "d_av", "d_av lower", "d_av upper",
-                        "Wilcoxon V", "Wilcoxon p", "Wilcoxon p (Holm)", "normality of differences");
+                .columns(columns(a, b));
         List<String> measures = new ArrayList<>();
         measures.add(null);
         measures.addAll(scores.criteria());
@@ -75,7 +88,7 @@ final class ConditionSection {
             String measure = measures.get(i) == null ? "overall" : measures.get(i);
             PairedComparison c = pc[i];
             String normality = Double.isNaN(sw[i].p()) ? "not tested" : sw[i].rejects(options.alpha())
-                    ? "not normal (SW p " + String.format(java.util.Locale.ROOT, "%.3g", sw[i].p()) + "): read Wilcoxon"
+                    ? "not normal (SW p " + PValueText.of(sw[i].p()) + "): read Wilcoxon"
                     : "no departure found";
             Double holmT = i == 0 ? null : hT[i - 1];
             Double holmW = i == 0 ? null : hW[i - 1];

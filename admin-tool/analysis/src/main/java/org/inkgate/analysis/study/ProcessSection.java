@@ -10,6 +10,7 @@ import java.util.function.ToDoubleFunction;
 import org.inkgate.analysis.data.ProcessEvent;
 import org.inkgate.analysis.descriptive.Descriptives;
 import org.inkgate.analysis.process.ProcessMeasures;
+import org.inkgate.analysis.report.Column;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.report.Table;
 import org.inkgate.analysis.scores.ResponseScore;
@@ -21,23 +22,32 @@ final class ProcessSection {
     private ProcessSection() {
     }
 
-    private record Measure(String name, String key, ToDoubleFunction<ProcessMeasures> value) {
+    private record Measure(String name, String key, String question, ToDoubleFunction<ProcessMeasures> value) {
     }
 
+    /** The headings: what a researcher asks of the process log. */
+    static final String HOW_LONG = "How long did they write?";
+    static final String HOW_FLUENT = "How fluently did they write?";
+    static final String HOW_REVISED = "How much did they revise?";
+    static final String HOW_TOOLS = "How were the tools used?";
+
+    // published construct names kept (pause, P-burst, R-burst, product/process ratio), grouped by question
     private static final List<Measure> MEASURES = List.of(
-            new Measure("time on task (s)", "time_on_task_s", ProcessMeasures::timeOnTaskS),
-            new Measure("active writing time (s)", "active_writing_s", ProcessMeasures::activeWritingS),
-            new Measure("pauses", "pauses", m -> m.pauses()),
-            new Measure("mean pause (s)", "mean_pause_s", ProcessMeasures::meanPauseS),
-            new Measure("P-bursts", "p_bursts", m -> m.pBursts()),
-            new Measure("R-bursts", "r_bursts", m -> m.rBursts()),
-            new Measure("mean P-burst length (chars)", "mean_p_burst_chars", ProcessMeasures::meanPBurstChars),
-            new Measure("revisions", "revisions", m -> m.revisions()),
-            new Measure("product/process ratio", "product_process_ratio", ProcessMeasures::productProcessRatio),
-            new Measure("characters per minute", "chars_per_minute", ProcessMeasures::charsPerMinute),
-            new Measure("time in resource panel (s)", "panel_time_s", ProcessMeasures::panelTimeS),
-            new Measure("lookups", "lookups", m -> m.lookups()),
-            new Measure("lookups followed by use", "lookups_used", m -> m.lookupsUsed()));
+            new Measure("time on task (s)", "time_on_task_s", HOW_LONG, ProcessMeasures::timeOnTaskS),
+            new Measure("active writing time (s)", "active_writing_s", HOW_LONG, ProcessMeasures::activeWritingS),
+            new Measure("pauses", "pauses", HOW_FLUENT, m -> m.pauses()),
+            new Measure("mean pause (s)", "mean_pause_s", HOW_FLUENT, ProcessMeasures::meanPauseS),
+            new Measure("P-bursts", "p_bursts", HOW_FLUENT, m -> m.pBursts()),
+            new Measure("mean P-burst length (characters)", "mean_p_burst_chars", HOW_FLUENT,
+                    ProcessMeasures::meanPBurstChars),
+            new Measure("characters per minute", "chars_per_minute", HOW_FLUENT, ProcessMeasures::charsPerMinute),
+            new Measure("revisions", "revisions", HOW_REVISED, m -> m.revisions()),
+            new Measure("R-bursts", "r_bursts", HOW_REVISED, m -> m.rBursts()),
+            new Measure("product/process ratio", "product_process_ratio", HOW_REVISED,
+                    ProcessMeasures::productProcessRatio),
+            new Measure("time in resource panel (s)", "panel_time_s", HOW_TOOLS, ProcessMeasures::panelTimeS),
+            new Measure("lookups", "lookups", HOW_TOOLS, m -> m.lookups()),
+            new Measure("lookups followed by use", "lookups_used", HOW_TOOLS, m -> m.lookupsUsed()));
 
     static Section build(List<ProcessEvent> log, ScoreTable scores, StudyOptions options) {
         Section.Builder s = Section.builder("process", "Writing process");
@@ -45,7 +55,9 @@ final class ProcessSection {
         s.paragraph("Measures from the process log, one value per response, summarised as mean and SD by condition and"
                 + " level. Pause threshold " + p.pauseThresholdMs() + " ms; a lookup counts as used when the looked-up"
                 + " text is typed within " + p.lookupWindowMs() + " ms. Definitions and sources: docs/analysis.md"
-                + " (Chenoweth & Hayes 2001; Wengelin 2006).");
+                + " (Chenoweth & Hayes 2001; Wengelin 2006). The columns are grouped by the question they answer:"
+                + " how long the candidates wrote, how fluently, how much they revised, and how they used the"
+                + " tools.");
         Map<String, List<ProcessEvent>> byResponse = new LinkedHashMap<>();
         for (ProcessEvent e : log) {
             byResponse.computeIfAbsent(e.candidate() + '\u0000' + e.task(), k -> new ArrayList<>()).add(e);
@@ -69,15 +81,20 @@ final class ProcessSection {
                 groups.computeIfAbsent(condition + '\u0000' + level, k -> new ArrayList<>()).add(m);
             }
         }
-        List<String> cols = new ArrayList<>(List.of("condition", "level", "responses"));
-        for (Measure m : MEASURES) {
-            cols.add(m.name() + " mean");
-            cols.add(m.name() + " SD");
+        List<Column> cols = new ArrayList<>();
+        for (String c : List.of("condition", "level", "responses")) {
+            cols.add(Column.of(c).in("Which responses"));
         }
-        Table.Builder t = Table.builder("process_measures", "Writing-process measures by condition and level")
-                .method("per-response measures from keystroke logs, mean and SD over responses",
+        for (Measure m : MEASURES) {
+            // the measure's name heads its two columns, the question heads the measures that answer it
+            cols.add(Column.of("mean", m.key() + "_mean").in(m.question()).under(m.name()));
+            cols.add(Column.of("standard deviation", m.key() + "_sd").in(m.question()).under(m.name()));
+        }
+        Table.Builder t = Table.builder("process_measures", "Writing-process measures by condition and level,"
+                        + " grouped by what they answer")
+                .method("per-response measures from keystroke logs, mean and standard deviation over responses",
                         "Chenoweth & Hayes 2001; Wengelin 2006; Leijten & Van Waes 2013")
-                .columns(cols.toArray(String[]::new));
+                .columns(cols);
         for (var g : groups.entrySet()) {
             String[] parts = g.getKey().split("\u0000");
             List<Object> row = new ArrayList<>(List.of(parts[0], parts[1], (long) g.getValue().size()));

@@ -35,23 +35,26 @@ public final class StudyAnalysis {
             levels.put(c.id(), c.level());
         }
         ScoreTable scores = ScoreTable.of(data.ratings(), options.scoreRule(), levels);
+        ComparisonDirection direction = ComparisonDirection.of(scores.conditions(), data.ratings(), data.toolUse(),
+                options.baselineCondition());
+        StudyOptions opts = options.withBaseline(direction.baseline());
         // sections only read the scores and the input, so they are built concurrently (the rater
         // section, the largest, runs beside the others) and then kept in their fixed order
         List<Supplier<Section>> builders = new ArrayList<>();
-        builders.add(() -> InputSection.build(data, scores, options));
-        builders.add(() -> DescriptivesSection.build(scores, options));
-        builders.add(() -> ConditionSection.build(scores, options));
-        builders.add(() -> LevelsSection.build(scores, options));
+        builders.add(() -> InputSection.build(data, scores, opts));
+        builders.add(() -> DescriptivesSection.build(scores, opts));
+        builders.add(() -> ConditionSection.build(scores, opts, direction));
+        builders.add(() -> LevelsSection.build(scores, opts));
         if (!Candidate.attributeNames(data.candidates()).isEmpty()) {
-            builders.add(() -> AttributesSection.build(data.candidates(), scores, options));
+            builders.add(() -> AttributesSection.build(data.candidates(), scores, opts));
         }
-        builders.add(() -> RatersSection.build(data.ratings(), options));
-        builders.add(() -> RubricSection.build(scores, options));
+        builders.add(() -> RatersSection.build(data.ratings(), opts));
+        builders.add(() -> RubricSection.build(scores, opts));
         if (!data.toolUse().isEmpty()) {
-            builders.add(() -> UsageSection.build(data.toolUse(), scores, options));
+            builders.add(() -> UsageSection.build(data.toolUse(), scores, opts));
         }
         if (!data.processLog().isEmpty()) {
-            builders.add(() -> ProcessSection.build(data.processLog(), scores, options));
+            builders.add(() -> ProcessSection.build(data.processLog(), scores, opts));
         }
         if (!data.surveyItems().isEmpty()) {
             builders.add(() -> SurveySection.build(data.candidates(), data.surveyItems()));

@@ -78,4 +78,23 @@ class DrawingsTest {
         f.setFeature("http://apache.org/xml/features/disallow-doctype-decl", true);
         return f.newDocumentBuilder().parse(new InputSource(new StringReader(svg)));
     }
+
+    @Test
+    void svg_textInJavaLogicalFonts_isSansSerifForTheBrowser() throws Exception {
+        // 'Dialog', 'Serif' and 'SansSerif' are the JDK's logical names; a browser knows none of them
+        String svg = Drawings.svg("fonts", "Fonts", 200, 80, g -> {
+            g.drawString("default", 5, 15);
+            g.setFont(new java.awt.Font(java.awt.Font.DIALOG, java.awt.Font.PLAIN, 11));
+            g.drawString("dialog", 5, 35);
+            g.setFont(new java.awt.Font(java.awt.Font.SERIF, java.awt.Font.BOLD, 11));
+            g.drawString("serif", 5, 55);
+        });
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("font-family(?::|=\")\\s*([^;\"]+)").matcher(svg);
+        int families = 0;
+        while (m.find()) {
+            assertEquals("sans-serif", m.group(1).trim(), svg);
+            families++;
+        }
+        assertTrue(families > 0, svg);
+    }
 }

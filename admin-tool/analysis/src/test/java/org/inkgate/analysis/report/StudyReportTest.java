@@ -92,4 +92,39 @@ class StudyReportTest {
         String json = Files.readString(dir.resolve("summary.json"));
         assertFalse(json.contains("NaN"));
     }
+
+    @Test
+    void pairedComparison_byDefault_isWithResourcesMinusWithout(@TempDir Path dir) throws Exception {
+        // sleep (Student 1908): group 2 as the condition offering tools. Alphabetically 'with-tools' comes
+        // first and used to be the baseline (t = -4.06); the default is now with resources minus without,
+        // which is R's t.test(extra[group == 2], extra[group == 1], paired = TRUE): t 4.062128 (R 4.2.2, METHODS.md)
+        List<Rating> ratings = new java.util.ArrayList<>();
+        List<org.inkgate.analysis.data.ToolUse> tools = new java.util.ArrayList<>();
+        for (var row : ReferenceData.rows("sleep.csv")) {
+            boolean withTools = row.get("group").equals("2");
+            String task = "night" + row.get("group");
+            ratings.add(new Rating("P" + row.get("ID"), "", "", task, withTools ? "with-tools" : "without-tools",
+                    "lab", "hours", Double.parseDouble(row.get("extra"))));
+            if (withTools) {
+                tools.add(new org.inkgate.analysis.data.ToolUse("P" + row.get("ID"), task, "spelling", 0, 0, 0, 0));
+            }
+        }
+        Report withUse = StudyAnalysis.report(new StudyData(ratings, List.of(), List.of(), tools, List.of()),
+                StudyOptions.DEFAULT);
+        ReportWriter.write(withUse, dir.resolve("a"));
+        JsonNode a = new ObjectMapper().readTree(dir.resolve("a/summary.json").toFile());
+        assertEquals("without-tools", a.get("comparison.baseline").asText());
+        assertEquals(4.062128, a.get("comparison.overall.t").asDouble(), 1e-6);
+        String html = Files.readString(dir.resolve("a/report.html"));
+        assertTrue(html.contains("Direction: with resources minus without (&#39;with-tools&#39; minus"
+                + " &#39;without-tools&#39;)") || html.contains("Direction: with resources minus without ('with-tools'"
+                + " minus 'without-tools')"), "the report says which way it subtracts");
+        // without the tool-use table the report cannot know, and says so
+        Report noUse = StudyAnalysis.report(StudyData.ofRatings(ratings), StudyOptions.DEFAULT);
+        String said = noUse.sections().stream().filter(x -> x.id().equals("comparison")).findFirst().orElseThrow()
+                .paragraphs().toString();
+        assertTrue(said.contains("cannot tell which condition offered resources"), said);
+        assertEquals(-4.062128, (Double) noUse.sections().stream().filter(x -> x.id().equals("comparison"))
+                .findFirst().orElseThrow().summary().get("comparison.overall.t"), 1e-6);
+    }
 }

@@ -126,7 +126,8 @@ public final class AnalyseCommand implements Callable<Integer> {
     private ScoreRule scoreRule;
 
     @Option(names = "--baseline", paramLabel = "CONDITION",
-            description = "The condition the other is compared against (default: the first in alphabetical order)")
+            description = "The condition the other is compared against (default: the one without resources, as the"
+                    + " tool-use table shows; else the first in alphabetical order)")
     private String baseline;
 
     @Option(names = "--pause-ms", paramLabel = "MS", defaultValue = "2000",
@@ -496,7 +497,15 @@ public final class AnalyseCommand implements Callable<Integer> {
             }
         }
         try {
-            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, attributes, columns), o);
+            // the Wright map draws the candidates by level: the candidate table's level, else the ratings'
+            Map<String, String> levelOf = new HashMap<>(levels);
+            data.ratings().forEach(r -> {
+                if (levelOf.getOrDefault(r.candidate(), "").isBlank() && r.level() != null
+                        && !r.level().isBlank()) {
+                    levelOf.put(r.candidate(), r.level());
+                }
+            });
+            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, attributes, columns), o, levelOf);
         } catch (MfrmRefusedException e) {
             return MfrmSection.refused(e.reasons());
         }

@@ -17,10 +17,27 @@ interface Canvas {
 
     void circle(double cx, double cy, double r, Color fill);
 
-    void polyline(double[] xs, double[] ys, Color colour, double width);
+    /** An unfilled circle. */
+    void ring(double cx, double cy, double r, Color colour, double width);
+
+    default void polyline(double[] xs, double[] ys, Color colour, double width) {
+        polyline(xs, ys, colour, width, false);
+    }
+
+    /** A polyline, solid or dashed (series past the palette's size are dashed). */
+    void polyline(double[] xs, double[] ys, Color colour, double width, boolean dashed);
 
     /** Text with its baseline at y. */
     void text(String s, double x, double y, double size, boolean bold, Color colour, Anchor anchor);
+
+    /** The advance width of the text as {@link #text} would draw it. */
+    double textWidth(String s, double size, boolean bold);
+
+    /** Height from the top of the tallest glyph to the baseline. */
+    double ascent(double size, boolean bold);
+
+    /** Height below the baseline. */
+    double descent(double size, boolean bold);
 
     /** Text turned 90 degrees anticlockwise, centred on (x, y). */
     void verticalText(String s, double x, double y, double size, Color colour);

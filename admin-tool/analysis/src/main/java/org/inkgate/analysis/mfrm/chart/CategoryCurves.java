@@ -3,6 +3,7 @@ package org.inkgate.analysis.mfrm.chart;
 import java.util.List;
 import java.util.Locale;
 import org.inkgate.analysis.graphics.Drawing;
+import org.inkgate.analysis.graphics.SeriesPalette;
 import org.inkgate.analysis.mfrm.MfrmResult;
 import org.inkgate.analysis.mfrm.estimation.CategoryModel;
 
@@ -80,9 +81,10 @@ public final class CategoryCurves {
             }
         }
         for (int k = 0; k <= m; k++) {
-            g.polyline(xs, ys[k], Palette.series(k), 2);
+            boolean dashed = SeriesPalette.dashed(k);
+            g.polyline(xs, ys[k], Palette.series(k), 2, dashed);
             double ly = top + 8 + k * 16;
-            g.line(right + 14, ly, right + 34, ly, Palette.series(k), 2);
+            g.polyline(new double[] {right + 14, right + 34}, new double[] {ly, ly}, Palette.series(k), 2, dashed);
             g.text("score " + cats.get(k).score(), right + 40, ly + 4, Palette.LABEL, false, Palette.TEXT,
                     Canvas.Anchor.START);
         }

@@ -43,22 +43,49 @@ final class GraphicsCanvas implements Canvas {
     }
 
     @Override
-    public void polyline(double[] xs, double[] ys, Color colour, double width) {
+    public void ring(double cx, double cy, double r, Color colour, double width) {
+        g.setColor(colour);
+        g.setStroke(new BasicStroke((float) width));
+        g.draw(new Ellipse2D.Double(cx - r, cy - r, 2 * r, 2 * r));
+    }
+
+    @Override
+    public void polyline(double[] xs, double[] ys, Color colour, double width, boolean dashed) {
         Path2D.Double p = new Path2D.Double();
         p.moveTo(xs[0], ys[0]);
         for (int i = 1; i < xs.length; i++) {
             p.lineTo(xs[i], ys[i]);
         }
         g.setColor(colour);
-        g.setStroke(new BasicStroke((float) width));
+        g.setStroke(dashed ? new BasicStroke((float) width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
+                new float[] {6f, 4f}, 0f) : new BasicStroke((float) width));
         g.draw(p);
+    }
+
+    private static Font font(double size, boolean bold) {
+        return new Font(Font.SANS_SERIF, bold ? Font.BOLD : Font.PLAIN, (int) Math.round(size));
+    }
+
+    @Override
+    public double textWidth(String s, double size, boolean bold) {
+        return g.getFontMetrics(font(size, bold)).getStringBounds(s, g).getWidth();
+    }
+
+    @Override
+    public double ascent(double size, boolean bold) {
+        return g.getFontMetrics(font(size, bold)).getAscent();
+    }
+
+    @Override
+    public double descent(double size, boolean bold) {
+        return g.getFontMetrics(font(size, bold)).getDescent();
     }
 
     @Override
     public void text(String s, double x, double y, double size, boolean bold, Color colour, Anchor anchor) {
-        g.setFont(new Font(Font.SANS_SERIF, bold ? Font.BOLD : Font.PLAIN, (int) Math.round(size)));
+        g.setFont(font(size, bold));
         g.setColor(colour);
-        double w = g.getFontMetrics().stringWidth(s);
+        double w = textWidth(s, size, bold);
         double dx = switch (anchor) {
             case START -> 0;
             case MIDDLE -> -w / 2;
