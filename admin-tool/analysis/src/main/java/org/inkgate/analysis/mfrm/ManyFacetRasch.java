@@ -16,6 +16,7 @@ import org.inkgate.analysis.mfrm.estimation.Estimates;
 import org.inkgate.analysis.mfrm.estimation.JmleEstimator;
 import org.inkgate.analysis.mfrm.estimation.JointStandardErrors;
 import org.inkgate.analysis.mfrm.fit.RatingStatistics;
+import org.inkgate.analysis.mfrm.fit.RawTotals;
 import org.inkgate.analysis.mfrm.fit.Separation;
 
 /**
@@ -146,8 +147,9 @@ public final class ManyFacetRasch {
 
         List<String> warnings = new ArrayList<>(est.warnings());
         List<MfrmResult.Facet> facets = new ArrayList<>();
+        RawTotals totals = new RawTotals(full, measure, thresholds);
         for (int f = 0; f < nF; f++) {
-            facets.add(facet(full, f, measure, se, jointSe, anchored, extremeSide, stats, factor, warnings));
+            facets.add(facet(full, f, measure, se, jointSe, anchored, extremeSide, stats, totals, factor, warnings));
         }
         List<MfrmResult.Scale> scales = new ArrayList<>();
         for (int s = 0; s < scaleLabels.length; s++) {
@@ -414,7 +416,7 @@ public final class ManyFacetRasch {
 
     private static MfrmResult.Facet facet(ModelDesign full, int f, double[][] measure, double[][] se,
                                           double[][] jointSe, boolean[][] anchored, int[][] side,
-                                          RatingStatistics st, double factor,
+                                          RatingStatistics st, RawTotals totals, double factor,
                                           List<String> warnings) {
         List<MfrmResult.Element> elements = new ArrayList<>();
         double[] ms = new double[full.elementCount(f)];
@@ -430,8 +432,11 @@ public final class ManyFacetRasch {
             double m = anchored[f][e] ? measure[f][e] : measure[f][e] * factor;
             if (side[f][e] != 0) {
                 extremes++;
-                elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], Double.NaN, 0, Double.NaN,
-                        Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN));
+                // counted over all ratings: the residual statistics never saw these elements' ratings
+                int all = totals.count[f][e];
+                elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], Double.NaN, all,
+                        totals.observedRaw[f][e], totals.expectedRaw[f][e], totals.observedRaw[f][e] / all,
+                        Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN));
                 continue;
             }
             int cnt = st.count[f][e];
