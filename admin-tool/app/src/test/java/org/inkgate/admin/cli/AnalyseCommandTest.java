@@ -229,6 +229,19 @@ class AnalyseCommandTest {
         }
         assertEquals(16, compared, "4 tasks x 4 thresholds");
         assertTrue(Files.readString(outDir.resolve("report.html")).contains("F_k(task)"));
+        // joint SEs of the centred parametrisation (issue 18): survival::clogit over each rating's
+        // categories, SEs through the contrast matrices (mfrm_clogit_pcm.R, R 4.2.2, survival 3.5.3)
+        Map<String, Double> se = new HashMap<>();
+        List<String> clogit = resourceLines("mfrm_clogit_pcm.csv");
+        for (String line : clogit.subList(1, clogit.size())) {
+            String[] f = line.split(",");
+            se.put(f[0] + "/" + f[1], Double.parseDouble(f[f[0].equals("task_summary") ? 2 : 3]));
+        }
+        JsonNode task = s.get("mfrm.facets").get(1);
+        for (JsonNode e : task.get("elements")) {
+            assertEquals(se.get("task/" + e.get("label").asText()), e.get("jointSe").asDouble(), 1e-5, e.toString());
+        }
+        assertEquals(se.get("task_summary/separation"), task.get("summaryJointSe").get("separation").asDouble(), 1e-3);
     }
 
     @Test
@@ -290,6 +303,41 @@ class AnalyseCommandTest {
         assertTrue(err.toString().contains("is not COLUMN:COLUMN"), err.toString());
         assertEquals(2, run("--ratings", ratings.toString(), "--out", o, "--mfrm-bias", "rater:task"));
         assertFalse(Files.exists(dir.resolve("o")));
+    }
+
+    @Test
+    void analyse_candidateWithLevelOnSomeRowsAndEmptyOnOthers_isNotRefused(@TempDir Path dir) throws Exception {
+        // issue 18: invented rows, structure only. Each candidate's level is written on task a's
+        // rows and left empty on task b's; docs/analysis.md: an empty level is filled (here the
+        // candidate table agrees), so this is one level per candidate, not two.
+        StringBuilder r = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        StringBuilder c = new StringBuilder("candidate,level\n");
+        for (int i = 0; i < 16; i++) {
+            String level = i % 2 == 0 ? "low" : "high";
+            c.append('K').append(i).append(',').append(level).append('\n');
+            for (String task : new String[] {"a", "b"}) {
+                for (String rater : new String[] {"R1", "R2"}) {
+                    r.append('K').append(i).append(',').append(task.equals("a") ? level : "").append(",,").append(task)
+                            .append(',').append(i % 4 < 2 == task.equals("a") ? "none" : "tools").append(',')
+                            .append(rater).append(",ideas,").append((i + (task.equals("a") ? 0 : 2) + (rater.equals("R1") ? 0 : 1)) % 4)
+                            .append('\n');
+                }
+            }
+        }
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), r.toString());
+        Path candidates = Files.writeString(dir.resolve("candidates.csv"), c.toString());
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", ratings.toString(), "--candidates", candidates.toString(), "--out",
+                outDir.toString(), "--mfrm-facets", "task,rater", "--mfrm-bias", "rater:level"), err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertTrue(s.get("mfrm.available").asBoolean(), s.toString());
+        int lowRatings = 0;
+        for (JsonNode cell : s.get("mfrm.bias").get(0).get("cells")) {
+            if (cell.get("second").asText().equals("low")) {
+                lowRatings += cell.get("count").asInt();
+            }
+        }
+        assertEquals(8 * 4, lowRatings, "every rating of the 8 low candidates, with or without a level written");
     }
 
     @Test
