@@ -59,7 +59,7 @@ class PartialCreditJointSeTest {
             for (String line : lines.subList(1, lines.size())) {
                 String[] f = line.split(",");
                 out.computeIfAbsent(f[0], k -> new LinkedHashMap<>()).put(f[1],
-                        new double[] {Double.parseDouble(f[2]), f[3].equals("NA") ? Double.NaN : Double.parseDouble(f[3])});
+                        new double[] {Double.parseDouble(f[2]), f.length < 4 || f[3].equals("NA") ? Double.NaN : Double.parseDouble(f[3])});
             }
         }
         return out;

@@ -13,16 +13,20 @@ public final class RawTotals {
     public final int[][] count;
     public final double[][] observedRaw;
     public final double[][] expectedRaw;
+    /** d(expected raw score)/d(logit) summed over the ratings: the information, in raw-score units. */
+    public final double[][] slope;
 
     public RawTotals(ModelDesign d, double[][] measure, double[][] thresholds) {
         int nF = d.facetCount();
         count = new int[nF][];
         observedRaw = new double[nF][];
         expectedRaw = new double[nF][];
+        slope = new double[nF][];
         for (int f = 0; f < nF; f++) {
             count[f] = new int[d.elementCount(f)];
             observedRaw[f] = new double[d.elementCount(f)];
             expectedRaw[f] = new double[d.elementCount(f)];
+            slope[f] = new double[d.elementCount(f)];
         }
         double[] p = new double[d.maxCategoryOverall() + 1];
         for (int n = 0; n < d.observationCount(); n++) {
@@ -34,8 +38,15 @@ public final class RawTotals {
             int m = d.maxCategory(s);
             CategoryModel.probabilities(eta, thresholds[s], m, p);
             double expected = 0;
+            double meanCategory = 0;
             for (int k = 0; k <= m; k++) {
                 expected += d.rawScore(s, k) * p[k];
+                meanCategory += k * p[k];
+            }
+            // dp_k/d(eta) = p_k (k - mean category), so d(expected raw)/d(eta) = cov(raw score, category)
+            double cov = 0;
+            for (int k = 0; k <= m; k++) {
+                cov += d.rawScore(s, k) * p[k] * (k - meanCategory);
             }
             double raw = d.rawScore(s, d.categories()[n]);
             for (int f = 0; f < nF; f++) {
@@ -43,6 +54,7 @@ public final class RawTotals {
                 count[f][e]++;
                 observedRaw[f][e] += raw;
                 expectedRaw[f][e] += expected;
+                slope[f][e] += cov;
             }
         }
     }
