@@ -72,6 +72,33 @@ class AnchoredReferenceTest {
     }
 
     @Test
+    void anchorFile_partialCredit_roundTripsElementsAndTheirThresholdSets() throws Exception {
+        RatingData data = ReferenceFits.data("ratingscale-2000");
+        ScaleStructure pcm = new ScaleStructure.PartialCredit("task");
+        MfrmResult free = ManyFacetRasch.analyse(data, MfrmOptions.builder(List.of("task", "rater")).structure(pcm).build());
+        StringWriter w = new StringWriter();
+        AnchorFile.write(free, w);
+        assertTrue(w.toString().contains("threshold,task,t3,2,2,"), w.toString());
+        AnchorFile.Anchors a = AnchorFile.read(new StringReader(w.toString()), "written.csv");
+        MfrmOptions.Builder b = MfrmOptions.builder(List.of("task", "rater")).structure(pcm);
+        assertEquals(List.of(), a.applyTo(b, data, List.of("task", "rater"), pcm));
+        MfrmResult anchored = ManyFacetRasch.analyse(data, b.build());
+        for (int s = 0; s < free.scales().size(); s++) {
+            for (int k = 1; k < free.scales().get(s).categories().size(); k++) {
+                assertEquals(free.scales().get(s).categories().get(k).threshold(),
+                        anchored.scales().get(s).categories().get(k).threshold(), 1e-12);
+            }
+        }
+        for (MfrmResult.Element e : anchored.facet("task").elements()) {
+            assertEquals(0, e.displacement(), 1e-3, e.label());
+        }
+        // the same file under the rating scale: the per-task threshold sets do not apply, and say so
+        List<String> left = a.applyTo(MfrmOptions.builder(List.of("task", "rater")), data, List.of("task", "rater"),
+                new ScaleStructure.RatingScale());
+        assertEquals(4, left.size(), left.toString());
+    }
+
+    @Test
     void anchorFile_badRows_areRefusedWithRowAndColumn() {
         IllegalArgumentException e = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
                 () -> AnchorFile.read(new StringReader(AnchorFile.HEADER + "\nelement,task,t1,,,abc\nstep,task,t1,,,1\n"
