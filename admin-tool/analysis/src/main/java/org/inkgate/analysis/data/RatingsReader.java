@@ -10,7 +10,8 @@ import java.util.Map;
 /**
  * Reads the tidy ratings table: one row per rating, columns
  * {@code candidate,level,form,task,condition,rater,criterion,score} (any order, header names
- * case-insensitive; level and form may be empty; extra columns ignored). Every bad row is
+ * case-insensitive; level and form may be empty; extra columns ignored). A candidate's empty
+ * level is taken from their other rows when those give one. Every bad row is
  * reported with its row and column; if any is bad, nothing is returned.
  */
 public final class RatingsReader {
@@ -18,6 +19,17 @@ public final class RatingsReader {
     static final String[] COLUMNS = {"candidate", "level", "form", "task", "condition", "rater", "criterion", "score"};
 
     private RatingsReader() {
+    }
+
+    /** A candidate's empty-level rows take the level their other rows give (a level belongs to the candidate). */
+    private static List<Rating> withLevelsFilled(List<Rating> ratings, Map<String, String> levelOf) {
+        List<Rating> out = new ArrayList<>(ratings.size());
+        for (Rating r : ratings) {
+            String level = r.level().isEmpty() ? levelOf.get(r.candidate()) : null;
+            out.add(level == null ? r : new Rating(r.candidate(), level, r.form(), r.task(), r.condition(), r.rater(),
+                    r.criterion(), r.score()));
+        }
+        return out;
     }
 
     public static List<Rating> read(String file, Reader reader) throws IOException, InputRejected {
@@ -68,7 +80,9 @@ public final class RatingsReader {
                             + earlierRatings.get(0).condition() + "' in row " + earlierRows.get(0)
                             + "; a response is sat under one condition"));
                 }
-                String lv = levelOf.putIfAbsent(candidate, level);
+                // an empty level says nothing (filled below, or from the candidate table); only two
+                // different levels given for one candidate conflict
+                String lv = level.isEmpty() ? null : levelOf.putIfAbsent(candidate, level);
                 if (lv != null && !lv.equals(level)) {
                     problems.add(new InputProblem(file, row.number(), "level", "candidate " + candidate + " has level '"
                             + level + "' here but '" + lv + "' in an earlier row; give each candidate one level"));
@@ -86,6 +100,6 @@ public final class RatingsReader {
         if (out.isEmpty()) {
             throw new InputRejected(List.of(new InputProblem(file, 2, null, "no ratings below the header")));
         }
-        return out;
+        return withLevelsFilled(out, levelOf);
     }
 }

@@ -7,15 +7,19 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.stream.IntStream;
+import org.inkgate.analysis.mfrm.bias.BiasEstimation;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
 import org.inkgate.analysis.mfrm.bias.InteractionAnalysis;
+import org.inkgate.analysis.mfrm.bias.JointCellRefit;
 import org.inkgate.analysis.mfrm.design.DesignCheck;
 import org.inkgate.analysis.mfrm.design.ModelDesign;
 import org.inkgate.analysis.mfrm.estimation.CategoryModel;
 import org.inkgate.analysis.mfrm.estimation.Estimates;
 import org.inkgate.analysis.mfrm.estimation.JmleEstimator;
 import org.inkgate.analysis.mfrm.estimation.JointStandardErrors;
+import org.inkgate.analysis.mfrm.fit.AdjustedScores;
 import org.inkgate.analysis.mfrm.fit.RatingStatistics;
+import org.inkgate.analysis.mfrm.fit.RawTotals;
 import org.inkgate.analysis.mfrm.fit.Separation;
 
 /**
@@ -30,6 +34,8 @@ public final class ManyFacetRasch {
     /** Marks an element whose every rating involved an extreme element. */
     private static final int UNLINKED = 2;
     private static final String AFTER_EXTREMES = " after setting extreme scores aside";
+    /** Anchored elements displaced by more than this many logits earn a warning (common practice, [memory]). */
+    static final double DISPLACEMENT_LIMIT = 0.5;
 
     private ManyFacetRasch() {
     }
@@ -128,11 +134,14 @@ public final class ManyFacetRasch {
         RatingStatistics stats = new RatingStatistics(active, measure, thresholds, options.unexpectedZ(),
                 options.unexpectedLimit());
         List<BiasPair> bias = new ArrayList<>();
+        JointCellRefit joint = options.biasEstimation() == BiasEstimation.JOINT
+                ? new JointCellRefit(active, measure, thresholds, anchored, scaleAnchored, pcFacet, options.threads(),
+                options.maxLogitChange(), options.maxScoreResidual(), options.maxIterations()) : null;
         for (FacetPair pair : options.biasPairs()) {
             int ca = data.columnIndex(pair.first());
             int cb = data.columnIndex(pair.second());
             bias.add(InteractionAnalysis.analyse(active, measure, thresholds, pair.first(), data.codesView(ca),
-                    data.labels(ca), pair.second(), data.codesView(cb), data.labels(cb)));
+                    data.labels(ca), pair.second(), data.codesView(cb), data.labels(cb), joint));
         }
 
         double factor = 1;
@@ -146,9 +155,17 @@ public final class ManyFacetRasch {
 
         List<String> warnings = new ArrayList<>(est.warnings());
         List<MfrmResult.Facet> facets = new ArrayList<>();
+        // one more pass over the ratings each, only when there are extreme or anchored elements to report
+        boolean anyExtreme = Arrays.stream(extremeSide).anyMatch(sides -> Arrays.stream(sides).anyMatch(x -> x != 0));
+        RawTotals totals = anyExtreme ? new RawTotals(full, measure, thresholds) : null;
+        AdjustedScores adjusted = new AdjustedScores(active, measure, thresholds, pcFacet);
+        // displacement over the ratings the estimation used (extreme elements' ratings carry no information)
+        RawTotals estimated = options.elementAnchors().isEmpty() ? null : new RawTotals(active, measure, thresholds);
         for (int f = 0; f < nF; f++) {
-            facets.add(facet(full, f, measure, se, jointSe, anchored, extremeSide, stats, factor, warnings));
+            facets.add(facet(full, f, measure, se, jointSe, anchored, extremeSide, stats, totals, estimated, adjusted,
+                    factor, warnings));
         }
+        displacementWarning(facets, warnings);
         List<MfrmResult.Scale> scales = new ArrayList<>();
         for (int s = 0; s < scaleLabels.length; s++) {
             scales.add(scale(active, s, stats, est, thresholds, factor, scaleAnchored[s]));
@@ -414,7 +431,8 @@ public final class ManyFacetRasch {
 
     private static MfrmResult.Facet facet(ModelDesign full, int f, double[][] measure, double[][] se,
                                           double[][] jointSe, boolean[][] anchored, int[][] side,
-                                          RatingStatistics st, double factor,
+                                          RatingStatistics st, RawTotals totals, RawTotals estimated,
+                                          AdjustedScores adjusted, double factor,
                                           List<String> warnings) {
         List<MfrmResult.Element> elements = new ArrayList<>();
         double[] ms = new double[full.elementCount(f)];
@@ -430,15 +448,24 @@ public final class ManyFacetRasch {
             double m = anchored[f][e] ? measure[f][e] : measure[f][e] * factor;
             if (side[f][e] != 0) {
                 extremes++;
-                elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], Double.NaN, 0, Double.NaN,
-                        Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN));
+                // counted over all ratings: the residual statistics never saw these elements' ratings
+                int all = totals.count[f][e];
+                elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], Double.NaN, all,
+                        totals.observedRaw[f][e], totals.expectedRaw[f][e], totals.observedRaw[f][e] / all,
+                        Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
+                        adjusted.at(f, e, measure[f][e]), band(adjusted, f, e, measure[f][e], -se[f][e]),
+                        band(adjusted, f, e, measure[f][e], se[f][e])));
                 continue;
             }
             int cnt = st.count[f][e];
             elements.add(new MfrmResult.Element(full.label(f, e), status, m, se[f][e], jointSe[f][e], cnt,
                     st.observedRaw[f][e],
                     st.expectedRaw[f][e], st.observedRaw[f][e] / cnt, st.infit[f][e], st.infitZ[f][e],
-                    st.outfit[f][e], st.outfitZ[f][e], st.pointMeasure[f][e]));
+                    st.outfit[f][e], st.outfitZ[f][e], st.pointMeasure[f][e],
+                    anchored[f][e] ? displacement(f, estimated.observedRaw[f][e] - estimated.expectedRaw[f][e],
+                            estimated.slope[f][e]) : Double.NaN,
+                    adjusted.at(f, e, measure[f][e]), band(adjusted, f, e, measure[f][e], -bandSe(se, jointSe, f, e)),
+                    band(adjusted, f, e, measure[f][e], bandSe(se, jointSe, f, e))));
             if (cnt > 0) {
                 ms[used] = m;
                 ses[used] = se[f][e];
@@ -469,6 +496,50 @@ public final class ManyFacetRasch {
         return new MfrmResult.Facet(full.facetName(f), List.copyOf(elements),
                 Separation.of(Arrays.copyOf(ms, used), Arrays.copyOf(ses, used)),
                 jointKnown ? Separation.of(Arrays.copyOf(ms, used), Arrays.copyOf(joint, used)) : null);
+    }
+
+    /** The 95% band's SE: the joint SE where there is one (non-candidate facets), else the model SE. */
+    private static double bandSe(double[][] se, double[][] jointSe, int f, int e) {
+        return f > 0 && Double.isFinite(jointSe[f][e]) ? jointSe[f][e] : se[f][e];
+    }
+
+    /**
+     * The adjusted score at measure + 1.96 signedSe, turned so that a negative signedSe gives the
+     * lower end: a higher measure raises a candidate's score and lowers any other element's.
+     */
+    private static double band(AdjustedScores adjusted, int f, int e, double m, double signedSe) {
+        if (!Double.isFinite(signedSe)) {
+            return Double.NaN;
+        }
+        return adjusted.at(f, e, m + (f == 0 ? 1 : -1) * 1.96 * signedSe);
+    }
+
+    /**
+     * One Newton step from the anchor: the logit change that would make the element's expected score
+     * equal its observed score. Candidates measure ability (up with the score), the other facets
+     * difficulty or severity (down with it).
+     */
+    private static double displacement(int f, double observedMinusExpected, double slope) {
+        double step = observedMinusExpected / slope;
+        return f == 0 ? step : -step;
+    }
+
+    /** Anchored elements displaced past the limit, as one warning. */
+    private static void displacementWarning(List<MfrmResult.Facet> facets, List<String> warnings) {
+        List<String> far = new ArrayList<>();
+        for (MfrmResult.Facet f : facets) {
+            for (MfrmResult.Element e : f.elements()) {
+                if (Math.abs(e.displacement()) > DISPLACEMENT_LIMIT) {
+                    far.add(String.format(Locale.ROOT, "%s %s %+.2f", f.name(), e.label(), e.displacement()));
+                }
+            }
+        }
+        if (!far.isEmpty()) {
+            warnings.add(String.format(Locale.ROOT, "%d anchored element(s) are displaced by more than %.1f logit"
+                    + " (common practice limit): %s. The data here disagree with the anchor values; check that"
+                    + " the anchors belong to these elements and scale before reporting on the anchored scale",
+                    far.size(), DISPLACEMENT_LIMIT, String.join(", ", far)));
+        }
     }
 
     private static MfrmResult.Scale scale(ModelDesign d, int s, RatingStatistics st, Estimates est,

@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import org.inkgate.analysis.mfrm.bias.BiasEstimation;
 
 /**
  * What to model and how to estimate it. Defaults: rating-scale structure, convergence when the
@@ -22,6 +23,7 @@ public record MfrmOptions(
         int maxIterations,
         boolean lengthCorrection,
         List<FacetPair> biasPairs,
+        BiasEstimation biasEstimation,
         double unexpectedZ,
         int unexpectedLimit,
         int threads) {
@@ -35,6 +37,7 @@ public record MfrmOptions(
         elementAnchors = Map.copyOf(elementAnchors);
         thresholdAnchors = Map.copyOf(thresholdAnchors);
         biasPairs = List.copyOf(biasPairs);
+        Objects.requireNonNull(biasEstimation, "biasEstimation");
         if (facets.isEmpty()) {
             throw new IllegalArgumentException("choose at least one facet besides candidates (e.g. rater)");
         }
@@ -59,6 +62,17 @@ public record MfrmOptions(
         }
     }
 
+    /** A builder holding these options, to change some of them. */
+    public Builder toBuilder() {
+        Builder b = new Builder(facets).structure(structure).convergence(maxLogitChange, maxScoreResidual)
+                .maxIterations(maxIterations).lengthCorrection(lengthCorrection).biasEstimation(biasEstimation)
+                .unexpected(unexpectedZ, unexpectedLimit).threads(threads);
+        elementAnchors.forEach((facet, els) -> els.forEach((e, m) -> b.anchor(facet, e, m)));
+        thresholdAnchors.forEach(b::anchorThresholds);
+        biasPairs.forEach(p -> b.bias(p.first(), p.second()));
+        return b;
+    }
+
     /** Defaults for the given facets. */
     public static Builder builder(List<String> facets) {
         return new Builder(facets);
@@ -75,6 +89,7 @@ public record MfrmOptions(
         private int maxIterations = 1000;
         private boolean lengthCorrection;
         private final List<FacetPair> biasPairs = new ArrayList<>();
+        private BiasEstimation biasEstimation = BiasEstimation.MAIN_EFFECTS_FIXED;
         private double unexpectedZ = 3.0;
         private int unexpectedLimit = 100;
         private int threads = Math.max(1, Math.min(2, Runtime.getRuntime().availableProcessors()));
@@ -110,6 +125,9 @@ public record MfrmOptions(
 
         public Builder bias(String first, String second) { biasPairs.add(new FacetPair(first, second)); return this; }
 
+        /** How bias sizes are estimated (default: main effects held fixed). */
+        public Builder biasEstimation(BiasEstimation e) { this.biasEstimation = e; return this; }
+
         public Builder unexpected(double minAbsZ, int limit) {
             this.unexpectedZ = minAbsZ;
             this.unexpectedLimit = limit;
@@ -120,7 +138,7 @@ public record MfrmOptions(
 
         public MfrmOptions build() {
             return new MfrmOptions(facets, structure, elementAnchors, thresholdAnchors, maxLogitChange,
-                    maxScoreResidual, maxIterations, lengthCorrection, biasPairs, unexpectedZ, unexpectedLimit, threads);
+                    maxScoreResidual, maxIterations, lengthCorrection, biasPairs, biasEstimation, unexpectedZ, unexpectedLimit, threads);
         }
     }
 }

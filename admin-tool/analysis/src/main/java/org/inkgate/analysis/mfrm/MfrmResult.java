@@ -41,10 +41,16 @@ public record MfrmResult(Model model, Convergence convergence, List<Facet> facet
      * One element of a facet. Fit values are NaN for extreme elements. {@code se} is the model SE
      * (own information, other measures treated as known); {@code jointSe} (non-candidate facets)
      * also carries the uncertainty of the candidates and other facets it is linked through.
+     * {@code displacement} (anchored elements only, else NaN): the logit change of the measure the
+     * data ask for, one Newton step from the anchor, in the measure's own orientation.
+     * {@code adjustedScore}: the model-expected raw score of one rating with every other facet at its
+     * mean; {@code adjustedLow}/{@code adjustedHigh}: the same at measure -+ 1.96 SE (the joint SE
+     * where there is one), i.e. a 95% band, ordered low to high.
      */
     public record Element(String label, Status status, double measure, double se, double jointSe, int count,
                           double observedScore, double expectedScore, double observedAverage,
-                          double infit, double infitZ, double outfit, double outfitZ, double pointMeasure) {
+                          double infit, double infitZ, double outfit, double outfitZ, double pointMeasure,
+                          double displacement, double adjustedScore, double adjustedLow, double adjustedHigh) {
     }
 
     /**

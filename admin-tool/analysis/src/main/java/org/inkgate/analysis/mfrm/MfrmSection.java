@@ -11,6 +11,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
 import org.inkgate.analysis.mfrm.bias.BiasCell;
+import org.inkgate.analysis.mfrm.bias.BiasEstimation;
 import org.inkgate.analysis.mfrm.bias.BiasPair;
 import org.inkgate.analysis.mfrm.chart.BiasChart;
 import org.inkgate.analysis.mfrm.chart.CategoryCurves;
@@ -146,7 +147,7 @@ public final class MfrmSection {
                     : "Category probability curves: " + sc.label(), caption, CategoryCurves.drawing(r, i)));
         }
         if (!r.bias().isEmpty()) {
-            s.table(biasSummaryTable(r.bias()));
+            s.table(biasSummaryTable(r.bias(), r.model().facets()));
             int i = 0;
             for (BiasPair b : r.bias()) {
                 String id = unique(ids, "mfrm_bias_" + slug(b.first()) + "_" + slug(b.second()));
@@ -244,7 +245,8 @@ public final class MfrmSection {
                         "Linacre 1989; Wright & Masters 1982, ch. 5 and pp. 100-101")
                 .columns(ELEMENT, STATUS, MEASURE, STANDARD_ERROR, JOINT_STANDARD_ERROR, RATINGS, OBSERVED_SCORE,
                         EXPECTED_SCORE, OBSERVED_AVERAGE, INFIT_MEAN_SQUARE, INFIT_STANDARDISED, OUTFIT_MEAN_SQUARE,
-                        OUTFIT_STANDARDISED, POINT_MEASURE_CORRELATION, FIT_FLAG);
+                        OUTFIT_STANDARDISED, POINT_MEASURE_CORRELATION, FIT_FLAG, DISPLACEMENT, ADJUSTED_SCORE,
+                        ADJUSTED_SCORE_LOW, ADJUSTED_SCORE_HIGH);
         List<MfrmResult.Element> sorted = new ArrayList<>(f.elements());
         sorted.sort(Comparator.comparingDouble((MfrmResult.Element e) -> Double.isNaN(e.measure())
                 ? Double.POSITIVE_INFINITY : -e.measure()));
@@ -264,8 +266,19 @@ public final class MfrmSection {
             }
             t.row(e.label(), e.status().name().toLowerCase(Locale.ROOT), e.measure(), e.se(), e.jointSe(),
                     (long) e.count(), e.observedScore(), e.expectedScore(), e.observedAverage(), e.infit(),
-                    e.infitZ(), e.outfit(), e.outfitZ(), e.pointMeasure(), flag);
+                    e.infitZ(), e.outfit(), e.outfitZ(), e.pointMeasure(), flag, e.displacement(), e.adjustedScore(),
+                    e.adjustedLow(), e.adjustedHigh());
         }
+        if (f.elements().stream().anyMatch(e -> e.status() == MfrmResult.Status.ANCHORED)) {
+            t.note(String.format(Locale.ROOT, "Status anchored: the measure was fixed from the anchor file, not"
+                    + " estimated. Displacement: the logit change the data here ask for (one Newton step from the"
+                    + " anchor); beyond %.1f logit (common practice) the anchor is in doubt and a warning says so.",
+                    ManyFacetRasch.DISPLACEMENT_LIMIT));
+        }
+        t.note("Adjusted score: the expected raw score of one rating with every other facet at its mean (" + (candidates
+                ? "rater severity, task difficulty and the other facets taken out" : "an average candidate, the other"
+                + " facets at their means") + "), on the scale's raw scores; the 95% band is the same at the measure"
+                + " -+ 1.96 " + (candidates ? "model SE" : "joint SE") + ".");
         t.note("Sorted by measure, highest first. " + (candidates ? "Higher = more able." : "Higher = harder or more"
                 + " severe (lowers expected scores)."));
         t.note("Fit: mean-squares near 1 fit the model; above 1 the ratings are noisier than the model expects,"
@@ -321,25 +334,43 @@ public final class MfrmSection {
         return t.build();
     }
 
-    private static Table biasSummaryTable(List<BiasPair> pairs) {
+    private static Table biasSummaryTable(List<BiasPair> pairs, List<String> modelled) {
         Table.Builder t = Table.builder("mfrm_bias", "Bias / interaction pairs")
-                .method("One extra term per combination with every measure and threshold anchored; chi-square = sum"
-                        + " of t^2 over non-extreme cells with df >= 1", "Linacre 1989")
-                .columns(PAIR, CELLS, CHI_SQUARE, DEGREES_OF_FREEDOM, P_VALUE, SIGNIFICANT_CELLS);
+                .method("One extra term per combination, estimated as the pair's estimation column says; chi-square ="
+                        + " sum of t^2 over non-extreme cells with df >= 1", "Linacre 1989")
+                .columns(PAIR, ESTIMATION, CELLS, CHI_SQUARE, DEGREES_OF_FREEDOM, P_VALUE, SIGNIFICANT_CELLS);
+        List<String> absorbing = new ArrayList<>();
         for (BiasPair b : pairs) {
-            t.row(b.first() + " x " + b.second(), (long) b.cells().size(), b.chiSquare(), (long) b.df(), b.p(),
-                    (long) b.significantCells());
+            t.row(b.first() + " x " + b.second(), b.estimation().description(), (long) b.cells().size(),
+                    b.chiSquare(), (long) b.df(), b.p(), (long) b.significantCells());
+            boolean bothModelled = (modelled.contains(b.first()) || b.first().equals(RatingData.CANDIDATE))
+                    && (modelled.contains(b.second()) || b.second().equals(RatingData.CANDIDATE));
+            if (b.estimation() == BiasEstimation.MAIN_EFFECTS_FIXED && bothModelled) {
+                absorbing.add(b.first() + " x " + b.second());
+            }
+            if (b.notEstimable() > 0) {
+                t.note(b.first() + " x " + b.second() + ": " + b.notEstimable() + " combination(s) could not be"
+                        + " estimated jointly (confounded with a main effect, or the refit did not converge); their"
+                        + " size is empty.");
+            }
         }
         t.note("Many cells mean many tests: with 100 cells about 5 have p < 0.05 by chance; the cell p-values are not"
-                + " adjusted. When both columns are modelled facets, their main effects absorb part of any"
-                + " interaction, so sizes understate it and the chi-square is conservative.");
+                + " adjusted.");
+        if (!absorbing.isEmpty()) {
+            t.note("Applies to " + String.join(", ", absorbing) + ": both columns are modelled facets and the sizes"
+                    + " were estimated with the main effects held fixed, so the main effects have already absorbed"
+                    + " part of any interaction: sizes understate it (a planted 0.6 logit can come out near half"
+                    + " that) and the chi-square is conservative. The option to estimate each combination jointly"
+                    + " with the main effects (analyse --mfrm-bias-estimation joint) avoids this.");
+        }
         return t.build();
     }
 
     private static Table biasTable(BiasPair b, String id) {
         Table.Builder t = Table.builder(id, "Bias: " + b.first() + " x " + b.second())
-                .method("Bias size by Newton-Raphson on the cell's ratings, SE = 1/sqrt(information), t = size/SE,"
-                        + " df = ratings - 1, two-sided p from Student's t", "Linacre 1989")
+                .method("Bias size " + b.estimation().description() + ", by Newton-Raphson; SE from the"
+                        + (b.estimation() == BiasEstimation.JOINT ? " joint information" : " cell's own information")
+                        + ", t = size/SE, df = ratings - 1, two-sided p from Student's t", "Linacre 1989")
                 .columns(Column.of(b.first()), Column.of(b.second()), RATINGS, OBSERVED_SCORE, EXPECTED_SCORE,
                         OBSERVED_MINUS_EXPECTED, BIAS_SIZE, STANDARD_ERROR, T_STATISTIC, DEGREES_OF_FREEDOM, P_VALUE,
                         EXTREME);

@@ -63,6 +63,10 @@ final class MfrmSummary {
                 em.put("outfit", num(e.outfit()));
                 em.put("outfitZ", num(e.outfitZ()));
                 em.put("pointMeasure", num(e.pointMeasure()));
+                em.put("displacement", num(e.displacement()));
+                em.put("adjustedScore", num(e.adjustedScore()));
+                em.put("adjustedScoreLow", num(e.adjustedLow()));
+                em.put("adjustedScoreHigh", num(e.adjustedHigh()));
                 els.add(em);
             }
             fm.put("elements", els);
@@ -114,6 +118,8 @@ final class MfrmSummary {
             bm.put("df", b.df());
             bm.put("p", num(b.p()));
             bm.put("significantCells", b.significantCells());
+            bm.put("estimation", b.estimation().option());
+            bm.put("notEstimable", b.notEstimable());
             List<Object> cells = new ArrayList<>();
             b.cells().stream()
                     .sorted(Comparator.comparingDouble((BiasCell c) -> -Math.abs(Double.isNaN(c.t()) ? 0 : c.t())))

@@ -74,6 +74,13 @@ public final class StatisticColumns {
     public static final Column BIAS_SIZE = Column.of("bias size (logits)", "bias_size");
     public static final Column SIGNIFICANT_CELLS = Column.of("cells with p-value below 0.05", "cells_p_below_0_05");
     public static final Column EXTREME = Column.of("extreme", "extreme");
+    public static final Column ESTIMATION = Column.of("estimation", "estimation");
+
+    // anchoring and adjusted scores (issue 18 §2)
+    public static final Column DISPLACEMENT = Column.of("displacement (logits)", "displacement");
+    public static final Column ADJUSTED_SCORE = Column.of("adjusted score", "adjusted_score");
+    public static final Column ADJUSTED_SCORE_LOW = Column.of("adjusted score, 95% low", "adjusted_score_low");
+    public static final Column ADJUSTED_SCORE_HIGH = Column.of("adjusted score, 95% high", "adjusted_score_high");
 
     private StatisticColumns() {
     }

@@ -42,6 +42,16 @@ class ReadersTest {
     }
 
     @Test
+    void ratings_levelOnSomeRowsAndEmptyOnOthers_isOneLevelFilledIntoTheEmptyRows() throws Exception {
+        // issue 18: an empty level is not a second level (docs/analysis.md, Ratings)
+        List<Rating> r = RatingsReader.read("r.csv", new StringReader(HEADER
+                + "C1,,,t1,none,R1,content,3\n"
+                + "C1,B1,,t2,none,R1,content,4\n"
+                + "C2,,,t1,none,R1,content,2\n"));
+        assertEquals(List.of("B1", "B1", ""), r.stream().map(Rating::level).toList());
+    }
+
+    @Test
     void ratings_headerOnly_isRefused() {
         InputRejected e = assertThrows(InputRejected.class, () -> RatingsReader.read("r.csv", new StringReader(HEADER)));
         assertTrue(e.getMessage().contains("no ratings below the header"));

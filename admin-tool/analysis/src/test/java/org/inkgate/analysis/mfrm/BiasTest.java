@@ -87,7 +87,8 @@ class BiasTest {
                 .bias("rater", "task").build());
         @SuppressWarnings("unchecked")
         Map<String, Object> b = (Map<String, Object>) ((List<?>) r.summary().get("bias")).get(0);
-        assertEquals(List.of("first", "second", "cellCount", "chiSquare", "df", "p", "significantCells", "cells"),
+        assertEquals(List.of("first", "second", "cellCount", "chiSquare", "df", "p", "significantCells", "estimation", "notEstimable",
+                "cells"),
                 List.copyOf(b.keySet()));
         @SuppressWarnings("unchecked")
         Map<String, Object> top = (Map<String, Object>) ((List<?>) b.get("cells")).get(0);

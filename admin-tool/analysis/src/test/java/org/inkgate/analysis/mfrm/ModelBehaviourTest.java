@@ -45,6 +45,12 @@ class ModelBehaviourTest {
         assertTrue(Double.isFinite(top.measure()) && top.se() > 0);
         assertTrue(r.warnings().stream().anyMatch(w -> w.contains("extreme scores")));
         assertEquals(r.model().ratings() - 4, r.model().ratingsEstimated());
+        // issue 18: reported with its real ratings (the four added above, each 4), not 0 and none;
+        // its measure puts the expected score 0.5 below the maximum 16 (the convention in docs/analysis.md)
+        assertEquals(4, top.count());
+        assertEquals(16, top.observedScore(), 1e-12);
+        assertEquals(4, top.observedAverage(), 1e-12);
+        assertEquals(15.5, top.expectedScore(), 1e-3);
     }
 
     @Test
@@ -63,6 +69,8 @@ class ModelBehaviourTest {
         MfrmResult.Element lone = r.facet("rater").elements().stream().filter(e -> e.label().equals("rater13"))
                 .findFirst().orElseThrow();
         assertEquals(MfrmResult.Status.ONLY_WITH_EXTREMES, lone.status());
+        assertEquals(1, lone.count(), "its one rating, of the extreme candidate");
+        assertEquals(4, lone.observedScore(), 1e-12);
         assertTrue(Double.isFinite(lone.measure()));
         assertEquals(12, r.facet("rater").separation().count(), "left out of the rater summary");
     }

@@ -38,6 +38,21 @@ class RefusalTest {
     }
 
     @Test
+    void analyse_raterGroupsJoinedOnlyThroughTasks_isRefusedNamingTheRaterGroupsNotOneRaterEach() {
+        // issue 18: every candidate met three raters, but raters 1-3 and 4-6 share no candidate;
+        // the tasks join the islands, so there is one connected subset, and the refusal used to say
+        // "each candidate met only one rater". The groups are read off twoIslands() above.
+        MfrmRefusedException e = assertThrows(MfrmRefusedException.class, () -> ManyFacetRasch.analyse(
+                twoIslands().data, MfrmOptions.builder(List.of("task", "rater")).build()));
+        String all = String.join(" | ", e.reasons());
+        assertTrue(all.contains("facet 'rater' cannot be separated from candidates"), all);
+        assertTrue(all.contains("2 groups that share no candidate"), all);
+        assertTrue(all.contains("{rater1, rater2, rater3} with 100 candidate(s)"), all);
+        assertTrue(all.contains("{rater4, rater5, rater6} with 100 candidate(s)"), all);
+        assertTrue(!all.contains("only one rater") && !all.contains("disconnected subsets"), all);
+    }
+
+    @Test
     void analyse_disconnectedGroupsAnchoredInEachSubset_isEstimated() {
         MfrmOptions o = MfrmOptions.builder(List.of("rater")).anchor("rater", "rater1", -0.8)
                 .anchor("rater", "rater4", 0.16).build();

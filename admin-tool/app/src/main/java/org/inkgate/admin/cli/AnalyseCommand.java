@@ -3,10 +3,12 @@ package org.inkgate.admin.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.Reader;
+import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -29,13 +31,17 @@ import org.inkgate.analysis.data.Rating;
 import org.inkgate.analysis.data.RatingsReader;
 import org.inkgate.analysis.data.ToolUse;
 import org.inkgate.analysis.data.ToolUseReader;
+import org.inkgate.analysis.mfrm.AnchorFile;
 import org.inkgate.analysis.mfrm.FacetPair;
+import org.inkgate.analysis.mfrm.ManyFacetRasch;
 import org.inkgate.analysis.mfrm.MfrmOptions;
 import org.inkgate.analysis.mfrm.MfrmRefusedException;
+import org.inkgate.analysis.mfrm.MfrmResult;
 import org.inkgate.analysis.mfrm.MfrmSection;
 import org.inkgate.analysis.mfrm.RatingData;
 import org.inkgate.analysis.mfrm.ScaleStructure;
 import org.inkgate.analysis.mfrm.StudyRatings;
+import org.inkgate.analysis.mfrm.bias.BiasEstimation;
 import org.inkgate.analysis.process.ProcessMeasures;
 import org.inkgate.analysis.report.Report;
 import org.inkgate.analysis.report.ReportWriter;
@@ -156,9 +162,23 @@ public final class AnalyseCommand implements Callable<Integer> {
             description = "Bias/interaction pairs, e.g. rater:task,condition:level (candidate or any ratings column)")
     private List<String> mfrmBias;
 
+    @Option(names = "--mfrm-bias-estimation", paramLabel = "HOW", defaultValue = "fixed",
+            description = "fixed (each combination's size with the main effects held at their estimates; fast) or"
+                    + " joint (each combination estimated jointly with the main effects, one refit per combination);"
+                    + " default: ${DEFAULT-VALUE}")
+    private String mfrmBiasEstimation;
+
+    @Option(names = "--mfrm-anchors", paramLabel = "FILE.csv",
+            description = "Anchor file (mfrm_anchors.csv written by an earlier analyse run, rows deleted as wanted):"
+                    + " its elements and thresholds are fixed, putting this run on that run's scale")
+    private Path mfrmAnchors;
+
     @Option(names = "--mfrm-max-iterations", paramLabel = "N", defaultValue = "1000",
             description = "Iteration cap of the Rasch estimation (default: ${DEFAULT-VALUE})")
     private int mfrmMaxIterations;
+
+    /** The exam the store's data came from, for the provenance; null when the inputs are files only. */
+    private String examAnalysed;
 
     @Override
     public Integer call() {
@@ -284,8 +304,25 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (answers != null && !answers.isEmpty()) {
             extra.add(QuestionnaireSection.build(answers, data.toolUse()));
         }
+        AnchorFile.Anchors anchors = null;
+        if (mfrmAnchors != null) {
+            if (mfrmOptions == null) {
+                throw new ParameterException(spec.commandLine(), "--mfrm-anchors needs --mfrm-facets");
+            }
+            try (Reader r = open(mfrmAnchors)) {
+                anchors = AnchorFile.read(r, mfrmAnchors.toString());
+            } catch (IOException | IllegalArgumentException e) {
+                err.println("inkgate-admin analyse: the anchor file was refused; nothing was written:");
+                err.println("  " + e.getMessage().replace("\n", "\n  "));
+                return INPUT_REFUSED;
+            }
+        }
+        MfrmResult mfrmResult = null;
         if (mfrmOptions != null) {
-            Section mfrm = mfrmSection(data, mfrmOptions);
+            MfrmRun run = mfrmSection(data, mfrmOptions, anchors);
+            run.leftOut().forEach(x -> err.println("inkgate-admin analyse: warning: " + x));
+            mfrmResult = run.result();
+            Section mfrm = run.section();
             if (Boolean.FALSE.equals(mfrm.summary().get(MfrmSection.ID + ".available"))) {
                 err.println("inkgate-admin analyse: warning: the many-facet Rasch analysis was refused (the other"
                         + " sections are written as usual):");
@@ -303,7 +340,24 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
         Report report = StudyAnalysis.report(data, options, extra);
         try {
+            List<Section> sections = new ArrayList<>();
+            sections.add(AnalyseProvenance.section(examAnalysed, inputFiles(),
+                    spec.commandLine().getParseResult().originalArgs(), new InkgateAdmin.Version().getVersion()[0],
+                    Instant.now()));
+            sections.addAll(report.sections());
+            report = new Report(report.title(), report.preamble(), sections);
+        } catch (IOException e) {
+            err.println("inkgate-admin analyse: could not read an input again to record its SHA-256: " + e.getMessage());
+            return INPUT_REFUSED;
+        }
+        try {
             ReportWriter.write(report, out);
+            if (mfrmResult != null) {
+                // the anchors a later run reads with --mfrm-anchors to report on this run's scale
+                try (Writer w = Files.newBufferedWriter(out.resolve(AnchorFile.FILE_NAME), StandardCharsets.UTF_8)) {
+                    AnchorFile.write(mfrmResult, w);
+                }
+            }
         } catch (IOException e) {
             err.println("inkgate-admin analyse: could not write the report to " + out + ": " + e.getMessage());
             return OUTPUT_FAILED;
@@ -348,12 +402,14 @@ public final class AnalyseCommand implements Callable<Integer> {
                             + "; name one with --exam");
                     return null;
                 }
-                return exams.get(0);
+                examAnalysed = exams.get(0);
+                return examAnalysed;
             }
             if (!exams.contains(exam)) {
                 err.println("inkgate-admin analyse: the store holds no exam " + exam + "; it holds " + exams);
                 return null;
             }
+            examAnalysed = exam;
             return exam;
         } catch (StoreException e) {
             err.println("inkgate-admin analyse: could not read the results store " + store + ": " + e.getMessage());
@@ -400,6 +456,7 @@ public final class AnalyseCommand implements Callable<Integer> {
                 err.println("inkgate-admin analyse: the store holds no exam " + chosen + "; it holds " + exams);
                 return null;
             }
+            examAnalysed = chosen;
             return StoreStudyInput.read(s, chosen, declared(rosterAttributes));
         } catch (StoreException e) {
             err.println("inkgate-admin analyse: could not read the results store " + store + ": " + e.getMessage());
@@ -440,6 +497,7 @@ public final class AnalyseCommand implements Callable<Integer> {
                 }
                 b.bias(ab[0], ab[1]);
             }
+            b.biasEstimation(BiasEstimation.ofOption(mfrmBiasEstimation.trim()));
             return b.build();
         } catch (IllegalArgumentException e) {
             throw new ParameterException(spec.commandLine(), e.getMessage(), e);
@@ -476,8 +534,25 @@ public final class AnalyseCommand implements Callable<Integer> {
                 + " partial-credit:FACET (e.g. partial-credit:task)");
     }
 
+    /** Every input file given, by option, in a fixed order. */
+    private Map<String, Path> inputFiles() {
+        Map<String, Path> in = new java.util.LinkedHashMap<>();
+        Object[][] options = {{"--ratings", ratings}, {"--candidates", candidates}, {"--tool-usage", toolUsage},
+            {"--process", process}, {"--questionnaire", questionnaire}, {"--store", store}, {"--mfrm-anchors", mfrmAnchors}};
+        for (Object[] o : options) {
+            if (o[1] != null) {
+                in.put((String) o[0], (Path) o[1]);
+            }
+        }
+        return in;
+    }
+
+    /** The Rasch section, its result (null when refused) and the anchors that did not apply. */
+    private record MfrmRun(Section section, MfrmResult result, List<String> leftOut) {
+    }
+
     /** Runs the Rasch analysis on the ratings already read; a refusal becomes the section's text. */
-    private static Section mfrmSection(StudyData data, MfrmOptions o) {
+    private static MfrmRun mfrmSection(StudyData data, MfrmOptions o, AnchorFile.Anchors anchors) {
         Map<String, String> levels = new HashMap<>();
         Map<String, Map<String, String>> attributes = new HashMap<>();
         data.candidates().forEach(c -> {
@@ -496,6 +571,7 @@ public final class AnalyseCommand implements Callable<Integer> {
                 }
             }
         }
+        List<String> leftOut = new ArrayList<>();
         try {
             // the Wright map draws the candidates by level: the candidate table's level, else the ratings'
             Map<String, String> levelOf = new HashMap<>(levels);
@@ -505,9 +581,20 @@ public final class AnalyseCommand implements Callable<Integer> {
                     levelOf.put(r.candidate(), r.level());
                 }
             });
-            return MfrmSection.analyse(StudyRatings.of(data.ratings(), levels, attributes, columns), o, levelOf);
+            RatingData ratingData = StudyRatings.of(data.ratings(), levels, attributes, columns);
+            MfrmOptions options = o;
+            if (anchors != null) {
+                MfrmOptions.Builder b = o.toBuilder();
+                leftOut.addAll(anchors.applyTo(b, ratingData, o.facets(), o.structure()));
+                options = b.build();
+            }
+            MfrmResult result = ManyFacetRasch.analyse(ratingData, options);
+            return new MfrmRun(MfrmSection.of(result, levelOf), result, leftOut);
         } catch (MfrmRefusedException e) {
-            return MfrmSection.refused(e.reasons());
+            return new MfrmRun(MfrmSection.refused(e.reasons()), null, leftOut);
+        } catch (IllegalArgumentException e) {
+            // an anchor the ratings cannot take (e.g. thresholds for another number of categories)
+            return new MfrmRun(MfrmSection.refused(List.of(e.getMessage())), null, leftOut);
         }
     }
 

@@ -197,6 +197,8 @@ class AnalyseCommandTest {
         assertTrue(html.contains("<section id=\"mfrm\">"), "MFRM section present");
         assertTrue(html.contains("Wright map"));
         assertTrue(html.contains("Convergence: reached after"));
+        // issue 18: sizes with the main effects held fixed, both columns modelled: the report says so
+        assertTrue(html.contains("Applies to rater x task: both columns are modelled facets"), "absorption note");
         assertTrue(Files.exists(outDir.resolve("tables/mfrm_facets.csv")));
         assertTrue(Files.exists(outDir.resolve("tables/mfrm_elements_rater.csv")));
         assertTrue(Files.exists(outDir.resolve("tables/mfrm_bias_rater_task.csv")));
@@ -229,6 +231,39 @@ class AnalyseCommandTest {
         }
         assertEquals(16, compared, "4 tasks x 4 thresholds");
         assertTrue(Files.readString(outDir.resolve("report.html")).contains("F_k(task)"));
+        // joint SEs of the centred parametrisation (issue 18): survival::clogit over each rating's
+        // categories, SEs through the contrast matrices (mfrm_clogit_pcm.R, R 4.2.2, survival 3.5.3)
+        Map<String, Double> se = new HashMap<>();
+        List<String> clogit = resourceLines("mfrm_clogit_pcm.csv");
+        for (String line : clogit.subList(1, clogit.size())) {
+            String[] f = line.split(",");
+            se.put(f[0] + "/" + f[1], Double.parseDouble(f[f[0].equals("task_summary") ? 2 : 3]));
+        }
+        JsonNode task = s.get("mfrm.facets").get(1);
+        for (JsonNode e : task.get("elements")) {
+            assertEquals(se.get("task/" + e.get("label").asText()), e.get("jointSe").asDouble(), 1e-5, e.toString());
+        }
+        assertEquals(se.get("task_summary/separation"), task.get("summaryJointSe").get("separation").asDouble(), 1e-3);
+        // adjusted scores (issue 18): mfrm_adjusted_scores.R, expected scores from the VGAM fit (R 4.2.2)
+        Map<String, Double> adjusted = new HashMap<>();
+        List<String> adj = resourceLines("mfrm_adjusted_scores.csv");
+        for (String line : adj.subList(1, adj.size())) {
+            String[] f = line.split(",");
+            if (f[0].equals("partial_credit_task")) {
+                adjusted.put(f[1] + "/" + f[2], Double.parseDouble(f[3]));
+            }
+        }
+        int adjustedCompared = 0;
+        for (JsonNode facet : s.get("mfrm.facets")) {
+            for (JsonNode e : facet.get("elements")) {
+                String key = facet.get("name").asText() + "/" + e.get("label").asText();
+                assertEquals(adjusted.get(key), e.get("adjustedScore").asDouble(), 1e-3, key);
+                adjustedCompared++;
+            }
+        }
+        assertEquals(adjusted.size(), adjustedCompared);
+        assertTrue(Files.readAllLines(outDir.resolve("tables/mfrm_elements_task.csv")).get(0).contains("adjusted"),
+                "the adjusted score is a column of the elements' CSV");
     }
 
     @Test
@@ -290,6 +325,166 @@ class AnalyseCommandTest {
         assertTrue(err.toString().contains("is not COLUMN:COLUMN"), err.toString());
         assertEquals(2, run("--ratings", ratings.toString(), "--out", o, "--mfrm-bias", "rater:task"));
         assertFalse(Files.exists(dir.resolve("o")));
+    }
+
+    @Test
+    void analyse_candidateWithLevelOnSomeRowsAndEmptyOnOthers_isNotRefused(@TempDir Path dir) throws Exception {
+        // issue 18: invented rows, structure only. Each candidate's level is written on task a's
+        // rows and left empty on task b's; docs/analysis.md: an empty level is filled (here the
+        // candidate table agrees), so this is one level per candidate, not two.
+        StringBuilder r = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        StringBuilder c = new StringBuilder("candidate,level\n");
+        for (int i = 0; i < 16; i++) {
+            String level = i % 2 == 0 ? "low" : "high";
+            c.append('K').append(i).append(',').append(level).append('\n');
+            for (String task : new String[] {"a", "b"}) {
+                for (String rater : new String[] {"R1", "R2"}) {
+                    r.append('K').append(i).append(',').append(task.equals("a") ? level : "").append(",,").append(task)
+                            .append(',').append(i % 4 < 2 == task.equals("a") ? "none" : "tools").append(',')
+                            .append(rater).append(",ideas,").append((i + (task.equals("a") ? 0 : 2) + (rater.equals("R1") ? 0 : 1)) % 4)
+                            .append('\n');
+                }
+            }
+        }
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), r.toString());
+        Path candidates = Files.writeString(dir.resolve("candidates.csv"), c.toString());
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", ratings.toString(), "--candidates", candidates.toString(), "--out",
+                outDir.toString(), "--mfrm-facets", "task,rater", "--mfrm-bias", "rater:level"), err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        assertTrue(s.get("mfrm.available").asBoolean(), s.toString());
+        int lowRatings = 0;
+        for (JsonNode cell : s.get("mfrm.bias").get(0).get("cells")) {
+            if (cell.get("second").asText().equals("low")) {
+                lowRatings += cell.get("count").asInt();
+            }
+        }
+        assertEquals(8 * 4, lowRatings, "every rating of the 8 low candidates, with or without a level written");
+    }
+
+    @Test
+    void analyse_mfrmBiasEstimatedJointly_matchesConditionalLogitAndIsNamedInTheReport(@TempDir Path dir) throws Exception {
+        // mfrm_clogit_interaction.R (R 4.2.2, survival 3.5.3): each rater x task term with the main effects
+        StringBuilder b = new StringBuilder("candidate,level,form,task,condition,rater,criterion,score\n");
+        List<String> lines = resourceLines("mfrm_interaction_ratings.csv");
+        for (String line : lines.subList(1, lines.size())) {
+            String[] f = line.split(",");
+            b.append(f[0]).append(",,,").append(f[1]).append(",plain,").append(f[2]).append(",overall,").append(f[3])
+                    .append('\n');
+        }
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), b.toString());
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", outDir.toString(), "--mfrm-facets", "task,rater",
+                "--mfrm-bias", "rater:task", "--mfrm-bias-estimation", "joint"), err.toString());
+        JsonNode pair = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile()).get("mfrm.bias").get(0);
+        assertEquals("joint", pair.get("estimation").asText());
+        Map<String, JsonNode> cells = new HashMap<>();
+        for (JsonNode c : pair.get("cells")) {
+            cells.put(c.get("first").asText() + "/" + c.get("second").asText(), c);
+        }
+        List<String> ref = resourceLines("mfrm_clogit_interaction.csv");
+        for (String line : ref.subList(1, ref.size())) {
+            String[] f = line.split(",");
+            JsonNode c = cells.get(f[0] + "/" + f[1]);
+            assertEquals(Double.parseDouble(f[3]), c.get("size").asDouble(), 1e-4, line);
+            assertEquals(Double.parseDouble(f[4]), c.get("se").asDouble(), 1e-4, line);
+        }
+        String html = Files.readString(outDir.resolve("report.html"));
+        assertTrue(html.contains("jointly with the main effects"), "the estimation is named in the report");
+        assertEquals(2, run("--ratings", ratings.toString(), "--out", outDir.toString(), "--mfrm-facets", "task,rater",
+                "--mfrm-bias", "rater:task", "--mfrm-bias-estimation", "both"));
+        assertTrue(err.toString().contains("use fixed or joint"), err.toString());
+    }
+
+    @Test
+    void analyse_mfrmAnchors_equalConditionalLogitWithAnchorsFixed_andWriteTheNextAnchorFile(@TempDir Path dir)
+            throws Exception {
+        // mfrm_clogit_anchored.R (R 4.2.2, survival 3.5.3): tasks and thresholds fixed at mfrm_anchors.csv
+        Path ratings = referenceRatings(dir);
+        Path anchors = Files.write(dir.resolve("anchors.csv"), resourceLines("mfrm_anchors.csv"));
+        Path outDir = dir.resolve("out");
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", outDir.toString(), "--mfrm-facets", "task,rater",
+                "--mfrm-anchors", anchors.toString()), err.toString());
+        JsonNode s = new ObjectMapper().readTree(outDir.resolve("summary.json").toFile());
+        Map<String, Double> ref = new HashMap<>();
+        List<String> r = resourceLines("mfrm_clogit_anchored.csv");
+        for (String line : r.subList(1, r.size())) {
+            String[] f = line.split(",");
+            ref.put(f[0] + "/" + f[1], Double.parseDouble(f[2]));
+        }
+        int compared = 0;
+        for (JsonNode facet : s.get("mfrm.facets")) {
+            String name = facet.get("name").asText();
+            for (JsonNode e : facet.get("elements")) {
+                String label = e.get("label").asText();
+                if (name.equals("task")) {
+                    assertEquals("anchored", e.get("status").asText().toLowerCase(java.util.Locale.ROOT));
+                    assertEquals(ref.get("displacement/" + label), e.get("displacement").asDouble(), 1e-3, label);
+                    compared++;
+                } else if (e.get("status").asText().equalsIgnoreCase("estimated")) {
+                    assertEquals(ref.get(name + "/" + label), e.get("measure").asDouble(), 1e-3, name + " " + label);
+                    compared++;
+                }
+            }
+        }
+        assertTrue(compared > 100, "candidates, raters and the four tasks compared: " + compared);
+        assertTrue(Files.readString(outDir.resolve("report.html")).contains("Status anchored"));
+        // the anchor file this run wrote is read by the next: same scale, nothing displaced
+        Path written = outDir.resolve("mfrm_anchors.csv");
+        assertTrue(Files.readString(written).startsWith("kind,facet,element,step,score,measure"));
+        Path next = dir.resolve("next");
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", next.toString(), "--mfrm-facets", "task,rater",
+                "--mfrm-anchors", written.toString()), err.toString());
+        assertFalse(err.toString().contains("displaced"), err.toString());
+        // an anchor far from what these data say earns the displacement warning naming it
+        List<String> far = new java.util.ArrayList<>(resourceLines("mfrm_anchors.csv"));
+        far.replaceAll(x -> x.startsWith("element,task,t4,") ? "element,task,t4,,,2.5" : x);
+        Path farFile = Files.write(dir.resolve("far.csv"), far);
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", dir.resolve("far").toString(), "--mfrm-facets",
+                "task,rater", "--mfrm-anchors", farFile.toString()), err.toString());
+        JsonNode w = new ObjectMapper().readTree(dir.resolve("far/summary.json").toFile()).get("mfrm.warnings");
+        assertTrue(w.toString().contains("displaced by more than 0.5 logit") && w.toString().contains("task t4 -"),
+                w.toString());
+        // a bad anchor file is refused with its row and column, nothing written
+        Path bad = Files.writeString(dir.resolve("bad.csv"), "kind,facet,element,step,score,measure\nelement,task,t1,,,x\n");
+        assertEquals(1, run("--ratings", ratings.toString(), "--out", dir.resolve("bad").toString(), "--mfrm-facets",
+                "task,rater", "--mfrm-anchors", bad.toString()));
+        assertTrue(err.toString().contains("row 2, column measure"), err.toString());
+        assertFalse(Files.exists(dir.resolve("bad")));
+    }
+
+    @Test
+    void analyse_reportStartsWithProvenance_whoseCommandLineReproducesTheRun(@TempDir Path dir) throws Exception {
+        Path ratings = shroutFleissRatings(dir);
+        Path outDir = dir.resolve("report");
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", outDir.toString(), "--title", "Judges' ratings"),
+                err.toString());
+        ObjectMapper json = new ObjectMapper();
+        JsonNode s = json.readTree(outDir.resolve("summary.json").toFile());
+        // SHA-256 of the input as the system's sha256sum (GNU coreutils, FIPS 180-4) computes it
+        Process p = new ProcessBuilder("sha256sum", ratings.toString()).redirectErrorStream(true).start();
+        String sum = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8).split(" ")[0];
+        assertEquals(0, p.waitFor());
+        assertEquals(sum, s.get("provenance.inputs").get("--ratings").get("sha256").asText());
+        assertEquals(Files.size(ratings), s.get("provenance.inputs").get("--ratings").get("bytes").asLong());
+        assertTrue(s.get("provenance.exam").isNull(), "no store: the exam is not known");
+        // POSIX shell quoting of a single quote: 'Judges'\'' ratings'
+        assertTrue(s.get("provenance.command_line").asText().contains("--title 'Judges'\\'' ratings'"),
+                s.get("provenance.command_line").asText());
+        String html = Files.readString(outDir.resolve("report.html"));
+        assertTrue(html.indexOf("id=\"provenance\"") < html.indexOf("id=\"descriptives\""), "provenance comes first");
+        // the recorded arguments, run again, give the same figures; only the date and time differ
+        List<String> args = new java.util.ArrayList<>();
+        s.get("provenance.arguments").forEach(a -> args.add(a.asText()));
+        Files.move(outDir.resolve("summary.json"), dir.resolve("first.json"));
+        assertEquals(0, run(args.toArray(String[]::new)), err.toString());
+        com.fasterxml.jackson.databind.node.ObjectNode first = (com.fasterxml.jackson.databind.node.ObjectNode)
+                json.readTree(dir.resolve("first.json").toFile());
+        com.fasterxml.jackson.databind.node.ObjectNode again = (com.fasterxml.jackson.databind.node.ObjectNode)
+                json.readTree(outDir.resolve("summary.json").toFile());
+        first.remove("provenance.date_time_utc");
+        again.remove("provenance.date_time_utc");
+        assertEquals(first, again);
     }
 
     @Test

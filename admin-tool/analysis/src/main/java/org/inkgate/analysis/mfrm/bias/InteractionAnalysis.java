@@ -14,7 +14,10 @@ import org.inkgate.analysis.mfrm.estimation.CategoryModel;
  * Bias/interaction analysis (Linacre 1989, ch. on bias; METHODS.md): with every measure and
  * threshold anchored at its estimate, one extra term per combination of two columns is estimated
  * by Newton-Raphson on that combination's ratings. SE = 1/sqrt(information), t = size/SE,
- * df = ratings - 1, p two-sided from Student's t.
+ * df = ratings - 1, p two-sided from Student's t. With a {@link JointCellRefit} the size and SE of
+ * every non-extreme combination come instead from a refit with the main effects (issue 18); an
+ * extreme combination (all ratings at one end) keeps the held-fixed estimate at 0.5 inwards, since
+ * its joint term has no finite maximum.
  */
 public final class InteractionAnalysis {
     private static final int MAX_ITER = 100;
@@ -28,6 +31,15 @@ public final class InteractionAnalysis {
      */
     public static BiasPair analyse(ModelDesign d, double[][] measure, double[][] thresholds, String nameA,
                                    int[] codesA, String[] labelsA, String nameB, int[] codesB, String[] labelsB) {
+        return analyse(d, measure, thresholds, nameA, codesA, labelsA, nameB, codesB, labelsB, null);
+    }
+
+    /**
+     * @param joint refits each combination jointly with the main effects, or null to hold them fixed
+     */
+    public static BiasPair analyse(ModelDesign d, double[][] measure, double[][] thresholds, String nameA,
+                                   int[] codesA, String[] labelsA, String nameB, int[] codesB, String[] labelsB,
+                                   JointCellRefit joint) {
         int nObs = d.observationCount();
         int[] rows = d.rows();
         int nB = labelsB.length;
@@ -61,6 +73,8 @@ public final class InteractionAnalysis {
         double chi = 0;
         int df = 0;
         int significant = 0;
+        int notEstimable = 0;
+        int[] inCell = joint == null ? null : new int[nObs];
         for (int c = 0; c < nCells; c++) {
             int cnt = start[c + 1] - start[c];
             double obs = 0;
@@ -106,11 +120,20 @@ public final class InteractionAnalysis {
                 }
             }
             double se = 1 / Math.sqrt(info);
+            if (joint != null && !extreme) {
+                for (int n = 0; n < nObs; n++) {
+                    inCell[n] = cellOf[n] == c ? 1 : 0;
+                }
+                double[] fit = joint.fit(inCell);
+                b = fit == null ? Double.NaN : fit[0];
+                se = fit == null ? Double.NaN : fit[1];
+                notEstimable += fit == null ? 1 : 0;
+            }
             double t = b / se;
             int cellDf = cnt - 1;
             double pValue = cellDf >= 1 ? 2 * (1 - new TDistribution(null, cellDf).cumulativeProbability(Math.abs(t)))
                     : Double.NaN;
-            if (!extreme && cellDf >= 1) {
+            if (!extreme && cellDf >= 1 && !Double.isNaN(t)) {
                 chi += t * t;
                 df++;
                 if (pValue < 0.05) {
@@ -122,6 +145,7 @@ public final class InteractionAnalysis {
                     (obsRaw - expRaw0) / cnt, b, se, t, cellDf, pValue, extreme));
         }
         double pChi = df > 0 ? 1 - new ChiSquaredDistribution(null, df).cumulativeProbability(chi) : Double.NaN;
-        return new BiasPair(nameA, nameB, List.copyOf(cells), chi, df, pChi, significant);
+        return new BiasPair(nameA, nameB, List.copyOf(cells), chi, df, pChi, significant,
+                joint == null ? BiasEstimation.MAIN_EFFECTS_FIXED : BiasEstimation.JOINT, notEstimable);
     }
 }

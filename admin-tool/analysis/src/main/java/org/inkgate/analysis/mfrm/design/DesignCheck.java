@@ -79,11 +79,7 @@ public final class DesignCheck {
             int[] cols = facetColumns.get(f).stream().mapToInt(Integer::intValue).toArray();
             single[f] = Math.max(0, expectedRank(cols.length, facetAnchored[f]) - rank(a, cols));
             if (single[f] > 0) {
-                specific.add("facet '" + d.facetName(f) + "' cannot be separated from candidates" + context
-                        + " (rank deficiency " + single[f] + "): within each candidate its elements do not vary"
-                        + " enough, e.g. each candidate met only one " + d.facetName(f) + "; if '"
-                        + d.facetName(f) + "' describes candidates (such as a proficiency level), drop it from"
-                        + " the facets and use it as a grouping column in a bias pair, or anchor its elements");
+                specific.add(CandidateLinks.describe(d, f, anchored[f], single[f], context));
             }
         }
         for (int f = 1; f < nF; f++) {

@@ -1,6 +1,8 @@
 package org.inkgate.analysis.mfrm.estimation;
 
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import java.util.stream.IntStream;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
@@ -34,6 +36,8 @@ final class JointNewton {
     private final int threads;
 
     private final boolean[] isThreshold;
+    /** [facet] true when the facet has no anchored element, so the estimator centres it. */
+    private final boolean[] centred;
 
     /** Result of one iteration's gradient pass, with the reduced information matrix it solved. */
     record Step(double[] candidate, double[] columns, double maxResidual, double[][] reducedInformation) {
@@ -65,6 +69,13 @@ final class JointNewton {
             }
         }
         q = p;
+        centred = new boolean[nF];
+        for (int f = 1; f < nF; f++) {
+            centred[f] = true;
+            for (boolean a : anchored[f]) {
+                centred[f] &= !a;
+            }
+        }
         isThreshold = new boolean[q];
         for (int[] tc : thresholdColumn) {
             for (int k = 1; k < tc.length; k++) {
@@ -190,7 +201,7 @@ final class JointNewton {
 
     /**
      * Joint SEs of the non-candidate elements and thresholds from a step's reduced information
-     * matrix: its Moore-Penrose inverse is the covariance under the estimator's centring.
+     * matrix, as the covariance of the parametrisation reported: see {@link ConstrainedCovariance}.
      */
     JointSe jointSe(Step step) {
         double[][] out = new double[nF][];
@@ -206,8 +217,7 @@ final class JointNewton {
         if (q == 0) {
             return new JointSe(out, thr);
         }
-        var cov = new SingularValueDecomposition(new Array2DRowRealMatrix(step.reducedInformation(), false))
-                .getSolver().getInverse();
+        var cov = ConstrainedCovariance.of(step.reducedInformation(), constraints());
         for (int f = 1; f < nF; f++) {
             for (int e = 0; e < column[f].length; e++) {
                 if (column[f][e] >= 0) {
@@ -224,6 +234,36 @@ final class JointNewton {
             }
         }
         return new JointSe(out, thr);
+    }
+
+    /**
+     * The reported centring as rows over the step's columns: one per centred facet (its free
+     * elements sum to 0) and one per free threshold set (its thresholds sum to 0).
+     */
+    private List<double[]> constraints() {
+        List<double[]> rows = new ArrayList<>();
+        for (int f = 1; f < nF; f++) {
+            if (!centred[f]) {
+                continue;
+            }
+            double[] row = new double[q];
+            for (int c : column[f]) {
+                if (c >= 0) {
+                    row[c] = 1;
+                }
+            }
+            rows.add(row);
+        }
+        for (int[] tc : thresholdColumn) {
+            if (tc.length > 1 && tc[1] >= 0) {
+                double[] row = new double[q];
+                for (int k = 1; k < tc.length; k++) {
+                    row[tc[k]] = 1;
+                }
+                rows.add(row);
+            }
+        }
+        return rows;
     }
 
     /** Largest absolute value in a step. */
