@@ -44,6 +44,13 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     private static final TypeReference<TreeMap<String, Integer>> SCORES = new TypeReference<>() {
     };
 
+    /** True for an assignment (alias a) whose response the test owner settled by a resolution entry. */
+    private static final String SETTLED = "EXISTS(SELECT 1 FROM rating_flags sf JOIN resolution_entries se"
+            + " ON se.flag_id = sf.flag_id WHERE sf.sitting_id = a.sitting_id AND sf.task_id = a.task_id)";
+    private static final String SUBMITTED = "EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)";
+    /** Items a queue shows: a settled response leaves it, unless the rater had already rated it (kept as done). */
+    private static final String IN_QUEUE = "(NOT " + SETTLED + " OR " + SUBMITTED + ")";
+
     private final Connection c;
     private final String examId;
     private final ExamSource.Rubric rubric;
@@ -322,6 +329,27 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         return a;
     }
 
+    /**
+     * When the response behind a blind id was settled by a resolution entry, if it was: from then
+     * on its final score is the test owner's, so no rating for it is taken.
+     */
+    public synchronized Optional<String> settledAt(String blindId) throws RatingException {
+        return read("looking up " + blindId, () -> query("SELECT MAX(se.resolved_at) FROM rating_assignments a"
+                + " JOIN sittings s ON s.sitting_id = a.sitting_id JOIN rating_flags sf ON sf.sitting_id = a.sitting_id"
+                + " AND sf.task_id = a.task_id JOIN resolution_entries se ON se.flag_id = sf.flag_id"
+                + " WHERE a.blind_id=? AND s.exam_id=?", rs -> rs.getString(1), blindId, examId))
+                .stream().filter(java.util.Objects::nonNull).findFirst();
+    }
+
+    private void refuseIfSettled(String blindId) throws RatingException {
+        Optional<String> at = settledAt(blindId);
+        if (at.isPresent()) {
+            throw new RatingException("response " + blindId + " was settled by the test owner's resolution entry ("
+                    + at.get() + "); its final score is decided, so this rating is not taken and nothing was stored."
+                    + " Go on with the next response in the queue");
+        }
+    }
+
     private static RatingDesk.Kind kind(String stored) {
         return "adjudication".equals(stored) ? RatingDesk.Kind.ADJUDICATION : RatingDesk.Kind.RATING;
     }
@@ -351,7 +379,8 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         List<QueueItem> raw = read("reading the queue of " + raterId, () -> query("SELECT a.blind_id, a.task_id, a.kind,"
                 + " EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)"
                 + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
-                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
+                + " WHERE a.rater_id=? AND s.exam_id=? AND " + IN_QUEUE
+                + " ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
                 rs -> new QueueItem(0, rs.getString(1), rs.getString(2), kind(rs.getString(3)), rs.getInt(4) == 1),
                 raterId, examId));
         List<QueueItem> out = new ArrayList<>(raw.size());
@@ -401,6 +430,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     @Override
     public synchronized void saveDraft(String raterId, String blindId, RatingSheet sheet) throws RatingException {
         Assignment a = assignment(raterId, blindId);
+        refuseIfSettled(blindId);
         List<String> problems = check(sheet, false);
         if (!problems.isEmpty()) {
             throw new RatingException(blindId + ": " + String.join("; ", problems));
@@ -449,6 +479,14 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         Map<Assignment, RatingSheet> checked = new LinkedHashMap<>();
         for (Map.Entry<String, RatingSheet> e : sheets.entrySet()) {
             Assignment a = assignment(raterId, e.getKey());
+            RatingSheet sent = e.getValue();
+            boolean unchanged = read("reading the rating of " + e.getKey(), () -> latest(a.id())
+                    .filter(l -> l.scores().equals(new TreeMap<>(sent.scores())) && l.comment().equals(sent.comment()))
+                    .isPresent());
+            if (!unchanged) {
+                // the same rating sent again (a sheet imported twice) changes nothing and needs no refusal
+                refuseIfSettled(e.getKey());
+            }
             List<String> problems = check(e.getValue(), true);
             if (!problems.isEmpty()) {
                 throw new RatingException(e.getKey() + ": " + String.join("; ", problems) + ". Nothing was stored");
@@ -507,7 +545,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 + " SUM(EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)),"
                 + " SUM(EXISTS(SELECT 1 FROM rating_flags f WHERE f.sitting_id = a.sitting_id AND f.task_id = a.task_id))"
                 + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=?"
-                + " GROUP BY a.rater_id, a.task_id ORDER BY a.rater_id, a.task_id",
+                + " AND " + IN_QUEUE + " GROUP BY a.rater_id, a.task_id ORDER BY a.rater_id, a.task_id",
                 rs -> new ProgressRow(rs.getString(1), rs.getString(2), rs.getInt(3), rs.getInt(4), rs.getInt(3) - rs.getInt(4),
                         rs.getInt(5)), examId));
     }
