@@ -108,10 +108,18 @@ public final class CollectionRun {
             Map<String, BundleManifest> bundles = new HashMap<>();
             TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
             Map<String, String> signers = new HashMap<>();
+            Map<String, Map<String, String>> prompts = new HashMap<>();
             for (Path f : r.bundleFiles()) {
                 try (OpenedBundle b = new BundleReader(owner).open(f)) {
                     bundles.put(b.manifestSha256(), b.manifest());
                     signers.put(b.manifestSha256(), b.signerFingerprint());
+                    if (b.readable()) {
+                        // a sealed bundle's prompts stay closed here; --exam supplies them (below)
+                        Map<String, String> byTask = prompts.computeIfAbsent(b.manifest().examId(), k -> new HashMap<>());
+                        for (var t : b.manifest().tasks()) {
+                            byTask.put(t.id(), b.readText(t.promptFile()));
+                        }
+                    }
                 } catch (FormatRefusal refusal) {
                     throw new BundleRefusedException(f, refusal);
                 }
@@ -137,6 +145,15 @@ public final class CollectionRun {
                 for (String examId : examIds) {
                     store.registerRoster(examId, candidates);
                 }
+            }
+            if (r.exam() != null && examIds.contains(r.exam().examId())) {
+                Map<String, String> byTask = prompts.computeIfAbsent(r.exam().examId(), k -> new HashMap<>());
+                for (ExamSource.Task t : r.exam().tasks()) {
+                    byTask.putIfAbsent(t.id(), java.nio.file.Files.readString(r.exam().folder().resolve(t.promptFile())));
+                }
+            }
+            for (var e : prompts.entrySet()) {
+                store.registerPrompts(e.getKey(), e.getValue());
             }
             if (r.exam() != null && r.exam().rubric() != null) {
                 store.registerRubric(r.exam().examId(), r.exam().rubric());

@@ -31,6 +31,9 @@ public interface ResultsStore extends AutoCloseable {
     /** Records the exam's rubric (criteria and band descriptors); repeatable. */
     void registerRubric(String examId, ExamSource.Rubric rubric) throws StoreException;
 
+    /** Records each task's prompt (Markdown source as written) for raters; repeatable. */
+    void registerPrompts(String examId, Map<String, String> promptByTask) throws StoreException;
+
     boolean hasBundle(String manifestSha256) throws StoreException;
 
     /** The sitting imported from exactly these package bytes, if any. */
