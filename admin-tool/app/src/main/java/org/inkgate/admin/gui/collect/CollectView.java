@@ -34,9 +34,9 @@ public final class CollectView implements Step {
         Fields.row(grid, 0, "Package folders\n(one per line)", folders);
         Fields.pathRow(grid, 1, "collectBundle", "Bundle of the sitting", model.bundle(), Fields.Choose.OPEN_FILE);
         Fields.pathRow(grid, 2, "collectKeys", "Owner key folder", model.keys(), Fields.Choose.FOLDER);
-        Fields.pathRow(grid, 3, "collectAssignment", "Assignment table (checked against the bundle)", model.assignment(),
+        Fields.pathRow(grid, 3, "collectAssignment", "Assignment table", model.assignment(),
                 Fields.Choose.OPEN_FILE);
-        Fields.pathRow(grid, 4, "collectRoster", "Roster CSV (levels, personal fields)", model.roster(),
+        Fields.pathRow(grid, 4, "collectRoster", "Roster CSV", model.roster(),
                 Fields.Choose.OPEN_FILE);
         Fields.pathRow(grid, 5, "storeFile", "Results store", model.store(), Fields.Choose.SAVE_FILE);
         Fields.pathRow(grid, 6, "installations", "Enrolled installations", model.installations(), Fields.Choose.OPEN_FILE);
@@ -85,7 +85,9 @@ public final class CollectView implements Step {
 
         root = new VBox(14, Fields.heading("4. Collect"),
                 Fields.note("Imports every response package found into the results store, one transaction per package."
-                        + " Safe to run again: packages already imported change nothing."),
+                        + " Safe to run again: packages already imported change nothing. Name the bundle built for the"
+                        + " sitting (here or in step 3); the assignment table, if named, must be the one the bundle was"
+                        + " built from; the roster adds levels and personal fields to the store."),
                 grid, collect, counts, details, refused);
         root.getStyleClass().add("step");
     }
