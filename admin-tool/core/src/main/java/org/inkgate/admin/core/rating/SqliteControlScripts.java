@@ -72,6 +72,18 @@ public final class SqliteControlScripts implements ControlScripts {
                 List<String> raters = Sql.list(c, "SELECT rater_id FROM raters ORDER BY rater_id", rs -> rs.getString(1));
                 Set<String> taken = new HashSet<>(Sql.list(c, "SELECT blind_id FROM rating_assignments WHERE blind_id"
                         + " IS NOT NULL", rs -> rs.getString(1)));
+                for (Object[] control : controls) {
+                    // a control response must have its own raters first: a later assignment run could otherwise
+                    // hand it to a rater who already holds it as a control item
+                    if (Sql.list(c, "SELECT 1 FROM rating_assignments a WHERE a.sitting_id=? AND a.task_id=? AND "
+                            + SqliteRatingStore.NOT_CONTROL, rs -> 1, control[0], control[1]).isEmpty()) {
+                        String candidate = Sql.list(c, "SELECT candidate_number FROM sittings WHERE sitting_id=?",
+                                rs -> rs.getString(1), control[0]).get(0);
+                        throw new SQLException(new RatingException("the control script of candidate " + candidate
+                                + ", task " + control[1] + " has no raters of its own yet; run rate assign first, then"
+                                + " mix. Nothing was added"));
+                    }
+                }
                 String now = store.clock().instant().toString();
                 int added = 0;
                 for (Object[] control : controls) {
