@@ -43,6 +43,10 @@ final class FormsCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "CSV", description = "write the assignment table here")
     Path out;
 
+    @Option(names = "--replace", description = "replace an existing assignment table at --out (a bundle built from the"
+            + " old table would no longer match it)")
+    boolean replace;
+
     @Override
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
@@ -77,7 +81,12 @@ final class FormsCommand implements Callable<Integer> {
                 + " (the same seed and roster give the same assignment); candidates per level and form:");
         printCounts(w, a, forms);
         if (out != null) {
-            AssignmentTable.write(a, out);
+            try {
+                AssignmentTable.write(a, out, replace);
+            } catch (AssignmentTable.ExistsException e) {
+                spec.commandLine().getErr().println(e.getMessage());
+                return InkgateAdmin.PROBLEMS;
+            }
             w.println("Assignment table written to " + out + " (one row per candidate, with the seed).");
         } else {
             w.println();

@@ -15,9 +15,12 @@ import java.util.concurrent.Callable;
 import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingExport;
+import org.inkgate.admin.core.rating.RatingScripts;
+import org.inkgate.admin.core.rating.Referrals;
 import org.inkgate.admin.core.rating.RatingSheets;
 import org.inkgate.admin.core.rating.SqliteRatingStore;
 import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.format.refusal.FormatRefusal;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -38,7 +41,8 @@ import picocli.CommandLine.Spec;
                 + " settle disagreements and export ratings and final scores.",
         subcommands = {RateCommand.Raters.class, RateCommand.Assign.class, RateCommand.Progress.class,
             RateCommand.Sheet.class, RateCommand.Rule.class, RateCommand.Flags.class, RateCommand.Resolve.class,
-            RateCommand.Export.class, DeskCommand.class, CommandLine.HelpCommand.class})
+            RateCommand.Export.class, RateCommand.Refer.class, RateCommand.ReferralsGroup.class,
+            RateControlCommand.class, RateControlCommand.Monitor.class, DeskCommand.class, CommandLine.HelpCommand.class})
 final class RateCommand extends GroupCommand {
 
     /** --store and --exam, shared by every rating step. */
@@ -189,7 +193,9 @@ final class RateCommand extends GroupCommand {
     static final class Sheet extends GroupCommand {
 
         @Command(name = "export", mixinStandardHelpOptions = true,
-                description = "Write a rater's queue as a sheet: blind_id, task, one column per criterion, comment.")
+                description = {"Write a rater's queue as a sheet: blind_id, task, one column per criterion, comment;",
+                    "beside it, the folder SHEET-scripts with one text file per response (blind id only), the rubric"
+                    + " and an index."})
         static final class ExportSheet extends Step {
             @Option(names = "--rater", required = true, paramLabel = "ID", description = "whose queue")
             String rater;
@@ -211,7 +217,9 @@ final class RateCommand extends GroupCommand {
                 for (ExamSource.Criterion c : s.rubric().criteria()) {
                     out.println("  " + c.id() + " (" + c.name() + "): whole numbers " + c.minScore() + "-" + c.maxScore());
                 }
-                out.println("The sheet holds blind ids only; the response texts go to the rater separately.");
+                RatingScripts.Written scripts = RatingScripts.write(s, s.rubric(), rater, RatingScripts.folderFor(file));
+                out.println("The response texts (" + scripts.scripts() + " files), the rubric and an index are in "
+                        + scripts.folder() + ", under blind ids only: hand the sheet and this folder to the rater.");
                 return InkgateAdmin.OK;
             }
         }
@@ -291,6 +299,83 @@ final class RateCommand extends GroupCommand {
         }
     }
 
+    @Command(name = "refer", mixinStandardHelpOptions = true,
+            description = "Refer a script of a rater's queue to the test owner (for a sheet rater; desk raters use"
+                    + " the desk's Refer button): the text reveals who wrote it, suggests unallowed help, or is off task.")
+    static final class Refer extends Step {
+        @Option(names = "--rater", required = true, paramLabel = "ID", description = "who refers it")
+        String rater;
+
+        @Option(names = "--id", required = true, paramLabel = "BLIND-ID", description = "the script's blind id")
+        String blindId;
+
+        @Option(names = "--reason", required = true, paramLabel = "REASON",
+                description = "identity-revealed, unallowed-help, off-task or other")
+        String reason;
+
+        @Option(names = "--note", required = true, paramLabel = "TEXT", description = "what the rater saw")
+        String note;
+
+        @Override
+        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+            long id = s.refer(rater, blindId, Referrals.Reason.of(reason), note);
+            out.println("Referral " + id + " recorded for the test owner (rate referrals list).");
+            return InkgateAdmin.OK;
+        }
+    }
+
+    @Command(name = "referrals", mixinStandardHelpOptions = true,
+            description = "Scripts raters referred to the test owner: list them and record decisions.",
+            subcommands = {ReferralsGroup.ListReferrals.class, ReferralsGroup.Decide.class})
+    static final class ReferralsGroup extends GroupCommand {
+
+        @Command(name = "list", mixinStandardHelpOptions = true,
+                description = "List referrals with the candidate number (for the test owner only); exit 3 while any is open.")
+        static final class ListReferrals extends Step {
+            @Option(names = "--open", description = "only those without a decision")
+            boolean openOnly;
+
+            @Override
+            int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+                List<Referrals.Referral> list = s.referrals(openOnly);
+                out.println(list.size() + " referral(s):");
+                boolean open = false;
+                for (Referrals.Referral r : list) {
+                    // the note and decision are typed by people: shown with control characters escaped
+                    out.println("  referral " + r.id() + "  " + r.blindId() + "  task " + r.taskId() + "  candidate "
+                            + r.candidateNumber() + "  by rater " + r.raterId() + "  " + r.referredAt());
+                    out.println("      " + r.reason().word() + " (" + r.reason().meaning() + "): "
+                            + FormatRefusal.printable(r.note()));
+                    out.println("      " + (r.open() ? "OPEN: decide under your regulations (rate referrals decide)"
+                            : "decided by " + FormatRefusal.printable(r.decidedBy()) + " " + r.decidedAt() + ": "
+                            + FormatRefusal.printable(r.decision())));
+                    open |= r.open();
+                }
+                return open ? InkgateAdmin.ATTENTION : InkgateAdmin.OK;
+            }
+        }
+
+        @Command(name = "decide", mixinStandardHelpOptions = true,
+                description = "Record the test owner's decision on a referral (a later decision replaces it).")
+        static final class Decide extends Step {
+            @Option(names = "--referral", required = true, paramLabel = "N", description = "the number from the list")
+            long referral;
+
+            @Option(names = "--by", required = true, paramLabel = "NAME", description = "who decided")
+            String by;
+
+            @Option(names = "--decision", required = true, paramLabel = "TEXT", description = "what was decided")
+            String decision;
+
+            @Override
+            int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+                s.decide(referral, by, decision);
+                out.println("Referral " + referral + " decided.");
+                return InkgateAdmin.OK;
+            }
+        }
+    }
+
     @Command(name = "resolve", mixinStandardHelpOptions = true,
             description = "Settle a flagged response by a resolution entry (e.g. agreed in discussion); the raters'"
                     + " ratings are kept beside it.")
@@ -310,6 +395,16 @@ final class RateCommand extends GroupCommand {
 
         @Override
         int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+            s.resolve(flag, by, scores(spec, scores), comment);
+            out.println("Flag " + flag + " settled by resolution entry of " + by + ".");
+            return InkgateAdmin.OK;
+        }
+    }
+
+    /** CRITERION=SCORE pairs as typed after an option, or a usage error naming the bad one. */
+    static Map<String, Integer> scores(CommandSpec spec, List<String> scores) {
+        {
+            // picocli has already split the option's value at commas
             Map<String, Integer> parsed = new LinkedHashMap<>();
             for (String sc : scores) {
                 String[] kv = sc.split("=", 2);
@@ -318,13 +413,11 @@ final class RateCommand extends GroupCommand {
                         throw new NumberFormatException();
                     }
                 } catch (NumberFormatException e) {
-                    throw new CommandLine.ParameterException(spec.commandLine(), "--score '" + sc + "': give"
+                    throw new CommandLine.ParameterException(spec.commandLine(), "'" + sc + "': give"
                             + " CRITERION=WHOLE-NUMBER once per criterion, e.g. content=5");
                 }
             }
-            s.resolve(flag, by, parsed, comment);
-            out.println("Flag " + flag + " settled by resolution entry of " + by + ".");
-            return InkgateAdmin.OK;
+            return parsed;
         }
     }
 

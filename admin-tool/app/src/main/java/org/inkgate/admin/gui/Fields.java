@@ -122,6 +122,27 @@ public final class Fields {
         });
     }
 
+    /**
+     * Keeps a step's path field and the session's shared path in step: what one step names, the
+     * next step shows, and a path typed in a later step is carried back to the session.
+     */
+    public static void link(StringProperty field, javafx.beans.property.ObjectProperty<Path> shared) {
+        if (shared.get() != null) {
+            field.set(shared.get().toString());
+        }
+        shared.addListener((o, was, now) -> {
+            if (now != null && !now.equals(path(field.get()))) {
+                field.set(now.toString());
+            }
+        });
+        field.addListener((o, was, now) -> {
+            Path p = path(now);
+            if (p != null && !p.equals(shared.get())) {
+                shared.set(p);
+            }
+        });
+    }
+
     /** The path in a text field, or null when it is blank. */
     public static Path path(String text) {
         return text == null || text.isBlank() ? null : Path.of(text.strip());

@@ -47,7 +47,7 @@ public final class BundleModel {
                 out.set(session.besideExam(exam.examId() + ".inkexam").toString());
             }
         });
-        keys.addListener((o, was, now) -> session.keys().set(Fields.path(now)));
+        Fields.link(keys, session.keys());
     }
 
     public StringProperty keys() {

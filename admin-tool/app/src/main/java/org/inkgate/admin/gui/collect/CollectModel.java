@@ -14,6 +14,7 @@ import org.inkgate.admin.core.collection.CollectionRun;
 import org.inkgate.admin.core.collection.Outcome;
 import org.inkgate.admin.core.installations.InstallationList;
 import org.inkgate.admin.core.keys.OwnerKeyStore;
+import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
@@ -25,6 +26,10 @@ public final class CollectModel {
     private final AdminSession session;
     private final StringProperty folders = new SimpleStringProperty("");
     private final StringProperty store = new SimpleStringProperty("");
+    private final StringProperty bundle = new SimpleStringProperty("");
+    private final StringProperty keys = new SimpleStringProperty("");
+    private final StringProperty assignment = new SimpleStringProperty("");
+    private final StringProperty roster = new SimpleStringProperty("");
     private final StringProperty installations = new SimpleStringProperty("");
     private final BooleanProperty anyInstallation = new SimpleBooleanProperty(false);
     private final StringProperty passphrase = new SimpleStringProperty("");
@@ -34,11 +39,37 @@ public final class CollectModel {
 
     public CollectModel(AdminSession session) {
         this.session = session;
+        // step 4 works on its own (a bundle built last week or by the command line) and shares what it names
+        Fields.link(bundle, session.bundle());
+        Fields.link(keys, session.keys());
+        Fields.link(assignment, session.assignment());
+        Fields.link(roster, session.roster());
+        Fields.link(store, session.store());
         session.exam().addListener((o, was, exam) -> {
             if (exam != null && store.get().isBlank()) {
-                store.set(session.besideExam("results.sqlite").toString());
+                store.set(session.besideExam(ResultsStore.DEFAULT_FILE_NAME).toString());
             }
         });
+    }
+
+    /** The sitting's bundle file, as built in step 3 or named here. */
+    public StringProperty bundle() {
+        return bundle;
+    }
+
+    /** The owner key folder. */
+    public StringProperty keys() {
+        return keys;
+    }
+
+    /** The assignment table the bundle was built from (checked against the bundle), or blank. */
+    public StringProperty assignment() {
+        return assignment;
+    }
+
+    /** The roster CSV (levels and personal fields for the store), or blank. */
+    public StringProperty roster() {
+        return roster;
     }
 
     /** Folders or .inkresp files, one per line. */
@@ -79,8 +110,8 @@ public final class CollectModel {
         List<Path> roots = Arrays.stream(folders.get().split("\\R")).map(String::strip).filter(s -> !s.isEmpty())
                 .map(Path::of).toList();
         Path storeFile = Fields.path(store.get());
-        Path bundle = session.bundle().get();
-        Path keys = session.keys().get();
+        Path bundle = Fields.path(this.bundle.get());
+        Path keys = Fields.path(this.keys.get());
         Path installationsFile = Fields.path(installations.get());
         refused.clear();
         details.set("");
@@ -89,7 +120,7 @@ public final class CollectModel {
             return;
         }
         if (bundle == null || keys == null) {
-            counts.set("Build or name the bundle and the owner key folder first (step 3).");
+            counts.set("Name the sitting's bundle file and the owner key folder (or build the bundle in step 3).");
             return;
         }
         if (!anyInstallation.get() && installationsFile == null) {
@@ -100,8 +131,8 @@ public final class CollectModel {
         char[] pass = passphrase.get().toCharArray();
         passphrase.set("");
         var exam = session.exam().get();
-        Path roster = session.roster().get();
-        Path assignment = session.assignment().get();
+        Path roster = Fields.path(this.roster.get());
+        Path assignment = Fields.path(this.assignment.get());
         counts.set("Collecting ...");
         AtomicLong total = new AtomicLong();
         AtomicLong settled = new AtomicLong();
@@ -126,6 +157,10 @@ public final class CollectModel {
         }, report -> {
             session.store().set(storeFile);
             show(report, any);
+            if (exam == null) {
+                details.set((details.get() + "\nNo rubric was recorded: check the exam folder in step 1 and collect"
+                        + " again to add it (nothing is imported twice).").strip());
+            }
         }, message -> counts.set("The collection stopped.\n" + message));
     }
 

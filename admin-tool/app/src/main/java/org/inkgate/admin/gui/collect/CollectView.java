@@ -32,18 +32,24 @@ public final class CollectView implements Step {
         folders.setAccessibleText("Folders or response package files, one per line");
         folders.textProperty().bindBidirectional(model.folders());
         Fields.row(grid, 0, "Package folders\n(one per line)", folders);
-        Fields.pathRow(grid, 1, "storeFile", "Results store", model.store(), Fields.Choose.SAVE_FILE);
-        Fields.pathRow(grid, 2, "installations", "Enrolled installations", model.installations(), Fields.Choose.OPEN_FILE);
+        Fields.pathRow(grid, 1, "collectBundle", "Bundle of the sitting", model.bundle(), Fields.Choose.OPEN_FILE);
+        Fields.pathRow(grid, 2, "collectKeys", "Owner key folder", model.keys(), Fields.Choose.FOLDER);
+        Fields.pathRow(grid, 3, "collectAssignment", "Assignment table", model.assignment(),
+                Fields.Choose.OPEN_FILE);
+        Fields.pathRow(grid, 4, "collectRoster", "Roster CSV", model.roster(),
+                Fields.Choose.OPEN_FILE);
+        Fields.pathRow(grid, 5, "storeFile", "Results store", model.store(), Fields.Choose.SAVE_FILE);
+        Fields.pathRow(grid, 6, "installations", "Enrolled installations", model.installations(), Fields.Choose.OPEN_FILE);
         CheckBox any = new CheckBox("Accept any installation (list each package's installation to compare with seat records)");
         any.setId("anyInstallation");
         any.selectedProperty().bindBidirectional(model.anyInstallation());
-        grid.add(any, 1, 3);
+        grid.add(any, 1, 7);
         PasswordField pass = new PasswordField();
         pass.setId("collectPassphrase");
         pass.setAccessibleText("Key passphrase");
         pass.setMaxWidth(320);
         pass.textProperty().bindBidirectional(model.passphrase());
-        Fields.row(grid, 4, "Key passphrase", pass);
+        Fields.row(grid, 8, "Key passphrase", pass);
 
         Button collect = new Button("Collect");
         collect.setId("collect");
@@ -79,7 +85,9 @@ public final class CollectView implements Step {
 
         root = new VBox(14, Fields.heading("4. Collect"),
                 Fields.note("Imports every response package found into the results store, one transaction per package."
-                        + " Safe to run again: packages already imported change nothing."),
+                        + " Safe to run again: packages already imported change nothing. Name the bundle built for the"
+                        + " sitting (here or in step 3); the assignment table, if named, must be the one the bundle was"
+                        + " built from; the roster adds levels and personal fields to the store."),
                 grid, collect, counts, details, refused);
         root.getStyleClass().add("step");
     }

@@ -3,7 +3,9 @@ package org.inkgate.admin.gui.forms;
 import java.nio.file.Path;
 import java.security.SecureRandom;
 import java.util.List;
+import javafx.beans.property.BooleanProperty;
 import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
@@ -34,6 +36,7 @@ public final class FormsModel {
     private final StringProperty roster = new SimpleStringProperty("");
     private final StringProperty seed = new SimpleStringProperty("");
     private final StringProperty out = new SimpleStringProperty("");
+    private final BooleanProperty replace = new SimpleBooleanProperty(false);
     private final StringProperty formsText = new SimpleStringProperty("");
     private final StringProperty result = new SimpleStringProperty("");
     private final ObjectProperty<AssignmentCounts> counts = new SimpleObjectProperty<>();
@@ -55,6 +58,11 @@ public final class FormsModel {
 
     public StringProperty out() {
         return out;
+    }
+
+    /** The test owner's explicit choice to replace an existing table at {@link #out()}; cleared after each use. */
+    public BooleanProperty replace() {
+        return replace;
     }
 
     public StringProperty formsText() {
@@ -133,7 +141,14 @@ public final class FormsModel {
                     FormDesigner.blockSize(exam), usedSeed);
             Path table = Fields.path(out.get());
             if (table != null) {
-                AssignmentTable.write(a, table);
+                try {
+                    AssignmentTable.write(a, table, replace.get());
+                } catch (AssignmentTable.ExistsException e) {
+                    result.set(e.getMessage() + "\nNothing was saved; the seed drawn now was " + usedSeed + ".");
+                    return;
+                } finally {
+                    replace.set(false);
+                }
                 session.assignment().set(table);
             }
             session.roster().set(rosterFile);

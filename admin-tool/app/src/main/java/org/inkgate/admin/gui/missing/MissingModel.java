@@ -23,11 +23,7 @@ public final class MissingModel {
     private final StringProperty report = new SimpleStringProperty("");
 
     public MissingModel(AdminSession session) {
-        session.store().addListener((o, was, now) -> {
-            if (now != null) {
-                store.set(now.toString());
-            }
-        });
+        Fields.link(store, session.store());
     }
 
     public StringProperty store() {

@@ -27,6 +27,7 @@ import org.inkgate.admin.core.rating.RatingDesk.QueueItem;
 import org.inkgate.admin.core.rating.RatingDesk.Rater;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
 import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.Referrals;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.gui.Messages;
 
@@ -91,6 +92,8 @@ public final class DeskModel implements AutoCloseable {
     private final ObjectProperty<BlindResponse> response = new SimpleObjectProperty<>();
     private final ObservableList<CriterionScore> scores = FXCollections.observableArrayList();
     private final StringProperty comment = new SimpleStringProperty("");
+    private final ObjectProperty<Referrals.Reason> referReason = new SimpleObjectProperty<>();
+    private final StringProperty referNote = new SimpleStringProperty("");
     private final ObjectProperty<Progress> progress = new SimpleObjectProperty<>();
     private final StringProperty status = new SimpleStringProperty("");
     private final StringProperty problem = new SimpleStringProperty("");
@@ -266,6 +269,41 @@ public final class DeskModel implements AutoCloseable {
             openNextAfter(item.position());
         }, this::failed);
         return Optional.empty();
+    }
+
+    /** The reason chosen for referring the open script; null until chosen. */
+    public ObjectProperty<Referrals.Reason> referReason() {
+        return referReason;
+    }
+
+    /** What the rater saw, sent with a referral. */
+    public StringProperty referNote() {
+        return referNote;
+    }
+
+    /**
+     * Refers the open script to the test owner with the chosen reason and note. The script stays
+     * in the queue: the test owner decides what follows, and the rater may still rate it.
+     */
+    public void refer() {
+        Rater who = rater.get();
+        QueueItem item = current.get();
+        Referrals.Reason reason = referReason.get();
+        String note = referNote.get() == null ? "" : referNote.get().strip();
+        if (who == null || item == null) {
+            return;
+        }
+        if (reason == null || note.isEmpty()) {
+            problem.set("Not referred yet: choose a reason and say in the note what you saw.");
+            return;
+        }
+        problem.set("");
+        calls.run(() -> desk.refer(who.id(), item.blindId(), reason, note), id -> {
+            referReason.set(null);
+            referNote.set("");
+            status.set("Response " + item.blindId() + " referred to the test owner (referral " + id + ", "
+                    + reason.word() + ") at " + LocalTime.now().format(CLOCK) + ". You may still rate it.");
+        }, this::failed);
     }
 
     /** Waits for queued drafts to reach the store, then stops the background thread. */

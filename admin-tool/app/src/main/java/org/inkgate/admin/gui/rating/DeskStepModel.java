@@ -22,11 +22,7 @@ public final class DeskStepModel {
 
     public DeskStepModel(AdminSession session) {
         this.session = session;
-        session.store().addListener((o, was, now) -> {
-            if (now != null) {
-                store.set(now.toString());
-            }
-        });
+        Fields.link(store, session.store());
     }
 
     public StringProperty store() {

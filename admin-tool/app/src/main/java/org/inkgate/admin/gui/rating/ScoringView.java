@@ -13,6 +13,8 @@ import javafx.scene.control.ProgressBar;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextArea;
 import javafx.scene.control.TextField;
+import javafx.scene.control.TitledPane;
+import javafx.scene.control.Tooltip;
 import javafx.scene.input.KeyCode;
 import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
@@ -116,9 +118,14 @@ final class ScoringView {
                 getStyleClass().removeAll("queue-done", "queue-adjudication");
                 if (empty || item == null) {
                     setText(null);
+                    setTooltip(null);
                     return;
                 }
                 setText(queueText(item));
+                // long task ids wrap inside the narrow list, and the whole entry is in the tooltip
+                setWrapText(true);
+                setPrefWidth(0);
+                setTooltip(new Tooltip(queueText(item).replace("\n      ", "\n")));
                 if (item.done()) {
                     getStyleClass().add("queue-done");
                 }
@@ -215,7 +222,11 @@ final class ScoringView {
         length.textProperty().bind(Bindings.createStringBinding(() -> model.response().get() == null ? ""
                 : "Length: " + words(model.response().get().text()) + " words (counted the same way for every"
                         + " response)", model.response()));
-        VBox item = new VBox(10, new VBox(2, heading, sub), kind, responseText, length);
+        sub.setWrapText(true);
+        Tooltip fullTask = new Tooltip();
+        fullTask.textProperty().bind(sub.textProperty());
+        sub.setTooltip(fullTask);
+        VBox item = new VBox(10, new VBox(2, heading, sub), kind, promptPane(), responseText, length);
         item.getStyleClass().add("response-pane");
         item.visibleProperty().bind(model.current().isNotNull());
 
@@ -237,6 +248,27 @@ final class ScoringView {
         finished.setMaxHeight(Region.USE_PREF_SIZE);
         finished.visibleProperty().bind(model.finished());
         return new StackPane(item, finished);
+    }
+
+    /** The task's prompt above the script, folded away by the rater when not needed. */
+    private Node promptPane() {
+        TextArea prompt = new TextArea();
+        prompt.setId("taskPrompt");
+        prompt.setEditable(false);
+        prompt.setWrapText(true);
+        prompt.setPrefRowCount(5);
+        prompt.setAccessibleText("Task prompt, read only");
+        prompt.getStyleClass().add("task-prompt");
+        prompt.textProperty().bind(Bindings.createStringBinding(() -> {
+            RatingDesk.BlindResponse r = model.response().get();
+            return r == null ? "" : r.prompt().isBlank() ? "The results store holds no prompt for this task: collect"
+                    + " again with the exam source or the unsealed bundle to add it." : r.prompt();
+        }, model.response()));
+        prompt.setContextMenu(new javafx.scene.control.ContextMenu());
+        TitledPane pane = new TitledPane("Task prompt", prompt);
+        pane.setId("promptPane");
+        pane.setAccessibleText("Task prompt");
+        return pane;
     }
 
     static int words(String text) {
@@ -295,7 +327,7 @@ final class ScoringView {
         status.getStyleClass().add("desk-status");
         status.textProperty().bind(model.status());
 
-        VBox box = new VBox(14, heading, how, criteria, commentLabel, comment, doneNote);
+        VBox box = new VBox(14, heading, how, criteria, commentLabel, comment, doneNote, ReferPane.of(model));
         box.getStyleClass().add("rubric-pane");
         rubricScroll.setContent(box);
         ScrollPane scroll = rubricScroll;

@@ -77,6 +77,11 @@ class DeskWindowTest {
                         "To whom it may concern, the ferry timetable is a problem for my family because the"
                                 + " school boat leaves before the bus arrives.",
                         "H1004", "B2", "F04", "with-resources"));
+        // the demo's own prompt files (src/demo/exam-source/prompts)
+        ExamSource demo = ExamSourceReader.read(DemoSource.DEMO.resolve("exam-source"));
+        for (ExamSource.Task t : demo.tasks()) {
+            desk.prompt(t.id(), java.nio.file.Files.readString(demo.folder().resolve(t.promptFile())));
+        }
         desk.assign("rater-a", "R-K7P2", Kind.RATING).assign("rater-a", "R-M3X9", Kind.RATING)
                 .assign("rater-a", "R-Q8D4", Kind.RATING);
         desk.assign("rater-b", "R-M3X9", Kind.RATING).assign("rater-b", "R-V5N1", Kind.ADJUDICATION);

@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Optional;
 import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.Referrals;
 import org.inkgate.admin.core.source.ExamSource;
 
 /**
@@ -32,6 +33,7 @@ final class InMemoryRatingDesk implements RatingDesk {
     private final Map<String, RatingSheet> drafts = new LinkedHashMap<>();
     private final Map<String, RatingSheet> submitted = new LinkedHashMap<>();
     private final List<String> history = new ArrayList<>();
+    private final Map<String, String> prompts = new LinkedHashMap<>();
     private final ExamSource.Rubric rubric;
     private int draftWrites;
 
@@ -47,6 +49,11 @@ final class InMemoryRatingDesk implements RatingDesk {
 
     synchronized InMemoryRatingDesk response(Hidden response) {
         responses.put(response.blindId(), response);
+        return this;
+    }
+
+    synchronized InMemoryRatingDesk prompt(String taskId, String prompt) {
+        prompts.put(taskId, prompt);
         return this;
     }
 
@@ -96,7 +103,7 @@ final class InMemoryRatingDesk implements RatingDesk {
     public synchronized BlindResponse response(String raterId, String blindId) throws RatingException {
         inQueue(raterId, blindId);
         Hidden h = responses.get(blindId);
-        return new BlindResponse(h.blindId(), h.taskId(), h.taskTitle(), h.text());
+        return new BlindResponse(h.blindId(), h.taskId(), h.taskTitle(), h.text(), prompts.get(h.taskId()));
     }
 
     @Override
@@ -137,6 +144,17 @@ final class InMemoryRatingDesk implements RatingDesk {
         submitted.put(k, sheet);
         drafts.remove(k);
         history.add(raterId + " " + blindId + " " + sheet.scores());
+    }
+
+    /** Referrals sent: rater, blind id, reason word and note. */
+    final List<String> referrals = new ArrayList<>();
+
+    @Override
+    public synchronized long refer(String raterId, String blindId, Referrals.Reason reason, String note)
+            throws RatingException {
+        inQueue(raterId, blindId);
+        referrals.add(raterId + " " + blindId + " " + reason.word() + " " + note);
+        return referrals.size();
     }
 
     @Override

@@ -12,7 +12,9 @@ import java.util.Set;
 import java.util.TreeMap;
 import java.util.function.Consumer;
 import java.util.function.IntConsumer;
+import org.inkgate.admin.core.forms.Assignment;
 import org.inkgate.admin.core.forms.AssignmentTable;
+import org.inkgate.admin.core.source.Problem;
 import org.inkgate.admin.core.roster.RosterReader;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.InvalidSourceException;
@@ -105,13 +107,37 @@ public final class CollectionRun {
         try (ResultsStore store = SqliteResultsStore.open(r.storeFile())) {
             Map<String, BundleManifest> bundles = new HashMap<>();
             TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
+            Map<String, String> signers = new HashMap<>();
+            Map<String, Map<String, String>> prompts = new HashMap<>();
             for (Path f : r.bundleFiles()) {
                 try (OpenedBundle b = new BundleReader(owner).open(f)) {
-                    store.registerBundle(b.manifest(), b.manifestSha256(), b.signerFingerprint());
                     bundles.put(b.manifestSha256(), b.manifest());
+                    signers.put(b.manifestSha256(), b.signerFingerprint());
+                    if (b.readable()) {
+                        // a sealed bundle's prompts stay closed here; --exam supplies them (below)
+                        Map<String, String> byTask = prompts.computeIfAbsent(b.manifest().examId(), k -> new HashMap<>());
+                        for (var t : b.manifest().tasks()) {
+                            byTask.put(t.id(), b.readText(t.promptFile()));
+                        }
+                    }
                 } catch (FormatRefusal refusal) {
                     throw new BundleRefusedException(f, refusal);
                 }
+            }
+            Assignment assignment = r.assignment() == null ? null : AssignmentTable.read(r.assignment());
+            if (assignment != null) {
+                // before anything is written: a table other than the bundle's would record the wrong forms and seed
+                for (BundleManifest m : bundles.values()) {
+                    List<Problem> wrong = AssignmentTable.mismatches(assignment, r.assignment(), m.roster());
+                    if (!wrong.isEmpty()) {
+                        throw new InvalidSourceException("the assignment " + r.assignment() + " is not the one the bundle"
+                                + " of " + m.examId() + " was built from (nothing was collected; name the table the bundle"
+                                + " was built with)", wrong);
+                    }
+                }
+            }
+            for (var e : bundles.entrySet()) {
+                store.registerBundle(e.getValue(), e.getKey(), signers.get(e.getKey()));
             }
             List<String> examIds = bundles.values().stream().map(BundleManifest::examId).distinct().sorted().toList();
             if (r.roster() != null) {
@@ -120,11 +146,20 @@ public final class CollectionRun {
                     store.registerRoster(examId, candidates);
                 }
             }
+            if (r.exam() != null && examIds.contains(r.exam().examId())) {
+                Map<String, String> byTask = prompts.computeIfAbsent(r.exam().examId(), k -> new HashMap<>());
+                for (ExamSource.Task t : r.exam().tasks()) {
+                    byTask.putIfAbsent(t.id(), java.nio.file.Files.readString(r.exam().folder().resolve(t.promptFile())));
+                }
+            }
+            for (var e : prompts.entrySet()) {
+                store.registerPrompts(e.getKey(), e.getValue());
+            }
             if (r.exam() != null && r.exam().rubric() != null) {
                 store.registerRubric(r.exam().examId(), r.exam().rubric());
             }
-            if (r.assignment() != null) {
-                long seed = AssignmentTable.read(r.assignment()).seed();
+            if (assignment != null) {
+                long seed = assignment.seed();
                 for (BundleManifest m : bundles.values()) {
                     store.recordAssignmentRun(m.examId(), seed, "assignment table " + r.assignment().getFileName());
                 }

@@ -35,9 +35,64 @@ public final class AssignmentTable {
         return out.toString();
     }
 
-    public static void write(Assignment a, Path file) throws IOException {
+    /**
+     * Writes a new table. An existing table with other contents is kept unless {@code replace}: a
+     * bundle may already have been built from it, and a silently redrawn table would make later
+     * steps record the wrong forms.
+     */
+    public static void write(Assignment a, Path file, boolean replace) throws IOException, ExistsException {
         byte[] bytes = csv(a).getBytes(StandardCharsets.UTF_8);
+        if (!replace && java.nio.file.Files.exists(file)
+                && !java.util.Arrays.equals(bytes, java.nio.file.Files.readAllBytes(file))) {
+            throw new ExistsException(file, describe(file));
+        }
         AtomicFiles.write(file, out -> out.write(bytes));
+    }
+
+    private static String describe(Path file) {
+        try {
+            Assignment old = read(file);
+            return "seed " + old.seed() + ", " + old.rows().size() + " candidates";
+        } catch (InvalidSourceException | IOException | RuntimeException e) {
+            return "not a readable assignment table";
+        }
+    }
+
+    /** An assignment table is already at the file named, with other contents; nothing was written. */
+    public static final class ExistsException extends Exception {
+        private static final long serialVersionUID = 1L;
+
+        ExistsException(Path file, String what) {
+            super("The assignment table " + file + " already exists (" + what + ") and was kept: a bundle built from it"
+                    + " would no longer match. Name another file, or choose to replace it explicitly (the forms command's"
+                    + " --replace, or \"Replace an existing table\" in the admin window).");
+        }
+    }
+
+    /**
+     * Checks that {@code table} is the assignment the bundle was built from: the bundle's roster
+     * carries each candidate's form, so every candidate must sit the same form in both.
+     */
+    public static List<Problem> mismatches(Assignment table, Path tableFile,
+            List<org.inkgate.format.bundle.RosterEntry> bundleRoster) {
+        String name = tableFile.getFileName().toString();
+        java.util.Map<String, String> inTable = table.formByCandidate();
+        List<Problem> problems = new ArrayList<>();
+        for (org.inkgate.format.bundle.RosterEntry e : bundleRoster) {
+            String form = inTable.get(e.candidateNumber());
+            if (form == null) {
+                problems.add(new Problem(name, 0, 0, e.candidateNumber(), "candidate " + e.candidateNumber()
+                        + " is in the bundle (form " + e.formId() + ") but not in this table"));
+            } else if (!form.equals(e.formId())) {
+                problems.add(new Problem(name, 0, 0, e.candidateNumber(), "candidate " + e.candidateNumber()
+                        + " sits form " + e.formId() + " in the bundle but " + form + " in this table"));
+            }
+        }
+        java.util.Set<String> inBundle = new java.util.HashSet<>();
+        bundleRoster.forEach(e -> inBundle.add(e.candidateNumber()));
+        inTable.keySet().stream().filter(n -> !inBundle.contains(n)).forEach(n -> problems.add(new Problem(name, 0, 0, n,
+                "candidate " + n + " is in this table but not on the bundle's roster")));
+        return problems;
     }
 
     public static Assignment read(Path file) throws InvalidSourceException, IOException {

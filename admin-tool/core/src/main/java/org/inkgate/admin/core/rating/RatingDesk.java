@@ -36,8 +36,14 @@ public interface RatingDesk {
     record QueueItem(int position, String blindId, String taskId, Kind kind, boolean done) {
     }
 
-    /** A response as a rater sees it: plain text, nothing else. */
-    record BlindResponse(String blindId, String taskId, String taskTitle, String text) {
+    /**
+     * A response as a rater sees it: plain text, with the task it answers (title and prompt, the
+     * prompt empty when the store has none), nothing else.
+     */
+    record BlindResponse(String blindId, String taskId, String taskTitle, String text, String prompt) {
+        public BlindResponse {
+            prompt = prompt == null ? "" : prompt;
+        }
     }
 
     /** Scores per criterion id (criteria not yet scored are absent) and a free comment. */
@@ -76,6 +82,12 @@ public interface RatingDesk {
      * one in the history.
      */
     void submit(String raterId, String blindId, RatingSheet sheet) throws RatingException;
+
+    /**
+     * Refers a script of the rater's queue to the test owner ({@link Referrals}); the note says
+     * what the rater saw. Returns the referral number. The script stays in the queue.
+     */
+    long refer(String raterId, String blindId, Referrals.Reason reason, String note) throws RatingException;
 
     /** The rater's progress. */
     Progress progress(String raterId) throws RatingException;

@@ -134,6 +134,20 @@ public final class RatingSheets {
                 problems.add(new Problem(file, line, "blind_id", "is empty; every row needs the id it was exported with"));
                 continue;
             }
+            Optional<String> settled = BlindIds.looksLikeId(id) && store.raterOf(id).filter(raterId::equals).isPresent()
+                    ? store.settledAt(id) : Optional.empty();
+            boolean blankRow = rubric.criteria().stream().allMatch(c -> f.get(col.get(c.id())).isBlank())
+                    && (!col.containsKey("comment") || f.get(col.get("comment")).isBlank());
+            if (settled.isPresent() && !blankRow && !store.submitted(raterId, id).isPresent()) {
+                problems.add(new Problem(file, line, "blind_id", id + " was settled by the test owner's resolution entry ("
+                        + settled.get() + ") and has left the queue; its rating is not taken. Clear this row's scores"
+                        + " and comment, or delete the row"));
+                continue;
+            }
+            if (settled.isPresent() && blankRow) {
+                blank++;
+                continue;
+            }
             if (!taskOf.containsKey(id)) {
                 Optional<String> owner = BlindIds.looksLikeId(id) ? store.raterOf(id) : Optional.empty();
                 problems.add(new Problem(file, line, "blind_id", owner.isPresent()

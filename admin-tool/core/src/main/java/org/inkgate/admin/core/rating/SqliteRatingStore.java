@@ -38,11 +38,23 @@ import org.sqlite.SQLiteConfig;
  * when; the current rating of an assignment is its latest submission. Public methods are
  * synchronized: one connection serves one call at a time, whichever thread it comes from.
  */
-public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
+public final class SqliteRatingStore implements RatingDesk, Referrals, AutoCloseable {
 
     private static final ObjectMapper JSON = new ObjectMapper();
     private static final TypeReference<TreeMap<String, Integer>> SCORES = new TypeReference<>() {
     };
+
+    /** True for an assignment (alias a) whose response the test owner settled by a resolution entry. */
+    private static final String SETTLED = "EXISTS(SELECT 1 FROM rating_flags sf JOIN resolution_entries se"
+            + " ON se.flag_id = sf.flag_id WHERE sf.sitting_id = a.sitting_id AND sf.task_id = a.task_id)";
+    private static final String SUBMITTED = "EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)";
+    /** Items a queue shows: a settled response leaves it, unless the rater had already rated it (kept as done). */
+    /**
+     * True for a real rating assignment (alias a): not a control script mixed into a queue. Control
+     * ratings measure the rater; they never enter a candidate's flags, final scores or exports.
+     */
+    static final String NOT_CONTROL = "a.assignment_id NOT IN (SELECT assignment_id FROM control_assignments)";
+    private static final String IN_QUEUE = "(NOT " + SETTLED + " OR " + SUBMITTED + ")";
 
     private final Connection c;
     private final String examId;
@@ -146,7 +158,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         return new ExamSource.Rubric("results store", criteria);
     }
 
-    /** For tests of the connection's settings. */
+    /** For tests of the connection's settings, and the services beside this store (under its lock). */
     Connection connection() {
         return c;
     }
@@ -280,7 +292,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         {
             Map<String, List<String>> byResponse = new TreeMap<>();
             each("SELECT a.sitting_id || '/' || a.task_id, a.rater_id FROM rating_assignments a JOIN sittings s"
-                    + " ON s.sitting_id = a.sitting_id WHERE s.exam_id=? ORDER BY a.assignment_id",
+                    + " ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND " + NOT_CONTROL + " ORDER BY a.assignment_id",
                     rs -> byResponse.computeIfAbsent(rs.getString(1), x -> new ArrayList<>()).add(rs.getString(2)), examId);
             return RaterLinks.ofRaterSets(byResponse);
         }
@@ -322,6 +334,27 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         return a;
     }
 
+    /**
+     * When the response behind a blind id was settled by a resolution entry, if it was: from then
+     * on its final score is the test owner's, so no rating for it is taken.
+     */
+    public synchronized Optional<String> settledAt(String blindId) throws RatingException {
+        return read("looking up " + blindId, () -> query("SELECT MAX(se.resolved_at) FROM rating_assignments a"
+                + " JOIN sittings s ON s.sitting_id = a.sitting_id JOIN rating_flags sf ON sf.sitting_id = a.sitting_id"
+                + " AND sf.task_id = a.task_id JOIN resolution_entries se ON se.flag_id = sf.flag_id"
+                + " WHERE a.blind_id=? AND s.exam_id=?", rs -> rs.getString(1), blindId, examId))
+                .stream().filter(java.util.Objects::nonNull).findFirst();
+    }
+
+    private void refuseIfSettled(String blindId) throws RatingException {
+        Optional<String> at = settledAt(blindId);
+        if (at.isPresent()) {
+            throw new RatingException("response " + blindId + " was settled by the test owner's resolution entry ("
+                    + at.get() + "); its final score is decided, so this rating is not taken and nothing was stored."
+                    + " Go on with the next response in the queue");
+        }
+    }
+
     private static RatingDesk.Kind kind(String stored) {
         return "adjudication".equals(stored) ? RatingDesk.Kind.ADJUDICATION : RatingDesk.Kind.RATING;
     }
@@ -351,7 +384,8 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         List<QueueItem> raw = read("reading the queue of " + raterId, () -> query("SELECT a.blind_id, a.task_id, a.kind,"
                 + " EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)"
                 + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
-                + " WHERE a.rater_id=? AND s.exam_id=? ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
+                + " WHERE a.rater_id=? AND s.exam_id=? AND " + IN_QUEUE
+                + " ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
                 rs -> new QueueItem(0, rs.getString(1), rs.getString(2), kind(rs.getString(3)), rs.getInt(4) == 1),
                 raterId, examId));
         List<QueueItem> out = new ArrayList<>(raw.size());
@@ -365,10 +399,10 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     @Override
     public synchronized BlindResponse response(String raterId, String blindId) throws RatingException {
         Assignment a = assignment(raterId, blindId);
-        return read("reading response " + blindId, () -> query("SELECT t.title, r.text FROM responses r JOIN sittings s"
+        return read("reading response " + blindId, () -> query("SELECT t.title, r.text, t.prompt FROM responses r JOIN sittings s"
                 + " ON s.sitting_id = r.sitting_id JOIN tasks t ON t.exam_id = s.exam_id AND t.task_id = r.task_id"
                 + " WHERE r.sitting_id=? AND r.task_id=?", rs -> new BlindResponse(blindId, a.taskId(), rs.getString(1),
-                rs.getString(2)), a.sittingId(), a.taskId()).get(0));
+                rs.getString(2), rs.getString(3)), a.sittingId(), a.taskId()).get(0));
     }
 
     @Override
@@ -401,6 +435,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     @Override
     public synchronized void saveDraft(String raterId, String blindId, RatingSheet sheet) throws RatingException {
         Assignment a = assignment(raterId, blindId);
+        refuseIfSettled(blindId);
         List<String> problems = check(sheet, false);
         if (!problems.isEmpty()) {
             throw new RatingException(blindId + ": " + String.join("; ", problems));
@@ -449,6 +484,14 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         Map<Assignment, RatingSheet> checked = new LinkedHashMap<>();
         for (Map.Entry<String, RatingSheet> e : sheets.entrySet()) {
             Assignment a = assignment(raterId, e.getKey());
+            RatingSheet sent = e.getValue();
+            boolean unchanged = read("reading the rating of " + e.getKey(), () -> latest(a.id())
+                    .filter(l -> l.scores().equals(new TreeMap<>(sent.scores())) && l.comment().equals(sent.comment()))
+                    .isPresent());
+            if (!unchanged) {
+                // the same rating sent again (a sheet imported twice) changes nothing and needs no refusal
+                refuseIfSettled(e.getKey());
+            }
             List<String> problems = check(e.getValue(), true);
             if (!problems.isEmpty()) {
                 throw new RatingException(e.getKey() + ": " + String.join("; ", problems) + ". Nothing was stored");
@@ -507,7 +550,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 + " SUM(EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)),"
                 + " SUM(EXISTS(SELECT 1 FROM rating_flags f WHERE f.sitting_id = a.sitting_id AND f.task_id = a.task_id))"
                 + " FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=?"
-                + " GROUP BY a.rater_id, a.task_id ORDER BY a.rater_id, a.task_id",
+                + " AND " + IN_QUEUE + " GROUP BY a.rater_id, a.task_id ORDER BY a.rater_id, a.task_id",
                 rs -> new ProgressRow(rs.getString(1), rs.getString(2), rs.getInt(3), rs.getInt(4), rs.getInt(3) - rs.getInt(4),
                         rs.getInt(5)), examId));
     }
@@ -565,11 +608,12 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     /** Flags the response if its complete first ratings break the rule, finds it an adjudicator, and updates its final score. */
     private void evaluate(long sittingId, String taskId, String now) throws SQLException {
         List<FinalScore.Submitted> ratings = new ArrayList<>();
-        int expected = count("SELECT COUNT(*) FROM rating_assignments WHERE sitting_id=? AND task_id=? AND kind='rating'",
+        int expected = count("SELECT COUNT(*) FROM rating_assignments a WHERE a.sitting_id=? AND a.task_id=?"
+                + " AND a.kind='rating' AND " + NOT_CONTROL,
                 sittingId, taskId);
         each("SELECT a.rater_id, a.kind, (SELECT x.scores_json FROM rating_submissions x WHERE x.assignment_id ="
                 + " a.assignment_id ORDER BY x.submission_id DESC LIMIT 1) FROM rating_assignments a"
-                + " WHERE a.sitting_id=? AND a.task_id=? ORDER BY a.assignment_id", rs -> {
+                + " WHERE a.sitting_id=? AND a.task_id=? AND " + NOT_CONTROL + " ORDER BY a.assignment_id", rs -> {
                     if (rs.getString(3) != null) {
                         ratings.add(new FinalScore.Submitted(rs.getString(1), kind(rs.getString(2)), parse(rs.getString(3))));
                     }
@@ -746,7 +790,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
     public synchronized List<Flag> flags() throws RatingException {
         return read("listing flags", () -> query("SELECT f.flag_id, f.task_id, f.reason, f.flagged_at,"
                 + " (SELECT group_concat(a.rater_id, ' ') FROM rating_assignments a WHERE a.sitting_id = f.sitting_id"
-                + "   AND a.task_id = f.task_id AND a.kind = 'rating'),"
+                + "   AND a.task_id = f.task_id AND a.kind = 'rating' AND " + NOT_CONTROL + "),"
                 + " (SELECT a.rater_id FROM rating_assignments a WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id"
                 + "   AND a.kind = 'adjudication' ORDER BY a.assignment_id DESC LIMIT 1),"
                 + " (SELECT a.blind_id FROM rating_assignments a WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id"
@@ -809,7 +853,8 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                     + " JOIN sittings s ON s.sitting_id = a.sitting_id"
                     + " JOIN responses r ON r.sitting_id = a.sitting_id AND r.task_id = a.task_id"
                     + " LEFT JOIN candidates c ON c.exam_id = s.exam_id AND c.candidate_number = s.candidate_number"
-                    + " WHERE s.exam_id=? ORDER BY s.candidate_number, a.task_id, s.sitting_id, a.rater_id, g.criterion_id",
+                    + " WHERE s.exam_id=? AND " + NOT_CONTROL
+                    + " ORDER BY s.candidate_number, a.task_id, s.sitting_id, a.rater_id, g.criterion_id",
                     rs -> sink.accept(new RatingRow(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
                             rs.getString(5), rs.getString(6), rs.getString(7), rs.getInt(8), rs.getString(9),
                             rs.getString(10))), examId);
@@ -851,7 +896,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
             Map<ResponseScores.Key, Map<String, RatingDesk.Kind>> kinds = new HashMap<>();
             each("SELECT a.sitting_id, a.task_id, a.rater_id, a.kind, g.criterion_id, g.score FROM ratings g"
                     + " JOIN rating_assignments a ON a.assignment_id = g.assignment_id"
-                    + " JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=?"
+                    + " JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND " + NOT_CONTROL
                     + " ORDER BY a.sitting_id, a.task_id, a.kind DESC, a.rater_id, g.criterion_id", rs -> {
                         var key = new ResponseScores.Key(rs.getLong(1), rs.getString(2));
                         ratings.computeIfAbsent(key, k -> new java.util.LinkedHashMap<>())
@@ -910,6 +955,71 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
                 parse(rs.getString(2)), rs.getString(3), rs.getString(4), rs.getString(5)), a.id()));
     }
 
+    // ---------------------------------------------------------------- referrals
+
+    @Override
+    public synchronized long refer(String raterId, String blindId, Referrals.Reason reason, String note)
+            throws RatingException {
+        Assignment a = assignment(raterId, blindId);
+        if (note == null || note.isBlank()) {
+            throw new RatingException("say what you saw in " + blindId + " (a note is needed with every referral);"
+                    + " nothing was stored");
+        }
+        return tx("storing the referral of " + blindId, () -> insert("INSERT INTO referrals(assignment_id, rater_id,"
+                + " reason, note, referred_at) VALUES (?,?,?,?,?)", a.id(), raterId, reason.word(), note.strip(),
+                clock.instant().toString()));
+    }
+
+    @Override
+    public synchronized List<Referrals.Referral> referrals(boolean openOnly) throws RatingException {
+        return read("listing referrals", () -> query("SELECT x.referral_id, a.blind_id, a.task_id, s.candidate_number,"
+                + " x.rater_id, x.reason, x.note, x.referred_at, x.decision, x.decided_by, x.decided_at FROM referrals x"
+                + " JOIN rating_assignments a ON a.assignment_id = x.assignment_id JOIN sittings s"
+                + " ON s.sitting_id = a.sitting_id WHERE s.exam_id=?" + (openOnly ? " AND x.decision IS NULL" : "")
+                + " ORDER BY x.referral_id", rs -> new Referrals.Referral(rs.getLong(1), rs.getString(2), rs.getString(3),
+                rs.getString(4), rs.getString(5), Referrals.Reason.valueOf(rs.getString(6).toUpperCase(java.util.Locale.ROOT)
+                .replace('-', '_')), rs.getString(7), rs.getString(8), rs.getString(9), rs.getString(10),
+                rs.getString(11)), examId));
+    }
+
+    @Override
+    public synchronized void decide(long referralId, String decidedBy, String decision) throws RatingException {
+        if (decidedBy == null || decidedBy.isBlank() || decision == null || decision.isBlank()) {
+            throw new RatingException("say who decided (--by NAME) and what (--decision TEXT); nothing was stored");
+        }
+        tx("storing the decision on referral " + referralId, () -> {
+            int n = update("UPDATE referrals SET decision=?, decided_by=?, decided_at=? WHERE referral_id=? AND"
+                    + " assignment_id IN (SELECT a.assignment_id FROM rating_assignments a JOIN sittings s"
+                    + " ON s.sitting_id = a.sitting_id WHERE s.exam_id=?)", decision.strip(), decidedBy.strip(),
+                    clock.instant().toString(), referralId, examId);
+            if (n == 0) {
+                throw new SQLException(new RatingException("no referral " + referralId + " in exam " + examId
+                        + "; list them with rate referrals list"));
+            }
+            return null;
+        });
+    }
+
+    // ---------------------------------------------------------------- for the services beside this store
+
+    /** Runs {@code work} in one transaction of this store (callers hold the store's lock). */
+    <T> T inTransaction(String what, Work<T> work) throws RatingException {
+        return tx(what, work);
+    }
+
+    /** Runs a read of this store (callers hold the store's lock). */
+    <T> T reading(String what, Work<T> work) throws RatingException {
+        return read(what, work);
+    }
+
+    Clock clock() {
+        return clock;
+    }
+
+    BlindIds blindIds() {
+        return blindIds;
+    }
+
     @Override
     public synchronized void close() throws RatingException {
         try {
@@ -942,7 +1052,7 @@ public final class SqliteRatingStore implements RatingDesk, AutoCloseable {
         }
     }
 
-    private interface Work<T> {
+    interface Work<T> {
         T run() throws SQLException;
     }
 

@@ -354,7 +354,44 @@ public final class Migrations {
                       questionnaire_id TEXT NOT NULL,
                       PRIMARY KEY (exam_id, form_id, timing),
                       FOREIGN KEY (exam_id, form_id) REFERENCES forms(exam_id, form_id)
-                    )""")));
+                    )""")),
+            new Migration(5, "referrals: scripts a rater hands to the test owner, with reason, note and decision", List.of(
+                    """
+                    CREATE TABLE referrals (
+                      referral_id INTEGER PRIMARY KEY,
+                      assignment_id INTEGER NOT NULL REFERENCES rating_assignments(assignment_id),
+                      rater_id TEXT NOT NULL REFERENCES raters(rater_id),
+                      reason TEXT NOT NULL
+                        CHECK (reason IN ('identity-revealed', 'unallowed-help', 'off-task', 'other')),
+                      note TEXT NOT NULL CHECK (length(trim(note)) > 0),
+                      referred_at TEXT NOT NULL,
+                      decision TEXT,
+                      decided_by TEXT,
+                      decided_at TEXT,
+                      CHECK ((decision IS NULL) = (decided_by IS NULL))
+                    )""",
+                    "CREATE INDEX referrals_by_assignment ON referrals(assignment_id)")),
+            new Migration(6, "control scripts: responses with agreed scores mixed unannounced into raters' queues",
+                    List.of(
+                    """
+                    CREATE TABLE control_scripts (
+                      sitting_id INTEGER NOT NULL,
+                      task_id TEXT NOT NULL,
+                      agreed_scores_json TEXT NOT NULL,
+                      source TEXT NOT NULL,
+                      marked_at TEXT NOT NULL,
+                      PRIMARY KEY (sitting_id, task_id),
+                      FOREIGN KEY (sitting_id, task_id) REFERENCES responses(sitting_id, task_id)
+                    )""",
+                    """
+                    CREATE TABLE control_assignments (
+                      assignment_id INTEGER PRIMARY KEY REFERENCES rating_assignments(assignment_id),
+                      sitting_id INTEGER NOT NULL,
+                      task_id TEXT NOT NULL,
+                      FOREIGN KEY (sitting_id, task_id) REFERENCES control_scripts(sitting_id, task_id)
+                    )""")),
+            new Migration(7, "task prompts, shown to raters beside the script",
+                    List.of("ALTER TABLE tasks ADD COLUMN prompt TEXT")));
 
     private Migrations() {
     }

@@ -16,6 +16,9 @@ import org.inkgate.format.response.OpenedResponse;
  */
 public interface ResultsStore extends AutoCloseable {
 
+    /** The store's file name that the guides, the command examples and the admin window suggest. */
+    String DEFAULT_FILE_NAME = "results.db";
+
     /** Records an exam and its bundle (tasks, conditions, forms with policies, the bundle's roster); repeatable. */
     void registerBundle(BundleManifest manifest, String manifestSha256, String signerFingerprint) throws StoreException;
 
@@ -27,6 +30,9 @@ public interface ResultsStore extends AutoCloseable {
 
     /** Records the exam's rubric (criteria and band descriptors); repeatable. */
     void registerRubric(String examId, ExamSource.Rubric rubric) throws StoreException;
+
+    /** Records each task's prompt (Markdown source as written) for raters; repeatable. */
+    void registerPrompts(String examId, Map<String, String> promptByTask) throws StoreException;
 
     boolean hasBundle(String manifestSha256) throws StoreException;
 

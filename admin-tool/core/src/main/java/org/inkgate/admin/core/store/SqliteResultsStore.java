@@ -252,6 +252,16 @@ public final class SqliteResultsStore implements ResultsStore {
     }
 
     @Override
+    public void registerPrompts(String examId, Map<String, String> promptByTask) throws StoreException {
+        tx("registering the prompts of " + examId, () -> {
+            for (Map.Entry<String, String> e : promptByTask.entrySet()) {
+                update("UPDATE tasks SET prompt=? WHERE exam_id=? AND task_id=?", e.getValue(), examId, e.getKey());
+            }
+            return null;
+        });
+    }
+
+    @Override
     public boolean hasBundle(String manifestSha256) throws StoreException {
         return read("looking up a bundle", () -> first("SELECT 1 FROM bundles WHERE manifest_sha256=?", 1, manifestSha256)
                 .isPresent());

@@ -281,7 +281,7 @@ class FormAssignerTest {
     void assignmentTable_roundTrip_keepsRowsAndSeed() throws Exception {
         Assignment a = FormAssigner.assign(roster(5, 7), forms(2, 2), 2, 99);
         Path file = dir.resolve("assignment.csv");
-        AssignmentTable.write(a, file);
+        AssignmentTable.write(a, file, false);
         assertEquals(a, AssignmentTable.read(file));
     }
 

@@ -153,6 +153,93 @@ class MigrationsTest {
     }
 
     @Test
+    void migration5_storeAtVersion4WithARating_keepsItAndTakesReferralsWithTheirChecks() throws Exception {
+        Path file = dir.resolve("r.db");
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 4)) {
+            try (Statement s = store.connection().createStatement()) {
+                s.execute("INSERT INTO exams VALUES ('e1', 'Invented', 'en', 0)");
+                s.execute("INSERT INTO bundles VALUES ('b', 'e1', 'fp', 't')");
+                s.execute("INSERT INTO forms VALUES ('e1', 'F')");
+                s.execute("INSERT INTO policy_snapshots(policy_id, policy_json, spelling, insert_from_panel, show_word_count,"
+                        + " paste) VALUES (1, '{}', 'off', 0, 0, 'allow')");
+                s.execute("INSERT INTO sittings(sitting_id, package_sha256, package_id, content_sha256, exam_id,"
+                        + " bundle_manifest_sha256, candidate_number, form_id, installation_fingerprint, source_file,"
+                        + " imported_at) VALUES (1, 'p', 'P', 'c', 'e1', 'b', 'C1', 'F', 'i', 'f', 't')");
+                s.execute("INSERT INTO responses(sitting_id, task_id, position, condition_id, policy_id, tools_offered, text,"
+                        + " word_count, extra_time_seconds, end_reason) VALUES (1, 't1', 0, 'w', 1, '', 'x', 1, 0, 'done')");
+                s.execute("INSERT INTO raters(rater_id, label) VALUES ('R1', 'R1')");
+                s.execute("INSERT INTO rating_assignments(assignment_id, sitting_id, task_id, rater_id, seed, created_at,"
+                        + " blind_id) VALUES (7, 1, 't1', 'R1', 1, 't', 'AAAA-AAAA')");
+            }
+            assertFalse(objects(store.connection(), "table").contains("referrals"));
+        }
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 5)) {
+            Connection c = store.connection();
+            assertEquals(5, Migrations.version(c));
+            assertTrue(objects(c, "table").contains("referrals"));
+            try (Statement s = c.createStatement()) {
+                try (ResultSet rs = s.executeQuery("SELECT blind_id FROM rating_assignments WHERE assignment_id = 7")) {
+                    assertEquals("AAAA-AAAA", rs.getString(1), "the assignment survives the migration");
+                }
+                s.execute("INSERT INTO referrals(assignment_id, rater_id, reason, note, referred_at)"
+                        + " VALUES (7, 'R1', 'off-task', 'writes about something else', 't')");
+                SQLException reason = assertThrows(SQLException.class, () -> s.execute("INSERT INTO referrals(assignment_id,"
+                        + " rater_id, reason, note, referred_at) VALUES (7, 'R1', 'dislike', 'x', 't')"));
+                assertTrue(reason.getMessage().contains("CHECK"), reason.getMessage());
+                SQLException note = assertThrows(SQLException.class, () -> s.execute("INSERT INTO referrals(assignment_id,"
+                        + " rater_id, reason, note, referred_at) VALUES (7, 'R1', 'other', '  ', 't')"));
+                assertTrue(note.getMessage().contains("CHECK"), note.getMessage());
+                SQLException dangling = assertThrows(SQLException.class, () -> s.execute("INSERT INTO referrals("
+                        + "assignment_id, rater_id, reason, note, referred_at) VALUES (99, 'R1', 'other', 'x', 't')"));
+                assertTrue(dangling.getMessage().contains("FOREIGN KEY"), dangling.getMessage());
+            }
+        }
+    }
+
+    @Test
+    void migration6_storeAtVersion5WithAReferral_keepsItAndTakesControlScriptsOfExistingResponsesOnly() throws Exception {
+        Path file = dir.resolve("r.db");
+        migration5_storeAtVersion4WithARating_keepsItAndTakesReferralsWithTheirChecks();
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 5)) {
+            assertFalse(objects(store.connection(), "table").contains("control_scripts"));
+        }
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 6)) {
+            Connection c = store.connection();
+            assertEquals(6, Migrations.version(c));
+            assertTrue(objects(c, "table").containsAll(Set.of("control_scripts", "control_assignments")));
+            try (Statement s = c.createStatement()) {
+                try (ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM referrals")) {
+                    assertEquals(1, rs.getInt(1), "the referral survives the migration");
+                }
+                s.execute("INSERT INTO control_scripts VALUES (1, 't1', '{}', 'invented meeting', 't')");
+                s.execute("INSERT INTO control_assignments VALUES (7, 1, 't1')");
+                SQLException dangling = assertThrows(SQLException.class, () -> s.execute(
+                        "INSERT INTO control_scripts VALUES (1, 'no-such-task', '{}', 'x', 't')"));
+                assertTrue(dangling.getMessage().contains("FOREIGN KEY"), dangling.getMessage());
+            }
+        }
+    }
+
+    @Test
+    void migration7_storeAtVersion6WithATask_keepsItAndTakesItsPrompt() throws Exception {
+        Path file = dir.resolve("r.db");
+        migration6_storeAtVersion5WithAReferral_keepsItAndTakesControlScriptsOfExistingResponsesOnly();
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 6)) {
+            try (Statement s = store.connection().createStatement()) {
+                s.execute("INSERT INTO tasks(exam_id, task_id, title, time_limit_seconds) VALUES ('e1', 't1', 'T', 60)");
+            }
+        }
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 7)) {
+            store.registerPrompts("e1", java.util.Map.of("t1", "Write about the invented harbour."));
+            try (Statement s = store.connection().createStatement();
+                    ResultSet rs = s.executeQuery("SELECT title, prompt FROM tasks WHERE task_id = 't1'")) {
+                assertEquals("T", rs.getString(1), "the task survives the migration");
+                assertEquals("Write about the invented harbour.", rs.getString(2));
+            }
+        }
+    }
+
+    @Test
     void open_storeFromANewerProgram_isRefusedAndLeftAlone() throws Exception {
         Path file = dir.resolve("r.db");
         try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
@@ -171,7 +258,7 @@ class MigrationsTest {
     void open_latest_isTheLastMigration() throws Exception {
         try (SqliteResultsStore store = SqliteResultsStore.open(dir.resolve("r.db"))) {
             assertEquals(Migrations.latest(), Migrations.version(store.connection()));
-            assertEquals(4, Migrations.latest());
+            assertEquals(7, Migrations.latest());
         }
     }
 }
