@@ -176,6 +176,10 @@ public final class Collector {
         }
         OpenedResponse opened = r.opened();
         ResponseDocument d = opened.response();
+        List<PackageContentRules.Breach> breaches = PackageContentRules.beforeBundle(d);
+        if (!breaches.isEmpty()) {
+            return refuse(r, breaches);
+        }
         BundleManifest bundle = bundles.get(d.bundleManifestSha256());
         if (bundle == null) {
             return refuse(r, "unknown-bundle", name + ": written from a bundle (manifest " + d.bundleManifestSha256()
@@ -202,6 +206,16 @@ public final class Collector {
                 || bundle.roster().stream().anyMatch(e -> e.candidateNumber().equals(d.candidateNumber()));
         return new Outcome.Imported(name, d.candidateNumber(), d.formId(), d.packageId(), opened.installationFingerprint(),
                 onRoster);
+    }
+
+    /** Refuses a package that breaks content rules, under the first breach's reason, listing every breach. */
+    private Outcome refuse(Read r, List<PackageContentRules.Breach> breaches) throws StoreException {
+        StringBuilder message = new StringBuilder(r.file().toString()).append(": ");
+        for (int i = 0; i < breaches.size(); i++) {
+            message.append(i == 0 ? "" : "; ").append(breaches.get(i).message());
+        }
+        return refuse(r, breaches.get(0).reason(), message + ". Nothing of it was imported; keep the file and report it:"
+                + " a client of this version does not write such a package");
     }
 
     private Outcome refuse(Read r, String reason, String message) throws StoreException {

@@ -14,7 +14,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.regex.Pattern;
+import org.inkgate.format.bundle.CandidateNumber;
 import org.inkgate.admin.core.csv.Csv;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.admin.core.source.Problem;
@@ -35,7 +35,6 @@ public final class RosterReader {
     public static final String HIGH_CONTRAST = "high_contrast";
     private static final Set<String> KNOWN = Set.of(CANDIDATE, LEVEL, FIRST_LANGUAGE, EXTRA_TIME, LARGE_PRINT, HIGH_CONTRAST);
     /** Candidate numbers are typed at sign-in and become file and id parts: keep them plain. */
-    private static final Pattern NUMBER = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_-]{0,31}");
 
     private RosterReader() {
     }
@@ -98,9 +97,10 @@ public final class RosterReader {
             }
             int before = problems.size();
             String number = f.get(col.get(CANDIDATE)).strip();
-            if (!NUMBER.matcher(number).matches()) {
-                problems.add(new Problem(name, line, col.get(CANDIDATE) + 1, CANDIDATE, "\"" + number
-                        + "\" is not a usable candidate number: use 1-32 letters, digits, '-' or '_'"));
+            if (!CandidateNumber.isValid(number)) {
+                problems.add(new Problem(name, line, col.get(CANDIDATE) + 1, CANDIDATE, "\""
+                        + org.inkgate.format.refusal.FormatRefusal.printable(number)
+                        + "\" is not a usable candidate number: use " + CandidateNumber.RULE));
             } else {
                 Integer first = seen.putIfAbsent(number, line);
                 if (first != null) {
