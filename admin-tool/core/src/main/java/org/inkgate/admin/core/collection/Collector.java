@@ -81,6 +81,13 @@ public final class Collector {
         return files;
     }
 
+    /** A file refused by its size alone, before reading. */
+    private static final class TooLarge extends IOException {
+        TooLarge(String message) {
+            super(message);
+        }
+    }
+
     /** A package read by a worker: opened, or refused, or skipped because its bytes are known. */
     private record Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
             IOException failure, boolean known) {
@@ -124,6 +131,10 @@ public final class Collector {
 
     private Read read(Path file, Set<String> known) {
         try {
+            String tooLarge = PackageSizeCheck.tooLarge(file);
+            if (tooLarge != null) {
+                return new Read(file, null, null, null, null, new TooLarge(tooLarge), false);
+            }
             String sha = Sha256.hex(Files.readAllBytes(file));
             if (known.contains(sha)) {
                 return new Read(file, sha, null, null, null, null, true);
@@ -164,6 +175,9 @@ public final class Collector {
 
     private Outcome settle(Read r) throws StoreException {
         String name = r.file().toString();
+        if (r.failure() instanceof TooLarge tooLarge) {
+            return new Outcome.Refused(name, "too-large", tooLarge.getMessage());
+        }
         if (r.failure() != null) {
             return new Outcome.Refused(name, "unreadable", "cannot be read: " + r.failure().getMessage()
                     + ". Copy the file again from the candidate's machine or the invigilator's copy");
