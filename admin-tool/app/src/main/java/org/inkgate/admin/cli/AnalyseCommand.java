@@ -302,7 +302,11 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
         Report report = StudyAnalysis.report(data, options, extra);
         try {
+            org.inkgate.format.io.OwnerOnly.folder(out);
             ReportWriter.write(report, out);
+            org.inkgate.format.io.OwnerOnly.restrict(out.resolve("report.html"));
+            org.inkgate.format.io.OwnerOnly.restrict(out.resolve("summary.json"));
+            org.inkgate.format.io.OwnerOnly.tree(out.resolve("tables"));
         } catch (IOException e) {
             err.println("inkgate-admin analyse: could not write the report to " + out + ": " + e.getMessage());
             return OUTPUT_FAILED;

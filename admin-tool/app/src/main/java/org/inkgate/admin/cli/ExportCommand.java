@@ -15,6 +15,7 @@ import org.inkgate.admin.core.rating.SqliteRatingStore;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.format.io.OwnerOnly;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -67,6 +68,7 @@ final class ExportCommand implements Callable<Integer> {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
                 Path dir = OutputFolder.file(out, id);
+                OwnerOnly.folder(dir.resolve("csv"));
                 long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
                 QtiResultsExport.Written qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"), scoring(id));
                 XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"),
@@ -76,7 +78,8 @@ final class ExportCommand implements Callable<Integer> {
                         java.nio.charset.StandardCharsets.UTF_8)) {
                     questionnaire = QuestionnaireCsv.write(store, id, csv);
                 }
-                w.println(id + " -> " + dir);
+                OwnerOnly.tree(dir);
+                w.println(TerminalText.value(id) + " -> " + TerminalText.value(dir));
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
                         + rows[2] + " rows, csv/" + QuestionnaireCsv.FILE_NAME + " " + questionnaire + " rows");
                 w.println("  qti-results/ " + qti.files() + " assessmentResult files (" + qti.scored()
