@@ -40,15 +40,17 @@ public final class ForgedPackages {
     private final BundleManifest manifest;
     private final String manifestSha256;
     private final SimulatedSitting forger;
+    private final org.inkgate.format.response.ResponsePackageWriter writer;
 
     private ForgedPackages(Path dir, Path keys, Path bundle, BundleManifest manifest, String manifestSha256,
-            SimulatedSitting forger) {
+            SimulatedSitting forger, org.inkgate.format.response.ResponsePackageWriter writer) {
         this.dir = dir;
         this.keys = keys;
         this.bundle = bundle;
         this.manifest = manifest;
         this.manifestSha256 = manifestSha256;
         this.forger = forger;
+        this.writer = writer;
     }
 
     /** Keys and the demo bundle (with the demo roster) in {@code dir}, through the real command line. */
@@ -66,10 +68,11 @@ public final class ForgedPackages {
                 "--pin-env", "TEST_PIN"));
         OwnerKeyStore.PublicKeys pub = new OwnerKeyStore(keys).publicKeys();
         try (OpenedBundle b = new BundleReader(TrustPolicy.trusting(Set.of(pub.signingFingerprint()))).open(bundle)) {
-            SimulatedSitting forger = new SimulatedSitting(b.manifest(), b.manifestSha256(),
-                    Ed25519.generate().getPrivate(), X25519.publicFromRaw(
-                            java.util.Base64.getDecoder().decode(pub.encryption())));
-            return new ForgedPackages(dir, keys, bundle, b.manifest(), b.manifestSha256(), forger);
+            var installation = Ed25519.generate().getPrivate();
+            var ownerEncryption = X25519.publicFromRaw(java.util.Base64.getDecoder().decode(pub.encryption()));
+            SimulatedSitting forger = new SimulatedSitting(b.manifest(), b.manifestSha256(), installation, ownerEncryption);
+            return new ForgedPackages(dir, keys, bundle, b.manifest(), b.manifestSha256(), forger,
+                    new org.inkgate.format.response.ResponsePackageWriter(installation, ownerEncryption));
         }
     }
 
@@ -97,6 +100,14 @@ public final class ForgedPackages {
     public Path write(ResponseDocument d, Path file) throws IOException {
         java.nio.file.Files.createDirectories(file.getParent());
         forger.write(d, 40, 1, file);
+        return file;
+    }
+
+    /** Writes {@code d} with the given process log (the simulated log of {@code d} is {@link SimulatedSitting#events}). */
+    public Path write(ResponseDocument d, List<org.inkgate.format.response.ProcessEvent> events, Path file)
+            throws IOException {
+        java.nio.file.Files.createDirectories(file.getParent());
+        writer.write(d, events, file);
         return file;
     }
 

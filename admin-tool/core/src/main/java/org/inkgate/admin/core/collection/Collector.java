@@ -212,6 +212,10 @@ public final class Collector {
                     + " the client version \"" + org.inkgate.format.refusal.FormatRefusal.printable(shorten(d.clientVersion()))
                     + "\"");
         }
+        breaches = PackageContentRules.withBundle(bundle, d);
+        if (!breaches.isEmpty()) {
+            return refuse(r, breaches);
+        }
         if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()) {
             return new Outcome.SameAsImported(name, d.packageId());
         }
