@@ -46,6 +46,11 @@ final class ExportCommand implements Callable<Integer> {
             + " the xAPI export: tool use, task and sitting boundaries, focus and navigation remain")
     boolean xapiLight;
 
+    @Option(names = "--spreadsheet-safe", description = "write the CSV files for opening in a spreadsheet: a cell that"
+            + " starts with = + - @, a tab or a carriage return gets a single quote in front, so it is never run as a"
+            + " formula (OWASP, CSV Injection); programs and analyse read the plain export (docs/data-dictionary.md)")
+    boolean spreadsheetSafe;
+
     /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */
     private QtiResultsExport.Scoring scoring(String id) throws IOException {
         try {
@@ -69,13 +74,14 @@ final class ExportCommand implements Callable<Integer> {
             for (String id : exams) {
                 Path dir = OutputFolder.file(out, id);
                 OwnerOnly.folder(dir.resolve("csv"));
-                long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
+                long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"), spreadsheetSafe);
                 QtiResultsExport.Written qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"), scoring(id));
                 XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"),
                         xapiOptions);
                 long questionnaire;
-                try (var csv = java.nio.file.Files.newBufferedWriter(dir.resolve("csv").resolve(QuestionnaireCsv.FILE_NAME),
-                        java.nio.charset.StandardCharsets.UTF_8)) {
+                try (var plain = java.nio.file.Files.newBufferedWriter(dir.resolve("csv").resolve(QuestionnaireCsv.FILE_NAME),
+                        java.nio.charset.StandardCharsets.UTF_8);
+                        var csv = spreadsheetSafe ? org.inkgate.admin.core.csv.SpreadsheetSafe.writer(plain) : plain) {
                     questionnaire = QuestionnaireCsv.write(store, id, csv);
                 }
                 OwnerOnly.tree(dir);
