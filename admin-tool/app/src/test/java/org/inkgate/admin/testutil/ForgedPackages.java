@@ -82,6 +82,16 @@ public final class ForgedPackages {
         }
     }
 
+    /** The bundle the real command line built. */
+    public Path bundle() {
+        return bundle;
+    }
+
+    /** The owner key folder the real command line made. */
+    public Path keys() {
+        return keys;
+    }
+
     public BundleManifest manifest() {
         return manifest;
     }
