@@ -3,7 +3,6 @@ package org.inkgate.admin.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.Reader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -507,6 +506,7 @@ public final class AnalyseCommand implements Callable<Integer> {
     }
 
     private static Reader open(Path file) throws IOException {
-        return Files.newBufferedReader(file, StandardCharsets.UTF_8);
+        // read whole and checked: a file that is not UTF-8 is refused naming its line, not "Input length = 1"
+        return new java.io.StringReader(org.inkgate.format.io.Utf8Text.read(file));
     }
 }

@@ -224,7 +224,7 @@ final class RateCommand extends GroupCommand {
 
             @Override
             int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
-                String text = Files.readString(file, StandardCharsets.UTF_8);
+                String text = org.inkgate.format.io.Utf8Text.read(file);
                 RatingSheets.Imported r = RatingSheets.importSheet(s, rater, file.getFileName().toString(), text);
                 out.println("Read " + r.rowsRead() + " rows: " + r.storedNewOrChanged() + " ratings stored (new or changed), "
                         + r.notYetRated() + " not yet rated, the rest unchanged.");

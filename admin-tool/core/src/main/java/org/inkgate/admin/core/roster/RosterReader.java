@@ -1,10 +1,6 @@
 package org.inkgate.admin.core.roster;
 
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -43,11 +39,10 @@ public final class RosterReader {
         String name = file.getFileName().toString();
         String text;
         try {
-            text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(Files.readAllBytes(file))).toString();
-        } catch (CharacterCodingException e) {
+            text = org.inkgate.format.io.Utf8Text.decode(name, Files.readAllBytes(file));
+        } catch (org.inkgate.format.io.Utf8Text.NotUtf8Exception e) {
             throw new InvalidSourceException("the roster " + file + " cannot be used",
-                    List.of(new Problem(name, 0, 0, "", "is not UTF-8 text; save it as \"CSV UTF-8\"")));
+                    List.of(new Problem(name, (int) e.line(), 0, "", e.getMessage().substring(name.length() + 1))));
         } catch (IOException e) {
             throw new InvalidSourceException("the roster " + file + " cannot be used",
                     List.of(new Problem(name, 0, 0, "", "cannot be read: " + e.getMessage())));
