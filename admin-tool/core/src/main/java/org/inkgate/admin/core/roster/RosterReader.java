@@ -84,6 +84,10 @@ public final class RosterReader {
         Map<String, Integer> seen = new HashMap<>();
         for (Csv.Row row : rows.subList(1, rows.size())) {
             int line = row.line();
+            if (problems.size() >= org.inkgate.admin.core.csv.ProblemLimit.MAX) {
+                problems.add(new Problem(name, line, 0, "", org.inkgate.admin.core.csv.ProblemLimit.STOPPED));
+                break;
+            }
             List<String> f = row.fields();
             if (f.size() != header.size()) {
                 problems.add(new Problem(name, line, 0, "", "has " + f.size() + " fields but the header has "
