@@ -61,6 +61,7 @@ public final class RatingsReader {
             String rater = cols.text(t, row, pos[5], "rater", true, problems);
             String criterion = cols.text(t, row, pos[6], "criterion", true, problems);
             double score = Columns.number(t, row, pos[7], "score", problems);
+            ScoreBounds.check(t, row, "score", score, problems);
             if (problems.size() == before) {
                 ResponseKey key = new ResponseKey(candidate, task);
                 List<Rating> earlierRatings = byResponse.computeIfAbsent(key, k -> new ArrayList<>(8));

@@ -351,12 +351,17 @@ public final class AnalyseCommand implements Callable<Integer> {
             return INPUT_REFUSED;
         }
         try {
+            org.inkgate.format.io.OwnerOnly.folder(out);
             ReportWriter.write(report, out);
+            org.inkgate.format.io.OwnerOnly.restrict(out.resolve("report.html"));
+            org.inkgate.format.io.OwnerOnly.restrict(out.resolve("summary.json"));
+            org.inkgate.format.io.OwnerOnly.tree(out.resolve("tables"));
             if (mfrmResult != null) {
                 // the anchors a later run reads with --mfrm-anchors to report on this run's scale
                 try (Writer w = Files.newBufferedWriter(out.resolve(AnchorFile.FILE_NAME), StandardCharsets.UTF_8)) {
                     AnchorFile.write(mfrmResult, w);
                 }
+                org.inkgate.format.io.OwnerOnly.restrict(out.resolve(AnchorFile.FILE_NAME));
             }
         } catch (IOException e) {
             err.println("inkgate-admin analyse: could not write the report to " + out + ": " + e.getMessage());
@@ -599,6 +604,7 @@ public final class AnalyseCommand implements Callable<Integer> {
     }
 
     private static Reader open(Path file) throws IOException {
-        return Files.newBufferedReader(file, StandardCharsets.UTF_8);
+        // read whole and checked: a file that is not UTF-8 is refused naming its line, not "Input length = 1"
+        return new java.io.StringReader(org.inkgate.format.io.Utf8Text.read(file));
     }
 }

@@ -98,7 +98,8 @@ final class CollectCommand implements Callable<Integer> {
                     },
                     o -> {
                         if (o instanceof Outcome.Refused r) {
-                            err.println("REFUSED " + r.file() + " (" + r.reason() + "): " + r.message());
+                            err.println("REFUSED " + TerminalText.value(r.file()) + " (" + TerminalText.value(r.reason()) + "): "
+                                    + TerminalText.value(r.message()));
                             err.flush();
                         }
                     });
@@ -115,19 +116,22 @@ final class CollectCommand implements Callable<Integer> {
                 + kinds.getOrDefault("AlreadyImported", 0) + ", copies of imported packages "
                 + kinds.getOrDefault("SameAsImported", 0) + ", refused " + kinds.getOrDefault("Refused", 0) + ".");
         if (!report.offRoster().isEmpty()) {
-            w.println("Imported but NOT on the bundle's roster (kept; check the candidate numbers): " + report.offRoster());
+            w.println("Imported but NOT on the bundle's roster (kept; check the candidate numbers): "
+                    + TerminalText.value(report.offRoster()));
         }
         if (anyInstallation && !report.byInstallation().isEmpty()) {
             w.println("Installations that signed the packages imported now (compare with the seat records):");
-            report.byInstallation().forEach((k, v) -> w.println("  " + k + "  " + v + " package" + (v == 1 ? "" : "s")));
+            report.byInstallation().forEach((k, v) -> w.println("  " + TerminalText.value(k) + "  " + v + " package"
+                    + (v == 1 ? "" : "s")));
         }
         for (var e : report.conflicts().entrySet()) {
             List<Rows.Conflict> conflicts = e.getValue();
             if (!conflicts.isEmpty()) {
-                w.println("CONFLICTS in " + e.getKey() + " (more than one response for a candidate and task; all are kept,"
+                w.println("CONFLICTS in " + TerminalText.value(e.getKey()) + " (more than one response for a candidate and task; all are kept,"
                         + " decide under your regulations which counts):");
-                conflicts.forEach(c -> w.println("  candidate " + c.candidateNumber() + ", task " + c.taskId() + ": "
-                        + c.copies() + " responses, packages " + c.packageIds()));
+                conflicts.forEach(c -> w.println("  candidate " + TerminalText.value(c.candidateNumber()) + ", task "
+                        + TerminalText.value(c.taskId()) + ": " + c.copies() + " responses, packages "
+                        + TerminalText.value(c.packageIds())));
             }
             MissingCommand.print(w, report.missing().get(e.getKey()));
         }

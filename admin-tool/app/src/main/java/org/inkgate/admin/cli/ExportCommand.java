@@ -15,6 +15,7 @@ import org.inkgate.admin.core.rating.SqliteRatingStore;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.format.io.OwnerOnly;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -45,6 +46,11 @@ final class ExportCommand implements Callable<Integer> {
             + " the xAPI export: tool use, task and sitting boundaries, focus and navigation remain")
     boolean xapiLight;
 
+    @Option(names = "--spreadsheet-safe", description = "write the CSV files for opening in a spreadsheet: a cell that"
+            + " starts with = + - @, a tab or a carriage return gets a single quote in front, so it is never run as a"
+            + " formula (OWASP, CSV Injection); programs and analyse read the plain export (docs/data-dictionary.md)")
+    boolean spreadsheetSafe;
+
     /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */
     private QtiResultsExport.Scoring scoring(String id) throws IOException {
         try {
@@ -67,16 +73,19 @@ final class ExportCommand implements Callable<Integer> {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
                 Path dir = OutputFolder.file(out, id);
-                long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"));
+                OwnerOnly.folder(dir.resolve("csv"));
+                long[] rows = TidyCsvExport.write(store, id, dir.resolve("csv"), spreadsheetSafe);
                 QtiResultsExport.Written qti = QtiResultsExport.write(store, id, dir.resolve("qti-results"), scoring(id));
                 XapiExport.Written xapi = XapiExport.write(store, id, dir.resolve("xapi-statements.jsonl"),
                         xapiOptions);
                 long questionnaire;
-                try (var csv = java.nio.file.Files.newBufferedWriter(dir.resolve("csv").resolve(QuestionnaireCsv.FILE_NAME),
-                        java.nio.charset.StandardCharsets.UTF_8)) {
+                try (var plain = java.nio.file.Files.newBufferedWriter(dir.resolve("csv").resolve(QuestionnaireCsv.FILE_NAME),
+                        java.nio.charset.StandardCharsets.UTF_8);
+                        var csv = spreadsheetSafe ? org.inkgate.admin.core.csv.SpreadsheetSafe.writer(plain) : plain) {
                     questionnaire = QuestionnaireCsv.write(store, id, csv);
                 }
-                w.println(id + " -> " + dir);
+                OwnerOnly.tree(dir);
+                w.println(TerminalText.value(id) + " -> " + TerminalText.value(dir));
                 w.println("  csv/responses.csv " + rows[0] + " rows, csv/tool_use.csv " + rows[1] + " rows, csv/events.csv "
                         + rows[2] + " rows, csv/" + QuestionnaireCsv.FILE_NAME + " " + questionnaire + " rows");
                 w.println("  qti-results/ " + qti.files() + " assessmentResult files (" + qti.scored()

@@ -49,6 +49,10 @@ public final class InkgateAdmin {
     /** A configured command line, for the launcher and for tests. */
     public static CommandLine commandLine() {
         CommandLine cl = new CommandLine(new InkgateAdmin());
+        // every command prints through these: no control character from outside data reaches the terminal
+        cl.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.OFF));
+        cl.setOut(TerminalText.guard(cl.getOut()));
+        cl.setErr(TerminalText.guard(cl.getErr()));
         cl.setExecutionExceptionHandler((e, cmd, parsed) -> {
             // expected failures (files, keys, store) carry a message meant for people: no stack trace
             boolean expected = e instanceof java.io.IOException || e instanceof IllegalArgumentException

@@ -66,19 +66,22 @@ final class InspectCommand implements Callable<Integer> {
             BundleManifest m = b.manifest();
             w.println(file + ": exam bundle, every check passed (signature, digests, entry names, rules).");
             w.println("  signed by      " + b.signerFingerprint());
+            boolean notMine = false;
             if (keys != null) {
                 String mine = new OwnerKeyStore(keys).publicKeys().signingFingerprint();
-                w.println(Fingerprint.normalise(mine).equals(Fingerprint.normalise(b.signerFingerprint()))
+                notMine = !Fingerprint.normalise(mine).equals(Fingerprint.normalise(b.signerFingerprint()));
+                w.println(!notMine
                         ? "  signer         matches your signing key in " + keys
                         : "  signer         DOES NOT match your signing key (" + mine + "): do not use this bundle as yours");
             } else {
                 w.println("                 (compare with the published fingerprint; --keys compares with yours)");
             }
             w.println("  manifest       SHA-256 " + b.manifestSha256());
-            w.println("  exam           " + m.examId() + " \"" + m.title() + "\" (" + m.language() + ")"
+            w.println("  exam           " + TerminalText.value(m.examId()) + " \"" + TerminalText.value(m.title()) + "\" ("
+                    + TerminalText.value(m.language()) + ")"
                     + (m.practice() ? ", practice" : ", live") + (m.sealed() ? ", SEALED" : ""));
             for (TaskSpec t : m.tasks()) {
-                w.println("  task           " + t.id() + " \"" + t.title() + "\", " + (t.timeLimitSeconds() / 60) + " min");
+                w.println("  task           " + TerminalText.value(t.id()) + " \"" + TerminalText.value(t.title()) + "\", " + (t.timeLimitSeconds() / 60) + " min");
             }
             for (FormSpec f : m.forms()) {
                 StringBuilder s = new StringBuilder("  form           " + f.id() + ":");
@@ -88,13 +91,17 @@ final class InspectCommand implements Callable<Integer> {
                                     .stream().sorted().map(t -> t.name().toLowerCase(java.util.Locale.ROOT)).toList()))
                             .append(']');
                 }
-                w.println(s);
+                w.println(TerminalText.value(s));
             }
             for (PackRef p : m.packs()) {
                 w.println("  pack           " + p.id() + " (" + p.kind() + " " + p.version() + ") " + p.file() + " sha256 " + p.sha256());
             }
             w.println("  roster         " + m.roster().size() + " candidates");
             w.println("  entries        " + m.entries().size());
+            if (notMine) {
+                // a bundle someone else signed is not usable as this owner's: scripts must see it in the exit code
+                return InkgateAdmin.PROBLEMS;
+            }
         }
         return InkgateAdmin.OK;
     }

@@ -38,18 +38,19 @@ final class MissingCommand implements Callable<Integer> {
 
     /** Prints the report; true when something is missing. */
     static boolean print(PrintWriter w, MissingReport r) {
-        w.println("Missing responses in " + r.examId() + " (" + r.rosterSize() + " on the roster):");
+        w.println("Missing responses in " + TerminalText.value(r.examId()) + " (" + r.rosterSize() + " on the roster):");
         if (r.missingCount() == 0 && r.withoutForm().isEmpty()) {
             w.println("  none: every candidate on the roster has a response to every task of their form.");
             return false;
         }
         r.byForm().forEach((form, list) -> {
-            w.println("  form " + form + ": " + (list.isEmpty() ? "none missing" : list.size() + " missing"));
-            list.forEach(m -> w.println("    candidate " + m.candidateNumber() + (m.level() == null ? "" : " (level "
-                    + m.level() + ")") + (m.taskId() == null ? ": no response package" : ": no response to task " + m.taskId())));
+            w.println("  form " + TerminalText.value(form) + ": " + (list.isEmpty() ? "none missing" : list.size() + " missing"));
+            list.forEach(m -> w.println("    candidate " + TerminalText.value(m.candidateNumber()) + (m.level() == null ? ""
+                    : " (level " + TerminalText.value(m.level()) + ")") + (m.taskId() == null ? ": no response package"
+                    : ": no response to task " + TerminalText.value(m.taskId()))));
         });
         if (!r.withoutForm().isEmpty()) {
-            w.println("  on the roster without a form in the bundle: " + r.withoutForm());
+            w.println("  on the roster without a form in the bundle: " + TerminalText.value(r.withoutForm()));
         }
         w.println("  This report cannot tell why a response is missing (absence, a package not yet collected, a");
         w.println("  machine failure). Look for the client's local copy before concluding, and follow your regulations.");

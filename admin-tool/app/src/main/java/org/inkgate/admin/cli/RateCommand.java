@@ -205,10 +205,7 @@ final class RateCommand extends GroupCommand {
 
             @Override
             int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
-                Path parent = file.toAbsolutePath().getParent();
-                if (parent != null) {
-                    Files.createDirectories(parent);
-                }
+                org.inkgate.format.io.OwnerOnly.file(file);
                 int rows;
                 try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
                     rows = RatingSheets.export(s, rater, w);
@@ -235,7 +232,7 @@ final class RateCommand extends GroupCommand {
 
             @Override
             int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
-                String text = Files.readString(file, StandardCharsets.UTF_8);
+                String text = org.inkgate.format.io.Utf8Text.read(file);
                 RatingSheets.Imported r = RatingSheets.importSheet(s, rater, file.getFileName().toString(), text);
                 out.println("Read " + r.rowsRead() + " rows: " + r.storedNewOrChanged() + " ratings stored (new or changed), "
                         + r.notYetRated() + " not yet rated, the rest unchanged.");
@@ -431,7 +428,9 @@ final class RateCommand extends GroupCommand {
 
         @Override
         int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
-            Files.createDirectories(dir);
+            org.inkgate.format.io.OwnerOnly.folder(dir);
+            org.inkgate.format.io.OwnerOnly.file(dir.resolve("ratings.csv"));
+            org.inkgate.format.io.OwnerOnly.file(dir.resolve("final-scores.csv"));
             long ratings;
             long finals;
             try (Writer w = Files.newBufferedWriter(dir.resolve("ratings.csv"), StandardCharsets.UTF_8)) {

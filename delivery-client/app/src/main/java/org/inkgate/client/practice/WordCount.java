@@ -1,8 +1,8 @@
 package org.inkgate.client.practice;
 
 /**
- * Counts words the way a candidate would: runs of text between spaces that hold at least one
- * letter or digit, so "well-known" and "don't" are one word each and a lone dash is none.
+ * Counts words the way a candidate would; the rule is the format's
+ * ({@link org.inkgate.format.response.WordCount}), which the collector checks packages with.
  */
 public final class WordCount {
 
@@ -10,26 +10,6 @@ public final class WordCount {
     }
 
     public static int of(String text) {
-        if (text == null) {
-            return 0;
-        }
-        int words = 0;
-        boolean inToken = false;
-        boolean tokenHasWordChar = false;
-        for (int i = 0; i < text.length(); ) {
-            int c = text.codePointAt(i);
-            i += Character.charCount(c);
-            if (Character.isWhitespace(c) || Character.isSpaceChar(c)) {
-                if (inToken && tokenHasWordChar) {
-                    words++;
-                }
-                inToken = false;
-                tokenHasWordChar = false;
-            } else {
-                inToken = true;
-                tokenHasWordChar |= Character.isLetterOrDigit(c);
-            }
-        }
-        return inToken && tokenHasWordChar ? words + 1 : words;
+        return org.inkgate.format.response.WordCount.of(text);
     }
 }

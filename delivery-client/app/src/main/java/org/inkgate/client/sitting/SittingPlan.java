@@ -50,6 +50,10 @@ public record SittingPlan(BundleManifest manifest, String manifestSha256, String
         if (number.isEmpty()) {
             throw new IllegalArgumentException("no candidate number was entered");
         }
+        if (!org.inkgate.format.bundle.CandidateNumber.isValid(number)) {
+            throw new IllegalArgumentException("a candidate number has " + org.inkgate.format.bundle.CandidateNumber.RULE
+                    + "; check the number with the candidate's admission details");
+        }
         if (!manifest.roster().isEmpty()) {
             Optional<RosterEntry> entry = manifest.roster().stream().filter(r -> r.candidateNumber().equals(number)).findFirst();
             if (entry.isEmpty()) {

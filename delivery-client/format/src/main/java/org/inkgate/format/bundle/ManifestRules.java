@@ -72,6 +72,10 @@ final class ManifestRules {
         Set<String> candidates = new HashSet<>();
         for (RosterEntry r : m.roster()) {
             requireText(problems, r.candidateNumber(), "roster candidateNumber");
+            if (r.candidateNumber() != null && !CandidateNumber.isValid(r.candidateNumber())) {
+                problems.add("roster candidate \"" + org.inkgate.format.refusal.FormatRefusal.printable(r.candidateNumber())
+                        + "\" is not a usable candidate number: use " + CandidateNumber.RULE);
+            }
             if (r.candidateNumber() != null && !candidates.add(r.candidateNumber())) {
                 problems.add("roster lists candidate \"" + r.candidateNumber() + "\" twice");
             }

@@ -104,7 +104,8 @@ public final class CollectionRun {
      */
     public static Report run(Request r, IntConsumer starting, Consumer<Outcome> settled)
             throws IOException, InvalidSourceException, BundleRefusedException, org.inkgate.admin.core.store.StoreException {
-        try (ResultsStore store = SqliteResultsStore.open(r.storeFile())) {
+        try (CollectLock lock = CollectLock.acquire(r.storeFile());
+                ResultsStore store = SqliteResultsStore.open(r.storeFile())) {
             Map<String, BundleManifest> bundles = new HashMap<>();
             TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
             Map<String, String> signers = new HashMap<>();

@@ -81,6 +81,13 @@ public final class Collector {
         return files;
     }
 
+    /** A file refused by its size alone, before reading. */
+    private static final class TooLarge extends IOException {
+        TooLarge(String message) {
+            super(message);
+        }
+    }
+
     /** A package read by a worker: opened, or refused, or skipped because its bytes are known. */
     private record Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
             IOException failure, boolean known) {
@@ -124,6 +131,10 @@ public final class Collector {
 
     private Read read(Path file, Set<String> known) {
         try {
+            String tooLarge = PackageSizeCheck.tooLarge(file);
+            if (tooLarge != null) {
+                return new Read(file, null, null, null, null, new TooLarge(tooLarge), false);
+            }
             String sha = Sha256.hex(Files.readAllBytes(file));
             if (known.contains(sha)) {
                 return new Read(file, sha, null, null, null, null, true);
@@ -164,6 +175,9 @@ public final class Collector {
 
     private Outcome settle(Read r) throws StoreException {
         String name = r.file().toString();
+        if (r.failure() instanceof TooLarge tooLarge) {
+            return new Outcome.Refused(name, "too-large", tooLarge.getMessage());
+        }
         if (r.failure() != null) {
             return new Outcome.Refused(name, "unreadable", "cannot be read: " + r.failure().getMessage()
                     + ". Copy the file again from the candidate's machine or the invigilator's copy");
@@ -176,6 +190,10 @@ public final class Collector {
         }
         OpenedResponse opened = r.opened();
         ResponseDocument d = opened.response();
+        List<PackageContentRules.Breach> breaches = PackageContentRules.beforeBundle(d);
+        if (!breaches.isEmpty()) {
+            return refuse(r, breaches);
+        }
         BundleManifest bundle = bundles.get(d.bundleManifestSha256());
         if (bundle == null) {
             return refuse(r, "unknown-bundle", name + ": written from a bundle (manifest " + d.bundleManifestSha256()
@@ -194,6 +212,10 @@ public final class Collector {
                     + " the client version \"" + org.inkgate.format.refusal.FormatRefusal.printable(shorten(d.clientVersion()))
                     + "\"");
         }
+        breaches = PackageContentRules.withBundle(bundle, d);
+        if (!breaches.isEmpty()) {
+            return refuse(r, breaches);
+        }
         if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()) {
             return new Outcome.SameAsImported(name, d.packageId());
         }
@@ -202,6 +224,16 @@ public final class Collector {
                 || bundle.roster().stream().anyMatch(e -> e.candidateNumber().equals(d.candidateNumber()));
         return new Outcome.Imported(name, d.candidateNumber(), d.formId(), d.packageId(), opened.installationFingerprint(),
                 onRoster);
+    }
+
+    /** Refuses a package that breaks content rules, under the first breach's reason, listing every breach. */
+    private Outcome refuse(Read r, List<PackageContentRules.Breach> breaches) throws StoreException {
+        StringBuilder message = new StringBuilder(r.file().toString()).append(": ");
+        for (int i = 0; i < breaches.size(); i++) {
+            message.append(i == 0 ? "" : "; ").append(breaches.get(i).message());
+        }
+        return refuse(r, breaches.get(0).reason(), message + ". Nothing of it was imported; keep the file and report it:"
+                + " a client of this version does not write such a package");
     }
 
     private Outcome refuse(Read r, String reason, String message) throws StoreException {

@@ -115,13 +115,17 @@ public final class Csv {
         return rows;
     }
 
-    /** Writes one record, quoting only fields that need it, ended by CRLF (RFC 4180 section 2). */
+    /**
+     * Writes one record, quoting only fields that need it, ended by CRLF (RFC 4180 section 2); through
+     * a {@link SpreadsheetSafe#writer}, each cell is made spreadsheet-safe first.
+     */
     public static void writeRow(Writer out, List<String> fields) throws IOException {
+        boolean safe = out instanceof SpreadsheetSafe.Marked;
         for (int i = 0; i < fields.size(); i++) {
             if (i > 0) {
                 out.write(',');
             }
-            out.write(escape(fields.get(i)));
+            out.write(escape(safe ? SpreadsheetSafe.cell(fields.get(i)) : fields.get(i)));
         }
         out.write("\r\n");
     }

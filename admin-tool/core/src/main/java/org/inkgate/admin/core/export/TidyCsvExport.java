@@ -9,6 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.inkgate.admin.core.csv.Csv;
+import org.inkgate.admin.core.csv.SpreadsheetSafe;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.StoreException;
 
@@ -34,9 +35,15 @@ public final class TidyCsvExport {
 
     /** Writes responses.csv, tool_use.csv and events.csv into {@code folder}; returns the row counts. */
     public static long[] write(ResultsStore store, String examId, Path folder) throws IOException, StoreException {
+        return write(store, examId, folder, false);
+    }
+
+    /** As {@link #write(ResultsStore, String, Path)}; {@code spreadsheetSafe} writes every cell as {@link SpreadsheetSafe} does. */
+    public static long[] write(ResultsStore store, String examId, Path folder, boolean spreadsheetSafe)
+            throws IOException, StoreException {
         Files.createDirectories(folder);
         long[] counts = new long[3];
-        try (Writer out = open(folder.resolve("responses.csv"))) {
+        try (Writer out = open(folder.resolve("responses.csv"), spreadsheetSafe)) {
             Csv.writeRow(out, RESPONSE_COLUMNS);
             store.forEachResponse(examId, r -> row(out, List.of(r.examId(), r.candidateNumber(), nz(r.level()), r.formId(),
                     r.packageId(), String.valueOf(r.position() + 1), r.taskId(), r.conditionId(), r.spelling(),
@@ -45,7 +52,7 @@ public final class TidyCsvExport {
                     nz(r.startedAt()), nz(r.endedAt()), String.valueOf(r.extraTimeSeconds()), r.endReason(),
                     nz(r.submittedAt()), String.valueOf(r.copies()), r.installationFingerprint(), r.text()), counts, 0));
         }
-        try (Writer out = open(folder.resolve("tool_use.csv"))) {
+        try (Writer out = open(folder.resolve("tool_use.csv"), spreadsheetSafe)) {
             Csv.writeRow(out, TOOL_USE_COLUMNS);
             store.forEachToolUse(examId, u -> row(out, List.of(u.examId(), u.candidateNumber(), u.packageId(), u.taskId(),
                     u.conditionId(), u.tool(), String.valueOf(u.queries()), String.valueOf(u.emptyQueries()),
@@ -53,7 +60,7 @@ public final class TidyCsvExport {
                     String.valueOf(u.suggestionsAccepted()), String.valueOf(u.suggestionsIgnored()),
                     String.valueOf(u.insertions())), counts, 1));
         }
-        try (Writer out = open(folder.resolve("events.csv"))) {
+        try (Writer out = open(folder.resolve("events.csv"), spreadsheetSafe)) {
             Csv.writeRow(out, EVENT_COLUMNS);
             store.forEachEvent(examId, e -> row(out, List.of(e.examId(), e.candidateNumber(), e.packageId(),
                     String.valueOf(e.seq()), e.at(), String.valueOf(e.mono()), e.type(), nz(e.taskId()), e.dataJson()),
@@ -62,8 +69,9 @@ public final class TidyCsvExport {
         return counts;
     }
 
-    private static Writer open(Path file) throws IOException {
-        return new BufferedWriter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), 1 << 16);
+    private static Writer open(Path file, boolean spreadsheetSafe) throws IOException {
+        Writer w = new BufferedWriter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), 1 << 16);
+        return spreadsheetSafe ? SpreadsheetSafe.writer(w) : w;
     }
 
     private static void row(Writer out, List<String> fields, long[] counts, int i) {

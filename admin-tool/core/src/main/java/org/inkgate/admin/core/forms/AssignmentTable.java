@@ -99,7 +99,7 @@ public final class AssignmentTable {
         String name = file.getFileName().toString();
         List<Csv.Row> rows;
         try {
-            rows = Csv.parse(java.nio.file.Files.readString(file, StandardCharsets.UTF_8));
+            rows = Csv.parse(org.inkgate.format.io.Utf8Text.read(file));
         } catch (Csv.CsvSyntaxException e) {
             throw new InvalidSourceException("the assignment " + file + " cannot be used",
                     List.of(new Problem(name, e.line(), 0, "", e.getMessage())));

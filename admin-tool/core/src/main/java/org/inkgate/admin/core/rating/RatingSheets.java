@@ -123,6 +123,10 @@ public final class RatingSheets {
         int blank = 0;
         for (Csv.Row row : rows.subList(1, rows.size())) {
             long line = row.line();
+            if (problems.size() >= org.inkgate.admin.core.csv.ProblemLimit.MAX) {
+                problems.add(new Problem(file, line, "-", org.inkgate.admin.core.csv.ProblemLimit.STOPPED));
+                break;
+            }
             List<String> f = row.fields();
             if (f.size() != header.size()) {
                 problems.add(new Problem(file, line, "-", "has " + f.size() + " fields but the header has "

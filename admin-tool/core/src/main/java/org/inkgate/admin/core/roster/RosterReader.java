@@ -1,10 +1,6 @@
 package org.inkgate.admin.core.roster;
 
 import java.io.IOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -14,7 +10,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import java.util.regex.Pattern;
+import org.inkgate.format.bundle.CandidateNumber;
 import org.inkgate.admin.core.csv.Csv;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.admin.core.source.Problem;
@@ -35,7 +31,6 @@ public final class RosterReader {
     public static final String HIGH_CONTRAST = "high_contrast";
     private static final Set<String> KNOWN = Set.of(CANDIDATE, LEVEL, FIRST_LANGUAGE, EXTRA_TIME, LARGE_PRINT, HIGH_CONTRAST);
     /** Candidate numbers are typed at sign-in and become file and id parts: keep them plain. */
-    private static final Pattern NUMBER = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_-]{0,31}");
 
     private RosterReader() {
     }
@@ -44,11 +39,10 @@ public final class RosterReader {
         String name = file.getFileName().toString();
         String text;
         try {
-            text = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(Files.readAllBytes(file))).toString();
-        } catch (CharacterCodingException e) {
+            text = org.inkgate.format.io.Utf8Text.decode(name, Files.readAllBytes(file));
+        } catch (org.inkgate.format.io.Utf8Text.NotUtf8Exception e) {
             throw new InvalidSourceException("the roster " + file + " cannot be used",
-                    List.of(new Problem(name, 0, 0, "", "is not UTF-8 text; save it as \"CSV UTF-8\"")));
+                    List.of(new Problem(name, (int) e.line(), 0, "", e.getMessage().substring(name.length() + 1))));
         } catch (IOException e) {
             throw new InvalidSourceException("the roster " + file + " cannot be used",
                     List.of(new Problem(name, 0, 0, "", "cannot be read: " + e.getMessage())));
@@ -90,6 +84,10 @@ public final class RosterReader {
         Map<String, Integer> seen = new HashMap<>();
         for (Csv.Row row : rows.subList(1, rows.size())) {
             int line = row.line();
+            if (problems.size() >= org.inkgate.admin.core.csv.ProblemLimit.MAX) {
+                problems.add(new Problem(name, line, 0, "", org.inkgate.admin.core.csv.ProblemLimit.STOPPED));
+                break;
+            }
             List<String> f = row.fields();
             if (f.size() != header.size()) {
                 problems.add(new Problem(name, line, 0, "", "has " + f.size() + " fields but the header has "
@@ -98,9 +96,10 @@ public final class RosterReader {
             }
             int before = problems.size();
             String number = f.get(col.get(CANDIDATE)).strip();
-            if (!NUMBER.matcher(number).matches()) {
-                problems.add(new Problem(name, line, col.get(CANDIDATE) + 1, CANDIDATE, "\"" + number
-                        + "\" is not a usable candidate number: use 1-32 letters, digits, '-' or '_'"));
+            if (!CandidateNumber.isValid(number)) {
+                problems.add(new Problem(name, line, col.get(CANDIDATE) + 1, CANDIDATE, "\""
+                        + org.inkgate.format.refusal.FormatRefusal.printable(number)
+                        + "\" is not a usable candidate number: use " + CandidateNumber.RULE));
             } else {
                 Integer first = seen.putIfAbsent(number, line);
                 if (first != null) {

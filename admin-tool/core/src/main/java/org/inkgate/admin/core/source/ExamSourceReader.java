@@ -427,6 +427,11 @@ public final class ExamSourceReader {
                         + ". Name a file inside the exam folder with a relative path using '/'");
                 return false;
             }
+            String outside = InsideFolder.problem(folder, name);
+            if (outside != null) {
+                c.problem(at, outside);
+                return false;
+            }
             return true;
         }
 
@@ -471,6 +476,11 @@ public final class ExamSourceReader {
             Path file = folder.resolve(name);
             if (!Files.isRegularFile(file)) {
                 problems.add(new Problem(EXAM_FILE, 0, 0, "rubric", "\"" + name + "\" does not exist in the exam folder"));
+                return null;
+            }
+            String outside = InsideFolder.problem(folder, name);
+            if (outside != null) {
+                problems.add(new Problem(EXAM_FILE, 0, 0, "rubric", outside));
                 return null;
             }
             byte[] bytes;

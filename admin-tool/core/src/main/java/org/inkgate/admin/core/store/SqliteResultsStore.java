@@ -1,7 +1,6 @@
 package org.inkgate.admin.core.store;
 
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.DriverManager;
@@ -57,10 +56,8 @@ public final class SqliteResultsStore implements ResultsStore {
     /** Opens the store migrated to {@code version} only: for migration tests. */
     static SqliteResultsStore open(Path file, int version) throws StoreException {
         try {
-            Path parent = file.toAbsolutePath().getParent();
-            if (parent != null) {
-                Files.createDirectories(parent);
-            }
+            // created owner-only before SQLite opens it, so its -wal and -shm files are too
+            org.inkgate.format.io.OwnerOnly.file(file);
             SQLiteConfig config = new SQLiteConfig();
             config.enforceForeignKeys(true);
             config.setJournalMode(SQLiteConfig.JournalMode.WAL);

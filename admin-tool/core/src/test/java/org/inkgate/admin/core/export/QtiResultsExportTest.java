@@ -71,7 +71,8 @@ class QtiResultsExportTest {
                 ResponseDocument d = client.document(number, sitting.formOf(number), 1, "6f1c2d3e-0000-4000-8000-000000000001");
                 List<TaskResponse> tasks = new ArrayList<>();
                 for (TaskResponse t : d.tasks()) {
-                    tasks.add(new TaskResponse(t.taskId(), t.conditionId(), AWKWARD, t.wordCount(), t.startedAt(),
+                    tasks.add(new TaskResponse(t.taskId(), t.conditionId(), AWKWARD,
+                            org.inkgate.format.response.WordCount.of(AWKWARD), t.startedAt(),
                             t.endedAt(), t.extraTimeSeconds(), t.policy(), t.toolsOffered(), t.toolUse(), t.endReason()));
                 }
                 client.write(new ResponseDocument(d.format(), d.schemaVersion(), d.packageId(), d.examId(),
@@ -81,8 +82,11 @@ class QtiResultsExportTest {
                 client.write(number, sitting.formOf(number), number.hashCode(), 20, packages.resolve(number + ".inkresp"));
             }
         }
-        // a package whose candidate number tries to climb out of the output folder (off the roster)
-        client.write(FORGED, sitting.formOf("0002"), 99, 20, packages.resolve("forged.inkresp"));
+        // a package whose candidate number tries to climb out of the output folder (off the roster): collect
+        // refuses it now (candidate-number), but a store written before that rule may hold one, so it goes
+        // into the store directly below and the export must still keep it inside the folder
+        Path forged = dir.resolve("forged.inkresp");
+        client.write(FORGED, sitting.formOf("0002"), 99, 20, forged);
         db = dir.resolve("results.db");
         try (ResultsStore store = SqliteResultsStore.open(db)) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
@@ -90,6 +94,10 @@ class QtiResultsExportTest {
             store.registerRubric("test-exam", sitting.exam().rubric());
             new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                     Map.of(sitting.manifestSha256(), sitting.manifest()), 2).collect(Collector.packageFiles(List.of(packages)), o -> { });
+            var opened = new org.inkgate.format.response.ResponsePackageReader(TestKeys.OWNER_ENCRYPTION,
+                    TestKeys.installations()).open(forged);
+            store.importSitting(org.inkgate.admin.core.store.SittingRecord.of(opened, "forged-before-the-rule",
+                    forged.toString()));
         }
         try (SqliteRatingStore rating = SqliteRatingStore.open(db, "test-exam")) {
             rating.addRater("R01", "Invented rater one", null);

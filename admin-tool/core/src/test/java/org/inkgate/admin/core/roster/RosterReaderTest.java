@@ -34,7 +34,7 @@ class RosterReaderTest {
                 """));
         List<String> p = e.problems().stream().map(Problem::toString).toList();
         assertEquals(List.of(
-                "r.csv:3:1: candidate_number: \"A 002\" is not a usable candidate number: use 1-32 letters, digits, '-' or '_'",
+                "r.csv:3:1: candidate_number: \"A 002\" is not a usable candidate number: use 1-32 letters, digits, '-' or '_', starting with a letter or digit",
                 "r.csv:4:1: candidate_number: candidate A-001 is already on line 2; each candidate appears once",
                 "r.csv:4:2: level: is empty; give the proficiency level forms are balanced within (e.g. B1)",
                 "r.csv:4:3: extra_time_percent: \"500\" is not a whole percentage from 0 to 400 (25 means a quarter more time)",
