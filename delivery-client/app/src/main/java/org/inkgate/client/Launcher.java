@@ -53,6 +53,11 @@ public final class Launcher {
         try {
             switch (command) {
                 case LaunchCommand.ShowHelp help -> System.out.println(LaunchCommand.USAGE);
+                case LaunchCommand.ShowVersion version -> {
+                    for (String line : org.inkgate.packs.cli.ReleaseVersion.lines("inkgate-client")) {
+                        System.out.println(line);
+                    }
+                }
                 case LaunchCommand.PracticeDemo demo -> practise(demoBundleCopy());
                 case LaunchCommand.PracticeFile file -> practise(file.bundle());
                 case LaunchCommand.DemoSitting demo -> {

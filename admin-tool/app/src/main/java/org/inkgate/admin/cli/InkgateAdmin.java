@@ -1,5 +1,6 @@
 package org.inkgate.admin.cli;
 
+import org.inkgate.packs.cli.StandardOptions;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -9,7 +10,7 @@ import picocli.CommandLine.Command;
  * input has problems (listed), 2 wrong usage, 3 done but something needs attention (refused
  * packages, conflicts, missing responses).
  */
-@Command(name = "inkgate-admin", mixinStandardHelpOptions = true, versionProvider = InkgateAdmin.Version.class,
+@Command(name = "inkgate-admin", mixinStandardHelpOptions = true, versionProvider = org.inkgate.packs.cli.ReleaseVersion.class,
         description = "Prepare, bundle and collect Inkgate writing exams.",
         subcommands = {
             // one line per command
@@ -48,7 +49,7 @@ public final class InkgateAdmin {
 
     /** A configured command line, for the launcher and for tests. */
     public static CommandLine commandLine() {
-        CommandLine cl = new CommandLine(new InkgateAdmin());
+        CommandLine cl = StandardOptions.apply(new CommandLine(new InkgateAdmin()), "inkgate-admin");
         cl.setExecutionExceptionHandler((e, cmd, parsed) -> {
             // expected failures (files, keys, store) carry a message meant for people: no stack trace
             boolean expected = e instanceof java.io.IOException || e instanceof IllegalArgumentException
