@@ -40,6 +40,7 @@ public final class Launcher {
     }
 
     public static void main(String[] args) {
+        org.inkgate.packs.cli.QuietJdkLogging.install();
         LaunchCommand command;
         try {
             command = LaunchCommand.parse(List.of(args));

@@ -68,6 +68,7 @@ public final class InkgateAdmin {
     }
 
     public static void main(String[] args) {
+        org.inkgate.packs.cli.QuietJdkLogging.install();
         System.exit(commandLine().execute(args));
     }
 }
