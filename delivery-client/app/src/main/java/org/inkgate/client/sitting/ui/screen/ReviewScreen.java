@@ -6,7 +6,6 @@ import javafx.scene.control.Button;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.Label;
 import javafx.scene.layout.HBox;
-import javafx.scene.layout.Region;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.inkgate.client.sitting.ui.Parts;
@@ -36,10 +35,10 @@ public final class ReviewScreen {
             HBox.setHgrow(title, Priority.ALWAYS);
             Label words = new Label(row.words() + (row.words() == 1 ? " word" : " words"));
             words.getStyleClass().add("review-words");
-            words.setMinWidth(Region.USE_PREF_SIZE);
+            words.setMinWidth(120);
             Label guidance = new Label(row.guidance() == null ? "" : row.guidance());
             guidance.getStyleClass().add("quiet-note");
-            guidance.setMinWidth(Region.USE_PREF_SIZE);
+            guidance.setMinWidth(220);
             HBox line = new HBox(title, words, guidance);
             line.getStyleClass().add("review-row");
             line.setAccessibleText(row.title() + ": " + words.getText() + ". " + guidance.getText());
@@ -53,8 +52,9 @@ public final class ReviewScreen {
                 Parts.heading("Check before you hand in"),
                 Parts.text("Your tasks are finished. This is what will be handed in. After you hand in,"
                         + " nothing can be changed."),
-                table);
-        root = Parts.cardWithActions("reviewScreen", new VBox(10, sure, submit), box);
+                table,
+                sure, submit);
+        root = Parts.card("reviewScreen", box);
     }
 
     public Parent root() {

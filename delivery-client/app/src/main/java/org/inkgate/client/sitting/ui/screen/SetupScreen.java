@@ -90,7 +90,8 @@ public final class SetupScreen {
             fields.getChildren().add(demo);
         }
         Button exit = Parts.plain("setupExit", "E_xit", onExit);
-        root = Parts.cardWithActions("setupScreen", new VBox(8, error, new HBox(12, go, exit)), fields);
+        fields.getChildren().addAll(error, new HBox(12, go, exit));
+        root = Parts.card("setupScreen", fields);
     }
 
     /**
@@ -132,7 +133,7 @@ public final class SetupScreen {
 
     /** Where focus starts. */
     public void focus() {
-        Parts.focusWhenShown(pin);
+        pin.requestFocus();
     }
 
     /** Says what is wrong and clears the secret fields. */
