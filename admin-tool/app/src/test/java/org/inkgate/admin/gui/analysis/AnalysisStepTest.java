@@ -144,6 +144,47 @@ class AnalysisStepTest {
     }
 
     @Test
+    void anchorFile_fromAnEarlierRun_givesTheWindowTheCommandLinesAnchoredReport(FxRobot robot) throws Exception {
+        Path earlier = dir.resolve("earlier");
+        Path cliOut = dir.resolve("anchored-cli");
+        cli("analyse", "--store", rated.file().toString(), "--out", earlier.toString(), "--mfrm-facets",
+                "task,rater,criterion");
+        Path anchors = earlier.resolve("mfrm_anchors.csv");
+        assertTrue(Files.isRegularFile(anchors), "the earlier run wrote its anchor file");
+        cli("analyse", "--store", rated.file().toString(), "--out", cliOut.toString(), "--mfrm-facets",
+                "task,rater,criterion", "--mfrm-anchors", anchors.toString());
+
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        robot.interact(() -> session.store().set(rated.file()));
+        select(robot);
+        Path guiOut = dir.resolve("anchored-window");
+        setText(robot, "#analysisOut", guiOut.toString());
+        robot.interact(() -> {
+            robot.lookup("#analysisRasch").queryAs(CheckBox.class).setSelected(true);
+            for (String f : List.of("task", "rater", "criterion")) {
+                robot.lookup("#facet-" + f).queryAs(CheckBox.class).setSelected(true);
+            }
+        });
+        setText(robot, "#analysisAnchors", anchors.toString());
+        robot.interact(() -> robot.lookup("#analyse").queryButton().fire());
+        waitForWork(session);
+        assertTrue(label(robot, "#analysisResult").startsWith("Report written"), label(robot, "#analysisResult"));
+        JsonNode cli = comparable(cliOut.resolve("summary.json"));
+        assertTrue(cli.toString().contains(anchors.toString()), "the anchor file is among the run's inputs");
+        assertEquals(cli, comparable(guiOut.resolve("summary.json")), "the same anchored report");
+    }
+
+    private static void cli(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        CommandLine cl = InkgateAdmin.commandLine();
+        cl.setOut(new PrintWriter(out, true));
+        cl.setErr(new PrintWriter(err, true));
+        assertEquals(0, cl.execute(args), out + "\n" + err);
+    }
+
+    @Test
     void cancel_afterTheReportIsWrittenAside_leavesNoReportAndNoPartialFolder() throws Exception {
         Path out = dir.resolve("report-cancelled");
         List<String> stages = new ArrayList<>();
@@ -229,7 +270,7 @@ class AnalysisStepTest {
         WebView web = robot.lookup("#reportView").queryAs(WebView.class);
         WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> WaitForAsyncUtils.asyncFx(() -> web.getEngine()
                 .getLoadWorker().getState() == javafx.concurrent.Worker.State.SUCCEEDED).get());
-        robot.interact(() -> robot.lookup(".step-scroll").queryAs(javafx.scene.control.ScrollPane.class).setVvalue(0.62));
+        robot.interact(() -> robot.lookup(".step-scroll").queryAs(javafx.scene.control.ScrollPane.class).setVvalue(0.5));
         AtomicReference<java.awt.image.BufferedImage> image = new AtomicReference<>();
         Scene scene = stage.getScene();
         WaitForAsyncUtils.waitForFxEvents();
