@@ -48,6 +48,7 @@ public final class AnalysisModel {
     private final StringProperty warnings = new SimpleStringProperty("");
     private final StringProperty commandLine = new SimpleStringProperty("");
     private final ObjectProperty<Path> report = new SimpleObjectProperty<>();
+    private final BooleanProperty running = new SimpleBooleanProperty(false);
 
     public AnalysisModel(AdminSession session) {
         this.session = session;
@@ -147,6 +148,14 @@ public final class AnalysisModel {
         return report;
     }
 
+    /**
+     * True while this step's analysis runs: only it may be cancelled (the other steps' jobs, such as
+     * collect, do not stop halfway and must not be reported as cancelled).
+     */
+    public BooleanProperty running() {
+        return running;
+    }
+
     /** Opens the written report in the system browser; false when the window has none. */
     public boolean openInBrowser() {
         Path html = report.get();
@@ -170,6 +179,7 @@ public final class AnalysisModel {
         commandLine.set("inkgate-admin analyse " + String.join(" ",
                 request.arguments().stream().map(org.inkgate.admin.study.AnalyseProvenance::quoted).toList()));
         result.set("Analysing ...");
+        running.set(true);
         List<String> heard = new ArrayList<>();
         session.work().run("Analysing", progress -> AnalysisRun.run(request, new AnalysisRun.Listener() {
             @Override
@@ -189,6 +199,7 @@ public final class AnalysisModel {
                 return progress.cancelled();
             }
         }), written -> {
+            running.set(false);
             report.set(written.html());
             result.set("Report written to " + written.html() + " (" + written.ratings() + " ratings"
                     + (written.exam() == null ? "" : " of exam " + written.exam()) + "). Tables are in "
@@ -196,9 +207,13 @@ public final class AnalysisModel {
                     + ".");
             showWarnings(heard);
         }, message -> {
+            running.set(false);
             result.set("No report was written.\n" + message);
             showWarnings(heard);
-        }, () -> result.set("Cancelled. No report was written; the output folder is as it was."));
+        }, () -> {
+            running.set(false);
+            result.set("Cancelled. No report was written; the output folder is as it was.");
+        });
     }
 
     private void showWarnings(List<String> heard) {
@@ -284,6 +299,8 @@ public final class AnalysisModel {
 
     /** Cancels a running analysis. */
     public void cancel() {
-        session.work().cancel();
+        if (running.get()) {
+            session.work().cancel();
+        }
     }
 }

@@ -120,7 +120,7 @@ public final class AnalysisView implements Step {
         Button cancel = new Button("Cancel");
         cancel.setId("cancelAnalysis");
         cancel.setAccessibleText("Cancel the running analysis; nothing is written");
-        cancel.disableProperty().bind(work.busy().not());
+        cancel.disableProperty().bind(model.running().not());
         cancel.setOnAction(e -> model.cancel());
         Label result = new Label();
         result.setId("analysisResult");

@@ -185,6 +185,23 @@ class AnalysisStepTest {
     }
 
     @Test
+    void aStoreThatIsNotThere_isRefusedInPlainWords_andNothingIsWritten(FxRobot robot) throws Exception {
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        select(robot);
+        Path missing = dir.resolve("no-such-store.db");
+        setText(robot, "#analysisStore", missing.toString());
+        Path out = dir.resolve("report-refused");
+        setText(robot, "#analysisOut", out.toString());
+        robot.interact(() -> robot.lookup("#analyse").queryButton().fire());
+        waitForWork(session);
+        String result = label(robot, "#analysisResult");
+        assertTrue(result.startsWith("No report was written.\nno results store at " + missing), result);
+        assertFalse(result.contains("Unexpected problem"), result);
+        assertFalse(Files.exists(out));
+    }
+
+    @Test
     void cancel_afterTheReportIsWrittenAside_leavesNoReportAndNoPartialFolder() throws Exception {
         Path out = dir.resolve("report-cancelled");
         List<String> stages = new ArrayList<>();
