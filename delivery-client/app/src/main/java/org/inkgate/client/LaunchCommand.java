@@ -17,7 +17,7 @@ public sealed interface LaunchCommand {
                    inkgate-client --demo [--data FOLDER]
                    inkgate-client --practice [FILE.inkexam]
                    inkgate-client --installation [--seat LABEL] [--out FOLDER] [--data FOLDER]
-                   inkgate-client --help
+                   inkgate-client --help | --version
 
               --sitting FILE.inkexam  open a live sitting: locked full screen, invigilator PIN, roster
               --owner-key FINGERPRINT the test owner's published key fingerprint; only a bundle signed
@@ -35,6 +35,7 @@ public sealed interface LaunchCommand {
                                       (default: the host name)
               --out FOLDER            with --installation: where to write the file (default: here)
               --help                  show this help
+              --version               show the release number and the Java runtime
 
             A live sitting locks the window as far as an application can; the operating system's own
             kiosk or assigned-access setting must do the rest (see docs/invigilator-guide.md).
@@ -43,6 +44,10 @@ public sealed interface LaunchCommand {
 
     /** Print the usage text. */
     record ShowHelp() implements LaunchCommand {
+    }
+
+    /** Print the release number. */
+    record ShowVersion() implements LaunchCommand {
     }
 
     /** Practise on the demo bundle built into the client. */
@@ -100,6 +105,7 @@ public sealed interface LaunchCommand {
         String first = args.getFirst();
         return switch (first) {
             case "--help", "-h" -> onlyArgument(args, new ShowHelp());
+            case "--version", "-V" -> onlyArgument(args, new ShowVersion());
             case "--practice" -> practice(args.subList(1, args.size()));
             case "--demo" -> demo(args.subList(1, args.size()));
             case "--sitting" -> sitting(args.subList(1, args.size()));

@@ -40,6 +40,7 @@ public final class Launcher {
     }
 
     public static void main(String[] args) {
+        org.inkgate.packs.cli.QuietJdkLogging.install();
         LaunchCommand command;
         try {
             command = LaunchCommand.parse(List.of(args));
@@ -53,6 +54,11 @@ public final class Launcher {
         try {
             switch (command) {
                 case LaunchCommand.ShowHelp help -> System.out.println(LaunchCommand.USAGE);
+                case LaunchCommand.ShowVersion version -> {
+                    for (String line : org.inkgate.packs.cli.ReleaseVersion.lines("inkgate-client")) {
+                        System.out.println(line);
+                    }
+                }
                 case LaunchCommand.PracticeDemo demo -> practise(demoBundleCopy());
                 case LaunchCommand.PracticeFile file -> practise(file.bundle());
                 case LaunchCommand.DemoSitting demo -> {

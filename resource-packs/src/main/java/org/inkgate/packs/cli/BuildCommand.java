@@ -88,6 +88,16 @@ final class BuildCommand implements Callable<Integer> {
         }
     }
 
+    /** extJWNL is an optional dependency: the admin tool and the client leave it out. */
+    static boolean wordNetOnClassPath() {
+        try {
+            Class.forName("net.sf.extjwnl.dictionary.Dictionary", false, BuildCommand.class.getClassLoader());
+            return BuildCommand.class.getClassLoader().getResource("net/sf/extjwnl/data/wordnet/wn31/index.sense") != null;
+        } catch (ClassNotFoundException e) {
+            return false;
+        }
+    }
+
     @Command(name = "dictionary", mixinStandardHelpOptions = true,
             description = "Write the WordNet 3.1 English dictionary pack (needs extJWNL and its WordNet data on the class path).")
     static final class Dictionary implements Callable<Integer> {
@@ -100,6 +110,13 @@ final class BuildCommand implements Callable<Integer> {
 
         @Override
         public Integer call() {
+            if (!wordNetOnClassPath()) {
+                spec.commandLine().getErr().println("pack not written: the dictionary pack is made from WordNet 3.1"
+                        + " (extJWNL and its data), which this program does not carry. Build it from the source tree"
+                        + " with  mvn -q -B -pl resource-packs package  (it writes"
+                        + " resource-packs/target/packs/wordnet-3.1-en.inkpack), then name that file in exam.yaml.");
+                return ExitCodes.BAD_SOURCE;
+            }
             try {
                 PackManifest m = WordNetPackBuilder.build(out, ScratchFolder.defaultParent(), builtAt(builtAt));
                 report(spec.commandLine().getOut(), out, m);

@@ -9,7 +9,6 @@ import picocli.CommandLine.Spec;
 /** {@code pack}: build, inspect, verify and search resource packs. Embeddable as a subcommand of the admin CLI. */
 @Command(name = "pack",
         mixinStandardHelpOptions = true,
-        version = "Inkgate resource packs 0.1",
         description = "Build, inspect, verify and search .inkpack resource packs (glossaries and dictionaries).",
         subcommands = {BuildCommand.class, InspectCommand.class, VerifyCommand.class, SearchCommand.class},
         exitCodeListHeading = "%nExit codes:%n",
@@ -32,6 +31,6 @@ public final class PackCommand implements Callable<Integer> {
 
     /** A command line for {@code pack}; picocli's defaults give 2 for usage errors and 1 for unexpected exceptions. */
     public static CommandLine commandLine() {
-        return new CommandLine(new PackCommand());
+        return StandardOptions.apply(new CommandLine(new PackCommand()), "inkgate pack");
     }
 }

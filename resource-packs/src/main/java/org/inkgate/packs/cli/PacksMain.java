@@ -6,6 +6,7 @@ public final class PacksMain {
     }
 
     public static void main(String[] args) {
+        QuietJdkLogging.install();
         System.exit(PackCommand.commandLine().execute(args));
     }
 }

@@ -53,10 +53,13 @@ public final class TbxImporter {
             boolean rootSeen = false;
             while (reader.hasNext()) {
                 int event = reader.next();
-                if (event == XMLStreamConstants.DTD) {
-                    throw error(where, reader.getLocation(), "the file declares a DTD; TBX files are read without DTDs "
-                            + "for safety: remove the <!DOCTYPE ...> line");
+                if (event == XMLStreamConstants.DTD && declaresInternalSubset(reader.getText())) {
+                    throw error(where, reader.getLocation(), "the <!DOCTYPE ...> line declares its own entities or"
+                            + " markup in [ ... ]; TBX files are read without DTDs for safety: remove the part in"
+                            + " square brackets (or the whole line) and write characters themselves");
                 }
+                // a plain <!DOCTYPE martif SYSTEM "TBXcoreStructV02.dtd">, as older term bases and converters write it:
+                // the DTD is never opened (SUPPORT_DTD is off), so the line is skipped
                 if (event == XMLStreamConstants.ENTITY_REFERENCE) {
                     throw error(where, reader.getLocation(), "entity reference &" + reader.getLocalName()
                             + "; is not allowed: write the character itself or a numeric reference");
@@ -100,6 +103,28 @@ public final class TbxImporter {
                 }
             }
         }
+    }
+
+    /**
+     * True when a DOCTYPE carries an internal subset ({@code [ ... ]}): only there can a file declare
+     * entities of its own (XML 1.0, section 2.8); a bare external identifier is harmless unread.
+     */
+    static boolean declaresInternalSubset(String doctype) {
+        if (doctype == null) {
+            return false;
+        }
+        int quote = 0;
+        for (int i = 0; i < doctype.length(); i++) {
+            char c = doctype.charAt(i);
+            if (quote != 0) {
+                quote = c == quote ? 0 : quote;
+            } else if (c == '"' || c == '\'') {
+                quote = c;
+            } else if (c == '[') {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Reads the element the reader stands on, with everything inside it, as a small tree. */

@@ -15,9 +15,15 @@ final class TbxMapping {
         List<String> notes = new ArrayList<>();
         List<LanguageSection> sections = new ArrayList<>();
         List<GlossaryField> other = new ArrayList<>();
+        String conceptDefinition = null;
         for (Node n : concept.children()) {
             String cat = n.category();
-            if (isDescrip(n) && "subjectField".equals(cat) && subject == null) {
+            if (isDescrip(n) && "definition".equals(cat) && conceptDefinition == null) {
+                conceptDefinition = n.value();
+            } else if (n.name().equals("descripGrp") && "definition".equals(mainCategory(n)) && conceptDefinition == null) {
+                conceptDefinition = main(n).value();
+                keepCompanions(n, "definition", other);
+            } else if (isDescrip(n) && "subjectField".equals(cat) && subject == null) {
                 subject = n.value();
             } else if (n.name().equals("descripGrp") && "subjectField".equals(mainCategory(n)) && subject == null) {
                 subject = main(n).value();
@@ -33,6 +39,16 @@ final class TbxMapping {
         if (sections.isEmpty()) {
             throw TbxImporter.error(where, concept.location(), "concept \"" + id + "\" has no langSec (or langSet); "
                     + "every concept needs at least one language section with a term");
+        }
+        if (conceptDefinition != null) {
+            // ISO 30042 allows the definition at concept level (it describes the concept in every language);
+            // a language section without a definition of its own shows that one
+            List<LanguageSection> withDefinition = new ArrayList<>();
+            for (LanguageSection s : sections) {
+                withDefinition.add(s.definition() != null ? s
+                        : new LanguageSection(s.language(), conceptDefinition, s.notes(), s.terms(), s.other()));
+            }
+            sections = withDefinition;
         }
         return new GlossaryEntry(id, subject, notes, sections, other);
     }

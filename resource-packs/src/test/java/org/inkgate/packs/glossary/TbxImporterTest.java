@@ -87,6 +87,30 @@ class TbxImporterTest {
     }
 
     @Test
+    void read_legacyDoctypeLine_isReadWithoutTheDtd() throws Exception {
+        // legacy-v2-doctype.tbx names TBXcoreStructV02.dtd, which does not exist here: reading it would fail
+        List<GlossaryEntry> entries = read("legacy-v2-doctype.tbx");
+        assertEquals(1, entries.size());
+        assertEquals("ferry slip", entries.get(0).languages().get(0).terms().get(0).text());
+    }
+
+    @Test
+    void read_conceptLevelDefinition_isTheDefinitionOfSectionsWithoutTheirOwn() throws Exception {
+        // ISO 30042 (TBX) allows <descrip type="definition"> at concept level (termEntry/conceptEntry) [memory]
+        GlossaryEntry e = read("legacy-v2-doctype.tbx").get(0);
+        assertEquals("A landing stage where a ferry takes on passengers.", e.languages().get(0).definition());
+        assertEquals("Muelle donde el transbordador embarca pasajeros.", e.languages().get(1).definition(),
+                "a section's own definition wins");
+    }
+
+    @Test
+    void read_doctypeWithInternalSubset_isRefusedWithItsLine() {
+        GlossaryImportException e = assertThrows(GlossaryImportException.class, () -> read("internal-subset.tbx"));
+        assertEquals(2, e.line(), "the DOCTYPE is on line 2 of internal-subset.tbx");
+        assertTrue(e.getMessage().contains("square brackets"), e.getMessage());
+    }
+
+    @Test
     void read_mismatchedTag_reportsLineAndColumn() {
         GlossaryImportException e = assertThrows(GlossaryImportException.class, () -> read("malformed.tbx"));
         // malformed.tbx line 4: <term>comb</termSec> closes the wrong element

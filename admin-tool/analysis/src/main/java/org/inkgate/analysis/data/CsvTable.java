@@ -42,6 +42,12 @@ final class CsvTable {
         if (head.length > 0 && head[0].startsWith("\uFEFF")) {
             head[0] = head[0].substring(1);
         }
+        if (head.length == 1 && head[0].contains(";")) {
+            // a spreadsheet set to a language whose decimal mark is the comma saves CSV with semicolons
+            throw new InputRejected(List.of(new InputProblem(file, 1, null, "the file is separated by semicolons, not"
+                    + " commas: save it again as CSV with commas as separators (in the spreadsheet: \"CSV"
+                    + " (comma-separated)\", or a field delimiter of \",\")")));
+        }
         return new CsvTable(file, in, List.of(head));
     }
 

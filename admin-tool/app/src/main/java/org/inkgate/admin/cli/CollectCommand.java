@@ -86,6 +86,7 @@ final class CollectCommand implements Callable<Integer> {
         char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
         var encryptionKey = keyStore.encryptionKey(pass);
         CollectionRun.Report report;
+        Progress[] progress = {null};
         try {
             if (examSource != null) {
                 exam = ExamSourceReader.read(examSource);
@@ -95,14 +96,20 @@ final class CollectCommand implements Callable<Integer> {
                     n -> {
                         w.println("Collecting " + n + " package files into " + storeFile + " ...");
                         w.flush();
+                        progress[0] = Progress.onTerminal(err, "collect", n);
                     },
                     o -> {
                         if (o instanceof Outcome.Refused r) {
+                            progress[0].clear();
                             err.println("REFUSED " + TerminalText.value(r.file()) + " (" + TerminalText.value(r.reason()) + "): "
                                     + TerminalText.value(r.message()));
                             err.flush();
                         }
+                        progress[0].step();
                     });
+            if (progress[0] != null) {
+                progress[0].clear();
+            }
         } catch (InvalidSourceException | CollectionRun.BundleRefusedException e) {
             err.println(e.getMessage());
             return InkgateAdmin.PROBLEMS;

@@ -69,7 +69,7 @@ final class ExportCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
         XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
-        try (ResultsStore store = SqliteResultsStore.open(storeFile)) {
+        try (ResultsStore store = SqliteResultsStore.open(ExistingStore.require(storeFile))) {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
                 Path dir = OutputFolder.file(out, id);

@@ -1,5 +1,6 @@
 package org.inkgate.admin.cli;
 
+import org.inkgate.packs.cli.StandardOptions;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -9,7 +10,7 @@ import picocli.CommandLine.Command;
  * input has problems (listed), 2 wrong usage, 3 done but something needs attention (refused
  * packages, conflicts, missing responses).
  */
-@Command(name = "inkgate-admin", mixinStandardHelpOptions = true, versionProvider = InkgateAdmin.Version.class,
+@Command(name = "inkgate-admin", mixinStandardHelpOptions = true, versionProvider = org.inkgate.packs.cli.ReleaseVersion.class,
         description = "Prepare, bundle and collect Inkgate writing exams.",
         subcommands = {
             // one line per command
@@ -48,7 +49,7 @@ public final class InkgateAdmin {
 
     /** A configured command line, for the launcher and for tests. */
     public static CommandLine commandLine() {
-        CommandLine cl = new CommandLine(new InkgateAdmin());
+        CommandLine cl = StandardOptions.apply(new CommandLine(new InkgateAdmin()), "inkgate-admin");
         // every command prints through these: no control character from outside data reaches the terminal
         cl.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.OFF));
         cl.setOut(TerminalText.guard(cl.getOut()));
@@ -71,6 +72,7 @@ public final class InkgateAdmin {
     }
 
     public static void main(String[] args) {
+        org.inkgate.packs.cli.QuietJdkLogging.install();
         System.exit(commandLine().execute(args));
     }
 }

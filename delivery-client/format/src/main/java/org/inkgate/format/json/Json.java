@@ -82,8 +82,14 @@ public final class Json {
     }
 
     public static <T> T bind(String file, String entry, byte[] bytes, Class<T> type) throws MalformedJson {
+        return bind(file, entry, bytes, 0, bytes.length, type);
+    }
+
+    /** Binds {@code length} bytes from {@code offset}: one line of a larger buffer, without copying it out. */
+    public static <T> T bind(String file, String entry, byte[] bytes, int offset, int length, Class<T> type)
+            throws MalformedJson {
         try {
-            return MAPPER.readValue(bytes, type);
+            return MAPPER.readValue(bytes, offset, length, type);
         } catch (JsonProcessingException e) {
             throw located(file, entry, e);
         } catch (IOException | IllegalArgumentException e) {

@@ -4,10 +4,12 @@ import com.fasterxml.jackson.annotation.JsonPropertyOrder;
 import java.io.ByteArrayOutputStream;
 import java.nio.charset.StandardCharsets;
 import java.time.Instant;
+import java.security.MessageDigest;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
+import org.inkgate.format.crypto.Hex;
 import org.inkgate.format.crypto.Sha256;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.refusal.BrokenHashChain;
@@ -61,17 +63,35 @@ public final class EventChain {
 
     /** Decodes and checks the chain, naming the first line that breaks it. */
     public static List<ProcessEvent> decode(String file, String entry, byte[] encoded) throws FormatRefusal {
+        return decodeWithHead(file, entry, encoded).events();
+    }
+
+    /** The events of a checked chain and its head (what {@link #head} returns), from one pass. */
+    public record Decoded(List<ProcessEvent> events, String head) {
+    }
+
+    /**
+     * Decodes and checks the chain in one pass over the bytes: each line is parsed and hashed where
+     * it lies (no copy per line, one digest object), so the collector reads a log once.
+     */
+    public static Decoded decodeWithHead(String file, String entry, byte[] encoded) throws FormatRefusal {
         if (encoded.length > 0 && encoded[encoded.length - 1] != '\n') {
             throw new InvalidContent(file, "the event log \"" + entry + "\" does not end with a complete line (truncated?)");
         }
         List<ProcessEvent> events = new ArrayList<>();
+        MessageDigest digest = Sha256.newDigest();
         String prev = GENESIS;
         int number = 0;
-        for (byte[] line : lines(encoded)) {
+        int start = 0;
+        while (start < encoded.length) {
+            int end = start;
+            while (encoded[end] != '\n') {
+                end++;
+            }
             number++;
             Line parsed;
             try {
-                parsed = Json.bind(file, entry, line, Line.class);
+                parsed = Json.bind(file, entry, encoded, start, end - start, Line.class);
             } catch (MalformedJson e) {
                 throw new MalformedJson(file, entry, number, e.column(), "line " + number + " is not a valid event", e);
             }
@@ -82,9 +102,11 @@ public final class EventChain {
                 throw new InvalidContent(file, "the event log \"" + entry + "\" numbers line " + number + " as event " + parsed.seq());
             }
             events.add(new ProcessEvent(parsed.seq(), parsed.at(), parsed.mono(), parsed.type(), parsed.task(), parsed.data()));
-            prev = Sha256.hex(line);
+            digest.update(encoded, start, end - start);
+            prev = Hex.of(digest.digest());
+            start = end + 1;
         }
-        return events;
+        return new Decoded(events, prev);
     }
 
     private static List<byte[]> lines(byte[] encoded) {

@@ -77,7 +77,19 @@ public final class ResponsePackageReader {
         if (size > limits.maxArchiveBytes()) {
             throw new SizeLimitExceeded(name, "the package's size (" + size + " bytes)", limits.maxArchiveBytes());
         }
-        byte[] bytes = Files.readAllBytes(file);
+        return open(name, Files.readAllBytes(file));
+    }
+
+    /**
+     * Opens a package already read into memory, e.g. by a collector that hashed the file first to
+     * skip packages it already holds: the file is then read once, not twice.
+     *
+     * @param name the file name, for messages
+     */
+    public OpenedResponse open(String name, byte[] bytes) throws FormatRefusal, IOException {
+        if (bytes.length > limits.maxArchiveBytes()) {
+            throw new SizeLimitExceeded(name, "the package's size (" + bytes.length + " bytes)", limits.maxArchiveBytes());
+        }
         String packageSha256 = Sha256.hex(bytes);
         byte[] envelopeBytes;
         byte[] payload;
@@ -173,8 +185,9 @@ public final class ResponsePackageReader {
             checkFormat(name, responseTree, ResponseDocument.FORMAT, "response");
             checkSchemaVersion(name, responseTree, ResponseDocument.SCHEMA_VERSION, "response");
             ResponseDocument response = Json.bind(name, PackageLayout.RESPONSE, responseBytes, ResponseDocument.class);
-            List<ProcessEvent> events = EventChain.decode(name, PackageLayout.EVENTS, eventBytes);
-            if (events.size() != manifest.eventCount() || !EventChain.head(eventBytes).equals(manifest.chainHead())) {
+            EventChain.Decoded log = EventChain.decodeWithHead(name, PackageLayout.EVENTS, eventBytes);
+            List<ProcessEvent> events = log.events();
+            if (events.size() != manifest.eventCount() || !log.head().equals(manifest.chainHead())) {
                 throw new InvalidContent(name, "the event log does not end where the signed manifest says it ends");
             }
             checkPackageId(name, envelope.packageId(), manifest.packageId(), response.packageId());

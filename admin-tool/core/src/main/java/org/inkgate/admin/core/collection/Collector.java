@@ -135,12 +135,14 @@ public final class Collector {
             if (tooLarge != null) {
                 return new Read(file, null, null, null, null, new TooLarge(tooLarge), false);
             }
-            String sha = Sha256.hex(Files.readAllBytes(file));
+            // read once: the same bytes are hashed (to skip known packages) and opened
+            byte[] bytes = Files.readAllBytes(file);
+            String sha = Sha256.hex(bytes);
             if (known.contains(sha)) {
                 return new Read(file, sha, null, null, null, null, true);
             }
             try {
-                OpenedResponse opened = reader.open(file);
+                OpenedResponse opened = reader.open(file.getFileName().toString(), bytes);
                 // digest and row rendering here, on the reading threads, so the single writer only stores
                 return new Read(file, sha, opened, SittingRecord.of(opened, contentSha256(opened), file.toString()),
                         null, null, false);
@@ -159,17 +161,26 @@ public final class Collector {
      */
     static String contentSha256(OpenedResponse opened) {
         java.security.MessageDigest digest = Sha256.newDigest();
-        update(digest, Json.writeLine(opened.response()));
+        byte[] prefix = new byte[4];
+        update(digest, prefix, Json.writeLine(opened.response()));
+        StringBuilder line = new StringBuilder(128);
         for (org.inkgate.format.response.ProcessEvent e : opened.events()) {
-            update(digest, (e.seq() + "|" + e.at() + "|" + e.mono() + "|" + e.type() + "|" + e.task() + "|" + e.data())
-                    .getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            // the same characters as seq|at|mono|type|task|data by string concatenation: stored digests stay valid
+            line.setLength(0);
+            line.append(e.seq()).append('|').append(e.at()).append('|').append(e.mono()).append('|').append(e.type())
+                    .append('|').append(e.task()).append('|').append(e.data());
+            update(digest, prefix, line.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
         }
         return org.inkgate.format.crypto.Hex.of(digest.digest());
     }
 
-    private static void update(java.security.MessageDigest digest, byte[] bytes) {
+    private static void update(java.security.MessageDigest digest, byte[] prefix, byte[] bytes) {
         int n = bytes.length;
-        digest.update(new byte[] {(byte) (n >>> 24), (byte) (n >>> 16), (byte) (n >>> 8), (byte) n});
+        prefix[0] = (byte) (n >>> 24);
+        prefix[1] = (byte) (n >>> 16);
+        prefix[2] = (byte) (n >>> 8);
+        prefix[3] = (byte) n;
+        digest.update(prefix);
         digest.update(bytes);
     }
 

@@ -33,6 +33,18 @@ public final class Csv {
         }
     }
 
+    /**
+     * A hint for a header that is one field holding semicolons: a spreadsheet set to a language
+     * whose decimal mark is the comma saved the file with semicolons. Empty when the header is fine.
+     */
+    public static String semicolonHint(List<String> header) {
+        if (header.size() == 1 && header.get(0).contains(";")) {
+            return ". The file is separated by semicolons, not commas: save it again as CSV with commas as separators"
+                    + " (in the spreadsheet: \"CSV (comma-separated)\", or a field delimiter of \",\").";
+        }
+        return "";
+    }
+
     public static List<Row> parse(String text) throws CsvSyntaxException {
         if (text.startsWith("\uFEFF")) {
             text = text.substring(1);

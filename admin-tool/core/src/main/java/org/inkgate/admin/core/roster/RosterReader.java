@@ -74,7 +74,8 @@ public final class RosterReader {
         }
         for (String required : List.of(CANDIDATE, LEVEL)) {
             if (!col.containsKey(required)) {
-                problems.add(new Problem(name, 1, 0, required, "the column is missing from the first line; add it"));
+                problems.add(new Problem(name, 1, 0, required, "the column is missing from the first line; add it"
+                        + Csv.semicolonHint(header)));
             }
         }
         if (!problems.isEmpty()) {

@@ -35,8 +35,8 @@ public final class QuestionnaireScreen {
         VBox box = new VBox(14,
                 Parts.heading(questionnaire.title()),
                 Parts.quiet("These questions are not marked. You may leave any of them unanswered."),
-                items, done);
-        root = Parts.card("questionnaireScreen", box);
+                items);
+        root = Parts.cardWithActions("questionnaireScreen", done, box);
     }
 
     private VBox item(int number, QuestionItem item) {
@@ -95,6 +95,6 @@ public final class QuestionnaireScreen {
 
     public void focus() {
         likert.values().stream().findFirst().map(g -> g.getToggles().getFirst())
-                .ifPresentOrElse(t -> ((RadioButton) t).requestFocus(), done::requestFocus);
+                .ifPresentOrElse(t -> Parts.focusWhenShown((RadioButton) t), done::requestFocus);
     }
 }
