@@ -8,6 +8,8 @@ public final class AdminApp extends Application {
 
     @Override
     public void start(Stage stage) {
-        AdminWindow.show(stage, new AdminSession());
+        AdminSession session = new AdminSession();
+        session.browser(getHostServices()::showDocument);
+        AdminWindow.show(stage, session);
     }
 }

@@ -19,6 +19,7 @@ public final class AdminSession {
     private final ObjectProperty<Path> keys = new SimpleObjectProperty<>();
     private final ObjectProperty<Path> store = new SimpleObjectProperty<>();
     private final Work work = new Work();
+    private java.util.function.Consumer<String> browser;
 
     /** The exam folder as chosen (checked or not). */
     public ObjectProperty<Path> examFolder() {
@@ -48,6 +49,16 @@ public final class AdminSession {
 
     public ObjectProperty<Path> store() {
         return store;
+    }
+
+    /** Opens a file: URI in the system browser; set by the application (HostServices), null in tests that do not. */
+    public void browser(java.util.function.Consumer<String> opener) {
+        this.browser = opener;
+    }
+
+    /** The system browser, or null when the window was started without one. */
+    public java.util.function.Consumer<String> browser() {
+        return browser;
     }
 
     public Work work() {

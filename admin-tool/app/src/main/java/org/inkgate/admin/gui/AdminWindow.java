@@ -17,6 +17,8 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
+import org.inkgate.admin.gui.analysis.AnalysisModel;
+import org.inkgate.admin.gui.analysis.AnalysisView;
 import org.inkgate.admin.gui.bundle.BundleModel;
 import org.inkgate.admin.gui.bundle.BundleView;
 import org.inkgate.admin.gui.collect.CollectModel;
@@ -31,7 +33,7 @@ import org.inkgate.admin.gui.rating.DeskStep;
 import org.inkgate.admin.gui.rating.DeskStepModel;
 
 /**
- * The admin window: the steps in a list on the left (Ctrl+1 to Ctrl+6 jump to them), the chosen
+ * The admin window: the steps in a list on the left (Ctrl+1 to Ctrl+7 jump to them), the chosen
  * step in the middle, and a status line with progress at the bottom.
  */
 public final class AdminWindow {
@@ -51,7 +53,8 @@ public final class AdminWindow {
                 new BundleView(new BundleModel(session), work),
                 new CollectView(new CollectModel(session), work),
                 new MissingView(new MissingModel(session)),
-                new DeskStep(new DeskStepModel(session), work));
+                new DeskStep(new DeskStepModel(session), work),
+                new AnalysisView(new AnalysisModel(session), work));
         steps = new ListView<>(javafx.collections.FXCollections.observableArrayList(all));
         steps.setId("steps");
         steps.setAccessibleText("Steps");

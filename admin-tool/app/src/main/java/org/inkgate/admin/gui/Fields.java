@@ -51,6 +51,7 @@ public final class Fields {
         choose.setId(id + "Choose");
         choose.setAccessibleText("Choose " + label.toLowerCase(java.util.Locale.ROOT));
         choose.setOnAction(e -> choose(field, kind));
+        choose.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE); // never cut to "..." in a narrow window
         HBox box = new HBox(8, field, choose);
         HBox.setHgrow(field, Priority.ALWAYS);
         grid.add(l, 0, row);

@@ -27,6 +27,7 @@ public final class Messages {
             case CollectionRun.BundleRefusedException b -> m + " Nothing was imported.";
             case StoreException s -> "The results store: " + m + " Nothing else was changed.";
             case FormatRefusal r -> m;
+            case org.inkgate.admin.study.AnalysisRun.Refused a -> m; // the step says itself that no report was written
             case IOException io -> "A file could not be read or written: " + m + ". Check the path and permissions.";
             case IllegalArgumentException ia -> m;
             default -> "Unexpected problem (" + e.getClass().getSimpleName() + "): " + m

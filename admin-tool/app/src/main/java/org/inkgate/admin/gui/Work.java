@@ -21,6 +21,11 @@ public final class Work {
     /** Lets a job report how far it is; safe to call from the background thread. */
     public interface Progress {
         void update(long done, long total, String message);
+
+        /** True once the test owner cancelled the job; a job that can stop checks it between its parts. */
+        default boolean cancelled() {
+            return false;
+        }
     }
 
     /** A job run off the JavaFX thread. */
@@ -36,6 +41,7 @@ public final class Work {
     private final BooleanProperty busy = new SimpleBooleanProperty(false);
     private final DoubleProperty progress = new SimpleDoubleProperty(0);
     private final StringProperty message = new SimpleStringProperty("Ready.");
+    private Task<?> current;
 
     public BooleanProperty busy() {
         return busy;
@@ -54,16 +60,34 @@ public final class Work {
      * message for people (never a stack trace). Both are called on the JavaFX thread.
      */
     public <T> void run(String what, Job<T> job, Consumer<T> done, Consumer<String> failed) {
+        run(what, job, done, failed, () -> failed.accept(what + " was cancelled."));
+    }
+
+    /**
+     * As {@link #run(String, Job, Consumer, Consumer)}, for a job that stops when cancelled
+     * ({@link #cancel}); {@code cancelled} is called on the JavaFX thread at once.
+     */
+    public <T> void run(String what, Job<T> job, Consumer<T> done, Consumer<String> failed, Runnable cancelled) {
         Task<T> task = new Task<>() {
             @Override
             protected T call() throws Exception {
                 updateMessage(what + " ...");
-                return job.run((d, total, m) -> {
-                    updateProgress(d, total);
-                    updateMessage(m);
+                Task<T> self = this;
+                return job.run(new Progress() {
+                    @Override
+                    public void update(long d, long total, String m) {
+                        updateProgress(d, total);
+                        updateMessage(m);
+                    }
+
+                    @Override
+                    public boolean cancelled() {
+                        return self.isCancelled();
+                    }
                 });
             }
         };
+        current = task;
         busy.set(true);
         progress.unbind();
         message.unbind();
@@ -78,7 +102,22 @@ public final class Work {
             finish(what + ": failed. " + firstLine(text));
             failed.accept(text);
         });
+        task.setOnCancelled(e -> {
+            finish(what + ": cancelled.");
+            cancelled.run();
+        });
         executor.execute(task);
+    }
+
+    /**
+     * Asks the running job to stop. Only jobs that check {@link Progress#cancelled} offer this:
+     * the job stops at its next check and writes nothing more.
+     */
+    public void cancel() {
+        Task<?> task = current;
+        if (task != null && !task.isDone()) {
+            task.cancel(false);
+        }
     }
 
     private void finish(String text) {

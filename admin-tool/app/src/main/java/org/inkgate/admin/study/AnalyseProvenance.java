@@ -1,4 +1,4 @@
-package org.inkgate.admin.cli;
+package org.inkgate.admin.study;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -22,8 +22,8 @@ import org.inkgate.analysis.report.Table;
  * run - the exam, every input file with its SHA-256 (FIPS 180-4), the options, seeds, software
  * version, date and time, and the command line that reproduces the run.
  */
-final class AnalyseProvenance {
-    static final String ID = "provenance";
+public final class AnalyseProvenance {
+    public static final String ID = "provenance";
     private static final Pattern PLAIN = Pattern.compile("[A-Za-z0-9_./:=,@%+-]+");
 
     private AnalyseProvenance() {
@@ -35,7 +35,7 @@ final class AnalyseProvenance {
      * @param args   the command's own arguments as given
      * @param version the software version line
      */
-    static Section section(String examId, Map<String, Path> inputs, List<String> args, String version, Instant when)
+    public static Section section(String examId, Map<String, Path> inputs, List<String> args, String version, Instant when)
             throws IOException {
         Section.Builder s = Section.builder(ID, "Provenance");
         s.paragraph("Where this report's figures came from. Run the command below in the same folder with the same"
@@ -77,7 +77,7 @@ final class AnalyseProvenance {
     }
 
     /** A POSIX shell word: as is when plain, else single-quoted. */
-    static String quoted(String arg) {
+    public static String quoted(String arg) {
         return PLAIN.matcher(arg).matches() ? arg : "'" + arg.replace("'", "'\\''") + "'";
     }
 

@@ -1,0 +1,306 @@
+package org.inkgate.admin.gui.analysis;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.ObjectProperty;
+import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
+import org.inkgate.admin.gui.AdminSession;
+import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.study.AnalysisRun;
+import org.inkgate.admin.study.RaschChoices;
+import org.inkgate.analysis.mfrm.MfrmOptions;
+import org.inkgate.analysis.mfrm.StudyRatings;
+import org.inkgate.analysis.scores.ScoreRule;
+import org.inkgate.analysis.study.StudyOptions;
+
+/**
+ * The analysis step: the choices of {@code inkgate-admin analyse} as properties, run through the
+ * same {@link AnalysisRun} off the JavaFX thread. The run is recorded in the report's provenance
+ * as the command line that gives the same report, and shown so.
+ */
+public final class AnalysisModel {
+
+    /** The Rasch estimation's iteration cap: the command's default, not offered in the window. */
+    static final int MAX_ITERATIONS = 1000;
+
+    private final AdminSession session;
+    private final StringProperty store = new SimpleStringProperty("");
+    private final StringProperty exam = new SimpleStringProperty("");
+    private final StringProperty ratings = new SimpleStringProperty("");
+    private final StringProperty candidates = new SimpleStringProperty("");
+    private final StringProperty out = new SimpleStringProperty("");
+    private final StringProperty title = new SimpleStringProperty("Analysis of ratings");
+    private final ObjectProperty<ScoreRule> scoreRule = new SimpleObjectProperty<>(ScoreRule.MEAN);
+    private final BooleanProperty rasch = new SimpleBooleanProperty(false);
+    private final Map<String, BooleanProperty> facets = new LinkedHashMap<>();
+    private final StringProperty structure = new SimpleStringProperty(RaschChoices.RATING_SCALE);
+    private final StringProperty biasPairs = new SimpleStringProperty("");
+    private final StringProperty biasEstimation = new SimpleStringProperty("fixed");
+    private final StringProperty anchors = new SimpleStringProperty("");
+    private final StringProperty result = new SimpleStringProperty("");
+    private final StringProperty warnings = new SimpleStringProperty("");
+    private final StringProperty commandLine = new SimpleStringProperty("");
+    private final ObjectProperty<Path> report = new SimpleObjectProperty<>();
+    private final BooleanProperty running = new SimpleBooleanProperty(false);
+
+    public AnalysisModel(AdminSession session) {
+        this.session = session;
+        for (String c : StudyRatings.COLUMNS) {
+            facets.put(c, new SimpleBooleanProperty(false));
+        }
+        Fields.link(store, session.store());
+        if (!store.get().isBlank()) {
+            out.set(besideStore("report"));
+        }
+        store.addListener((o, was, now) -> {
+            if (out.get().isBlank() && Fields.path(now) != null) {
+                out.set(besideStore("report"));
+            }
+        });
+    }
+
+    private String besideStore(String name) {
+        Path s = Fields.path(store.get()).toAbsolutePath();
+        return (s.getParent() == null ? Path.of(name) : s.getParent().resolve(name)).toString();
+    }
+
+    public StringProperty store() {
+        return store;
+    }
+
+    /** The exam in the store; blank when the store holds one. */
+    public StringProperty exam() {
+        return exam;
+    }
+
+    /** A ratings CSV instead of the store's ratings; blank to use the store's. */
+    public StringProperty ratings() {
+        return ratings;
+    }
+
+    public StringProperty candidates() {
+        return candidates;
+    }
+
+    public StringProperty out() {
+        return out;
+    }
+
+    public StringProperty title() {
+        return title;
+    }
+
+    public ObjectProperty<ScoreRule> scoreRule() {
+        return scoreRule;
+    }
+
+    /** Many-facet Rasch measurement on or off. */
+    public BooleanProperty rasch() {
+        return rasch;
+    }
+
+    /** One switch per ratings column that can be a facet (candidate is always modelled). */
+    public Map<String, BooleanProperty> facets() {
+        return facets;
+    }
+
+    /** rating-scale or partial-credit:FACET, as the command writes it. */
+    public StringProperty structure() {
+        return structure;
+    }
+
+    /** Bias pairs A:B separated by commas. */
+    public StringProperty biasPairs() {
+        return biasPairs;
+    }
+
+    /** fixed or joint. */
+    public StringProperty biasEstimation() {
+        return biasEstimation;
+    }
+
+    public StringProperty anchors() {
+        return anchors;
+    }
+
+    public StringProperty result() {
+        return result;
+    }
+
+    public StringProperty warnings() {
+        return warnings;
+    }
+
+    /** The command line that gives the same report, once a run has started. */
+    public StringProperty commandLine() {
+        return commandLine;
+    }
+
+    /** The report.html last written, or null. */
+    public ObjectProperty<Path> report() {
+        return report;
+    }
+
+    /**
+     * True while this step's analysis runs: only it may be cancelled (the other steps' jobs, such as
+     * collect, do not stop halfway and must not be reported as cancelled).
+     */
+    public BooleanProperty running() {
+        return running;
+    }
+
+    /** Opens the written report in the system browser; false when the window has none. */
+    public boolean openInBrowser() {
+        Path html = report.get();
+        if (html == null || session.browser() == null) {
+            return false;
+        }
+        session.browser().accept(html.toUri().toString());
+        return true;
+    }
+
+    /** Runs the analysis in the background; outcome, warnings and the report land in the properties. */
+    public void analyse() {
+        warnings.set("");
+        AnalysisRun.Request request;
+        try {
+            request = request();
+        } catch (IllegalArgumentException e) {
+            result.set("Not run: " + e.getMessage());
+            return;
+        }
+        commandLine.set("inkgate-admin analyse " + String.join(" ",
+                request.arguments().stream().map(org.inkgate.admin.study.AnalyseProvenance::quoted).toList()));
+        result.set("Analysing ...");
+        running.set(true);
+        List<String> heard = new ArrayList<>();
+        session.work().run("Analysing", progress -> AnalysisRun.run(request, new AnalysisRun.Listener() {
+            @Override
+            public void stage(int done, int total, String what) {
+                progress.update(done, total, what);
+            }
+
+            @Override
+            public void warn(String text) {
+                synchronized (heard) {
+                    heard.add(text);
+                }
+            }
+
+            @Override
+            public boolean cancelled() {
+                return progress.cancelled();
+            }
+        }), written -> {
+            running.set(false);
+            report.set(written.html());
+            result.set("Report written to " + written.html() + " (" + written.ratings() + " ratings"
+                    + (written.exam() == null ? "" : " of exam " + written.exam()) + "). Tables are in "
+                    + written.folder().resolve("tables") + ", figures in " + written.folder().resolve("summary.json")
+                    + ".");
+            showWarnings(heard);
+        }, message -> {
+            running.set(false);
+            result.set("No report was written.\n" + message);
+            showWarnings(heard);
+        }, () -> {
+            running.set(false);
+            result.set("Cancelled. No report was written; the output folder is as it was.");
+        });
+    }
+
+    private void showWarnings(List<String> heard) {
+        synchronized (heard) {
+            warnings.set(String.join("\n", heard));
+        }
+    }
+
+    /** The run's request and its command-line arguments, from the fields; a bad choice throws with a message for people. */
+    AnalysisRun.Request request() {
+        Path storeFile = Fields.path(store.get());
+        Path ratingsFile = Fields.path(ratings.get());
+        Path outFolder = Fields.path(out.get());
+        if (storeFile == null && ratingsFile == null) {
+            throw new IllegalArgumentException("name the results store (from collect) or a ratings CSV file.");
+        }
+        if (outFolder == null) {
+            throw new IllegalArgumentException("name the folder for the report.");
+        }
+        List<String> args = new ArrayList<>();
+        add(args, "--ratings", ratingsFile);
+        add(args, "--candidates", Fields.path(candidates.get()));
+        add(args, "--store", storeFile);
+        String examId = exam.get().isBlank() || storeFile == null ? null : exam.get().strip();
+        if (examId != null) {
+            args.add("--exam");
+            args.add(examId);
+        }
+        args.add("--out");
+        args.add(outFolder.toString());
+        if (scoreRule.get() != ScoreRule.MEAN) {
+            args.add("--score-rule");
+            args.add(scoreRule.get().name());
+        }
+        String reportTitle = title.get().isBlank() ? "Analysis of ratings" : title.get().strip();
+        if (!reportTitle.equals("Analysis of ratings")) {
+            args.add("--title");
+            args.add(reportTitle);
+        }
+        StudyOptions options = StudyOptions.DEFAULT.withScoreRule(scoreRule.get()).withTitle(reportTitle);
+        MfrmOptions mfrm = null;
+        Path anchorFile = null;
+        if (rasch.get()) {
+            List<String> chosen = facets.entrySet().stream().filter(e -> e.getValue().get()).map(Map.Entry::getKey)
+                    .toList();
+            if (chosen.isEmpty()) {
+                throw new IllegalArgumentException("tick at least one facet besides the candidates (e.g. rater)"
+                        + " for many-facet Rasch measurement.");
+            }
+            List<String> pairs = java.util.Arrays.stream(biasPairs.get().split(",")).map(String::strip)
+                    .filter(p -> !p.isEmpty()).toList();
+            mfrm = RaschChoices.parse(chosen, structure.get(), pairs, biasEstimation.get(), MAX_ITERATIONS, List.of());
+            args.add("--mfrm-facets");
+            args.add(String.join(",", chosen));
+            if (!structure.get().equals(RaschChoices.RATING_SCALE)) {
+                args.add("--mfrm-structure");
+                args.add(structure.get());
+            }
+            if (!pairs.isEmpty()) {
+                args.add("--mfrm-bias");
+                args.add(String.join(",", pairs));
+            }
+            if (!biasEstimation.get().equals("fixed")) {
+                args.add("--mfrm-bias-estimation");
+                args.add(biasEstimation.get());
+            }
+            anchorFile = Fields.path(anchors.get());
+            add(args, "--mfrm-anchors", anchorFile);
+        } else if (Fields.path(anchors.get()) != null) {
+            throw new IllegalArgumentException("an anchor file fixes many-facet Rasch measures: switch many-facet"
+                    + " Rasch measurement on, or clear the anchor file.");
+        }
+        return new AnalysisRun.Request(ratingsFile, Fields.path(candidates.get()), List.of(), List.of(), null, null,
+                null, storeFile, examId, outFolder, options, mfrm, anchorFile, args);
+    }
+
+    private static void add(List<String> args, String option, Path file) {
+        if (file != null) {
+            args.add(option);
+            args.add(file.toString());
+        }
+    }
+
+    /** Cancels a running analysis. */
+    public void cancel() {
+        if (running.get()) {
+            session.work().cancel();
+        }
+    }
+}
