@@ -44,6 +44,11 @@ class PreviewWindowTest {
         AtomicReference<Scene> scene = new AtomicReference<>();
         robot.interact(() -> scene.set(PreviewStage.show(stage, new PracticeLoader().load(built.file()),
                 "ferry-complaint", "without-resources")));
+        // the primary stage is shared by every test class: an earlier one may have left it at 1024 wide
+        robot.interact(() -> {
+            stage.setWidth(1280);
+            stage.setHeight(800);
+        });
         WaitForAsyncUtils.waitForFxEvents();
 
         Node banner = robot.lookup("#previewBanner").query();
