@@ -23,6 +23,8 @@ import org.inkgate.admin.gui.collect.CollectModel;
 import org.inkgate.admin.gui.collect.CollectView;
 import org.inkgate.admin.gui.exam.ExamCheckModel;
 import org.inkgate.admin.gui.exam.ExamCheckView;
+import org.inkgate.admin.gui.export.ExportModel;
+import org.inkgate.admin.gui.export.ExportView;
 import org.inkgate.admin.gui.forms.FormsModel;
 import org.inkgate.admin.gui.forms.FormsView;
 import org.inkgate.admin.gui.missing.MissingModel;
@@ -51,7 +53,8 @@ public final class AdminWindow {
                 new BundleView(new BundleModel(session), work),
                 new CollectView(new CollectModel(session), work),
                 new MissingView(new MissingModel(session)),
-                new DeskStep(new DeskStepModel(session), work));
+                new DeskStep(new DeskStepModel(session), work),
+                new ExportView(new ExportModel(session), work));
         steps = new ListView<>(javafx.collections.FXCollections.observableArrayList(all));
         steps.setId("steps");
         steps.setAccessibleText("Steps");

@@ -53,7 +53,7 @@ class WrightMapLayoutTest {
     }
 
     private static MfrmResult.Element element(String label, MfrmResult.Status status, double measure, double se) {
-        return new MfrmResult.Element(label, status, measure, se, se * 1.1, 40, 80, 80, 2, 1, 0, 1, 0, 0.3);
+        return new MfrmResult.Element(label, status, measure, se, se * 1.1, 40, 80, 80, 2, 1, 0, 1, 0, 0.3, 0, 80, 70, 90);
     }
 
     private static Separation separation() {
