@@ -12,6 +12,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.inkgate.admin.core.rating.AssignmentSummary;
 import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingExport;
@@ -156,13 +157,8 @@ final class RateCommand extends GroupCommand {
         int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
             long used = seed != null ? seed : new SecureRandom().nextLong();
             SqliteRatingStore.AssignmentOutcome o = s.assign(k, used, allowUnlinked);
-            out.println("Assigned " + o.plan().placements().size() / k + " responses to " + k + " rater(s) each, seed "
-                    + used + " (recorded; the same seed and responses give the same design). Workloads:");
-            o.plan().workload().forEach((r, n) -> out.println("  " + r + "  " + n));
+            AssignmentSummary.lines(o).forEach(out::println);
             boolean linked = o.wholeDesign().connected();
-            out.println(linked ? "Rater links: connected (every rater shares responses, directly or through others)."
-                    : "Rater links: NOT connected; groups " + o.wholeDesign().components());
-            o.plan().warnings().forEach(w -> out.println("WARNING: " + w));
             return linked && o.plan().warnings().isEmpty() ? InkgateAdmin.OK : InkgateAdmin.ATTENTION;
         }
     }

@@ -31,6 +31,8 @@ import org.inkgate.admin.gui.missing.MissingModel;
 import org.inkgate.admin.gui.missing.MissingView;
 import org.inkgate.admin.gui.rating.DeskStep;
 import org.inkgate.admin.gui.rating.DeskStepModel;
+import org.inkgate.admin.gui.ratingadmin.RatingAdminModel;
+import org.inkgate.admin.gui.ratingadmin.RatingAdminView;
 
 /**
  * The admin window: the steps in a list on the left (Ctrl+1 to Ctrl+6 jump to them), the chosen
@@ -54,6 +56,7 @@ public final class AdminWindow {
                 new CollectView(new CollectModel(session), work),
                 new MissingView(new MissingModel(session)),
                 new DeskStep(new DeskStepModel(session), work),
+                new RatingAdminView(new RatingAdminModel(session), work),
                 new ExportView(new ExportModel(session), work));
         steps = new ListView<>(javafx.collections.FXCollections.observableArrayList(all));
         steps.setId("steps");

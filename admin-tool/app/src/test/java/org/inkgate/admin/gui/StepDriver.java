@@ -33,6 +33,28 @@ public final class StepDriver {
         WaitForAsyncUtils.waitForFxEvents();
     }
 
+    /** Scrolls the step until the button is in view, as a test owner would, and clicks it. */
+    public static void press(FxRobot robot, String query) {
+        robot.interact(() -> {
+            javafx.scene.Node node = robot.lookup(query).query();
+            javafx.scene.Node p = node.getParent();
+            while (p != null && !(p instanceof javafx.scene.control.ScrollPane)) {
+                p = p.getParent();
+            }
+            if (p instanceof javafx.scene.control.ScrollPane scroll && scroll.getContent() != null) {
+                javafx.scene.Node content = scroll.getContent();
+                double y = content.sceneToLocal(node.localToScene(node.getBoundsInLocal())).getMinY();
+                double room = content.getBoundsInLocal().getHeight() - scroll.getViewportBounds().getHeight();
+                if (room > 0) {
+                    scroll.setVvalue(Math.max(0, Math.min(1, (y - scroll.getViewportBounds().getHeight() / 3) / room)));
+                }
+                scroll.layout();
+            }
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+        robot.clickOn(query);
+    }
+
     public static void setText(FxRobot robot, String query, String text) {
         robot.interact(() -> robot.lookup(query).queryAs(TextInputControl.class).setText(text));
     }
