@@ -49,6 +49,7 @@ public final class RatingAdminModel {
     private final ObservableList<SqliteRatingStore.ProgressRow> progress = FXCollections.observableArrayList();
     private final ObservableList<SqliteRatingStore.Flag> flags = FXCollections.observableArrayList();
     private final RuleAndFlags rule = new RuleAndFlags(this);
+    private final SheetsAndScores sheets = new SheetsAndScores(this);
 
     public RatingAdminModel(AdminSession session) {
         this.session = session;
@@ -72,6 +73,7 @@ public final class RatingAdminModel {
     public ObservableList<SqliteRatingStore.ProgressRow> progress() { return progress; }
     public ObservableList<SqliteRatingStore.Flag> flags() { return flags; }
     public RuleAndFlags rule() { return rule; }
+    public SheetsAndScores sheets() { return sheets; }
 
     /** Reads raters, progress and flags again. */
     public void refresh() {

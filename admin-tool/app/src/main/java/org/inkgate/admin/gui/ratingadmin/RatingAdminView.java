@@ -133,6 +133,21 @@ public final class RatingAdminView implements Step {
         Fields.row(resolution, 3, "Why", field("resolveComment", "Why it was resolved so", rule.comment(), 30));
         resolution.add(resolve, 1, 4);
 
+        SheetsAndScores files = model.sheets();
+        GridPane sheetGrid = Fields.grid();
+        Fields.row(sheetGrid, 0, "Rater", field("sheetRater", "Rater whose sheet it is", files.rater(), 8));
+        Fields.pathRow(sheetGrid, 1, "sheetFile", "Sheet file", files.sheet(), Fields.Choose.SAVE_FILE);
+        Button sheetOut = button("exportSheet", "Write sheet and scripts", "Write the rater's sheet and scripts", work);
+        sheetOut.setOnAction(e -> files.exportSheet());
+        Button sheetIn = button("importSheet", "Read filled sheet", "Read the rater's filled sheet", work);
+        sheetIn.setOnAction(e -> files.importSheet());
+        sheetGrid.add(new HBox(8, sheetOut, sheetIn), 1, 2);
+        Fields.pathRow(sheetGrid, 3, "scoresFolder", "Scores folder", files.scoresFolder(), Fields.Choose.FOLDER);
+        Button scoresOut = button("exportScores", "Write ratings and final scores",
+                "Write ratings.csv and final-scores.csv", work);
+        scoresOut.setOnAction(e -> files.exportScores());
+        sheetGrid.add(scoresOut, 1, 4);
+
         root = new VBox(14, Fields.heading(TITLE),
                 Fields.note("Raters, the seeded assignment and its rater links, progress, the discrepancy rule and"
                         + " the adjudication queue over the results store, as inkgate-admin rate does. Raters score"
@@ -146,7 +161,12 @@ public final class RatingAdminView implements Step {
                 Fields.heading("Discrepancy rule"), Fields.note("The thresholds are your decision under your exam's"
                         + " regulations. Flagged responses go to a third rater or wait for a resolution entry."),
                 ruleGrid,
-                Fields.heading("Flags and resolution entries"), flags, review, resolution);
+                Fields.heading("Flags and resolution entries"), flags, review, resolution,
+                Fields.heading("Rating sheets and final scores"), Fields.note("A sheet lists the rater's queue under"
+                        + " blind ids; the scripts folder beside it holds the texts and the rubric. A filled sheet is"
+                        + " checked row by row and nothing is stored if any row is bad. ratings.csv and"
+                        + " final-scores.csv hold candidate numbers: handle them under your data-protection rules."),
+                sheetGrid);
         root.getStyleClass().add("step");
     }
 
