@@ -2,9 +2,6 @@ package org.inkgate.admin.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.security.SecureRandom;
@@ -12,14 +9,12 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.inkgate.admin.core.rating.AssignmentSummary;
 import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.rating.RatingExport;
-import org.inkgate.admin.core.rating.RatingScripts;
+import org.inkgate.admin.core.rating.RatingFiles;
 import org.inkgate.admin.core.rating.Referrals;
-import org.inkgate.admin.core.rating.RatingSheets;
 import org.inkgate.admin.core.rating.SqliteRatingStore;
-import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.format.refusal.FormatRefusal;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -156,13 +151,8 @@ final class RateCommand extends GroupCommand {
         int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
             long used = seed != null ? seed : new SecureRandom().nextLong();
             SqliteRatingStore.AssignmentOutcome o = s.assign(k, used, allowUnlinked);
-            out.println("Assigned " + o.plan().placements().size() / k + " responses to " + k + " rater(s) each, seed "
-                    + used + " (recorded; the same seed and responses give the same design). Workloads:");
-            o.plan().workload().forEach((r, n) -> out.println("  " + r + "  " + n));
+            AssignmentSummary.lines(o).forEach(out::println);
             boolean linked = o.wholeDesign().connected();
-            out.println(linked ? "Rater links: connected (every rater shares responses, directly or through others)."
-                    : "Rater links: NOT connected; groups " + o.wholeDesign().components());
-            o.plan().warnings().forEach(w -> out.println("WARNING: " + w));
             return linked && o.plan().warnings().isEmpty() ? InkgateAdmin.OK : InkgateAdmin.ATTENTION;
         }
     }
@@ -205,18 +195,7 @@ final class RateCommand extends GroupCommand {
 
             @Override
             int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
-                org.inkgate.format.io.OwnerOnly.file(file);
-                int rows;
-                try (Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
-                    rows = RatingSheets.export(s, rater, w);
-                }
-                out.println("Sheet for rater " + rater + " written to " + file + " (" + rows + " responses). Scores:");
-                for (ExamSource.Criterion c : s.rubric().criteria()) {
-                    out.println("  " + c.id() + " (" + c.name() + "): whole numbers " + c.minScore() + "-" + c.maxScore());
-                }
-                RatingScripts.Written scripts = RatingScripts.write(s, s.rubric(), rater, RatingScripts.folderFor(file));
-                out.println("The response texts (" + scripts.scripts() + " files), the rubric and an index are in "
-                        + scripts.folder() + ", under blind ids only: hand the sheet and this folder to the rater.");
+                RatingFiles.exportSheet(s, rater, file).forEach(out::println);
                 return InkgateAdmin.OK;
             }
         }
@@ -232,10 +211,7 @@ final class RateCommand extends GroupCommand {
 
             @Override
             int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
-                String text = org.inkgate.format.io.Utf8Text.read(file);
-                RatingSheets.Imported r = RatingSheets.importSheet(s, rater, file.getFileName().toString(), text);
-                out.println("Read " + r.rowsRead() + " rows: " + r.storedNewOrChanged() + " ratings stored (new or changed), "
-                        + r.notYetRated() + " not yet rated, the rest unchanged.");
+                out.println(RatingFiles.importSheet(s, rater, file));
                 return InkgateAdmin.OK;
             }
         }
@@ -428,21 +404,8 @@ final class RateCommand extends GroupCommand {
 
         @Override
         int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
-            org.inkgate.format.io.OwnerOnly.folder(dir);
-            org.inkgate.format.io.OwnerOnly.file(dir.resolve("ratings.csv"));
-            org.inkgate.format.io.OwnerOnly.file(dir.resolve("final-scores.csv"));
-            long ratings;
-            long finals;
-            try (Writer w = Files.newBufferedWriter(dir.resolve("ratings.csv"), StandardCharsets.UTF_8)) {
-                ratings = RatingExport.ratings(s, w);
-            }
-            try (Writer w = Files.newBufferedWriter(dir.resolve("final-scores.csv"), StandardCharsets.UTF_8)) {
-                finals = RatingExport.finalScores(s, w);
-            }
-            out.println("ratings.csv " + ratings + " rows, final-scores.csv " + finals + " rows in " + dir);
-            int pending = s.pendingResponses();
-            if (pending > 0) {
-                out.println("NOTE: " + pending + " response(s) have no final score yet and are not in final-scores.csv.");
+            RatingFiles.exportScores(s, dir).forEach(out::println);
+            if (s.pendingResponses() > 0) {
                 return InkgateAdmin.ATTENTION;
             }
             return InkgateAdmin.OK;

@@ -25,15 +25,19 @@ import org.inkgate.admin.gui.collect.CollectModel;
 import org.inkgate.admin.gui.collect.CollectView;
 import org.inkgate.admin.gui.exam.ExamCheckModel;
 import org.inkgate.admin.gui.exam.ExamCheckView;
+import org.inkgate.admin.gui.export.ExportModel;
+import org.inkgate.admin.gui.export.ExportView;
 import org.inkgate.admin.gui.forms.FormsModel;
 import org.inkgate.admin.gui.forms.FormsView;
 import org.inkgate.admin.gui.missing.MissingModel;
 import org.inkgate.admin.gui.missing.MissingView;
 import org.inkgate.admin.gui.rating.DeskStep;
 import org.inkgate.admin.gui.rating.DeskStepModel;
+import org.inkgate.admin.gui.ratingadmin.RatingAdminModel;
+import org.inkgate.admin.gui.ratingadmin.RatingAdminView;
 
 /**
- * The admin window: the steps in a list on the left (Ctrl+1 to Ctrl+7 jump to them), the chosen
+ * The admin window: the steps in a list on the left (Ctrl+1 to Ctrl+9 jump to them), the chosen
  * step in the middle, and a status line with progress at the bottom.
  */
 public final class AdminWindow {
@@ -54,6 +58,9 @@ public final class AdminWindow {
                 new CollectView(new CollectModel(session), work),
                 new MissingView(new MissingModel(session)),
                 new DeskStep(new DeskStepModel(session), work),
+                new RatingAdminView(new RatingAdminModel(session), work),
+                new ExportView(new ExportModel(session), work),
+
                 new AnalysisView(new AnalysisModel(session), work));
         steps = new ListView<>(javafx.collections.FXCollections.observableArrayList(all));
         steps.setId("steps");

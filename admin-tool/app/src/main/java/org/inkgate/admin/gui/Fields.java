@@ -47,9 +47,12 @@ public final class Fields {
         Label l = new Label(label);
         l.setLabelFor(field);
         l.setMnemonicParsing(false);
+        // at 1024 pixels wide the field gives way, never the label or the button text
+        l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         Button choose = new Button("Choose...");
         choose.setId(id + "Choose");
         choose.setAccessibleText("Choose " + label.toLowerCase(java.util.Locale.ROOT));
+        choose.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         choose.setOnAction(e -> choose(field, kind));
         choose.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE); // never cut to "..." in a narrow window
         HBox box = new HBox(8, field, choose);
@@ -62,6 +65,7 @@ public final class Fields {
 
     public static void row(GridPane grid, int row, String label, Node control) {
         Label l = new Label(label);
+        l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         l.setLabelFor(control);
         grid.add(l, 0, row);
         grid.add(control, 1, row);

@@ -289,15 +289,20 @@ class AdminWindowTest {
         robot.interact(() -> AdminWindow.show(stage, session));
         setText(robot, "#examFolder", DemoSource.copyExam(dir.resolve("exam-source")).toString());
         robot.clickOn("#checkExam");
-        for (int step = 0; step < 5; step++) {
+        int count = robot.lookup("#steps").queryListView().getItems().size();
+        for (int step = 0; step < count; step++) {
             select(robot, step);
             Node view = robot.lookup("#steps").queryListView().getSelectionModel().getSelectedItem() instanceof Step s
                     ? s.view() : null;
             assertNotNull(view);
             int inputs = 0;
             for (Node n : robot.from(view).lookup((java.util.function.Predicate<Node>) n -> n instanceof TextInputControl
-                    || n instanceof TableView || n instanceof javafx.scene.control.ComboBox).queryAll()) {
-                assertTrue(n.getAccessibleText() != null && !n.getAccessibleText().isBlank(),
+                    || n instanceof TableView || n instanceof javafx.scene.control.ComboBox
+                    || n instanceof javafx.scene.control.ChoiceBox || n instanceof javafx.scene.control.CheckBox).queryAll()) {
+                // a check box's own text is what a screen reader announces
+                boolean named = n.getAccessibleText() != null && !n.getAccessibleText().isBlank()
+                        || n instanceof javafx.scene.control.CheckBox c && !c.getText().isBlank();
+                assertTrue(named,
                         "step " + (step + 1) + ": " + n + " has no accessible name");
                 inputs++;
             }

@@ -27,7 +27,7 @@ import org.inkgate.analysis.scores.ScoreRule;
  */
 public final class AnalysisView implements Step {
 
-    static final String TITLE = "7. Analyse";
+    static final String TITLE = "9. Analyse";
 
     private final VBox root;
     private final TextField store;

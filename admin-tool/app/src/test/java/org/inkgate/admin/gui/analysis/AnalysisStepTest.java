@@ -59,7 +59,7 @@ import picocli.CommandLine;
 class AnalysisStepTest {
 
     private static final List<String> RATERS = List.of("rater-a", "rater-b", "rater-c");
-    private static final int STEP = 6;
+    private static final int STEP = 8; // the ninth step, after rating administration and exports
 
     @TempDir
     Path dir;

@@ -64,13 +64,21 @@ public record RatedStore(Path file, ExamSource exam, List<String> hiddenFacts) {
         Path store = dir.resolve("results.db");
         CollectionRun.run(new CollectionRun.Request(store, List.of(bundle), List.of(packages), TestKeys.OWNER_ENCRYPTION,
                 TestKeys.ownerFingerprint(), TestKeys.installations(), rosterFile, exam, null, 1), n -> { }, o -> { });
-        try (SqliteRatingStore rating = SqliteRatingStore.open(store, exam.examId())) {
-            for (String id : raterIds) {
-                rating.addRater(id, "", null);
+        RatedStore collected = new RatedStore(store, exam, List.copyOf(hidden.stream().distinct().toList()));
+        if (!raterIds.isEmpty()) {
+            try (SqliteRatingStore rating = SqliteRatingStore.open(store, exam.examId())) {
+                for (String id : raterIds) {
+                    rating.addRater(id, "", null);
+                }
+                rating.assign(2, SEED, false);
             }
-            rating.assign(2, SEED, false);
         }
-        return new RatedStore(store, exam, List.copyOf(hidden.stream().distinct().toList()));
+        return collected;
+    }
+
+    /** The store as collect leaves it: no raters, nothing assigned. */
+    public static RatedStore collected(Path dir) throws Exception {
+        return make(dir, List.of());
     }
 
     public SqliteRatingStore open() throws Exception {
