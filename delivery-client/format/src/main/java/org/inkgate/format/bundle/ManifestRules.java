@@ -72,8 +72,9 @@ final class ManifestRules {
         Set<String> candidates = new HashSet<>();
         for (RosterEntry r : m.roster()) {
             requireText(problems, r.candidateNumber(), "roster candidateNumber");
-            if (r.candidateNumber() != null && !candidates.add(r.candidateNumber())) {
-                problems.add("roster lists candidate \"" + r.candidateNumber() + "\" twice");
+            if (r.candidateNumber() != null && !candidates.add(CandidateNumbers.key(r.candidateNumber()))) {
+                problems.add("roster lists candidate \"" + r.candidateNumber() + "\" twice (candidate numbers are"
+                        + " compared without regard to letter case)");
             }
             if (r.formId() == null) {
                 problems.add("roster gives candidate \"" + r.candidateNumber() + "\" no form: assign one of " + formIds);
