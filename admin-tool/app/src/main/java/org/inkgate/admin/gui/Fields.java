@@ -30,6 +30,22 @@ public final class Fields {
         return l;
     }
 
+    /**
+     * A step's result text in the monospaced result style: shown, and taking room, only while the
+     * model has something to say.
+     */
+    public static Label result(String id, String accessibleText, javafx.beans.property.StringProperty text) {
+        Label l = new Label();
+        l.setId(id);
+        l.setWrapText(true);
+        l.getStyleClass().addAll("step-result", "mono");
+        l.setAccessibleText(accessibleText);
+        l.textProperty().bind(text);
+        l.visibleProperty().bind(text.isNotEmpty());
+        l.managedProperty().bind(l.visibleProperty());
+        return l;
+    }
+
     public static Label note(String text) {
         Label l = new Label(text);
         l.getStyleClass().add("step-note");

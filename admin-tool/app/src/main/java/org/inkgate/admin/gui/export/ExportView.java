@@ -44,13 +44,7 @@ public final class ExportView implements Step {
         export.setAccessibleText("Export the results store");
         export.disableProperty().bind(work.busy());
         export.setOnAction(e -> model.export());
-        Label written = new Label();
-        written.setId("exportWritten");
-        written.setWrapText(true);
-        written.getStyleClass().addAll("step-result", "mono");
-        written.setAccessibleText("What the export wrote");
-        written.textProperty().bind(model.written());
-        written.visibleProperty().bind(model.written().isNotEmpty());
+        Label written = Fields.result("exportWritten", "What the export wrote", model.written());
         root = new VBox(14, Fields.heading(TITLE),
                 Fields.note("Per exam, into FOLDER/EXAM-ID: tidy CSV (csv/, see docs/data-dictionary.md), QTI 3.0"
                         + " results per response package (qti-results/, with final scores once ratings exist) and xAPI"

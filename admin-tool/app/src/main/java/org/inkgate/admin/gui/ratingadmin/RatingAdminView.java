@@ -81,8 +81,8 @@ public final class RatingAdminView implements Step {
         progress.getColumns().add(column("Remaining", r -> Integer.toString(r.remaining())));
         progress.getColumns().add(column("Flagged", r -> Integer.toString(r.flagged())));
 
-        Label state = result("ratingState", "Rater links, pending responses and the rule in force", model.state());
-        Label message = result("ratingMessage", "Outcome of the last rating action", model.message());
+        Label state = Fields.result("ratingState", "Rater links, pending responses and the rule in force", model.state());
+        Label message = Fields.result("ratingMessage", "Outcome of the last rating action", model.message());
 
         RuleAndFlags rule = model.rule();
         ChoiceBox<String> method = new ChoiceBox<>();
@@ -185,18 +185,6 @@ public final class RatingAdminView implements Step {
         b.setAccessibleText(accessible);
         b.disableProperty().bind(work.busy());
         return b;
-    }
-
-    private static Label result(String id, String accessible, StringProperty text) {
-        Label l = new Label();
-        l.setId(id);
-        l.setWrapText(true);
-        l.getStyleClass().addAll("step-result", "mono");
-        l.setAccessibleText(accessible);
-        l.textProperty().bind(text);
-        l.visibleProperty().bind(text.isNotEmpty());
-        l.managedProperty().bind(l.visibleProperty());
-        return l;
     }
 
     private static <S> TableView<S> table(String id, String accessible) {
