@@ -22,8 +22,8 @@ sp <- sqrt(((na - 1) * var(oj) + (nb - 1) * var(vc)) / df)
 ds <- (mean(oj) - mean(vc)) / sp
 J <- exp(lgamma(df / 2) - log(sqrt(df / 2)) - lgamma((df - 1) / 2))
 tobs <- s$statistic
-ncp_lo <- uniroot(function(d) pt(tobs, df, d) - 0.975, c(-50, 50), tol = 1e-12)$root
-ncp_hi <- uniroot(function(d) pt(tobs, df, d) - 0.025, c(-50, 50), tol = 1e-12)$root
+ncp_lo <- uniroot(function(d) suppressWarnings(pt(tobs, df, d)) - 0.975, c(-50, 50), tol = 1e-12)$root
+ncp_hi <- uniroot(function(d) suppressWarnings(pt(tobs, df, d)) - 0.025, c(-50, 50), tol = 1e-12)$root
 sc <- sqrt(1 / na + 1 / nb)
 out("hedges", g = ds * J, lower = ncp_lo * sc * J, upper = ncp_hi * sc * J)
 # Mann-Whitney: ties in ToothGrowth (normal approximation, tie and continuity corrections) ...
@@ -76,6 +76,7 @@ out("friedman", Q = fr$statistic, df = fr$parameter, p = fr$p.value)
 # mixed: tension within, wool between
 mx <- summary(aov(y ~ cond * wool + Error(id / cond), data = long))
 b <- mx[["Error: id"]][[1]]; wi <- mx[["Error: id:cond"]][[1]]
+rownames(b) <- trimws(rownames(b)); rownames(wi) <- trimws(rownames(wi))
 out("mixed_between", F = b["wool", "F value"], df1 = b["wool", "Df"], df2 = b["Residuals", "Df"], p = b["wool", "Pr(>F)"])
 out("mixed_condition", F = wi["cond", "F value"], p = wi["cond", "Pr(>F)"])
 out("mixed_interaction", F = wi["cond:wool", "F value"], df1 = wi["cond:wool", "Df"], df2 = wi["Residuals", "Df"],
