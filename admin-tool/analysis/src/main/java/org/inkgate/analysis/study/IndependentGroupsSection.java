@@ -78,7 +78,6 @@ final class IndependentGroupsSection {
                 continue;
             }
             IndependentComparison c = IndependentComparison.of(vb, va, 0.95);
-            double j = c.hedgesG() / c.ds();
             OneWayAnova levene = VarianceHomogeneity.test(new Groups(List.of(a, b), List.of(va, vb)),
                     VarianceHomogeneity.Centre.MEAN);
             MannWhitney u = MannWhitney.of(vb, va);
@@ -95,15 +94,15 @@ final class IndependentGroupsSection {
             u.cautions().forEach(x -> cautions.add(measure + ", Mann-Whitney: " + x));
             rows.add(new Object[] {measure, (long) va.length, (long) vb.length, mean(va), mean(vb), c.difference(),
                     c.welchT(), c.welchDf(), c.welchP(), null, c.welchLower(), c.welchUpper(), c.studentT(),
-                    c.studentDf(), c.studentP(), levene.f(), levene.p(), c.hedgesG(), c.dsLower() * j,
-                    c.dsUpper() * j, u.u(), u.p(), null, normality});
+                    c.studentDf(), c.studentP(), levene.f(), levene.p(), c.hedgesG(), c.hedgesLower(),
+                    c.hedgesUpper(), u.u(), u.p(), null, normality});
             notes.add(cautions);
             s.put(k + "difference", c.difference()).put(k + "welch_t", c.welchT()).put(k + "welch_df", c.welchDf())
                     .put(k + "welch_p", c.welchP()).put(k + "ci_lower", c.welchLower())
                     .put(k + "ci_upper", c.welchUpper()).put(k + "student_t", c.studentT())
                     .put(k + "student_p", c.studentP()).put(k + "levene_f", levene.f())
                     .put(k + "levene_p", levene.p()).put(k + "hedges_g", c.hedgesG())
-                    .put(k + "hedges_g_lower", c.dsLower() * j).put(k + "hedges_g_upper", c.dsUpper() * j)
+                    .put(k + "hedges_g_lower", c.hedgesLower()).put(k + "hedges_g_upper", c.hedgesUpper())
                     .put(k + "mann_whitney_u", u.u()).put(k + "mann_whitney_p", u.p());
             if (i > 0) {
                 pW[i - 1] = c.welchP();

@@ -8,6 +8,7 @@ import org.inkgate.analysis.comparison.Friedman;
 import org.inkgate.analysis.comparison.Holm;
 import org.inkgate.analysis.comparison.PairedComparison;
 import org.inkgate.analysis.comparison.RepeatedMeasuresAnova;
+import org.inkgate.analysis.descriptive.ShapiroWilk;
 import org.inkgate.analysis.report.Column;
 import org.inkgate.analysis.report.PValueText;
 import org.inkgate.analysis.report.Section;
@@ -78,7 +79,7 @@ final class RepeatedMeasuresSection {
                 + " computed (it can exceed 1); its test uses at most 1. Mauchly's test has little power with few"
                 + " candidates: a non-significant result does not show that sphericity holds.");
         s.table(t.build());
-        pairwise(s, scores, conditions);
+        pairwise(s, scores, conditions, options.alpha());
         MixedDesignTable.build(s, scores, options, conditions, complete(scores, conditions, null));
     }
 
@@ -95,7 +96,8 @@ final class RepeatedMeasuresSection {
         return c;
     }
 
-    private static void pairwise(Section.Builder s, ScoreTable scores, List<String> conditions) {
+    private static void pairwise(Section.Builder s, ScoreTable scores, List<String> conditions, double alpha) {
+        List<String> normality = new ArrayList<>();
         Map<String, double[]> m = complete(scores, conditions, null);
         double[][] y = m.values().toArray(double[][]::new);
         if (y.length < 2) {
@@ -106,7 +108,7 @@ final class RepeatedMeasuresSection {
                         + " Lakens 2013")
                 .columns(Column.of("second"), Column.of("first"), Column.of("pairs"), Column.of("difference"),
                         Column.of("CI lower"), Column.of("CI upper"), Column.of("t"), Column.of("df"), Column.of("p"),
-                        Column.of("p (Holm)"), Column.of("d_z"));
+                        Column.of("p (Holm)"), Column.of("d_z"), Column.of("normality of differences"));
         List<PairedComparison> pcs = new ArrayList<>();
         List<String[]> names = new ArrayList<>();
         for (int i = 0; i < conditions.size(); i++) {
@@ -117,14 +119,33 @@ final class RepeatedMeasuresSection {
         }
         double[] p = pcs.stream().mapToDouble(PairedComparison::p).toArray();
         double[] h = Holm.adjust(p);
+        boolean anyNotNormal = false;
+        for (int i = 0; i < conditions.size(); i++) {
+            for (int j = i + 1; j < conditions.size(); j++) {
+                double[] d = new double[y.length];
+                for (int r = 0; r < y.length; r++) {
+                    d[r] = y[r][j] - y[r][i];
+                }
+                ShapiroWilk.Result sw = ShapiroWilk.test(d);
+                boolean rejects = !Double.isNaN(sw.p()) && sw.rejects(alpha);
+                anyNotNormal |= rejects;
+                normality.add(Double.isNaN(sw.p()) ? "not tested" : rejects ? "not normal (SW p "
+                        + PValueText.of(sw.p()) + "): read Friedman" : "no departure found");
+            }
+        }
         for (int i = 0; i < pcs.size(); i++) {
             PairedComparison c = pcs.get(i);
             t.row(names.get(i)[0], names.get(i)[1], (long) c.n(), c.meanDifference(), c.differenceLower(),
-                    c.differenceUpper(), c.t(), c.df(), c.p(), h[i], c.dz());
+                    c.differenceUpper(), c.t(), c.df(), c.p(), h[i], c.dz(), normality.get(i));
             s.put("pairwise." + Keys.slug(names.get(i)[0]) + "_minus_" + Keys.slug(names.get(i)[1]) + ".p_holm", h[i]);
         }
         t.note("Differences are the second condition minus the first. The CIs are not adjusted for the number of"
                 + " pairs.");
+        if (anyNotNormal) {
+            t.note("Some differences between conditions are far from normal: the ANOVA and these t-tests may mislead"
+                    + " there; read Friedman's test beside the ANOVA.");
+        }
+        s.put("pairwise.differences_not_normal", anyNotNormal);
         s.table(t.build());
     }
 

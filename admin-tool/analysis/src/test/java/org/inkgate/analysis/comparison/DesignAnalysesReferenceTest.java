@@ -108,9 +108,8 @@ class DesignAnalysesReferenceTest {
         close(r("student", "p"), c.studentP(), "Student p");
         close(r("student", "lower"), c.studentLower(), "Student CI");
         close(r("hedges", "g"), c.hedgesG(), "Hedges g");
-        double j = c.hedgesG() / c.ds();
-        close(r("hedges", "lower"), c.dsLower() * j, "g lower");
-        close(r("hedges", "upper"), c.dsUpper() * j, "g upper");
+        close(r("hedges", "lower"), c.hedgesLower(), "g lower");
+        close(r("hedges", "upper"), c.hedgesUpper(), "g upper");
         OneWayAnova lev = VarianceHomogeneity.test(new Groups(List.of("OJ", "VC"), List.of(oj, vc)),
                 VarianceHomogeneity.Centre.MEAN);
         close(r("levene_mean", "F"), lev.f(), "Levene F");
