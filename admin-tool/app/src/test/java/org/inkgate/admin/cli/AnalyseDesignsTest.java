@@ -174,4 +174,23 @@ class AnalyseDesignsTest {
                 dir.resolve("r").toString(), "--design", "crossover"));
         assertTrue(err.toString().contains("give within"), err.toString());
     }
+
+    @Test
+    void analyse_preTestColumn_isTheCovariate_andAnUnknownColumnIsRefused(@TempDir Path dir) throws Exception {
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), parallelRatings(5));
+        StringBuilder c = new StringBuilder("candidate,level,placement\n");
+        for (int i = 0; i < 40; i++) {
+            c.append('P').append(i).append(',').append(i % 4 < 2 ? "B1" : "B2").append(',').append(40 + i % 7)
+                    .append('\n');
+        }
+        Path cands = Files.writeString(dir.resolve("candidates.csv"), c.toString());
+        Path outDir = dir.resolve("report");
+        assertEquals(0, run("--ratings", ratings.toString(), "--candidates", cands.toString(), "--pre-test",
+                "placement", "--out", outDir.toString()), err.toString());
+        assertEquals("pre_test", summary(outDir).get("comparison.adjusted.adjustment").asText());
+        assertEquals(AnalyseCommand.INPUT_REFUSED, run("--ratings", ratings.toString(), "--candidates",
+                cands.toString(), "--pre-test", "placment", "--out", dir.resolve("r2").toString()));
+        assertTrue(err.toString().contains("--pre-test placment is not a numeric column"), err.toString());
+        assertFalse(Files.exists(dir.resolve("r2")));
+    }
 }
