@@ -20,6 +20,26 @@ public record IndependentComparison(double difference, double studentT, double s
         cautions = List.copyOf(cautions);
     }
 
+    /** Hedges' small-sample factor J(df) = Gamma(df/2) / (sqrt(df/2) Gamma((df-1)/2)), df = n_a + n_b - 2. */
+    public double hedgesJ() {
+        return j(studentDf);
+    }
+
+    /** Hedges' g's CI: the CI of d_s times J (Lakens 2013; the factor is treated as known). */
+    public double hedgesLower() {
+        return dsLower * hedgesJ();
+    }
+
+    /** Upper end of Hedges' g's CI. */
+    public double hedgesUpper() {
+        return dsUpper * hedgesJ();
+    }
+
+    private static double j(double df) {
+        return Math.exp(org.apache.commons.math3.special.Gamma.logGamma(df / 2) - Math.log(Math.sqrt(df / 2))
+                - org.apache.commons.math3.special.Gamma.logGamma((df - 1) / 2));
+    }
+
     public static IndependentComparison of(double[] a, double[] b, double confidence) {
         List<String> cautions = new ArrayList<>();
         int na = a.length, nb = b.length;
@@ -45,8 +65,7 @@ public record IndependentComparison(double difference, double studentT, double s
         double ds = diff / Math.sqrt(pooled);
         double[] delta = NoncentralT.deltaInterval(tS, dfS, confidence);
         double scale = Math.sqrt(1.0 / na + 1.0 / nb);
-        double j = Math.exp(org.apache.commons.math3.special.Gamma.logGamma(dfS / 2)
-                - Math.log(Math.sqrt(dfS / 2)) - org.apache.commons.math3.special.Gamma.logGamma((dfS - 1) / 2));
+        double j = j(dfS);
         return new IndependentComparison(diff, tS, dfS, 2 * distS.cumulativeProbability(-Math.abs(tS)),
                 diff - critS * seS, diff + critS * seS, tW, dfW, 2 * distW.cumulativeProbability(-Math.abs(tW)),
                 diff - critW * seW, diff + critW * seW, ds, delta[0] * scale, delta[1] * scale, ds * j, cautions);

@@ -6,6 +6,7 @@ import java.util.Map;
 import org.inkgate.analysis.comparison.Holm;
 import org.inkgate.analysis.comparison.PairedComparison;
 import org.inkgate.analysis.comparison.WilcoxonSignedRank;
+import org.inkgate.analysis.data.StudyDesign;
 import org.inkgate.analysis.descriptive.ShapiroWilk;
 import org.inkgate.analysis.report.Column;
 import org.inkgate.analysis.report.PValueText;
@@ -13,7 +14,11 @@ import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.report.Table;
 import org.inkgate.analysis.scores.ScoreTable;
 
-/** Paired comparison of the two conditions, overall and per criterion, with Holm across criteria. */
+/**
+ * The condition comparison, chosen by the design: here the paired comparison of two within-candidate
+ * conditions, overall and per criterion, with Holm across criteria; the other designs in
+ * {@link RepeatedMeasuresSection} and {@link IndependentGroupsSection}.
+ */
 final class ConditionSection {
 
     private ConditionSection() {
@@ -31,15 +36,64 @@ final class ConditionSection {
         return c;
     }
 
-    static Section build(ScoreTable scores, StudyOptions options, ComparisonDirection direction) {
-        Section.Builder s = Section.builder("comparison", "Scores with and without resources (paired)");
+    /**
+     * The condition comparison the design calls for: paired (two within-candidate conditions),
+     * repeated measures (three or more), independent groups (parallel groups), or, when the data fit
+     * no design or contradict the declared one, the reason and the candidates concerned.
+     */
+    static Section build(StudyData data, ScoreTable scores, StudyOptions options, ComparisonDirection direction,
+            StudyDesign design) {
         List<String> conditions = StudyAnalysis.orderedConditions(scores, options);
-        if (conditions.size() != 2) {
-            s.paragraph("The paired comparison needs exactly two conditions; the data have " + conditions.size()
-                    + " (" + String.join(", ", conditions) + "). Nothing is compared.");
+        StudyDesign.Kind kind = design.analysed();
+        String title = switch (kind) {
+            case WITHIN -> conditions.size() == 2 ? "Scores with and without resources (paired)"
+                    : "Scores under " + conditions.size() + " conditions (within candidates)";
+            case PARALLEL -> "Scores of the condition groups (parallel groups)";
+            default -> "Condition comparison: not made";
+        };
+        Section.Builder s = Section.builder("comparison", title);
+        s.paragraph(design.reason());
+        s.put("design", kind.word()).put("design_found", design.found().word())
+                .put("design_declared", design.declared() == null ? null : design.declared().word())
+                .put("design_mismatch", design.mismatch());
+        if (!design.misfits().isEmpty()) {
+            s.paragraph("Candidates concerned (" + design.misfits().size() + "): " + listed(design.misfits()) + ".");
+            s.put("design_misfits", String.join(",", design.misfits()));
+        }
+        if (kind == StudyDesign.Kind.UNFIT || kind == StudyDesign.Kind.SINGLE_CONDITION) {
             s.put("available", false);
             return s.build();
         }
+        if (kind == StudyDesign.Kind.PARALLEL && conditions.size() > 2) {
+            s.paragraph("A parallel-groups design with " + conditions.size() + " conditions: the two-group"
+                    + " comparison does not apply, and the comparison of three or more independent groups is not"
+                    + " part of this report yet. Nothing is compared.");
+            s.put("available", false);
+            return s.build();
+        }
+        s.put("available", true).put("baseline", conditions.get(0));
+        if (kind == StudyDesign.Kind.PARALLEL) {
+            s.put("other", conditions.get(1));
+            s.paragraph(direction.reason());
+            IndependentGroupsSection.build(s, data, scores, options, conditions.get(0), conditions.get(1));
+            return s.build();
+        }
+        if (conditions.size() > 2) {
+            RepeatedMeasuresSection.build(s, scores, options, conditions);
+            return s.build();
+        }
+        paired(s, scores, options, direction, conditions);
+        return s.build();
+    }
+
+    /** At most 30 identifiers, then how many more. */
+    private static String listed(List<String> ids) {
+        return ids.size() <= 30 ? String.join(", ", ids)
+                : String.join(", ", ids.subList(0, 30)) + " and " + (ids.size() - 30) + " more";
+    }
+
+    private static void paired(Section.Builder s, ScoreTable scores, StudyOptions options, ComparisonDirection direction,
+            List<String> conditions) {
         String a = conditions.get(0), b = conditions.get(1);
         s.paragraph("Each candidate's score under '" + b + "' minus their score under '" + a + "', for candidates"
                 + " with a score under both. The paired t-test is read when the differences are roughly normal;"
@@ -111,8 +165,7 @@ final class ConditionSection {
         }
         t.note("The CI of d_av scales the d_z interval by sd(difference) / mean SD, treating that ratio as known:"
                 + " an approximation, narrower than an exact interval would be.");
-        s.put("baseline", a).put("other", b);
+        s.put("other", b);
         s.table(t.build());
-        return s.build();
     }
 }

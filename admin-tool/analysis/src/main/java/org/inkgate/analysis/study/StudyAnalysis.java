@@ -8,6 +8,7 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
 import java.util.function.Supplier;
 import org.inkgate.analysis.data.Candidate;
+import org.inkgate.analysis.data.StudyDesign;
 import org.inkgate.analysis.report.Report;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.scores.ScoreTable;
@@ -38,12 +39,13 @@ public final class StudyAnalysis {
         ComparisonDirection direction = ComparisonDirection.of(scores.conditions(), data.ratings(), data.toolUse(),
                 options.baselineCondition());
         StudyOptions opts = options.withBaseline(direction.baseline());
+        StudyDesign design = StudyDesign.of(data.ratings(), options.design());
         // sections only read the scores and the input, so they are built concurrently (the rater
         // section, the largest, runs beside the others) and then kept in their fixed order
         List<Supplier<Section>> builders = new ArrayList<>();
         builders.add(() -> InputSection.build(data, scores, opts));
         builders.add(() -> DescriptivesSection.build(scores, opts));
-        builders.add(() -> ConditionSection.build(scores, opts, direction));
+        builders.add(() -> ConditionSection.build(data, scores, opts, direction, design));
         builders.add(() -> LevelsSection.build(scores, opts));
         if (!Candidate.attributeNames(data.candidates()).isEmpty()) {
             builders.add(() -> AttributesSection.build(data.candidates(), scores, opts));

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.study.AnalysisRun;
 import org.inkgate.admin.study.RaschChoices;
+import org.inkgate.analysis.data.StudyDesign;
 import org.inkgate.analysis.mfrm.MfrmOptions;
 import org.inkgate.analysis.mfrm.StudyRatings;
 import org.inkgate.analysis.process.ProcessMeasures;
@@ -97,6 +98,17 @@ public final class AnalyseCommand implements Callable<Integer> {
                     + " tool-use table shows; else the first in alphabetical order)")
     private String baseline;
 
+    @Option(names = "--design", paramLabel = "DESIGN",
+            description = {"Optional: the study's design, within (every candidate under every condition) or parallel"
+                + " (each candidate under one condition). The report checks it against the data and says where they"
+                + " differ; without it the design is read from the data."})
+    private String design;
+
+    @Option(names = "--pre-test", paramLabel = "COLUMN",
+            description = "Optional: a numeric column of --candidates (e.g. a placement score) that the parallel-groups"
+                    + " comparison adjusts for; without it the adjustment is for level")
+    private String preTest;
+
     @Option(names = "--pause-ms", paramLabel = "MS", defaultValue = "2000",
             description = "Pause threshold for the writing-process measures (default: ${DEFAULT-VALUE} ms)")
     private long pauseMs;
@@ -146,7 +158,8 @@ public final class AnalyseCommand implements Callable<Integer> {
         StudyOptions options;
         try {
             options = StudyOptions.DEFAULT.withScoreRule(scoreRule).withBaseline(baseline).withTitle(title)
-                    .withProcess(new ProcessMeasures.Parameters(pauseMs, lookupWindowMs));
+                    .withProcess(new ProcessMeasures.Parameters(pauseMs, lookupWindowMs))
+                    .withDesign(design == null ? null : StudyDesign.parseDeclared(design)).withPreTest(preTest);
         } catch (IllegalArgumentException e) {
             err.println("inkgate-admin analyse: " + e.getMessage());
             return INPUT_REFUSED;
@@ -154,6 +167,10 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (attributes != null && candidates == null) {
             throw new ParameterException(spec.commandLine(), "--attribute names a column of --candidates FILE.csv;"
                     + " give that file (or, with --store, --roster-attribute for a roster field)");
+        }
+        if (preTest != null && candidates == null) {
+            throw new ParameterException(spec.commandLine(), "--pre-test names a numeric column of --candidates"
+                    + " FILE.csv; give that file");
         }
         if (rosterAttributes != null && store == null) {
             throw new ParameterException(spec.commandLine(), "--roster-attribute reads the roster in --store DB;"

@@ -172,6 +172,11 @@ public final class AnalysisRun {
                     + " is not a condition in the ratings; use one of "
                     + data.ratings().stream().map(Rating::condition).distinct().sorted().toList());
         }
+        if (options.preTest() != null && data.surveyItems().stream().noneMatch(options.preTest()::equals)) {
+            throw new Refused(false, "--pre-test " + options.preTest() + " is not a numeric column of the candidate"
+                    + " table; use one of " + data.surveyItems() + " (a column declared with --attribute is a"
+                    + " category, not a number)");
+        }
         List<Section> extra = new ArrayList<>();
         if (answers != null && !answers.isEmpty()) {
             extra.add(QuestionnaireSection.build(answers, data.toolUse()));
@@ -188,7 +193,7 @@ public final class AnalysisRun {
         MfrmResult mfrmResult = null;
         if (q.mfrm() != null) {
             step(1, "Many-facet Rasch measurement (the longest part)");
-            RaschRun.Outcome run = RaschRun.of(data, q.mfrm(), anchors);
+            RaschRun.Outcome run = RaschRun.of(data, q.mfrm(), anchors, options.design());
             run.leftOut().forEach(x -> listener.warn("warning: " + x));
             mfrmResult = run.result();
             Section mfrm = run.section();

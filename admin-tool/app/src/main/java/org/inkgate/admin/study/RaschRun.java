@@ -4,7 +4,9 @@ import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.inkgate.analysis.data.StudyDesign;
 import org.inkgate.analysis.mfrm.AnchorFile;
+import org.inkgate.analysis.mfrm.ConditionFacet;
 import org.inkgate.analysis.mfrm.FacetPair;
 import org.inkgate.analysis.mfrm.ManyFacetRasch;
 import org.inkgate.analysis.mfrm.MfrmOptions;
@@ -27,7 +29,16 @@ final class RaschRun {
     }
 
     /** Runs the Rasch analysis on the ratings already read. */
-    static Outcome of(StudyData data, MfrmOptions o, AnchorFile.Anchors anchors) {
+    static Outcome of(StudyData data, MfrmOptions asked, AnchorFile.Anchors anchors, StudyDesign.Kind declared) {
+        // condition is a crossed facet within candidates and describes candidates in parallel groups
+        StudyDesign design = StudyDesign.of(data.ratings(), declared);
+        MfrmOptions o;
+        try {
+            o = ConditionFacet.adapt(asked, design);
+        } catch (MfrmRefusedException e) {
+            return new Outcome(ConditionFacet.annotate(MfrmSection.refused(e.reasons()), asked, design, null,
+                    data.ratings()), null, List.of());
+        }
         Map<String, String> levels = new HashMap<>();
         Map<String, Map<String, String>> attributes = new HashMap<>();
         data.candidates().forEach(c -> {
@@ -64,12 +75,15 @@ final class RaschRun {
                 options = b.build();
             }
             MfrmResult result = ManyFacetRasch.analyse(ratingData, options);
-            return new Outcome(MfrmSection.of(result, levelOf), result, leftOut);
+            return new Outcome(ConditionFacet.annotate(MfrmSection.of(result, levelOf), asked, design, result,
+                    data.ratings()), result, leftOut);
         } catch (MfrmRefusedException e) {
-            return new Outcome(MfrmSection.refused(e.reasons()), null, leftOut);
+            return new Outcome(ConditionFacet.annotate(MfrmSection.refused(e.reasons()), asked, design, null,
+                    data.ratings()), null, leftOut);
         } catch (IllegalArgumentException e) {
             // an anchor the ratings cannot take (e.g. thresholds for another number of categories)
-            return new Outcome(MfrmSection.refused(List.of(e.getMessage())), null, leftOut);
+            return new Outcome(ConditionFacet.annotate(MfrmSection.refused(List.of(e.getMessage())), asked, design,
+                    null, data.ratings()), null, leftOut);
         }
     }
 }
