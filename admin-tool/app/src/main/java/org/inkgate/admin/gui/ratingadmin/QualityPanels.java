@@ -1,0 +1,170 @@
+package org.inkgate.admin.gui.ratingadmin;
+
+import static org.inkgate.admin.gui.ratingadmin.RatingAdminView.button;
+import static org.inkgate.admin.gui.ratingadmin.RatingAdminView.column;
+import static org.inkgate.admin.gui.ratingadmin.RatingAdminView.field;
+import static org.inkgate.admin.gui.ratingadmin.RatingAdminView.table;
+
+import java.util.Locale;
+import java.util.TreeMap;
+import java.util.stream.Collectors;
+import javafx.scene.Node;
+import javafx.scene.control.Button;
+import javafx.scene.control.TableColumn;
+import javafx.scene.control.TableRow;
+import javafx.scene.control.TableView;
+import javafx.scene.layout.GridPane;
+import javafx.scene.layout.HBox;
+import javafx.scene.layout.VBox;
+import org.inkgate.admin.core.rating.ControlMonitor;
+import org.inkgate.admin.core.rating.ControlScripts;
+import org.inkgate.admin.core.rating.Referrals;
+import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.Work;
+import org.inkgate.format.refusal.FormatRefusal;
+
+/**
+ * The referrals list and the control scripts with the per-rater monitor, for the rating step's
+ * page; split from {@link RatingAdminView} to keep each class within reach.
+ */
+final class QualityPanels {
+
+    /** Style class of a monitor row whose rater is flagged; its colours are admin.css's -ig-flag- variables. */
+    static final String FLAGGED_ROW = "flagged-rater";
+
+    private QualityPanels() {
+    }
+
+    static Node referrals(ReferralDecisions model, Work work) {
+        TableView<Referrals.Referral> list = table("referrals", "Scripts raters referred to the test owner");
+        list.setItems(model.referrals());
+        list.setPlaceholder(new javafx.scene.control.Label("No referral: raters refer from the desk or with rate refer."));
+        list.getColumns().add(narrow(column("Referral", r -> Long.toString(r.id())), 70));
+        list.getColumns().add(column("Blind id", Referrals.Referral::blindId));
+        list.getColumns().add(wrapped(column("Task", Referrals.Referral::taskId), 140));
+        list.getColumns().add(column("Candidate", Referrals.Referral::candidateNumber));
+        list.getColumns().add(column("Rater", Referrals.Referral::raterId));
+        list.getColumns().add(wrapped(column("Reason and note", r -> r.reason().meaning() + ": "
+                + FormatRefusal.printable(r.note())), 200));
+        list.getColumns().add(wrapped(column("Where it stands", r -> r.open() ? "open: decide under your regulations"
+                : "decided by " + FormatRefusal.printable(r.decidedBy()) + " " + r.decidedAt() + ": "
+                + FormatRefusal.printable(r.decision())), 200));
+
+        Button decide = button("decideReferral", "Record decision", "Record the decision on the referral", work);
+        decide.setOnAction(e -> model.decide());
+        GridPane form = Fields.grid();
+        Fields.row(form, 0, "Referral number", field("referralId", "Referral number to decide", model.referral(), 6));
+        Fields.row(form, 1, "Decided by", field("referralBy", "Who decided", model.by(), 16));
+        Fields.row(form, 2, "Decision", field("referralDecision", "What was decided", model.decision(), 30));
+        form.add(decide, 1, 3);
+        return new VBox(10, Fields.heading("Referrals"), Fields.note("Raters refer a script when its text reveals who"
+                + " wrote it, suggests help the sitting did not allow, or is off the task. The candidate number is shown"
+                + " to you only. A decision changes no score and no queue: what follows is for your regulations;"
+                + " a later decision replaces an earlier one."), list, form);
+    }
+
+    static Node controls(ControlQuality model, Work work) {
+        TableView<ControlScripts.Control> list = table("controlScripts", "Control scripts with their agreed scores");
+        list.setItems(model.controls());
+        list.setPlaceholder(new javafx.scene.control.Label("No control script marked yet."));
+        list.getColumns().add(column("Candidate", ControlScripts.Control::candidateNumber));
+        list.getColumns().add(wrapped(column("Task", ControlScripts.Control::taskId), 160));
+        list.getColumns().add(wrapped(column("Agreed scores", c -> new TreeMap<>(c.agreed()).toString()), 180));
+        list.getColumns().add(column("In queues", c -> Integer.toString(c.inQueues())));
+        list.getColumns().add(column("Rated", c -> Integer.toString(c.rated())));
+        list.getColumns().add(wrapped(column("Source", c -> FormatRefusal.printable(c.source())), 160));
+
+        Button mark = button("markControl", "Mark as control script", "Mark the response as a control script", work);
+        mark.setOnAction(e -> model.mark());
+        Button mix = button("mixControls", "Mix into queues", "Mix the control scripts into raters' queues", work);
+        mix.setOnAction(e -> model.mix());
+        GridPane form = Fields.grid();
+        Fields.row(form, 0, "Candidate number", field("controlCandidate", "Candidate number of the control script",
+                model.candidate(), 10));
+        Fields.row(form, 1, "Task", field("controlTask", "Task of the control script", model.task(), 16));
+        var agreed = field("controlAgreed", "Agreed scores, one per criterion, as criterion=score separated by commas",
+                model.agreed(), 30);
+        agreed.setPromptText("criterion=score, criterion=score");
+        Fields.row(form, 2, "Agreed scores", agreed);
+        Fields.row(form, 3, "Agreed at", field("controlSource", "Where the agreed scores come from", model.source(), 30));
+        form.add(mark, 1, 4);
+        var seed = field("controlSeed", "Mixing seed (blank: a new one is drawn and shown)", model.mixSeed(), 20);
+        seed.setPromptText("blank: drawn and shown");
+        Fields.row(form, 5, "Mixing seed", seed);
+        form.add(mix, 1, 6);
+
+        return new VBox(10, Fields.heading("Control scripts and rater monitor"), Fields.note("A control script is a"
+                + " response with agreed scores (e.g. from a standardisation meeting). Mixed into raters' queues, it"
+                + " looks like any other script; its ratings measure the rater and never enter a candidate's scores."),
+                list, form, monitor(model, work));
+    }
+
+    private static Node monitor(ControlQuality model, Work work) {
+        TableView<ControlMonitor.RaterReport> table = table("raterMonitor",
+                "Each rater against the agreed scores of the control scripts");
+        table.setItems(model.monitor());
+        table.setPlaceholder(new javafx.scene.control.Label("No control script rated yet."));
+        table.getColumns().add(column("Rater", ControlMonitor.RaterReport::raterId));
+        table.getColumns().add(column("Scripts", r -> Integer.toString(r.scripts())));
+        table.getColumns().add(column("Exact", r -> share(r.exact())));
+        table.getColumns().add(column("Adjacent", r -> share(r.adjacent())));
+        table.getColumns().add(column("Mean difference", r -> signed(r.meanDifference())));
+        table.getColumns().add(column("Drift", r -> signed(r.drift())));
+        table.getColumns().add(wrapped(column("Over time, earliest first", r -> r.timeline().stream()
+                .map(p -> signed(p.meanDifference())).collect(Collectors.joining(" "))), 170));
+        table.getColumns().add(wrapped(column("Flag", r -> r.flagged() ? "FLAGGED: " + String.join("; ", r.flags())
+                : "within the limits"), 220));
+        table.setRowFactory(t -> new TableRow<>() {
+            @Override
+            protected void updateItem(ControlMonitor.RaterReport item, boolean empty) {
+                super.updateItem(item, empty);
+                getStyleClass().remove(FLAGGED_ROW);
+                if (!empty && item != null && item.flagged()) {
+                    getStyleClass().add(FLAGGED_ROW);
+                }
+            }
+        });
+
+        Button apply = button("applyMonitorLimits", "Apply limits", "Apply the monitor limits", work);
+        apply.setOnAction(e -> model.applyLimits());
+        HBox limits = new HBox(8,
+                limit("monitorMinExact", "Minimum exact agreement, 0 to 1 (blank: not checked)", model.minExact()),
+                limit("monitorMinAdjacent", "Minimum adjacent agreement, 0 to 1 (blank: not checked)", model.minAdjacent()),
+                limit("monitorMaxMean", "Largest mean difference in points (blank: not checked)", model.maxMeanDifference()),
+                limit("monitorMaxDrift", "Largest drift in points (blank: not checked)", model.maxDrift()), apply);
+        GridPane labels = Fields.grid();
+        Fields.row(labels, 0, "Limits: exact, adjacent, mean difference, drift", limits);
+        return new VBox(10, Fields.heading("Rater monitor"), Fields.note("Over every criterion score of the control"
+                + " scripts each rater submitted: exact and adjacent agreement (|score - agreed| of 0, of at most 1),"
+                + " mean difference (score - agreed; positive is more lenient), and drift: the later half of the"
+                + " rater's control scripts minus the earlier half. The starting limits are placeholders, not a"
+                + " standard: set your own. A flag asks you to look (retraining, re-rating) under your rules."),
+                labels, table);
+    }
+
+    private static javafx.scene.control.TextField limit(String id, String accessible,
+            javafx.beans.property.StringProperty value) {
+        var f = field(id, accessible, value, 4);
+        f.setPromptText("none");
+        return f;
+    }
+
+    private static <S> TableColumn<S, String> wrapped(TableColumn<S, String> c, double width) {
+        c.setPrefWidth(width);
+        Fields.wrap(c);
+        return c;
+    }
+
+    private static <S> TableColumn<S, String> narrow(TableColumn<S, String> c, double width) {
+        c.setPrefWidth(width);
+        return c;
+    }
+
+    private static String share(double d) {
+        return Double.isNaN(d) ? "-" : String.format(Locale.ROOT, "%.2f", d);
+    }
+
+    private static String signed(double d) {
+        return Double.isNaN(d) ? "-" : String.format(Locale.ROOT, "%+.2f", d);
+    }
+}
