@@ -178,6 +178,35 @@ class QualityStepTest {
         }
     }
 
+    /** Issue 15: an accessible name on every control of the rating step (tables by their own name, not their cells). */
+    @Test
+    void ratingStep_everyControlHasAnAccessibleName(FxRobot robot) {
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        StepDriver.select(robot, "Rating administration");
+        javafx.scene.Node view = robot.lookup("#ratingStore").query().getParent();
+        while (!view.getStyleClass().contains("step")) {
+            view = view.getParent();
+        }
+        int checked = 0;
+        for (javafx.scene.Node n : robot.from(view).lookup((java.util.function.Predicate<javafx.scene.Node>) n ->
+                n instanceof javafx.scene.control.Control && !(n instanceof javafx.scene.control.Label)
+                        && !(n instanceof javafx.scene.control.ScrollBar) && !insideTable(n)).queryAll()) {
+            assertTrue(n.getAccessibleText() != null && !n.getAccessibleText().isBlank(), n + " has no accessible name");
+            checked++;
+        }
+        assertTrue(checked >= 45, "controls checked: " + checked);
+    }
+
+    private static boolean insideTable(javafx.scene.Node n) {
+        for (javafx.scene.Node p = n.getParent(); p != null; p = p.getParent()) {
+            if (p instanceof TableView) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     /** Control items of every rater, rated at the agreed scores; rater-a's later half 3 points above. */
     private static void rateControls(Path store) throws Exception {
         Map<String, List<String>> items = new HashMap<>();
