@@ -150,6 +150,19 @@ class QualityStepTest {
         assertTrue(listed.contains("decided by Chief examiner (invented)") && listed.contains("name removed"), listed);
         List<Referrals.Referral> after = rows(robot, "#referrals");
         assertEquals("Chief examiner (invented)", after.get(0).decidedBy());
+        pictures(robot);
+    }
+
+    /** The referrals and the control scripts at 1024x768, for docs/test-owner-guide.md. */
+    private void pictures(FxRobot robot) throws Exception {
+        robot.interact(() -> {
+            stage.setWidth(1024);
+            stage.setHeight(768);
+        });
+        StepDriver.scrollTo(robot, "#referrals", 150);
+        StepDriver.shoot1024(robot, stage, "admin-rating-referrals.png");
+        StepDriver.scrollTo(robot, "#controlScripts", 150);
+        StepDriver.shoot1024(robot, stage, "admin-rating-controls.png");
     }
 
     @Test
