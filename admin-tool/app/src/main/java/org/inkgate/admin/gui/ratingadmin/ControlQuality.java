@@ -10,12 +10,11 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.inkgate.admin.core.rating.ControlMonitor;
 import org.inkgate.admin.core.rating.ControlScripts;
-import org.inkgate.admin.core.rating.SqliteControlScripts;
 
 /**
  * Control scripts and the per-rater monitor of the rating step, as {@code rate control mark},
  * {@code rate control mix}, {@code rate control list} and {@code rate monitor}: the same
- * {@link SqliteControlScripts} and {@link ControlMonitor}. The store is read after every action;
+ * control scripts of the rating store and {@link ControlMonitor}. The store is read after every action;
  * the monitor is worked out again from those ratings whenever the limits change.
  */
 public final class ControlQuality {
@@ -74,7 +73,7 @@ public final class ControlQuality {
             return;
         }
         model.call("Marking a control script", s -> {
-            new SqliteControlScripts(s).markControl(who, which, scores, from);
+            RatingAdminModel.controlScripts(s).markControl(who, which, scores, from);
             return "Marked: candidate " + who + ", task " + which + ". Put it into the queues with Mix into queues.";
         });
     }
@@ -92,7 +91,7 @@ public final class ControlQuality {
             return;
         }
         model.call("Mixing control scripts into the queues", s -> {
-            int added = new SqliteControlScripts(s).mixControls(seed);
+            int added = RatingAdminModel.controlScripts(s).mixControls(seed);
             return added + " control item(s) added to raters' queues (seed " + seed + ").";
         });
     }

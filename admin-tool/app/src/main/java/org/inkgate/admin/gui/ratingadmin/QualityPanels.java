@@ -14,7 +14,6 @@ import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableRow;
 import javafx.scene.control.TableView;
 import javafx.scene.layout.GridPane;
-import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
 import org.inkgate.admin.core.rating.ControlMonitor;
 import org.inkgate.admin.core.rating.ControlScripts;
@@ -104,16 +103,16 @@ final class QualityPanels {
                 "Each rater against the agreed scores of the control scripts");
         table.setItems(model.monitor());
         table.setPlaceholder(new javafx.scene.control.Label("No control script rated yet."));
-        table.getColumns().add(column("Rater", ControlMonitor.RaterReport::raterId));
-        table.getColumns().add(column("Scripts", r -> Integer.toString(r.scripts())));
-        table.getColumns().add(column("Exact", r -> share(r.exact())));
-        table.getColumns().add(column("Adjacent", r -> share(r.adjacent())));
-        table.getColumns().add(column("Mean difference", r -> signed(r.meanDifference())));
-        table.getColumns().add(column("Drift", r -> signed(r.drift())));
-        table.getColumns().add(wrapped(column("Over time, earliest first", r -> r.timeline().stream()
-                .map(p -> signed(p.meanDifference())).collect(Collectors.joining(" "))), 170));
+        table.getColumns().add(sized(column("Rater", ControlMonitor.RaterReport::raterId), 80));
+        table.getColumns().add(sized(column("Scripts", r -> Integer.toString(r.scripts())), 64));
+        table.getColumns().add(sized(column("Exact", r -> share(r.exact())), 56));
+        table.getColumns().add(sized(column("Adjacent", r -> share(r.adjacent())), 80));
+        table.getColumns().add(sized(column("Mean\ndifference", r -> signed(r.meanDifference())), 94));
+        table.getColumns().add(sized(column("Drift", r -> signed(r.drift())), 56));
+        table.getColumns().add(wrapped(column("Over time,\nearliest first", r -> r.timeline().stream()
+                .map(p -> signed(p.meanDifference())).collect(Collectors.joining(" "))), 120));
         table.getColumns().add(wrapped(column("Flag", r -> r.flagged() ? "FLAGGED: " + String.join("; ", r.flags())
-                : "within the limits"), 220));
+                : "within the limits"), 200));
         table.setRowFactory(t -> new TableRow<>() {
             @Override
             protected void updateItem(ControlMonitor.RaterReport item, boolean empty) {
@@ -127,19 +126,32 @@ final class QualityPanels {
 
         Button apply = button("applyMonitorLimits", "Apply limits", "Apply the monitor limits", work);
         apply.setOnAction(e -> model.applyLimits());
-        HBox limits = new HBox(8,
-                limit("monitorMinExact", "Minimum exact agreement, 0 to 1 (blank: not checked)", model.minExact()),
-                limit("monitorMinAdjacent", "Minimum adjacent agreement, 0 to 1 (blank: not checked)", model.minAdjacent()),
-                limit("monitorMaxMean", "Largest mean difference in points (blank: not checked)", model.maxMeanDifference()),
-                limit("monitorMaxDrift", "Largest drift in points (blank: not checked)", model.maxDrift()), apply);
+        apply.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         GridPane labels = Fields.grid();
-        Fields.row(labels, 0, "Limits: exact, adjacent, mean difference, drift", limits);
+        labelled(labels, 0, 0, "Exact agreement at least",
+                limit("monitorMinExact", "Minimum exact agreement, 0 to 1 (blank: not checked)", model.minExact()));
+        labelled(labels, 0, 1, "Adjacent agreement at least",
+                limit("monitorMinAdjacent", "Minimum adjacent agreement, 0 to 1 (blank: not checked)", model.minAdjacent()));
+        labelled(labels, 2, 0, "Mean difference within +-", limit("monitorMaxMean",
+                "Largest mean difference in points (blank: not checked)", model.maxMeanDifference()));
+        labelled(labels, 2, 1, "Drift within +-",
+                limit("monitorMaxDrift", "Largest drift in points (blank: not checked)", model.maxDrift()));
+        labels.add(apply, 4, 1);
         return new VBox(10, Fields.heading("Rater monitor"), Fields.note("Over every criterion score of the control"
                 + " scripts each rater submitted: exact and adjacent agreement (|score - agreed| of 0, of at most 1),"
                 + " mean difference (score - agreed; positive is more lenient), and drift: the later half of the"
                 + " rater's control scripts minus the earlier half. The starting limits are placeholders, not a"
                 + " standard: set your own. A flag asks you to look (retraining, re-rating) under your rules."),
                 labels, table);
+    }
+
+    /** A label and its field side by side in the grid, the label never cut short. */
+    private static void labelled(GridPane grid, int column, int row, String text, javafx.scene.Node field) {
+        javafx.scene.control.Label l = new javafx.scene.control.Label(text);
+        l.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
+        l.setLabelFor(field);
+        grid.add(l, column, row);
+        grid.add(field, column + 1, row);
     }
 
     private static javafx.scene.control.TextField limit(String id, String accessible,
@@ -152,6 +164,12 @@ final class QualityPanels {
     private static <S> TableColumn<S, String> wrapped(TableColumn<S, String> c, double width) {
         c.setPrefWidth(width);
         Fields.wrap(c);
+        return c;
+    }
+
+    private static <S> TableColumn<S, String> sized(TableColumn<S, String> c, double width) {
+        c.setPrefWidth(width);
+        c.setMinWidth(width * 0.8);
         return c;
     }
 

@@ -163,6 +163,14 @@ public final class RatingAdminModel {
         return SqliteRatingStore.open(file, id);
     }
 
+    /**
+     * The store's control scripts, as {@code rate control} reaches them: the one place the step
+     * names the implementation (the rating store's split, branch i19-split, moves it behind the store).
+     */
+    static ControlScripts controlScripts(SqliteRatingStore s) {
+        return new SqliteControlScripts(s);
+    }
+
     private static Snapshot snapshot(SqliteRatingStore s) throws RatingException {
         List<String> state = new ArrayList<>();
         state.add(AssignmentSummary.linkage(s.design()));
@@ -171,7 +179,7 @@ public final class RatingAdminModel {
                 + " response(s) have no final score yet (ratings outstanding or disagreements not settled).");
         state.add(s.rule().map(r -> "Discrepancy rule: flag " + r.describe() + ".")
                 .orElse("No discrepancy rule is set: ratings are averaged without any check."));
-        SqliteControlScripts controlScripts = new SqliteControlScripts(s);
+        ControlScripts controlScripts = controlScripts(s);
         return new Snapshot(s.raterEntries(), s.progressRows(), s.flags(), String.join("\n", state), s.referrals(false),
                 controlScripts.controls(), controlScripts.controlRatings());
     }
