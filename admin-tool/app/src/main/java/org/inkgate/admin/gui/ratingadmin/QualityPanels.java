@@ -38,16 +38,15 @@ final class QualityPanels {
         TableView<Referrals.Referral> list = table("referrals", "Scripts raters referred to the test owner");
         list.setItems(model.referrals());
         list.setPlaceholder(new javafx.scene.control.Label("No referral: raters refer from the desk or with rate refer."));
-        list.getColumns().add(narrow(column("Referral", r -> Long.toString(r.id())), 70));
-        list.getColumns().add(column("Blind id", Referrals.Referral::blindId));
-        list.getColumns().add(wrapped(column("Task", Referrals.Referral::taskId), 140));
-        list.getColumns().add(column("Candidate", Referrals.Referral::candidateNumber));
-        list.getColumns().add(column("Rater", Referrals.Referral::raterId));
-        list.getColumns().add(wrapped(column("Reason and note", r -> r.reason().meaning() + ": "
-                + FormatRefusal.printable(r.note())), 200));
+        // five columns fit 1024 pixels with every heading and task name whole: the script column holds id and task
+        list.getColumns().add(sized(column("Referral", r -> Long.toString(r.id())), 76));
+        list.getColumns().add(wrapped(column("Script", r -> r.blindId() + "\n" + r.taskId()), 140));
+        list.getColumns().add(sized(column("Candidate", Referrals.Referral::candidateNumber), 92));
+        list.getColumns().add(wrapped(column("Referred by, reason and note", r -> r.raterId() + ": "
+                + r.reason().meaning() + ": " + FormatRefusal.printable(r.note())), 190));
         list.getColumns().add(wrapped(column("Where it stands", r -> r.open() ? "open: decide under your regulations"
-                : "decided by " + FormatRefusal.printable(r.decidedBy()) + " " + r.decidedAt() + ": "
-                + FormatRefusal.printable(r.decision())), 200));
+                : "decided by " + FormatRefusal.printable(r.decidedBy()) + ", " + minute(r.decidedAt()) + ": "
+                + FormatRefusal.printable(r.decision())), 170));
 
         Button decide = button("decideReferral", "Record decision", "Record the decision on the referral", work);
         decide.setOnAction(e -> model.decide());
@@ -66,12 +65,13 @@ final class QualityPanels {
         TableView<ControlScripts.Control> list = table("controlScripts", "Control scripts with their agreed scores");
         list.setItems(model.controls());
         list.setPlaceholder(new javafx.scene.control.Label("No control script marked yet."));
-        list.getColumns().add(column("Candidate", ControlScripts.Control::candidateNumber));
-        list.getColumns().add(wrapped(column("Task", ControlScripts.Control::taskId), 160));
-        list.getColumns().add(wrapped(column("Agreed scores", c -> new TreeMap<>(c.agreed()).toString()), 180));
-        list.getColumns().add(column("In queues", c -> Integer.toString(c.inQueues())));
-        list.getColumns().add(column("Rated", c -> Integer.toString(c.rated())));
-        list.getColumns().add(wrapped(column("Source", c -> FormatRefusal.printable(c.source())), 160));
+        list.getColumns().add(sized(column("Candidate", ControlScripts.Control::candidateNumber), 92));
+        list.getColumns().add(wrapped(column("Task", ControlScripts.Control::taskId), 130));
+        list.getColumns().add(wrapped(column("Agreed scores", c -> new TreeMap<>(c.agreed()).entrySet().stream()
+                .map(e -> e.getKey() + "=" + e.getValue()).collect(Collectors.joining(", "))), 170));
+        list.getColumns().add(sized(column("In queues", c -> Integer.toString(c.inQueues())), 84));
+        list.getColumns().add(sized(column("Rated", c -> Integer.toString(c.rated())), 60));
+        list.getColumns().add(wrapped(column("Source", c -> FormatRefusal.printable(c.source())), 130));
 
         Button mark = button("markControl", "Mark as control script", "Mark the response as a control script", work);
         mark.setOnAction(e -> model.mark());
@@ -173,9 +173,10 @@ final class QualityPanels {
         return c;
     }
 
-    private static <S> TableColumn<S, String> narrow(TableColumn<S, String> c, double width) {
-        c.setPrefWidth(width);
-        return c;
+    /** A stored UTC time (ISO 8601) to the minute, for reading; the command line prints it whole. */
+    private static String minute(String iso) {
+        return iso != null && iso.length() >= 16 && iso.charAt(10) == 'T' ? iso.substring(0, 10) + " " + iso.substring(11, 16)
+                + " UTC" : String.valueOf(iso);
     }
 
     private static String share(double d) {

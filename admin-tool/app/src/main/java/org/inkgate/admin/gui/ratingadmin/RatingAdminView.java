@@ -105,7 +105,8 @@ public final class RatingAdminView implements Step {
         TableView<SqliteRatingStore.Flag> flags = table("flags", "Flagged responses");
         flags.setItems(model.flags());
         TableColumn<SqliteRatingStore.Flag, String> number = column("Flag", f -> Long.toString(f.flagId()));
-        number.setPrefWidth(50);
+        number.setPrefWidth(64);
+        number.setMinWidth(60); // the heading "Flag" whole at 1024 pixels
         flags.getColumns().add(number);
         TableColumn<SqliteRatingStore.Flag, String> flagTask = column("Task", SqliteRatingStore.Flag::taskId);
         flagTask.setPrefWidth(170);
