@@ -42,7 +42,7 @@ final class QualityPanels {
         list.getColumns().add(sized(column("Referral", r -> Long.toString(r.id())), 76));
         list.getColumns().add(wrapped(column("Script", r -> r.blindId() + "\n" + r.taskId()), 140));
         list.getColumns().add(sized(column("Candidate", Referrals.Referral::candidateNumber), 92));
-        list.getColumns().add(wrapped(column("Referred by, reason and note", r -> r.raterId() + ": "
+        list.getColumns().add(wrapped(column("Rater, reason, note", r -> r.raterId() + ": "
                 + r.reason().meaning() + ": " + FormatRefusal.printable(r.note())), 190));
         list.getColumns().add(wrapped(column("Where it stands", r -> r.open() ? "open: decide under your regulations"
                 : "decided by " + FormatRefusal.printable(r.decidedBy()) + ", " + minute(r.decidedAt()) + ": "
@@ -103,16 +103,17 @@ final class QualityPanels {
                 "Each rater against the agreed scores of the control scripts");
         table.setItems(model.monitor());
         table.setPlaceholder(new javafx.scene.control.Label("No control script rated yet."));
-        table.getColumns().add(sized(column("Rater", ControlMonitor.RaterReport::raterId), 80));
+        // 670 pixels in all: every heading and figure whole in a 1024-pixel window
+        table.getColumns().add(sized(column("Rater", ControlMonitor.RaterReport::raterId), 72));
         table.getColumns().add(sized(column("Scripts", r -> Integer.toString(r.scripts())), 64));
         table.getColumns().add(sized(column("Exact", r -> share(r.exact())), 56));
         table.getColumns().add(sized(column("Adjacent", r -> share(r.adjacent())), 80));
-        table.getColumns().add(sized(column("Mean\ndifference", r -> signed(r.meanDifference())), 94));
-        table.getColumns().add(sized(column("Drift", r -> signed(r.drift())), 56));
+        table.getColumns().add(sized(column("Mean\ndifference", r -> signed(r.meanDifference())), 92));
+        table.getColumns().add(sized(column("Drift", r -> signed(r.drift())), 60));
         table.getColumns().add(wrapped(column("Over time,\nearliest first", r -> r.timeline().stream()
-                .map(p -> signed(p.meanDifference())).collect(Collectors.joining(" "))), 120));
+                .map(p -> signed(p.meanDifference())).collect(Collectors.joining(" "))), 100));
         table.getColumns().add(wrapped(column("Flag", r -> r.flagged() ? "FLAGGED: " + String.join("; ", r.flags())
-                : "within the limits"), 200));
+                : "within the limits"), 146));
         table.setRowFactory(t -> new TableRow<>() {
             @Override
             protected void updateItem(ControlMonitor.RaterReport item, boolean empty) {
@@ -169,7 +170,7 @@ final class QualityPanels {
 
     private static <S> TableColumn<S, String> sized(TableColumn<S, String> c, double width) {
         c.setPrefWidth(width);
-        c.setMinWidth(width * 0.8);
+        c.setMinWidth(width);
         return c;
     }
 
