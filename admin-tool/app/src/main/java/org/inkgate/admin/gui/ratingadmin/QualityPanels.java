@@ -102,6 +102,7 @@ final class QualityPanels {
         TableView<ControlMonitor.RaterReport> table = table("raterMonitor",
                 "Each rater against the agreed scores of the control scripts");
         table.setItems(model.monitor());
+        table.setPrefHeight(250); // a flagged rater's reasons, one a line, without scrolling
         table.setPlaceholder(new javafx.scene.control.Label("No control script rated yet."));
         // 670 pixels in all: every heading and figure whole in a 1024-pixel window
         table.getColumns().add(sized(column("Rater", ControlMonitor.RaterReport::raterId), 72));
@@ -110,9 +111,9 @@ final class QualityPanels {
         table.getColumns().add(sized(column("Adjacent", r -> share(r.adjacent())), 80));
         table.getColumns().add(sized(column("Mean\ndifference", r -> signed(r.meanDifference())), 92));
         table.getColumns().add(sized(column("Drift", r -> signed(r.drift())), 60));
-        table.getColumns().add(wrapped(column("Over time,\nearliest first", r -> r.timeline().stream()
+        table.getColumns().add(wrapped(column("Over time", r -> r.timeline().stream()
                 .map(p -> signed(p.meanDifference())).collect(Collectors.joining(" "))), 100));
-        table.getColumns().add(wrapped(column("Flag", r -> r.flagged() ? "FLAGGED: " + String.join("; ", r.flags())
+        table.getColumns().add(wrapped(column("Flag", r -> r.flagged() ? "FLAGGED:\n" + String.join(";\n", r.flags())
                 : "within the limits"), 146));
         table.setRowFactory(t -> new TableRow<>() {
             @Override
@@ -141,7 +142,8 @@ final class QualityPanels {
         return new VBox(10, Fields.heading("Rater monitor"), Fields.note("Over every criterion score of the control"
                 + " scripts each rater submitted: exact and adjacent agreement (|score - agreed| of 0, of at most 1),"
                 + " mean difference (score - agreed; positive is more lenient), and drift: the later half of the"
-                + " rater's control scripts minus the earlier half. The starting limits are placeholders, not a"
+                + " rater's control scripts minus the earlier half; over time, each control script's mean difference,"
+                + " earliest first. The starting limits are placeholders, not a"
                 + " standard: set your own. A flag asks you to look (retraining, re-rating) under your rules."),
                 labels, table);
     }
