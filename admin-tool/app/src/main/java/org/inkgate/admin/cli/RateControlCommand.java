@@ -84,15 +84,17 @@ final class RateControlCommand extends GroupCommand {
         @Option(names = "--min-exact", paramLabel = "SHARE", description = "flag below this exact agreement (0-1)")
         Double minExact;
 
-        @Option(names = "--min-adjacent", paramLabel = "SHARE", defaultValue = "0.8",
+        @Option(names = "--min-adjacent", paramLabel = "SHARE", defaultValue = "" + ControlMonitor.Thresholds.PLACEHOLDER_MIN_ADJACENT,
                 description = "flag below this adjacent agreement (0-1; default ${DEFAULT-VALUE})")
         Double minAdjacent;
 
-        @Option(names = "--max-mean-difference", paramLabel = "POINTS", defaultValue = "1.0",
+        @Option(names = "--max-mean-difference", paramLabel = "POINTS",
+                defaultValue = "" + ControlMonitor.Thresholds.PLACEHOLDER_MAX_MEAN_DIFFERENCE,
                 description = "flag a mean difference beyond +- this (default ${DEFAULT-VALUE})")
         Double maxMean;
 
-        @Option(names = "--max-drift", paramLabel = "POINTS", defaultValue = "1.0",
+        @Option(names = "--max-drift", paramLabel = "POINTS",
+                defaultValue = "" + ControlMonitor.Thresholds.PLACEHOLDER_MAX_DRIFT,
                 description = "flag a drift beyond +- this (default ${DEFAULT-VALUE})")
         Double maxDrift;
 

@@ -15,18 +15,23 @@ import org.inkgate.format.io.OwnerOnly;
 /**
  * Writes a folder's files into a hidden sibling first and moves them in only when all are written,
  * so a cancelled or failed run never leaves a report that mixes old and new files or stops halfway.
+ * The analysis report and the window's export both write through it.
  */
-final class PartialFolder {
+public final class PartialFolder {
 
     /** Writes the files into the folder it is given. */
-    interface Contents {
+    public interface Contents {
         void writeInto(Path folder) throws IOException;
     }
 
     private PartialFolder() {
     }
 
-    static void write(Path out, Contents contents, BooleanSupplier cancelled) throws IOException {
+    /**
+     * Writes {@code contents} into a hidden sibling of {@code out} and moves its files into
+     * {@code out} once all are written and {@code cancelled} is still false; the sibling is always removed.
+     */
+    public static void write(Path out, Contents contents, BooleanSupplier cancelled) throws IOException {
         Path target = out.toAbsolutePath().normalize();
         Path parent = target.getParent();
         OwnerOnly.folder(parent);

@@ -55,6 +55,21 @@ public final class StepDriver {
         robot.clickOn(query);
     }
 
+    /** Scrolls the step so that the node's top sits {@code above} pixels below the top of the view (for pictures). */
+    public static void scrollTo(FxRobot robot, String query, double above) {
+        robot.interact(() -> {
+            javafx.scene.Node node = robot.lookup(query).query();
+            javafx.scene.control.ScrollPane scroll = robot.lookup(".step-scroll")
+                    .queryAs(javafx.scene.control.ScrollPane.class);
+            scroll.layout();
+            javafx.scene.Node content = scroll.getContent();
+            double y = content.sceneToLocal(node.localToScene(node.getBoundsInLocal())).getMinY();
+            double room = content.getBoundsInLocal().getHeight() - scroll.getViewportBounds().getHeight();
+            scroll.setVvalue(room <= 0 ? 0 : Math.max(0, Math.min(1, (y - above) / room)));
+        });
+        WaitForAsyncUtils.waitForFxEvents();
+    }
+
     public static void setText(FxRobot robot, String query, String text) {
         robot.interact(() -> robot.lookup(query).queryAs(TextInputControl.class).setText(text));
     }

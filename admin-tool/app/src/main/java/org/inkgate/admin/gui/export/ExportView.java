@@ -44,13 +44,20 @@ public final class ExportView implements Step {
         export.setAccessibleText("Export the results store");
         export.disableProperty().bind(work.busy());
         export.setOnAction(e -> model.export());
+        export.getProperties().put(ExportModel.class, model); // lets a test hold the export at a part
+        Button cancel = new Button("Cancel");
+        cancel.setId("cancelExport");
+        cancel.setAccessibleText("Cancel the running export; nothing of it is kept");
+        cancel.disableProperty().bind(model.running().not());
+        cancel.setOnAction(e -> model.cancel());
         Label written = Fields.result("exportWritten", "What the export wrote", model.written());
         root = new VBox(14, Fields.heading(TITLE),
                 Fields.note("Per exam, into FOLDER/EXAM-ID: tidy CSV (csv/, see docs/data-dictionary.md), QTI 3.0"
                         + " results per response package (qti-results/, with final scores once ratings exist) and xAPI"
-                        + " statements (xapi-statements.jsonl). The same files as inkgate-admin export. Use an IRI base"
+                        + " statements (xapi-statements.jsonl). The same files as inkgate-admin export. The files are moved into the"
+                        + " folder only when the whole export is written: a cancelled or failed export leaves nothing. Use an IRI base"
                         + " under a domain you control before sharing the xAPI file."),
-                grid, export, written);
+                grid, new javafx.scene.layout.HBox(12, export, cancel), written);
         root.getStyleClass().add("step");
     }
 

@@ -12,7 +12,10 @@ import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.inkgate.admin.core.rating.AssignmentSummary;
+import org.inkgate.admin.core.rating.ControlScripts;
 import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.Referrals;
+import org.inkgate.admin.core.rating.SqliteControlScripts;
 import org.inkgate.admin.core.rating.SqliteRatingStore;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
@@ -26,7 +29,8 @@ public final class RatingAdminModel {
 
     /** What the tables show, read in one go after each change. */
     record Snapshot(List<SqliteRatingStore.RaterEntry> raters, List<SqliteRatingStore.ProgressRow> progress,
-            List<SqliteRatingStore.Flag> flags, String state) {
+            List<SqliteRatingStore.Flag> flags, String state, List<Referrals.Referral> referrals,
+            List<ControlScripts.Control> controls, List<ControlScripts.ControlRating> controlRatings) {
     }
 
     /** One store call; returns the message for the test owner. */
@@ -50,6 +54,8 @@ public final class RatingAdminModel {
     private final ObservableList<SqliteRatingStore.Flag> flags = FXCollections.observableArrayList();
     private final RuleAndFlags rule = new RuleAndFlags(this);
     private final SheetsAndScores sheets = new SheetsAndScores(this);
+    private final ReferralDecisions referrals = new ReferralDecisions(this);
+    private final ControlQuality controls = new ControlQuality(this);
 
     public RatingAdminModel(AdminSession session) {
         this.session = session;
@@ -74,6 +80,8 @@ public final class RatingAdminModel {
     public ObservableList<SqliteRatingStore.Flag> flags() { return flags; }
     public RuleAndFlags rule() { return rule; }
     public SheetsAndScores sheets() { return sheets; }
+    public ReferralDecisions referrals() { return referrals; }
+    public ControlQuality controls() { return controls; }
 
     /** Reads raters, progress and flags again. */
     public void refresh() {
@@ -138,6 +146,8 @@ public final class RatingAdminModel {
         progress.setAll(s.progress());
         flags.setAll(s.flags());
         state.set(s.state());
+        referrals.referrals().setAll(s.referrals());
+        controls.show(s.controls(), s.controlRatings());
     }
 
     /** As the command's --exam: may be left out when the store holds one exam. */
@@ -153,6 +163,14 @@ public final class RatingAdminModel {
         return SqliteRatingStore.open(file, id);
     }
 
+    /**
+     * The store's control scripts, as {@code rate control} reaches them: the one place the step
+     * names the implementation (the rating store's split, branch i19-split, moves it behind the store).
+     */
+    static ControlScripts controlScripts(SqliteRatingStore s) {
+        return new SqliteControlScripts(s);
+    }
+
     private static Snapshot snapshot(SqliteRatingStore s) throws RatingException {
         List<String> state = new ArrayList<>();
         state.add(AssignmentSummary.linkage(s.design()));
@@ -161,6 +179,8 @@ public final class RatingAdminModel {
                 + " response(s) have no final score yet (ratings outstanding or disagreements not settled).");
         state.add(s.rule().map(r -> "Discrepancy rule: flag " + r.describe() + ".")
                 .orElse("No discrepancy rule is set: ratings are averaged without any check."));
-        return new Snapshot(s.raterEntries(), s.progressRows(), s.flags(), String.join("\n", state));
+        ControlScripts controlScripts = controlScripts(s);
+        return new Snapshot(s.raterEntries(), s.progressRows(), s.flags(), String.join("\n", state), s.referrals(false),
+                controlScripts.controls(), controlScripts.controlRatings());
     }
 }

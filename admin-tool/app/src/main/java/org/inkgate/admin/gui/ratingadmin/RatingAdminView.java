@@ -105,7 +105,8 @@ public final class RatingAdminView implements Step {
         TableView<SqliteRatingStore.Flag> flags = table("flags", "Flagged responses");
         flags.setItems(model.flags());
         TableColumn<SqliteRatingStore.Flag, String> number = column("Flag", f -> Long.toString(f.flagId()));
-        number.setPrefWidth(50);
+        number.setPrefWidth(64);
+        number.setMinWidth(60); // the heading "Flag" whole at 1024 pixels
         flags.getColumns().add(number);
         TableColumn<SqliteRatingStore.Flag, String> flagTask = column("Task", SqliteRatingStore.Flag::taskId);
         flagTask.setPrefWidth(170);
@@ -162,6 +163,7 @@ public final class RatingAdminView implements Step {
                         + " regulations. Flagged responses go to a third rater or wait for a resolution entry."),
                 ruleGrid,
                 Fields.heading("Flags and resolution entries"), flags, review, resolution,
+                QualityPanels.referrals(model.referrals(), work), QualityPanels.controls(model.controls(), work),
                 Fields.heading("Rating sheets and final scores"), Fields.note("A sheet lists the rater's queue under"
                         + " blind ids; the scripts folder beside it holds the texts and the rubric. A filled sheet is"
                         + " checked row by row and nothing is stored if any row is bad. ratings.csv and"
@@ -170,7 +172,7 @@ public final class RatingAdminView implements Step {
         root.getStyleClass().add("step");
     }
 
-    private static TextField field(String id, String accessible, StringProperty value, int columns) {
+    static TextField field(String id, String accessible, StringProperty value, int columns) {
         TextField f = new TextField();
         f.setId(id);
         f.setAccessibleText(accessible);
@@ -179,7 +181,7 @@ public final class RatingAdminView implements Step {
         return f;
     }
 
-    private static Button button(String id, String text, String accessible, Work work) {
+    static Button button(String id, String text, String accessible, Work work) {
         Button b = new Button(text);
         b.setId(id);
         b.setAccessibleText(accessible);
@@ -187,7 +189,7 @@ public final class RatingAdminView implements Step {
         return b;
     }
 
-    private static <S> TableView<S> table(String id, String accessible) {
+    static <S> TableView<S> table(String id, String accessible) {
         TableView<S> t = new TableView<>();
         t.setId(id);
         t.setAccessibleText(accessible);
@@ -197,7 +199,7 @@ public final class RatingAdminView implements Step {
         return t;
     }
 
-    private static <S> TableColumn<S, String> column(String name, Function<S, String> value) {
+    static <S> TableColumn<S, String> column(String name, Function<S, String> value) {
         TableColumn<S, String> c = new TableColumn<>(name);
         c.setCellValueFactory(d -> new ReadOnlyObjectWrapper<>(value.apply(d.getValue())));
         return c;

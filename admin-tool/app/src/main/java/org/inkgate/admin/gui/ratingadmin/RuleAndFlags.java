@@ -1,6 +1,5 @@
 package org.inkgate.admin.gui.ratingadmin;
 
-import java.util.LinkedHashMap;
 import java.util.Map;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
@@ -65,18 +64,18 @@ public final class RuleAndFlags {
     /** As {@code rate resolve}: settles a flagged response by a resolution entry. */
     public void resolve() {
         long id;
-        Map<String, Integer> parsed = new LinkedHashMap<>();
+        Map<String, Integer> parsed;
         try {
             id = Long.parseLong(flag.get().strip());
-            for (String pair : scores.get().split(",")) {
-                String[] kv = pair.split("=", 2);
-                if (kv.length != 2 || parsed.put(kv[0].strip(), Integer.parseInt(kv[1].strip())) != null) {
-                    throw new NumberFormatException(pair.strip());
-                }
-            }
         } catch (NumberFormatException e) {
-            model.message().set("Give the flag number and the scores as CRITERION=WHOLE-NUMBER once per criterion,"
-                    + " separated by commas, e.g. content=5, language=6.");
+            model.message().set("Give the flag number (a whole number from the Flag column), and " + CriterionScores.HOW
+                    + ".");
+            return;
+        }
+        try {
+            parsed = CriterionScores.parse(scores.get());
+        } catch (IllegalArgumentException e) {
+            model.message().set("The resolution entry was not recorded: " + e.getMessage());
             return;
         }
         String who = by.get().strip();

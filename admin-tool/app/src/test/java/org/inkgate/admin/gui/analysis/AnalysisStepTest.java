@@ -294,7 +294,7 @@ class AnalysisStepTest {
         robot.interact(() -> image.set(PngSnapshots.snapshot(scene)));
         assertEquals(1024, image.get().getWidth());
         assertEquals(768, image.get().getHeight());
-        PngSnapshots.save(image.get(), "admin-7-analyse.png");
+        PngSnapshots.save(image.get(), "admin-9-analyse.png");
     }
 
     /** Waits until the work thread has finished whatever it was still doing. */

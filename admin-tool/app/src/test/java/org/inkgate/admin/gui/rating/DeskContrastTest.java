@@ -53,18 +53,48 @@ class DeskContrastTest {
         }
     }
 
+    /**
+     * The admin window's colour variables (admin.css), the rating step's flagged-rater rows among
+     * them (issue 15: the control-script monitor), against the same two limits.
+     */
+    @Test
+    void adminWindowColours_textPairsReach4point5AndMarksReach3() throws Exception {
+        Map<String, String> c = colours("/org/inkgate/admin/gui/admin.css", "-ig-", 10);
+        String[][] text = {
+            {"-ig-ink", "-ig-paper"}, {"-ig-muted", "-ig-paper"}, {"-ig-on-accent", "-ig-accent"},
+            {"-ig-flag-ink", "-ig-flag-paper"}, {"-ig-on-accent", "-ig-flag-line"},
+        };
+        for (String[] pair : text) {
+            double r = ratio(c.get(pair[0]), c.get(pair[1]));
+            assertTrue(r >= 4.5, pair[0] + " on " + pair[1] + ": " + r + ":1 is under 4.5:1 (WCAG 2.2, 1.4.3)");
+        }
+        String[][] marks = {
+            {"-ig-focus", "-ig-paper"}, {"-ig-flag-line", "-ig-flag-paper"}, {"-ig-accent", "-ig-paper"},
+        };
+        for (String[] pair : marks) {
+            double r = ratio(c.get(pair[0]), c.get(pair[1]));
+            assertTrue(r >= 3.0, pair[0] + " against " + pair[1] + ": " + r + ":1 is under 3:1 (WCAG 2.2, 1.4.11)");
+        }
+    }
+
     /** The -dk- colour variables of desk.css. */
     private static Map<String, String> colours() throws Exception {
+        return colours(DeskWindow.STYLESHEET, "-dk-", 14);
+    }
+
+    /** The colour variables starting with {@code prefix} that a stylesheet declares, at least {@code atLeast}. */
+    private static Map<String, String> colours(String stylesheet, String prefix, int atLeast) throws Exception {
         String css;
-        try (InputStream in = DeskWindow.class.getResourceAsStream(DeskWindow.STYLESHEET)) {
+        try (InputStream in = DeskWindow.class.getResourceAsStream(stylesheet)) {
             css = new String(in.readAllBytes(), StandardCharsets.UTF_8);
         }
         Map<String, String> out = new HashMap<>();
-        Matcher m = Pattern.compile("(-dk-[a-z-]+)\\s*:\\s*(#[0-9a-fA-F]{6})\\s*;").matcher(css);
+        Matcher m = Pattern.compile("(" + Pattern.quote(prefix) + "[a-z-]+)\\s*:\\s*(#[0-9a-fA-F]{6})\\s*;")
+                .matcher(css);
         while (m.find()) {
             out.put(m.group(1), m.group(2));
         }
-        assertTrue(out.size() >= 14, "the colour variables of desk.css: " + out);
+        assertTrue(out.size() >= atLeast, "the colour variables of " + stylesheet + ": " + out);
         return out;
     }
 

@@ -17,8 +17,10 @@ import javafx.scene.control.Label;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.inkgate.admin.cli.InkgateAdmin;
+import org.inkgate.admin.core.rating.ControlMonitor;
 import org.inkgate.admin.core.rating.SqliteControlScripts;
 import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.gui.StepDriver;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -26,6 +28,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.testfx.api.FxRobot;
 import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
+import org.testfx.util.WaitForAsyncUtils;
 import picocli.CommandLine;
 
 /**
@@ -107,6 +110,29 @@ class DeskControlScriptTest {
         assertEquals(InkgateAdmin.ATTENTION, code, out.toString());
         String line = out.toString().lines().filter(l -> l.strip().startsWith("rater-a")).findFirst().orElseThrow();
         assertTrue(line.contains("FLAGGED") && line.contains("drift +3.00 beyond +-1.00"), line);
+
+        // the test owner sees the same flag in the window's rating step, on the row of rater-a
+        org.inkgate.admin.gui.AdminSession session = new org.inkgate.admin.gui.AdminSession();
+        robot.interact(() -> org.inkgate.admin.gui.AdminWindow.show(stage, session));
+        StepDriver.select(robot, "Rating administration");
+        StepDriver.setText(robot, "#ratingStore", rated.file().toString());
+        StepDriver.press(robot, "#refreshRating");
+        StepDriver.waitForWork(session);
+        WaitForAsyncUtils.waitForFxEvents();
+        @SuppressWarnings("unchecked")
+        List<ControlMonitor.RaterReport> monitor = List.copyOf(robot.lookup("#raterMonitor")
+                .queryAs(javafx.scene.control.TableView.class).getItems());
+        ControlMonitor.RaterReport a = monitor.stream().filter(r -> r.raterId().equals("rater-a")).findFirst()
+                .orElseThrow();
+        assertTrue(a.flags().contains("drift +3.00 beyond +-1.00"), a.flags().toString());
+        assertTrue(line.contains("FLAGGED: " + String.join("; ", a.flags())), line);
+        StepDriver.press(robot, "#applyMonitorLimits");
+        robot.interact(() -> {
+            stage.setWidth(1024);
+            stage.setHeight(768);
+        });
+        StepDriver.scrollTo(robot, "#raterMonitor", 330);
+        StepDriver.shoot1024(robot, stage, "admin-rating-monitor.png");
     }
 
     private static Set<String> controlIds(Path store, String rater) throws Exception {

@@ -31,8 +31,13 @@ final class DeskShots {
         return n.get();
     }
 
+    /** The picture at the desk's size; the stage is sized here, since test classes share the primary stage. */
     static void shoot(FxRobot robot, Scene scene, String name) throws Exception {
         AtomicReference<BufferedImage> image = new AtomicReference<>();
+        robot.interact(() -> {
+            scene.getWindow().setWidth(DeskWindow.WIDTH);
+            scene.getWindow().setHeight(DeskWindow.HEIGHT);
+        });
         WaitForAsyncUtils.waitForFxEvents();
         robot.interact(() -> image.set(PngSnapshots.snapshot(scene)));
         assertEquals((int) DeskWindow.WIDTH, image.get().getWidth());

@@ -99,7 +99,7 @@ class RatingAdminStepTest {
         }
 
         StepDriver.shoot1024(robot, stage, "admin-rating-flags.png");
-        robot.interact(() -> robot.lookup(".step-scroll").queryAs(javafx.scene.control.ScrollPane.class).setVvalue(0.25));
+        StepDriver.scrollTo(robot, "#ratingMessage", 20);
         StepDriver.shoot1024(robot, stage, "admin-rating-administration.png");
 
         // a resolution entry settles the first flag, as rate resolve does

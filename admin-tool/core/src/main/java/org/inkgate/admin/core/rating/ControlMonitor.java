@@ -19,6 +19,13 @@ public final class ControlMonitor {
 
     /** Limits below (agreement) or beyond (difference, drift) which a rater is flagged; null: not checked. */
     public record Thresholds(Double minExact, Double minAdjacent, Double maxMeanDifference, Double maxDrift) {
+        /**
+         * Where the command and the window start: placeholders, not a standard; the test owner sets
+         * the limits their scoring rules give. No exact-agreement limit by default.
+         */
+        public static final double PLACEHOLDER_MIN_ADJACENT = 0.8;
+        public static final double PLACEHOLDER_MAX_MEAN_DIFFERENCE = 1.0;
+        public static final double PLACEHOLDER_MAX_DRIFT = 1.0;
     }
 
     /** One control script as rated: when, and the mean of score - agreed over its criteria. */
