@@ -88,7 +88,7 @@ public final class ExportModel {
     private static List<String> run(Path storeFile, Path out, String only, XapiExport.Options options,
             Work.Progress progress) throws Exception {
         List<String> lines = new ArrayList<>();
-        try (ResultsStore s = SqliteResultsStore.open(storeFile)) {
+        try (ResultsStore s = SqliteResultsStore.openReadOnly(storeFile)) {
             List<String> exams = StoreExport.exams(s, only);
             int parts = StoreExport.PARTS.size();
             for (int i = 0; i < exams.size(); i++) {
