@@ -69,7 +69,7 @@ class FullDiskTest {
     }
 
     /** Every stored sitting has its responses and its process log: no package was stored in part. */
-    private static void assertWholeSittingsOnly(Path store) throws Exception {
+    static void assertWholeSittingsOnly(Path store) throws Exception {
         try (var c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + store);
                 var s = c.createStatement();
                 var rs = s.executeQuery("SELECT count(*) FROM sittings s WHERE NOT EXISTS (SELECT 1 FROM responses r"
