@@ -135,6 +135,10 @@ public final class DelimitedImporter {
                 s.definition = definition;
             }
             String note = cell(row, col, "note");
+            String tooLong = IndexLimits.tooLong("term", term);
+            if (tooLong != null) {
+                throw rowError(where, line, rowNumber, col, "term", tooLong);
+            }
             s.terms.add(new GlossaryTerm(term, cell(row, col, "part_of_speech"), cell(row, col, "example"),
                     note == null ? List.of() : List.of(note), List.of()));
         }

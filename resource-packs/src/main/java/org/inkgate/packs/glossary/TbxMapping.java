@@ -119,6 +119,10 @@ final class TbxMapping {
             throw TbxImporter.error(where, sec.location(), "a term section of concept \"" + conceptId
                     + "\" has no <term> text; add the term or remove the section");
         }
+        String tooLong = IndexLimits.tooLong("term", text);
+        if (tooLong != null) {
+            throw TbxImporter.error(where, sec.location(), "concept \"" + conceptId + "\": " + tooLong);
+        }
         return new GlossaryTerm(text, pos, context, notes, other);
     }
 

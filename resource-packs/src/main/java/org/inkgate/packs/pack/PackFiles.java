@@ -38,6 +38,13 @@ public final class PackFiles {
     static final long MAX_ENTRY_BYTES = 1L << 30;
     /** Largest total of content files (bytes). */
     static final long MAX_TOTAL_BYTES = 2L << 30;
+    /**
+     * Most a deflated entry may expand (unpacked size over packed size): the common practice of
+     * zip readers facing untrusted input, and the limit every Inkgate archive reader applies
+     * ({@code org.inkgate.format.archive.ArchiveLimits} takes it from here). Real packs stay far
+     * below: the WordNet index expands about 1.25 times, the demo glossary under 2.
+     */
+    public static final long MAX_COMPRESSION_RATIO = 100;
     /** Fixed entry time so the same content gives the same zip bytes. */
     private static final long ENTRY_TIME = 1_767_225_600_000L; // 2026-01-01T00:00:00Z
 
@@ -239,6 +246,7 @@ public final class PackFiles {
             if (f.size() > MAX_ENTRY_BYTES) {
                 throw new PackRefusal(PackRefusal.Reason.TOO_LARGE, where + ": " + f.path() + " is larger than " + MAX_ENTRY_BYTES + " bytes");
             }
+            checkRatio(entries.get(f.path()), f.size(), where);
             total += f.size();
         }
         if (total > MAX_TOTAL_BYTES) {
@@ -252,6 +260,24 @@ public final class PackFiles {
             throw new PackRefusal(PackRefusal.Reason.CONTENT_MISMATCH, where + ": holds files the manifest does not list: " + extra);
         }
         return manifest;
+    }
+
+    /**
+     * Refuses a deflated entry that would expand more than {@link #MAX_COMPRESSION_RATIO} times,
+     * before anything is unpacked; the larger of the manifest's and the zip's unpacked size counts.
+     */
+    private static void checkRatio(ZipEntry e, long declaredSize, String where) throws PackRefusal {
+        long size = Math.max(declaredSize, e.getSize());
+        if (e.getMethod() != ZipEntry.DEFLATED || size <= 0) {
+            return;
+        }
+        long packed = e.getCompressedSize();
+        if (packed <= 0 || size > packed * MAX_COMPRESSION_RATIO) {
+            throw new PackRefusal(PackRefusal.Reason.TOO_LARGE, where + ": " + e.getName() + " would expand from "
+                    + Math.max(packed, 0) + " to " + size + " bytes, more than " + MAX_COMPRESSION_RATIO + " times (the"
+                    + " mark of a decompression bomb; no pack Inkgate builds comes near). Build the pack again with"
+                    + " inkgate-admin pack build, or ask its maker for an intact copy");
+        }
     }
 
     /** Copies at most the declared size and checks size and SHA-256; never trusts the zip's own size fields. */

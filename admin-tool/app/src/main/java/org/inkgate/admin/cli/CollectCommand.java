@@ -113,6 +113,15 @@ final class CollectCommand implements Callable<Integer> {
         } catch (InvalidSourceException | CollectionRun.BundleRefusedException e) {
             err.println(e.getMessage());
             return InkgateAdmin.PROBLEMS;
+        } catch (org.inkgate.admin.core.store.StoreException e) {
+            // each package is its own transaction: a failure (a full disk, say) loses only the one in hand
+            if (progress[0] != null) {
+                progress[0].clear();
+            }
+            err.println("inkgate-admin collect: " + e.getMessage());
+            err.println("Packages imported before this are kept in the store, whole; the package in hand was not"
+                    + " imported. Run the same collect again once this is fixed: it imports only what is not there yet.");
+            return InkgateAdmin.PROBLEMS;
         }
         return report(w, report, trust.any);
     }

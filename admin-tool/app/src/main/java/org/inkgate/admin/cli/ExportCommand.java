@@ -46,7 +46,7 @@ final class ExportCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
         XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
-        try (ResultsStore store = SqliteResultsStore.open(ExistingStore.require(storeFile))) {
+        try (ResultsStore store = SqliteResultsStore.openReadOnly(ExistingStore.require(storeFile))) {
             for (String id : StoreExport.exams(store, examId)) {
                 StoreExport.write(storeFile, store, id, out, xapiOptions, spreadsheetSafe, part -> { }).lines()
                         .forEach(line -> w.println(TerminalText.value(line)));

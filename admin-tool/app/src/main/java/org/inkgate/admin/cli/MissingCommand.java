@@ -27,7 +27,7 @@ final class MissingCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         boolean attention = false;
-        try (ResultsStore store = SqliteResultsStore.open(ExistingStore.require(storeFile))) {
+        try (ResultsStore store = SqliteResultsStore.openReadOnly(ExistingStore.require(storeFile))) {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
                 attention |= print(spec.commandLine().getOut(), MissingReport.of(store, id));

@@ -319,7 +319,7 @@ public final class AnalysisRun {
             return null;
         }
         String chosen = chooseExam();
-        try (ResultsStore s = SqliteResultsStore.open(q.store())) {
+        try (ResultsStore s = SqliteResultsStore.openReadOnly(q.store())) {
             return QuestionnaireInput.read(s, chosen, q.store().getFileName().toString());
         } catch (StoreException e) {
             throw new Refused(false, "could not read the results store " + q.store() + ": " + e.getMessage());
@@ -346,7 +346,7 @@ public final class AnalysisRun {
 
     /** The exam named by --exam, or the store's only exam. */
     private String chooseExam() throws Refused {
-        try (ResultsStore s = SqliteResultsStore.open(q.store())) {
+        try (ResultsStore s = SqliteResultsStore.openReadOnly(q.store())) {
             List<String> exams = s.examIds();
             if (q.exam() == null) {
                 if (exams.size() != 1) {
@@ -376,7 +376,7 @@ public final class AnalysisRun {
             throw new Refused(false, "no results store at " + q.store() + "; give the file collect wrote");
         }
         String chosen = chooseExam();
-        try (ResultsStore s = SqliteResultsStore.open(q.store())) {
+        try (ResultsStore s = SqliteResultsStore.openReadOnly(q.store())) {
             return StoreStudyInput.read(s, chosen, q.rosterAttributes());
         } catch (StoreException e) {
             throw new Refused(false, "could not read the results store " + q.store() + ": " + e.getMessage());

@@ -16,8 +16,11 @@ import org.inkgate.format.refusal.SizeLimitExceeded;
  */
 public record ArchiveLimits(long maxArchiveBytes, int maxEntries, long maxEntryBytes, long maxTotalBytes, long maxRatio) {
 
-    /** Common practice for zip readers facing untrusted input: refuse anything expanding over 100 times. */
-    public static final long DEFAULT_MAX_RATIO = 100;
+    /**
+     * Common practice for zip readers facing untrusted input: refuse anything expanding over 100
+     * times. One value for every Inkgate archive, defined beside the pack reader, which sits below.
+     */
+    public static final long DEFAULT_MAX_RATIO = org.inkgate.packs.pack.PackFiles.MAX_COMPRESSION_RATIO;
 
     public static ArchiveLimits defaults() {
         return new ArchiveLimits(1L << 30, 10_000, 512L << 20, 1L << 30, DEFAULT_MAX_RATIO);

@@ -125,7 +125,7 @@ public final class ExportModel {
     private static List<String> run(Path storeFile, Path out, String only, XapiExport.Options options,
             Work.Progress progress, IntConsumer watcher) throws Exception {
         List<String> lines = new ArrayList<>();
-        try (ResultsStore s = SqliteResultsStore.open(storeFile)) {
+        try (ResultsStore s = SqliteResultsStore.openReadOnly(storeFile)) {
             List<String> exams = StoreExport.exams(s, only);
             if (exams.isEmpty()) {
                 lines.add("The store holds no exam yet. Collect first (step 4).");

@@ -42,7 +42,7 @@ public final class MissingModel {
                     + " or name the store file.");
             return;
         }
-        try (ResultsStore s = SqliteResultsStore.open(file)) {
+        try (ResultsStore s = SqliteResultsStore.openReadOnly(file)) {
             StringBuilder b = new StringBuilder();
             List<String> exams = s.examIds();
             if (exams.isEmpty()) {

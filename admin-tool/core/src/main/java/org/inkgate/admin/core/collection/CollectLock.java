@@ -32,8 +32,18 @@ final class CollectLock implements AutoCloseable {
     /** Takes the store's collect lock, or refuses saying another collect holds it. */
     static CollectLock acquire(Path store) throws IOException, StoreException {
         Path file = lockFile(store);
-        OwnerOnly.file(file);
-        FileChannel channel = FileChannel.open(file, StandardOpenOption.WRITE);
+        FileChannel channel;
+        try {
+            OwnerOnly.file(file);
+            channel = FileChannel.open(file, StandardOpenOption.WRITE);
+        } catch (IOException e) {
+            // the lock file is the first thing collect writes: read-only media or a full disk shows here
+            String plain = org.inkgate.admin.core.store.StoreErrors.plain(store, e);
+            if (plain == null) {
+                throw e;
+            }
+            throw new StoreException(plain + ". Nothing was imported", e);
+        }
         FileLock lock;
         try {
             lock = channel.tryLock();

@@ -83,7 +83,14 @@ public final class StoreExport {
      */
     public static Written write(Path storeFile, ResultsStore store, String examId, Path out, XapiExport.Options xapiOptions,
             boolean spreadsheetSafe, Listener listener) throws IOException, StoreException {
-        Path dir = OutputFolder.file(out, examId);
+        try (WholeFolder whole = WholeFolder.start(OutputFolder.file(out, examId))) {
+            Written w = write(storeFile, store, examId, whole.folder(), xapiOptions, spreadsheetSafe, listener, whole);
+            return w;
+        }
+    }
+
+    private static Written write(Path storeFile, ResultsStore store, String examId, Path dir, XapiExport.Options xapiOptions,
+            boolean spreadsheetSafe, Listener listener, WholeFolder whole) throws IOException, StoreException {
         listener.part(0);
         org.inkgate.format.io.OwnerOnly.folder(dir.resolve("csv"));
         long[] rows = TidyCsvExport.write(store, examId, dir.resolve("csv"), spreadsheetSafe);
@@ -99,8 +106,10 @@ public final class StoreExport {
         listener.part(2);
         XapiExport.Written xapi = XapiExport.write(store, examId, dir.resolve("xapi-statements.jsonl"), xapiOptions);
         org.inkgate.format.io.OwnerOnly.tree(dir);
-        return new Written(examId, dir, rows[0], rows[1], rows[2], questionnaire, qti, xapi, xapiOptions.light(),
-                store.conflicts(examId).size());
+        int conflicts = store.conflicts(examId).size();
+        Path placed = whole.finish();
+        return new Written(examId, placed, rows[0], rows[1], rows[2], questionnaire, qti, xapi, xapiOptions.light(),
+                conflicts);
     }
 
     /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */

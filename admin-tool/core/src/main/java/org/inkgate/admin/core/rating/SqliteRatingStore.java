@@ -88,8 +88,13 @@ public final class SqliteRatingStore implements RatingDesk, Referrals, AutoClose
             // commit is synced before the call returns (SQLite docs, PRAGMA synchronous, "FULL")
             config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
             config.setBusyTimeout(10_000);
-            c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
-            Migrations.migrate(c, Migrations.latest());
+            if (org.inkgate.admin.core.store.ReadOnlyStore.writable(file)) {
+                c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
+                Migrations.migrate(c, Migrations.latest());
+            } else {
+                // read-only media: export and analyse read the ratings; any write is refused by SQLite
+                c = org.inkgate.admin.core.store.ReadOnlyStore.connect(file);
+            }
             Connection conn = c;
             List<String> exams = query(conn, "SELECT exam_id FROM exams ORDER BY exam_id", rs -> rs.getString(1));
             if (!exams.contains(examId)) {
@@ -929,7 +934,9 @@ public final class SqliteRatingStore implements RatingDesk, Referrals, AutoClose
         if (!Files.isRegularFile(file)) {
             return false;
         }
-        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath())) {
+        try (Connection c = org.inkgate.admin.core.store.ReadOnlyStore.writable(file)
+                ? DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath())
+                : org.inkgate.admin.core.store.ReadOnlyStore.connect(file)) {
             return !query(c, "SELECT 1 FROM sqlite_master WHERE type='table' AND name='rubric_criteria'", rs -> 1).isEmpty()
                     && !query(c, "SELECT 1 FROM rubric_criteria WHERE exam_id=? LIMIT 1", rs -> 1, examId).isEmpty();
         } catch (SQLException e) {

@@ -42,10 +42,12 @@ import org.sqlite.SQLiteConfig;
 public final class SqliteResultsStore implements ResultsStore {
 
     private final Connection c;
+    private final Path file;
     private final Map<String, Long> policyIds = new HashMap<>();
 
-    private SqliteResultsStore(Connection c) {
+    private SqliteResultsStore(Connection c, Path file) {
         this.c = c;
+        this.file = file;
     }
 
     /** Opens (creating if needed) the store and brings its schema to the latest version. */
@@ -70,10 +72,36 @@ public final class SqliteResultsStore implements ResultsStore {
             config.setBusyTimeout(10_000);
             Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
             Migrations.migrate(c, version);
-            return new SqliteResultsStore(c);
+            return new SqliteResultsStore(c, file);
         } catch (SQLException | java.io.IOException e) {
-            throw new StoreException("cannot open the results store " + file + ": " + e.getMessage(), e);
+            throw failure("cannot open the results store " + file, file, e);
         }
+    }
+
+    /**
+     * Opens an existing store for reading only, also on read-only media (a write-protected card,
+     * a disc, a read-only share), where {@link #open} would fail creating its journal files: for
+     * the steps that only read (missing, export, analyse). On writable storage it is {@link #open}.
+     */
+    public static SqliteResultsStore openReadOnly(Path file) throws StoreException {
+        if (!java.nio.file.Files.isRegularFile(file)) {
+            throw new StoreException("no results store at " + file + "; name the store that collect wrote");
+        }
+        if (ReadOnlyStore.writable(file)) {
+            return open(file);
+        }
+        try {
+            Connection c = ReadOnlyStore.connect(file);
+            return new SqliteResultsStore(c, file);
+        } catch (SQLException e) {
+            throw failure("cannot open the results store " + file, file, e);
+        }
+    }
+
+    /** The failure in plain words when it is a full disk, read-only media and the like; else as SQLite says. */
+    private static StoreException failure(String what, Path file, Exception e) {
+        String plain = StoreErrors.plain(file, e);
+        return new StoreException(what + ": " + (plain != null ? plain : e.getMessage()), e);
     }
 
     Connection connection() {
@@ -88,19 +116,33 @@ public final class SqliteResultsStore implements ResultsStore {
     private <T> T tx(String what, Work<T> work) throws StoreException {
         try {
             c.setAutoCommit(false);
+            boolean failed = false;
             try {
                 T result = work.run();
                 c.commit();
                 return result;
             } catch (SQLException | RuntimeException e) {
-                c.rollback();
+                failed = true;
+                try {
+                    c.rollback();
+                } catch (SQLException alreadyRolledBack) {
+                    // SQLite rolls back by itself on a full disk or an I/O error (sqlite.org, "Response To
+                    // Errors Within A Transaction"); its "no transaction is active" must not hide the cause
+                    e.addSuppressed(alreadyRolledBack);
+                }
                 policyIds.clear(); // ids cached inside the rolled-back transaction no longer exist
                 throw e;
             } finally {
-                c.setAutoCommit(true);
+                try {
+                    c.setAutoCommit(true); // the driver commits here if it still thinks a transaction is open
+                } catch (SQLException noTransaction) {
+                    if (!failed) {
+                        throw noTransaction;
+                    } // after a failure SQLite may have ended the transaction itself: the cause is already thrown
+                }
             }
         } catch (SQLException e) {
-            throw new StoreException(what + " failed; nothing of it was stored: " + e.getMessage(), e);
+            throw failure(what + " failed; nothing of it was stored", file, e);
         }
     }
 
@@ -108,7 +150,7 @@ public final class SqliteResultsStore implements ResultsStore {
         try {
             return work.run();
         } catch (SQLException e) {
-            throw new StoreException(what + " failed: " + e.getMessage(), e);
+            throw failure(what + " failed", file, e);
         }
     }
 
