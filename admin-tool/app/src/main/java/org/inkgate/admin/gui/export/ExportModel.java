@@ -11,9 +11,10 @@ import javafx.beans.property.StringProperty;
 import org.inkgate.admin.core.export.StoreExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Work;
 
 /**
@@ -88,7 +89,7 @@ public final class ExportModel {
     private static List<String> run(Path storeFile, Path out, String only, XapiExport.Options options,
             Work.Progress progress) throws Exception {
         List<String> lines = new ArrayList<>();
-        try (ResultsStore s = SqliteResultsStore.open(storeFile)) {
+        try (ResultsStore s = Stores.openResults(StoreLocation.file(storeFile))) {
             List<String> exams = StoreExport.exams(s, only);
             int parts = StoreExport.PARTS.size();
             for (int i = 0; i < exams.size(); i++) {
