@@ -44,6 +44,9 @@ public record LinearMixedModel(int ratings, List<String> conditions, List<FixedE
         List<VarianceComponent> variances, double remlCriterion, double confidence, int evaluations,
         List<String> cautions) {
 
+    /** Largest dense block (levels outside the largest factor, plus the fixed effects) fitted. */
+    public static final int MAX_DENSE = 3000;
+
     /** The name of the residual component in {@link #variances()}. */
     public static final String RESIDUAL = "residual";
 
@@ -155,6 +158,14 @@ public record LinearMixedModel(int ratings, List<String> conditions, List<FixedE
         if (n <= p) {
             throw new IllegalArgumentException("the mixed model needs more ratings (" + n + ") than fixed effects ("
                     + p + ")");
+        }
+        int largest = levels.stream().mapToInt(Integer::intValue).max().orElse(0);
+        int dense = levels.stream().mapToInt(Integer::intValue).sum() - largest + p;
+        if (dense > MAX_DENSE) {
+            throw new IllegalArgumentException("the mixed model keeps the levels of every factor but the largest ("
+                    + "here " + (dense - p) + " levels of " + names + " outside the largest) in one dense block,"
+                    + " and more than " + MAX_DENSE + " would take too long and too much memory; fit it in R (lme4)"
+                    + " or with fewer levels (e.g. raters grouped into rating teams)");
         }
         CrossedCrossProducts x = new CrossedCrossProducts(score, cond, p, codes.toArray(int[][]::new),
                 levels.stream().mapToInt(Integer::intValue).toArray());

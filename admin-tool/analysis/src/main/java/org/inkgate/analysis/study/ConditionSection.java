@@ -80,9 +80,10 @@ final class ConditionSection {
         }
         if (conditions.size() > 2) {
             RepeatedMeasuresSection.build(s, scores, options, conditions);
-            return s.build();
+        } else {
+            paired(s, scores, options, direction, conditions);
         }
-        paired(s, scores, options, direction, conditions);
+        LinearMixedModelSection.build(s, data.ratings(), options, conditions, scores.criteria());
         return s.build();
     }
 
