@@ -17,7 +17,8 @@ import org.inkgate.analysis.scores.ScoreTable;
 /**
  * The condition comparison, chosen by the design: here the paired comparison of two within-candidate
  * conditions, overall and per criterion, with Holm across criteria; the other designs in
- * {@link RepeatedMeasuresSection} and {@link IndependentGroupsSection}.
+ * {@link RepeatedMeasuresSection} and {@link IndependentGroupsSection}; every within-candidate design also
+ * gets the linear mixed model on every rating ({@link LinearMixedModelSection}).
  */
 final class ConditionSection {
 
