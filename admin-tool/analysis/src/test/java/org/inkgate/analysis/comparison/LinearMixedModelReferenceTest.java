@@ -115,4 +115,38 @@ class LinearMixedModelReferenceTest {
         assertEquals(48, fit.variance("candidate").levels());
         assertTrue(fit.cautions().isEmpty(), fit.cautions().toString());
     }
+
+    @Test
+    void oneFactorBalanced_equalsTheAnovaEstimators() {
+        // With one balanced random factor and a positive estimate, REML equals the ANOVA estimators:
+        // residual = MS(within), factor = (MS(between) - MS(within)) / per-level n (Searle, Casella &
+        // McCulloch 1992, section 4.7; from memory). Penicillin by plate: 24 plates x 6 samples.
+        List<Map<String, String>> rows = ReferenceData.rows("lmm_penicillin.csv");
+        int n = rows.size();
+        double[] y = rows.stream().mapToDouble(m -> Double.parseDouble(m.get("diameter"))).toArray();
+        String[] plate = rows.stream().map(m -> m.get("plate")).toArray(String[]::new);
+        Map<String, double[]> sums = new LinkedHashMap<>();
+        double grand = 0;
+        for (int i = 0; i < n; i++) {
+            double[] sc = sums.computeIfAbsent(plate[i], k -> new double[2]);
+            sc[0] += y[i];
+            sc[1]++;
+            grand += y[i] / n;
+        }
+        double ssb = 0, ssw = 0;
+        for (int i = 0; i < n; i++) {
+            double[] sc = sums.get(plate[i]);
+            ssw += Math.pow(y[i] - sc[0] / sc[1], 2);
+            ssb += Math.pow(sc[0] / sc[1] - grand, 2);
+        }
+        int groups = sums.size(), per = n / groups;
+        double msb = ssb / (groups - 1), msw = ssw / (n - groups);
+        String[] cond = new String[n];
+        java.util.Arrays.fill(cond, "all");
+        LinearMixedModel fit = LinearMixedModel.fit(y, cond, List.of("all"), Map.of("plate", plate), 0.95);
+        assertEquals(msw, fit.variance(LinearMixedModel.RESIDUAL).variance(), 1e-6, "MS(within)");
+        assertEquals((msb - msw) / per, fit.variance("plate").variance(), 1e-6, "(MS(between) - MS(within)) / 6");
+        // SE of the grand mean in the balanced one-way model: sqrt(MS(between) / n)
+        assertEquals(Math.sqrt(msb / n), fit.fixedEffects().get(0).se(), 1e-6, "SE of the mean");
+    }
 }
