@@ -36,16 +36,13 @@ final class CrossedCrossProducts {
     final double[] denseSum;
     /** The centring constant subtracted from every score (added back to the intercept). */
     final double centre;
-    /** Per rating: centred score, level of each factor, condition index. */
-    final double[] y;
-    final int[][] codes;
-    final int[] condition;
+    /** Sum of squares of the centred scores. */
+    final double yy;
 
     CrossedCrossProducts(double[] score, int[] condition, int conditions, int[][] factorCodes, int[] levels) {
         this.n = score.length;
         this.fixed = conditions;
         this.levels = levels.clone();
-        this.condition = condition.clone();
         int f = levels.length;
         int a = 0;
         for (int i = 1; i < f; i++) {
@@ -67,15 +64,11 @@ final class CrossedCrossProducts {
             mean += v / n;
         }
         this.centre = mean;
-        y = new double[n];
-        codes = new int[n][];
-        for (int r = 0; r < n; r++) {
-            y[r] = score[r] - mean;
-            codes[r] = new int[f];
-            for (int i = 0; i < f; i++) {
-                codes[r][i] = factorCodes[i][r];
-            }
+        double sumSquares = 0;
+        for (double v : score) {
+            sumSquares += (v - mean) * (v - mean);
         }
+        this.yy = sumSquares;
         absorbedCount = new double[levels[a]];
         absorbedSum = new double[levels[a]];
         denseCross = new double[dense][dense];
@@ -87,20 +80,21 @@ final class CrossedCrossProducts {
             int m = 0;
             for (int i = 0; i < f; i++) {
                 if (i != a) {
-                    cols[m++] = offset[i] + codes[r][i];
+                    cols[m++] = offset[i] + factorCodes[i][r];
                 }
             }
             cols[m++] = fixedStart; // intercept
             if (condition[r] > 0) {
                 cols[m++] = fixedStart + condition[r]; // treatment contrast against the first condition
             }
-            int lev = codes[r][a];
+            int lev = factorCodes[a][r];
+            double y = score[r] - mean;
             absorbedCount[lev]++;
-            absorbedSum[lev] += y[r];
+            absorbedSum[lev] += y;
             Map<Integer, Double> row = rows[lev] == null ? (rows[lev] = new HashMap<>()) : rows[lev];
             for (int j = 0; j < m; j++) {
                 row.merge(cols[j], 1.0, Double::sum);
-                denseSum[cols[j]] += y[r];
+                denseSum[cols[j]] += y;
                 for (int l = 0; l < m; l++) {
                     denseCross[cols[j]][cols[l]]++;
                 }

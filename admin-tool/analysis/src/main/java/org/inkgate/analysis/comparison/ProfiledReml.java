@@ -51,7 +51,7 @@ final class ProfiledReml {
         double[][] schur = new double[m][m];
         double[] rhs = new double[m];
         for (int j = 0; j < m; j++) {
-            for (int l = 0; l < m; l++) {
+            for (int l = 0; l <= j; l++) { // lower triangle: all the factorisation reads
                 schur[j][l] = s[j] * s[l] * x.denseCross[j][l];
             }
             if (j < fs) {
@@ -59,6 +59,7 @@ final class ProfiledReml {
             }
             rhs[j] = s[j] * x.denseSum[j];
         }
+        double[] scaled = new double[16];
         double[] diag = new double[q];
         double[] b1 = new double[q];
         double logDet = 0;
@@ -69,12 +70,17 @@ final class ProfiledReml {
             int[] cols = x.rowColumns[i];
             double[] cnt = x.rowCounts[i];
             double w = ta * ta / diag[i];
+            double[] v = scaled.length >= cols.length ? scaled : (scaled = new double[cols.length]);
             for (int j = 0; j < cols.length; j++) {
-                double cj = s[cols[j]] * cnt[j];
-                rhs[cols[j]] -= ta * cj * b1[i] / diag[i];
+                v[j] = s[cols[j]] * cnt[j];
+            }
+            // a rank-one downdate of the lower triangle only (columns are sorted; the factorisation reads no more)
+            for (int j = 0; j < cols.length; j++) {
+                rhs[cols[j]] -= ta * v[j] * b1[i] / diag[i];
                 double[] row = schur[cols[j]];
-                for (int l = 0; l < cols.length; l++) {
-                    row[cols[l]] -= w * cj * s[cols[l]] * cnt[l];
+                double wj = w * v[j];
+                for (int l = 0; l <= j; l++) {
+                    row[cols[l]] -= wj * v[l];
                 }
             }
         }
@@ -86,7 +92,6 @@ final class ProfiledReml {
         }
         double[] s2 = DenseCholesky.solve(schur, rhs);
         double[] u1 = new double[q];
-        double penalty = 0;
         for (int i = 0; i < q; i++) {
             double v = b1[i];
             int[] cols = x.rowColumns[i];
@@ -95,26 +100,16 @@ final class ProfiledReml {
                 v -= ta * s[cols[j]] * cnt[j] * s2[cols[j]];
             }
             u1[i] = v / diag[i];
-            penalty += u1[i] * u1[i];
         }
-        for (int j = 0; j < fs; j++) {
-            penalty += s2[j] * s2[j];
+        // penalised residual sum of squares: the minimum of |y - Z Lambda u - X beta|^2 + |u|^2 is
+        // y'y - solution . right-hand side (y centred, so the cancellation is mild); O(levels), not O(ratings)
+        double r2 = x.yy;
+        for (int i = 0; i < q; i++) {
+            r2 -= u1[i] * b1[i];
         }
-        // the residual sum of squares from the ratings themselves (no cancellation of large sums)
-        double rss = 0;
-        int f = theta.length;
-        for (int r = 0; r < x.n; r++) {
-            int[] c = x.codes[r];
-            double fit = s2[fs] + (x.condition[r] > 0 ? s2[fs + x.condition[r]] : 0) + ta * u1[c[a]];
-            for (int k = 0; k < f; k++) {
-                if (k != a) {
-                    fit += theta[k] * s2[x.offset[k] + c[k]];
-                }
-            }
-            double e = x.y[r] - fit;
-            rss += e * e;
+        for (int j = 0; j < m; j++) {
+            r2 -= s2[j] * s[j] * x.denseSum[j];
         }
-        double r2 = rss + penalty;
         int dfr = x.n - p;
         double criterion = logDet + dfr * (1 + Math.log(2 * Math.PI * r2 / dfr));
         double[] beta = new double[p];
