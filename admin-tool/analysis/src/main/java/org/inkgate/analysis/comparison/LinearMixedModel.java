@@ -221,9 +221,10 @@ public record LinearMixedModel(int ratings, List<String> conditions, List<FixedE
         Arrays.fill(upper, 1e4);
         double[] start = new double[dims];
         Arrays.fill(start, 1);
-        PointValuePair first = new BOBYQAOptimizer(2 * dims + 1, 0.2, 1e-10).optimize(new MaxEval(100_000), f,
+        // a first search to lme4's usual precision, then a short restart that polishes the optimum
+        PointValuePair first = new BOBYQAOptimizer(2 * dims + 1, 0.2, 1e-7).optimize(new MaxEval(100_000), f,
                 GoalType.MINIMIZE, new InitialGuess(start), new SimpleBounds(lower, upper));
-        PointValuePair second = new BOBYQAOptimizer(2 * dims + 1, 1e-3, 1e-11).optimize(new MaxEval(100_000), f,
+        PointValuePair second = new BOBYQAOptimizer(2 * dims + 1, 1e-4, 1e-10).optimize(new MaxEval(100_000), f,
                 GoalType.MINIMIZE, new InitialGuess(first.getPoint()), new SimpleBounds(lower, upper));
         return second.getValue() <= first.getValue() ? second.getPoint() : first.getPoint();
     }

@@ -25,11 +25,20 @@ final class LinearMixedModelSection {
 
     private static final String[] FACTORS = {"candidate", "rater", "task"};
 
+    /** Above this many ratings only the overall model is fitted, to keep the report's time in bounds. */
+    static final int PER_CRITERION_LIMIT = 200_000;
+
     private LinearMixedModelSection() {
     }
 
     static void build(Section.Builder s, List<Rating> ratings, StudyOptions options, List<String> conditions,
             List<String> criteria) {
+        build(s, ratings, options, conditions, criteria, PER_CRITERION_LIMIT);
+    }
+
+    /** As above with the limit above which only the overall model is fitted (tests use a small one). */
+    static void build(Section.Builder s, List<Rating> ratings, StudyOptions options, List<String> conditions,
+            List<String> criteria, int perCriterionLimit) {
         s.paragraph("Beside it, a linear mixed model uses every rating rather than each candidate's averaged score:"
                 + " the condition is a fixed effect (each condition against '" + conditions.get(0) + "'), and"
                 + " candidates, raters and tasks are crossed random effects, so differences in rater severity and"
@@ -57,7 +66,14 @@ final class LinearMixedModelSection {
                         Column.of("task variance"), Column.of("residual variance"), Column.of("REML criterion"));
         List<String> measures = new ArrayList<>();
         measures.add(null);
-        measures.addAll(criteria);
+        if (ratings.size() <= perCriterionLimit) {
+            measures.addAll(criteria);
+        } else if (!criteria.isEmpty()) {
+            fixed.note("With more than " + perCriterionLimit + " ratings only the overall model is fitted (one"
+                    + " model per criterion would add seconds each to the report); fit a criterion's model from the"
+                    + " ratings CSV in a statistics package if needed.");
+        }
+        s.put("linear_mixed_model.per_criterion", ratings.size() <= perCriterionLimit);
         boolean any = false;
         for (String criterion : measures) {
             String measure = criterion == null ? "overall" : criterion;

@@ -83,4 +83,18 @@ class LinearMixedModelReportTest {
         assertNull(sum.get("comparison.linear_mixed_model.available"));
         assertFalse(sum.keySet().stream().anyMatch(k -> k.contains("linear_mixed_model")));
     }
+
+    @Test
+    void aboveTheLimit_onlyTheOverallModelIsFitted_andTheNoteSaysSo() {
+        List<Rating> ratings = DesignSimulationTest.threeConditions(32, 0.5);
+        Section.Builder b = Section.builder("comparison", "test");
+        LinearMixedModelSection.build(b, ratings, StudyOptions.DEFAULT, List.of("none", "full", "spelling"),
+                List.of("content", "language"), 100);
+        Section s = b.build();
+        assertEquals(false, s.summary().get("comparison.linear_mixed_model.per_criterion"));
+        assertEquals(true, s.summary().get("comparison.linear_mixed_model.overall.fitted"));
+        assertNull(s.summary().get("comparison.linear_mixed_model.content.fitted"));
+        Table fixed = s.tables().get(0);
+        assertTrue(fixed.notes().stream().anyMatch(n -> n.contains("only the overall model")), fixed.notes().toString());
+    }
 }
