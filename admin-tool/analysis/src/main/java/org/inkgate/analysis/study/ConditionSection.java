@@ -17,7 +17,8 @@ import org.inkgate.analysis.scores.ScoreTable;
 /**
  * The condition comparison, chosen by the design: here the paired comparison of two within-candidate
  * conditions, overall and per criterion, with Holm across criteria; the other designs in
- * {@link RepeatedMeasuresSection} and {@link IndependentGroupsSection}.
+ * {@link RepeatedMeasuresSection} and {@link IndependentGroupsSection}; every within-candidate design also
+ * gets the linear mixed model on every rating ({@link LinearMixedModelSection}).
  */
 final class ConditionSection {
 
@@ -80,9 +81,10 @@ final class ConditionSection {
         }
         if (conditions.size() > 2) {
             RepeatedMeasuresSection.build(s, scores, options, conditions);
-            return s.build();
+        } else {
+            paired(s, scores, options, direction, conditions);
         }
-        paired(s, scores, options, direction, conditions);
+        LinearMixedModelSection.build(s, data.ratings(), options, conditions, scores.criteria());
         return s.build();
     }
 

@@ -133,9 +133,16 @@ class AnalyseDesignsTest {
         assertTrue(s.get("comparison.pairwise.none_minus_full.p_holm").asDouble() < 0.05, s.toString());
         assertTrue(s.get("comparison.mixed.available").asBoolean());
         assertTrue(s.has("comparison.mixed.interaction.p"));
-        for (String table : new String[] {"comparison_repeated", "comparison_pairwise", "comparison_mixed"}) {
+        for (String table : new String[] {"comparison_repeated", "comparison_pairwise", "comparison_mixed",
+                "comparison_linear_mixed_model", "comparison_variance_components"}) {
             assertTrue(Files.exists(outDir.resolve("tables/" + table + ".csv")), table);
         }
+        // the linear mixed model on every rating finds the same difference (Wald interval excludes 0)
+        assertTrue(s.get("comparison.linear_mixed_model.available").asBoolean());
+        double lower = s.get("comparison.linear_mixed_model.overall.none_minus_full.ci_lower").asDouble();
+        double upper = s.get("comparison.linear_mixed_model.overall.none_minus_full.ci_upper").asDouble();
+        assertTrue(lower > 0 || upper < 0, "none minus full: " + lower + " to " + upper);
+        assertTrue(s.has("comparison.linear_mixed_model.overall.variance_rater"));
         assertTrue(s.get("mfrm.available").asBoolean());
         assertEquals("crossed facet", s.get("mfrm.condition_treatment").asText());
     }
