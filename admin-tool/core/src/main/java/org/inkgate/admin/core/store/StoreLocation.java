@@ -19,10 +19,22 @@ public sealed interface StoreLocation {
         }
 
         @Override
+        public Path file() {
+            return path;
+        }
+
+        @Override
         public String toString() {
             return path.toString();
         }
     }
+
+    /**
+     * The store's file, for the steps that still work on the file itself: collect's lock beside
+     * the store, and the analysis and exports that reopen the store by its file. A server store
+     * (next version) has none: those steps then take the location.
+     */
+    Path file();
 
     /** {@code scheme://...}: a URL, never a file name (a Windows drive letter has one letter and no "//"). */
     Pattern URL = Pattern.compile("^([A-Za-z][A-Za-z0-9+.-]+):(//.*)?$");

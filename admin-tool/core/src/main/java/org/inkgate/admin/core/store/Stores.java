@@ -25,6 +25,16 @@ public final class Stores {
         };
     }
 
+    /**
+     * Opens an existing results store for the steps that only read it (missing, export, analyse),
+     * also where nothing may be written (a SQLite store on read-only media).
+     */
+    public static ResultsStore openResultsForReading(StoreLocation location) throws StoreException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteResultsStore.openReadOnly(f.path());
+        };
+    }
+
     /** Opens rating of one exam in an existing results store. */
     public static RatingStore openRating(StoreLocation location, String examId) throws RatingException {
         return switch (location) {
