@@ -54,11 +54,13 @@ public sealed interface StoreLocation {
             throw new StoreException("no store given; give the results store file, e.g. --store "
                     + ResultsStore.DEFAULT_FILE_NAME);
         }
-        var url = URL.matcher(value.strip());
+        String given = value.strip();
+        // a JDBC URL (jdbc:postgresql://...) is a URL too, though its "//" follows the second colon
+        var url = URL.matcher(given.toLowerCase(Locale.ROOT).startsWith("jdbc:") ? given.substring(5) : given);
         if (url.matches() && url.group(2) != null) {
             String scheme = url.group(1).toLowerCase(Locale.ROOT);
             // the value is not echoed: a URL may carry a user name or password
-            if (scheme.equals("postgresql") || scheme.equals("postgres") || scheme.startsWith("jdbc")) {
+            if (scheme.equals("postgresql") || scheme.equals("postgres")) {
                 throw new StoreException("a PostgreSQL store (" + scheme + "://...) is not in this version of"
                         + " inkgate-admin; give the results store file instead, e.g. --store "
                         + ResultsStore.DEFAULT_FILE_NAME);
