@@ -1,5 +1,7 @@
 package org.inkgate.architecture;
 
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.resideInAPackage;
+import static com.tngtech.archunit.core.domain.JavaClass.Predicates.simpleNameStartingWith;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.lang.ArchRule;
@@ -56,6 +58,19 @@ record ArchitectureRules(String root) {
         return root + ".analysis..";
     }
 
+    /**
+     * The admin core's store implementations: the shared transaction layer ({@code store.sql}) and
+     * each kind of store ({@code store.sqlite} today). Only they see SQL.
+     */
+    String[] storeImplementations() {
+        return new String[] {root + ".admin.core.store.sql..", root + ".admin.core.store.sqlite.."};
+    }
+
+    /** The one factory that opens stores from a location, and so names each implementation. */
+    String storeFactory() {
+        return root + ".admin.core.store.Stores";
+    }
+
     /** The UI-free cores: resource packs, the file formats, the admin core and the analysis. */
     String[] cores() {
         return new String[] {packs(), format(), adminCore(), analysis()};
@@ -100,5 +115,20 @@ record ArchitectureRules(String root) {
         return noClasses().that().resideInAnyPackage(cores())
                 .should(GeneralCodingRules.ACCESS_STANDARD_STREAMS)
                 .because("only the command line in the app packages talks to the terminal");
+    }
+
+    /**
+     * (f) The admin tool reaches storage only through the core's store interfaces, opened by
+     * {@code store.Stores} from a store location: no JDBC and no SQLite class outside the store
+     * implementations and their factory, so a second kind of store changes nothing above them. (The delivery
+     * client's own per-sitting database is outside this rule.)
+     */
+    ArchRule adminReachesStorageOnlyThroughCoreInterfaces() {
+        return noClasses().that().resideInAPackage(admin()).and().resideOutsideOfPackages(storeImplementations())
+                .and().doNotHaveFullyQualifiedName(storeFactory())
+                .should().dependOnClassesThat(resideInAPackage("java.sql..").or(resideInAPackage("org.sqlite.."))
+                        .or(simpleNameStartingWith("Sqlite")))
+                .because("the command line and the admin window open stores through store.Stores and use the core"
+                        + " interfaces it returns, never SQL or a store implementation");
     }
 }

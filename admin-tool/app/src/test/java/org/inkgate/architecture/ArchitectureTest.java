@@ -16,7 +16,10 @@ import java.util.Set;
 import java.util.TreeSet;
 import java.util.stream.Stream;
 import org.inkgate.architecture.fixtures.admin.app.CommandLineMain;
+import org.inkgate.architecture.fixtures.admin.app.CommandWithConnection;
+import org.inkgate.architecture.fixtures.admin.app.StepOpeningSqliteStore;
 import org.inkgate.architecture.fixtures.admin.core.RosterPrinter;
+import org.inkgate.architecture.fixtures.admin.core.store.sqlite.SqliteFixtureStore;
 import org.inkgate.architecture.fixtures.analysis.AnalysisReadingBundle;
 import org.inkgate.architecture.fixtures.analysis.AnalysisReadingRoster;
 import org.inkgate.architecture.fixtures.analysis.AnalysisWithConnection;
@@ -93,6 +96,12 @@ class ArchitectureTest {
         void cores_doNotWriteToStandardOutOrErr() {
             rules.coresDoNotWriteToStandardStreams().check(PRODUCTION);
         }
+
+        @Test
+        void admin_reachesStorageOnlyThroughCoreInterfaces() {
+            assertTrue(PRODUCTION.containPackage("org.inkgate.admin.core.store.sqlite"), "store implementations imported");
+            rules.adminReachesStorageOnlyThroughCoreInterfaces().check(PRODUCTION);
+        }
     }
 
     @Nested
@@ -134,6 +143,19 @@ class ArchitectureTest {
         void standardStreamsRule_coreClassesPrinting_areReported() {
             assertEquals(names(RosterPrinter.class, PackWarningOnStderr.class),
                     violatingClasses(rules.coresDoNotWriteToStandardStreams()));
+        }
+
+        @Test
+        void storageRule_adminClassesUsingSqlOrSqliteStore_areReported() {
+            assertEquals(names(StepOpeningSqliteStore.class, CommandWithConnection.class),
+                    violatingClasses(rules.adminReachesStorageOnlyThroughCoreInterfaces()));
+        }
+
+        @Test
+        void storageRule_storeImplementationAndFactory_areExempt() {
+            Set<String> violating = violatingClasses(rules.adminReachesStorageOnlyThroughCoreInterfaces());
+            assertFalse(violating.contains(SqliteFixtureStore.class.getName()));
+            assertFalse(violating.contains(org.inkgate.architecture.fixtures.admin.core.store.Stores.class.getName()));
         }
 
         @Test

@@ -5,6 +5,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.study.AnalysisRun;
 import org.inkgate.admin.study.RaschChoices;
 import org.inkgate.analysis.data.StudyDesign;
@@ -79,8 +80,8 @@ public final class AnalyseCommand implements Callable<Integer> {
     @Option(names = "--store", paramLabel = "FILE.db",
             description = "Optional results store (from collect): candidates' levels, tool use and process events of"
                     + " --exam are read from it, and its ratings when --ratings is left out; not together with"
-                    + " --tool-usage or --process")
-    private Path store;
+                    + " --tool-usage or --process", converter = StoreLocationConverter.class)
+    private StoreLocation store;
 
     @Option(names = "--exam", paramLabel = "ID",
             description = "The exam in --store; may be left out when the store holds one exam")
@@ -189,7 +190,7 @@ public final class AnalyseCommand implements Callable<Integer> {
             throw new ParameterException(spec.commandLine(), "--mfrm-anchors needs --mfrm-facets");
         }
         AnalysisRun.Request request = new AnalysisRun.Request(ratings, candidates, attributes, rosterAttributes,
-                toolUsage, process, questionnaire, store, exam, out, options, mfrmOptions, mfrmAnchors,
+                toolUsage, process, questionnaire, store == null ? null : store.file(), exam, out, options, mfrmOptions, mfrmAnchors,
                 spec.commandLine().getParseResult().originalArgs());
         AnalysisRun.Written written;
         try {

@@ -13,6 +13,7 @@ import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.admin.core.store.Rows;
+import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.format.trust.TrustPolicy;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
@@ -31,8 +32,9 @@ final class CollectCommand implements Callable<Integer> {
     @Parameters(paramLabel = "FOLDER", arity = "1..*", description = "folders (searched recursively) or .inkresp files")
     List<Path> roots;
 
-    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store (SQLite; created)")
-    Path storeFile;
+    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store (SQLite; created)",
+            converter = StoreLocationConverter.class)
+    StoreLocation store;
 
     @Option(names = "--bundle", required = true, paramLabel = "FILE", description = "the bundle(s) of the sitting")
     List<Path> bundleFiles;
@@ -91,10 +93,10 @@ final class CollectCommand implements Callable<Integer> {
             if (examSource != null) {
                 exam = ExamSourceReader.read(examSource);
             }
-            report = CollectionRun.run(new CollectionRun.Request(storeFile, bundleFiles, roots, encryptionKey,
+            report = CollectionRun.run(new CollectionRun.Request(store.file(), bundleFiles, roots, encryptionKey,
                     keyStore.publicKeys().signingFingerprint(), installations, roster, exam, assignment, threads),
                     n -> {
-                        w.println("Collecting " + n + " package files into " + storeFile + " ...");
+                        w.println("Collecting " + n + " package files into " + store + " ...");
                         w.flush();
                         progress[0] = Progress.onTerminal(err, "collect", n);
                     },

@@ -6,7 +6,7 @@ import java.util.concurrent.Callable;
 import javafx.application.Application;
 import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.gui.rating.DeskApp;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -38,7 +38,7 @@ final class DeskCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         String examId;
-        try (SqliteRatingStore s = storeOptions.open()) {
+        try (RatingStore s = storeOptions.open()) {
             examId = s.examId();
             List<RatingDesk.Rater> raters = s.raters();
             if (raters.isEmpty()) {
@@ -62,7 +62,7 @@ final class DeskCommand implements Callable<Integer> {
         }
         out.println("Opening the rating desk; close the window to finish (every change is already stored as a draft).");
         out.flush();
-        Application.launch(DeskApp.class, "--store=" + storeOptions.store.toAbsolutePath(), "--exam=" + examId);
+        Application.launch(DeskApp.class, "--store=" + storeOptions.store.file().toAbsolutePath(), "--exam=" + examId);
         return InkgateAdmin.OK;
     }
 }

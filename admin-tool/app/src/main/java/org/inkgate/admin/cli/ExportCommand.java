@@ -6,7 +6,8 @@ import java.util.concurrent.Callable;
 import org.inkgate.admin.core.export.StoreExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -20,8 +21,9 @@ final class ExportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store")
-    Path storeFile;
+    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store",
+            converter = StoreLocationConverter.class)
+    StoreLocation location;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "folder for the exported files")
     Path out;
@@ -46,9 +48,9 @@ final class ExportCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
         XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
-        try (ResultsStore store = SqliteResultsStore.openReadOnly(ExistingStore.require(storeFile))) {
+        try (ResultsStore store = Stores.openResultsForReading(StoreLocation.file(ExistingStore.require(location.file())))) {
             for (String id : StoreExport.exams(store, examId)) {
-                StoreExport.write(storeFile, store, id, out, xapiOptions, spreadsheetSafe, part -> { }).lines()
+                StoreExport.write(location.file(), store, id, out, xapiOptions, spreadsheetSafe, part -> { }).lines()
                         .forEach(line -> w.println(TerminalText.value(line)));
             }
         }

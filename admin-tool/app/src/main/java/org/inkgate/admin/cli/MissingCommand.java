@@ -1,12 +1,12 @@
 package org.inkgate.admin.cli;
 
 import java.io.PrintWriter;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.collection.MissingReport;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -18,8 +18,9 @@ final class MissingCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store")
-    Path storeFile;
+    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store",
+            converter = StoreLocationConverter.class)
+    StoreLocation location;
 
     @Option(names = "--exam-id", paramLabel = "ID", description = "only this exam (default: every exam in the store)")
     String examId;
@@ -27,7 +28,7 @@ final class MissingCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         boolean attention = false;
-        try (ResultsStore store = SqliteResultsStore.openReadOnly(ExistingStore.require(storeFile))) {
+        try (ResultsStore store = Stores.openResultsForReading(StoreLocation.file(ExistingStore.require(location.file())))) {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
                 attention |= print(spec.commandLine().getOut(), MissingReport.of(store, id));

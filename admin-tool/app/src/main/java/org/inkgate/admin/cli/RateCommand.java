@@ -13,8 +13,10 @@ import org.inkgate.admin.core.rating.AssignmentSummary;
 import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingFiles;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.rating.Referrals;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.format.refusal.FormatRefusal;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -42,22 +44,23 @@ final class RateCommand extends GroupCommand {
 
     /** --store and --exam, shared by every rating step. */
     static final class StoreOptions {
-        @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store (from collect)")
-        Path store;
+        @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store (from collect)",
+                converter = StoreLocationConverter.class)
+        StoreLocation store;
 
         @Option(names = "--exam", paramLabel = "ID", description = "the exam; may be left out when the store holds one")
         String exam;
 
-        SqliteRatingStore open() throws RatingException {
+        RatingStore open() throws RatingException {
             String id = exam;
             if (id == null) {
-                List<String> exams = SqliteRatingStore.exams(store);
+                List<String> exams = Stores.exams(store);
                 if (exams.size() != 1) {
                     throw new RatingException("the store holds " + exams.size() + " exams " + exams + "; name one with --exam");
                 }
                 id = exams.get(0);
             }
-            return SqliteRatingStore.open(store, id);
+            return Stores.openRating(store, id);
         }
     }
 
@@ -69,13 +72,13 @@ final class RateCommand extends GroupCommand {
         @Mixin
         StoreOptions storeOptions;
 
-        abstract int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException;
+        abstract int run(RatingStore s, PrintWriter out) throws RatingException, IOException;
 
         @Override
         public Integer call() {
             PrintWriter out = spec.commandLine().getOut();
             PrintWriter err = spec.commandLine().getErr();
-            try (SqliteRatingStore s = storeOptions.open()) {
+            try (RatingStore s = storeOptions.open()) {
                 int code = run(s, out);
                 out.flush();
                 return code;
@@ -110,7 +113,7 @@ final class RateCommand extends GroupCommand {
             Integer capacity;
 
             @Override
-            int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+            int run(RatingStore s, PrintWriter out) throws RatingException {
                 boolean added = s.addRater(id, label, capacity);
                 out.println((added ? "Added rater " : "Updated rater ") + id + (capacity == null ? " (no capacity limit)"
                         : " (capacity " + capacity + ")"));
@@ -121,8 +124,8 @@ final class RateCommand extends GroupCommand {
         @Command(name = "list", mixinStandardHelpOptions = true, description = "List the raters.")
         static final class ListRaters extends Step {
             @Override
-            int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
-                for (SqliteRatingStore.RaterEntry r : s.raterEntries()) {
+            int run(RatingStore s, PrintWriter out) throws RatingException {
+                for (RatingStore.RaterEntry r : s.raterEntries()) {
                     out.println(r.id() + "  " + r.label() + (r.capacity() == null ? "" : "  capacity " + r.capacity()));
                 }
                 return InkgateAdmin.OK;
@@ -148,9 +151,9 @@ final class RateCommand extends GroupCommand {
         boolean allowUnlinked;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+        int run(RatingStore s, PrintWriter out) throws RatingException {
             long used = seed != null ? seed : new SecureRandom().nextLong();
-            SqliteRatingStore.AssignmentOutcome o = s.assign(k, used, allowUnlinked);
+            RatingStore.AssignmentOutcome o = s.assign(k, used, allowUnlinked);
             AssignmentSummary.lines(o).forEach(out::println);
             boolean linked = o.wholeDesign().connected();
             return linked && o.plan().warnings().isEmpty() ? InkgateAdmin.OK : InkgateAdmin.ATTENTION;
@@ -161,9 +164,9 @@ final class RateCommand extends GroupCommand {
             description = "Per rater and task: assigned, rated, remaining, flagged; then pending responses.")
     static final class Progress extends Step {
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+        int run(RatingStore s, PrintWriter out) throws RatingException {
             out.printf("%-12s %-20s %8s %6s %9s %7s%n", "rater", "task", "assigned", "rated", "remaining", "flagged");
-            for (SqliteRatingStore.ProgressRow r : s.progressRows()) {
+            for (RatingStore.ProgressRow r : s.progressRows()) {
                 out.printf("%-12s %-20s %8d %6d %9d %7d%n", r.raterId(), r.taskId(), r.total(), r.rated(), r.remaining(),
                         r.flagged());
             }
@@ -194,7 +197,7 @@ final class RateCommand extends GroupCommand {
             Path file;
 
             @Override
-            int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
+            int run(RatingStore s, PrintWriter out) throws RatingException, IOException {
                 RatingFiles.exportSheet(s, rater, file).forEach(out::println);
                 return InkgateAdmin.OK;
             }
@@ -210,7 +213,7 @@ final class RateCommand extends GroupCommand {
             Path file;
 
             @Override
-            int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
+            int run(RatingStore s, PrintWriter out) throws RatingException, IOException {
                 out.println(RatingFiles.importSheet(s, rater, file));
                 return InkgateAdmin.OK;
             }
@@ -234,7 +237,7 @@ final class RateCommand extends GroupCommand {
         String adjudicated;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+        int run(RatingStore s, PrintWriter out) throws RatingException {
             DiscrepancyRule rule;
             try {
                 rule = new DiscrepancyRule(criterionGap, totalGap, DiscrepancyRule.AdjudicatedScore.of(adjudicated));
@@ -252,15 +255,15 @@ final class RateCommand extends GroupCommand {
             description = "The adjudication queue: flagged responses, why, and where each stands (runs the rule again first).")
     static final class Flags extends Step {
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+        int run(RatingStore s, PrintWriter out) throws RatingException {
             int fresh = s.review();
-            List<SqliteRatingStore.Flag> flags = s.flags();
+            List<RatingStore.Flag> flags = s.flags();
             if (fresh > 0) {
                 out.println(fresh + " new flag(s) raised by this review.");
             }
             out.println(flags.size() + " flagged response(s):");
             int open = 0;
-            for (SqliteRatingStore.Flag f : flags) {
+            for (RatingStore.Flag f : flags) {
                 out.println("  flag " + f.flagId() + "  task " + f.taskId() + "  raters " + String.join(" ", f.raters())
                         + "  " + f.reason());
                 out.println("      " + f.status());
@@ -290,7 +293,7 @@ final class RateCommand extends GroupCommand {
         String note;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+        int run(RatingStore s, PrintWriter out) throws RatingException {
             long id = s.refer(rater, blindId, Referrals.Reason.of(reason), note);
             out.println("Referral " + id + " recorded for the test owner (rate referrals list).");
             return InkgateAdmin.OK;
@@ -309,7 +312,7 @@ final class RateCommand extends GroupCommand {
             boolean openOnly;
 
             @Override
-            int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+            int run(RatingStore s, PrintWriter out) throws RatingException {
                 List<Referrals.Referral> list = s.referrals(openOnly);
                 out.println(list.size() + " referral(s):");
                 boolean open = false;
@@ -341,7 +344,7 @@ final class RateCommand extends GroupCommand {
             String decision;
 
             @Override
-            int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+            int run(RatingStore s, PrintWriter out) throws RatingException {
                 s.decide(referral, by, decision);
                 out.println("Referral " + referral + " decided.");
                 return InkgateAdmin.OK;
@@ -367,7 +370,7 @@ final class RateCommand extends GroupCommand {
         String comment;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+        int run(RatingStore s, PrintWriter out) throws RatingException {
             s.resolve(flag, by, scores(spec, scores), comment);
             out.println("Flag " + flag + " settled by resolution entry of " + by + ".");
             return InkgateAdmin.OK;
@@ -403,7 +406,7 @@ final class RateCommand extends GroupCommand {
         Path dir;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException, IOException {
+        int run(RatingStore s, PrintWriter out) throws RatingException, IOException {
             RatingFiles.exportScores(s, dir).forEach(out::println);
             if (s.pendingResponses() > 0) {
                 return InkgateAdmin.ATTENTION;

@@ -7,8 +7,7 @@ import java.util.Locale;
 import org.inkgate.admin.core.rating.ControlMonitor;
 import org.inkgate.admin.core.rating.ControlScripts;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.rating.SqliteControlScripts;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.format.refusal.FormatRefusal;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -37,8 +36,8 @@ final class RateControlCommand extends GroupCommand {
         String source;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
-            new SqliteControlScripts(s).markControl(candidate, task, RateCommand.scores(spec, agreed), source);
+        int run(RatingStore s, PrintWriter out) throws RatingException {
+            s.markControl(candidate, task, RateCommand.scores(spec, agreed), source);
             out.println("Marked: candidate " + candidate + ", task " + task + ". Put it into the queues with rate control"
                     + " mix.");
             return InkgateAdmin.OK;
@@ -53,9 +52,9 @@ final class RateControlCommand extends GroupCommand {
         Long seed;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
+        int run(RatingStore s, PrintWriter out) throws RatingException {
             long used = seed != null ? seed : new SecureRandom().nextLong();
-            int added = new SqliteControlScripts(s).mixControls(used);
+            int added = s.mixControls(used);
             out.println(added + " control item(s) added to raters' queues (seed " + used + ").");
             return InkgateAdmin.OK;
         }
@@ -64,8 +63,8 @@ final class RateControlCommand extends GroupCommand {
     @Command(name = "list", mixinStandardHelpOptions = true, description = "List the control scripts.")
     static final class ListControls extends RateCommand.Step {
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
-            List<ControlScripts.Control> list = new SqliteControlScripts(s).controls();
+        int run(RatingStore s, PrintWriter out) throws RatingException {
+            List<ControlScripts.Control> list = s.controls();
             out.println(list.size() + " control script(s):");
             for (ControlScripts.Control c : list) {
                 out.println("  candidate " + c.candidateNumber() + "  task " + c.taskId() + "  agreed "
@@ -99,8 +98,8 @@ final class RateControlCommand extends GroupCommand {
         Double maxDrift;
 
         @Override
-        int run(SqliteRatingStore s, PrintWriter out) throws RatingException {
-            List<ControlMonitor.RaterReport> reports = ControlMonitor.of(new SqliteControlScripts(s).controlRatings(),
+        int run(RatingStore s, PrintWriter out) throws RatingException {
+            List<ControlMonitor.RaterReport> reports = ControlMonitor.of(s.controlRatings(),
                     new ControlMonitor.Thresholds(minExact, minAdjacent, maxMean, maxDrift));
             out.println("Raters against the control scripts (score - agreed; drift: later half minus earlier half):");
             out.println(String.format(Locale.ROOT, "  %-12s %7s %6s %6s %8s %9s %7s", "rater", "scripts", "pairs",

@@ -17,7 +17,6 @@ import java.util.concurrent.CancellationException;
 import org.inkgate.admin.core.export.QuestionnaireCsv;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
 import org.inkgate.admin.core.store.StoreException;
 import org.inkgate.analysis.data.Candidate;
 import org.inkgate.analysis.data.CandidatesReader;
@@ -41,6 +40,8 @@ import org.inkgate.analysis.study.StudyAnalysis;
 import org.inkgate.analysis.study.StudyData;
 import org.inkgate.analysis.study.StudyOptions;
 import org.inkgate.format.io.OwnerOnly;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.format.io.Utf8Text;
 
 /**
@@ -319,7 +320,7 @@ public final class AnalysisRun {
             return null;
         }
         String chosen = chooseExam();
-        try (ResultsStore s = SqliteResultsStore.openReadOnly(q.store())) {
+        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(q.store()))) {
             return QuestionnaireInput.read(s, chosen, q.store().getFileName().toString());
         } catch (StoreException e) {
             throw new Refused(false, "could not read the results store " + q.store() + ": " + e.getMessage());
@@ -346,7 +347,7 @@ public final class AnalysisRun {
 
     /** The exam named by --exam, or the store's only exam. */
     private String chooseExam() throws Refused {
-        try (ResultsStore s = SqliteResultsStore.openReadOnly(q.store())) {
+        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(q.store()))) {
             List<String> exams = s.examIds();
             if (q.exam() == null) {
                 if (exams.size() != 1) {
@@ -376,7 +377,7 @@ public final class AnalysisRun {
             throw new Refused(false, "no results store at " + q.store() + "; give the file collect wrote");
         }
         String chosen = chooseExam();
-        try (ResultsStore s = SqliteResultsStore.openReadOnly(q.store())) {
+        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(q.store()))) {
             return StoreStudyInput.read(s, chosen, q.rosterAttributes());
         } catch (StoreException e) {
             throw new Refused(false, "could not read the results store " + q.store() + ": " + e.getMessage());

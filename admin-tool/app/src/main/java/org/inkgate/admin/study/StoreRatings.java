@@ -7,9 +7,11 @@ import java.nio.file.Path;
 import java.util.List;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingExport;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.analysis.data.InputRejected;
 import org.inkgate.analysis.data.Rating;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.analysis.data.RatingsReader;
 
 /**
@@ -27,7 +29,7 @@ public final class StoreRatings {
     public static List<Rating> read(Path storeFile, String examId) throws RatingException, IOException, InputRejected {
         StringWriter csv = new StringWriter();
         long rows;
-        try (SqliteRatingStore s = SqliteRatingStore.open(storeFile, examId)) {
+        try (RatingStore s = Stores.openRating(StoreLocation.file(storeFile), examId)) {
             rows = RatingExport.ratings(s, csv);
         }
         if (rows == 0) {

@@ -16,7 +16,8 @@ import java.util.List;
 import java.util.Map;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.roster.RosterReader;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.gui.rating.RatedStore;
 import org.inkgate.admin.testutil.DemoSource;
 import org.junit.jupiter.api.Test;
@@ -49,7 +50,7 @@ class AnalyseRosterAttributesTest {
             roster.add(new RosterCandidate(r.candidateNumber(), r.level(), r.firstLanguage(), r.extraTimePercent(),
                     r.largePrint(), r.highContrast(), Map.of("gender", i++ % 2 == 0 ? "f" : "m")));
         }
-        try (SqliteResultsStore s = SqliteResultsStore.open(rated.file())) {
+        try (ResultsStore s = StoreFixture.of(rated.file()).results()) {
             s.registerRoster(rated.exam().examId(), roster);
         }
         // invented scores, structure only: each demo candidate under both conditions

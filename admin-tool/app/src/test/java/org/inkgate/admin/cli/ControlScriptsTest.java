@@ -17,8 +17,7 @@ import org.inkgate.admin.core.rating.ControlMonitor;
 import org.inkgate.admin.core.rating.ControlScripts;
 import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.RatingDesk;
-import org.inkgate.admin.core.rating.SqliteControlScripts;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.gui.rating.RatedStore;
 import org.inkgate.admin.study.StoreRatings;
 import org.inkgate.analysis.raters.Agreement;
@@ -59,7 +58,7 @@ class ControlScriptsTest {
         RatedStore rated = RatedStore.make(dir, RATERS);
         String db = rated.file().toString();
         Set<String> realIds = new HashSet<>();
-        try (SqliteRatingStore s = rated.open()) {
+        try (RatingStore s = rated.open()) {
             s.setRule(new DiscrepancyRule(null, 4, DiscrepancyRule.AdjudicatedScore.CLOSEST_PAIR_MEAN));
             for (String r : RATERS) {
                 s.queue(r).forEach(q -> realIds.add(q.blindId()));
@@ -80,7 +79,7 @@ class ControlScriptsTest {
         assertTrue(mix.out().startsWith("24 control item(s) added"), mix.out());
 
         Map<String, List<String>> controlIdsByRater = new java.util.TreeMap<>();
-        try (SqliteRatingStore s = rated.open()) {
+        try (RatingStore s = rated.open()) {
             for (String r : RATERS) {
                 List<RatingDesk.QueueItem> queue = s.queue(r);
                 for (RatingDesk.QueueItem q : queue) {
@@ -113,7 +112,7 @@ class ControlScriptsTest {
         assertFalse(before.finals().isEmpty());
 
         // control ratings: everyone agrees exactly, except R06, who drifts: agreed on the earlier half, +3 on the later
-        try (SqliteRatingStore s = rated.open()) {
+        try (RatingStore s = rated.open()) {
             for (String r : RATERS) {
                 List<String> ids = controlIdsByRater.get(r);
                 for (int i = 0; i < ids.size(); i++) {
@@ -139,8 +138,8 @@ class ControlScriptsTest {
         assertTrue(r01.matches("\\s+R01\\s+\\d+\\s+\\d+\\s+1\\.00\\s+1\\.00\\s+\\+0\\.00\\s+(\\+0\\.00|-)"), r01);
 
         // the same exact and adjacent agreement as the analysis's own definition over the same pairs
-        try (SqliteRatingStore s = rated.open()) {
-            List<ControlScripts.ControlRating> all = new SqliteControlScripts(s).controlRatings();
+        try (RatingStore s = rated.open()) {
+            List<ControlScripts.ControlRating> all = s.controlRatings();
             List<ControlScripts.ControlRating> mine = all.stream().filter(c -> c.raterId().equals("R06")).toList();
             double[] a = mine.stream().flatMap(c -> c.agreed().keySet().stream().sorted().map(k -> c.scores().get(k)))
                     .mapToDouble(Integer::doubleValue).toArray();
@@ -162,7 +161,7 @@ class ControlScriptsTest {
     private static Snapshot snapshot(RatedStore rated) throws Exception {
         List<String> finals = new ArrayList<>();
         List<String> ratings = new ArrayList<>();
-        try (SqliteRatingStore s = rated.open()) {
+        try (RatingStore s = rated.open()) {
             s.forEachFinalScore(f -> finals.add(f.candidate() + " " + f.task() + " " + f.criterion() + " " + f.score()
                     + " " + f.method()));
             s.forEachRating(r -> ratings.add(r.candidate() + " " + r.task() + " " + r.rater() + " " + r.criterion() + " "

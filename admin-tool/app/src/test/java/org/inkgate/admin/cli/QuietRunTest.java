@@ -10,7 +10,8 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -48,7 +49,7 @@ class QuietRunTest {
     @Test
     void missing_onAnExistingStore_printsNoLoggingNotices() throws Exception {
         Path store = dir.resolve("results.db");
-        SqliteResultsStore.open(store).close();
+        StoreFixture.of(store).results().close();
         Run r = admin(dir, "missing", "--store", store.toString());
         assertEquals(0, r.code(), r.out() + r.err());
         assertEquals("", r.err(), "standard error of a normal run");

@@ -9,7 +9,7 @@ import java.io.StringWriter;
 import java.nio.file.Path;
 import java.util.List;
 import org.inkgate.admin.core.rating.RatingDesk;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.gui.rating.RatedStore;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -39,7 +39,7 @@ class ReferralsCommandTest {
         String db = store.file().toString();
         String blind;
         String candidate;
-        try (SqliteRatingStore s = store.open()) {
+        try (RatingStore s = store.open()) {
             RatingDesk.QueueItem first = s.queue("R01").get(0);
             blind = first.blindId();
         }

@@ -13,7 +13,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 import org.inkgate.admin.core.rating.RatingDesk;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.roster.RosterReader;
 import org.inkgate.admin.gui.rating.RatedStore;
@@ -48,7 +48,7 @@ class SheetScriptsTest {
         assertTrue(out.toString().contains(folder.toString()), out.toString());
 
         List<RatingDesk.QueueItem> queue;
-        try (SqliteRatingStore s = store.open()) {
+        try (RatingStore s = store.open()) {
             queue = s.queue("R01");
             assertFalse(queue.isEmpty());
             for (RatingDesk.QueueItem q : queue) {

@@ -28,11 +28,12 @@ import org.inkgate.admin.core.export.QuestionnaireCsv;
 import org.inkgate.admin.core.forms.Assignment;
 import org.inkgate.admin.core.forms.FormDesigner;
 import org.inkgate.admin.core.rating.RatingDesk;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.testutil.DemoSource;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.FormSpec;
@@ -164,7 +165,7 @@ class SimulatedStudyAnalyseExportTest {
             scores.computeIfAbsent(r.get("candidate") + "|" + r.get("task"), k -> new LinkedHashMap<>())
                     .put(r.get("criterion"), new int[] {Integer.parseInt(r.get("first")), Integer.parseInt(r.get("second"))});
         }
-        try (SqliteRatingStore rating = SqliteRatingStore.open(store, EXAM)) {
+        try (RatingStore rating = StoreFixture.of(store).rating(EXAM)) {
             for (String r : List.of("R1", "R2", "R3", "R4")) {
                 rating.addRater(r, "", null);
             }

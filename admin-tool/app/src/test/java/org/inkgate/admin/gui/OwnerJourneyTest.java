@@ -16,7 +16,9 @@ import javafx.scene.control.TextArea;
 import javafx.scene.web.WebView;
 import javafx.stage.Stage;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.testutil.CommandLineSitting;
 import org.inkgate.admin.testutil.DemoSource;
 import org.junit.jupiter.api.Test;
@@ -94,23 +96,23 @@ class OwnerJourneyTest {
         StepDriver.press(robot, "#assignRatings");
         StepDriver.waitForWork(session);
         String assigned = StepDriver.label(robot, "#ratingMessage");
-        List<SqliteRatingStore.ProgressRow> before = rows(robot, "#ratingProgress");
-        assertEquals(48, before.stream().mapToInt(SqliteRatingStore.ProgressRow::total).sum(), "24 responses, 2 raters");
-        assertEquals(0, before.stream().mapToInt(SqliteRatingStore.ProgressRow::rated).sum());
+        List<RatingStore.ProgressRow> before = rows(robot, "#ratingProgress");
+        assertEquals(48, before.stream().mapToInt(RatingStore.ProgressRow::total).sum(), "24 responses, 2 raters");
+        assertEquals(0, before.stream().mapToInt(RatingStore.ProgressRow::rated).sum());
 
         // the raters score at their desks (the desk's own tests drive it by keyboard); the owner follows progress
         score(store);
         StepDriver.press(robot, "#refreshRating");
         StepDriver.waitForWork(session);
-        List<SqliteRatingStore.ProgressRow> after = rows(robot, "#ratingProgress");
-        assertEquals(48, after.stream().mapToInt(SqliteRatingStore.ProgressRow::rated).sum());
+        List<RatingStore.ProgressRow> after = rows(robot, "#ratingProgress");
+        assertEquals(48, after.stream().mapToInt(RatingStore.ProgressRow::rated).sum());
 
         StepDriver.setText(robot, "#criterionGap", "1");
         StepDriver.press(robot, "#setRule");
         StepDriver.waitForWork(session);
-        List<SqliteRatingStore.Flag> flags = rows(robot, "#flags");
+        List<RatingStore.Flag> flags = rows(robot, "#flags");
         assertEquals(2, flags.size(), "R2's two planted disagreements");
-        for (SqliteRatingStore.Flag f : flags) {
+        for (RatingStore.Flag f : flags) {
             StepDriver.setText(robot, "#resolveFlagId", Long.toString(f.flagId()));
             StepDriver.setText(robot, "#resolveBy", "Chief examiner (invented)");
             StepDriver.setText(robot, "#resolveScores", "task-fulfilment=5, language-control=4");
@@ -157,7 +159,7 @@ class OwnerJourneyTest {
                 assigned.strip());
         score(Path.of(other));
         CommandLineSitting.admin("rate", "rule", "--criterion-gap", "1", "--store", other);
-        for (SqliteRatingStore.Flag f : flags) {
+        for (RatingStore.Flag f : flags) {
             CommandLineSitting.admin("rate", "resolve", "--flag", Long.toString(f.flagId()), "--by",
                     "Chief examiner (invented)", "--score", "task-fulfilment=5,language-control=4", "--comment",
                     "agreed in discussion", "--store", other);
@@ -170,7 +172,7 @@ class OwnerJourneyTest {
 
     /** Every rater scores the bottom band; R2 gives the top on its first two scripts (planted disagreements). */
     private static void score(Path store) throws Exception {
-        try (SqliteRatingStore s = SqliteRatingStore.open(store, SqliteRatingStore.exams(store).get(0))) {
+        try (RatingStore s = Stores.openRating(StoreLocation.file(store), Stores.exams(StoreLocation.file(store)).get(0))) {
             for (String rater : RATERS) {
                 int n = 0;
                 for (var q : s.queue(rater)) {

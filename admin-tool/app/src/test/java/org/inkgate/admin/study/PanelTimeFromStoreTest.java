@@ -22,7 +22,7 @@ import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.testutil.DemoSource;
 import org.inkgate.analysis.data.ProcessEvent;
 import org.inkgate.analysis.process.ProcessMeasures;
@@ -94,7 +94,7 @@ class PanelTimeFromStoreTest {
         assertInstanceOf(Outcome.Imported.class, report.outcomes().get(0), report.outcomes().toString());
 
         List<ProcessEvent> log;
-        try (ResultsStore results = SqliteResultsStore.open(store)) {
+        try (ResultsStore results = StoreFixture.of(store).results()) {
             log = StoreStudyInput.read(results, exam.examId()).processLog().stream()
                     .filter(e -> e.task().equals(task.taskId())).toList();
         }

@@ -14,10 +14,11 @@ import org.inkgate.admin.core.export.OutputFolder;
 import org.inkgate.admin.core.export.StoreExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
 import org.inkgate.admin.core.store.StoreException;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Work;
 import org.inkgate.admin.study.PartialFolder;
 
@@ -125,7 +126,7 @@ public final class ExportModel {
     private static List<String> run(Path storeFile, Path out, String only, XapiExport.Options options,
             Work.Progress progress, IntConsumer watcher) throws Exception {
         List<String> lines = new ArrayList<>();
-        try (ResultsStore s = SqliteResultsStore.openReadOnly(storeFile)) {
+        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(storeFile))) {
             List<String> exams = StoreExport.exams(s, only);
             if (exams.isEmpty()) {
                 lines.add("The store holds no exam yet. Collect first (step 4).");

@@ -7,9 +7,10 @@ import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import org.inkgate.admin.core.collection.MissingReport;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Messages;
 
 /** The missing-response step: {@link MissingReport} per exam in the store, as {@code inkgate-admin missing}. */
@@ -42,7 +43,7 @@ public final class MissingModel {
                     + " or name the store file.");
             return;
         }
-        try (ResultsStore s = SqliteResultsStore.openReadOnly(file)) {
+        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(file))) {
             StringBuilder b = new StringBuilder();
             List<String> exams = s.examIds();
             if (exams.isEmpty()) {

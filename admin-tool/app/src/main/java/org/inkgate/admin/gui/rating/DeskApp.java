@@ -7,7 +7,9 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.StackPane;
 import javafx.stage.Stage;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
+import org.inkgate.admin.core.rating.RatingStore;
 
 /**
  * The rating desk as a JavaFX application, started by {@code inkgate-admin rate desk} with the
@@ -15,14 +17,13 @@ import org.inkgate.admin.core.rating.SqliteRatingStore;
  */
 public final class DeskApp extends Application {
 
-    private SqliteRatingStore store;
+    private RatingStore store;
     private String failure;
 
     @Override
     public void init() {
         try {
-            store = SqliteRatingStore.open(Path.of(getParameters().getNamed().get("store")),
-                    getParameters().getNamed().get("exam"));
+            store = Stores.openRating(StoreLocation.file(Path.of(getParameters().getNamed().get("store"))), getParameters().getNamed().get("exam"));
         } catch (RatingException e) {
             failure = "The rating desk cannot open: " + e.getMessage() + ". Nothing was changed.";
         }

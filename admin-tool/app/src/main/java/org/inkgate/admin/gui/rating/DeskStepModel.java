@@ -7,9 +7,11 @@ import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.stage.Stage;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Work;
 
 /** The admin window's rating step: opens the rating desk in its own window over the chosen results store. */
@@ -56,16 +58,16 @@ public final class DeskStepModel {
         }, failure -> result.set("The rating desk did not open. " + failure));
     }
 
-    private static SqliteRatingStore open(Path file, String examId) throws RatingException {
+    private static RatingStore open(Path file, String examId) throws RatingException {
         String id = examId;
         if (id == null) {
-            List<String> exams = SqliteRatingStore.exams(file);
+            List<String> exams = Stores.exams(StoreLocation.file(file));
             if (exams.size() != 1) {
                 throw new RatingException("the store holds " + exams.size() + " exams " + exams + "; type the exam id");
             }
             id = exams.get(0);
         }
-        SqliteRatingStore s = SqliteRatingStore.open(file, id);
+        RatingStore s = Stores.openRating(StoreLocation.file(file), id);
         if (s.raters().isEmpty()) {
             s.close();
             throw new RatingException("exam " + id + " has no raters yet; add them and assign the responses first"
@@ -74,7 +76,7 @@ public final class DeskStepModel {
         return s;
     }
 
-    private static void close(SqliteRatingStore s) {
+    private static void close(RatingStore s) {
         try {
             s.close();
         } catch (RatingException e) {

@@ -73,7 +73,7 @@ public final class ControlQuality {
             return;
         }
         model.call("Marking a control script", s -> {
-            RatingAdminModel.controlScripts(s).markControl(who, which, scores, from);
+            s.markControl(who, which, scores, from);
             return "Marked: candidate " + who + ", task " + which + ". Put it into the queues with Mix into queues.";
         });
     }
@@ -91,7 +91,7 @@ public final class ControlQuality {
             return;
         }
         model.call("Mixing control scripts into the queues", s -> {
-            int added = RatingAdminModel.controlScripts(s).mixControls(seed);
+            int added = s.mixControls(seed);
             return added + " control item(s) added to raters' queues (seed " + seed + ").";
         });
     }

@@ -14,28 +14,29 @@ import javafx.collections.ObservableList;
 import org.inkgate.admin.core.rating.AssignmentSummary;
 import org.inkgate.admin.core.rating.ControlScripts;
 import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.rating.Referrals;
-import org.inkgate.admin.core.rating.SqliteControlScripts;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
 import org.inkgate.admin.gui.AdminSession;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Fields;
 
 /**
  * The rating administration step: raters, the seeded assignment and its linkage, progress per
- * rater and task, over the same {@link SqliteRatingStore} calls as {@code inkgate-admin rate}.
+ * rater and task, over the same {@link RatingStore} calls as {@code inkgate-admin rate}.
  * Every call runs on the session's background worker; the tables are read again after each.
  */
 public final class RatingAdminModel {
 
     /** What the tables show, read in one go after each change. */
-    record Snapshot(List<SqliteRatingStore.RaterEntry> raters, List<SqliteRatingStore.ProgressRow> progress,
-            List<SqliteRatingStore.Flag> flags, String state, List<Referrals.Referral> referrals,
+    record Snapshot(List<RatingStore.RaterEntry> raters, List<RatingStore.ProgressRow> progress,
+            List<RatingStore.Flag> flags, String state, List<Referrals.Referral> referrals,
             List<ControlScripts.Control> controls, List<ControlScripts.ControlRating> controlRatings) {
     }
 
     /** One store call; returns the message for the test owner. */
     interface Call {
-        String run(SqliteRatingStore s) throws Exception;
+        String run(RatingStore s) throws Exception;
     }
 
     private final AdminSession session;
@@ -49,9 +50,9 @@ public final class RatingAdminModel {
     private final BooleanProperty allowUnlinked = new SimpleBooleanProperty(false);
     private final StringProperty message = new SimpleStringProperty("");
     private final StringProperty state = new SimpleStringProperty("");
-    private final ObservableList<SqliteRatingStore.RaterEntry> raters = FXCollections.observableArrayList();
-    private final ObservableList<SqliteRatingStore.ProgressRow> progress = FXCollections.observableArrayList();
-    private final ObservableList<SqliteRatingStore.Flag> flags = FXCollections.observableArrayList();
+    private final ObservableList<RatingStore.RaterEntry> raters = FXCollections.observableArrayList();
+    private final ObservableList<RatingStore.ProgressRow> progress = FXCollections.observableArrayList();
+    private final ObservableList<RatingStore.Flag> flags = FXCollections.observableArrayList();
     private final RuleAndFlags rule = new RuleAndFlags(this);
     private final SheetsAndScores sheets = new SheetsAndScores(this);
     private final ReferralDecisions referrals = new ReferralDecisions(this);
@@ -75,9 +76,9 @@ public final class RatingAdminModel {
     public StringProperty message() { return message; }
     /** Linkage of the design so far, responses without a final score, the rule in force. */
     public StringProperty state() { return state; }
-    public ObservableList<SqliteRatingStore.RaterEntry> raters() { return raters; }
-    public ObservableList<SqliteRatingStore.ProgressRow> progress() { return progress; }
-    public ObservableList<SqliteRatingStore.Flag> flags() { return flags; }
+    public ObservableList<RatingStore.RaterEntry> raters() { return raters; }
+    public ObservableList<RatingStore.ProgressRow> progress() { return progress; }
+    public ObservableList<RatingStore.Flag> flags() { return flags; }
     public RuleAndFlags rule() { return rule; }
     public SheetsAndScores sheets() { return sheets; }
     public ReferralDecisions referrals() { return referrals; }
@@ -131,7 +132,7 @@ public final class RatingAdminModel {
         }
         String examId = exam.get().isBlank() ? null : exam.get().strip();
         session.work().run(what, p -> {
-            try (SqliteRatingStore s = open(file, examId)) {
+            try (RatingStore s = open(file, examId)) {
                 String said = call.run(s);
                 return new Object[] {said, snapshot(s)};
             }
@@ -151,27 +152,19 @@ public final class RatingAdminModel {
     }
 
     /** As the command's --exam: may be left out when the store holds one exam. */
-    static SqliteRatingStore open(Path file, String examId) throws RatingException {
+    static RatingStore open(Path file, String examId) throws RatingException {
         String id = examId;
         if (id == null) {
-            List<String> exams = SqliteRatingStore.exams(file);
+            List<String> exams = Stores.exams(StoreLocation.file(file));
             if (exams.size() != 1) {
                 throw new RatingException("the store holds " + exams.size() + " exams " + exams + "; name one in Exam id");
             }
             id = exams.get(0);
         }
-        return SqliteRatingStore.open(file, id);
+        return Stores.openRating(StoreLocation.file(file), id);
     }
 
-    /**
-     * The store's control scripts, as {@code rate control} reaches them: the one place the step
-     * names the implementation (the rating store's split, branch i19-split, moves it behind the store).
-     */
-    static ControlScripts controlScripts(SqliteRatingStore s) {
-        return new SqliteControlScripts(s);
-    }
-
-    private static Snapshot snapshot(SqliteRatingStore s) throws RatingException {
+    private static Snapshot snapshot(RatingStore s) throws RatingException {
         List<String> state = new ArrayList<>();
         state.add(AssignmentSummary.linkage(s.design()));
         int pending = s.pendingResponses();
@@ -179,8 +172,7 @@ public final class RatingAdminModel {
                 + " response(s) have no final score yet (ratings outstanding or disagreements not settled).");
         state.add(s.rule().map(r -> "Discrepancy rule: flag " + r.describe() + ".")
                 .orElse("No discrepancy rule is set: ratings are averaged without any check."));
-        ControlScripts controlScripts = controlScripts(s);
         return new Snapshot(s.raterEntries(), s.progressRows(), s.flags(), String.join("\n", state), s.referrals(false),
-                controlScripts.controls(), controlScripts.controlRatings());
+                s.controls(), s.controlRatings());
     }
 }

@@ -15,7 +15,7 @@ import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.VBox;
 import org.inkgate.admin.core.rating.DiscrepancyRule;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.gui.Fields;
 import org.inkgate.admin.gui.Step;
 import org.inkgate.admin.gui.Work;
@@ -37,10 +37,10 @@ public final class RatingAdminView implements Step {
         Button refresh = button("refreshRating", "Show raters and progress", "Read raters, progress and flags", work);
         refresh.setOnAction(e -> model.refresh());
 
-        TableView<SqliteRatingStore.RaterEntry> raters = table("raters", "Raters");
+        TableView<RatingStore.RaterEntry> raters = table("raters", "Raters");
         raters.setItems(model.raters());
-        raters.getColumns().add(column("Rater", SqliteRatingStore.RaterEntry::id));
-        raters.getColumns().add(column("Shown as", SqliteRatingStore.RaterEntry::label));
+        raters.getColumns().add(column("Rater", RatingStore.RaterEntry::id));
+        raters.getColumns().add(column("Shown as", RatingStore.RaterEntry::label));
         raters.getColumns().add(column("Capacity", r -> r.capacity() == null ? "no limit" : r.capacity().toString()));
         Button add = button("addRater", "Add or update rater", "Add or update the rater", work);
         add.setOnAction(e -> model.addRater());
@@ -69,10 +69,10 @@ public final class RatingAdminView implements Step {
         design.add(unlinked, 1, 2);
         design.add(assign, 1, 3);
 
-        TableView<SqliteRatingStore.ProgressRow> progress = table("ratingProgress", "Progress per rater and task");
+        TableView<RatingStore.ProgressRow> progress = table("ratingProgress", "Progress per rater and task");
         progress.setItems(model.progress());
-        progress.getColumns().add(column("Rater", SqliteRatingStore.ProgressRow::raterId));
-        TableColumn<SqliteRatingStore.ProgressRow, String> task = column("Task", SqliteRatingStore.ProgressRow::taskId);
+        progress.getColumns().add(column("Rater", RatingStore.ProgressRow::raterId));
+        TableColumn<RatingStore.ProgressRow, String> task = column("Task", RatingStore.ProgressRow::taskId);
         task.setPrefWidth(220);
         Fields.wrap(task);
         progress.getColumns().add(task);
@@ -102,19 +102,19 @@ public final class RatingAdminView implements Step {
         Fields.row(ruleGrid, 2, "Adjudicated score", method);
         ruleGrid.add(setRule, 1, 3);
 
-        TableView<SqliteRatingStore.Flag> flags = table("flags", "Flagged responses");
+        TableView<RatingStore.Flag> flags = table("flags", "Flagged responses");
         flags.setItems(model.flags());
-        TableColumn<SqliteRatingStore.Flag, String> number = column("Flag", f -> Long.toString(f.flagId()));
+        TableColumn<RatingStore.Flag, String> number = column("Flag", f -> Long.toString(f.flagId()));
         number.setPrefWidth(64);
         number.setMinWidth(60); // the heading "Flag" whole at 1024 pixels
         flags.getColumns().add(number);
-        TableColumn<SqliteRatingStore.Flag, String> flagTask = column("Task", SqliteRatingStore.Flag::taskId);
+        TableColumn<RatingStore.Flag, String> flagTask = column("Task", RatingStore.Flag::taskId);
         flagTask.setPrefWidth(170);
         Fields.wrap(flagTask);
         flags.getColumns().add(flagTask);
         flags.getColumns().add(column("Raters", f -> String.join(" ", f.raters())));
-        TableColumn<SqliteRatingStore.Flag, String> why = column("Why", SqliteRatingStore.Flag::reason);
-        TableColumn<SqliteRatingStore.Flag, String> status = column("Where it stands", SqliteRatingStore.Flag::status);
+        TableColumn<RatingStore.Flag, String> why = column("Why", RatingStore.Flag::reason);
+        TableColumn<RatingStore.Flag, String> status = column("Where it stands", RatingStore.Flag::status);
         why.setPrefWidth(200);
         status.setPrefWidth(220);
         Fields.wrap(why);

@@ -31,7 +31,7 @@ import javafx.stage.Stage;
 import org.inkgate.admin.cli.InkgateAdmin;
 import org.inkgate.admin.core.rating.RatingDesk.QueueItem;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.AdminWindow;
@@ -74,7 +74,7 @@ class AnalysisStepTest {
     @BeforeEach
     void rateEverything() throws Exception {
         rated = RatedStore.make(dir, RATERS);
-        try (SqliteRatingStore s = rated.open()) {
+        try (RatingStore s = rated.open()) {
             for (String rater : RATERS) {
                 for (QueueItem q : s.queue(rater)) {
                     Map<String, Integer> sheet = new HashMap<>();

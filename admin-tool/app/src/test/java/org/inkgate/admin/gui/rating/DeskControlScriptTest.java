@@ -18,8 +18,8 @@ import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.inkgate.admin.cli.InkgateAdmin;
 import org.inkgate.admin.core.rating.ControlMonitor;
-import org.inkgate.admin.core.rating.SqliteControlScripts;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.ControlScripts;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.gui.StepDriver;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
@@ -63,8 +63,8 @@ class DeskControlScriptTest {
     @Test
     void rater_meetsUnannouncedControls_inTheDesk_andIsFlaggedAfterAPlantedDrift(FxRobot robot) throws Exception {
         RatedStore rated = RatedStore.make(dir, RATERS);
-        try (SqliteRatingStore s = rated.open()) {
-            SqliteControlScripts controls = new SqliteControlScripts(s);
+        try (RatingStore s = rated.open()) {
+            ControlScripts controls = s;
             for (int i = 1; i <= 8; i++) {
                 controls.markControl(String.format("H10%02d", i), "ferry-complaint",
                         Map.of("task-fulfilment", 6, "language-control", 5), "invented standardisation meeting");
@@ -74,7 +74,7 @@ class DeskControlScriptTest {
         Set<String> controlIds = controlIds(rated.file(), "rater-a");
         assertTrue(controlIds.size() >= 2, "rater-a meets at least two control scripts: " + controlIds);
 
-        SqliteRatingStore store = rated.open();
+        RatingStore store = rated.open();
         open.add(store);
         DeskModel desk = new DeskModel(store);
         open.add(desk);

@@ -3,7 +3,8 @@ package org.inkgate.admin.gui.rating;
 import java.nio.file.Path;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.testfx.api.FxRobot;
 import org.testfx.api.FxToolkit;
 
@@ -20,7 +21,7 @@ public final class DeskKillProcess {
 
     public static void main(String[] args) throws Exception {
         Stage stage = FxToolkit.registerPrimaryStage();
-        SqliteRatingStore store = SqliteRatingStore.open(Path.of(args[0]), args[1]);
+        RatingStore store = StoreFixture.of(Path.of(args[0])).rating(args[1]);
         DeskModel model = new DeskModel(store);
         FxRobot robot = new FxRobot();
         robot.interact(() -> DeskWindow.show(stage, model));

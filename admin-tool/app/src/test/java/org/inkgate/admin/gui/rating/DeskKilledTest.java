@@ -19,7 +19,7 @@ import javafx.scene.control.TextField;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -109,7 +109,7 @@ class DeskKilledTest {
         String drafted = opened[3];
 
         RatingSheet draft;
-        try (SqliteRatingStore check = rated.open()) {
+        try (RatingStore check = rated.open()) {
             assertEquals(Map.of("task-fulfilment", 6, "language-control", 5),
                     check.submitted(rater, submitted).orElseThrow().scores(), "the rating submitted before the kill");
             draft = check.sheet(rater, drafted).orElseThrow();
@@ -119,7 +119,7 @@ class DeskKilledTest {
             assertTrue(check.submitted(rater, drafted).isEmpty(), "a draft is not a rating");
         }
 
-        SqliteRatingStore store = rated.open();
+        RatingStore store = rated.open();
         open.add(store);
         DeskModel model = new DeskModel(store);
         open.add(model);

@@ -18,7 +18,7 @@ import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.RatingDesk.Kind;
 import org.inkgate.admin.core.rating.RatingDesk.QueueItem;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -28,7 +28,7 @@ import org.testfx.framework.junit5.ApplicationExtension;
 import org.testfx.framework.junit5.Start;
 
 /**
- * The desk over a real results store file (SqliteRatingStore), made from the invented demo exam
+ * The desk over a real results store file (RatingStore), made from the invented demo exam
  * and simulated packages ({@link RatedStore}). The demo rubric (src/demo/exam-source/rubric.yaml)
  * scores both criteria 1-9. Expected values are what the test types or submits.
  */
@@ -75,7 +75,7 @@ class DeskOverStoreTest {
         assertEquals("7", robot.lookup("#score-task-fulfilment").queryAs(TextField.class).getText());
         assertEquals("", robot.lookup("#score-language-control").queryAs(TextField.class).getText());
         assertEquals("Left mid-way", robot.lookup("#comment").queryAs(TextArea.class).getText());
-        try (SqliteRatingStore check = rated.open()) {
+        try (RatingStore check = rated.open()) {
             assertEquals(Optional.of(new RatingSheet(Map.of("task-fulfilment", 6, "language-control", 5), "")),
                     check.submitted("rater-a", firstItem));
             assertTrue(check.submitted("rater-a", secondItem).isEmpty(), "the unfinished one is a draft only");
@@ -87,7 +87,7 @@ class DeskOverStoreTest {
     void desk_flaggedResponse_reachesTheThirdRaterAsAnAdjudicationAndShowsNothingThatIdentifies(FxRobot robot)
             throws Exception {
         RatedStore rated = RatedStore.make(dir, RATERS);
-        SqliteRatingStore setup = rated.open();
+        RatingStore setup = rated.open();
         open.add(setup);
         // totals more than 2 apart are flagged (a threshold chosen for the test, the test owner's in real use)
         setup.setRule(new DiscrepancyRule(null, 2, DiscrepancyRule.AdjudicatedScore.CLOSEST_PAIR_MEAN));
@@ -127,7 +127,7 @@ class DeskOverStoreTest {
         assertTrue(scan.textsSeen() > 20, "the scan read the screens' text");
     }
 
-    private DeskModel desk(FxRobot robot, SqliteRatingStore store) throws Exception {
+    private DeskModel desk(FxRobot robot, RatingStore store) throws Exception {
         open.add(store);
         DeskModel model = new DeskModel(store);
         open.add(model);

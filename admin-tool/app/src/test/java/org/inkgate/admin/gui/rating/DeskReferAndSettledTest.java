@@ -19,7 +19,7 @@ import org.inkgate.admin.core.rating.RatingDesk.Kind;
 import org.inkgate.admin.core.rating.RatingDesk.QueueItem;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
 import org.inkgate.admin.core.rating.Referrals;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -76,7 +76,7 @@ class DeskReferAndSettledTest {
         assertTrue(robot.lookup("#deskStatus").queryAs(Label.class).getText().contains("referred to the test owner"),
                 robot.lookup("#deskStatus").queryAs(Label.class).getText());
         assertEquals(blind, desk.current().get().blindId(), "the script stays open in the queue");
-        try (SqliteRatingStore owner = rated.open()) {
+        try (RatingStore owner = rated.open()) {
             List<Referrals.Referral> list = owner.referrals(true);
             assertEquals(1, list.size());
             assertEquals(blind, list.get(0).blindId());
@@ -90,7 +90,7 @@ class DeskReferAndSettledTest {
     @Test
     void settledWhileOpen_submitIsRefusedWithTheReason_andTheResponseLeavesTheQueue(FxRobot robot) throws Exception {
         RatedStore rated = RatedStore.make(dir, RATERS);
-        SqliteRatingStore owner = rated.open();
+        RatingStore owner = rated.open();
         open.add(owner);
         owner.setRule(new DiscrepancyRule(null, 2, DiscrepancyRule.AdjudicatedScore.CLOSEST_PAIR_MEAN));
         for (String rater : List.of("rater-b", "rater-c")) {
@@ -106,7 +106,7 @@ class DeskReferAndSettledTest {
         int before = desk.queue().size();
         robot.interact(() -> desk.open(adjudication));
         DeskShots.settle(desk);
-        SqliteRatingStore.Flag flag = owner.flags().stream()
+        RatingStore.Flag flag = owner.flags().stream()
                 .filter(f -> adjudication.blindId().equals(f.adjudicatorBlindId())).findFirst().orElseThrow();
         owner.resolve(flag.flagId(), "Invented panel lead", Map.of("task-fulfilment", 5, "language-control", 5), "");
 
@@ -121,7 +121,7 @@ class DeskReferAndSettledTest {
         assertFalse(desk.queue().stream().anyMatch(q -> q.blindId().equals(adjudication.blindId())));
     }
 
-    private DeskModel desk(FxRobot robot, SqliteRatingStore store) throws Exception {
+    private DeskModel desk(FxRobot robot, RatingStore store) throws Exception {
         open.add(store);
         DeskModel model = new DeskModel(store);
         open.add(model);

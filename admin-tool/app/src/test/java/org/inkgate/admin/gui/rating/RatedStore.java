@@ -10,12 +10,13 @@ import org.inkgate.admin.core.collection.CollectionRun;
 import org.inkgate.admin.core.forms.Assignment;
 import org.inkgate.admin.core.forms.FormAssigner;
 import org.inkgate.admin.core.forms.FormDesigner;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.roster.RosterReader;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.testutil.DemoSource;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.OpenedBundle;
@@ -66,7 +67,7 @@ public record RatedStore(Path file, ExamSource exam, List<String> hiddenFacts) {
                 TestKeys.ownerFingerprint(), TestKeys.installations(), rosterFile, exam, null, 1), n -> { }, o -> { });
         RatedStore collected = new RatedStore(store, exam, List.copyOf(hidden.stream().distinct().toList()));
         if (!raterIds.isEmpty()) {
-            try (SqliteRatingStore rating = SqliteRatingStore.open(store, exam.examId())) {
+            try (RatingStore rating = StoreFixture.of(store).rating(exam.examId())) {
                 for (String id : raterIds) {
                     rating.addRater(id, "", null);
                 }
@@ -81,7 +82,7 @@ public record RatedStore(Path file, ExamSource exam, List<String> hiddenFacts) {
         return make(dir, List.of());
     }
 
-    public SqliteRatingStore open() throws Exception {
-        return SqliteRatingStore.open(file, exam.examId());
+    public RatingStore open() throws Exception {
+        return StoreFixture.of(file).rating(exam.examId());
     }
 }

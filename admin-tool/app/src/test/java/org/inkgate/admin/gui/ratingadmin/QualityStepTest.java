@@ -19,7 +19,9 @@ import org.inkgate.admin.core.rating.ControlMonitor;
 import org.inkgate.admin.core.rating.ControlScripts;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
 import org.inkgate.admin.core.rating.Referrals;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.AdminWindow;
 import org.inkgate.admin.gui.StepDriver;
@@ -92,8 +94,8 @@ class QualityStepTest {
         assertEquals(printed.strip(), mixed.strip());
         List<ControlScripts.Control> shown = rows(robot, "#controlScripts");
         assertEquals(CONTROLS.size(), shown.size());
-        try (SqliteRatingStore s = byCommand.open()) {
-            assertEquals(new org.inkgate.admin.core.rating.SqliteControlScripts(s).controls(), shown);
+        try (RatingStore s = byCommand.open()) {
+            assertEquals(s.controls(), shown);
         }
         assertEquals(CommandLineSitting.admin("rate", "control", "list", "--store", other),
                 CommandLineSitting.admin("rate", "control", "list", "--store", inWindow.file().toString()));
@@ -129,7 +131,7 @@ class QualityStepTest {
 
         // a rater refers a script; the test owner sees it with the candidate number and decides in the window
         String candidate;
-        try (SqliteRatingStore s = inWindow.open()) {
+        try (RatingStore s = inWindow.open()) {
             String blind = s.queue("rater-b").get(0).blindId();
             s.refer("rater-b", blind, Referrals.Reason.IDENTITY_REVEALED, "signs the letter with a full name");
             candidate = s.referrals(false).get(0).candidateNumber();
@@ -186,8 +188,8 @@ class QualityStepTest {
         WaitForAsyncUtils.waitForFxEvents();
         assertTrue(StepDriver.label(robot, "#ratingMessage").startsWith("The monitor limits were not applied: Largest"
                 + " drift \"a lot\" is not a number"), StepDriver.label(robot, "#ratingMessage"));
-        try (SqliteRatingStore s = store.open()) {
-            assertEquals(List.of(), new org.inkgate.admin.core.rating.SqliteControlScripts(s).controls());
+        try (RatingStore s = store.open()) {
+            assertEquals(List.of(), s.controls());
         }
     }
 
@@ -231,7 +233,7 @@ class QualityStepTest {
                 items.computeIfAbsent(rs.getString(1), k -> new ArrayList<>()).add(rs.getString(2));
             }
         }
-        try (SqliteRatingStore s = SqliteRatingStore.open(store, SqliteRatingStore.exams(store).get(0))) {
+        try (RatingStore s = Stores.openRating(StoreLocation.file(store), Stores.exams(StoreLocation.file(store)).get(0))) {
             for (String rater : RATERS) {
                 List<String> ids = items.get(rater);
                 // a control script never goes to a rater who already rates that response

@@ -11,7 +11,7 @@ import javafx.scene.control.ChoiceBox;
 import javafx.scene.control.TableView;
 import javafx.stage.Stage;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.AdminWindow;
@@ -73,12 +73,12 @@ class RatingAdminStepTest {
 
         // the demo roster has 12 invented candidates with 2 tasks each (src/demo): 24 responses, 2 raters each;
         // R3 may take 10, so the other 38 ratings split evenly between R1 and R2
-        List<SqliteRatingStore.ProgressRow> shown = rows(robot, "#ratingProgress");
-        assertEquals(48, shown.stream().mapToInt(SqliteRatingStore.ProgressRow::total).sum());
+        List<RatingStore.ProgressRow> shown = rows(robot, "#ratingProgress");
+        assertEquals(48, shown.stream().mapToInt(RatingStore.ProgressRow::total).sum());
         assertEquals(Map.of("R1", 19, "R2", 19, "R3", 10), workloads(shown));
         assertTrue(StepDriver.label(robot, "#ratingState").contains("Rater links: connected"),
                 StepDriver.label(robot, "#ratingState"));
-        try (SqliteRatingStore s = byCommand.open()) {
+        try (RatingStore s = byCommand.open()) {
             assertEquals(s.progressRows(), shown);
         }
 
@@ -91,10 +91,10 @@ class RatingAdminStepTest {
         String ruleSet = StepDriver.label(robot, "#ratingMessage");
         String rulePrinted = CommandLineSitting.admin("rate", "rule", "--criterion-gap", "1", "--store", store);
         assertEquals(rulePrinted.strip().replace("; see rate flags.", "."), ruleSet.strip());
-        List<SqliteRatingStore.Flag> flags = rows(robot, "#flags");
+        List<RatingStore.Flag> flags = rows(robot, "#flags");
         // every response R2 rated disagrees by the whole band range with its partner: R2's 19 responses
         assertEquals(19, flags.size());
-        try (SqliteRatingStore s = byCommand.open()) {
+        try (RatingStore s = byCommand.open()) {
             assertEquals(comparable(s.flags()), comparable(flags));
         }
 
@@ -125,7 +125,7 @@ class RatingAdminStepTest {
         assertTrue(listed.contains("flag " + first + "  "), listed);
         assertTrue(listed.lines().dropWhile(l -> !l.contains("flag " + first + "  ")).skip(1).findFirst().orElseThrow()
                 .contains("settled"), listed);
-        List<SqliteRatingStore.Flag> after = rows(robot, "#flags");
+        List<RatingStore.Flag> after = rows(robot, "#flags");
         assertTrue(after.get(0).status().startsWith("settled"), after.get(0).status());
     }
 
@@ -139,7 +139,7 @@ class RatingAdminStepTest {
         addRater(robot, session, "R1", "ten");
         assertEquals("Capacity \"ten\" is not a whole number; leave it blank for no limit.",
                 StepDriver.label(robot, "#ratingMessage"));
-        try (SqliteRatingStore s = store.open()) {
+        try (RatingStore s = store.open()) {
             assertEquals(List.of(), s.raterEntries());
         }
     }
@@ -152,7 +152,7 @@ class RatingAdminStepTest {
     }
 
     private static void rateAll(RatedStore store) throws Exception {
-        try (SqliteRatingStore s = store.open()) {
+        try (RatingStore s = store.open()) {
             for (String rater : List.of("R1", "R2", "R3")) {
                 for (var q : s.queue(rater)) {
                     java.util.Map<String, Integer> scores = new java.util.HashMap<>();
@@ -164,14 +164,14 @@ class RatingAdminStepTest {
         }
     }
 
-    private static Map<String, Integer> workloads(List<SqliteRatingStore.ProgressRow> rows) {
+    private static Map<String, Integer> workloads(List<RatingStore.ProgressRow> rows) {
         Map<String, Integer> w = new java.util.TreeMap<>();
         rows.forEach(r -> w.merge(r.raterId(), r.total(), Integer::sum));
         return w;
     }
 
     /** A flag without what differs between two stores by design: blind ids and clock times. */
-    private static List<String> comparable(List<SqliteRatingStore.Flag> flags) {
+    private static List<String> comparable(List<RatingStore.Flag> flags) {
         List<String> out = new ArrayList<>();
         flags.forEach(f -> out.add(f.flagId() + " " + f.taskId() + " " + f.raters() + " " + f.reason() + " "
                 + f.adjudicator() + " " + f.finalMethod()));

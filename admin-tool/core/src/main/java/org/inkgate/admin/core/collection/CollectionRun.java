@@ -20,7 +20,8 @@ import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.OpenedBundle;
@@ -105,7 +106,7 @@ public final class CollectionRun {
     public static Report run(Request r, IntConsumer starting, Consumer<Outcome> settled)
             throws IOException, InvalidSourceException, BundleRefusedException, org.inkgate.admin.core.store.StoreException {
         try (CollectLock lock = CollectLock.acquire(r.storeFile());
-                ResultsStore store = SqliteResultsStore.open(r.storeFile())) {
+                ResultsStore store = Stores.openResults(StoreLocation.file(r.storeFile()))) {
             Map<String, BundleManifest> bundles = new HashMap<>();
             TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
             Map<String, String> signers = new HashMap<>();

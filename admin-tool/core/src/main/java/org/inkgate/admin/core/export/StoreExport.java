@@ -8,9 +8,11 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
 
 /**
  * One exam's whole export (tidy CSV, questionnaire answers, QTI results, xAPI statements) into
@@ -115,10 +117,10 @@ public final class StoreExport {
     /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */
     private static QtiResultsExport.Scoring scoring(Path storeFile, String id) throws IOException {
         try {
-            if (!SqliteRatingStore.hasRubric(storeFile, id)) {
+            if (!Stores.hasRubric(StoreLocation.file(storeFile), id)) {
                 return QtiResultsExport.Scoring.NONE;
             }
-            try (SqliteRatingStore rating = SqliteRatingStore.open(storeFile, id)) {
+            try (RatingStore rating = Stores.openRating(StoreLocation.file(storeFile), id)) {
                 return new QtiResultsExport.Scoring(rating.rubric(), rating.scoresByResponse());
             }
         } catch (RatingException e) {

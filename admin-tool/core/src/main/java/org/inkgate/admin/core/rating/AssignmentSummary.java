@@ -12,7 +12,7 @@ public final class AssignmentSummary {
     private AssignmentSummary() {
     }
 
-    public static List<String> lines(SqliteRatingStore.AssignmentOutcome o) {
+    public static List<String> lines(AssignmentRuns.AssignmentOutcome o) {
         RatingAssigner.Plan plan = o.plan();
         int k = plan.ratersPerResponse();
         List<String> out = new ArrayList<>();

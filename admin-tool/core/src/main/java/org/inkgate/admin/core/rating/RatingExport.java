@@ -23,7 +23,7 @@ public final class RatingExport {
     }
 
     /** Writes every current rating; returns the number of rows. */
-    public static long ratings(SqliteRatingStore store, Writer out) throws RatingException, IOException {
+    public static long ratings(RatingStore store, Writer out) throws RatingException, IOException {
         Csv.writeRow(out, RATING_COLUMNS);
         long[] n = {0};
         try {
@@ -37,7 +37,7 @@ public final class RatingExport {
     }
 
     /** Writes every final score; returns the number of rows. */
-    public static long finalScores(SqliteRatingStore store, Writer out) throws RatingException, IOException {
+    public static long finalScores(RatingStore store, Writer out) throws RatingException, IOException {
         Csv.writeRow(out, FINAL_COLUMNS);
         long[] n = {0};
         try {

@@ -22,7 +22,7 @@ public final class RatingFiles {
     }
 
     /** Writes {@code rater}'s sheet to {@code file} and the scripts folder beside it; returns the summary. */
-    public static List<String> exportSheet(SqliteRatingStore s, String rater, Path file) throws RatingException, IOException {
+    public static List<String> exportSheet(RatingStore s, String rater, Path file) throws RatingException, IOException {
         Path parent = file.toAbsolutePath().getParent();
         if (parent != null) {
             Files.createDirectories(parent);
@@ -45,7 +45,7 @@ public final class RatingFiles {
     }
 
     /** Reads a filled sheet back (every row checked; nothing stored if any row is bad); returns the summary. */
-    public static String importSheet(SqliteRatingStore s, String rater, Path file) throws RatingException, IOException {
+    public static String importSheet(RatingStore s, String rater, Path file) throws RatingException, IOException {
         String text = Utf8Text.read(file);
         RatingSheets.Imported r = RatingSheets.importSheet(s, rater, file.getFileName().toString(), text);
         return "Read " + r.rowsRead() + " rows: " + r.storedNewOrChanged() + " ratings stored (new or changed), "
@@ -53,7 +53,7 @@ public final class RatingFiles {
     }
 
     /** Writes ratings.csv and final-scores.csv into {@code dir}; returns the summary (with a note on pending ones). */
-    public static List<String> exportScores(SqliteRatingStore s, Path dir) throws RatingException, IOException {
+    public static List<String> exportScores(RatingStore s, Path dir) throws RatingException, IOException {
         OwnerOnly.folder(dir);
         OwnerOnly.file(dir.resolve("ratings.csv"));
         OwnerOnly.file(dir.resolve("final-scores.csv"));

@@ -63,7 +63,7 @@ public final class RatingSheets {
     }
 
     /** Writes the rater's queue as a sheet; returns the number of rows. */
-    public static int export(SqliteRatingStore store, String raterId, Writer out) throws RatingException, IOException {
+    public static int export(RatingStore store, String raterId, Writer out) throws RatingException, IOException {
         ExamSource.Rubric rubric = store.rubric();
         Csv.writeRow(out, header(rubric));
         int n = 0;
@@ -82,7 +82,7 @@ public final class RatingSheets {
     }
 
     /** Checks the filled sheet of one rater and stores its ratings in one transaction, or stores nothing. */
-    public static Imported importSheet(SqliteRatingStore store, String raterId, String file, String text)
+    public static Imported importSheet(RatingStore store, String raterId, String file, String text)
             throws RatingException {
         List<Problem> problems = new ArrayList<>();
         List<Csv.Row> rows;

@@ -11,7 +11,7 @@ import org.inkgate.format.response.OpenedResponse;
 
 /**
  * The results store as its callers see it: exams, the roster, imported sittings, refusals, and the
- * rows exports need. The SQL lives behind this interface ({@link SqliteResultsStore}), so a server
+ * rows exports need. The SQL lives behind this interface ({@code store.sqlite.SqliteResultsStore}, opened by {@link Stores}), so a server
  * database can be added later without touching collection or exports.
  */
 public interface ResultsStore extends AutoCloseable {

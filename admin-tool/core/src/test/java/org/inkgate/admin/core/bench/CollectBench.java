@@ -13,7 +13,7 @@ import org.inkgate.admin.core.collection.Collector;
 import org.inkgate.admin.core.collection.Outcome;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.testutil.TestKeys;
 
@@ -78,7 +78,7 @@ public final class CollectBench {
             }
             long start = System.nanoTime();
             long imported;
-            try (ResultsStore store = SqliteResultsStore.open(db)) {
+            try (ResultsStore store = StoreFixture.of(db).results()) {
                 store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
                 List<Outcome> outcomes = new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                         Map.of(sitting.manifestSha256(), sitting.manifest()), threads)

@@ -9,8 +9,9 @@ import java.util.List;
 import java.util.Map;
 import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.RatingDesk;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.rating.InventedStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 /**
  * Bench command (not a test): per run a fresh store of invented responses; times the assignment
@@ -41,7 +42,7 @@ public final class RatingBench {
         for (int run = 0; run < runs; run++) {
             Path dir = Files.createDirectories(root.resolve("run" + run));
             Path db = InventedStore.make(dir, candidates, taskIds);
-            try (SqliteRatingStore s = SqliteRatingStore.open(db, InventedStore.EXAM)) {
+            try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM)) {
                 for (int r = 1; r <= raters; r++) {
                     s.addRater(String.format("R%02d", r), "Invented " + r, null);
                 }

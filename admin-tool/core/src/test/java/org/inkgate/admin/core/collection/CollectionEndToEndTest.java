@@ -12,7 +12,7 @@ import java.util.TreeMap;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.response.TaskResponse;
@@ -97,7 +97,7 @@ class CollectionEndToEndTest {
     @Test
     void collect_mixedSitting_storesExactlyTheGoodPackagesAndNamesEachProblem() throws Exception {
         Path db = dir.resolve("results-" + System.nanoTime() + ".db");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             store.registerRoster("test-exam", sitting.roster());
             List<Outcome> outcomes = collector(store).collect(Collector.packageFiles(List.of(packages)), o -> { });

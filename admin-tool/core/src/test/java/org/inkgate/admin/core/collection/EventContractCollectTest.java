@@ -13,7 +13,7 @@ import java.util.TreeMap;
 import java.util.function.UnaryOperator;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.EveryEventType;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.response.ProcessEvent;
@@ -104,7 +104,7 @@ class EventContractCollectTest {
         assertContains(messages.get("C005-task-event-without-task.inkresp"), "event 5 (text.insert): a task-level event without a task");
         messages.values().forEach(m -> assertContains(m, "keep the file and report it"));
 
-        try (ResultsStore store = SqliteResultsStore.open(dir.resolve("results.db"))) {
+        try (ResultsStore store = StoreFixture.of(dir.resolve("results.db")).results()) {
             // only C001's and C006's events are in the store; the refusals are recorded with their reason
             List<String> candidates = new ArrayList<>();
             store.forEachEvent("test-exam", e -> candidates.add(e.candidateNumber()));

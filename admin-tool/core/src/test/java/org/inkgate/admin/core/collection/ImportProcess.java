@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.testutil.TestKeys;
@@ -21,7 +21,7 @@ public final class ImportProcess {
         Path store = Path.of(args[0]);
         Path bundle = Path.of(args[1]);
         Path packages = Path.of(args[2]);
-        try (ResultsStore s = SqliteResultsStore.open(store);
+        try (ResultsStore s = StoreFixture.of(store).results();
                 OpenedBundle b = new BundleReader(TrustPolicy.trusting(Set.of(TestKeys.ownerFingerprint()))).open(bundle)) {
             s.registerBundle(b.manifest(), b.manifestSha256(), b.signerFingerprint());
             new Collector(s, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(), Map.of(b.manifestSha256(), b.manifest()), 1)

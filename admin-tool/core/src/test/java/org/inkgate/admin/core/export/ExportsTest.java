@@ -24,7 +24,7 @@ import org.inkgate.admin.core.csv.Csv;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.testutil.TestKeys;
 import org.junit.jupiter.api.BeforeAll;
@@ -59,7 +59,7 @@ class ExportsTest {
                     packages.resolve(r.candidateNumber() + ".inkresp"));
         }
         db = dir.resolve("results.db");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             store.registerRoster("test-exam", sitting.roster());
             new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
@@ -70,7 +70,7 @@ class ExportsTest {
     @Test
     void tidyCsv_readBackAsRfc4180_givesOneRowPerResponseWithTheStoredValues() throws Exception {
         Path out = dir.resolve("csv");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             long[] rows = TidyCsvExport.write(store, "test-exam", out);
             assertEquals(24, rows[0], "12 candidates x 2 tasks");
             List<Rows.Response> stored = new ArrayList<>();
@@ -96,7 +96,7 @@ class ExportsTest {
     @Test
     void qtiResults_followTheResultsElementStructure() throws Exception {
         Path out = dir.resolve("qti");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             assertEquals(12, QtiResultsExport.write(store, "test-exam", out).files());
         }
         DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
@@ -141,7 +141,7 @@ class ExportsTest {
     @Test
     void xapiStatements_keepTheStatementRules() throws Exception {
         Path out = dir.resolve("statements.jsonl");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             assertEquals(12 * 300, XapiExport.write(store, "test-exam", out).statements());
         }
         ObjectMapper m = new ObjectMapper();

@@ -18,11 +18,11 @@ import javax.xml.parsers.DocumentBuilderFactory;
 import org.inkgate.admin.core.collection.Collector;
 import org.inkgate.admin.core.qti.QtiIdentifier;
 import org.inkgate.admin.core.rating.RatingDesk;
-import org.inkgate.admin.core.rating.SqliteRatingStore;
+import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.QtiSchemas;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.response.ResponseDocument;
@@ -88,7 +88,7 @@ class QtiResultsExportTest {
         Path forged = dir.resolve("forged.inkresp");
         client.write(FORGED, sitting.formOf("0002"), 99, 20, forged);
         db = dir.resolve("results.db");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             store.registerRoster("test-exam", sitting.roster());
             store.registerRubric("test-exam", sitting.exam().rubric());
@@ -99,7 +99,7 @@ class QtiResultsExportTest {
             store.importSitting(org.inkgate.admin.core.store.SittingRecord.of(opened, "forged-before-the-rule",
                     forged.toString()));
         }
-        try (SqliteRatingStore rating = SqliteRatingStore.open(db, "test-exam")) {
+        try (RatingStore rating = StoreFixture.of(db).rating("test-exam")) {
             rating.addRater("R01", "Invented rater one", null);
             rating.addRater("R02", "Invented rater two", null);
             rating.assign(2, 20261202L, true);
@@ -112,7 +112,7 @@ class QtiResultsExportTest {
                 }
             }
             out = dir.resolve("qti-results");
-            try (ResultsStore store = SqliteResultsStore.open(db)) {
+            try (ResultsStore store = StoreFixture.of(db).results()) {
                 written = QtiResultsExport.write(store, "test-exam", out,
                         new QtiResultsExport.Scoring(rating.rubric(), rating.scoresByResponse()));
             }
@@ -236,7 +236,7 @@ class QtiResultsExportTest {
     @Test
     void withoutRatings_theFilesStillValidateAndCarryNoOutcomes() throws Exception {
         Path plain = dir.resolve("plain");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             assertEquals(9, QtiResultsExport.write(store, "test-exam", plain).files());
             List<Rows.Response> rows = new ArrayList<>();
             store.forEachResponse("test-exam", rows::add);

@@ -16,7 +16,7 @@ import org.inkgate.admin.core.collection.Collector;
 import org.inkgate.admin.core.csv.Csv;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.store.StoreException;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.bundle.BundleManifest;
@@ -63,7 +63,7 @@ class QuestionnaireCsvTest {
             i++;
         }
         db = dir.resolve("results.db");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             store.registerRoster("test-exam", sitting.roster());
             new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
@@ -75,7 +75,7 @@ class QuestionnaireCsvTest {
     @Test
     void write_collectedStore_oneRowPerSittingAndItem_readBackWithTheBundlesScale() throws Exception {
         StringWriter out = new StringWriter();
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             assertEquals(6, QuestionnaireCsv.write(store, "test-exam", out));
         }
         List<Csv.Row> raw = Csv.parse(out.toString());
@@ -107,7 +107,7 @@ class QuestionnaireCsvTest {
                 m.instructionsFile(), m.tasks(), m.conditions(), m.forms(),
                 List.of(new QuestionnaireSpec(q.id(), q.title(), List.of(changed))), m.packs(), m.roster(), m.ownerKeys(),
                 m.invigilatorPin(), m.seal(), m.practice(), m.entries());
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             StoreException e = assertThrows(StoreException.class,
                     () -> store.registerBundle(other, "0".repeat(64), TestKeys.ownerFingerprint()));
             assertTrue(e.getMessage().contains("differs from the item of that id"), e.getMessage());

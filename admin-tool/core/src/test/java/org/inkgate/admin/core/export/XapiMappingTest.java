@@ -17,7 +17,7 @@ import org.inkgate.admin.core.collection.Collector;
 import org.inkgate.admin.core.collection.Outcome;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.EveryEventType;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.response.EventType;
@@ -98,7 +98,7 @@ class XapiMappingTest {
         new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic())
                 .write(d, EveryEventType.log(d), packages.resolve("C001.inkresp"));
         Path out = dir.resolve("statements.jsonl");
-        try (ResultsStore store = SqliteResultsStore.open(dir.resolve("results.db"))) {
+        try (ResultsStore store = StoreFixture.of(dir.resolve("results.db")).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             List<Outcome> outcomes = new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                     Map.of(sitting.manifestSha256(), sitting.manifest()), 1).collect(List.of(packages.resolve("C001.inkresp")), o -> { });

@@ -15,7 +15,7 @@ import java.util.TreeMap;
 import org.inkgate.admin.core.collection.Collector;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.response.EventType;
 import org.inkgate.format.testutil.TestKeys;
@@ -44,7 +44,7 @@ class XapiOptionsTest {
                     packages.resolve(r.candidateNumber() + ".inkresp"));
         }
         db = dir.resolve("results.db");
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                     Map.of(sitting.manifestSha256(), sitting.manifest()), 2).collect(Collector.packageFiles(List.of(packages)), o -> { });
@@ -52,7 +52,7 @@ class XapiOptionsTest {
     }
 
     private XapiExport.Written write(Path file, XapiExport.Options options) throws Exception {
-        try (ResultsStore store = SqliteResultsStore.open(db)) {
+        try (ResultsStore store = StoreFixture.of(db).results()) {
             return XapiExport.write(store, "test-exam", file, options);
         }
     }

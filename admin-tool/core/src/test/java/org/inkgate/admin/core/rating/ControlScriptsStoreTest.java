@@ -3,6 +3,7 @@ package org.inkgate.admin.core.rating;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 import java.nio.file.Path;
 import java.time.Clock;
@@ -24,11 +25,11 @@ class ControlScriptsStoreTest {
     @Test
     void mark_unknownOrOutOfRange_refused_andMixBeforeAssign_refusedWithWhatToDo() throws Exception {
         Path db = InventedStore.make(dir, 6, List.of("t1"));
-        try (SqliteRatingStore s = SqliteRatingStore.open(db, InventedStore.EXAM, CLOCK, new BlindIds())) {
+        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
             for (int i = 1; i <= 3; i++) {
                 s.addRater("R0" + i, "Invented rater " + i, null);
             }
-            SqliteControlScripts controls = new SqliteControlScripts(s);
+            ControlScripts controls = s;
             RatingException unknown = assertThrows(RatingException.class, () -> controls.markControl("C9999", "t1",
                     Map.of("content", 5, "language", 5), "invented meeting"));
             assertTrue(unknown.getMessage().contains("no response of candidate C9999 to task t1"), unknown.getMessage());

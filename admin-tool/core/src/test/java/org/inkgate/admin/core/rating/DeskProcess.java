@@ -2,6 +2,7 @@ package org.inkgate.admin.core.rating;
 
 import java.nio.file.Path;
 import java.util.Map;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 /**
  * A rater's session in its own process, for {@link KilledDeskTest}: saves a draft of the first
@@ -14,7 +15,7 @@ public final class DeskProcess {
     }
 
     public static void main(String[] args) throws Exception {
-        SqliteRatingStore s = SqliteRatingStore.open(Path.of(args[0]), InventedStore.EXAM);
+        RatingStore s = StoreFixture.of(Path.of(args[0])).rating(InventedStore.EXAM);
         var queue = s.queue(args[1]);
         s.saveDraft(args[1], queue.get(0).blindId(), new RatingDesk.RatingSheet(Map.of("content", 4), "typed before the kill"));
         s.submit(args[1], queue.get(1).blindId(), new RatingDesk.RatingSheet(Map.of("content", 7, "language", 6), ""));

@@ -7,13 +7,14 @@ import java.sql.PreparedStatement;
 import java.sql.Statement;
 import java.util.List;
 import org.inkgate.admin.core.source.ExamSource;
-import org.inkgate.admin.core.store.SqliteResultsStore;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 /**
  * A results store holding an invented exam ("invented-river-exam"): candidates C0000.. with one
  * sitting each, every task answered, conditions alternating by candidate, and a two-criterion rubric
  * (1-9, bands 1-3, 4-6, 7-9). Rows are written with plain SQL so the rating tests do not depend on
- * bundles and packages; the schema is the real one (SqliteResultsStore.open migrates it).
+ * bundles and packages; the schema is the real one (opening the results store migrates it).
  */
 public final class InventedStore {
 
@@ -31,7 +32,7 @@ public final class InventedStore {
 
     public static Path make(Path dir, int candidates, List<String> tasks) throws Exception {
         Path file = dir.resolve("results.db");
-        try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
+        try (ResultsStore store = StoreFixture.of(file).results()) {
             try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file); Statement s = c.createStatement()) {
                 c.setAutoCommit(false);
                 s.execute("INSERT INTO exams VALUES ('" + EXAM + "', 'Invented river exam', 'en-GB', 0)");

@@ -2,6 +2,7 @@ package org.inkgate.admin.core.rating;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 import java.io.BufferedReader;
 import java.io.InputStreamReader;
@@ -25,15 +26,8 @@ class KilledDeskTest {
     @Test
     void saveDraftAndSubmit_processKilledWithoutClosing_bothSurviveAndTheQueueResumes() throws Exception {
         Path db = InventedStore.make(dir, 6, List.of("t1"));
-        try (SqliteRatingStore s = SqliteRatingStore.open(db, InventedStore.EXAM);
-                var st = s.connection().createStatement()) {
-            // a kill alone does not need FULL (the OS keeps what was written); a power cut does: check the setting
-            try (var rs = st.executeQuery("PRAGMA synchronous")) {
-                assertEquals(2, rs.getInt(1), "FULL is 2 (SQLite documentation, PRAGMA synchronous)");
-            }
-            try (var rs = st.executeQuery("PRAGMA journal_mode")) {
-                assertEquals("wal", rs.getString(1));
-            }
+        // the store's durability settings (synchronous FULL, WAL) are checked in store.sqlite.SqliteDurabilityTest
+        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM)) {
             s.addRater("R01", "Invented one", null);
             s.addRater("R02", "Invented two", null);
             s.assign(2, 3L, false);
@@ -52,7 +46,7 @@ class KilledDeskTest {
             assertTrue(p.waitFor(30, TimeUnit.SECONDS));
         }
         String[] ids = line.split(" ");
-        try (SqliteRatingStore s = SqliteRatingStore.open(db, InventedStore.EXAM)) {
+        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM)) {
             assertEquals(new RatingDesk.RatingSheet(Map.of("content", 4), "typed before the kill"),
                     s.sheet("R01", ids[1]).orElseThrow());
             assertEquals(Map.of("content", 7, "language", 6), s.submitted("R01", ids[2]).orElseThrow().scores());

@@ -3,6 +3,7 @@ package org.inkgate.admin.core.rating;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 import java.io.StringWriter;
 import java.nio.file.Path;
@@ -18,14 +19,14 @@ class RatingSheetsTest {
     @TempDir
     Path dir;
 
-    private SqliteRatingStore store;
+    private RatingStore store;
     private List<RatingDesk.QueueItem> queue;
     private String otherRatersId;
 
     @BeforeEach
     void assignAnInventedExam() throws Exception {
         Path db = InventedStore.make(dir, 8, List.of("t1", "t2"));
-        store = SqliteRatingStore.open(db, InventedStore.EXAM);
+        store = StoreFixture.of(db).rating(InventedStore.EXAM);
         for (String r : List.of("R01", "R02", "R03")) {
             store.addRater(r, "Invented " + r, null);
         }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 import java.nio.file.Path;
 import java.sql.DriverManager;
@@ -30,7 +31,7 @@ class SettledResponseTest {
     @Test
     void resolvedBeforeTheAdjudicatorRated_leavesTheQueue_andDeskAndSheetRatingsAreRefused() throws Exception {
         Path db = InventedStore.make(dir, 1, List.of("t1"));
-        try (SqliteRatingStore s = SqliteRatingStore.open(db, InventedStore.EXAM, CLOCK, new BlindIds())) {
+        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
             for (int i = 1; i <= 3; i++) {
                 s.addRater("R0" + i, "Invented rater " + i, null);
             }
@@ -39,7 +40,7 @@ class SettledResponseTest {
             List<String[]> firstTwo = ratings(db);
             s.submit(firstTwo.get(0)[1], firstTwo.get(0)[0], sheet(2, 5));
             s.submit(firstTwo.get(1)[1], firstTwo.get(1)[0], sheet(8, 5));
-            SqliteRatingStore.Flag flag = s.flags().get(0);
+            RatingStore.Flag flag = s.flags().get(0);
             String third = flag.adjudicator();
             String blind = flag.adjudicatorBlindId();
             assertEquals(1, s.queue(third).size(), "the adjudication waits in the third rater's queue");
@@ -71,13 +72,13 @@ class SettledResponseTest {
             // returned blank, the same sheet imports with nothing to store
             assertEquals(0, RatingSheets.importSheet(s, third, "R03.csv", sheetBefore).storedNewOrChanged());
 
-            List<SqliteRatingStore.FinalRow> finals = new ArrayList<>();
+            List<RatingStore.FinalRow> finals = new ArrayList<>();
             s.forEachFinalScore(finals::add);
             assertTrue(finals.stream().allMatch(r -> r.method().equals("resolution-entry") && r.score() == 5.0), "" + finals);
         }
     }
 
-    private static String exportSheet(SqliteRatingStore s, String rater) throws Exception {
+    private static String exportSheet(RatingStore s, String rater) throws Exception {
         java.io.StringWriter w = new java.io.StringWriter();
         RatingSheets.export(s, rater, w);
         return w.toString();

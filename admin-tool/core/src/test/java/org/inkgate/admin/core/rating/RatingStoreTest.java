@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import org.inkgate.admin.core.testutil.StoreFixture;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -22,23 +23,23 @@ import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** The rating store over a real SQLite results store holding an invented exam. */
-class SqliteRatingStoreTest {
+/** The rating store, opened through the store factory, over a real results store holding an invented exam. */
+class RatingStoreTest {
 
     private static final Clock CLOCK = Clock.fixed(Instant.parse("2026-12-02T09:00:00Z"), ZoneOffset.UTC);
 
     @TempDir
     Path dir;
 
-    private SqliteRatingStore open(Path db) throws RatingException {
-        return SqliteRatingStore.open(db, InventedStore.EXAM, CLOCK, new BlindIds());
+    private RatingStore open(Path db) throws RatingException {
+        return StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds());
     }
 
     private static RatingDesk.RatingSheet sheet(int content, int language) {
         return new RatingDesk.RatingSheet(Map.of("content", content, "language", language), "");
     }
 
-    private static void addRaters(SqliteRatingStore s, int n) throws RatingException {
+    private static void addRaters(RatingStore s, int n) throws RatingException {
         for (int i = 1; i <= n; i++) {
             s.addRater(String.format("R%02d", i), "Invented rater " + i, null);
         }
@@ -67,9 +68,9 @@ class SqliteRatingStoreTest {
         Map<String, Set<String>> raterSetsA = new HashMap<>();
         Map<String, Set<String>> raterSetsB = new HashMap<>();
         for (Path db : List.of(a, b)) {
-            try (SqliteRatingStore s = open(db)) {
+            try (RatingStore s = open(db)) {
                 addRaters(s, 5);
-                SqliteRatingStore.AssignmentOutcome out = s.assign(2, 424242L, false);
+                RatingStore.AssignmentOutcome out = s.assign(2, 424242L, false);
                 assertTrue(out.wholeDesign().connected());
                 assertEquals(240, out.plan().placements().size());
             }
@@ -111,7 +112,7 @@ class SqliteRatingStoreTest {
             }
         }
         assertEquals(raterSetsA, raterSetsB);
-        try (SqliteRatingStore s = open(a)) {
+        try (RatingStore s = open(a)) {
             RatingException again = assertThrows(RatingException.class, () -> s.assign(2, 1L, false));
             assertTrue(again.getMessage().contains("already has its raters"), again.getMessage());
             List<RatingDesk.QueueItem> q = s.queue("R01");
@@ -126,20 +127,20 @@ class SqliteRatingStoreTest {
     @Test
     void assign_laterRunForLateResponses_balancesTotalsAndKeepsQueuesGrouped() throws Exception {
         Path db = InventedStore.make(dir, 30, List.of("t1", "t2"));
-        try (SqliteRatingStore s = open(db)) {
+        try (RatingStore s = open(db)) {
             addRaters(s, 3);
             s.assign(2, 1L, false);
             s.addRater("R04", "Invented late rater", null);
         }
         InventedStore.addCandidates(db, 30, 10, List.of("t1", "t2"));
-        try (SqliteRatingStore s = open(db)) {
+        try (RatingStore s = open(db)) {
             assertEquals(20, s.unassignedResponses().size());
             s.assign(2, 2L, false);
             // by hand from the water-filling rule: 40 earlier ratings each for R01-R03, 40 new ratings of 20 responses.
             // R04 takes each new response at most once (20); the level where R01-R03 cover the other 20 is 47
             // (3 x 6 = 18 < 20 at 46, 3 x 7 = 21 at 47): totals 46 or 47 for R01-R03, 20 for R04
             Map<String, Integer> totals = new java.util.TreeMap<>();
-            for (SqliteRatingStore.ProgressRow r : s.progressRows()) {
+            for (RatingStore.ProgressRow r : s.progressRows()) {
                 totals.merge(r.raterId(), r.total(), Integer::sum);
             }
             assertEquals(20, totals.get("R04"));
@@ -156,13 +157,13 @@ class SqliteRatingStoreTest {
     @Test
     void assign_unlinkableDesign_isRefusedAndNothingStored_unlessAllowed() throws Exception {
         Path db = InventedStore.make(dir, 3, List.of("t1"));
-        try (SqliteRatingStore s = open(db)) {
+        try (RatingStore s = open(db)) {
             addRaters(s, 7);
             RatingException e = assertThrows(RatingException.class, () -> s.assign(2, 9L, false));
             assertTrue(e.getMessage().contains("share no response") && e.getMessage().contains("Nothing was stored"),
                     e.getMessage());
             assertEquals(3, s.unassignedResponses().size(), "nothing stored");
-            SqliteRatingStore.AssignmentOutcome ok = s.assign(2, 9L, true);
+            RatingStore.AssignmentOutcome ok = s.assign(2, 9L, true);
             assertFalse(ok.wholeDesign().connected());
             assertEquals(0, s.unassignedResponses().size());
         }
@@ -172,13 +173,13 @@ class SqliteRatingStoreTest {
     void desk_draftSurvivesReopen_submitValidates_resubmissionKeepsHistoryWithWhoAndWhen() throws Exception {
         Path db = InventedStore.make(dir, 10, List.of("t1", "t2"));
         String id;
-        try (SqliteRatingStore s = open(db)) {
+        try (RatingStore s = open(db)) {
             addRaters(s, 3);
             s.assign(2, 11L, false);
             id = s.queue("R01").get(0).blindId();
             s.saveDraft("R01", id, new RatingDesk.RatingSheet(Map.of("content", 6), "half done"));
         }
-        try (SqliteRatingStore s = open(db)) {
+        try (RatingStore s = open(db)) {
             assertEquals(new RatingDesk.RatingSheet(Map.of("content", 6), "half done"), s.sheet("R01", id).orElseThrow());
             RatingException incomplete = assertThrows(RatingException.class,
                     () -> s.submit("R01", id, new RatingDesk.RatingSheet(Map.of("content", 6), "")));
@@ -193,7 +194,7 @@ class SqliteRatingStoreTest {
             assertEquals(sheet(6, 5), s.sheet("R01", id).orElseThrow(), "the draft is gone once submitted");
             s.submit("R01", id, sheet(6, 5));
             s.submit("R01", id, new RatingDesk.RatingSheet(Map.of("content", 7, "language", 5), "on second reading"));
-            List<SqliteRatingStore.HistoryEntry> h = s.history(id);
+            List<RatingStore.HistoryEntry> h = s.history(id);
             assertEquals(2, h.size(), "an identical resubmission adds nothing; a changed one is kept beside the first");
             assertEquals(Map.of("content", 6, "language", 5), h.get(0).scores());
             assertEquals(Map.of("content", 7, "language", 5), h.get(1).scores());
@@ -209,7 +210,7 @@ class SqliteRatingStoreTest {
     @Test
     void rule_disagreementFlagsAndGoesToAThirdRater_adjudicationSettlesByClosestPair() throws Exception {
         Path db = InventedStore.make(dir, 6, List.of("t1"));
-        try (SqliteRatingStore s = open(db)) {
+        try (RatingStore s = open(db)) {
             addRaters(s, 4);
             s.assign(2, 5L, false);
             // rule: a criterion more than 1 band apart (bands 1-3, 4-6, 7-9), or totals more than 4 apart
@@ -231,9 +232,9 @@ class SqliteRatingStoreTest {
                     s.submit(second[1], second[0], sheet(6, 5));
                 }
             }
-            List<SqliteRatingStore.Flag> flags = s.flags();
+            List<RatingStore.Flag> flags = s.flags();
             assertEquals(1, flags.size());
-            SqliteRatingStore.Flag f = flags.get(0);
+            RatingStore.Flag f = flags.get(0);
             assertTrue(f.reason().contains("content: scores 2 and 8 lie 2 bands apart"), f.reason());
             assertNotNull(f.adjudicator(), f.status());
             assertFalse(f.raters().contains(f.adjudicator()), "the adjudicator is not one of the first raters");
@@ -244,23 +245,23 @@ class SqliteRatingStoreTest {
             assertEquals(f.adjudicatorBlindId(), last.blindId());
             // adjudicator gives 7/6 (total 13); totals 7 (2+5), 13 (8+5), 13: closest pair is second and adjudicator
             s.submit(f.adjudicator(), last.blindId(), sheet(7, 6));
-            Map<String, SqliteRatingStore.FinalRow> finals = new HashMap<>();
-            List<SqliteRatingStore.FinalRow> all = new ArrayList<>();
+            Map<String, RatingStore.FinalRow> finals = new HashMap<>();
+            List<RatingStore.FinalRow> all = new ArrayList<>();
             s.forEachFinalScore(all::add);
             assertEquals(12, all.size(), "6 responses x 2 criteria");
             all.forEach(r -> finals.put(r.candidate() + "/" + r.criterion() + "/" + r.method(), r));
             long closest = all.stream().filter(r -> r.method().equals("closest-pair-mean")).count();
             assertEquals(2, closest);
-            SqliteRatingStore.FinalRow content = all.stream().filter(r -> r.method().equals("closest-pair-mean")
+            RatingStore.FinalRow content = all.stream().filter(r -> r.method().equals("closest-pair-mean")
                     && r.criterion().equals("content")).findFirst().orElseThrow();
             assertEquals(7.5, content.score(), 1e-12, "(8 + 7) / 2, by hand");
             assertTrue(content.rule().contains("more than 1 band"), content.rule());
-            SqliteRatingStore.FinalRow mean = all.stream().filter(r -> r.method().equals("mean-of-ratings")
+            RatingStore.FinalRow mean = all.stream().filter(r -> r.method().equals("mean-of-ratings")
                     && r.criterion().equals("content")).findFirst().orElseThrow();
             assertEquals(5.0, mean.score(), 1e-12, "(4 + 6) / 2, by hand");
             assertEquals(0, s.pendingResponses());
             assertEquals("settled (closest-pair-mean)", s.flags().get(0).status());
-            int flaggedRows = s.progressRows().stream().mapToInt(SqliteRatingStore.ProgressRow::flagged).sum();
+            int flaggedRows = s.progressRows().stream().mapToInt(RatingStore.ProgressRow::flagged).sum();
             assertEquals(3, flaggedRows, "two first raters and the adjudicator hold the flagged response");
             // a resolution entry overrides: recorded with who, and the method says so
             s.resolve(f.flagId(), "Invented panel lead", Map.of("content", 6, "language", 6), "agreed in discussion");
@@ -277,7 +278,7 @@ class SqliteRatingStoreTest {
     @Test
     void rule_noThirdRaterLeft_staysInTheQueueAndSaysSo() throws Exception {
         Path db = InventedStore.make(dir, 2, List.of("t1"));
-        try (SqliteRatingStore s = open(db)) {
+        try (RatingStore s = open(db)) {
             addRaters(s, 2);
             s.assign(2, 5L, false);
             for (List<String[]> raters : responses(db).values()) {
@@ -286,21 +287,21 @@ class SqliteRatingStoreTest {
             }
             assertEquals(0, s.flags().size(), "no rule yet: nothing flagged");
             assertEquals(2, s.setRule(new DiscrepancyRule(null, 3, DiscrepancyRule.AdjudicatedScore.ADJUDICATOR)));
-            SqliteRatingStore.Flag f = s.flags().get(0);
+            RatingStore.Flag f = s.flags().get(0);
             assertTrue(f.status().startsWith("no adjudicator available"), f.status());
             assertEquals(2, s.pendingResponses());
             s.addRater("R03", "Invented third", null);
             assertEquals(0, s.review(), "flags are raised once");
-            List<SqliteRatingStore.Flag> now = s.flags();
-            assertEquals(List.of("R03", "R03"), now.stream().map(SqliteRatingStore.Flag::adjudicator).toList(),
+            List<RatingStore.Flag> now = s.flags();
+            assertEquals(List.of("R03", "R03"), now.stream().map(RatingStore.Flag::adjudicator).toList(),
                     "a rater added later takes the waiting adjudications when the rule runs again");
             // ADJUDICATOR method: the third rater's scores become the final score
             s.submit("R03", now.get(0).adjudicatorBlindId(), sheet(4, 6));
-            List<SqliteRatingStore.FinalRow> finals = new ArrayList<>();
+            List<RatingStore.FinalRow> finals = new ArrayList<>();
             s.forEachFinalScore(finals::add);
-            assertEquals(List.of("adjudicator", "adjudicator"), finals.stream().map(SqliteRatingStore.FinalRow::method)
+            assertEquals(List.of("adjudicator", "adjudicator"), finals.stream().map(RatingStore.FinalRow::method)
                     .toList());
-            assertEquals(List.of(4.0, 6.0), finals.stream().map(SqliteRatingStore.FinalRow::score).toList());
+            assertEquals(List.of(4.0, 6.0), finals.stream().map(RatingStore.FinalRow::score).toList());
             assertEquals(1, s.pendingResponses());
         }
     }
@@ -326,7 +327,7 @@ class SqliteRatingStoreTest {
         // pick R03 about half the time)
         for (int seed = 1; seed <= 8; seed++) {
             Path db = InventedStore.make(Files.createDirectories(dir.resolve("s" + seed)), 2, List.of("t1", "t2"));
-            try (SqliteRatingStore s = open(db)) {
+            try (RatingStore s = open(db)) {
                 addRaters(s, 4);
             }
             try (var c = DriverManager.getConnection("jdbc:sqlite:" + db); var st = c.createStatement()) {
@@ -339,7 +340,7 @@ class SqliteRatingStoreTest {
                             + ", 't', 'TEST-000" + (n++) + "', 'rating', " + r[3] + ")");
                 }
             }
-            try (SqliteRatingStore s = open(db)) {
+            try (RatingStore s = open(db)) {
                 s.setRule(new DiscrepancyRule(1, null, DiscrepancyRule.AdjudicatedScore.ADJUDICATOR));
                 s.submit("R01", "TEST-0000", sheet(1, 1));
                 s.submit("R02", "TEST-0001", sheet(9, 9));
@@ -367,8 +368,8 @@ class SqliteRatingStoreTest {
         RatingException none = assertThrows(RatingException.class, () -> open(dir.resolve("nope.db")));
         assertTrue(none.getMessage().contains("no results store at"), none.getMessage());
         Path db = InventedStore.make(dir, 1, List.of("t1"));
-        RatingException exam = assertThrows(RatingException.class, () -> SqliteRatingStore.open(db, "other"));
+        RatingException exam = assertThrows(RatingException.class, () -> StoreFixture.of(db).rating("other"));
         assertTrue(exam.getMessage().contains("holds no exam other"), exam.getMessage());
-        assertNotEquals(null, SqliteRatingStore.exams(db));
+        assertNotEquals(null, org.inkgate.admin.core.store.Stores.exams(org.inkgate.admin.core.store.StoreLocation.file(db)));
     }
 }

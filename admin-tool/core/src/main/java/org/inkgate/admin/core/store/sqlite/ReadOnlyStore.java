@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store;
+package org.inkgate.admin.core.store.sqlite;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -14,19 +14,19 @@ import org.sqlite.SQLiteOpenMode;
  * filenames", {@code immutable=1}) it reads the database file alone. That is only right when no
  * write-ahead log holds commits not yet in the file: such a store is refused with what to do.
  */
-public final class ReadOnlyStore {
+final class ReadOnlyStore {
 
     private ReadOnlyStore() {
     }
 
     /** True when the store file and its folder can both be written, so the normal open works. */
-    public static boolean writable(Path file) {
+    static boolean writable(Path file) {
         Path folder = file.toAbsolutePath().getParent();
         return Files.isWritable(file) && folder != null && Files.isWritable(folder);
     }
 
     /** A read-only connection to the store on read-only media, refused with what to do when it cannot be read right. */
-    public static Connection connect(Path file) throws SQLException {
+    static Connection connect(Path file) throws SQLException {
         Path wal = file.resolveSibling(file.getFileName() + "-wal");
         try {
             if (Files.exists(wal) && Files.size(wal) > 0) {

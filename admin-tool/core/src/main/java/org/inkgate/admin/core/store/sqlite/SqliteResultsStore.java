@@ -1,9 +1,8 @@
-package org.inkgate.admin.core.store;
+package org.inkgate.admin.core.store.sqlite;
 
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
@@ -17,6 +16,11 @@ import java.util.Optional;
 import java.util.function.Consumer;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.Rows;
+import org.inkgate.admin.core.store.SittingRecord;
+import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.core.store.sql.SqlSession;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.FormSlot;
 import org.inkgate.format.bundle.FormSpec;
@@ -33,14 +37,18 @@ import org.inkgate.format.response.TaskResponse;
 import org.inkgate.format.response.ToolUse;
 import org.inkgate.packs.policy.ResourcePolicy;
 import org.inkgate.packs.policy.Tool;
-import org.sqlite.SQLiteConfig;
 
 /**
  * The results store in one SQLite file: foreign keys on, write-ahead log, synchronous NORMAL, so
  * that a committed import survives a killed process and an interrupted one leaves no trace.
+ *
+ * <p>SQLite-only SQL left here, for the PostgreSQL port: {@code INSERT OR IGNORE} (there:
+ * {@code ON CONFLICT DO NOTHING}), {@code INSERT OR REPLACE} (there: {@code ON CONFLICT (key) DO
+ * UPDATE}) and {@code group_concat} (there: {@code string_agg}). Booleans are stored as 0/1 integers.
  */
 public final class SqliteResultsStore implements ResultsStore {
 
+    private final SqlSession<StoreException> db;
     private final Connection c;
     private final Path file;
     private final Map<String, Long> policyIds = new HashMap<>();
@@ -48,6 +56,9 @@ public final class SqliteResultsStore implements ResultsStore {
     private SqliteResultsStore(Connection c, Path file) {
         this.c = c;
         this.file = file;
+        // ids cached inside a rolled-back transaction no longer exist; a full disk and the like in plain words
+        this.db = new SqlSession<>(c, new SqlSession.Errors<>(StoreException.class, StoreException::new,
+                failure -> SqliteErrors.plain(file, failure)), policyIds::clear);
     }
 
     /** Opens (creating if needed) the store and brings its schema to the latest version. */
@@ -57,23 +68,15 @@ public final class SqliteResultsStore implements ResultsStore {
 
     /** Opens the store migrated to {@code version} only: for migration tests. */
     static SqliteResultsStore open(Path file, int version) throws StoreException {
+        Connection c = null;
         try {
             // created owner-only before SQLite opens it, so its -wal and -shm files are too
             org.inkgate.format.io.OwnerOnly.file(file);
-            SQLiteConfig config = new SQLiteConfig();
-            config.enforceForeignKeys(true);
-            config.setJournalMode(SQLiteConfig.JournalMode.WAL);
-            // NORMAL in WAL mode: a killed process never corrupts the store or keeps half a transaction
-            // (SQLite docs, "WAL mode" and PRAGMA synchronous); only a power cut may lose the last few
-            // commits, and a rerun of collect imports those packages again from their files. FULL
-            // costs an fsync per package, which the 1,000-package benchmark cannot afford.
-            config.setSynchronous(SQLiteConfig.SynchronousMode.NORMAL);
-            config.setCacheSize(-65536);
-            config.setBusyTimeout(10_000);
-            Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
+            c = SqliteFiles.connect(file, SqliteFiles.Durability.AFTER_CRASH);
             Migrations.migrate(c, version);
             return new SqliteResultsStore(c, file);
         } catch (SQLException | java.io.IOException e) {
+            SqliteFiles.closeQuietly(c);
             throw failure("cannot open the results store " + file, file, e);
         }
     }
@@ -100,7 +103,7 @@ public final class SqliteResultsStore implements ResultsStore {
 
     /** The failure in plain words when it is a full disk, read-only media and the like; else as SQLite says. */
     private static StoreException failure(String what, Path file, Exception e) {
-        String plain = StoreErrors.plain(file, e);
+        String plain = SqliteErrors.plain(file, e);
         return new StoreException(what + ": " + (plain != null ? plain : e.getMessage()), e);
     }
 
@@ -108,55 +111,19 @@ public final class SqliteResultsStore implements ResultsStore {
         return c;
     }
 
-    private interface Work<T> {
-        T run() throws SQLException;
+    /** Runs the work in one transaction: all of it is kept, or none; rerun whole when the store is busy. */
+    private <T> T tx(String what, SqlSession.Work<T> work) throws StoreException {
+        return db.transaction(what, work);
     }
 
-    /** Runs the work in one transaction: all of it is kept, or none. */
-    private <T> T tx(String what, Work<T> work) throws StoreException {
-        try {
-            c.setAutoCommit(false);
-            boolean failed = false;
-            try {
-                T result = work.run();
-                c.commit();
-                return result;
-            } catch (SQLException | RuntimeException e) {
-                failed = true;
-                try {
-                    c.rollback();
-                } catch (SQLException alreadyRolledBack) {
-                    // SQLite rolls back by itself on a full disk or an I/O error (sqlite.org, "Response To
-                    // Errors Within A Transaction"); its "no transaction is active" must not hide the cause
-                    e.addSuppressed(alreadyRolledBack);
-                }
-                policyIds.clear(); // ids cached inside the rolled-back transaction no longer exist
-                throw e;
-            } finally {
-                try {
-                    c.setAutoCommit(true); // the driver commits here if it still thinks a transaction is open
-                } catch (SQLException noTransaction) {
-                    if (!failed) {
-                        throw noTransaction;
-                    } // after a failure SQLite may have ended the transaction itself: the cause is already thrown
-                }
-            }
-        } catch (SQLException e) {
-            throw failure(what + " failed; nothing of it was stored", file, e);
-        }
-    }
-
-    private <T> T read(String what, Work<T> work) throws StoreException {
-        try {
-            return work.run();
-        } catch (SQLException e) {
-            throw failure(what + " failed", file, e);
-        }
+    private <T> T read(String what, SqlSession.Work<T> work) throws StoreException {
+        return db.read(what, work);
     }
 
     @Override
     public void registerBundle(BundleManifest m, String manifestSha256, String signerFingerprint) throws StoreException {
         tx("registering bundle of " + m.examId(), () -> {
+            // INSERT OR IGNORE is SQLite's; PostgreSQL writes INSERT ... ON CONFLICT DO NOTHING
             update("INSERT OR IGNORE INTO exams(exam_id, title, language, practice) VALUES (?,?,?,?)",
                     m.examId(), m.title(), m.language(), m.practice() ? 1 : 0);
             update("INSERT OR IGNORE INTO bundles(manifest_sha256, exam_id, signer_fingerprint, registered_at) VALUES (?,?,?,?)",
@@ -336,7 +303,7 @@ public final class SqliteResultsStore implements ResultsStore {
                     + " exam_id, bundle_manifest_sha256, candidate_number, form_id, seat, client_version,"
                     + " installation_fingerprint, started_at, submitted_at, source_file, imported_at)"
                     + " VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?)", Statement.RETURN_GENERATED_KEYS)) {
-                Sql.bind(ps, opened.packageSha256(), d.packageId(), contentSha256, d.examId(), d.bundleManifestSha256(),
+                SqlSession.bind(ps, opened.packageSha256(), d.packageId(), contentSha256, d.examId(), d.bundleManifestSha256(),
                         d.candidateNumber(), d.formId(), d.seat(), d.clientVersion(), opened.installationFingerprint(),
                         str(d.startedAt()), str(d.submittedAt()), sourceFile, Instant.now().toString());
                 ps.executeUpdate();
@@ -584,11 +551,7 @@ public final class SqliteResultsStore implements ResultsStore {
 
     @Override
     public void close() throws StoreException {
-        try {
-            c.close();
-        } catch (SQLException e) {
-            throw new StoreException("closing the results store failed: " + e.getMessage(), e);
-        }
+        db.close();
     }
 
     // --- small JDBC helpers ---
@@ -606,12 +569,12 @@ public final class SqliteResultsStore implements ResultsStore {
     }
 
     private int update(String sql, Object... args) throws SQLException {
-        return Sql.update(c, sql, args);
+        return db.update(sql, args);
     }
 
     private Optional<Object[]> first(String sql, int columns, Object... args) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement(sql)) {
-            Sql.bind(ps, args);
+            SqlSession.bind(ps, args);
             try (ResultSet rs = ps.executeQuery()) {
                 if (!rs.next()) {
                     return Optional.empty();
@@ -625,11 +588,11 @@ public final class SqliteResultsStore implements ResultsStore {
         }
     }
 
-    private <T> List<T> list(String sql, Sql.RowMapper<T> mapper, Object... args) throws SQLException {
-        return Sql.list(c, sql, mapper, args);
+    private <T> List<T> list(String sql, SqlSession.RowMapper<T> mapper, Object... args) throws SQLException {
+        return db.list(sql, mapper, args);
     }
 
-    private void each(String sql, Sql.RowSink sink, Object... args) throws SQLException {
-        Sql.each(c, sql, sink, args);
+    private void each(String sql, SqlSession.RowSink sink, Object... args) throws SQLException {
+        db.each(sql, sink, args);
     }
 }

@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store;
+package org.inkgate.admin.core.store.sqlite;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -12,6 +12,8 @@ import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.Set;
 import java.util.TreeSet;
+import org.inkgate.admin.core.store.Rows;
+import org.inkgate.admin.core.store.StoreException;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

@@ -1,9 +1,10 @@
-package org.inkgate.admin.core.store;
+package org.inkgate.admin.core.store.sqlite;
 
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.List;
+import org.inkgate.admin.core.store.sql.SchemaVersion;
 
 /**
  * The results store's schema, as forward migrations: migration n takes a store at version n-1 to
@@ -410,10 +411,7 @@ public final class Migrations {
     /** Brings the store up to {@code target}, one transaction per migration. */
     public static void migrate(Connection c, int target) throws SQLException {
         int current = version(c);
-        if (current > latest()) {
-            throw new SQLException("the results store is at schema version " + current + ", newer than this program ("
-                    + latest() + "); use a newer inkgate-admin. Nothing was changed");
-        }
+        SchemaVersion.refuseNewer(current, latest());
         boolean auto = c.getAutoCommit();
         c.setAutoCommit(false);
         try {

@@ -1,0 +1,66 @@
+package org.inkgate.admin.core.store;
+
+import java.time.Clock;
+import java.util.List;
+import org.inkgate.admin.core.rating.BlindIds;
+import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.store.sqlite.SqliteRatingStore;
+import org.inkgate.admin.core.store.sqlite.SqliteResultsStore;
+
+/**
+ * The one door to storage: opens the stores at a {@link StoreLocation} as core interfaces. The
+ * command line and the admin window open every store here and never name an implementation, so a
+ * second kind of store (PostgreSQL) is one more case in each method.
+ */
+public final class Stores {
+
+    private Stores() {
+    }
+
+    /** Opens the results store, creating it when the file does not exist yet (collect), and migrates its schema. */
+    public static ResultsStore openResults(StoreLocation location) throws StoreException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteResultsStore.open(f.path());
+        };
+    }
+
+    /**
+     * Opens an existing results store for the steps that only read it (missing, export, analyse),
+     * also where nothing may be written (a SQLite store on read-only media).
+     */
+    public static ResultsStore openResultsForReading(StoreLocation location) throws StoreException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteResultsStore.openReadOnly(f.path());
+        };
+    }
+
+    /** Opens rating of one exam in an existing results store. */
+    public static RatingStore openRating(StoreLocation location, String examId) throws RatingException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteRatingStore.open(f.path(), examId);
+        };
+    }
+
+    /** As {@link #openRating(StoreLocation, String)} with a given clock and blind ids (tests, reproducible demos). */
+    public static RatingStore openRating(StoreLocation location, String examId, Clock clock, BlindIds ids)
+            throws RatingException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteRatingStore.open(f.path(), examId, clock, ids);
+        };
+    }
+
+    /** The exams in an existing store, to choose one when it holds several. */
+    public static List<String> exams(StoreLocation location) throws RatingException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteRatingStore.exams(f.path());
+        };
+    }
+
+    /** Whether the store holds a rubric for the exam (rating can be opened); false when there is no store. */
+    public static boolean hasRubric(StoreLocation location, String examId) throws RatingException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteRatingStore.hasRubric(f.path(), examId);
+        };
+    }
+}

@@ -1,0 +1,199 @@
+package org.inkgate.admin.core.store.sqlite;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.type.TypeReference;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.sql.SQLException;
+import java.time.Clock;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.TreeMap;
+import org.inkgate.admin.core.rating.BlindIds;
+import org.inkgate.admin.core.rating.RaterRegister;
+import org.inkgate.admin.core.rating.RatingDesk;
+import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.source.ExamSource;
+import org.inkgate.admin.core.store.sql.SqlSession;
+
+/**
+ * What the parts of one open rating store share: the session on the store, the exam with its
+ * rubric, the clock and blind ids, and the look-ups several concerns make (an assignment behind a
+ * blind id, a sheet's problems, a response's settlement, the end of a rater's queue). Callers hold
+ * the store's lock ({@link SqliteRatingStore} serialises every call).
+ */
+final class RatingSession {
+
+    private static final ObjectMapper JSON = new ObjectMapper();
+    private static final TypeReference<TreeMap<String, Integer>> SCORES = new TypeReference<>() {
+    };
+
+    /** True for an assignment (alias a) whose response the test owner settled by a resolution entry. */
+    static final String SETTLED = "EXISTS(SELECT 1 FROM rating_flags sf JOIN resolution_entries se"
+            + " ON se.flag_id = sf.flag_id WHERE sf.sitting_id = a.sitting_id AND sf.task_id = a.task_id)";
+    static final String SUBMITTED = "EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)";
+    /**
+     * True for a real rating assignment (alias a): not a control script mixed into a queue. Control
+     * ratings measure the rater; they never enter a candidate's flags, final scores or exports.
+     */
+    static final String NOT_CONTROL = "a.assignment_id NOT IN (SELECT assignment_id FROM control_assignments)";
+    /** Items a queue shows: a settled response leaves it, unless the rater had already rated it (kept as done). */
+    static final String IN_QUEUE = "(NOT " + SETTLED + " OR " + SUBMITTED + ")";
+
+    final SqlSession<RatingException> db;
+    final String examId;
+    final ExamSource.Rubric rubric;
+    final Clock clock;
+    final BlindIds blindIds;
+    /** Queue ends remembered inside one transaction that assigns adjudicators; forgotten at its edges. */
+    final QueueTails tails;
+
+    RatingSession(SqlSession<RatingException> db, String examId, ExamSource.Rubric rubric, Clock clock,
+            BlindIds blindIds) {
+        this.db = db;
+        this.examId = examId;
+        this.rubric = rubric;
+        this.clock = clock;
+        this.blindIds = blindIds;
+        this.tails = new QueueTails(this);
+    }
+
+    /** Runs {@code work} in one transaction of the store; rerun whole when the store is busy. */
+    <T> T tx(String what, SqlSession.Work<T> work) throws RatingException {
+        return db.transaction(what, () -> {
+            tails.forget();
+            try {
+                return work.run();
+            } finally {
+                tails.forget();
+            }
+        });
+    }
+
+    <T> T read(String what, SqlSession.Work<T> work) throws RatingException {
+        return db.read(what, work);
+    }
+
+    String now() {
+        return clock.instant().toString();
+    }
+
+    // ---------------------------------------------------------------- assignments behind blind ids
+
+    /** One assignment as the store knows it (not shown to raters beyond blind id, task and kind). */
+    record Assignment(long id, long sittingId, String taskId, String raterId, RatingDesk.Kind kind) {
+    }
+
+    /** The assignment behind a blind id of this exam; with a rater, it must be in that rater's queue. */
+    Assignment assignment(String raterId, String blindId) throws RatingException {
+        List<Assignment> found = read("looking up " + blindId, () -> db.list("SELECT a.assignment_id, a.sitting_id,"
+                + " a.task_id, a.rater_id, a.kind FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE a.blind_id=? AND s.exam_id=?", rs -> new Assignment(rs.getLong(1), rs.getLong(2),
+                rs.getString(3), rs.getString(4), kind(rs.getString(5))), blindId, examId));
+        if (found.isEmpty()) {
+            throw new RatingException("unknown response id " + blindId + "; check it against the rater's queue");
+        }
+        Assignment a = found.get(0);
+        if (raterId != null && !a.raterId().equals(raterId)) {
+            throw new RatingException("response " + blindId + " is not in rater " + raterId + "'s queue");
+        }
+        return a;
+    }
+
+    static RatingDesk.Kind kind(String stored) {
+        return "adjudication".equals(stored) ? RatingDesk.Kind.ADJUDICATION : RatingDesk.Kind.RATING;
+    }
+
+    /** A rater's latest submission. */
+    record Submission(Map<String, Integer> scores, String comment) {
+    }
+
+    Optional<Submission> latest(long assignment) throws SQLException {
+        return db.first("SELECT scores_json, comment FROM rating_submissions WHERE assignment_id=? ORDER BY"
+                + " submission_id DESC LIMIT 1", rs -> new Submission(parse(rs.getString(1)), rs.getString(2)), assignment);
+    }
+
+    // ---------------------------------------------------------------- raters and settled responses
+
+    List<RaterRegister.RaterEntry> raterEntries() throws SQLException {
+        return db.list("SELECT rater_id, label, capacity FROM raters ORDER BY rater_id",
+                rs -> new RaterRegister.RaterEntry(rs.getString(1), rs.getString(2), SqlSession.intOrNull(rs, 3)));
+    }
+
+    void requireRater(String raterId) throws RatingException {
+        if (!read("looking up rater", () -> db.exists("SELECT 1 FROM raters WHERE rater_id=?", raterId))) {
+            throw new RatingException("no rater " + raterId + "; the raters are "
+                    + read("listing raters", this::raterEntries).stream().map(RaterRegister.RaterEntry::id).toList());
+        }
+    }
+
+    Optional<String> settledAt(String blindId) throws RatingException {
+        return read("looking up " + blindId, () -> db.list("SELECT MAX(se.resolved_at) FROM rating_assignments a"
+                + " JOIN sittings s ON s.sitting_id = a.sitting_id JOIN rating_flags sf ON sf.sitting_id = a.sitting_id"
+                + " AND sf.task_id = a.task_id JOIN resolution_entries se ON se.flag_id = sf.flag_id"
+                + " WHERE a.blind_id=? AND s.exam_id=?", rs -> rs.getString(1), blindId, examId))
+                .stream().filter(Objects::nonNull).findFirst();
+    }
+
+    void refuseIfSettled(String blindId) throws RatingException {
+        Optional<String> at = settledAt(blindId);
+        if (at.isPresent()) {
+            throw new RatingException("response " + blindId + " was settled by the test owner's resolution entry ("
+                    + at.get() + "); its final score is decided, so this rating is not taken and nothing was stored."
+                    + " Go on with the next response in the queue");
+        }
+    }
+
+    /** What is wrong with a sheet: unknown criteria, scores out of range, and (if complete) missing criteria. */
+    List<String> check(RatingDesk.RatingSheet sheet, boolean complete) {
+        List<String> problems = new ArrayList<>();
+        Map<String, ExamSource.Criterion> byId = new LinkedHashMap<>();
+        rubric.criteria().forEach(cr -> byId.put(cr.id(), cr));
+        for (Map.Entry<String, Integer> e : new TreeMap<>(sheet.scores()).entrySet()) {
+            ExamSource.Criterion cr = byId.get(e.getKey());
+            if (cr == null) {
+                problems.add("'" + e.getKey() + "' is not a criterion of the rubric " + byId.keySet());
+            } else if (e.getValue() == null || e.getValue() < cr.minScore() || e.getValue() > cr.maxScore()) {
+                problems.add(cr.id() + " score " + e.getValue() + " is outside " + cr.minScore() + "-" + cr.maxScore());
+            }
+        }
+        if (complete) {
+            for (String id : byId.keySet()) {
+                if (!sheet.scores().containsKey(id)) {
+                    problems.add(id + " has no score; score every criterion before submitting");
+                }
+            }
+        }
+        return problems;
+    }
+
+    /** Assigned items per rater in this exam. */
+    Map<String, Integer> workloads() throws SQLException {
+        Map<String, Integer> out = new HashMap<>();
+        db.each("SELECT a.rater_id, COUNT(*) FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
+                + " WHERE s.exam_id=? GROUP BY a.rater_id", rs -> out.put(rs.getString(1), rs.getInt(2)), examId);
+        return out;
+    }
+
+    // ---------------------------------------------------------------- scores as stored
+
+    static String json(Map<String, Integer> scores) {
+        try {
+            return JSON.writeValueAsString(new TreeMap<>(scores));
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    static Map<String, Integer> parse(String json) throws SQLException {
+        try {
+            return JSON.readValue(json, SCORES);
+        } catch (JsonProcessingException e) {
+            throw new SQLException("stored scores are not JSON; the store may be damaged: " + e.getMessage(), e);
+        }
+    }
+}

@@ -1,0 +1,59 @@
+package org.inkgate.admin.core.testutil;
+
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.List;
+import org.inkgate.admin.core.rating.BlindIds;
+import org.inkgate.admin.core.rating.RatingException;
+import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.store.ResultsStore;
+import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.core.store.StoreLocation;
+import org.inkgate.admin.core.store.Stores;
+
+/**
+ * Where a test's store is and how the test opens it: every store test opens its stores here,
+ * through the same factory the programs use ({@link Stores}), never through an implementation.
+ * Today there is one kind (a SQLite file); a test written against this fixture can later be
+ * parameterised over {@link #kinds()} to run against every kind of store.
+ */
+public record StoreFixture(Kind kind, StoreLocation location) {
+
+    /** The kinds of store the tests can run against. */
+    public enum Kind {
+        /** A SQLite file in the test's temporary folder. */
+        SQLITE
+    }
+
+    /** Every kind, for parameterised tests ({@code @MethodSource}). */
+    public static List<Kind> kinds() {
+        return List.of(Kind.values());
+    }
+
+    /** A new, empty store of the given kind for a test whose temporary folder is {@code dir}. */
+    public static StoreFixture create(Kind kind, Path dir) {
+        return switch (kind) {
+            case SQLITE -> of(dir.resolve(ResultsStore.DEFAULT_FILE_NAME));
+        };
+    }
+
+    /** The SQLite store in {@code file} (made by the real collect or by a test's own builder). */
+    public static StoreFixture of(Path file) {
+        return new StoreFixture(Kind.SQLITE, StoreLocation.file(file));
+    }
+
+    /** Opens the results store (created if new). */
+    public ResultsStore results() throws StoreException {
+        return Stores.openResults(location);
+    }
+
+    /** Opens rating of one exam. */
+    public RatingStore rating(String examId) throws RatingException {
+        return Stores.openRating(location, examId);
+    }
+
+    /** Opens rating of one exam with a fixed clock and blind ids, for tests that compare times or ids. */
+    public RatingStore rating(String examId, Clock clock, BlindIds ids) throws RatingException {
+        return Stores.openRating(location, examId, clock, ids);
+    }
+}
