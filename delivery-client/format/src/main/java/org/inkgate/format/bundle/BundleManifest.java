@@ -27,6 +27,9 @@ import java.util.Optional;
  * @param seal              how sealed entries are encrypted, or null for an unsealed bundle
  * @param practice          true for a practice bundle that may be sat without invigilator set-up
  * @param entries           every other entry of the bundle by name, with its digest
+ * @param design            the study design the exam declares, or null in bundles written before
+ *                          designs were recorded (the client does not need it; collect stores it
+ *                          for the exports)
  */
 public record BundleManifest(
         String format,
@@ -45,12 +48,24 @@ public record BundleManifest(
         PinHash invigilatorPin,
         SealSpec seal,
         boolean practice,
-        Map<String, EntryDigest> entries) {
+        Map<String, EntryDigest> entries,
+        StudyDesign design) {
 
     public static final String FORMAT = "inkgate-exam-bundle";
     /** The newest schema this build reads and the one it writes. */
     public static final int SCHEMA_VERSION = 1;
 
+    /** A manifest without a declared design (as written before designs were recorded). */
+    public BundleManifest(String format, int schemaVersion, String examId, String title, String language,
+            String instructionsFile, List<TaskSpec> tasks, List<ConditionSpec> conditions, List<FormSpec> forms,
+            List<QuestionnaireSpec> questionnaires, List<PackRef> packs, List<RosterEntry> roster,
+            OwnerKeys ownerKeys, PinHash invigilatorPin, SealSpec seal, boolean practice,
+            Map<String, EntryDigest> entries) {
+        this(format, schemaVersion, examId, title, language, instructionsFile, tasks, conditions, forms,
+                questionnaires, packs, roster, ownerKeys, invigilatorPin, seal, practice, entries, null);
+    }
+
+    @com.fasterxml.jackson.annotation.JsonCreator
     public BundleManifest {
         tasks = List.copyOf(Objects.requireNonNullElse(tasks, List.of()));
         conditions = List.copyOf(Objects.requireNonNullElse(conditions, List.of()));
@@ -77,6 +92,13 @@ public record BundleManifest(
         return questionnaires.stream().filter(q -> q.id().equals(questionnaireId)).findFirst();
     }
 
+    /** A copy declaring the given study design. */
+    public BundleManifest withDesign(StudyDesign newDesign) {
+        return new BundleManifest(format, schemaVersion, examId, title, language, instructionsFile, tasks,
+                conditions, forms, questionnaires, packs, roster, ownerKeys, invigilatorPin, seal, practice,
+                entries, newDesign);
+    }
+
     public boolean sealed() {
         return seal != null;
     }
@@ -85,13 +107,13 @@ public record BundleManifest(
     public BundleManifest withEntries(Map<String, EntryDigest> newEntries) {
         return new BundleManifest(format, schemaVersion, examId, title, language, instructionsFile, tasks,
                 conditions, forms, questionnaires, packs, roster, ownerKeys, invigilatorPin, seal, practice,
-                newEntries);
+                newEntries, design);
     }
 
     /** A copy carrying the given seal parameters. */
     public BundleManifest withSeal(SealSpec newSeal) {
         return new BundleManifest(format, schemaVersion, examId, title, language, instructionsFile, tasks,
                 conditions, forms, questionnaires, packs, roster, ownerKeys, invigilatorPin, newSeal, practice,
-                entries);
+                entries, design);
     }
 }

@@ -54,6 +54,13 @@ final class ManifestRules {
                     problems.add("form \"" + form.id() + "\" names questionnaire \"" + q + "\", which the bundle does not define");
                 }
             }
+            if (m.design() == StudyDesign.PARALLEL
+                    && form.slots().stream().map(FormSlot::conditionId).distinct().count() > 1) {
+                problems.add("form \"" + form.id() + "\" mixes conditions " + form.slots().stream()
+                        .map(FormSlot::conditionId).distinct().toList() + ", but the bundle declares a parallel design,"
+                        + " in which a candidate sits every task under one condition: give the form one condition, or"
+                        + " declare a within-candidate design (crossover or latin-square)");
+            }
             Set<String> seen = new HashSet<>();
             for (FormSlot slot : form.slots()) {
                 String where = "form \"" + form.id() + "\", task \"" + slot.taskId() + "\"";
