@@ -98,7 +98,7 @@ public final class FormsView implements Step {
             }
             r++;
         }
-        taskConditions.setText(String.join("\n", counts.lines()));
+        taskConditions.setText(String.join("\n", model.balance()));
     }
 
     private static Label cell(String text, boolean head) {

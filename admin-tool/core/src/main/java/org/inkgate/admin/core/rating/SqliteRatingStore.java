@@ -867,6 +867,18 @@ public final class SqliteRatingStore implements RatingDesk, Referrals, AutoClose
         });
     }
 
+    /**
+     * The study design the exam's bundle declared ({@code crossover}, {@code latin-square},
+     * {@code parallel}), or empty when its bundle predates recorded designs.
+     */
+    public synchronized String studyDesign() throws RatingException {
+        return read("reading the exam's design", () -> {
+            String[] design = {""};
+            each("SELECT COALESCE(design, '') FROM exams WHERE exam_id=?", rs -> design[0] = rs.getString(1), examId);
+            return design[0];
+        });
+    }
+
     /** One final score of one criterion of one response, and how it was reached. */
     public record FinalRow(String candidate, String level, String form, String task, String condition, String criterion,
             double score, String method, String rule, String basis, String decidedAt) {
