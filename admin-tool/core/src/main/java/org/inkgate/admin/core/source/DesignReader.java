@@ -100,8 +100,8 @@ final class DesignReader {
             return even;
         }
         if (!node.isTextual()) {
-            c.problem(at, "must be a ratio in quotes, one whole number per condition in the order declared, e.g."
-                    + " allocation: \"2:1\" (YAML reads 2:1 without quotes as a number)");
+            c.problem(at, "must be a ratio, one whole number per condition in the order declared, separated by ':',"
+                    + " e.g. allocation: \"2:1\" (even for 1:1... leave it out)");
             return even;
         }
         String[] parts = node.asText().strip().split("\\s*:\\s*", -1);
