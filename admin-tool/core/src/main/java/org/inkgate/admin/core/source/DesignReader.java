@@ -101,7 +101,7 @@ final class DesignReader {
         }
         if (!node.isTextual()) {
             c.problem(at, "must be a ratio, one whole number per condition in the order declared, separated by ':',"
-                    + " e.g. allocation: \"2:1\" (even for 1:1... leave it out)");
+                    + " e.g. allocation: \"2:1\" (leave it out for equal groups)");
             return even;
         }
         String[] parts = node.asText().strip().split("\\s*:\\s*", -1);
