@@ -11,7 +11,8 @@ import java.util.Optional;
  * are signed with the test owner's Ed25519 key. Field by field description: docs/formats.md.
  *
  * @param format            always {@link #FORMAT}
- * @param schemaVersion     the schema this manifest follows; readers refuse newer ones
+ * @param schemaVersion     the schema this manifest follows; readers refuse newer ones, and the
+ *                          writer replaces it with {@link #versionFor} the design
  * @param examId            stable id of the exam, chosen by the test owner
  * @param title             title shown to candidates
  * @param language          BCP 47 tag of the exam language, e.g. en-GB
@@ -52,8 +53,22 @@ public record BundleManifest(
         StudyDesign design) {
 
     public static final String FORMAT = "inkgate-exam-bundle";
-    /** The newest schema this build reads and the one it writes. */
-    public static final int SCHEMA_VERSION = 1;
+    /** The newest schema this build reads and writes. */
+    public static final int SCHEMA_VERSION = 2;
+    /**
+     * The first schema with the {@code design} field. Readers of version 1 refuse unknown keys (a
+     * signed manifest must have one reading), so a design must come with a version they refuse by
+     * its number, with a message that names the versions, rather than as an unknown key.
+     */
+    public static final int FIRST_WITH_DESIGN = 2;
+
+    /**
+     * The lowest schema version that holds a manifest with this design; the writer writes it, so a
+     * bundle without a design stays version 1 and still opens in clients that read only version 1.
+     */
+    public static int versionFor(StudyDesign design) {
+        return design == null ? 1 : FIRST_WITH_DESIGN;
+    }
 
     /** A manifest without a declared design (as written before designs were recorded). */
     public BundleManifest(String format, int schemaVersion, String examId, String title, String language,
@@ -97,6 +112,13 @@ public record BundleManifest(
         return new BundleManifest(format, schemaVersion, examId, title, language, instructionsFile, tasks,
                 conditions, forms, questionnaires, packs, roster, ownerKeys, invigilatorPin, seal, practice,
                 entries, newDesign);
+    }
+
+    /** A copy following the given schema version; the writer sets the lowest one that holds the content. */
+    public BundleManifest withSchemaVersion(int newVersion) {
+        return new BundleManifest(format, newVersion, examId, title, language, instructionsFile, tasks,
+                conditions, forms, questionnaires, packs, roster, ownerKeys, invigilatorPin, seal, practice,
+                entries, design);
     }
 
     public boolean sealed() {

@@ -28,6 +28,11 @@ final class ManifestRules {
         requireText(problems, m.examId(), "examId");
         requireText(problems, m.title(), "title");
         requireText(problems, m.language(), "language");
+        if (m.design() != null && m.schemaVersion() < BundleManifest.FIRST_WITH_DESIGN) {
+            problems.add("the manifest declares design \"" + m.design().word() + "\" under schemaVersion "
+                    + m.schemaVersion() + ", which has no design field (a reader of that version refuses it as an"
+                    + " unknown key): a manifest with a design is schemaVersion " + BundleManifest.FIRST_WITH_DESIGN);
+        }
         if (m.instructionsFile() != null && !m.entries().containsKey(m.instructionsFile())) {
             problems.add("instructionsFile \"" + m.instructionsFile() + "\" is not an entry of the bundle");
         }

@@ -11,9 +11,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import com.fasterxml.jackson.databind.JsonNode;
 import org.inkgate.format.json.Json;
+import org.inkgate.format.json.SchemaCheck;
 import org.inkgate.format.refusal.InvalidContent;
 import org.inkgate.format.refusal.MalformedJson;
+import org.inkgate.format.refusal.UnsupportedSchema;
 import org.inkgate.format.testutil.SampleExam;
 import org.inkgate.format.testutil.SignedBundles;
 import org.inkgate.format.testutil.TestKeys;
@@ -67,6 +70,38 @@ class StudyDesignBundleTest {
     }
 
     @Test
+    void write_bundleWithADesign_isSchemaVersion2_whichAVersion1ReaderRefusesByItsNumber() throws Exception {
+        Path file = dir.resolve("parallel.inkexam");
+        new BundleWriter(TestKeys.OWNER_SIGNING).write(parallelThreeConditions(), SampleExam.contents(), file);
+        JsonNode tree = Json.mapper().readTree(SignedBundles.entry(file, "manifest.json"));
+        assertEquals(2, tree.path("schemaVersion").asInt());
+
+        // the check a version-1 reader makes after the signature (BundleReader with SCHEMA_VERSION = 1, before
+        // this field): it refuses by the number, naming both versions, before it could trip over the unknown key
+        UnsupportedSchema refusal = assertThrows(UnsupportedSchema.class, () -> SchemaCheck.requireVersion(
+                "parallel.inkexam", tree, 1, "bundle", "Install the client version the test owner names for this exam."));
+        assertTrue(refusal.getMessage().contains("uses schema version 2, newer than the 1 this version reads. Install the"
+                + " client version the test owner names"), refusal.getMessage());
+    }
+
+    @Test
+    void write_bundleWithoutADesign_staysSchemaVersion1_soEarlierClientsStillOpenIt() throws Exception {
+        JsonNode tree = Json.mapper().readTree(SignedBundles.entry(SignedBundles.good(dir), "manifest.json"));
+        assertEquals(1, tree.path("schemaVersion").asInt());
+        assertTrue(tree.path("design").isMissingNode());
+    }
+
+    @Test
+    void open_version1ManifestDeclaringADesign_isRefusedSayingWhichVersionHoldsIt() throws Exception {
+        ObjectNode tree = (ObjectNode) Json.mapper().readTree(SignedBundles.entry(SignedBundles.good(dir), "manifest.json"));
+        tree.put("design", "crossover");
+        InvalidContent refusal = assertThrows(InvalidContent.class, () -> reader.open(SignedBundles.signedWith(dir,
+                "v1-with-design.inkexam", Json.write(tree), Map.of())).close());
+        assertTrue(refusal.getMessage().contains("declares design \"crossover\" under schemaVersion 1, which has no design"
+                + " field"), refusal.getMessage());
+    }
+
+    @Test
     void open_bundleWithoutADesign_readsAsUndeclared() throws Exception {
         try (OpenedBundle b = reader.open(SignedBundles.good(dir))) {
             assertNull(b.manifest().design());
@@ -85,7 +120,7 @@ class StudyDesignBundleTest {
     @Test
     void open_signedParallelManifestWhoseFormMixesConditions_isRefusedAsInvalidContent() throws Exception {
         ObjectNode tree = (ObjectNode) Json.mapper().readTree(SignedBundles.entry(SignedBundles.good(dir), "manifest.json"));
-        tree.put("design", "parallel");
+        tree.put("schemaVersion", 2).put("design", "parallel");
         InvalidContent refusal = assertThrows(InvalidContent.class, () -> reader.open(SignedBundles.signedWith(dir,
                 "mixed.inkexam", Json.write(tree), Map.of())).close());
         assertTrue(refusal.getMessage().contains("mixes conditions"), refusal.getMessage());
@@ -94,7 +129,7 @@ class StudyDesignBundleTest {
     @Test
     void open_unknownDesign_isRefusedNamingTheField() throws Exception {
         ObjectNode tree = (ObjectNode) Json.mapper().readTree(SignedBundles.entry(SignedBundles.good(dir), "manifest.json"));
-        tree.put("design", "between");
+        tree.put("schemaVersion", 2).put("design", "between");
         MalformedJson refusal = assertThrows(MalformedJson.class, () -> reader.open(SignedBundles.signedWith(dir,
                 "unknown.inkexam", Json.write(tree), Map.of())).close());
         assertTrue(refusal.getMessage().contains("design"), refusal.getMessage());
