@@ -8,7 +8,8 @@ import java.util.concurrent.Callable;
 import org.inkgate.admin.core.forms.Assignment;
 import org.inkgate.admin.core.forms.AssignmentCounts;
 import org.inkgate.admin.core.forms.AssignmentTable;
-import org.inkgate.admin.core.forms.FormAssigner;
+import org.inkgate.admin.core.forms.DesignSummary;
+import org.inkgate.admin.core.forms.FormAssignment;
 import org.inkgate.admin.core.forms.FormDesigner;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.roster.RosterReader;
@@ -62,6 +63,7 @@ final class FormsCommand implements Callable<Integer> {
             return InkgateAdmin.PROBLEMS;
         }
         List<FormSpec> forms = FormDesigner.forms(exam);
+        DesignSummary.lines(exam, forms).forEach(w::println);
         w.println(forms.size() + " forms (" + exam.design().kind().word() + "):");
         for (FormSpec f : forms) {
             StringBuilder line = new StringBuilder("  " + f.id() + ":");
@@ -74,12 +76,18 @@ final class FormsCommand implements Callable<Integer> {
             return InkgateAdmin.OK;
         }
         long usedSeed = seed != null ? seed : new SecureRandom().nextLong();
-        Assignment a = FormAssigner.assign(candidates.stream()
-                .map(c -> new FormAssigner.Candidate(c.candidateNumber(), c.level())).toList(), forms, FormDesigner.blockSize(exam), usedSeed);
+        FormAssignment.Result result;
+        try {
+            result = FormAssignment.assign(exam, forms, candidates, usedSeed);
+        } catch (InvalidSourceException e) {
+            spec.commandLine().getErr().println(e.getMessage());
+            return InkgateAdmin.PROBLEMS;
+        }
+        Assignment a = result.assignment();
         w.println();
         w.println("Assignment of " + a.rows().size() + " candidates, seed " + usedSeed
                 + " (the same seed and roster give the same assignment); candidates per level and form:");
-        printCounts(w, a, forms);
+        printCounts(w, result, forms);
         if (out != null) {
             try {
                 AssignmentTable.write(a, out, replace);
@@ -95,8 +103,8 @@ final class FormsCommand implements Callable<Integer> {
         return InkgateAdmin.OK;
     }
 
-    static void printCounts(PrintWriter w, Assignment a, List<FormSpec> forms) {
-        AssignmentCounts counts = AssignmentCounts.of(a, forms);
+    static void printCounts(PrintWriter w, FormAssignment.Result result, List<FormSpec> forms) {
+        AssignmentCounts counts = result.counts();
         StringBuilder head = new StringBuilder(String.format("  %-12s", "level"));
         forms.forEach(f -> head.append(String.format("%6s", f.id())));
         w.println(head);
@@ -105,6 +113,6 @@ final class FormsCommand implements Callable<Integer> {
             forms.forEach(f -> row.append(String.format("%6d", counts.count(level, f.id()))));
             w.println(row);
         }
-        counts.lines().forEach(line -> w.println("  " + line));
+        result.balance().forEach(line -> w.println("  " + line));
     }
 }

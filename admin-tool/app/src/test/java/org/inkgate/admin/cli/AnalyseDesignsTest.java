@@ -22,7 +22,7 @@ import picocli.CommandLine;
  * and the choice of analyses are checked, the statistics themselves against R elsewhere
  * (analysis module, DesignAnalysesReferenceTest).
  */
-class AnalyseDesignsTest {
+public class AnalyseDesignsTest {
 
     private final StringWriter out = new StringWriter();
     private final StringWriter err = new StringWriter();
@@ -50,7 +50,7 @@ class AnalyseDesignsTest {
     }
 
     /** 40 candidates, half under 'none' and half under 'tools', two tasks each; 'tools' adds ~1.5 points. */
-    static String parallelRatings(long seed) {
+    public static String parallelRatings(long seed) {
         Random rnd = new Random(seed);
         StringBuilder b = new StringBuilder(HEADER);
         for (int i = 0; i < 40; i++) {

@@ -60,6 +60,7 @@ class CommandLineTest {
                 "--seed", "20261202", "--out", assignment);
         assertEquals(0, forms.code(), forms.out());
         assertTrue(forms.out().contains("ferry-complaint:  with-resources=6  without-resources=6"), forms.out());
+        assertTrue(forms.out().contains("design: latin-square (within candidates): 2 tasks, 2 conditions"), forms.out());
 
         String bundle = dir.resolve("demo.inkexam").toString();
         Run built = admin("bundle", DEMO.resolve("exam-source").toString(), "--out", bundle, "--keys", keys,
@@ -93,6 +94,11 @@ class CommandLineTest {
                 var rs = st.executeQuery("SELECT seed FROM form_assignment_runs")) {
             assertTrue(rs.next());
             assertEquals(20261202L, rs.getLong(1), "the seed given to forms is recorded in the store");
+        }
+        try (var c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + store); var st = c.createStatement();
+                var rs = st.executeQuery("SELECT design FROM exams")) {
+            assertTrue(rs.next());
+            assertEquals("latin-square", rs.getString(1), "the bundle's declared design is recorded in the store");
         }
 
         Run missing = admin("missing", "--store", store);
@@ -191,6 +197,9 @@ class CommandLineTest {
         try (var in = Files.newBufferedReader(ratings.resolve("ratings.csv"))) {
             read = org.inkgate.analysis.data.RatingsReader.read("ratings.csv", in);
         }
+        List<String> exported = Files.readAllLines(ratings.resolve("ratings.csv"));
+        assertTrue(exported.get(0).endsWith(",rated_at,design"), exported.get(0));
+        assertTrue(exported.stream().skip(1).allMatch(line -> line.endsWith(",latin-square")), exported.get(1));
         long flaggedPairs = read.stream().filter(x -> x.rater().equals("R02")).count();
         assertTrue(read.size() >= 88, "22 responses x 2 raters x 2 criteria, plus adjudications: " + read.size());
         for (var x : read) {

@@ -262,6 +262,36 @@ class AdminWindowTest {
         assertFalse(Files.exists(out));
     }
 
+    /**
+     * The invented three-condition parallel demo (src/demo/three-conditions, 1:1:1 over two task
+     * orders) with the demo roster (6 per level): the step shows the design in words before any
+     * assignment, then the allocation per stratum and condition and the ratio achieved.
+     */
+    @Test
+    void forms_parallelThreeConditionDemo_showsTheDesignAndItsAllocation(FxRobot robot) throws Exception {
+        AdminSession session = new AdminSession();
+        AtomicReference<Scene> scene = new AtomicReference<>();
+        robot.interact(() -> scene.set(AdminWindow.show(stage, session)));
+        setText(robot, "#examFolder", DemoSource.DEMO.resolve("three-conditions").toAbsolutePath().toString());
+        robot.clickOn("#checkExam");
+        select(robot, 1);
+        String design = label(robot, "#formsText");
+        assertTrue(design.startsWith("design: parallel (between candidates): each candidate sits all 2 tasks under one of"
+                + " 3 conditions"), design);
+        assertTrue(design.contains("exact balance needs every stratum to hold a multiple of 6 candidates"), design);
+        setText(robot, "#roster", DemoSource.DEMO.resolve("roster.csv").toAbsolutePath().toString());
+        setText(robot, "#seed", "7");
+        setText(robot, "#assignmentOut", dir.resolve("assignment.csv").toString());
+        robot.clickOn("#assign");
+        WaitForAsyncUtils.waitForFxEvents();
+        String balance = label(robot, "#taskConditionCounts");
+        // 6 candidates per level at 1:1:1: two per condition in each level, four overall
+        assertTrue(balance.lines().anyMatch(l -> l.strip().matches("B1 +6 +2 +2 +2")), balance);
+        assertTrue(balance.lines().anyMatch(l -> l.strip().matches("all strata +12 +4 +4 +4")), balance);
+        assertTrue(balance.contains("allocation ratio achieved: 1.00:1.00:1.00 (stated 1:1:1)"), balance);
+        shoot(robot, scene.get(), "admin-forms-parallel.png");
+    }
+
     @Test
     void forms_rosterWithABadRow_namesTheRowAndAssignsNothing(FxRobot robot) throws Exception {
         AdminSession session = new AdminSession();

@@ -100,7 +100,7 @@ public final class DemoSittingBuild {
         BundleManifest live = new BundleManifest(m.format(), m.schemaVersion(), m.examId() + "-sitting",
                 m.title().replace("Practice Paper", "Demo Sitting"), m.language(), m.instructionsFile(), m.tasks(),
                 m.conditions(), m.forms(), m.questionnaires(), m.packs(), sitting.roster(), m.ownerKeys(), pin, null,
-                false, Map.of());
+                false, Map.of(), m.design());
         try {
             Path parent = out.toAbsolutePath().getParent();
             if (parent != null) {

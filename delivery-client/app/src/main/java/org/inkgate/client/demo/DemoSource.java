@@ -94,8 +94,9 @@ public record DemoSource(BundleManifest manifest, Map<String, byte[]> contents, 
         if (!BundleManifest.FORMAT.equals(m.format())) {
             problems.add("\"format\" must be \"" + BundleManifest.FORMAT + "\"");
         }
-        if (m.schemaVersion() != BundleManifest.SCHEMA_VERSION) {
-            problems.add("\"schemaVersion\" must be " + BundleManifest.SCHEMA_VERSION + ", the version this build writes");
+        if (m.schemaVersion() != BundleManifest.versionFor(m.design())) {
+            problems.add("\"schemaVersion\" must be " + BundleManifest.versionFor(m.design())
+                    + ", the version this build writes for a bundle " + (m.design() == null ? "without" : "with") + " a design");
         }
         if (!m.entries().isEmpty()) {
             problems.add("leave \"entries\" out: the bundle writer lists the entries and their digests");
@@ -150,6 +151,6 @@ public record DemoSource(BundleManifest manifest, Map<String, byte[]> contents, 
     private static BundleManifest withOwnerKeys(BundleManifest m, DemoKeys keys) {
         return new BundleManifest(m.format(), m.schemaVersion(), m.examId(), m.title(), m.language(),
                 m.instructionsFile(), m.tasks(), m.conditions(), m.forms(), m.questionnaires(), m.packs(), m.roster(),
-                keys.ownerKeys(), m.invigilatorPin(), m.seal(), m.practice(), Map.of());
+                keys.ownerKeys(), m.invigilatorPin(), m.seal(), m.practice(), Map.of(), m.design());
     }
 }

@@ -21,7 +21,8 @@ import org.inkgate.format.json.Json;
 
 /**
  * Writes exam bundles: the content entries, a manifest listing their digests, and the owner's
- * Ed25519 signature over the manifest's exact bytes. Output is written to a temporary file
+ * Ed25519 signature over the manifest's exact bytes. The schema version written is the lowest that
+ * holds the manifest ({@link BundleManifest#versionFor}), whatever the given manifest says. Output is written to a temporary file
  * and moved into place, so a half-written bundle never carries the final name.
  */
 public final class BundleWriter {
@@ -58,8 +59,10 @@ public final class BundleWriter {
         write(manifest, contents, releaseCode, out);
     }
 
-    private void write(BundleManifest manifest, Map<String, byte[]> contents, char[] releaseCode, Path out)
+    private void write(BundleManifest asGiven, Map<String, byte[]> contents, char[] releaseCode, Path out)
             throws IOException {
+        // the lowest version that holds the content: clients that read only version 1 keep opening bundles without a design
+        BundleManifest manifest = asGiven.withSchemaVersion(BundleManifest.versionFor(asGiven.design()));
         checkBeforeWriting(manifest, contents);
         Map<String, byte[]> stored = new TreeMap<>();
         BundleManifest draft = manifest;

@@ -28,6 +28,11 @@ final class ManifestRules {
         requireText(problems, m.examId(), "examId");
         requireText(problems, m.title(), "title");
         requireText(problems, m.language(), "language");
+        if (m.design() != null && m.schemaVersion() < BundleManifest.FIRST_WITH_DESIGN) {
+            problems.add("the manifest declares design \"" + m.design().word() + "\" under schemaVersion "
+                    + m.schemaVersion() + ", which has no design field (a reader of that version refuses it as an"
+                    + " unknown key): a manifest with a design is schemaVersion " + BundleManifest.FIRST_WITH_DESIGN);
+        }
         if (m.instructionsFile() != null && !m.entries().containsKey(m.instructionsFile())) {
             problems.add("instructionsFile \"" + m.instructionsFile() + "\" is not an entry of the bundle");
         }
@@ -53,6 +58,13 @@ final class ManifestRules {
                 if (q != null && !questionnaireIds.contains(q)) {
                     problems.add("form \"" + form.id() + "\" names questionnaire \"" + q + "\", which the bundle does not define");
                 }
+            }
+            if (m.design() == StudyDesign.PARALLEL
+                    && form.slots().stream().map(FormSlot::conditionId).distinct().count() > 1) {
+                problems.add("form \"" + form.id() + "\" mixes conditions " + form.slots().stream()
+                        .map(FormSlot::conditionId).distinct().toList() + ", but the bundle declares a parallel design,"
+                        + " in which a candidate sits every task under one condition: give the form one condition, or"
+                        + " declare a within-candidate design (crossover or latin-square)");
             }
             Set<String> seen = new HashSet<>();
             for (FormSlot slot : form.slots()) {

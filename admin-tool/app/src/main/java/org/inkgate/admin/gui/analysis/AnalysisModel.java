@@ -15,6 +15,7 @@ import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
 import org.inkgate.admin.study.AnalysisRun;
 import org.inkgate.admin.study.RaschChoices;
+import org.inkgate.analysis.data.StudyDesign;
 import org.inkgate.analysis.mfrm.MfrmOptions;
 import org.inkgate.analysis.mfrm.StudyRatings;
 import org.inkgate.analysis.scores.ScoreRule;
@@ -27,6 +28,11 @@ import org.inkgate.analysis.study.StudyOptions;
  */
 public final class AnalysisModel {
 
+    /** The design choice that declares none: the analysis reads the design from the data, as the command without --design. */
+    public static final String FROM_THE_DATA = "";
+    /** The designs the window offers: none declared, then the words {@code analyse --design} takes. */
+    public static final List<String> DESIGNS = List.of(FROM_THE_DATA, "within", "parallel");
+
     /** The Rasch estimation's iteration cap: the command's default, not offered in the window. */
     static final int MAX_ITERATIONS = 1000;
 
@@ -38,6 +44,8 @@ public final class AnalysisModel {
     private final StringProperty out = new SimpleStringProperty("");
     private final StringProperty title = new SimpleStringProperty("Analysis of ratings");
     private final ObjectProperty<ScoreRule> scoreRule = new SimpleObjectProperty<>(ScoreRule.MEAN);
+    private final StringProperty design = new SimpleStringProperty(FROM_THE_DATA);
+    private final StringProperty preTest = new SimpleStringProperty("");
     private final BooleanProperty rasch = new SimpleBooleanProperty(false);
     private final Map<String, BooleanProperty> facets = new LinkedHashMap<>();
     private final StringProperty structure = new SimpleStringProperty(RaschChoices.RATING_SCALE);
@@ -99,6 +107,19 @@ public final class AnalysisModel {
 
     public ObjectProperty<ScoreRule> scoreRule() {
         return scoreRule;
+    }
+
+    /**
+     * The declared study design, as {@code --design} takes it ({@link #DESIGNS}); {@link #FROM_THE_DATA}
+     * declares none. The report checks a declaration against the data and says where they differ.
+     */
+    public StringProperty design() {
+        return design;
+    }
+
+    /** A numeric column of the candidates CSV the parallel-groups comparison adjusts for; blank for level. */
+    public StringProperty preTest() {
+        return preTest;
     }
 
     /** Many-facet Rasch measurement on or off. */
@@ -254,6 +275,23 @@ public final class AnalysisModel {
             args.add(reportTitle);
         }
         StudyOptions options = StudyOptions.DEFAULT.withScoreRule(scoreRule.get()).withTitle(reportTitle);
+        String declared = design.get() == null ? FROM_THE_DATA : design.get().strip();
+        if (!declared.equals(FROM_THE_DATA)) {
+            // the command's own parsing, so the window accepts and refuses exactly what --design does
+            options = options.withDesign(StudyDesign.parseDeclared(declared));
+            args.add("--design");
+            args.add(declared);
+        }
+        String column = preTest.get().strip();
+        if (!column.isEmpty()) {
+            if (Fields.path(candidates.get()) == null) {
+                throw new IllegalArgumentException("the pre-test is a numeric column of the candidates CSV: name that"
+                        + " file, or clear the pre-test column to adjust for level.");
+            }
+            options = options.withPreTest(column);
+            args.add("--pre-test");
+            args.add(column);
+        }
         MfrmOptions mfrm = null;
         Path anchorFile = null;
         if (rasch.get()) {

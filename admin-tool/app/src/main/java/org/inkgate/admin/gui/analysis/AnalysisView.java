@@ -59,6 +59,26 @@ public final class AnalysisView implements Step {
         rule.setConverter(converter(r -> r == ScoreRule.MEAN ? "Mean of the criteria" : "Sum of the criteria"));
         rule.valueProperty().bindBidirectional(model.scoreRule());
         Fields.row(inputs, 6, "Response score", rule);
+        ChoiceBox<String> design = new ChoiceBox<>(javafx.collections.FXCollections.observableArrayList(
+                AnalysisModel.DESIGNS));
+        design.setId("analysisDesign");
+        design.setAccessibleText("The study design the analysis checks the data against");
+        design.setConverter(converter(d -> switch (d) {
+            case AnalysisModel.FROM_THE_DATA -> "Read from the data";
+            case "within" -> "Within candidates: every candidate under every condition";
+            case "parallel" -> "Parallel groups: each candidate under one condition";
+            default -> d;
+        }));
+        design.valueProperty().bindBidirectional(model.design());
+        Fields.row(inputs, 7, "Study design", design);
+        TextField preTest = new TextField();
+        preTest.setId("analysisPreTest");
+        preTest.setAccessibleText("Pre-test column of the candidates CSV that the parallel-groups comparison adjusts"
+                + " for; blank to adjust for level");
+        preTest.setPromptText("e.g. placement; blank adjusts for level");
+        preTest.setMaxWidth(360);
+        preTest.textProperty().bindBidirectional(model.preTest());
+        Fields.row(inputs, 8, "Pre-test column", preTest);
         // labels keep their full width; the fields take what is left
         inputs.getColumnConstraints().setAll(new javafx.scene.layout.ColumnConstraints(
                 javafx.scene.layout.Region.USE_PREF_SIZE, javafx.scene.layout.Region.USE_COMPUTED_SIZE,
@@ -68,7 +88,7 @@ public final class AnalysisView implements Step {
         rasch.setId("analysisRasch");
         rasch.setAccessibleText("Run many-facet Rasch measurement");
         rasch.selectedProperty().bindBidirectional(model.rasch());
-        int r = 8; // the many-facet Rasch rows, under the switch in row 7
+        int r = 10; // the many-facet Rasch rows, under the switch in row 9
         FlowPane facets = new FlowPane(16, 6);
         facets.setAccessibleText("Facets besides the candidates");
         for (Map.Entry<String, javafx.beans.property.BooleanProperty> f : model.facets().entrySet()) {
@@ -78,7 +98,7 @@ public final class AnalysisView implements Step {
             box.selectedProperty().bindBidirectional(f.getValue());
             facets.getChildren().add(box);
         }
-        inputs.add(rasch, 1, 7);
+        inputs.add(rasch, 1, 9);
         Fields.row(inputs, r, "Facets besides candidates", facets);
         facets.disableProperty().bind(model.rasch().not());
         ChoiceBox<String> structure = new ChoiceBox<>();
@@ -163,7 +183,9 @@ public final class AnalysisView implements Step {
         root = new VBox(14, Fields.heading(TITLE),
                 Fields.note("Analyses the ratings as inkgate-admin analyse does, with the same report: descriptive"
                         + " statistics, the with/without-resources comparison, rater agreement and the other sections;"
-                        + " with many-facet Rasch measurement also measures, fit and bias. Read the report's notes on"
+                        + " with many-facet Rasch measurement also measures, fit and bias. The report reads the study"
+                        + " design from the data; a declared design is checked against them, and a mismatch is reported,"
+                        + " not analysed. Read the report's notes on"
                         + " each statistic's assumptions before relying on it; decisions about candidates follow your"
                         + " regulations."),
                 inputs, new HBox(12, run, cancel), result, warnings, command,

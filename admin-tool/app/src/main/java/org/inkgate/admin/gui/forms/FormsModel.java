@@ -14,7 +14,8 @@ import javafx.collections.ObservableList;
 import org.inkgate.admin.core.forms.Assignment;
 import org.inkgate.admin.core.forms.AssignmentCounts;
 import org.inkgate.admin.core.forms.AssignmentTable;
-import org.inkgate.admin.core.forms.FormAssigner;
+import org.inkgate.admin.core.forms.DesignSummary;
+import org.inkgate.admin.core.forms.FormAssignment;
 import org.inkgate.admin.core.forms.FormDesigner;
 import org.inkgate.admin.core.roster.RosterCandidate;
 import org.inkgate.admin.core.roster.RosterReader;
@@ -42,6 +43,7 @@ public final class FormsModel {
     private final ObjectProperty<AssignmentCounts> counts = new SimpleObjectProperty<>();
     private final ObservableList<String> formIds = FXCollections.observableArrayList();
     private final ObservableList<Assignment.Row> rows = FXCollections.observableArrayList();
+    private final ObservableList<String> balance = FXCollections.observableArrayList();
 
     public FormsModel(AdminSession session) {
         this.session = session;
@@ -81,6 +83,11 @@ public final class FormsModel {
         return formIds;
     }
 
+    /** The design's balance lines for the last assignment (the same lines {@code forms} prints). */
+    public ObservableList<String> balance() {
+        return balance;
+    }
+
     public ObservableList<Assignment.Row> rows() {
         return rows;
     }
@@ -92,7 +99,8 @@ public final class FormsModel {
             return;
         }
         List<FormSpec> forms = FormDesigner.forms(exam);
-        StringBuilder b = new StringBuilder(forms.size() + " forms (" + exam.design().kind().word() + "):");
+        StringBuilder b = new StringBuilder(String.join("\n", DesignSummary.lines(exam, forms)));
+        b.append('\n').append(forms.size()).append(" forms (").append(exam.design().kind().word()).append("):");
         for (FormSpec f : forms) {
             b.append("\n  ").append(f.id()).append(':');
             for (FormSlot s : f.slots()) {
@@ -110,6 +118,7 @@ public final class FormsModel {
     public void assign() {
         ExamSource exam = session.exam().get();
         counts.set(null);
+        balance.clear();
         rows.clear();
         if (exam == null) {
             result.set("Check the exam folder first (step 1): forms come from a folder without problems.");
@@ -136,9 +145,8 @@ public final class FormsModel {
             }
             List<RosterCandidate> candidates = RosterReader.read(rosterFile);
             List<FormSpec> forms = FormDesigner.forms(exam);
-            Assignment a = FormAssigner.assign(candidates.stream()
-                    .map(c -> new FormAssigner.Candidate(c.candidateNumber(), c.level())).toList(), forms,
-                    FormDesigner.blockSize(exam), usedSeed);
+            FormAssignment.Result assigned = FormAssignment.assign(exam, forms, candidates, usedSeed);
+            Assignment a = assigned.assignment();
             Path table = Fields.path(out.get());
             if (table != null) {
                 try {
@@ -152,7 +160,8 @@ public final class FormsModel {
                 session.assignment().set(table);
             }
             session.roster().set(rosterFile);
-            counts.set(AssignmentCounts.of(a, forms));
+            balance.setAll(assigned.balance());
+            counts.set(assigned.counts());
             rows.setAll(a.rows());
             RosterSummary summary = RosterSummary.of(candidates);
             result.set("Roster: " + summary.candidates() + " candidates, per level " + summary.perLevel()

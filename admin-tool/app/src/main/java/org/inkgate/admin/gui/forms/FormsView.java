@@ -9,7 +9,6 @@ import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.control.TextField;
 import javafx.scene.layout.GridPane;
-import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import org.inkgate.admin.core.forms.Assignment;
@@ -30,6 +29,7 @@ public final class FormsView implements Step {
         forms.setId("formsText");
         forms.textProperty().bind(model.formsText());
         forms.getStyleClass().add("mono");
+        forms.setWrapText(true);
 
         GridPane grid = Fields.grid();
         rosterField = Fields.pathRow(grid, 0, "roster", "Roster CSV", model.roster(), Fields.Choose.OPEN_FILE);
@@ -73,7 +73,9 @@ public final class FormsView implements Step {
         table.setPrefHeight(220);
         VBox.setVgrow(table, Priority.ALWAYS);
 
-        HBox countsRow = new HBox(32, countsGrid, taskConditions);
+        // the balance lines below the grid, not beside it: a parallel design's stratum x condition
+        // table and long condition ids need the full width
+        VBox countsRow = new VBox(14, countsGrid, taskConditions);
         root = new VBox(14, Fields.heading("2. Forms and assignment"), forms, grid, assign, result, countsRow, table);
         root.getStyleClass().add("step");
     }
@@ -98,7 +100,7 @@ public final class FormsView implements Step {
             }
             r++;
         }
-        taskConditions.setText(String.join("\n", counts.lines()));
+        taskConditions.setText(String.join("\n", model.balance()));
     }
 
     private static Label cell(String text, boolean head) {

@@ -94,7 +94,7 @@ public final class BundleBuilder {
         entries.sort(java.util.Comparator.comparing(RosterEntry::candidateNumber));
         BundleManifest manifest = new BundleManifest(BundleManifest.FORMAT, BundleManifest.SCHEMA_VERSION, exam.examId(),
                 exam.title(), exam.language(), exam.instructionsFile(), tasks, conditions, forms, exam.questionnaires(),
-                packs, entries, ownerKeys, exam.practice() ? null : pin, null, exam.practice(), Map.of());
+                packs, entries, ownerKeys, exam.practice() ? null : pin, null, exam.practice(), Map.of(), exam.design().kind());
         return Map.entry(manifest, contents);
     }
 

@@ -59,7 +59,7 @@ public final class PreviewBundle {
         // one task, one condition, no questionnaires: the preview shows the writing task alone
         ExamSource single = new ExamSource(exam.folder(), exam.examId() + "-preview", exam.title() + " (preview)",
                 exam.language(), exam.instructionsFile(), true, List.of(task), List.of(condition),
-                new ExamSource.Design(ExamSource.DesignKind.LATIN_SQUARE, false, null, null, 0), List.of(),
+                new ExamSource.Design(org.inkgate.format.bundle.StudyDesign.LATIN_SQUARE, false, null, null, 0), List.of(),
                 exam.packs(), null);
         KeyPair signing = Ed25519.generate();
         KeyPair encryption = X25519.generate();

@@ -8,14 +8,15 @@ import org.inkgate.admin.core.csv.Csv;
 
 /**
  * The exam's ratings as the analysis reads them (tidy long CSV, one row per rating:
- * {@code candidate,level,form,task,condition,rater,criterion,score}, then {@code kind} and
- * {@code rated_at}, which the analysis ignores) and the final-score table with the method and rule
+ * {@code candidate,level,form,task,condition,rater,criterion,score}, then {@code kind},
+ * {@code rated_at} and {@code design}, the study design the exam's bundle declared, the same on
+ * every row) and the final-score table with the method and rule
  * behind every score. Columns are described in docs/data-dictionary.md.
  */
 public final class RatingExport {
 
     public static final List<String> RATING_COLUMNS = List.of("candidate", "level", "form", "task", "condition", "rater",
-            "criterion", "score", "kind", "rated_at");
+            "criterion", "score", "kind", "rated_at", "design");
     public static final List<String> FINAL_COLUMNS = List.of("candidate", "level", "form", "task", "condition",
             "criterion", "score", "method", "rule", "raters", "decided_at");
 
@@ -26,9 +27,10 @@ public final class RatingExport {
     public static long ratings(RatingStore store, Writer out) throws RatingException, IOException {
         Csv.writeRow(out, RATING_COLUMNS);
         long[] n = {0};
+        String design = store.studyDesign();
         try {
             store.forEachRating(r -> row(out, n, List.of(r.candidate(), r.level(), r.form(), r.task(), r.condition(),
-                    r.rater(), r.criterion(), String.valueOf(r.score()), r.kind(), r.ratedAt())));
+                    r.rater(), r.criterion(), String.valueOf(r.score()), r.kind(), r.ratedAt(), design)));
         } catch (UncheckedIOException e) {
             throw e.getCause();
         }

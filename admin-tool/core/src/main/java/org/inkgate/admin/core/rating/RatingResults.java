@@ -28,6 +28,12 @@ public interface RatingResults {
      */
     Map<ResponseScores.Key, ResponseScores> scoresByResponse() throws RatingException;
 
+    /**
+     * The study design the exam's bundle declared ({@code crossover}, {@code latin-square},
+     * {@code parallel}), or empty when its bundle predates recorded designs.
+     */
+    String studyDesign() throws RatingException;
+
     /** Responses with a rating assignment but no final score yet. */
     int pendingResponses() throws RatingException;
 }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.inkgate.format.bundle.QuestionnaireSpec;
+import org.inkgate.format.bundle.StudyDesign;
 import org.inkgate.format.bundle.WordGuidance;
 import org.inkgate.packs.policy.ResourcePolicy;
 
@@ -76,41 +77,35 @@ public record ExamSource(
     /**
      * How forms are generated and what every form shares.
      *
-     * @param kind                 the crossing of tasks and conditions
+     * @param kind                 the study design: how candidates, tasks and conditions are crossed
      * @param rotateConditions     latin-square only: also rotate conditions over positions, so that no
      *                             condition is always sat first
      * @param preQuestionnaire     questionnaire before the first task, or null
      * @param postQuestionnaire    questionnaire after the last task, or null
      * @param sittingLimitSeconds  limit for the whole sitting, 0 for none
+     * @param allocation           parallel only: the allocation ratio, one whole number per condition in
+     *                             the order the conditions are declared (1:1... when not given)
+     * @param stratifyBy           parallel only: roster attributes (besides the level, always a stratum)
+     *                             within whose categories the allocation is balanced
+     * @param counterbalanceTasks  parallel only: task orders from a Latin square within each group
+     *                             (otherwise every candidate writes the tasks in the declared order)
+     * @param exactBalance         refuse an assignment unless every stratum's size is a multiple of the
+     *                             design's cycle (then every count is exactly even or at the ratio)
      */
-    public record Design(DesignKind kind, boolean rotateConditions, String preQuestionnaire, String postQuestionnaire,
-            int sittingLimitSeconds) {
-    }
+    public record Design(StudyDesign kind, boolean rotateConditions, String preQuestionnaire, String postQuestionnaire,
+            int sittingLimitSeconds, List<Integer> allocation, List<String> stratifyBy, boolean counterbalanceTasks,
+            boolean exactBalance) {
 
-    /** The closed set of form designs. */
-    public enum DesignKind {
-        /** Two tasks in a fixed order, two conditions in both orders (AB/BA). */
-        CROSSOVER("crossover"),
-        /** Task orders from a Latin square (Williams' design when the number of tasks is even). */
-        LATIN_SQUARE("latin-square");
-
-        private final String word;
-
-        DesignKind(String word) {
-            this.word = word;
+        public Design {
+            allocation = List.copyOf(allocation);
+            stratifyBy = List.copyOf(stratifyBy);
         }
 
-        public String word() {
-            return word;
-        }
-
-        public static Optional<DesignKind> of(String word) {
-            for (DesignKind k : values()) {
-                if (k.word.equals(word)) {
-                    return Optional.of(k);
-                }
-            }
-            return Optional.empty();
+        /** A within-candidate design (crossover or latin-square) with no parallel settings. */
+        public Design(StudyDesign kind, boolean rotateConditions, String preQuestionnaire, String postQuestionnaire,
+                int sittingLimitSeconds) {
+            this(kind, rotateConditions, preQuestionnaire, postQuestionnaire, sittingLimitSeconds, List.of(), List.of(),
+                    true, false);
         }
     }
 

@@ -21,7 +21,6 @@ import org.inkgate.admin.core.source.ExamSource.Band;
 import org.inkgate.admin.core.source.ExamSource.Condition;
 import org.inkgate.admin.core.source.ExamSource.Criterion;
 import org.inkgate.admin.core.source.ExamSource.Design;
-import org.inkgate.admin.core.source.ExamSource.DesignKind;
 import org.inkgate.admin.core.source.ExamSource.Pack;
 import org.inkgate.admin.core.source.ExamSource.Rubric;
 import org.inkgate.admin.core.source.ExamSource.Task;
@@ -50,8 +49,6 @@ public final class ExamSourceReader {
     private static final Set<String> CONDITION = Set.of("id", "label", "tools", "perTask");
     private static final Set<String> TOOLS = Set.of("spelling", "glossary", "dictionary", "insertFromPanel",
             "showWordCount", "paste");
-    private static final Set<String> DESIGN = Set.of("kind", "rotateConditions", "preQuestionnaire",
-            "postQuestionnaire", "sittingLimitMinutes");
     private static final Set<String> QUESTIONNAIRE = Set.of("id", "title", "items");
     private static final Set<String> ITEM = Set.of("id", "text", "kind", "labels");
     private static final Set<String> PACK = Set.of("id", "kind", "version", "file");
@@ -290,37 +287,7 @@ public final class ExamSourceReader {
 
         private Design design(JsonNode n, At at, List<Task> tasks, List<Condition> conditions,
                 List<QuestionnaireSpec> questionnaires) {
-            if (!c.isObject(n, at, true)) {
-                return null;
-            }
-            c.onlyKeys(n, at, DESIGN);
-            String word = c.text(n, at.child("kind"), true);
-            DesignKind kind = null;
-            if (word != null) {
-                kind = DesignKind.of(word).orElse(null);
-                if (kind == null) {
-                    c.problem(at.child("kind"), "\"" + word + "\" is not a design; use crossover or latin-square");
-                }
-            }
-            boolean rotate = c.bool(n, at.child("rotateConditions"), true);
-            if (kind == DesignKind.CROSSOVER && (tasks.size() != 2 || conditions.size() != 2)) {
-                c.problem(at.child("kind"), "crossover needs exactly 2 tasks and 2 conditions (found " + tasks.size()
-                        + " and " + conditions.size() + "); use latin-square for other numbers");
-            }
-            if (kind == DesignKind.LATIN_SQUARE && !rotate && !conditions.isEmpty() && tasks.size() % conditions.size() != 0) {
-                c.problem(at.child("rotateConditions"), "without rotation the number of tasks (" + tasks.size()
-                        + ") must be a multiple of the number of conditions (" + conditions.size()
-                        + ") for every task to meet every condition equally often; set rotateConditions: true");
-            }
-            Set<String> qids = new HashSet<>(questionnaires.stream().map(QuestionnaireSpec::id).toList());
-            String pre = c.text(n, at.child("preQuestionnaire"), false);
-            String post = c.text(n, at.child("postQuestionnaire"), false);
-            for (var e : Map.of("preQuestionnaire", Optional.ofNullable(pre), "postQuestionnaire", Optional.ofNullable(post)).entrySet()) {
-                e.getValue().filter(q -> !qids.contains(q)).ifPresent(q -> c.problem(at.child(e.getKey()),
-                        "names questionnaire \"" + q + "\", which is not declared under questionnaires"));
-            }
-            Integer limit = c.integer(n, at.child("sittingLimitMinutes"), false, 0, 1440);
-            return kind == null ? null : new Design(kind, rotate, pre, post, limit == null ? 0 : limit * 60);
+            return new DesignReader(c).read(n, at, tasks, conditions, questionnaires);
         }
 
         private List<QuestionnaireSpec> questionnaires(JsonNode root, At at) {

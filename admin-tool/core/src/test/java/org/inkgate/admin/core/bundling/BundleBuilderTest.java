@@ -58,6 +58,21 @@ class BundleBuilderTest {
     }
 
     @Test
+    void build_threeConditionCrossover_readerOpensItWithTheDesignAndSixSequences() throws Exception {
+        ExamSource exam = ExamSourceReader.read(ExamFolders.withTasks(dir.resolve("src"), 3, 3, "crossover", true));
+        var forms = FormDesigner.forms(exam);
+        var assignment = org.inkgate.admin.core.forms.FormAssignment.assign(exam, forms, roster, 5).assignment();
+        Path out = dir.resolve("three.inkexam");
+        BundleBuilder.build(exam, roster, assignment, TestKeys.ownerKeys(), TestKeys.OWNER_SIGNING,
+                "invented-pin-1357".toCharArray(), false, out);
+        try (OpenedBundle b = new BundleReader(TrustPolicy.trusting(Set.of(TestKeys.ownerFingerprint()))).open(out)) {
+            assertEquals(org.inkgate.format.bundle.StudyDesign.CROSSOVER, b.manifest().design());
+            assertEquals(6, b.manifest().forms().size());
+            assertEquals(3, b.manifest().conditions().size());
+        }
+    }
+
+    @Test
     void build_liveExamWithoutPin_listsTheProblem() throws Exception {
         ExamSource exam = ExamSourceReader.read(ExamFolders.valid(dir.resolve("src")));
         var assignment = FormAssigner.assign(List.of(new FormAssigner.Candidate("X1", "B1")), FormDesigner.forms(exam), 2, 5);

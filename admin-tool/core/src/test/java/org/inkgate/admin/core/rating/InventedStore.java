@@ -35,7 +35,7 @@ public final class InventedStore {
         try (ResultsStore store = StoreFixture.of(file).results()) {
             try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file); Statement s = c.createStatement()) {
                 c.setAutoCommit(false);
-                s.execute("INSERT INTO exams VALUES ('" + EXAM + "', 'Invented river exam', 'en-GB', 0)");
+                s.execute("INSERT INTO exams(exam_id, title, language, practice) VALUES ('" + EXAM + "', 'Invented river exam', 'en-GB', 0)");
                 s.execute("INSERT INTO bundles VALUES ('b0', '" + EXAM + "', 'fp', '2026-12-01T00:00:00Z')");
                 s.execute("INSERT INTO policy_snapshots(policy_id, policy_json, spelling, insert_from_panel, show_word_count,"
                         + " paste) VALUES (1, '{}', 'off', 0, 0, 'allow')");

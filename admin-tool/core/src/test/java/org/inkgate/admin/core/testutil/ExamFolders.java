@@ -50,6 +50,16 @@ public final class ExamFolders {
 
     /** A valid folder with {@code tasks} tasks and {@code conditions} conditions. */
     public static Path withTasks(Path dir, int tasks, int conditions, String design, boolean live) throws IOException {
+        return withDesign(dir, tasks, conditions, "  kind: " + design + "\n"
+                + (design.equals("parallel") ? "" : "  rotateConditions: true\n"), live);
+    }
+
+    /**
+     * A folder with {@code tasks} tasks, {@code conditions} conditions and the design block's lines
+     * as given (indented two spaces, each ending in a line break; the post-questionnaire is added).
+     */
+    public static Path withDesign(Path dir, int tasks, int conditions, String designLines, boolean live)
+            throws IOException {
         Files.createDirectories(dir.resolve("prompts"));
         Files.createDirectories(dir.resolve("packs"));
         StringBuilder y = new StringBuilder();
@@ -80,7 +90,7 @@ public final class ExamFolders {
                 y.append("      spelling: \"off\"\n");
             }
         }
-        y.append("design:\n  kind: ").append(design).append("\n  rotateConditions: true\n  postQuestionnaire: after\n");
+        y.append("design:\n").append(designLines).append("  postQuestionnaire: after\n");
         y.append("questionnaires:\n");
         y.append("  - id: after\n    title: After writing\n    items:\n");
         y.append("      - id: q1\n        text: Invented question.\n        kind: likert\n        labels: [\"not at all\", maybe, \"very much\"]\n");

@@ -392,7 +392,9 @@ public final class Migrations {
                       FOREIGN KEY (sitting_id, task_id) REFERENCES control_scripts(sitting_id, task_id)
                     )""")),
             new Migration(7, "task prompts, shown to raters beside the script",
-                    List.of("ALTER TABLE tasks ADD COLUMN prompt TEXT")));
+                    List.of("ALTER TABLE tasks ADD COLUMN prompt TEXT")),
+            new Migration(8, "the study design the exam's bundle declares (crossover, latin-square, parallel)",
+                    List.of("ALTER TABLE exams ADD COLUMN design TEXT")));
 
     private Migrations() {
     }

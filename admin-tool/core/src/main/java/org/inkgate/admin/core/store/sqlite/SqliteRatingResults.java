@@ -44,6 +44,15 @@ final class SqliteRatingResults implements RatingResults {
     }
 
     @Override
+    public String studyDesign() throws RatingException {
+        return s.read("reading the exam's design", () -> {
+            String[] design = {""};
+            s.db.each("SELECT COALESCE(design, '') FROM exams WHERE exam_id=?", rs -> design[0] = rs.getString(1), s.examId);
+            return design[0];
+        });
+    }
+
+    @Override
     public void forEachFinalScore(Consumer<FinalRow> sink) throws RatingException {
         s.read("reading final scores", () -> {
             s.db.each("SELECT s.candidate_number, COALESCE(c.level, ''), s.form_id, f.task_id, r.condition_id,"

@@ -327,6 +327,11 @@ public final class SqliteRatingStore implements RatingStore {
     }
 
     @Override
+    public synchronized String studyDesign() throws RatingException {
+        return results.studyDesign();
+    }
+
+    @Override
     public synchronized int pendingResponses() throws RatingException {
         return results.pendingResponses();
     }

@@ -126,6 +126,10 @@ public final class SqliteResultsStore implements ResultsStore {
             // INSERT OR IGNORE is SQLite's; PostgreSQL writes INSERT ... ON CONFLICT DO NOTHING
             update("INSERT OR IGNORE INTO exams(exam_id, title, language, practice) VALUES (?,?,?,?)",
                     m.examId(), m.title(), m.language(), m.practice() ? 1 : 0);
+            if (m.design() != null) {
+                // a bundle written before designs were recorded leaves it NULL; a later one fills it in
+                update("UPDATE exams SET design = ? WHERE exam_id = ? AND design IS NULL", m.design().word(), m.examId());
+            }
             update("INSERT OR IGNORE INTO bundles(manifest_sha256, exam_id, signer_fingerprint, registered_at) VALUES (?,?,?,?)",
                     manifestSha256, m.examId(), signerFingerprint, Instant.now().toString());
             for (TaskSpec t : m.tasks()) {
