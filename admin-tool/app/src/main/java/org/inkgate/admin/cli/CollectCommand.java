@@ -14,6 +14,7 @@ import org.inkgate.admin.core.source.ExamSourceReader;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.format.trust.TrustPolicy;
+import org.inkgate.packs.cli.ProgressReporter;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -86,7 +87,7 @@ final class CollectCommand implements Callable<Integer> {
         char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
         var encryptionKey = keyStore.encryptionKey(pass);
         CollectionRun.Report report;
-        Progress[] progress = {null};
+        ProgressReporter[] progress = {null};
         try {
             if (examSource != null) {
                 exam = ExamSourceReader.read(examSource);
@@ -96,7 +97,7 @@ final class CollectCommand implements Callable<Integer> {
                     n -> {
                         w.println("Collecting " + n + " package files into " + storeFile + " ...");
                         w.flush();
-                        progress[0] = Progress.onTerminal(err, "collect", n);
+                        progress[0] = ProgressReporter.onStandardError(err, "collect", "packages", n);
                     },
                     o -> {
                         if (o instanceof Outcome.Refused r) {
