@@ -68,11 +68,16 @@ final class BuildCommand implements Callable<Integer> {
         @Override
         public Integer call() {
             PrintWriter err = spec.commandLine().getErr();
-            try {
+            // the indexing is one library call, so the counter shows stages, not entries
+            try (ProgressReporter progress = ProgressReporter.onStandardError(err, "pack build", "stages", 2)) {
+                progress.stepTo(0, "reading the term bank");
                 List<GlossaryEntry> entries = GlossaryPacks.importFile(source);
+                progress.stepTo(1, "indexing " + entries.size() + " entries and writing the pack");
                 PackManifest m = GlossaryPacks.build(entries,
                         new GlossaryPacks.Metadata(id, version, title, licence, attribution, builtAt(builtAt)),
                         out, ScratchFolder.defaultParent());
+                progress.stepTo(2, "");
+                progress.close();
                 report(spec.commandLine().getOut(), out, m);
                 return ExitCodes.OK;
             } catch (GlossaryImportException e) {
@@ -117,8 +122,12 @@ final class BuildCommand implements Callable<Integer> {
                         + " resource-packs/target/packs/wordnet-3.1-en.inkpack), then name that file in exam.yaml.");
                 return ExitCodes.BAD_SOURCE;
             }
-            try {
-                PackManifest m = WordNetPackBuilder.build(out, ScratchFolder.defaultParent(), builtAt(builtAt));
+            // WordNet's entry count is known only at the end: a running counter
+            try (ProgressReporter progress = ProgressReporter.onStandardError(spec.commandLine().getErr(), "pack build",
+                    "dictionary entries", 0)) {
+                PackManifest m = WordNetPackBuilder.build(out, ScratchFolder.defaultParent(), builtAt(builtAt),
+                        n -> progress.stepTo(n, ""));
+                progress.close();
                 report(spec.commandLine().getOut(), out, m);
                 return ExitCodes.OK;
             } catch (PackRefusal e) {

@@ -49,6 +49,12 @@ public final class WordNetPackBuilder {
 
     /** Builds the pack into {@code target}, staging files under {@code work}; returns the manifest written. */
     public static PackManifest build(Path target, Path work, Instant builtAt) throws IOException, PackRefusal {
+        return build(target, work, builtAt, entries -> { });
+    }
+
+    /** As above, telling {@code entriesWritten} the running count of entries indexed (for a progress counter). */
+    public static PackManifest build(Path target, Path work, Instant builtAt, java.util.function.LongConsumer entriesWritten)
+            throws IOException, PackRefusal {
         Dictionary wordnet;
         try {
             wordnet = Dictionary.getDefaultResourceInstance();
@@ -65,6 +71,7 @@ public final class WordNetPackBuilder {
                     while (it.hasNext()) {
                         writer.add(entry(it.next()));
                         count++;
+                        entriesWritten.accept(count);
                     }
                 }
             }

@@ -14,6 +14,7 @@ import org.inkgate.analysis.mfrm.StudyRatings;
 import org.inkgate.analysis.process.ProcessMeasures;
 import org.inkgate.analysis.scores.ScoreRule;
 import org.inkgate.analysis.study.StudyOptions;
+import org.inkgate.packs.cli.ProgressReporter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -193,15 +194,17 @@ public final class AnalyseCommand implements Callable<Integer> {
                 toolUsage, process, questionnaire, store == null ? null : store.file(), exam, out, options, mfrmOptions, mfrmAnchors,
                 spec.commandLine().getParseResult().originalArgs());
         AnalysisRun.Written written;
-        try {
+        try (ProgressReporter progress = ProgressReporter.onStandardError(err, "analyse", "stages", 0)) {
             written = AnalysisRun.run(request, new AnalysisRun.Listener() {
                 @Override
                 public void stage(int done, int total, String what) {
-                    // the command line prints only the outcome
+                    progress.total(total);
+                    progress.stepTo(done, what);
                 }
 
                 @Override
                 public void warn(String text) {
+                    progress.clear();
                     err.println("inkgate-admin analyse: " + text);
                 }
             });

@@ -14,6 +14,7 @@ import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.format.crypto.Sha256;
+import org.inkgate.packs.cli.ProgressReporter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -75,9 +76,12 @@ final class BundleCommand implements Callable<Integer> {
         char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
         char[] pin = exam.practice() ? null : Secrets.read(spec, pinEnv, "invigilator PIN for this sitting", true);
         BundleBuilder.Built built;
-        try {
+        try (ProgressReporter progress = ProgressReporter.onStandardError(spec.commandLine().getErr(), "bundle", "stages", 0)) {
             built = BundleBuilder.build(exam, candidates, table, store.publicKeys().ownerKeys(), store.signingKey(pass), pin,
-                    seal, out);
+                    seal, out, (done, total, what) -> {
+                        progress.total(total);
+                        progress.stepTo(done, what);
+                    });
         } catch (InvalidSourceException e) {
             spec.commandLine().getErr().println(e.getMessage());
             return InkgateAdmin.PROBLEMS;

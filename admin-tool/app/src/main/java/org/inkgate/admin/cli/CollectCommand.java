@@ -15,6 +15,7 @@ import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.format.trust.TrustPolicy;
+import org.inkgate.packs.cli.ProgressReporter;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -88,7 +89,7 @@ final class CollectCommand implements Callable<Integer> {
         char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
         var encryptionKey = keyStore.encryptionKey(pass);
         CollectionRun.Report report;
-        Progress[] progress = {null};
+        ProgressReporter[] progress = {null};
         try {
             if (examSource != null) {
                 exam = ExamSourceReader.read(examSource);
@@ -98,7 +99,7 @@ final class CollectCommand implements Callable<Integer> {
                     n -> {
                         w.println("Collecting " + n + " package files into " + store + " ...");
                         w.flush();
-                        progress[0] = Progress.onTerminal(err, "collect", n);
+                        progress[0] = ProgressReporter.onStandardError(err, "collect", "packages", n);
                     },
                     o -> {
                         if (o instanceof Outcome.Refused r) {

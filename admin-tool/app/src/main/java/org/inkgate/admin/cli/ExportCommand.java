@@ -2,12 +2,14 @@ package org.inkgate.admin.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.export.StoreExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
+import org.inkgate.packs.cli.ProgressReporter;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -49,9 +51,21 @@ final class ExportCommand implements Callable<Integer> {
         PrintWriter w = spec.commandLine().getOut();
         XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
         try (ResultsStore store = Stores.openResultsForReading(StoreLocation.file(ExistingStore.require(location.file())))) {
-            for (String id : StoreExport.exams(store, examId)) {
-                StoreExport.write(location.file(), store, id, out, xapiOptions, spreadsheetSafe, part -> { }).lines()
-                        .forEach(line -> w.println(TerminalText.value(line)));
+            List<String> exams = StoreExport.exams(store, examId);
+            int parts = StoreExport.PARTS.size();
+            try (ProgressReporter progress = ProgressReporter.onStandardError(spec.commandLine().getErr(), "export",
+                    "parts", (long) exams.size() * parts)) {
+                for (int e = 0; e < exams.size(); e++) {
+                    String id = exams.get(e);
+                    int done = e * parts;
+                    List<String> lines = StoreExport.write(location.file(), store, id, out, xapiOptions, spreadsheetSafe,
+                            part -> progress.stepTo(done + part, TerminalText.value(id) + ": " + StoreExport.PARTS.get(part)))
+                            .lines();
+                    progress.stepTo(done + parts, "");
+                    progress.clear();
+                    lines.forEach(line -> w.println(TerminalText.value(line)));
+                    w.flush();
+                }
             }
         }
         w.println(StoreExport.HANDLING);

@@ -4,6 +4,7 @@ import java.io.FilterWriter;
 import java.io.IOException;
 import java.io.PrintWriter;
 import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.packs.cli.ProgressReporter;
 
 /**
  * What the command line prints, made safe for a terminal. Values from outside (file names, candidate
@@ -23,9 +24,28 @@ final class TerminalText {
         return value == null ? "(none)" : FormatRefusal.printable(String.valueOf(value));
     }
 
+    /**
+     * A guarded writer that hands the progress counter the writer it guards: the counter must send a
+     * bare carriage return to redraw its line, which the guard would escape, and escapes every other
+     * control character itself ({@link ProgressReporter}).
+     */
+    private static final class Guarded extends PrintWriter implements ProgressReporter.GuardedWriter {
+        private final PrintWriter raw;
+
+        Guarded(java.io.Writer filter, PrintWriter raw) {
+            super(filter, true);
+            this.raw = raw;
+        }
+
+        @Override
+        public PrintWriter unguarded() {
+            return raw;
+        }
+    }
+
     /** A writer that escapes every control character but tab and line ends before they reach {@code out}. */
     static PrintWriter guard(PrintWriter out) {
-        return new PrintWriter(new FilterWriter(out) {
+        return new Guarded(new FilterWriter(out) {
             @Override
             public void write(int c) throws IOException {
                 write(String.valueOf((char) c), 0, 1);
@@ -50,6 +70,6 @@ final class TerminalText {
                 }
                 out.write(b.toString());
             }
-        }, true);
+        }, out);
     }
 }

@@ -46,6 +46,22 @@ public final class BundleBuilder {
     /** The manifest and entry contents for the exam, checked but not yet written. */
     public static Map.Entry<BundleManifest, Map<String, byte[]>> prepare(ExamSource exam, List<RosterCandidate> roster,
             Assignment assignment, OwnerKeys ownerKeys, PinHash pin) throws InvalidSourceException, IOException {
+        return prepare(exam, roster, assignment, ownerKeys, pin, Listener.NONE);
+    }
+
+    /**
+     * Hears how far a build is: one stage per pack checked and read (packs are the large part), then
+     * signing and writing; called on the building thread.
+     */
+    public interface Listener {
+        Listener NONE = (done, total, what) -> { };
+
+        void stage(int done, int total, String what);
+    }
+
+    private static Map.Entry<BundleManifest, Map<String, byte[]>> prepare(ExamSource exam, List<RosterCandidate> roster,
+            Assignment assignment, OwnerKeys ownerKeys, PinHash pin, Listener listener) throws InvalidSourceException, IOException {
+        int stages = exam.packs().size() + 1;
         List<Problem> problems = new ArrayList<>();
         Map<String, byte[]> contents = new LinkedHashMap<>();
         if (exam.instructionsFile() != null) {
@@ -57,7 +73,9 @@ public final class BundleBuilder {
             tasks.add(new TaskSpec(t.id(), t.title(), t.promptFile(), t.timeLimitSeconds(), t.warningMinutes(), t.words()));
         }
         List<PackRef> packs = new ArrayList<>();
+        int stage = 0;
         for (ExamSource.Pack p : exam.packs()) {
+            listener.stage(stage++, stages, "checking pack " + p.id());
             Path packFile = exam.folder().resolve(p.file());
             PackCheck.check(p, packFile, problems);
             byte[] bytes = Files.readAllBytes(packFile);
@@ -104,8 +122,17 @@ public final class BundleBuilder {
      */
     public static Built build(ExamSource exam, List<RosterCandidate> roster, Assignment assignment, OwnerKeys ownerKeys,
             PrivateKey signingKey, char[] invigilatorPin, boolean seal, Path out) throws InvalidSourceException, IOException {
+        return build(exam, roster, assignment, ownerKeys, signingKey, invigilatorPin, seal, out, Listener.NONE);
+    }
+
+    /** As above, telling {@code listener} how far it is. */
+    public static Built build(ExamSource exam, List<RosterCandidate> roster, Assignment assignment, OwnerKeys ownerKeys,
+            PrivateKey signingKey, char[] invigilatorPin, boolean seal, Path out, Listener listener)
+            throws InvalidSourceException, IOException {
         PinHash pin = invigilatorPin == null ? null : PinHasher.hash(invigilatorPin);
-        Map.Entry<BundleManifest, Map<String, byte[]>> prepared = prepare(exam, roster, assignment, ownerKeys, pin);
+        Map.Entry<BundleManifest, Map<String, byte[]>> prepared = prepare(exam, roster, assignment, ownerKeys, pin, listener);
+        int stages = exam.packs().size() + 1;
+        listener.stage(stages - 1, stages, seal ? "sealing, signing and writing" : "signing and writing");
         BundleWriter writer = new BundleWriter(signingKey);
         Path parent = out.toAbsolutePath().getParent();
         if (parent != null) {
@@ -114,9 +141,11 @@ public final class BundleBuilder {
         if (seal) {
             char[] code = ReleaseCode.generate();
             writer.writeSealed(prepared.getKey(), prepared.getValue(), code, out);
+            listener.stage(stages, stages, "");
             return new Built(out, prepared.getKey(), code);
         }
         writer.write(prepared.getKey(), prepared.getValue(), out);
+        listener.stage(stages, stages, "");
         return new Built(out, prepared.getKey(), null);
     }
 }
