@@ -11,9 +11,9 @@ import org.inkgate.analysis.distributions.NoncentralF;
  * whose variance is sigma^2 (1 - rho), so F is noncentral F with k - 1 and (n - 1)(k - 1) degrees
  * of freedom and noncentrality lambda = n k f^2 / (1 - rho). When sphericity is not assumed, the
  * Greenhouse-Geisser epsilon multiplies both degrees of freedom and lambda. This is the
- * computation of G*Power's "repeated measures, within factors" procedure (Faul, Erdfelder, Lang
- * &amp; Buchner 2007, Behavior Research Methods 39, 175-191; its manual gives lambda = f^2 u n epsilon
- * with u = k / (1 - rho); from memory) and follows from the model above for epsilon = 1; the
+ * computation Faul, Erdfelder, Lang &amp; Buchner (2007, Behavior Research Methods 39, 175-191)
+ * describe for a repeated-measures within-candidate factor, lambda = f^2 u n epsilon with
+ * u = k / (1 - rho) (from memory), and follows from the model above for epsilon = 1; the
  * epsilon scaling is an approximation (Muller &amp; Barton 1989, JASA 84, 549-555, from memory).
  */
 public record RepeatedMeasuresDesign(int conditions, double effectF, double correlation, double epsilon, double alpha)
