@@ -151,4 +151,18 @@ class PowerDesignsTest {
         var e = assertThrows(IllegalArgumentException.class, () -> new RepeatedMeasuresDesign(3, 0.25, 0.5, 0.4, 0.05));
         assertTrue(e.getMessage().contains("between 1/2 and 1"), e.getMessage());
     }
+
+    @Test
+    void repeatedMeasures_wuenschWorkedExample_noncentralityAndPower() {
+        // Wuensch (2005), "Power analysis for one-way repeated measures ANOVA" (course handout, East
+        // Carolina University; read from a stored copy of the page): n = 64, m = 3 conditions, f^2 = .01,
+        // rho = .79 give lambda = n m f^2 / (1 - rho); entered as "effect size" .143 (rounded) with
+        // df 2 and 128, power = .7677. Our noncentrality is that lambda; the handout's denominator df
+        // n (m - 1) = 128 differs from our (n - 1)(m - 1) = 126, so its power is checked through the
+        // noncentral F with its own df and its own rounded lambda = .143 x 64, to its four decimals.
+        var design = new RepeatedMeasuresDesign(3, 0.1, 0.79, 1, 0.05);
+        assertEquals(64 * 3 * 0.01 / 0.21, design.test(64).noncentrality(), 1e-12);
+        double critical = new org.apache.commons.math3.distribution.FDistribution(2, 128).inverseCumulativeProbability(0.95);
+        assertEquals(0.7677, org.inkgate.analysis.distributions.NoncentralF.upper(critical, 2, 128, 0.143 * 64), 5e-5);
+    }
 }
