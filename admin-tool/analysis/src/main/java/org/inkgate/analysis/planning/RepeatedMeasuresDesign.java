@@ -37,22 +37,22 @@ public record RepeatedMeasuresDesign(int conditions, double effectF, double corr
     }
 
     /** Degrees of freedom and noncentrality of the test with n candidates. */
-    public record Test(double numeratorDf, double denominatorDf, double noncentrality, double criticalF) {
+    public record FTestParameters(double numeratorDf, double denominatorDf, double noncentrality, double criticalF) {
     }
 
-    public Test test(int candidates) {
+    public FTestParameters test(int candidates) {
         if (candidates < fewestCandidates()) {
             throw new IllegalArgumentException("a repeated-measures ANOVA needs at least 2 candidates: " + candidates);
         }
         double d1 = (conditions - 1) * epsilon;
         double d2 = (candidates - 1) * (conditions - 1) * epsilon;
         double lambda = candidates * conditions * effectF * effectF / (1 - correlation) * epsilon;
-        return new Test(d1, d2, lambda, CriticalValues.f(1 - alpha, d1, d2));
+        return new FTestParameters(d1, d2, lambda, CriticalValues.f(1 - alpha, d1, d2));
     }
 
     @Override
     public double power(int candidates) {
-        Test t = test(candidates);
+        FTestParameters t = test(candidates);
         return NoncentralF.upper(t.criticalF(), t.numeratorDf(), t.denominatorDf(), t.noncentrality());
     }
 

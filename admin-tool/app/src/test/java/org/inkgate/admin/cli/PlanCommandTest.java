@@ -61,7 +61,7 @@ class PlanCommandTest {
         // 0.625 logits over 1.25 logits is d = 0.5: Cohen (1992, Table 2, from memory) and R both give 64 per group
         Run r = run("plan", "groups", "--logit-difference", "0.625", "--candidate-sd-logits", "1.25", "--power", "0.8");
         assertEquals(0, r.code(), r.err());
-        assertTrue(r.out().contains("d = 0.5 (0.625 logits / candidate standard deviation 1.25 logits)"), r.out());
+        assertTrue(r.out().contains("d = 0.500 (0.625 logits / candidate standard deviation 1.25 logits)"), r.out());
         assertTrue(r.out().contains("64 + 64 = 128"), r.out());
     }
 
