@@ -245,7 +245,8 @@ final class PlanCommand extends GroupCommand {
 
         @Option(names = "--effect-f", paramLabel = "F",
                 description = "the effect as Cohen's f: standard deviation of the condition means / standard deviation"
-                        + " of scores in one condition")
+                        + " of scores in one condition (not an f from a pilot's partial eta squared, which divides by"
+                        + " the candidate x condition error instead)")
         Double f;
 
         @Option(names = "--means", paramLabel = "M", split = ",",
