@@ -28,6 +28,7 @@ import picocli.CommandLine.Command;
             RateCommand.class,
             QtiCommand.class,
             AnalyseCommand.class,
+            PlanCommand.class,
             GuiCommand.class,
             org.inkgate.packs.cli.PackCommand.class,
             CommandLine.HelpCommand.class,
