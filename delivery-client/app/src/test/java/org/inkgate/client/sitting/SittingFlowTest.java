@@ -143,9 +143,9 @@ class SittingFlowTest {
 
     @Test
     void forCandidate_numberNotOnTheRoster_saysSo() {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SittingPlan.forCandidate(
+        IllegalArgumentException e = assertThrows(SittingPlan.NotOnRoster.class, () -> SittingPlan.forCandidate(
                 org.inkgate.format.testutil.SampleExam.manifest(), SittingFixtures.SHA, "x", "9999", "", null, "test"));
-        assertTrue(e.getMessage().contains("9999") && e.getMessage().contains("roster"), e.getMessage());
+        assertTrue(e.getMessage().contains("9999") && e.getMessage().contains("not on the list"), e.getMessage());
     }
 
     private static void type(Sitting s, String task, String text, FakeClock clock) {
