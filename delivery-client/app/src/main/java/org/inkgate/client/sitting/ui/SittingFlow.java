@@ -155,6 +155,16 @@ public final class SittingFlow {
     private final Map<String, Integer> words = new LinkedHashMap<>();
     private InvigilatorDesk desk;
     private Screen current = Screen.NONE;
+    /** A focus loss was listed, so its return is listed too. */
+    private boolean lossNoted;
+    /** When the invigilator paused (monotonic), for the resume line; MIN_VALUE when not paused here. */
+    private long pausedAtMono = Long.MIN_VALUE;
+    /** Where the last hand-in went, for the invigilator screen after it. */
+    private HandedIn handedIn;
+
+    /** Where a handed-in package went, and when. */
+    private record HandedIn(Path delivered, Path localCopy, Instant at) {
+    }
 
     /** Where the flow is; the invigilator panel and the lock depend on it. */
     enum Screen { NONE, REFUSED, RECOVERY, SETUP, SIGN_IN, INSTRUCTIONS, QUESTIONNAIRE, TASK, REVIEW, SUBMIT, FINISHED }
@@ -406,7 +416,9 @@ public final class SittingFlow {
         }
         status(screen, "Preparing the writing tools...");
         try {
-            packs = new BundlePacks(bundle);
+            if (packs == null) {
+                packs = new BundlePacks(bundle); // the bundle's packs serve every candidate at this seat
+            }
         } catch (IOException e) {
             status(screen, "The writing tools could not be prepared (" + e.getMessage() + "). Ask the invigilator.");
             return;
@@ -529,7 +541,7 @@ public final class SittingFlow {
             shell.show(taskScreen.root());
             shell.announcer().clear();
             if (start.mismatch().isPresent()) {
-                focusLine("Recovery note: " + start.mismatch().get().describe());
+                desk.eventNote("Recovery note: " + start.mismatch().get().describe());
             }
             updateClock();
             ticker.play();
@@ -600,7 +612,7 @@ public final class SittingFlow {
                 case SittingSignal.TaskTimeUp up -> timeUp(false);
                 case SittingSignal.SittingTimeUp up -> timeUp(true);
                 case SittingSignal.StorageTrouble trouble -> storageTrouble(trouble.message());
-                case SittingSignal.StorageRecovered ok -> focusLine("Saving works again.");
+                case SittingSignal.StorageRecovered ok -> desk.eventNote("Saving works again.");
             }
         }
         updateClock();
@@ -757,7 +769,7 @@ public final class SittingFlow {
     private void delivered(SubmissionResult result) {
         if (result.failure().isPresent()) {
             DeliveryFailure failure = result.failure().get();
-            focusLine("Hand-in to the output folder failed: " + failure.message());
+            desk.eventNote("Hand-in to the output folder failed: " + failure.message());
             submitScreen.failed(failure.message());
             return;
         }
@@ -766,10 +778,12 @@ public final class SittingFlow {
 
     private void showFinished(Path delivered, Path localCopy) {
         current = Screen.FINISHED;
+        handedIn = new HandedIn(delivered, localCopy, setup.clock().now());
         ticker.stop();
         shell.time(null, "", false);
         FinishedScreen screen = new FinishedScreen("For the invigilator: the response package is " + delivered
-                + "; a copy is kept at " + localCopy + ". Open the invigilator screen (Ctrl+Shift+F12) to exit.");
+                + "; a copy is kept at " + localCopy + ". Open the invigilator screen (Ctrl+Shift+F12) for the next"
+                + " candidate or to exit.");
         shell.show(screen.root());
     }
 
@@ -830,8 +844,9 @@ public final class SittingFlow {
             outputFolder = input.outputFolder().toAbsolutePath();
             seat = plan.seat();
             applyDisplay();
-            focusLine("Sitting resumed after " + TimeText.duration(down.toMillis()) + (input.credit()
-                    ? "; that time was given back" : "; that time was not given back"));
+            desk.eventNote("The machine was down for " + TimeText.duration(down.toMillis()) + " (last saved at "
+                    + CLOCK.format(found.lastActivity()) + "); " + (input.credit() ? "that time was given back"
+                    : "that time was not given back"));
             continueRecovered(found);
         });
     }
@@ -932,8 +947,8 @@ public final class SittingFlow {
             }
 
             @Override
-            public boolean inTask() {
-                return current == Screen.TASK;
+            public InvigilatorPanel.Moment moment() {
+                return SittingFlow.this.moment();
             }
 
             @Override
@@ -945,8 +960,9 @@ public final class SittingFlow {
             public void addMinutes(int minutes) {
                 if (current == Screen.TASK && sitting != null) {
                     sitting.addTime(java.time.Duration.ofMinutes(minutes));
-                    shell.announcer().announce(minutes + (minutes == 1 ? " minute was" : " minutes were")
-                            + " added to this task.");
+                    String added = minutes + (minutes == 1 ? " minute" : " minutes");
+                    shell.announcer().announce(added + (minutes == 1 ? " was" : " were") + " added to this task.");
+                    desk.eventNote(added + " added to the task \"" + currentTaskTitle() + "\"");
                     updateClock();
                 }
             }
@@ -954,6 +970,11 @@ public final class SittingFlow {
             @Override
             public void endTask() {
                 SittingFlow.this.endTask(EndReason.ENDED_BY_INVIGILATOR);
+            }
+
+            @Override
+            public void nextCandidate() {
+                SittingFlow.this.nextCandidate();
             }
 
             @Override
@@ -973,8 +994,32 @@ public final class SittingFlow {
         };
     }
 
+    /** Where the sitting is, as far as the invigilator's actions go. */
+    private InvigilatorPanel.Moment moment() {
+        if (plan == null) {
+            return InvigilatorPanel.Moment.NO_CANDIDATE;
+        }
+        return switch (current) {
+            case TASK -> InvigilatorPanel.Moment.IN_TASK;
+            case SUBMIT -> InvigilatorPanel.Moment.HANDING_IN;
+            case FINISHED -> InvigilatorPanel.Moment.HANDED_IN;
+            case NONE, REFUSED, RECOVERY, SETUP, SIGN_IN, INSTRUCTIONS, QUESTIONNAIRE, REVIEW ->
+                InvigilatorPanel.Moment.AT_WORK;
+        };
+    }
+
     private String stateLine() {
         StringBuilder state = new StringBuilder();
+        if (plan != null && current == Screen.FINISHED && handedIn != null) {
+            return "Candidate " + plan.candidateNumber() + ", form " + plan.formId() + ": the answers were handed in"
+                    + " at " + CLOCK.format(handedIn.at()) + ". The response package is written to " + handedIn.delivered()
+                    + "; a copy is kept at " + handedIn.localCopy() + ". This candidate's sitting is over.";
+        }
+        if (plan != null && current == Screen.SUBMIT) {
+            return "Candidate " + plan.candidateNumber() + ", form " + plan.formId() + ": the answers are handed in and"
+                    + " saved on this machine, but the response package is not yet written to the output folder "
+                    + outputFolder + ". The candidate's screen says what is wrong and offers to try again.";
+        }
         if (plan == null) {
             state.append("No candidate has signed in yet.");
         } else {
@@ -994,8 +1039,10 @@ public final class SittingFlow {
                         .append(". ");
             }
         }
-        state.append(paused ? "The exam is PAUSED." : "The exam is running.");
-        return state.toString();
+        if (plan != null || paused) {
+            state.append(paused ? "The exam is PAUSED." : "The exam is running.");
+        }
+        return state.toString().strip();
     }
 
     private void setPaused(boolean pause) {
@@ -1006,11 +1053,16 @@ public final class SittingFlow {
         if (pause) {
             typeAhead.drop();
             sitting.pauseAll();
+            pausedAtMono = setup.clock().monoNanos();
+            desk.eventNote("Paused by the invigilator");
             freeze(true);
             desk.coverPaused(true);
             shell.announcer().announce(PausedCover.HEADING + ".");
         } else {
             sitting.resumeAll();
+            desk.eventNote("Resumed" + (pausedAtMono == Long.MIN_VALUE ? "" : " after a pause of "
+                    + TimeText.duration((setup.clock().monoNanos() - pausedAtMono) / 1_000_000)));
+            pausedAtMono = Long.MIN_VALUE;
             desk.coverPaused(false);
             if (!taskEnding) {
                 freeze(false);
@@ -1021,6 +1073,43 @@ public final class SittingFlow {
                 startNextTask();
             }
         }
+    }
+
+    /**
+     * After the hand-in, the next candidate at this seat: the handed-in sitting is closed (its
+     * database, package and local copy stay as they are) and sign-in shows again with the set-up's
+     * output folder, seat and form. The next candidate's sitting is a new one with its own database.
+     */
+    private void nextCandidate() {
+        if (current != Screen.FINISHED) {
+            return;
+        }
+        try {
+            sitting.close();
+        } catch (IOException | RuntimeException e) {
+            // handed in: the package and its local copy are written; closing only flushes the log
+            desk.eventNote("The last sitting's database did not close cleanly: " + e.getMessage());
+        }
+        if (shelf != null) {
+            shelf.close();
+            shelf = null;
+        }
+        sitting = null;
+        plan = null;
+        taskIndex = -1;
+        words.clear();
+        paused = false;
+        pausedAtMono = Long.MIN_VALUE;
+        lossNoted = false;
+        taskEnding = false;
+        entryWaiting = false;
+        submitScreen = null;
+        handedIn = null;
+        display = DisplaySettings.standard();
+        SittingTheme.apply(shell.root(), display);
+        shell.who("");
+        desk.clear();
+        showSignIn();
     }
 
     private void exitByInvigilator() {
@@ -1039,30 +1128,42 @@ public final class SittingFlow {
 
     // ---- focus, storage ----
 
+    /**
+     * Focus is watched while a candidate's sitting runs, from sign-in to the hand-in: before it the
+     * window is the invigilator's (and settles as it opens and goes full screen, which is no loss),
+     * after it nothing is at stake. A return is listed only after a loss that was.
+     */
     private void onFocusLost() {
-        focusLine("Focus lost");
-        if (sitting != null) {
-            sitting.log().record(EventType.FOCUS_LOST, currentTaskId(), Map.of());
+        if (sitting == null || current == Screen.FINISHED) {
+            return;
         }
+        lossNoted = true;
+        desk.focusNote("Focus lost");
+        sitting.log().record(EventType.FOCUS_LOST, currentTaskId(), Map.of());
     }
 
     private void onFocusReturned(long awayMillis) {
-        focusLine("Focus returned after " + TimeText.duration(awayMillis));
+        if (!lossNoted) {
+            return;
+        }
+        lossNoted = false;
+        desk.focusNote("Focus returned after " + TimeText.duration(awayMillis));
         if (sitting != null) {
             sitting.log().record(EventType.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
         }
+    }
+
+    private String currentTaskTitle() {
+        String id = currentTaskId();
+        return id == null ? "" : plan.manifest().task(id).map(TaskSpec::title).orElse(id);
     }
 
     private String currentTaskId() {
         return current == Screen.TASK && taskIndex >= 0 ? plan.form().slots().get(taskIndex).taskId() : null;
     }
 
-    private void focusLine(String what) {
-        desk.note(what);
-    }
-
     private void storageTrouble(String message) {
-        focusLine("Saving failed: " + message);
+        desk.eventNote("Saving failed: " + message);
         shell.announcer().announce("Invigilator: this machine cannot save the work at the moment (" + message
                 + "). Keep the program open; do not switch the machine off.");
     }
@@ -1133,7 +1234,7 @@ public final class SittingFlow {
             if (failure != null) {
                 String message = "The answers could not be saved as a response package (" + rootMessage(failure)
                         + "). Everything typed is still in this machine's sitting database.";
-                focusLine(message);
+                desk.eventNote(message);
                 submitScreen.failed(message);
                 return;
             }
@@ -1208,9 +1309,9 @@ public final class SittingFlow {
         return shelf != null;
     }
 
-    /** Lines the invigilator screen lists (focus changes, hand-in trouble), oldest first. */
+    /** Lines the invigilator screen's focus list shows, oldest first. */
     List<String> focusLines() {
-        return desk.lines();
+        return desk.focusLines();
     }
 
     Screen screen() {

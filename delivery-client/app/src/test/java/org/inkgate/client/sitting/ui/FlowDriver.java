@@ -185,6 +185,21 @@ final class FlowDriver {
         press("confirmFinishButton");
     }
 
+    /** Opens the invigilator screen as the invigilator does: Ctrl+Shift+F12, then the PIN. */
+    void openInvigilator() throws Exception {
+        robot.press(javafx.scene.input.KeyCode.CONTROL, javafx.scene.input.KeyCode.SHIFT, javafx.scene.input.KeyCode.F12)
+                .release(javafx.scene.input.KeyCode.F12, javafx.scene.input.KeyCode.SHIFT, javafx.scene.input.KeyCode.CONTROL);
+        type("pinField", demoPin());
+        press("pinOk");
+        await("invigilatorPanel", Node.class);
+    }
+
+    /** Whether a node with this id is in the scene and showing (its own visibility only). */
+    boolean showing(String id) {
+        WaitForAsyncUtils.waitForFxEvents();
+        return robot.lookup("#" + id).tryQuery().map(Node::isVisible).orElse(false);
+    }
+
     static BundleReader demoReader() throws Exception {
         return new BundleReader(TrustPolicy.trusting(Set.of(demoOwnerKey())));
     }

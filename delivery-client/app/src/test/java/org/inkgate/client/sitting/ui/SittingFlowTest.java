@@ -132,14 +132,14 @@ class SittingFlowTest {
     }
 
     @Test
-    void signIn_unknownCandidateNumber_saysItIsNotOnTheRoster(FxRobot robot) throws Exception {
+    void signIn_unknownCandidateNumber_saysItIsNotOnTheList(FxRobot robot) throws Exception {
         FlowDriver d = driver();
         d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
         d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
 
         d.signIn("X9999");
 
-        d.awaitText("signInError", "not on this exam's roster");
+        d.awaitText("signInError", "not on the list for this exam");
         assertEquals(SittingFlow.Screen.SIGN_IN, d.flow.screen());
     }
 
@@ -277,6 +277,7 @@ class SittingFlowTest {
         d.awaitText("announcement", "5 minutes were added");
 
         d.press("endTaskButton");
+        d.press("confirmEndTaskButton");
         d.awaitTask("The empty shop on Mill Street");
         assertTrue(d.workspaces.getFirst().closed(), "the ended task's workspace was not closed");
     }

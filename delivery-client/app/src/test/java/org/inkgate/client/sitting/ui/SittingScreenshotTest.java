@@ -107,6 +107,8 @@ class SittingScreenshotTest {
         d.press("retryButton");
         d.await("finishedScreen", Node.class);
         save(robot, "sitting-12-finished.png");
+        d.openInvigilator();
+        save(robot, "sitting-16-invigilator-after-hand-in.png");
     }
 
     @Test
