@@ -29,6 +29,7 @@ import java.util.TreeSet;
 import java.util.UUID;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Collectors;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.sitting.recovery.RecoveryScan;
 import org.inkgate.client.sitting.recovery.TextRecovery;
 import org.inkgate.client.sitting.recovery.UnfinishedSitting;

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.sitting.ui.overlay.InvigilatorPanel;
 import org.inkgate.client.sitting.ui.overlay.PausedCover;
 import org.inkgate.client.sitting.ui.overlay.PinPrompt;

@@ -10,7 +10,7 @@ import java.util.List;
 import java.util.stream.Stream;
 import javafx.scene.Node;
 import javafx.scene.control.ListView;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.sitting.recovery.RecoveryScan;
 import org.inkgate.client.sitting.store.ClientDataFolder;
 import org.inkgate.client.sitting.store.SittingDatabase;

@@ -11,7 +11,7 @@ import java.util.concurrent.atomic.AtomicReference;
 import javafx.scene.Node;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.testutil.PngSnapshots;
 import org.inkgate.client.testutil.Tampering;
 import org.junit.jupiter.api.Test;

@@ -15,7 +15,7 @@ import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /**
  * The invigilator's screen, opened behind the PIN: the state of this machine's sitting, every

@@ -7,7 +7,7 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.VBox;
 import org.inkgate.client.practice.PromptText;
 import org.inkgate.client.practice.ui.PromptView;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /** The exam's instructions and the plan of the sitting; the writing tools warm up meanwhile. */
 public final class InstructionsScreen {

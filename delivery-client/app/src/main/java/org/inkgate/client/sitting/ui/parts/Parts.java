@@ -1,4 +1,4 @@
-package org.inkgate.client.sitting.ui;
+package org.inkgate.client.sitting.ui.parts;
 
 import javafx.geometry.Pos;
 import javafx.scene.AccessibleRole;
