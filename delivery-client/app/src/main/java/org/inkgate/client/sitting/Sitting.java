@@ -38,6 +38,7 @@ import org.inkgate.client.sitting.replay.ReplayMismatch;
 import org.inkgate.client.sitting.replay.TextReplay;
 import org.inkgate.client.sitting.store.ClientDataFolder;
 import org.inkgate.client.sitting.store.SittingDatabase;
+import org.inkgate.client.sitting.store.SittingScreen;
 import org.inkgate.client.sitting.store.SqliteProcessLog;
 import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.sitting.submit.PackageDelivery;
@@ -108,7 +109,7 @@ public final class Sitting implements AutoCloseable {
     private final Optional<Countdown> sittingCountdown;
     private boolean sittingClockStarted;
     private String currentTask;
-    private String screen;
+    private SittingScreen screen;
     private boolean paused;
     private long pauseStartedMono;
     private long lastCheckpointMono;
@@ -167,7 +168,7 @@ public final class Sitting implements AutoCloseable {
                 + SittingDatabase.SUFFIX);
         SqliteProcessLog log = SqliteProcessLog.open(file, clock);
         Sitting s = new Sitting(id, plan, folder, clock, log, now, Map.of(), Map.of(), 0, 0);
-        s.screen = "";
+        s.screen = SittingScreen.START;
         log.persist(c -> {
             try (PreparedStatement ps = c.prepareStatement("INSERT INTO sitting(id, sitting_id, bundle_sha256, bundle_file, exam_id,"
                     + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, client_version, screen,"
@@ -260,7 +261,7 @@ public final class Sitting implements AutoCloseable {
                     entry.map(r -> r.highContrast()).orElse(false), rs.getString(12));
             Sitting s = new Sitting(found.sittingId(), plan, folder, clock, log, Instant.parse(rs.getString(3)), usedAdded, warned,
                     rs.getLong(4), rs.getLong(5));
-            s.screen = Objects.requireNonNullElse(rs.getString(6), "");
+            s.screen = SittingScreen.fromWire(Objects.requireNonNullElse(rs.getString(6), ""));
             s.currentTask = rs.getString(7);
             s.paused = rs.getInt(8) != 0;
             s.pauseStartedMono = clock.monoNanos();
@@ -352,7 +353,7 @@ public final class Sitting implements AutoCloseable {
     }
 
     /** The screen last shown ({@link #showScreen}). */
-    public String screen() {
+    public SittingScreen screen() {
         return screen;
     }
 
@@ -389,11 +390,17 @@ public final class Sitting implements AutoCloseable {
     // -- what the flow does --
 
     /** Logs that a screen of the flow is shown ({@code nav.screen}) and remembers it for recovery. */
-    public void showScreen(String name) {
+    public void showScreen(SittingScreen shown) {
         requireOpen();
-        screen = Objects.requireNonNull(name, "name");
-        log.record(EventType.NAV_SCREEN, currentTask, Map.of("screen", name));
-        log.persist(c -> update(c, "UPDATE sitting SET screen = ? WHERE id = 1", name));
+        screen = Objects.requireNonNull(shown, "shown");
+        log.record(EventType.NAV_SCREEN, currentTask, Map.of("screen", shown.wireName()));
+        log.persist(c -> update(c, "UPDATE sitting SET screen = ? WHERE id = 1", shown.wireName()));
+    }
+
+    /** Logs that the invigilator closed the client without a hand-in; the screen to resume on stays as it was. */
+    public void exitedByInvigilator() {
+        requireOpen();
+        log.record(EventType.NAV_SCREEN, currentTask, Map.of("screen", SittingScreen.EXIT_BY_INVIGILATOR.wireName()));
     }
 
     /**

@@ -47,7 +47,7 @@ class SittingFlowTest {
         InstallationKey key = InstallationKey.loadOrCreate(folder);
         SubmissionResult result;
         try (Sitting s = Sitting.begin(SittingFixtures.candidate1001(), folder, clock)) {
-            s.showScreen("instructions");
+            s.showScreen(org.inkgate.client.sitting.store.SittingScreen.INSTRUCTIONS);
             TaskStart t1 = s.enterTask("t1");
             assertEquals("", t1.text());
             assertFalse(t1.resumed());

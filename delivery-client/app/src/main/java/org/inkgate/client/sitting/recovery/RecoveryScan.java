@@ -15,6 +15,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 import org.inkgate.client.sitting.store.ClientDataFolder;
+import org.inkgate.client.sitting.store.SittingScreen;
 import org.inkgate.client.sitting.store.SittingDatabase;
 import org.sqlite.SQLiteConfig;
 
@@ -75,7 +76,7 @@ public final class RecoveryScan {
                 Instant last = lastEvent != null && lastEvent.isAfter(checkpoint) ? lastEvent : checkpoint;
                 return Optional.of(new UnfinishedSitting(file, rs.getString(1), rs.getString(2), rs.getString(3),
                         rs.getString(4), rs.getString(5), rs.getString(6), Optional.ofNullable(rs.getString(7)),
-                        Optional.ofNullable(rs.getString(8)).orElse(""),
+                        SittingScreen.fromWire(Optional.ofNullable(rs.getString(8)).orElse("")),
                         AWAITING_DELIVERY.equals(status) ? UnfinishedSitting.Stage.AWAITING_DELIVERY
                                 : UnfinishedSitting.Stage.IN_PROGRESS,
                         last, rs.getInt(11) != 0, outputFolder));

@@ -47,6 +47,7 @@ import org.inkgate.client.sitting.TaskStart;
 import org.inkgate.client.sitting.recovery.RecoveryScan;
 import org.inkgate.client.sitting.recovery.UnfinishedSitting;
 import org.inkgate.client.sitting.store.ClientDataFolder;
+import org.inkgate.client.sitting.store.SittingScreen;
 import org.inkgate.client.sitting.submit.DeliveryFailure;
 import org.inkgate.client.sitting.ui.lock.StageLock;
 import org.inkgate.client.sitting.open.SittingLoad;
@@ -392,7 +393,7 @@ public final class SittingFlow {
 
     private void showInstructions() {
         current = Screen.INSTRUCTIONS;
-        sitting.showScreen("instructions");
+        sitting.showScreen(SittingScreen.INSTRUCTIONS);
         BundleManifest m = plan.manifest();
         PromptText instructions = readPrompt(m.instructionsFile());
         List<String> lines = new ArrayList<>();
@@ -467,7 +468,7 @@ public final class SittingFlow {
 
     private void showQuestionnaire(String id, Runnable then) {
         current = Screen.QUESTIONNAIRE;
-        sitting.showScreen("questionnaire");
+        sitting.showScreen(SittingScreen.QUESTIONNAIRE);
         QuestionnaireSpec q = plan.manifest().questionnaire(id).orElseThrow();
         QuestionnaireScreen screen = new QuestionnaireScreen(q, answers -> {
             answers.forEach((item, value) -> sitting.answer(q.id(), item, value));
@@ -507,7 +508,7 @@ public final class SittingFlow {
         current = Screen.TASK;
         taskIndex = index;
         taskEnding = false;
-        sitting.showScreen("task");
+        sitting.showScreen(SittingScreen.TASK);
         TaskStart start;
         try {
             start = sitting.enterTask(slot.taskId());
@@ -719,7 +720,7 @@ public final class SittingFlow {
 
     private void showReview() {
         current = Screen.REVIEW;
-        sitting.showScreen("review");
+        sitting.showScreen(SittingScreen.REVIEW);
         List<ReviewScreen.Row> rows = new ArrayList<>();
         for (FormSlot slot : plan.form().slots()) {
             TaskSpec task = plan.manifest().task(slot.taskId()).orElseThrow();
@@ -797,8 +798,8 @@ public final class SittingFlow {
         List<String> facts = new ArrayList<>();
         facts.add("Candidate: " + found.candidateNumber() + ", form " + found.formId());
         facts.add("On screen when it stopped: " + found.currentTask().flatMap(id -> bundle.manifest().task(id))
-                .map(t -> "the task \"" + t.title() + "\"").orElse(found.screen().isEmpty() ? "the start" : "the "
-                        + found.screen() + " screen"));
+                .map(t -> "the task \"" + t.title() + "\"").orElse(found.screen() == SittingScreen.START ? "the start" : "the "
+                        + found.screen().wireName() + " screen"));
         facts.add("Last saved: " + CLOCK.format(found.lastActivity()) + ", " + TimeText.duration(down.toMillis())
                 + " ago (measured on the system clock, so a changed clock distorts it)");
         if (found.paused()) {
@@ -891,15 +892,15 @@ public final class SittingFlow {
         } else {
             where = "The candidate continues where the sitting stopped.";
         }
-        String screenAtStop = found.screen();
+        SittingScreen screenAtStop = found.screen();
         Runnable go = () -> {
             if (next.isEmpty()) {
                 prepareToolsQuietly();
-                afterTasks("review".equals(screenAtStop));
-            } else if (found.currentTask().isPresent() || "task".equals(screenAtStop)) {
+                afterTasks(screenAtStop == SittingScreen.REVIEW);
+            } else if (found.currentTask().isPresent() || screenAtStop == SittingScreen.TASK) {
                 prepareToolsQuietly();
                 startNextTask();
-            } else if ("questionnaire".equals(screenAtStop)) {
+            } else if (screenAtStop == SittingScreen.QUESTIONNAIRE) {
                 prepareToolsQuietly();
                 afterInstructions();
             } else {
@@ -1116,7 +1117,7 @@ public final class SittingFlow {
     private void exitByInvigilator() {
         if (sitting != null && !sitting.submitted()) {
             // not an end of the sitting: it stays in the data folder and resumes on the next start
-            sitting.log().record(EventType.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
+            sitting.exitedByInvigilator();
         }
         exitApplication();
     }
