@@ -150,8 +150,8 @@ public final class SittingFlow {
     private TaskWorkspace workspace;
     private TaskScreen taskScreen;
     private boolean paused;
-    private boolean taskEnding;
-    private boolean entryWaiting;
+    /** Where the task on screen is in its life; one value instead of two flags that could contradict. */
+    private TaskTurn turn = TaskTurn.NONE;
     private String startText;
     private SubmitScreen submitScreen;
     private final Map<String, Integer> words = new LinkedHashMap<>();
@@ -167,6 +167,9 @@ public final class SittingFlow {
     /** Where a handed-in package went, and when. */
     private record HandedIn(Path delivered, Path localCopy, Instant at) {
     }
+
+    /** Where the current task is: none, waiting for the invigilator to resume, open for writing, or ending. */
+    enum TaskTurn { NONE, WAITING_FOR_RESUME, OPEN, ENDING }
 
     /** Where the flow is; the invigilator panel and the lock depend on it. */
     enum Screen { NONE, REFUSED, RECOVERY, SETUP, SIGN_IN, INSTRUCTIONS, QUESTIONNAIRE, TASK, REVIEW, SUBMIT, FINISHED }
@@ -502,12 +505,12 @@ public final class SittingFlow {
         if (paused) {
             // a sitting recovered while paused: the task begins when the invigilator resumes
             typeAhead.drop();
-            entryWaiting = true;
+            turn = TaskTurn.WAITING_FOR_RESUME;
             return;
         }
         current = Screen.TASK;
         taskIndex = index;
-        taskEnding = false;
+        turn = TaskTurn.OPEN;
         sitting.showScreen(SittingScreen.TASK);
         TaskStart start;
         try {
@@ -522,7 +525,7 @@ public final class SittingFlow {
         shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
                 Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
         shelf.take(slot.taskId()).whenComplete((tools, failure) -> Platform.runLater(() -> {
-            if (current != Screen.TASK || taskIndex != index || taskEnding) {
+            if (current != Screen.TASK || taskIndex != index || turn == TaskTurn.ENDING) {
                 // the task ended (time, invigilator) while its tools were being prepared
                 if (tools != null) {
                     tools.close();
@@ -646,10 +649,10 @@ public final class SittingFlow {
     }
 
     private void timeUp(boolean wholeSitting) {
-        if (current != Screen.TASK || taskEnding) {
+        if (current != Screen.TASK || turn == TaskTurn.ENDING) {
             return;
         }
-        taskEnding = true;
+        turn = TaskTurn.ENDING;
         typeAhead.drop(); // keys typed after the time is up belong to no task
         freeze(true);
         shell.announcer().announce(wholeSitting ? "The time for the whole exam is up. Your answers have been saved."
@@ -661,10 +664,10 @@ public final class SittingFlow {
 
     private void endTask(EndReason reason) {
         // no workspace yet: the task's tools are still being prepared, and there is nothing to end
-        if (current != Screen.TASK || taskEnding || workspace == null) {
+        if (current != Screen.TASK || turn == TaskTurn.ENDING || workspace == null) {
             return;
         }
-        taskEnding = true;
+        turn = TaskTurn.ENDING;
         if (reason == EndReason.SUBMITTED) {
             typeAhead.hold(); // the candidate moves on: what they type now belongs to the next task
         } else {
@@ -1066,12 +1069,12 @@ public final class SittingFlow {
                     + TimeText.duration((setup.clock().monoNanos() - pausedAtMono) / 1_000_000)));
             pausedAtMono = Long.MIN_VALUE;
             desk.coverPaused(false);
-            if (!taskEnding) {
+            if (turn != TaskTurn.ENDING) {
                 freeze(false);
             }
             shell.announcer().announce("The exam has resumed. Your time is running again.");
-            if (entryWaiting) {
-                entryWaiting = false;
+            if (turn == TaskTurn.WAITING_FOR_RESUME) {
+                turn = TaskTurn.NONE;
                 startNextTask();
             }
         }
@@ -1103,8 +1106,7 @@ public final class SittingFlow {
         paused = false;
         pausedAtMono = Long.MIN_VALUE;
         lossNoted = false;
-        taskEnding = false;
-        entryWaiting = false;
+        turn = TaskTurn.NONE;
         submitScreen = null;
         handedIn = null;
         display = DisplaySettings.standard();
