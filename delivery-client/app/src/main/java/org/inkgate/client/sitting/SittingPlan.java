@@ -3,7 +3,7 @@ package org.inkgate.client.sitting;
 import java.util.Objects;
 import java.util.Optional;
 import org.inkgate.format.bundle.BundleManifest;
-import org.inkgate.format.bundle.CandidateNumbers;
+import org.inkgate.format.bundle.CandidateNumber;
 import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.RosterEntry;
 
@@ -43,7 +43,7 @@ public record SittingPlan(BundleManifest manifest, String manifestSha256, String
      * The plan for a candidate: with a roster, the candidate must be on it and the form and
      * accommodations are the roster's; without one (open sitting), {@code openForm} names the form.
      *
-     * The number is matched as the roster's rules say ({@link CandidateNumbers}).
+     * The number is matched as the roster's rules say ({@link CandidateNumber}).
      *
      * @throws NotOnRoster when the number is empty or not on the roster, worded for the candidate who typed it
      * @throws IllegalArgumentException when the invigilator must choose a form
@@ -59,7 +59,7 @@ public record SittingPlan(BundleManifest manifest, String manifestSha256, String
                     + "; check the number with the candidate's admission details");
         }
         if (!manifest.roster().isEmpty()) {
-            Optional<RosterEntry> entry = CandidateNumbers.find(manifest.roster(), number);
+            Optional<RosterEntry> entry = CandidateNumber.find(manifest.roster(), number);
             if (entry.isEmpty()) {
                 throw new NotOnRoster("The number " + number + " is not on the list for this exam. Check it against"
                         + " your admission details and type it again. If it is right, ask the invigilator.");

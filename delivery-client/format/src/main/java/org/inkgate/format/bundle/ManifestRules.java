@@ -76,7 +76,7 @@ final class ManifestRules {
                 problems.add("roster candidate \"" + org.inkgate.format.refusal.FormatRefusal.printable(r.candidateNumber())
                         + "\" is not a usable candidate number: use " + CandidateNumber.RULE);
             }
-            if (r.candidateNumber() != null && !candidates.add(CandidateNumbers.key(r.candidateNumber()))) {
+            if (r.candidateNumber() != null && !candidates.add(CandidateNumber.key(r.candidateNumber()))) {
                 problems.add("roster lists candidate \"" + r.candidateNumber() + "\" twice (candidate numbers are"
                         + " compared without regard to letter case)");
             }

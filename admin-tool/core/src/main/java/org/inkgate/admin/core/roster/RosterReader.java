@@ -14,7 +14,6 @@ import org.inkgate.format.bundle.CandidateNumber;
 import org.inkgate.admin.core.csv.Csv;
 import org.inkgate.admin.core.source.InvalidSourceException;
 import org.inkgate.admin.core.source.Problem;
-import org.inkgate.format.bundle.CandidateNumbers;
 
 /**
  * Imports a roster CSV (RFC 4180, header row, UTF-8). Required columns: {@code candidate_number},
@@ -104,7 +103,7 @@ public final class RosterReader {
                         + "\" is not a usable candidate number: use " + CandidateNumber.RULE));
             } else {
                 // the client matches the number typed at sign-in this way, so the roster keeps numbers apart this way
-                Integer first = seen.putIfAbsent(CandidateNumbers.key(number), line);
+                Integer first = seen.putIfAbsent(CandidateNumber.key(number), line);
                 if (first != null) {
                     problems.add(new Problem(name, line, col.get(CANDIDATE) + 1, CANDIDATE, "candidate " + number
                             + " is already on line " + first + " (letter case does not tell candidates apart);"

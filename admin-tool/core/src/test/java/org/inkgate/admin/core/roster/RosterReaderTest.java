@@ -44,7 +44,7 @@ class RosterReaderTest {
                 p);
     }
 
-    /** The client matches a typed number without regard to case (format's CandidateNumbers), so the roster may not rely on it. */
+    /** The client matches a typed number without regard to case (format's CandidateNumber), so the roster may not rely on it. */
     @Test
     void parse_numbersDifferingOnlyInLetterCase_areOneCandidateListedTwice() {
         InvalidSourceException e = assertThrows(InvalidSourceException.class, () -> RosterReader.parse("r.csv", """

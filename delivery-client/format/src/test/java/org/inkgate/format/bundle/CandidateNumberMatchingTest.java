@@ -9,22 +9,22 @@ import org.inkgate.format.testutil.SampleExam;
 import org.junit.jupiter.api.Test;
 
 /** The one rule both sides compare candidate numbers by (issue 13): case and surrounding spaces do not tell them apart. */
-class CandidateNumbersTest {
+class CandidateNumberMatchingTest {
 
     @Test
     void same_ignoresAsciiLetterCaseAndSurroundingSpaces_notDashesOrUnderscores() {
-        assertTrue(CandidateNumbers.same("D1001", " d1001 "));
-        assertTrue(CandidateNumbers.same("ab-12_c", "AB-12_C"));
-        assertFalse(CandidateNumbers.same("AB-12", "AB_12"));
-        assertFalse(CandidateNumbers.same("AB12", "AB-12"));
+        assertTrue(CandidateNumber.same("D1001", " d1001 "));
+        assertTrue(CandidateNumber.same("ab-12_c", "AB-12_C"));
+        assertFalse(CandidateNumber.same("AB-12", "AB_12"));
+        assertFalse(CandidateNumber.same("AB12", "AB-12"));
     }
 
     @Test
     void find_typedInOtherCase_returnsTheRosterEntryWithItsOwnSpelling() {
         List<RosterEntry> roster = List.of(new RosterEntry("D1001", "A", 0, false, false),
                 new RosterEntry("D1002", "B", 25, false, false));
-        assertEquals("D1002", CandidateNumbers.find(roster, "d1002").orElseThrow().candidateNumber());
-        assertTrue(CandidateNumbers.find(roster, "D1003").isEmpty());
+        assertEquals("D1002", CandidateNumber.find(roster, "d1002").orElseThrow().candidateNumber());
+        assertTrue(CandidateNumber.find(roster, "D1003").isEmpty());
     }
 
     @Test
