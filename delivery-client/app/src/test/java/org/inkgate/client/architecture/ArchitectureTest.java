@@ -1,5 +1,6 @@
 package org.inkgate.client.architecture;
 
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.classes;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static com.tngtech.archunit.library.GeneralCodingRules.ACCESS_STANDARD_STREAMS;
 
@@ -49,6 +50,22 @@ class ArchitectureTest {
             .and().resideOutsideOfPackage("org.inkgate.client.sitting.ui..")
             .should().dependOnClassesThat().resideInAnyPackage("org.inkgate.client.sitting.ui..", "org.inkgate.client.task..")
             .because("the screens and the task workspace call the sitting core, never the other way round");
+
+    @ArchTest
+    static final ArchRule sittingCourse_isPartOfTheCore = classes()
+            .that().haveSimpleName("SittingCourse").or().haveSimpleName("CourseView")
+            .should().resideInAPackage("org.inkgate.client.sitting.course")
+            .andShould().onlyDependOnClassesThat().resideOutsideOfPackages("javafx..", "org.inkgate.client.sitting.ui..",
+                    "org.inkgate.client.task..")
+            .because("the sitting's decisions (which screen follows which, time up, pause, recovery, hand-in, next"
+                    + " candidate) are tested on the fake clock without a display (issue 13)");
+
+    @ArchTest
+    static final ArchRule sittingWindow_changesTheSittingOnlyThroughItsCourse = noClasses()
+            .that().resideInAPackage("org.inkgate.client.sitting.ui..")
+            .should().dependOnClassesThat().areAssignableTo(org.inkgate.client.sitting.Sitting.class)
+            .because("the window renders what SittingCourse decides and forwards people's actions to it; a second"
+                    + " caller of the sitting core would be a second place that decides (issue 13)");
 
     @ArchTest
     static final ArchRule sittingCore_doesNotWriteToStandardStreams = noClasses()

@@ -1,5 +1,6 @@
 package org.inkgate.client.sitting.ui;
 
+import org.inkgate.client.sitting.course.FlowScreen;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -64,7 +65,7 @@ class InvigilatorActionsTest {
         // the screen refreshes every 200 ms (SittingFlow.TICK): the question must outlive a few refreshes
         WaitForAsyncUtils.sleep(700, java.util.concurrent.TimeUnit.MILLISECONDS);
 
-        assertEquals(SittingFlow.Screen.TASK, d.flow.screen(), "the task ended without confirmation");
+        assertEquals(FlowScreen.TASK, d.flow.screen(), "the task ended without confirmation");
         assertFalse(d.workspace().closed(), "the task's workspace was closed without confirmation");
         assertTrue(d.showing("confirmEndTaskButton"), "no confirmation offered");
         String warning = d.text("endTaskWarning");
@@ -118,7 +119,7 @@ class InvigilatorActionsTest {
         d.press("nextCandidateButton");
 
         d.await("candidateNumber", Node.class);
-        assertEquals(SittingFlow.Screen.SIGN_IN, d.flow.screen());
+        assertEquals(FlowScreen.SIGN_IN, d.flow.screen());
         handIn(d, "D1001");
         List<Path> written = packages(out);
         assertEquals(2, written.size(), written.toString());
@@ -225,7 +226,7 @@ class InvigilatorActionsTest {
 
         d.signIn(" d1001 ");
         d.await("startButton", Node.class);
-        assertEquals(SittingFlow.Screen.INSTRUCTIONS, d.flow.screen());
+        assertEquals(FlowScreen.INSTRUCTIONS, d.flow.screen());
         assertEquals("Candidate D1001", d.text("stripWho"), "the roster's spelling is kept");
     }
 

@@ -1,5 +1,6 @@
 package org.inkgate.client.sitting.ui;
 
+import org.inkgate.client.sitting.course.FlowScreen;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -63,7 +64,7 @@ class SittingFlowTest {
         String message = d.text("refusalMessage");
         assertTrue(message.contains("tampered.inkexam"), message);
         assertTrue(robot.lookup("#setupPin").tryQuery().isEmpty(), "set-up shown for a refused bundle");
-        assertEquals(SittingFlow.Screen.REFUSED, d.flow.screen());
+        assertEquals(FlowScreen.REFUSED, d.flow.screen());
     }
 
     @Test
@@ -91,7 +92,7 @@ class SittingFlowTest {
         d.setUp("000000", temp.resolve("out"));
 
         d.awaitText("setupError", "not this exam's invigilator PIN");
-        assertEquals(SittingFlow.Screen.SETUP, d.flow.screen());
+        assertEquals(FlowScreen.SETUP, d.flow.screen());
     }
 
     @Test
@@ -115,7 +116,7 @@ class SittingFlowTest {
         var enrolment = org.inkgate.format.enrolment.InstallationEnrolment.read(file);
         assertEquals(fingerprint, enrolment.fingerprint());
         assertEquals("Room 2, seat 14", enrolment.machine());
-        assertEquals(SittingFlow.Screen.SETUP, d.flow.screen(), "writing the file does not start the sitting");
+        assertEquals(FlowScreen.SETUP, d.flow.screen(), "writing the file does not start the sitting");
     }
 
     @Test
@@ -140,7 +141,7 @@ class SittingFlowTest {
         d.signIn("X9999");
 
         d.awaitText("signInError", "not on the list for this exam");
-        assertEquals(SittingFlow.Screen.SIGN_IN, d.flow.screen());
+        assertEquals(FlowScreen.SIGN_IN, d.flow.screen());
     }
 
     @Test
