@@ -76,8 +76,11 @@ public final class SittingCourse {
     private PauseState pause = PauseState.RUNNING;
     /** When the invigilator paused (monotonic), for the resume line; MIN_VALUE when not paused here. */
     private long pausedAtMono = Long.MIN_VALUE;
-    /** A focus loss was listed, so its return is listed too. */
-    private boolean awayNoted;
+    /** Whether a focus loss was listed, so that its return is listed too. */
+    private FocusWatch focus = FocusWatch.IN_WINDOW;
+
+    /** Focus as the invigilator's list knows it. */
+    private enum FocusWatch { IN_WINDOW, LOSS_LISTED }
     private int taskIndex = -1;
     private CourseView.TaskPage page;
     /** The task's text when it began, kept for a task whose tools never arrived. */
@@ -634,7 +637,7 @@ public final class SittingCourse {
         words.clear();
         pause = PauseState.RUNNING;
         pausedAtMono = Long.MIN_VALUE;
-        awayNoted = false;
+        focus = FocusWatch.IN_WINDOW;
         turn = TaskTurn.NONE;
         handedIn = null;
         view.candidateOut();
@@ -659,16 +662,16 @@ public final class SittingCourse {
         if (sitting == null || screen == FlowScreen.FINISHED) {
             return;
         }
-        awayNoted = true;
+        focus = FocusWatch.LOSS_LISTED;
         view.focusNote("Focus lost");
         sitting.log().record(EventType.FOCUS_LOST, currentTaskId(), Map.of());
     }
 
     public void focusReturned(long awayMillis) {
-        if (!awayNoted) {
+        if (focus != FocusWatch.LOSS_LISTED) {
             return;
         }
-        awayNoted = false;
+        focus = FocusWatch.IN_WINDOW;
         view.focusNote("Focus returned after " + TimeText.duration(awayMillis));
         if (sitting != null) {
             sitting.log().record(EventType.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
