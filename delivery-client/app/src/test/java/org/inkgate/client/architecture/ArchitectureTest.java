@@ -75,6 +75,13 @@ class ArchitectureTest {
             .because("the sitting core reports through return values and signals; the UI decides what people see");
 
     @ArchTest
+    static final ArchRule onlyTheSittingStore_usesSql = noClasses()
+            .that().resideOutsideOfPackage("org.inkgate.client.sitting.store..")
+            .should().dependOnClassesThat().resideInAnyPackage("java.sql..", "org.sqlite..")
+            .because("the sitting database is read and written only through the store (SqliteProcessLog,"
+                    + " SittingStateStore, SittingDatabase), whose writes keep log and state in order (issue 13)");
+
+    @ArchTest
     static final ArchRule practiceModel_doesNotDependOnViews = noClasses()
             .that().resideInAPackage("org.inkgate.client.practice")
             .should().dependOnClassesThat().resideInAPackage("org.inkgate.client.practice.ui..");

@@ -96,11 +96,7 @@ class SittingFlowTest {
     void poll_whileTheDatabaseRefusesWrites_signalsTroubleThenRecovery() throws Exception {
         try (Sitting s = Sitting.begin(SittingFixtures.candidate1001(), new ClientDataFolder(dir), new FakeClock())) {
             java.util.concurrent.atomic.AtomicBoolean broken = new java.util.concurrent.atomic.AtomicBoolean(true);
-            s.log().persist(c -> {
-                if (broken.get()) {
-                    throw new java.sql.SQLException("disk I/O error (simulated)");
-                }
-            });
+            org.inkgate.client.sitting.store.FailingDisk.refuseWritesWhile(s.log(), broken::get);
             List<SittingSignal> signals = pollUntil(s, SittingSignal.StorageTrouble.class);
             assertTrue(((SittingSignal.StorageTrouble) signals.getFirst()).message().contains("kept in memory"), signals.toString());
             broken.set(false);
