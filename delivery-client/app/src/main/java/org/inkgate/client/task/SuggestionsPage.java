@@ -8,7 +8,8 @@ import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.MouseButton;
-import javafx.scene.layout.HBox;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.inkgate.packs.policy.Tool;
 import org.inkgate.packs.spelling.CheckIssue;
@@ -74,7 +75,10 @@ final class SuggestionsPage implements ToolPage {
         });
         Label intro = ToolPage.wrapped(grammar ? "Words and phrases the check marked. Choose one to see suggestions."
                 : "Words the spelling check marked. Choose one to see suggestions.", "panel-note");
-        root = new VBox(10, intro, flags, message, options, new HBox(8, use, ignore));
+        // a narrow panel or large print puts the second button under the first rather than shortening both
+        use.setMinWidth(Region.USE_PREF_SIZE);
+        ignore.setMinWidth(Region.USE_PREF_SIZE);
+        root = new VBox(10, intro, flags, message, options, new FlowPane(8, 8, use, ignore));
         root.getStyleClass().add("tool-page");
     }
 

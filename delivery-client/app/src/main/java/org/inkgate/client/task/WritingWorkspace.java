@@ -133,6 +133,7 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         heading.setMnemonicParsing(true);
         heading.setLabelFor(area);
         heading.getStyleClass().add("answer-heading");
+        heading.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         VirtualizedScrollPane<AnswerArea> scroll = new VirtualizedScrollPane<>(area);
         scroll.getStyleClass().add("answer-scroll");
         // the frame draws the border and the focus ring (the scroll pane lays its content over its own insets)

@@ -3,9 +3,11 @@ package org.inkgate.client.sitting.ui.parts;
 import javafx.geometry.Pos;
 import javafx.scene.AccessibleRole;
 import javafx.scene.Node;
+import javafx.scene.Parent;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
@@ -84,6 +86,25 @@ public final class Parts {
         scroller.setFocusTraversable(false);
         scroller.getStyleClass().add("screen-scroller");
         return scroller;
+    }
+
+    /**
+     * A card like {@link #card} whose actions (the error line, the button that moves on) stay in a
+     * bar under it, always in view: on a short window or in large print the fields scroll, the
+     * way on does not go below the fold.
+     */
+    public static Parent cardWithActions(String id, Node actions, Node... children) {
+        ScrollPane scroller = card(id, children);
+        VBox bar = new VBox(actions);
+        bar.getStyleClass().add("screen-card");
+        bar.getStyleClass().add("screen-actions");
+        bar.setMaxWidth(860);
+        VBox under = new VBox(bar);
+        under.getStyleClass().add("screen-actions-bar");
+        under.setAlignment(Pos.TOP_CENTER);
+        BorderPane page = new BorderPane(scroller);
+        page.setBottom(under);
+        return page;
     }
 
     private static Label wrapped(String text, String styleClass) {

@@ -40,9 +40,8 @@ public final class InstructionsScreen {
                 Parts.heading("Your tasks"),
                 planBox,
                 Parts.quiet("Each task has its own time. When a task ends, you cannot go back to it."
-                        + " Your work is saved on this machine as you type."),
-                tools, start);
-        root = Parts.card("instructionsScreen", box);
+                        + " Your work is saved on this machine as you type."));
+        root = Parts.cardWithActions("instructionsScreen", new VBox(8, tools, start), box);
     }
 
     public Parent root() {

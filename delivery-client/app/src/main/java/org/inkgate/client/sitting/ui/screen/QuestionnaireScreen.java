@@ -35,8 +35,8 @@ public final class QuestionnaireScreen {
         VBox box = new VBox(14,
                 Parts.heading(questionnaire.title()),
                 Parts.quiet("These questions are not marked. You may leave any of them unanswered."),
-                items, done);
-        root = Parts.card("questionnaireScreen", box);
+                items);
+        root = Parts.cardWithActions("questionnaireScreen", done, box);
     }
 
     private VBox item(int number, QuestionItem item) {

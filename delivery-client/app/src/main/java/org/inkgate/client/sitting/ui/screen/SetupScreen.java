@@ -90,8 +90,7 @@ public final class SetupScreen {
             fields.getChildren().add(demo);
         }
         Button exit = Parts.plain("setupExit", "E_xit", onExit);
-        fields.getChildren().addAll(error, new HBox(12, go, exit));
-        root = Parts.card("setupScreen", fields);
+        root = Parts.cardWithActions("setupScreen", new VBox(8, error, new HBox(12, go, exit)), fields);
     }
 
     /**
