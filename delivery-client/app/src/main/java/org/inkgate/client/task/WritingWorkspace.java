@@ -306,7 +306,9 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         }
         IndexRange selection = area.getSelection();
         events.record(EventType.TOOL_INSERT, "tool", TaskEvents.wire(tool), "entry", entryId, "pos", selection.getStart(), "text", text);
-        area.changeAs(ChangeSource.PANEL, () -> area.replaceSelection(text));
+        InsertSpacing.Spaced spaced = InsertSpacing.around(area.getText(), selection.getStart(), selection.getEnd(), text);
+        area.changeAs(ChangeSource.PANEL, () -> area.replaceSelection(spaced.text()));
+        area.moveTo(selection.getStart() + spaced.caret());
         area.requestFocus();
     }
 
