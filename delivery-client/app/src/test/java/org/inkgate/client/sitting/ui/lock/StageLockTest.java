@@ -82,6 +82,46 @@ class StageLockTest {
         }
     }
 
+    /**
+     * A kiosk session started straight from the display server has no window manager, and full
+     * screen is only a request to one: the window must take the screen's bounds itself (issue 13).
+     * The headless platform resizes a full-screen window itself (as a window manager would), so the
+     * test reads the window's bounds at the moment full screen is asked for: they must already be
+     * the screen's, set by the lock, not left to whatever honours the full-screen request.
+     */
+    @Test
+    void apply_withoutAWindowManager_windowCoversTheWholeScreen(FxRobot robot) {
+        robot.interact(() -> {
+            stage.setX(40);
+            stage.setY(30);
+            stage.setWidth(400);
+            stage.setHeight(300);
+        });
+        javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getBounds();
+        List<String> atFullScreen = new ArrayList<>();
+        javafx.beans.value.ChangeListener<Boolean> watch = (o, was, now) -> {
+            if (now) {
+                atFullScreen.add(stage.getX() + "," + stage.getY() + " " + stage.getWidth() + "x" + stage.getHeight());
+            }
+        };
+        robot.interact(() -> stage.fullScreenProperty().addListener(watch));
+        StageLock lock = lock(robot);
+        try {
+            WaitForAsyncUtils.waitForFxEvents();
+            assertEquals(List.of(screen.getMinX() + "," + screen.getMinY() + " " + screen.getWidth() + "x" + screen.getHeight()),
+                    atFullScreen, "the window's own bounds cover the screen before full screen is requested");
+            assertEquals(screen.getMinX(), stage.getX(), 0.5, "x");
+            assertEquals(screen.getMinY(), stage.getY(), 0.5, "y");
+            assertEquals(screen.getWidth(), stage.getWidth(), 0.5, "width");
+            assertEquals(screen.getHeight(), stage.getHeight(), 0.5, "height");
+            assertEquals(screen.getWidth(), stage.getScene().getWidth(), 0.5, "the scene fills the window");
+        } finally {
+            robot.interact(lock::release);
+            robot.interact(() -> stage.fullScreenProperty().removeListener(watch));
+        }
+        assertEquals(400, stage.getWidth(), 0.5, "release gives the window its size back");
+    }
+
     @Test
     void closeRequest_whileLocked_isConsumedAndStageStaysOpen(FxRobot robot) {
         StageLock lock = lock(robot);
