@@ -26,13 +26,18 @@ final class WordStatus extends FlowPane {
         getStyleClass().add("word-status");
         setAlignment(Pos.CENTER_LEFT);
         // a narrow answer column (large print, small window) puts the guidance under the count, wrapped
-        // if need be; the count itself is never shortened
+        // if need be; the count itself is never shortened. A flow pane's own minimum is its widest
+        // child's preferred width, which would push the column wider than the window: no minimum here
         setHgap(16);
         setVgap(4);
+        setMinWidth(0);
         count.setMinWidth(Region.USE_PREF_SIZE);
         for (Label wraps : new Label[] {advice, checker}) {
+            wraps.setMinWidth(0);
+            wraps.setMinHeight(Region.USE_PREF_SIZE);
             wraps.maxWidthProperty().bind(widthProperty().subtract(snappedLeftInset() + snappedRightInset() + 1));
         }
+        checker.managedProperty().bind(checker.textProperty().isNotEmpty());
         count.setId("wordCount");
         count.getStyleClass().add("word-count");
         count.setAccessibleRole(AccessibleRole.TEXT);
