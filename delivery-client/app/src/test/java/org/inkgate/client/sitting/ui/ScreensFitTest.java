@@ -153,6 +153,9 @@ class ScreensFitTest {
             d.openReal(bundle, clock);
             d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
             d.signIn(who[0]);
+            // closing while the spelling check is still warming up interrupts LanguageTool's class set-up,
+            // which leaves it unusable for the rest of the test JVM
+            d.awaitText("toolsStatus", "ready");
             d.press("startButton");
             d.awaitTask("A note to a neighbour");
             d.typeInEditor("Dear Sam,");

@@ -120,6 +120,9 @@ class SittingScreenshotTest {
         d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
         // D1003: large print, high contrast, 25% extra time (src/demo/sitting.json)
         d.signIn("D1003");
+        // closing below while the spelling check is still warming up would interrupt LanguageTool's
+        // class set-up and leave it unusable for every later test in this JVM
+        d.awaitText("toolsStatus", "ready");
         d.press("startButton");
         d.awaitTask("A note to a neighbour");
         d.typeInEditor("Dear Sam,\n\nI am writing to ask a favour.");

@@ -48,6 +48,8 @@ public final class Parts {
         Label label = wrapped("", "field-error");
         label.setId(id);
         label.setAccessibleRole(AccessibleRole.TEXT);
+        // no empty gap above the buttons until there is something to say
+        label.managedProperty().bind(label.textProperty().isNotEmpty());
         return label;
     }
 
@@ -105,6 +107,16 @@ public final class Parts {
         BorderPane page = new BorderPane(scroller);
         page.setBottom(under);
         return page;
+    }
+
+    /**
+     * Puts focus on a control of a screen just shown. A control inside a scroll pane joins the scene
+     * only when the pane's skin is made, at the next layout, so the request is made again then;
+     * otherwise the scene gives focus to the first button it finds (the action bar's).
+     */
+    public static void focusWhenShown(Node control) {
+        control.requestFocus();
+        javafx.application.Platform.runLater(control::requestFocus);
     }
 
     private static Label wrapped(String text, String styleClass) {

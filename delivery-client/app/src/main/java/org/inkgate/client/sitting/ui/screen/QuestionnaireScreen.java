@@ -95,6 +95,6 @@ public final class QuestionnaireScreen {
 
     public void focus() {
         likert.values().stream().findFirst().map(g -> g.getToggles().getFirst())
-                .ifPresentOrElse(t -> ((RadioButton) t).requestFocus(), done::requestFocus);
+                .ifPresentOrElse(t -> Parts.focusWhenShown((RadioButton) t), done::requestFocus);
     }
 }

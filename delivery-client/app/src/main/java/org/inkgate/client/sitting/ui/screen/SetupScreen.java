@@ -132,7 +132,7 @@ public final class SetupScreen {
 
     /** Where focus starts. */
     public void focus() {
-        pin.requestFocus();
+        Parts.focusWhenShown(pin);
     }
 
     /** Says what is wrong and clears the secret fields. */
