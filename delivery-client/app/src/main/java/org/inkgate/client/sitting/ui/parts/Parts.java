@@ -116,7 +116,21 @@ public final class Parts {
      */
     public static void focusWhenShown(Node control) {
         control.requestFocus();
-        javafx.application.Platform.runLater(control::requestFocus);
+        if (control.getScene() != null) {
+            javafx.application.Platform.runLater(control::requestFocus);
+            return;
+        }
+        control.sceneProperty().addListener(new javafx.beans.value.ChangeListener<>() {
+            @Override
+            public void changed(javafx.beans.value.ObservableValue<? extends javafx.scene.Scene> o,
+                    javafx.scene.Scene was, javafx.scene.Scene now) {
+                if (now != null) {
+                    control.sceneProperty().removeListener(this);
+                    control.requestFocus();
+                    javafx.application.Platform.runLater(control::requestFocus);
+                }
+            }
+        });
     }
 
     private static Label wrapped(String text, String styleClass) {
