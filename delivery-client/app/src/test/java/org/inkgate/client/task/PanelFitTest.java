@@ -18,6 +18,7 @@ import org.inkgate.client.sitting.ui.SittingTheme;
 import org.inkgate.client.sitting.ui.screen.TaskScreen;
 import org.inkgate.client.testutil.LayoutCheck;
 import org.inkgate.client.testutil.PngSnapshots;
+import org.inkgate.client.testutil.StageSize;
 import org.inkgate.packs.broker.TaskTools;
 import org.inkgate.packs.policy.PastePolicy;
 import org.inkgate.packs.policy.ResourcePolicy;
@@ -41,14 +42,16 @@ import org.testfx.util.WaitForAsyncUtils;
 @ExtendWith(ApplicationExtension.class)
 class PanelFitTest {
 
-    static final int[][] SIZES = {{1024, 768}, {1280, 800}, {1920, 1080}};
     private Stage stage;
+    private StageSize before;
     private WritingWorkspace workspace;
     private final List<String> problems = new ArrayList<>();
 
     @Start
     void start(Stage primary) {
         stage = primary;
+        // the workspace opens at 1280x800 whatever an earlier test class left; fits() then walks the sizes
+        before = StageSize.set(primary, 1280, 800);
     }
 
     @AfterEach
@@ -56,6 +59,7 @@ class PanelFitTest {
         if (workspace != null) {
             robot.interact(workspace::close);
         }
+        robot.interact(before::restore);
     }
 
     @Test
@@ -143,11 +147,8 @@ class PanelFitTest {
     }
 
     private void fits(FxRobot robot, String print, String screen) throws Exception {
-        for (int[] size : SIZES) {
-            robot.interact(() -> {
-                stage.setWidth(size[0]);
-                stage.setHeight(size[1]);
-            });
+        for (int[] size : LayoutCheck.SIZES) {
+            robot.interact(() -> StageSize.apply(stage, size[0], size[1]));
             WaitForAsyncUtils.waitForFxEvents();
             WaitForAsyncUtils.sleep(150, TimeUnit.MILLISECONDS);
             WaitForAsyncUtils.waitForFxEvents();

@@ -15,6 +15,7 @@ import javafx.scene.layout.Pane;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.testfx.api.FxRobot;
@@ -26,17 +27,25 @@ import org.testfx.framework.junit5.Start;
 class LayoutCheckTest {
 
     private Stage stage;
+    private StageSize before;
 
     @Start
     void start(Stage primary) {
         stage = primary;
+        before = StageSize.set(primary, 400, 300);
+    }
+
+    @AfterEach
+    void restore(FxRobot robot) {
+        robot.interact(before::restore);
     }
 
     private List<String> check(FxRobot robot, Parent root, double w, double h) {
         AtomicReference<List<String>> found = new AtomicReference<>();
         robot.interact(() -> {
+            // the window is the planted scene's size, whatever an earlier test left on the shared stage
+            StageSize.apply(stage, w, h);
             stage.setScene(new Scene(root, w, h));
-            stage.sizeToScene(); // the stage may keep an earlier test's size otherwise
             stage.show();
             found.set(LayoutCheck.problems(stage.getScene()));
         });

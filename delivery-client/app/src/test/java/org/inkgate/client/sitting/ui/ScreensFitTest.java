@@ -16,6 +16,8 @@ import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import org.inkgate.client.testutil.LayoutCheck;
 import org.inkgate.client.testutil.PngSnapshots;
+import org.inkgate.client.testutil.StageSize;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -37,17 +39,25 @@ import org.testfx.util.WaitForAsyncUtils;
 @ExtendWith(ApplicationExtension.class)
 class ScreensFitTest {
 
-    /** Window sizes (width, height) in pixels. */
-    static final int[][] SIZES = {{1024, 768}, {1280, 800}, {1920, 1080}};
+    private static final int WORKING_WIDTH = 1280;
+    private static final int WORKING_HEIGHT = 800;
 
     @TempDir
     Path temp;
     private Stage stage;
+    private StageSize before;
     private final List<String> problems = new ArrayList<>();
 
+    /** The flow is driven at its own 1280x800; each check below gives the window its sizes in turn. */
     @Start
     void start(Stage primary) {
         this.stage = primary;
+        before = StageSize.set(primary, WORKING_WIDTH, WORKING_HEIGHT);
+    }
+
+    @AfterEach
+    void restore(FxRobot robot) {
+        robot.interact(before::restore);
     }
 
     @Test
@@ -170,13 +180,10 @@ class ScreensFitTest {
         assertTrue(problems.isEmpty(), problems.size() + " screen(s) do not fit:\n" + String.join("\n", problems));
     }
 
-    /** Checks the screen now showing at every size, writes its picture, and restores 1280x800. */
+    /** Checks the screen now showing at every size, writes its picture, and goes back to the working size. */
     private void fits(FxRobot robot, String print, String screen) throws Exception {
-        for (int[] size : SIZES) {
-            robot.interact(() -> {
-                stage.setWidth(size[0]);
-                stage.setHeight(size[1]);
-            });
+        for (int[] size : LayoutCheck.SIZES) {
+            robot.interact(() -> StageSize.apply(stage, size[0], size[1]));
             WaitForAsyncUtils.waitForFxEvents();
             WaitForAsyncUtils.sleep(150, TimeUnit.MILLISECONDS);
             WaitForAsyncUtils.waitForFxEvents();
@@ -197,10 +204,7 @@ class ScreensFitTest {
             PngSnapshots.write(image.get(), Path.of("target", "screenshots", "fit",
                     print + "-" + size[0] + "x" + size[1] + "-" + screen + ".png"));
         }
-        robot.interact(() -> {
-            stage.setWidth(1280);
-            stage.setHeight(800);
-        });
+        robot.interact(() -> StageSize.apply(stage, WORKING_WIDTH, WORKING_HEIGHT));
         WaitForAsyncUtils.waitForFxEvents();
     }
 }

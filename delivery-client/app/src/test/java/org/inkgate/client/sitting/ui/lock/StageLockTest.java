@@ -19,6 +19,8 @@ import javafx.scene.input.TransferMode;
 import javafx.scene.layout.StackPane;
 import javafx.stage.Stage;
 import javafx.stage.WindowEvent;
+import org.inkgate.client.testutil.StageSize;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -36,14 +38,22 @@ class StageLockTest {
     private final List<String> focusEvents = new ArrayList<>();
     private final AtomicLong clock = new AtomicLong(1_000);
     private final List<KeyEvent> seen = new ArrayList<>();
+    private StageSize before;
 
     @Start
     void start(Stage primary) {
         stage = primary;
+        // an ordinary 400x300 window, whatever an earlier test class left on the shared stage
+        before = StageSize.set(primary, 400, 300);
         field = new TextField();
         field.addEventHandler(KeyEvent.ANY, seen::add);
         stage.setScene(new Scene(new StackPane(field), 400, 300));
         stage.show();
+    }
+
+    @AfterEach
+    void restore(FxRobot robot) {
+        robot.interact(before::restore);
     }
 
     @BeforeEach
@@ -92,10 +102,9 @@ class StageLockTest {
     @Test
     void apply_withoutAWindowManager_windowCoversTheWholeScreen(FxRobot robot) {
         robot.interact(() -> {
+            StageSize.apply(stage, 400, 300);
             stage.setX(40);
             stage.setY(30);
-            stage.setWidth(400);
-            stage.setHeight(300);
         });
         javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getBounds();
         List<String> atFullScreen = new ArrayList<>();
