@@ -17,6 +17,7 @@ import javafx.stage.Stage;
 import org.inkgate.client.testutil.LayoutCheck;
 import org.inkgate.client.testutil.PngSnapshots;
 import org.inkgate.client.testutil.StageSize;
+import org.inkgate.client.testutil.Tampering;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -149,6 +150,8 @@ class ScreensFitTest {
         d.press("retryButton");
         d.await("finishedScreen", Node.class);
         fits(robot, print, "13-finished");
+        d.openInvigilator();
+        fits(robot, print, "14-invigilator-after-hand-in");
 
         assertTrue(problems.isEmpty(), problems.size() + " screen(s) do not fit:\n" + String.join("\n", problems));
     }
@@ -174,9 +177,26 @@ class ScreensFitTest {
             FlowDriver again = new FlowDriver(robot, stage, data);
             again.openReal(bundle, clock);
             again.await("recoveryScreen", Node.class);
-            fits(robot, who[1], "14-recovery");
+            again.check("creditDowntime");
+            fits(robot, who[1], "15-recovery");
+            again.type("recoveryPin", FlowDriver.demoPin());
+            again.press("resumeButton");
+            again.await("continueButton", Node.class);
+            fits(robot, who[1], "16-resumed");
             robot.interact(() -> again.flow.closeQuietly());
         }
+        assertTrue(problems.isEmpty(), problems.size() + " screen(s) do not fit:\n" + String.join("\n", problems));
+    }
+
+    /** The refusal of a bundle changed after signing: shown before any roster, so in normal print only. */
+    @Test
+    void refusedBundle_fitsAtEverySize(FxRobot robot) throws Exception {
+        Path tampered = temp.resolve("exam.inkexam");
+        Tampering.flipByteInEntry(FlowDriver.buildDemoSitting(temp), "prompts/task-1-neighbour-note.md", tampered);
+        FlowDriver d = new FlowDriver(robot, stage, temp.resolve("data"));
+        d.openReal(tampered, new ManualClock());
+        d.await("refusalMessage", Node.class);
+        fits(robot, "normal", "00-refused");
         assertTrue(problems.isEmpty(), problems.size() + " screen(s) do not fit:\n" + String.join("\n", problems));
     }
 
