@@ -107,6 +107,21 @@ final class FlowDriver {
         return flow;
     }
 
+    /**
+     * Releases the lock of the flow this driver opened, if it still holds the stage. A lock left on
+     * the stage TestFX shares between test classes keeps taking the screen back for every later
+     * class: their window sizes turned into the full screen's. Call after each test that locks.
+     */
+    void releaseLock() {
+        if (flow != null && flow.lock() != null) {
+            robot.interact(() -> {
+                if (flow.lock().locked()) {
+                    flow.lock().release();
+                }
+            });
+        }
+    }
+
     /** Waits until a node with this id is showing. */
     <T extends Node> T await(String id, Class<T> type) {
         try {

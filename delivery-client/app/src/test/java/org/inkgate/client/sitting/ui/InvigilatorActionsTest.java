@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.stream.Stream;
 import javafx.scene.Node;
@@ -22,6 +23,7 @@ import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.trust.TrustPolicy;
 import org.testfx.util.WaitForAsyncUtils;
 import javafx.stage.Stage;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -40,6 +42,7 @@ class InvigilatorActionsTest {
     @TempDir
     Path temp;
     private Stage stage;
+    private final List<FlowDriver> drivers = new ArrayList<>();
 
     @Start
     void start(Stage primary) {
@@ -47,7 +50,15 @@ class InvigilatorActionsTest {
     }
 
     private FlowDriver driver() {
-        return new FlowDriver(new FxRobot(), stage, temp.resolve("data"));
+        FlowDriver d = new FlowDriver(new FxRobot(), stage, temp.resolve("data"));
+        drivers.add(d);
+        return d;
+    }
+
+    /** A locked flow left behind would keep the shared stage full screen for every later test class. */
+    @AfterEach
+    void releaseLocks() {
+        drivers.forEach(FlowDriver::releaseLock);
     }
 
     /** Ending a task cannot be undone: like Exit it asks first, and says what it does to the candidate. */

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.stream.Stream;
@@ -25,6 +26,7 @@ import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.response.TaskResponse;
 import org.inkgate.format.trust.TrustPolicy;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -44,6 +46,7 @@ class SittingFlowTest {
     @TempDir
     Path temp;
     private Stage stage;
+    private final List<FlowDriver> drivers = new ArrayList<>();
 
     @Start
     void start(Stage primary) {
@@ -51,7 +54,15 @@ class SittingFlowTest {
     }
 
     private FlowDriver driver() {
-        return new FlowDriver(new FxRobot(), stage, temp.resolve("data"));
+        FlowDriver d = new FlowDriver(new FxRobot(), stage, temp.resolve("data"));
+        drivers.add(d);
+        return d;
+    }
+
+    /** A locked flow left behind would keep the shared stage full screen for every later test class. */
+    @AfterEach
+    void releaseLocks() {
+        drivers.forEach(FlowDriver::releaseLock);
     }
 
     @Test
