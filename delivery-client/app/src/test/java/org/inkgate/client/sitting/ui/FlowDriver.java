@@ -125,12 +125,27 @@ final class FlowDriver {
     /** Waits until a node with this id is showing. */
     <T extends Node> T await(String id, Class<T> type) {
         try {
-            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> robot.lookup("#" + id).tryQuery().map(Node::isVisible)
-                    .orElse(false));
+            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> find(id).map(Node::isVisible).orElse(false));
         } catch (java.util.concurrent.TimeoutException e) {
             throw new AssertionError("#" + id + " did not appear within 60 s; screen is " + flow.screen(), e);
         }
-        return robot.lookup("#" + id).queryAs(type);
+        return type.cast(find(id).orElseThrow(() -> new AssertionError("#" + id + " went away again; screen is " + flow.screen())));
+    }
+
+    /**
+     * Looks a node up on the JavaFX thread. A lookup from the test thread walks the scene while the
+     * flow changes it (seen in a whole-module run: IndexOutOfBoundsException inside
+     * Parent.lookupAll while the sign-in screen replaced the set-up screen).
+     */
+    java.util.Optional<Node> find(String id) {
+        try {
+            return WaitForAsyncUtils.asyncFx(() -> robot.lookup("#" + id).tryQuery()).get(30, TimeUnit.SECONDS);
+        } catch (java.util.concurrent.ExecutionException | java.util.concurrent.TimeoutException e) {
+            throw new AssertionError("could not look up #" + id + " on the JavaFX thread", e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new AssertionError("interrupted while looking up #" + id, e);
+        }
     }
 
     void type(String id, String text) {
@@ -156,11 +171,11 @@ final class FlowDriver {
     /** Waits until the label with this id shows text containing {@code part}. */
     void awaitText(String id, String part) {
         try {
-            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> robot.lookup("#" + id).tryQuery()
+            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> find(id)
                     .map(n -> n instanceof Label l && l.getText().contains(part)).orElse(false));
         } catch (java.util.concurrent.TimeoutException e) {
             throw new AssertionError("#" + id + " never showed \"" + part + "\"; it shows \""
-                    + robot.lookup("#" + id).tryQuery().map(n -> ((Label) n).getText()).orElse("(nothing)") + "\"", e);
+                    + find(id).map(n -> ((Label) n).getText()).orElse("(nothing)") + "\"", e);
         }
     }
 
@@ -212,7 +227,7 @@ final class FlowDriver {
     /** Whether a node with this id is in the scene and showing (its own visibility only). */
     boolean showing(String id) {
         WaitForAsyncUtils.waitForFxEvents();
-        return robot.lookup("#" + id).tryQuery().map(Node::isVisible).orElse(false);
+        return find(id).map(Node::isVisible).orElse(false);
     }
 
     static BundleReader demoReader() throws Exception {
