@@ -11,7 +11,6 @@ import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Hyperlink;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
@@ -89,15 +88,8 @@ final class DictionaryPage implements ToolPage {
         nearSpellings.setId("dictionaryNear");
         results.setId("dictionaryResults");
         results.setAccessibleText("Dictionary entries found");
-        results.setPrefHeight(120);
-        results.setCellFactory(v -> new ListCell<>() {
-            @Override
-            protected void updateItem(DictionaryEntry item, boolean empty) {
-                super.updateItem(item, empty);
-                setText(empty || item == null ? null : item.lemma() + "  (" + item.partOfSpeech().label() + ", "
-                        + item.senses().size() + (item.senses().size() == 1 ? " sense)" : " senses)"));
-            }
-        });
+        WrappedRows.show(results, item -> item.lemma() + "  (" + item.partOfSpeech().label() + ", "
+                + item.senses().size() + (item.senses().size() == 1 ? " sense)" : " senses)"));
         // opening an entry is a deliberate act (click or Enter), so arrowing through the list logs nothing
         results.setOnMouseClicked(e -> {
             if (e.getButton() == MouseButton.PRIMARY) {

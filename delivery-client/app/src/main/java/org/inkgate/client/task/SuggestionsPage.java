@@ -4,7 +4,6 @@ import java.util.List;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.MouseButton;
@@ -32,16 +31,9 @@ final class SuggestionsPage implements ToolPage {
         this.actions = actions;
         flags.setId("flagList");
         flags.setAccessibleText(grammar ? "Marked spelling and grammar" : "Marked spellings");
-        flags.setPrefHeight(180);
         flags.setPlaceholder(new Label("Nothing is marked."));
-        flags.setCellFactory(v -> new ListCell<>() {
-            @Override
-            protected void updateItem(CheckIssue item, boolean empty) {
-                super.updateItem(item, empty);
-                setText(empty || item == null ? null : "\u201C" + suggestions.word(item) + "\u201D  "
-                        + (item.kind() == CheckIssue.Kind.GRAMMAR ? "(grammar)" : "(spelling)"));
-            }
-        });
+        WrappedRows.show(flags, item -> "\u201C" + suggestions.word(item) + "\u201D  "
+                + (item.kind() == CheckIssue.Kind.GRAMMAR ? "(grammar)" : "(spelling)"));
         flags.setOnMouseClicked(e -> {
             if (e.getButton() == MouseButton.PRIMARY) {
                 showSelected();
@@ -56,7 +48,7 @@ final class SuggestionsPage implements ToolPage {
         message.setId("flagMessage");
         options.setId("suggestionList");
         options.setAccessibleText("Suggestions");
-        options.setPrefHeight(130);
+        WrappedRows.show(options, option -> option);
         options.setOnKeyPressed(e -> {
             if (e.getCode() == KeyCode.ENTER) {
                 useSelected();

@@ -12,6 +12,7 @@ import javafx.scene.control.ButtonBase;
 import javafx.scene.control.ComboBoxBase;
 import javafx.scene.control.IndexedCell;
 import javafx.scene.control.Labeled;
+import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.Spinner;
@@ -29,12 +30,15 @@ import javafx.scene.text.Text;
  * allowed (it can be scrolled to), except for a screen's default button, which must be in view;</li>
  * <li>a label not wholly inside the window and the clips above it (below a scrolling pane's fold is allowed);</li>
  * <li>a list with room for fewer than two rows;</li>
+ * <li>a list row whose text runs past the list's side, so it can only be read by scrolling
+ * sideways (WCAG 1.4.10 allows one direction of scrolling, and the lists already scroll down);</li>
  * <li>a wrapped label whose column is narrower than one of its words (the word is broken);</li>
  * <li>a label or button whose shown text is not its whole text: the skin shortened it with an
  * ellipsis because it did not fit.</li>
  * </ul>
  * Only what is showing counts (visible up to the root, inside the scene). Cells of a list are
- * virtualised and scroll by design, so only their text is checked, not their place.
+ * virtualised and scroll up and down by design, so only their text and its width are checked, not
+ * their height.
  */
 public final class LayoutCheck {
 
@@ -102,6 +106,15 @@ public final class LayoutCheck {
         if (!cell && operated(node) && inScene.getWidth() > 0 && inScene.getHeight() > 0 && !inside(inScene, area)) {
             out.add(describe(node) + " at " + rect(inScene) + " is cut off" + (mustBeInView ? " or below the fold" : "")
                     + ": it must lie inside " + rect(area));
+        }
+        if (cell && node instanceof ListCell<?> row && !row.isEmpty() && row.getListView() != null) {
+            Bounds text = textBounds(row);
+            if (text != null && text.getWidth() > 0
+                    && (text.getMinX() < inView.getMinX() - SLACK || text.getMaxX() > inView.getMaxX() + SLACK)) {
+                out.add(describe(node) + " in " + describe(row.getListView()) + " runs past the list's side: its text at "
+                        + rect(text) + " must lie across " + String.format(java.util.Locale.ROOT, "x %.0f..%.0f",
+                                inView.getMinX(), inView.getMaxX()) + " (wrap the row, or widen the list)");
+            }
         }
         if (node instanceof Labeled labeled && inScene.getWidth() > 0) {
             String shown = shownText(labeled);
@@ -196,6 +209,16 @@ public final class LayoutCheck {
         for (Node child : labeled.getChildrenUnmodifiable()) {
             if (child instanceof Text text && child.getStyleClass().contains("text")) {
                 return child.isVisible() ? text.getText() : null;
+            }
+        }
+        return null;
+    }
+
+    /** Where the skin draws a labeled's text, in the scene; null when it draws none. */
+    private static Bounds textBounds(Labeled labeled) {
+        for (Node child : labeled.getChildrenUnmodifiable()) {
+            if (child instanceof Text && child.getStyleClass().contains("text") && child.isVisible()) {
+                return child.localToScene(child.getLayoutBounds());
             }
         }
         return null;

@@ -99,6 +99,16 @@ class LayoutCheckTest {
     }
 
     @Test
+    void problems_listRowWiderThanTheList_isReported(FxRobot robot) {
+        ListView<String> list = new ListView<>();
+        list.setId("terms");
+        list.getItems().addAll("gangway [en]  \u2192 a long equivalent that needs more room than the list has [es]", "two");
+        list.setMaxWidth(200);
+        List<String> found = check(robot, new VBox(list), 400, 200);
+        assertTrue(found.stream().anyMatch(p -> p.contains("#terms") && p.contains("runs past the list's side")), found.toString());
+    }
+
+    @Test
     void problems_wrappedLabelNarrowerThanAWord_isReported(FxRobot robot) {
         Label l = new Label("A note to a neighbour");
         l.setWrapText(true);
