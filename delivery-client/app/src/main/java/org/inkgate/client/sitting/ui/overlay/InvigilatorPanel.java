@@ -8,9 +8,11 @@ import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.control.Spinner;
 import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.HBox;
+import javafx.scene.layout.Priority;
 import javafx.scene.layout.ColumnConstraints;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.StackPane;
@@ -123,15 +125,23 @@ public final class InvigilatorPanel extends StackPane {
         lists.addRow(0, Parts.fieldLabel("Focus _lost (left the window)", focus),
                 Parts.fieldLabel("Other e_vents", events));
         lists.addRow(1, focus, events);
-        VBox card = new VBox(12,
-                Parts.heading("Invigilator"),
+        VBox body = new VBox(12,
                 state,
                 lists,
                 buttons,
                 endTaskWarning, confirmEndTask,
-                exitNote,
-                close);
+                exitNote);
+        // on a short window or in large print the middle scrolls; the heading and the way back stay in view
+        ScrollPane middle = new ScrollPane(body);
+        middle.setId("invigilatorScroller");
+        middle.setFitToWidth(true);
+        middle.setHbarPolicy(ScrollPane.ScrollBarPolicy.NEVER);
+        middle.setFocusTraversable(false);
+        middle.getStyleClass().add("overlay-scroller");
+        VBox.setVgrow(middle, Priority.ALWAYS);
+        VBox card = new VBox(12, Parts.heading("Invigilator"), middle, close);
         card.getStyleClass().add("overlay-card");
+        // no taller than its content, and no taller than the window: the shade's StackPane shrinks it to fit
         card.setMaxSize(760, VBox.USE_PREF_SIZE);
         StackPane.setAlignment(card, Pos.CENTER);
         getChildren().add(card);
