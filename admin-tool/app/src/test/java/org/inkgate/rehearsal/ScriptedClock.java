@@ -3,7 +3,7 @@ package org.inkgate.rehearsal;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.concurrent.atomic.AtomicLong;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 
 /**
  * The sitting clock of a scripted candidate: it moves only when the script says time passes, so

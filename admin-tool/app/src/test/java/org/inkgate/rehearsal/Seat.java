@@ -24,8 +24,8 @@ import javafx.stage.Stage;
 import org.fxmisc.richtext.GenericStyledArea;
 import org.inkgate.client.sitting.ui.SittingFlow;
 import org.inkgate.client.sitting.ui.Workspaces;
-import org.inkgate.client.sitting.ui.open.SittingBundleOpener;
-import org.inkgate.client.sitting.ui.open.SittingLoad;
+import org.inkgate.client.sitting.open.SittingBundleOpener;
+import org.inkgate.client.sitting.open.SittingLoad;
 import org.inkgate.client.task.TaskWorkspace;
 
 /**

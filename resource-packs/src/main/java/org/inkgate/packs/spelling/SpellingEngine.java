@@ -70,6 +70,7 @@ public final class SpellingEngine implements SpellingChecker {
     private final boolean caching;
     private final ExecutorService executor;
     private final AtomicLong generation = new AtomicLong();
+    private volatile boolean closed;
     private final AtomicReference<CompletableFuture<CheckResult>> pending = new AtomicReference<>();
     private final Set<String> ignored = Collections.synchronizedSet(new LinkedHashSet<>());
     // touched only on the executor thread
@@ -141,6 +142,9 @@ public final class SpellingEngine implements SpellingChecker {
                 JLanguageTool lt = engine();
                 // several kinds of sentence, so more of LanguageTool's rules are loaded and compiled
                 for (String sentence : WARM_UP_TEXT) {
+                    if (closed) {
+                        return; // closed while warming: the rest would be wasted
+                    }
                     lt.check(sentence);
                 }
             } catch (IOException e) {
@@ -169,6 +173,10 @@ public final class SpellingEngine implements SpellingChecker {
                 result.cancel(false);
             } catch (IOException | RuntimeException e) {
                 result.completeExceptionally(e);
+            } catch (Error e) {
+                // the caller must not wait for ever on a check that cannot finish
+                result.completeExceptionally(e);
+                throw e;
             }
         });
         return result;
@@ -192,9 +200,23 @@ public final class SpellingEngine implements SpellingChecker {
         }
     }
 
+    /**
+     * Stops the engine: pending checks are cancelled, a check in progress stops at its next
+     * paragraph, a warm-up at its next sentence. The engine thread is never interrupted:
+     * LanguageTool reacts to an interrupt inside the static initialisers of its rule classes
+     * (seen in 6.6: {@code EnglishRepeatedWordsRule}), and the JVM then refuses those classes for
+     * the rest of its life, so every later engine would fail. A LanguageTool still loading
+     * finishes loading on the engine's daemon thread, which then ends.
+     */
     @Override
     public void close() {
-        executor.shutdownNow();
+        closed = true;
+        generation.incrementAndGet();
+        CompletableFuture<CheckResult> waiting = pending.getAndSet(null);
+        if (waiting != null) {
+            waiting.cancel(false);
+        }
+        executor.shutdown();
     }
 
     private CheckResult checkNow(String text, long mine, Instant at) throws IOException {

@@ -1,13 +1,8 @@
 package org.inkgate.client.sitting;
 
-import com.fasterxml.jackson.core.type.TypeReference;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
-import java.sql.SQLException;
 import java.time.Duration;
 import java.security.PublicKey;
 import java.time.Instant;
@@ -24,12 +19,10 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.Set;
-import java.util.TreeMap;
-import java.util.TreeSet;
 import java.util.UUID;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Collectors;
-import org.inkgate.client.sitting.recovery.RecoveryScan;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.sitting.recovery.TextRecovery;
 import org.inkgate.client.sitting.recovery.UnfinishedSitting;
 import org.inkgate.client.sitting.replay.ReplayException;
@@ -37,6 +30,18 @@ import org.inkgate.client.sitting.replay.ReplayMismatch;
 import org.inkgate.client.sitting.replay.TextReplay;
 import org.inkgate.client.sitting.store.ClientDataFolder;
 import org.inkgate.client.sitting.store.SittingDatabase;
+import org.inkgate.client.sitting.store.SittingScreen;
+import org.inkgate.client.sitting.store.SittingStateStore;
+import org.inkgate.client.sitting.store.SittingStateStore.PlannedTask;
+import org.inkgate.client.sitting.store.SittingStateStore.SittingSetup;
+import org.inkgate.client.sitting.store.SittingStateStore.StoredResponses;
+import org.inkgate.client.sitting.store.SittingStateStore.StoredSitting;
+import org.inkgate.client.sitting.store.SittingStateStore.StoredTask;
+import org.inkgate.client.sitting.store.SittingStateStore.TaskLog;
+import org.inkgate.client.sitting.store.SittingStateStore.TaskOutcome;
+import org.inkgate.client.sitting.store.SittingStateStore.TaskTimes;
+import org.inkgate.client.sitting.store.SittingStateStore.TimerCheckpoint;
+import org.inkgate.client.sitting.store.SittingStatus;
 import org.inkgate.client.sitting.store.SqliteProcessLog;
 import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.sitting.submit.PackageDelivery;
@@ -102,12 +107,13 @@ public final class Sitting implements AutoCloseable {
     private final ClientDataFolder folder;
     private final SittingClock clock;
     private final SqliteProcessLog log;
+    private final SittingStateStore store;
     private final Instant startedAt;
     private final Map<String, TaskRecord> tasks = new LinkedHashMap<>();
     private final Optional<Countdown> sittingCountdown;
     private boolean sittingClockStarted;
     private String currentTask;
-    private String screen;
+    private SittingScreen screen;
     private boolean paused;
     private long pauseStartedMono;
     private long lastCheckpointMono;
@@ -119,13 +125,13 @@ public final class Sitting implements AutoCloseable {
     private boolean endRecorded;
 
     private Sitting(String sittingId, SittingPlan plan, ClientDataFolder folder, SittingClock clock, SqliteProcessLog log,
-            Instant startedAt, Map<String, long[]> usedAdded, Map<String, Set<Integer>> warned, long sittingUsed,
-            long sittingAdded) {
+            Instant startedAt, Map<String, StoredTask> stored, long sittingUsed, long sittingAdded) {
         this.sittingId = sittingId;
         this.plan = plan;
         this.folder = folder;
         this.clock = clock;
         this.log = log;
+        this.store = new SittingStateStore(log);
         this.startedAt = startedAt;
         List<FormSlot> slots = plan.form().slots();
         for (int i = 0; i < slots.size(); i++) {
@@ -133,10 +139,11 @@ public final class Sitting implements AutoCloseable {
             TaskSpec spec = plan.manifest().task(slot.taskId()).orElseThrow(
                     () -> new IllegalArgumentException("form " + plan.formId() + " names task " + slot.taskId()
                             + " that the bundle does not define"));
-            long[] ua = usedAdded.getOrDefault(spec.id(), new long[2]);
+            Optional<StoredTask> before = Optional.ofNullable(stored.get(spec.id()));
             Optional<Countdown> countdown = spec.timeLimitSeconds() <= 0 ? Optional.empty()
                     : Optional.of(new Countdown(clock, TimeUnit.SECONDS.toMillis(spec.timeLimitSeconds()), plan.extraTimePercent(),
-                            spec.warningMinutes(), ua[0], ua[1], warned.getOrDefault(spec.id(), Set.of())));
+                            spec.warningMinutes(), before.map(StoredTask::usedMillis).orElse(0L),
+                            before.map(StoredTask::addedMillis).orElse(0L), before.map(StoredTask::warned).orElse(Set.of())));
             tasks.put(spec.id(), new TaskRecord(i, slot, spec, countdown));
         }
         int sittingLimit = plan.form().sittingLimitSeconds();
@@ -165,37 +172,12 @@ public final class Sitting implements AutoCloseable {
         Path file = folder.sittings().resolve(FILE_TIME.format(now) + "-" + safe(plan.candidateNumber()) + "-" + id
                 + SittingDatabase.SUFFIX);
         SqliteProcessLog log = SqliteProcessLog.open(file, clock);
-        Sitting s = new Sitting(id, plan, folder, clock, log, now, Map.of(), Map.of(), 0, 0);
-        s.screen = "";
-        log.persist(c -> {
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO sitting(id, sitting_id, bundle_sha256, bundle_file, exam_id,"
-                    + " candidate, form_id, seat, extra_percent, started_at, status, checkpoint_at, client_version, screen,"
-                    + " current_task, output_folder) VALUES (1, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, '', NULL, ?)")) {
-                ps.setString(1, id);
-                ps.setString(2, plan.manifestSha256());
-                ps.setString(3, plan.bundleFile());
-                ps.setString(4, plan.manifest().examId());
-                ps.setString(5, plan.candidateNumber());
-                ps.setString(6, plan.formId());
-                ps.setString(7, plan.seat());
-                ps.setInt(8, plan.extraTimePercent());
-                ps.setString(9, now.toString());
-                ps.setString(10, RecoveryScan.IN_PROGRESS);
-                ps.setString(11, now.toString());
-                ps.setString(12, plan.clientVersion());
-                ps.setString(13, outputFolder == null ? null : outputFolder.toAbsolutePath().toString());
-                ps.executeUpdate();
-            }
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO tasks(task_id, ord, condition_id, policy) VALUES (?, ?, ?, ?)")) {
-                for (TaskRecord t : s.tasks.values()) {
-                    ps.setString(1, t.spec.id());
-                    ps.setInt(2, t.order);
-                    ps.setString(3, t.slot.conditionId());
-                    ps.setString(4, policyJson(t.slot.policy()));
-                    ps.executeUpdate();
-                }
-            }
-        });
+        Sitting s = new Sitting(id, plan, folder, clock, log, now, Map.of(), 0, 0);
+        s.screen = SittingScreen.START;
+        s.store.createSitting(new SittingSetup(id, plan.manifestSha256(), plan.bundleFile(), plan.manifest().examId(),
+                plan.candidateNumber(), plan.formId(), plan.seat(), plan.extraTimePercent(), now, plan.clientVersion(),
+                Optional.ofNullable(outputFolder)), s.tasks.values().stream()
+                .map(t -> new PlannedTask(t.spec.id(), t.order, t.slot.conditionId(), policyJson(t.slot.policy()))).toList());
         log.record(EventType.SITTING_START, null, Map.of("bundle", plan.manifestSha256(), "form", plan.formId(),
                 "candidate", plan.candidateNumber()));
         log.flush();
@@ -219,65 +201,41 @@ public final class Sitting implements AutoCloseable {
         }
         SqliteProcessLog log = SqliteProcessLog.open(found.database(), clock);
         try {
-            return log.read(c -> load(c, found, manifest, credited, folder, clock, log));
+            StoredSitting stored = new SittingStateStore(log).loadSitting();
+            Sitting s = restore(stored, found, manifest, folder, clock, log);
+            s.creditDowntime(found.downtime(clock.now()), credited);
+            return s;
         } catch (IOException | RuntimeException e) {
             log.close();
             throw e;
         }
     }
 
-    private static Sitting load(Connection c, UnfinishedSitting found, BundleManifest manifest, Duration credited,
-            ClientDataFolder folder, SittingClock clock, SqliteProcessLog log) throws SQLException {
-        Map<String, long[]> usedAdded = new TreeMap<>();
-        Map<String, Set<Integer>> warned = new TreeMap<>();
-        Map<String, Object[]> progress = new TreeMap<>();
-        try (PreparedStatement ps = c.prepareStatement(
-                "SELECT task_id, used_ms, added_ms, warned, started_at, ended_at, end_reason FROM tasks");
-                ResultSet rs = ps.executeQuery()) {
-            while (rs.next()) {
-                usedAdded.put(rs.getString(1), new long[] {rs.getLong(2), rs.getLong(3)});
-                Set<Integer> w = new TreeSet<>();
-                for (String part : rs.getString(4).split(",")) {
-                    if (!part.isBlank()) {
-                        w.add(Integer.parseInt(part.strip()));
-                    }
-                }
-                warned.put(rs.getString(1), w);
-                progress.put(rs.getString(1), new Object[] {rs.getString(5), rs.getString(6), rs.getString(7)});
+    private static Sitting restore(StoredSitting stored, UnfinishedSitting found, BundleManifest manifest, ClientDataFolder folder,
+            SittingClock clock, SqliteProcessLog log) {
+        var entry = manifest.roster().stream().filter(r -> r.candidateNumber().equals(found.candidateNumber())).findFirst();
+        SittingPlan plan = new SittingPlan(manifest, found.bundleSha256(), found.bundleFile(), found.candidateNumber(),
+                stored.seat(), found.formId(), stored.extraPercent(), entry.map(r -> r.largePrint()).orElse(false),
+                entry.map(r -> r.highContrast()).orElse(false), stored.clientVersion());
+        Sitting s = new Sitting(found.sittingId(), plan, folder, clock, log, stored.startedAt(), stored.tasks(),
+                stored.sittingUsedMillis(), stored.sittingAddedMillis());
+        s.screen = stored.screen();
+        s.currentTask = stored.currentTask().orElse(null);
+        s.paused = stored.paused();
+        s.pauseStartedMono = clock.monoNanos();
+        s.packageId = stored.packageId().orElse(null);
+        s.localCopy = stored.localCopy().orElse(null);
+        s.submitted = stored.status() != SittingStatus.IN_PROGRESS;
+        for (StoredTask st : stored.tasks().values()) {
+            TaskRecord t = s.tasks.get(st.taskId());
+            if (t != null) {
+                t.startedAt = st.startedAt().orElse(null);
+                t.endedAt = st.endedAt().orElse(null);
+                t.endReason = st.endReason().orElse(null);
             }
         }
-        try (PreparedStatement ps = c.prepareStatement("SELECT seat, extra_percent, started_at, sitting_used_ms, sitting_added_ms,"
-                + " screen, current_task, paused, package_id, local_copy, status, client_version FROM sitting WHERE id = 1");
-                ResultSet rs = ps.executeQuery()) {
-            if (!rs.next()) {
-                throw new SQLException(found.database() + " holds no sitting");
-            }
-            int extra = rs.getInt(2);
-            var entry = manifest.roster().stream().filter(r -> r.candidateNumber().equals(found.candidateNumber())).findFirst();
-            SittingPlan plan = new SittingPlan(manifest, found.bundleSha256(), found.bundleFile(), found.candidateNumber(),
-                    rs.getString(1), found.formId(), extra, entry.map(r -> r.largePrint()).orElse(false),
-                    entry.map(r -> r.highContrast()).orElse(false), rs.getString(12));
-            Sitting s = new Sitting(found.sittingId(), plan, folder, clock, log, Instant.parse(rs.getString(3)), usedAdded, warned,
-                    rs.getLong(4), rs.getLong(5));
-            s.screen = Objects.requireNonNullElse(rs.getString(6), "");
-            s.currentTask = rs.getString(7);
-            s.paused = rs.getInt(8) != 0;
-            s.pauseStartedMono = clock.monoNanos();
-            s.packageId = rs.getString(9);
-            s.localCopy = rs.getString(10) == null ? null : Path.of(rs.getString(10));
-            s.submitted = !RecoveryScan.IN_PROGRESS.equals(rs.getString(11));
-            for (Map.Entry<String, Object[]> p : progress.entrySet()) {
-                TaskRecord t = s.tasks.get(p.getKey());
-                if (t != null) {
-                    t.startedAt = p.getValue()[0] == null ? null : Instant.parse((String) p.getValue()[0]);
-                    t.endedAt = p.getValue()[1] == null ? null : Instant.parse((String) p.getValue()[1]);
-                    t.endReason = p.getValue()[2] == null ? null : EndReason.valueOf((String) p.getValue()[2]);
-                }
-            }
-            s.sittingClockStarted = s.tasks.values().stream().anyMatch(t -> t.startedAt != null);
-            s.creditDowntime(found.downtime(clock.now()), credited);
-            return s;
-        }
+        s.sittingClockStarted = s.tasks.values().stream().anyMatch(t -> t.startedAt != null);
+        return s;
     }
 
     private void creditDowntime(Duration down, Duration credited) {
@@ -351,7 +309,7 @@ public final class Sitting implements AutoCloseable {
     }
 
     /** The screen last shown ({@link #showScreen}). */
-    public String screen() {
+    public SittingScreen screen() {
         return screen;
     }
 
@@ -388,11 +346,17 @@ public final class Sitting implements AutoCloseable {
     // -- what the flow does --
 
     /** Logs that a screen of the flow is shown ({@code nav.screen}) and remembers it for recovery. */
-    public void showScreen(String name) {
+    public void showScreen(SittingScreen shown) {
         requireOpen();
-        screen = Objects.requireNonNull(name, "name");
-        log.record(EventType.NAV_SCREEN, currentTask, Map.of("screen", name));
-        log.persist(c -> update(c, "UPDATE sitting SET screen = ? WHERE id = 1", name));
+        screen = Objects.requireNonNull(shown, "shown");
+        log.record(EventType.NAV_SCREEN, currentTask, Map.of("screen", shown.wireName()));
+        store.saveScreen(shown);
+    }
+
+    /** Logs that the invigilator closed the client without a hand-in; the screen to resume on stays as it was. */
+    public void exitedByInvigilator() {
+        requireOpen();
+        log.record(EventType.NAV_SCREEN, currentTask, Map.of("screen", SittingScreen.EXIT_BY_INVIGILATOR.wireName()));
     }
 
     /**
@@ -417,17 +381,18 @@ public final class Sitting implements AutoCloseable {
             throw new IllegalStateException("the sitting is paused; resume it before entering a task");
         }
         boolean resumed = t.startedAt != null;
-        TextRecovery.Recovered recovered = resumed ? log.read(c -> TextRecovery.recover(c, taskId))
-                : new TextRecovery.Recovered("", 0, 0, 0, Optional.empty(), Optional.empty());
         // read before this process logs anything for the task: what the crashed process logged
-        List<ProcessEvent> loggedBefore = resumed ? log.read(c -> SqliteProcessLog.readTaskEvents(c, taskId, 0)) : List.of();
+        TaskLog logged = resumed ? store.taskLog(taskId) : new TaskLog(Optional.empty(), List.of());
+        TextRecovery.Recovered recovered = resumed ? TextRecovery.recover(taskId, logged)
+                : new TextRecovery.Recovered("", 0, 0, 0, Optional.empty(), Optional.empty());
+        List<ProcessEvent> loggedBefore = logged.events();
         Instant now = clock.now();
         if (!resumed) {
             t.startedAt = now;
-            log.persist(c -> update(c, "UPDATE tasks SET started_at = ? WHERE task_id = ?", now.toString(), taskId));
+            store.markTaskStarted(taskId, now);
         }
         currentTask = taskId;
-        log.persist(c -> update(c, "UPDATE sitting SET current_task = ? WHERE id = 1", taskId));
+        store.saveCurrentTask(taskId);
         ResourcePolicy policy = t.slot.policy();
         log.record(EventType.TASK_START, taskId, Map.of("policy", policyJson(policy), "tools", toolNames(policy.offeredTools()),
                 "resumed", resumed, "condition", t.slot.conditionId()));
@@ -460,30 +425,15 @@ public final class Sitting implements AutoCloseable {
         t.endedAt = now;
         t.endReason = reason;
         Set<Tool> offered = t.slot.policy().offeredTools();
-        Map<String, ToolUse> use = new TreeMap<>();
+        Map<Tool, ToolUse> use = new EnumMap<>(Tool.class);
         Objects.requireNonNullElse(toolUse, Map.<Tool, ToolUse>of()).forEach((tool, u) -> {
             if (offered.contains(tool)) {
-                use.put(tool.name(), u);
+                use.put(tool, u);
             }
         });
         log.snapshot(taskId, finalText, finalText.length());
         log.record(EventType.TASK_END, taskId, Map.of("reason", reasonName(reason), "words", wordCount));
-        long used = t.countdown.map(Countdown::usedMillis).orElse(0L);
-        String useJson = new String(Json.writeLine(use), java.nio.charset.StandardCharsets.UTF_8);
-        log.persist(c -> {
-            try (PreparedStatement ps = c.prepareStatement("UPDATE tasks SET ended_at = ?, end_reason = ?, final_text = ?,"
-                    + " word_count = ?, tool_use = ?, used_ms = ? WHERE task_id = ?")) {
-                ps.setString(1, now.toString());
-                ps.setString(2, reason.name());
-                ps.setString(3, finalText);
-                ps.setInt(4, wordCount);
-                ps.setString(5, useJson);
-                ps.setLong(6, used);
-                ps.setString(7, taskId);
-                ps.executeUpdate();
-            }
-            update(c, "UPDATE sitting SET current_task = NULL WHERE id = 1");
-        });
+        store.saveTaskEnd(taskId, now, reason, finalText, wordCount, use, t.countdown.map(Countdown::usedMillis).orElse(0L));
         currentTask = null;
     }
 
@@ -500,8 +450,7 @@ public final class Sitting implements AutoCloseable {
                 t.endReason = reason;
                 String id = t.spec.id();
                 log.record(EventType.TASK_END, id, Map.of("reason", reasonName(reason), "words", 0, "begun", false));
-                log.persist(c -> update(c, "UPDATE tasks SET ended_at = ?, end_reason = ?, final_text = '', word_count = 0,"
-                        + " tool_use = '{}' WHERE task_id = ?", now.toString(), reason.name(), id));
+                store.saveUnstartedTaskEnd(id, now, reason);
             }
         }
     }
@@ -537,8 +486,7 @@ public final class Sitting implements AutoCloseable {
                         + ", not \"" + value + "\"");
             }
         }
-        log.persist(c -> update(c, "INSERT OR REPLACE INTO answers(questionnaire_id, item_id, value) VALUES (?, ?, ?)",
-                questionnaireId, itemId, value));
+        store.saveAnswer(questionnaireId, itemId, value);
     }
 
     /** Pauses the sitting (the invigilator's emergency pause): time stops, {@code pause.start} is logged. */
@@ -639,16 +587,7 @@ public final class Sitting implements AutoCloseable {
      */
     public List<ReplayMismatch> verifyReplay() throws IOException {
         List<ProcessEvent> events = log.events();
-        Map<String, String> finals = log.read(c -> {
-            Map<String, String> m = new TreeMap<>();
-            try (PreparedStatement ps = c.prepareStatement("SELECT task_id, final_text FROM tasks WHERE final_text IS NOT NULL");
-                    ResultSet rs = ps.executeQuery()) {
-                while (rs.next()) {
-                    m.put(rs.getString(1), rs.getString(2));
-                }
-            }
-            return m;
-        });
+        Map<String, String> finals = store.finalTexts();
         List<ReplayMismatch> mismatches = new ArrayList<>();
         for (Map.Entry<String, String> f : finals.entrySet()) {
             try {
@@ -680,8 +619,7 @@ public final class Sitting implements AutoCloseable {
         }
         if (packageId == null) {
             packageId = UUID.randomUUID().toString();
-            String id = packageId;
-            log.persist(c -> update(c, "UPDATE sitting SET package_id = ? WHERE id = 1", id));
+            store.savePackageId(packageId);
         }
         sittingCountdown.ifPresent(Countdown::stop);
         if (!endRecorded) {
@@ -692,15 +630,14 @@ public final class Sitting implements AutoCloseable {
         checkpoint();
         Instant submittedAt = clock.now();
         List<ProcessEvent> events = log.events();
-        ResponseDocument document = log.read(c -> responseDocument(c, submittedAt));
+        ResponseDocument document = responseDocument(store.responses(), submittedAt);
         PublicKey ownerKey = X25519.publicFromRaw(Base64.getDecoder().decode(plan.manifest().ownerKeys().encryption()));
         byte[] bytes = new ResponsePackageWriter(key.key(), ownerKey).encode(document, events);
         Path local = folder.responses().resolve(packageFileName());
         AtomicFiles.write(local, out -> out.write(bytes));
         localCopy = local;
         submitted = true;
-        log.persist(c -> update(c, "UPDATE sitting SET status = ?, submitted_at = ?, local_copy = ? WHERE id = 1",
-                RecoveryScan.AWAITING_DELIVERY, submittedAt.toString(), local.toString()));
+        store.markSubmitted(submittedAt, local);
         log.flush();
         return deliver(bytes, outputFolder);
     }
@@ -722,8 +659,7 @@ public final class Sitting implements AutoCloseable {
     private SubmissionResult deliver(byte[] bytes, Path outputFolder) throws IOException {
         PackageDelivery.Outcome outcome = delivery.deliver(bytes, outputFolder, packageFileName());
         if (outcome.delivered().isPresent()) {
-            String to = outcome.delivered().get().toString();
-            log.persist(c -> update(c, "UPDATE sitting SET status = ?, delivered_to = ? WHERE id = 1", RecoveryScan.DELIVERED, to));
+            store.markDelivered(outcome.delivered().get());
             log.flush();
         }
         return new SubmissionResult(packageId, localCopy, outcome.delivered(), outcome.failure());
@@ -740,34 +676,16 @@ public final class Sitting implements AutoCloseable {
         return safe(plan.manifest().examId()) + "-" + safe(plan.candidateNumber()) + "-" + packageId + ".inkresp";
     }
 
-    private ResponseDocument responseDocument(Connection c, Instant submittedAt) throws SQLException {
+    private ResponseDocument responseDocument(StoredResponses stored, Instant submittedAt) {
         List<TaskResponse> responses = new ArrayList<>();
-        try (PreparedStatement ps = c.prepareStatement("SELECT task_id, final_text, word_count, tool_use, started_at, ended_at,"
-                + " end_reason, added_ms FROM tasks ORDER BY ord"); ResultSet rs = ps.executeQuery()) {
-            while (rs.next()) {
-                TaskRecord t = tasks.get(rs.getString(1));
-                Map<String, ToolUse> stored;
-                try {
-                    stored = Json.mapper().readValue(Objects.requireNonNullElse(rs.getString(4), "{}"),
-                            new TypeReference<Map<String, ToolUse>>() { });
-                } catch (IOException e) {
-                    throw new SQLException("task " + t.spec.id() + " has unreadable tool use: " + e.getMessage(), e);
-                }
-                Map<Tool, ToolUse> use = new EnumMap<>(Tool.class);
-                stored.forEach((name, u) -> use.put(Tool.valueOf(name), u));
-                long extraMs = t.countdown.map(cd -> cd.rosterExtraMillis() + cd.addedMillis()).orElse(rs.getLong(8));
-                responses.add(new TaskResponse(t.spec.id(), t.slot.conditionId(), Objects.requireNonNullElse(rs.getString(2), ""),
-                        rs.getInt(3), parse(rs.getString(5)), parse(rs.getString(6)), extraMs / 1000, t.slot.policy(),
-                        t.slot.policy().offeredTools(), use, EndReason.valueOf(rs.getString(7))));
-            }
+        for (TaskOutcome o : stored.tasks()) {
+            TaskRecord t = tasks.get(o.taskId());
+            long extraMs = t.countdown.map(cd -> cd.rosterExtraMillis() + cd.addedMillis()).orElse(o.addedMillis());
+            responses.add(new TaskResponse(t.spec.id(), t.slot.conditionId(), o.finalText(), o.wordCount(),
+                    o.startedAt().orElse(null), o.endedAt().orElse(null), extraMs / 1000, t.slot.policy(),
+                    t.slot.policy().offeredTools(), o.toolUse(), o.endReason()));
         }
-        Map<String, Map<String, String>> answers = new TreeMap<>();
-        try (PreparedStatement ps = c.prepareStatement("SELECT questionnaire_id, item_id, value FROM answers");
-                ResultSet rs = ps.executeQuery()) {
-            while (rs.next()) {
-                answers.computeIfAbsent(rs.getString(1), k -> new TreeMap<>()).put(rs.getString(2), rs.getString(3));
-            }
-        }
+        Map<String, Map<String, String>> answers = stored.answers();
         List<QuestionnaireAnswers> questionnaires = answers.entrySet().stream()
                 .map(e -> new QuestionnaireAnswers(e.getKey(), e.getValue())).toList();
         return new ResponseDocument(ResponseDocument.FORMAT, ResponseDocument.SCHEMA_VERSION, packageId, plan.manifest().examId(),
@@ -793,19 +711,11 @@ public final class Sitting implements AutoCloseable {
         Instant now = clock.now();
         long sittingUsed = sittingCountdown.map(Countdown::usedMillis).orElse(0L);
         long sittingAdded = sittingCountdown.map(Countdown::addedMillis).orElse(0L);
-        boolean isPaused = paused;
-        List<Object[]> taskTimes = new ArrayList<>();
+        List<TaskTimes> taskTimes = new ArrayList<>();
         for (TaskRecord t : tasks.values()) {
-            t.countdown.ifPresent(cd -> taskTimes.add(new Object[] {cd.usedMillis(), cd.addedMillis(),
-                    cd.warned().stream().sorted().map(String::valueOf).collect(Collectors.joining(",")), t.spec.id()}));
+            t.countdown.ifPresent(cd -> taskTimes.add(new TaskTimes(t.spec.id(), cd.usedMillis(), cd.addedMillis(), cd.warned())));
         }
-        log.persist(c -> {
-            update(c, "UPDATE sitting SET sitting_used_ms = ?, sitting_added_ms = ?, paused = ?, checkpoint_at = ? WHERE id = 1",
-                    sittingUsed, sittingAdded, isPaused ? 1 : 0, now.toString());
-            for (Object[] row : taskTimes) {
-                update(c, "UPDATE tasks SET used_ms = ?, added_ms = ?, warned = ? WHERE task_id = ?", row);
-            }
-        });
+        store.saveTimers(new TimerCheckpoint(now, sittingUsed, sittingAdded, paused, taskTimes));
     }
 
     private Optional<TaskRecord> running() {
@@ -828,19 +738,6 @@ public final class Sitting implements AutoCloseable {
         if (closed) {
             throw new IllegalStateException("the sitting " + sittingId + " is closed");
         }
-    }
-
-    private static void update(Connection c, String sql, Object... args) throws SQLException {
-        try (PreparedStatement ps = c.prepareStatement(sql)) {
-            for (int i = 0; i < args.length; i++) {
-                ps.setObject(i + 1, args[i]);
-            }
-            ps.executeUpdate();
-        }
-    }
-
-    private static Instant parse(String text) {
-        return text == null ? null : Instant.parse(text);
     }
 
     private static boolean isLikert(QuestionItem item) {

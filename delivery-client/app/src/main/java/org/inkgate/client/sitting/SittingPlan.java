@@ -3,6 +3,7 @@ package org.inkgate.client.sitting;
 import java.util.Objects;
 import java.util.Optional;
 import org.inkgate.format.bundle.BundleManifest;
+import org.inkgate.format.bundle.CandidateNumber;
 import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.RosterEntry;
 
@@ -42,26 +43,30 @@ public record SittingPlan(BundleManifest manifest, String manifestSha256, String
      * The plan for a candidate: with a roster, the candidate must be on it and the form and
      * accommodations are the roster's; without one (open sitting), {@code openForm} names the form.
      *
-     * @throws IllegalArgumentException saying what is wrong (unknown candidate number, no form)
+     * The number is matched as the roster's rules say ({@link CandidateNumber}).
+     *
+     * @throws NotOnRoster when the number is empty or not on the roster, worded for the candidate who typed it
+     * @throws IllegalArgumentException when the invigilator must choose a form
      */
     public static SittingPlan forCandidate(BundleManifest manifest, String manifestSha256, String bundleFile,
             String candidateNumber, String seat, String openForm, String clientVersion) {
         String number = Objects.requireNonNull(candidateNumber, "candidateNumber").strip();
         if (number.isEmpty()) {
-            throw new IllegalArgumentException("no candidate number was entered");
+            throw new NotOnRoster("Type your candidate number first. It is on your admission details.");
         }
         if (!org.inkgate.format.bundle.CandidateNumber.isValid(number)) {
             throw new IllegalArgumentException("a candidate number has " + org.inkgate.format.bundle.CandidateNumber.RULE
                     + "; check the number with the candidate's admission details");
         }
         if (!manifest.roster().isEmpty()) {
-            Optional<RosterEntry> entry = manifest.roster().stream().filter(r -> r.candidateNumber().equals(number)).findFirst();
+            Optional<RosterEntry> entry = CandidateNumber.find(manifest.roster(), number);
             if (entry.isEmpty()) {
-                throw new IllegalArgumentException("candidate number " + number + " is not on this exam's roster;"
-                        + " check the number with the candidate's admission details, or ask the test owner");
+                throw new NotOnRoster("The number " + number + " is not on the list for this exam. Check it against"
+                        + " your admission details and type it again. If it is right, ask the invigilator.");
             }
             RosterEntry r = entry.get();
-            return new SittingPlan(manifest, manifestSha256, bundleFile, number, seat, r.formId(), r.extraTimePercent(),
+            // the roster's spelling, whatever case was typed: the response and the admin tool match on it
+            return new SittingPlan(manifest, manifestSha256, bundleFile, r.candidateNumber(), seat, r.formId(), r.extraTimePercent(),
                     r.largePrint(), r.highContrast(), clientVersion);
         }
         String form = openForm;
@@ -73,6 +78,15 @@ public record SittingPlan(BundleManifest manifest, String manifestSha256, String
                     + " forms: the invigilator must choose the form");
         }
         return new SittingPlan(manifest, manifestSha256, bundleFile, number, seat, form, 0, false, false, clientVersion);
+    }
+
+    /** The candidate's number cannot start a sitting; the message is for the candidate at the sign-in screen. */
+    public static final class NotOnRoster extends IllegalArgumentException {
+        private static final long serialVersionUID = 1L;
+
+        NotOnRoster(String message) {
+            super(message);
+        }
     }
 
     /** The form sat. */

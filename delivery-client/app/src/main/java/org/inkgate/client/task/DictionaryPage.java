@@ -5,12 +5,12 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import javafx.animation.PauseTransition;
 import javafx.geometry.Pos;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Hyperlink;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
@@ -30,8 +30,9 @@ import org.inkgate.packs.event.Timed;
 import org.inkgate.packs.policy.Tool;
 
 /**
- * The dictionary page: look a word up (on Enter, so half-typed words are not logged as lookups),
- * pick an entry to read its senses with definitions, examples and synonyms; near spellings when
+ * The dictionary page: look a word up as you type, the way the glossary searches (after the same
+ * typing pause, {@link GlossaryPage#SEARCH_AFTER}, so each logged lookup is a word the candidate
+ * stopped at; Enter looks up at once), pick an entry to read its senses with definitions, examples and synonyms; near spellings when
  * nothing matched; insertion of the word or a synonym only when the policy allows it.
  */
 final class DictionaryPage implements ToolPage {
@@ -47,6 +48,9 @@ final class DictionaryPage implements ToolPage {
     private final ListView<DictionaryEntry> results = new ListView<>();
     private final VBox entryView = new VBox(10);
     private final InsertRow insertRow;
+    private final PauseTransition typingPause = new PauseTransition(GlossaryPage.SEARCH_AFTER);
+    /** True while the page itself fills the box (the word at the caret): that is not a lookup the candidate asked for. */
+    private boolean filling;
     private final VBox root;
 
     DictionaryPage(Dictionary dictionary, TaskEvents events, PanelActions actions, Lookups lookups) {
@@ -59,10 +63,22 @@ final class DictionaryPage implements ToolPage {
         query.setId("dictionaryQuery");
         query.setPromptText("A word to look up");
         query.setAccessibleText("Word to look up in the dictionary");
-        query.setOnAction(e -> lookUp(query.getText()));
+        typingPause.setOnFinished(e -> lookUp(query.getText()));
+        query.textProperty().addListener((o, was, now) -> {
+            if (!filling) {
+                typingPause.playFromStart();
+            }
+        });
+        query.setOnAction(e -> {
+            typingPause.stop();
+            lookUp(query.getText());
+        });
         Button go = new Button("Look up");
         go.setId("dictionaryLookUp");
-        go.setOnAction(e -> lookUp(query.getText()));
+        go.setOnAction(e -> {
+            typingPause.stop();
+            lookUp(query.getText());
+        });
         go.setMinWidth(Region.USE_PREF_SIZE); // never shortened to "..." in large print
         HBox.setHgrow(query, Priority.ALWAYS);
         HBox search = new HBox(8, query, go);
@@ -72,15 +88,8 @@ final class DictionaryPage implements ToolPage {
         nearSpellings.setId("dictionaryNear");
         results.setId("dictionaryResults");
         results.setAccessibleText("Dictionary entries found");
-        results.setPrefHeight(120);
-        results.setCellFactory(v -> new ListCell<>() {
-            @Override
-            protected void updateItem(DictionaryEntry item, boolean empty) {
-                super.updateItem(item, empty);
-                setText(empty || item == null ? null : item.lemma() + "  (" + item.partOfSpeech().label() + ", "
-                        + item.senses().size() + (item.senses().size() == 1 ? " sense)" : " senses)"));
-            }
-        });
+        WrappedRows.show(results, item -> item.lemma() + "  (" + item.partOfSpeech().label() + ", "
+                + item.senses().size() + (item.senses().size() == 1 ? " sense)" : " senses)"));
         // opening an entry is a deliberate act (click or Enter), so arrowing through the list logs nothing
         results.setOnMouseClicked(e -> {
             if (e.getButton() == MouseButton.PRIMARY) {
@@ -127,14 +136,23 @@ final class DictionaryPage implements ToolPage {
     @Override
     public void focusStart() {
         if (query.getText().isBlank()) {
-            query.setText(actions.wordAtCaret());
+            filling = true;
+            try {
+                query.setText(actions.wordAtCaret());
+            } finally {
+                filling = false;
+            }
         }
         query.requestFocus();
         query.selectAll();
     }
 
     void lookUp(String word) {
-        if (actions.frozen().get() || word == null || word.isBlank()) {
+        if (actions.frozen().get()) {
+            return;
+        }
+        if (word == null || word.isBlank()) {
+            searches.cancel();
             return;
         }
         status.setText("Looking up \u201C" + word.strip() + "\u201D\u2026");

@@ -8,7 +8,6 @@ import javafx.animation.PauseTransition;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.control.ScrollPane;
 import javafx.scene.control.TextField;
@@ -69,14 +68,7 @@ final class GlossaryPage implements ToolPage {
         status.setId("glossaryStatus");
         results.setId("glossaryResults");
         results.setAccessibleText("Glossary terms found");
-        results.setPrefHeight(150);
-        results.setCellFactory(v -> new ListCell<>() {
-            @Override
-            protected void updateItem(GlossaryHit item, boolean empty) {
-                super.updateItem(item, empty);
-                setText(empty || item == null ? null : describe(item));
-            }
-        });
+        WrappedRows.show(results, GlossaryPage::describe);
         results.setOnMouseClicked(e -> {
             if (e.getButton() == MouseButton.PRIMARY) {
                 openSelected();

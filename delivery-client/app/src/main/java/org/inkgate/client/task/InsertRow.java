@@ -29,7 +29,7 @@ final class InsertRow {
         this.actions = actions;
         choices.setId(idPrefix + "Insertable");
         choices.setAccessibleText(Character.toUpperCase(noun.charAt(0)) + noun.substring(1) + "s from this entry you may insert");
-        choices.setPrefHeight(96);
+        WrappedRows.show(choices, chosen -> chosen);
         Button insert = new Button("Insert into answer");
         insert.setId(idPrefix + "Insert");
         insert.disableProperty().bind(choices.getSelectionModel().selectedItemProperty().isNull());

@@ -7,6 +7,7 @@ import javafx.beans.value.ChangeListener;
 import javafx.scene.Node;
 import javafx.scene.Scene;
 import javafx.scene.control.Label;
+import javafx.scene.control.ScrollPane;
 import javafx.scene.control.Tab;
 import javafx.scene.control.TabPane;
 import javafx.scene.layout.Priority;
@@ -56,7 +57,14 @@ final class ResourcePanel extends VBox {
         tabs.setId("toolTabs");
         tabs.setTabClosingPolicy(TabPane.TabClosingPolicy.UNAVAILABLE);
         for (ToolPage p : pages) {
-            Tab tab = new Tab(p.title().replace("_", ""), p.content());
+            // fits the panel when there is room; on a short window or in large print the page scrolls, so
+            // no list is squeezed to nothing and no button drops out of sight
+            ScrollPane page = new ScrollPane(p.content());
+            page.setFitToWidth(true);
+            page.setFitToHeight(true);
+            page.setFocusTraversable(false);
+            page.getStyleClass().add("tool-scroll");
+            Tab tab = new Tab(p.title().replace("_", ""), page);
             tab.setId("tab-" + TaskEvents.wire(p.tool()));
             tab.setUserData(p);
             tabs.getTabs().add(tab);

@@ -57,6 +57,8 @@ final class Suggestions {
                 "from", from, "to", replacement);
         area.changeAs(ChangeSource.SUGGESTION, () -> area.replaceText(i.start(), i.end(), replacement));
         area.moveTo(i.start() + replacement.length());
+        // from the panel's list as from the menu: the candidate goes on writing where the word was
+        area.requestFocus();
     }
 
     /** Stops flagging this spelling for the rest of the task. */

@@ -4,11 +4,11 @@ import java.util.List;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.ListCell;
 import javafx.scene.control.ListView;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.MouseButton;
-import javafx.scene.layout.HBox;
+import javafx.scene.layout.FlowPane;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import org.inkgate.packs.policy.Tool;
 import org.inkgate.packs.spelling.CheckIssue;
@@ -31,16 +31,9 @@ final class SuggestionsPage implements ToolPage {
         this.actions = actions;
         flags.setId("flagList");
         flags.setAccessibleText(grammar ? "Marked spelling and grammar" : "Marked spellings");
-        flags.setPrefHeight(180);
         flags.setPlaceholder(new Label("Nothing is marked."));
-        flags.setCellFactory(v -> new ListCell<>() {
-            @Override
-            protected void updateItem(CheckIssue item, boolean empty) {
-                super.updateItem(item, empty);
-                setText(empty || item == null ? null : "\u201C" + suggestions.word(item) + "\u201D  "
-                        + (item.kind() == CheckIssue.Kind.GRAMMAR ? "(grammar)" : "(spelling)"));
-            }
-        });
+        WrappedRows.show(flags, item -> "\u201C" + suggestions.word(item) + "\u201D  "
+                + (item.kind() == CheckIssue.Kind.GRAMMAR ? "(grammar)" : "(spelling)"));
         flags.setOnMouseClicked(e -> {
             if (e.getButton() == MouseButton.PRIMARY) {
                 showSelected();
@@ -55,7 +48,7 @@ final class SuggestionsPage implements ToolPage {
         message.setId("flagMessage");
         options.setId("suggestionList");
         options.setAccessibleText("Suggestions");
-        options.setPrefHeight(130);
+        WrappedRows.show(options, option -> option);
         options.setOnKeyPressed(e -> {
             if (e.getCode() == KeyCode.ENTER) {
                 useSelected();
@@ -74,7 +67,10 @@ final class SuggestionsPage implements ToolPage {
         });
         Label intro = ToolPage.wrapped(grammar ? "Words and phrases the check marked. Choose one to see suggestions."
                 : "Words the spelling check marked. Choose one to see suggestions.", "panel-note");
-        root = new VBox(10, intro, flags, message, options, new HBox(8, use, ignore));
+        // a narrow panel or large print puts the second button under the first rather than shortening both
+        use.setMinWidth(Region.USE_PREF_SIZE);
+        ignore.setMinWidth(Region.USE_PREF_SIZE);
+        root = new VBox(10, intro, flags, message, options, new FlowPane(8, 8, use, ignore));
         root.getStyleClass().add("tool-page");
     }
 

@@ -2,7 +2,7 @@ package org.inkgate.client.task;
 
 import java.util.List;
 import java.util.Objects;
-import org.inkgate.client.sitting.ProcessLog;
+import org.inkgate.client.processlog.ProcessLog;
 import org.inkgate.format.bundle.TaskSpec;
 import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.packs.broker.TaskTools;

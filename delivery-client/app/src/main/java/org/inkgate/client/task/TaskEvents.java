@@ -4,7 +4,7 @@ import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
-import org.inkgate.client.sitting.ProcessLog;
+import org.inkgate.client.processlog.ProcessLog;
 import org.inkgate.format.response.EventType;
 import org.inkgate.packs.event.ToolEvent;
 import org.inkgate.packs.policy.Tool;

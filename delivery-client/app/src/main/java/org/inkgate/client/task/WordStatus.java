@@ -3,8 +3,7 @@ package org.inkgate.client.task;
 import javafx.geometry.Pos;
 import javafx.scene.AccessibleRole;
 import javafx.scene.control.Label;
-import javafx.scene.layout.HBox;
-import javafx.scene.layout.Priority;
+import javafx.scene.layout.FlowPane;
 import javafx.scene.layout.Region;
 import org.inkgate.client.practice.TaskWording;
 import org.inkgate.format.bundle.WordGuidance;
@@ -13,7 +12,7 @@ import org.inkgate.format.bundle.WordGuidance;
  * The line under the answer: the live word count (only when the policy shows it) and the task's
  * word guidance, said calmly: the limits are advice, nothing stops or colours the writing.
  */
-final class WordStatus extends HBox {
+final class WordStatus extends FlowPane {
 
     private final boolean showCount;
     private final WordGuidance guidance;
@@ -26,7 +25,19 @@ final class WordStatus extends HBox {
         this.guidance = guidance;
         getStyleClass().add("word-status");
         setAlignment(Pos.CENTER_LEFT);
-        setSpacing(16);
+        // a narrow answer column (large print, small window) puts the guidance under the count, wrapped
+        // if need be; the count itself is never shortened. A flow pane's own minimum is its widest
+        // child's preferred width, which would push the column wider than the window: no minimum here
+        setHgap(16);
+        setVgap(4);
+        setMinWidth(0);
+        count.setMinWidth(Region.USE_PREF_SIZE);
+        for (Label wraps : new Label[] {advice, checker}) {
+            wraps.setMinWidth(0);
+            wraps.setMinHeight(Region.USE_PREF_SIZE);
+            wraps.maxWidthProperty().bind(widthProperty().subtract(snappedLeftInset() + snappedRightInset() + 1));
+        }
+        checker.managedProperty().bind(checker.textProperty().isNotEmpty());
         count.setId("wordCount");
         count.getStyleClass().add("word-count");
         count.setAccessibleRole(AccessibleRole.TEXT);
@@ -37,12 +48,10 @@ final class WordStatus extends HBox {
         checker.setId("checkStatus");
         checker.getStyleClass().add("check-status");
         checker.setWrapText(true);
-        Region gap = new Region();
-        HBox.setHgrow(gap, Priority.ALWAYS);
         if (showCount) {
             getChildren().add(count);
         }
-        getChildren().addAll(advice, gap, checker);
+        getChildren().addAll(advice, checker);
     }
 
     /** Shows the count for the answer as it now stands. */

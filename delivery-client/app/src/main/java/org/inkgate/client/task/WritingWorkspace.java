@@ -133,6 +133,7 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         heading.setMnemonicParsing(true);
         heading.setLabelFor(area);
         heading.getStyleClass().add("answer-heading");
+        heading.setMinWidth(javafx.scene.layout.Region.USE_PREF_SIZE);
         VirtualizedScrollPane<AnswerArea> scroll = new VirtualizedScrollPane<>(area);
         scroll.getStyleClass().add("answer-scroll");
         // the frame draws the border and the focus ring (the scroll pane lays its content over its own insets)
@@ -305,7 +306,9 @@ final class WritingWorkspace implements TaskWorkspace, PanelActions {
         }
         IndexRange selection = area.getSelection();
         events.record(EventType.TOOL_INSERT, "tool", TaskEvents.wire(tool), "entry", entryId, "pos", selection.getStart(), "text", text);
-        area.changeAs(ChangeSource.PANEL, () -> area.replaceSelection(text));
+        InsertSpacing.Spaced spaced = InsertSpacing.around(area.getText(), selection.getStart(), selection.getEnd(), text);
+        area.changeAs(ChangeSource.PANEL, () -> area.replaceSelection(spaced.text()));
+        area.moveTo(selection.getStart() + spaced.caret());
         area.requestFocus();
     }
 

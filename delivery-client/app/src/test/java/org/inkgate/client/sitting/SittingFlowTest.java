@@ -47,7 +47,7 @@ class SittingFlowTest {
         InstallationKey key = InstallationKey.loadOrCreate(folder);
         SubmissionResult result;
         try (Sitting s = Sitting.begin(SittingFixtures.candidate1001(), folder, clock)) {
-            s.showScreen("instructions");
+            s.showScreen(org.inkgate.client.sitting.store.SittingScreen.INSTRUCTIONS);
             TaskStart t1 = s.enterTask("t1");
             assertEquals("", t1.text());
             assertFalse(t1.resumed());
@@ -96,11 +96,7 @@ class SittingFlowTest {
     void poll_whileTheDatabaseRefusesWrites_signalsTroubleThenRecovery() throws Exception {
         try (Sitting s = Sitting.begin(SittingFixtures.candidate1001(), new ClientDataFolder(dir), new FakeClock())) {
             java.util.concurrent.atomic.AtomicBoolean broken = new java.util.concurrent.atomic.AtomicBoolean(true);
-            s.log().persist(c -> {
-                if (broken.get()) {
-                    throw new java.sql.SQLException("disk I/O error (simulated)");
-                }
-            });
+            org.inkgate.client.sitting.store.FailingDisk.refuseWritesWhile(s.log(), broken::get);
             List<SittingSignal> signals = pollUntil(s, SittingSignal.StorageTrouble.class);
             assertTrue(((SittingSignal.StorageTrouble) signals.getFirst()).message().contains("kept in memory"), signals.toString());
             broken.set(false);
@@ -143,9 +139,9 @@ class SittingFlowTest {
 
     @Test
     void forCandidate_numberNotOnTheRoster_saysSo() {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> SittingPlan.forCandidate(
+        IllegalArgumentException e = assertThrows(SittingPlan.NotOnRoster.class, () -> SittingPlan.forCandidate(
                 org.inkgate.format.testutil.SampleExam.manifest(), SittingFixtures.SHA, "x", "9999", "", null, "test"));
-        assertTrue(e.getMessage().contains("9999") && e.getMessage().contains("roster"), e.getMessage());
+        assertTrue(e.getMessage().contains("9999") && e.getMessage().contains("not on the list"), e.getMessage());
     }
 
     private static void type(Sitting s, String task, String text, FakeClock clock) {

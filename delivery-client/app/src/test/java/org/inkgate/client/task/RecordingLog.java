@@ -3,8 +3,8 @@ package org.inkgate.client.task;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import org.inkgate.client.sitting.EventRecording;
-import org.inkgate.client.sitting.ProcessLog;
+import org.inkgate.client.processlog.EventRecording;
+import org.inkgate.client.processlog.ProcessLog;
 import org.inkgate.format.response.EventType;
 
 /** A process log that keeps every event in memory, for tests (thread-safe: tools log from several threads). */

@@ -15,6 +15,7 @@ import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
 import javafx.stage.Window;
 import org.inkgate.client.testutil.PngSnapshots;
+import org.inkgate.client.testutil.StageSize;
 import org.inkgate.packs.broker.TaskTools;
 import org.inkgate.packs.policy.PastePolicy;
 import org.inkgate.packs.policy.ResourcePolicy;
@@ -39,12 +40,15 @@ class WorkspaceScreenshotTest {
             + "It is how I get to work, and how my neighbours reach the clinic.\n\n"
             + "Please keep the early crossing and mend the gangway before the winter.";
     private Stage stage;
+    private StageSize before;
     private WritingWorkspace workspace;
     private final RecordingLog log = new RecordingLog();
 
     @Start
     void start(Stage primary) {
         stage = primary;
+        // the pictures are 1280x800 whatever an earlier test class left on the shared stage
+        before = StageSize.set(primary, 1280, 800);
     }
 
     @AfterEach
@@ -52,6 +56,7 @@ class WorkspaceScreenshotTest {
         if (workspace != null) {
             robot.interact(workspace::close);
         }
+        robot.interact(before::restore);
     }
 
     private void open(FxRobot robot, ResourcePolicy policy, DisplaySettings display) throws Exception {
@@ -137,7 +142,8 @@ class WorkspaceScreenshotTest {
             image.set(scene);
         });
         assertNotNull(image.get());
-        assertEquals(1280, image.get().getWidth());
+        assertEquals(1280, image.get().getWidth(), "picture width");
+        assertEquals(800, image.get().getHeight(), "picture height");
         PngSnapshots.write(image.get(), Path.of("target", "screenshots", name));
         String dir = System.getProperty("inkgate.screenshots.dir");
         if (dir != null) {

@@ -2,7 +2,7 @@ package org.inkgate.client.testutil;
 
 import java.time.Duration;
 import java.time.Instant;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 
 /** A sitting clock that tests move by hand; both clocks advance together. Thread-safe. */
 public final class FakeClock implements SittingClock {

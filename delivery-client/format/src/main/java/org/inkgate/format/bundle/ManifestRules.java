@@ -88,8 +88,9 @@ final class ManifestRules {
                 problems.add("roster candidate \"" + org.inkgate.format.refusal.FormatRefusal.printable(r.candidateNumber())
                         + "\" is not a usable candidate number: use " + CandidateNumber.RULE);
             }
-            if (r.candidateNumber() != null && !candidates.add(r.candidateNumber())) {
-                problems.add("roster lists candidate \"" + r.candidateNumber() + "\" twice");
+            if (r.candidateNumber() != null && !candidates.add(CandidateNumber.key(r.candidateNumber()))) {
+                problems.add("roster lists candidate \"" + r.candidateNumber() + "\" twice (candidate numbers are"
+                        + " compared without regard to letter case)");
             }
             if (r.formId() == null) {
                 problems.add("roster gives candidate \"" + r.candidateNumber() + "\" no form: assign one of " + formIds);

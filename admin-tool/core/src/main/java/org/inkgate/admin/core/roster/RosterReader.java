@@ -102,10 +102,12 @@ public final class RosterReader {
                         + org.inkgate.format.refusal.FormatRefusal.printable(number)
                         + "\" is not a usable candidate number: use " + CandidateNumber.RULE));
             } else {
-                Integer first = seen.putIfAbsent(number, line);
+                // the client matches the number typed at sign-in this way, so the roster keeps numbers apart this way
+                Integer first = seen.putIfAbsent(CandidateNumber.key(number), line);
                 if (first != null) {
                     problems.add(new Problem(name, line, col.get(CANDIDATE) + 1, CANDIDATE, "candidate " + number
-                            + " is already on line " + first + "; each candidate appears once"));
+                            + " is already on line " + first + " (letter case does not tell candidates apart);"
+                            + " each candidate appears once"));
                 }
             }
             String level = f.get(col.get(LEVEL)).strip();

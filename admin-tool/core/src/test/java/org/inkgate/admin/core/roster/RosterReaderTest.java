@@ -35,12 +35,26 @@ class RosterReaderTest {
         List<String> p = e.problems().stream().map(Problem::toString).toList();
         assertEquals(List.of(
                 "r.csv:3:1: candidate_number: \"A 002\" is not a usable candidate number: use 1-32 letters, digits, '-' or '_', starting with a letter or digit",
-                "r.csv:4:1: candidate_number: candidate A-001 is already on line 2; each candidate appears once",
+                "r.csv:4:1: candidate_number: candidate A-001 is already on line 2 (letter case does not tell candidates"
+                        + " apart); each candidate appears once",
                 "r.csv:4:2: level: is empty; give the proficiency level forms are balanced within (e.g. B1)",
                 "r.csv:4:3: extra_time_percent: \"500\" is not a whole percentage from 0 to 400 (25 means a quarter more time)",
                 "r.csv:4:4: large_print: \"maybe\" is not yes or no",
                 "r.csv:5: has 3 fields but the header has 4; check for a missing or extra comma, or quote a field that holds a comma"),
                 p);
+    }
+
+    /** The client matches a typed number without regard to case (format's CandidateNumber), so the roster may not rely on it. */
+    @Test
+    void parse_numbersDifferingOnlyInLetterCase_areOneCandidateListedTwice() {
+        InvalidSourceException e = assertThrows(InvalidSourceException.class, () -> RosterReader.parse("r.csv", """
+                candidate_number,level
+                ab-7,B1
+                AB-7,B2
+                """));
+        assertEquals(List.of("r.csv:3:1: candidate_number: candidate AB-7 is already on line 2 (letter case does not"
+                + " tell candidates apart); each candidate appears once"),
+                e.problems().stream().map(Problem::toString).toList());
     }
 
     @Test

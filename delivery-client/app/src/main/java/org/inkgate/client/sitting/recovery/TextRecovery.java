@@ -1,16 +1,12 @@
 package org.inkgate.client.sitting.recovery;
 
-import java.sql.Connection;
-import java.sql.PreparedStatement;
-import java.sql.ResultSet;
-import java.sql.SQLException;
 import java.util.List;
 import java.util.Optional;
 import org.inkgate.client.sitting.replay.ReplayException;
 import org.inkgate.client.sitting.replay.ReplayMismatch;
 import org.inkgate.client.sitting.replay.Replayed;
 import org.inkgate.client.sitting.replay.TextReplay;
-import org.inkgate.client.sitting.store.SqliteProcessLog;
+import org.inkgate.client.sitting.store.SittingStateStore;
 import org.inkgate.format.response.ProcessEvent;
 
 /**
@@ -37,23 +33,10 @@ public final class TextRecovery {
     private TextRecovery() {
     }
 
-    /** Recovers one task's text from an open sitting database. */
-    public static Recovered recover(Connection c, String taskId) throws SQLException {
-        String snapText = null;
-        int snapCaret = 0;
-        long snapSeq = 0;
-        try (PreparedStatement ps = c.prepareStatement("SELECT text, caret, after_seq FROM snapshots WHERE task = ?")) {
-            ps.setString(1, taskId);
-            try (ResultSet rs = ps.executeQuery()) {
-                if (rs.next()) {
-                    snapText = rs.getString(1);
-                    snapCaret = rs.getInt(2);
-                    snapSeq = rs.getLong(3);
-                }
-            }
-        }
-        List<ProcessEvent> all = SqliteProcessLog.readTaskEvents(c, taskId, 0);
-        if (snapText == null) {
+    /** Recovers one task's text from its newest snapshot and logged events, as the state store read them. */
+    public static Recovered recover(String taskId, SittingStateStore.TaskLog logged) {
+        List<ProcessEvent> all = logged.events();
+        if (logged.snapshot().isEmpty()) {
             try {
                 Replayed r = TextReplay.replay(taskId, all);
                 return new Recovered(r.text(), r.caret(), 0, r.applied(), Optional.empty(), Optional.empty());
@@ -61,6 +44,9 @@ public final class TextRecovery {
                 return new Recovered("", 0, 0, 0, Optional.empty(), Optional.of(e.getMessage()));
             }
         }
+        String snapText = logged.snapshot().get().text();
+        int snapCaret = logged.snapshot().get().caret();
+        long snapSeq = logged.snapshot().get().afterSeq();
         final long upTo = snapSeq;
         Optional<ReplayMismatch> mismatch;
         Optional<String> problem = Optional.empty();

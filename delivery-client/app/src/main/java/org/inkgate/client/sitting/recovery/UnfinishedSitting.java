@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.Optional;
+import org.inkgate.client.sitting.store.SittingScreen;
 
 /**
  * A sitting found in the client data folder that was not completed: the client stopped (a
@@ -26,7 +27,7 @@ import java.util.Optional;
  *                        earlier client, which did not remember it)
  */
 public record UnfinishedSitting(Path database, String sittingId, String bundleSha256, String bundleFile, String examId,
-        String candidateNumber, String formId, Optional<String> currentTask, String screen, Stage stage,
+        String candidateNumber, String formId, Optional<String> currentTask, SittingScreen screen, Stage stage,
         Instant lastActivity, boolean paused, Optional<Path> outputFolder) {
 
     public UnfinishedSitting {
@@ -35,7 +36,7 @@ public record UnfinishedSitting(Path database, String sittingId, String bundleSh
 
     /** A sitting whose set-up output folder is not known. */
     public UnfinishedSitting(Path database, String sittingId, String bundleSha256, String bundleFile, String examId,
-            String candidateNumber, String formId, Optional<String> currentTask, String screen, Stage stage,
+            String candidateNumber, String formId, Optional<String> currentTask, SittingScreen screen, Stage stage,
             Instant lastActivity, boolean paused) {
         this(database, sittingId, bundleSha256, bundleFile, examId, candidateNumber, formId, currentTask, screen, stage,
                 lastActivity, paused, Optional.empty());

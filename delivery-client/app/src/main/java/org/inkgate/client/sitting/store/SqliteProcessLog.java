@@ -25,9 +25,9 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.LinkedBlockingQueue;
 import java.util.concurrent.TimeUnit;
 import java.util.concurrent.TimeoutException;
-import org.inkgate.client.sitting.EventRecording;
-import org.inkgate.client.sitting.ProcessLog;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.processlog.EventRecording;
+import org.inkgate.client.processlog.ProcessLog;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
@@ -173,18 +173,21 @@ public final class SqliteProcessLog implements ProcessLog, AutoCloseable {
         }
     }
 
-    /** Queues a change of the sitting's durable state, committed in order with the events before it. */
-    public void persist(StateChange change) {
+    /**
+     * Queues a change of the sitting's durable state, committed in order with the events before it.
+     * Package-private: the raw connection stays in the store package ({@link SittingStateStore}).
+     */
+    void persist(StateChange change) {
         requireOpen();
         queue.add(new StateItem(Objects.requireNonNull(change, "change")));
     }
 
     /**
      * Waits until everything queued so far is committed and then runs {@code query} on the
-     * writer's connection. Blocks: not for the UI thread while typing.
+     * writer's connection. Blocks: not for the UI thread while typing. Package-private, as {@link #persist}.
      */
     @SuppressWarnings("unchecked")
-    public <T> T read(StoreQuery<T> query) throws IOException {
+    <T> T read(StoreQuery<T> query) throws IOException {
         requireOpen();
         CompletableFuture<Object> result = new CompletableFuture<>();
         queue.add(new QueryItem(query, result));
@@ -258,17 +261,17 @@ public final class SqliteProcessLog implements ProcessLog, AutoCloseable {
         }
     }
 
-    // -- reading (also used by recovery before a log is opened) --
+    // -- reading (also for the state store's reads) --
 
     /** Reads every event of an open connection, in order. */
-    public static List<ProcessEvent> readEvents(Connection c) throws SQLException {
+    static List<ProcessEvent> readEvents(Connection c) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("SELECT seq, at, mono, type, task, data FROM events ORDER BY seq")) {
             return toEvents(ps);
         }
     }
 
     /** Reads the events of one task after {@code afterSeq}, in order. */
-    public static List<ProcessEvent> readTaskEvents(Connection c, String taskId, long afterSeq) throws SQLException {
+    static List<ProcessEvent> readTaskEvents(Connection c, String taskId, long afterSeq) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement(
                 "SELECT seq, at, mono, type, task, data FROM events WHERE task = ? AND seq > ? ORDER BY seq")) {
             ps.setString(1, taskId);

@@ -8,7 +8,7 @@ import java.sql.SQLException;
  * transaction order as the events recorded before it, so state and log never disagree.
  */
 @FunctionalInterface
-public interface StateChange {
+interface StateChange {
 
     /** Applies the change; the writer commits it with its batch. */
     void apply(Connection c) throws SQLException;

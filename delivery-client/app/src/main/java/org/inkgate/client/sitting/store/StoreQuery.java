@@ -5,7 +5,7 @@ import java.sql.SQLException;
 
 /** A read of the sitting database, run by the writer thread after everything queued before it is committed. */
 @FunctionalInterface
-public interface StoreQuery<T> {
+interface StoreQuery<T> {
 
     /** Reads and returns the result. */
     T run(Connection c) throws SQLException;

@@ -6,7 +6,7 @@ import java.util.OptionalInt;
 import java.util.Set;
 import java.util.TreeSet;
 import java.util.concurrent.TimeUnit;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 
 /**
  * Time allowed for one task (or the whole sitting), counted on the monotonic clock only while

@@ -7,15 +7,15 @@ import java.util.List;
 import java.util.Objects;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.sitting.ui.overlay.InvigilatorPanel;
 import org.inkgate.client.sitting.ui.overlay.PausedCover;
 import org.inkgate.client.sitting.ui.overlay.PinPrompt;
 
 /**
  * The invigilator's side of the sitting window: the PIN prompt, the invigilator screen with its
- * actions, the pause cover over the candidate's screen, and the log of focus losses and other
- * things the invigilator must see. What the actions do to the sitting is the flow's ({@link Host}).
+ * actions, the pause cover over the candidate's screen, the list of focus losses and, apart from
+ * it, the other things the invigilator must see (pauses, added time, downtime, saving trouble). What the actions do to the sitting is the flow's ({@link Host}).
  */
 final class InvigilatorDesk {
 
@@ -24,18 +24,22 @@ final class InvigilatorDesk {
         /** Checks the PIN (slow: PBKDF2); called off the JavaFX thread. */
         boolean pinMatches(char[] pin);
 
-        /** One paragraph: candidate, form, task, time left, paused or running. */
+        /** One paragraph: candidate, form, task, time left, paused or running, or where the package went. */
         String stateLine();
 
         boolean paused();
 
-        boolean inTask();
+        /** Where the sitting is, for the actions the screen offers. */
+        InvigilatorPanel.Moment moment();
 
         void setPaused(boolean paused);
 
         void addMinutes(int minutes);
 
         void endTask();
+
+        /** After the hand-in: a new sitting on this seat for the next candidate. */
+        void nextCandidate();
 
         void exit();
 
@@ -52,7 +56,8 @@ final class InvigilatorDesk {
     private final SittingClock clock;
     private final Host host;
     private final PausedCover pausedCover = new PausedCover();
-    private final List<String> lines = new ArrayList<>();
+    private final List<String> focusLines = new ArrayList<>();
+    private final List<String> eventLines = new ArrayList<>();
     private PinPrompt pinPrompt;
     private InvigilatorPanel panel;
 
@@ -110,6 +115,12 @@ final class InvigilatorDesk {
             }
 
             @Override
+            public void nextCandidate() {
+                shell.uncover(panel);
+                host.nextCandidate();
+            }
+
+            @Override
             public void exitSitting() {
                 host.exit();
             }
@@ -120,7 +131,8 @@ final class InvigilatorDesk {
                 host.backToCandidate();
             }
         });
-        lines.forEach(panel::focusEvent);
+        focusLines.forEach(panel::focusEvent);
+        eventLines.forEach(panel::sittingEvent);
         refresh();
         shell.cover(panel);
         panel.focus();
@@ -129,7 +141,7 @@ final class InvigilatorDesk {
     /** Brings the invigilator screen's state line and buttons up to date, when it is shown. */
     void refresh() {
         if (panel != null) {
-            panel.update(host.stateLine(), host.paused(), host.inTask());
+            panel.update(host.stateLine(), host.moment(), host.paused());
         }
     }
 
@@ -146,18 +158,42 @@ final class InvigilatorDesk {
         }
     }
 
-    /** Adds a timed line to what the invigilator screen lists (focus changes, hand-in and saving trouble). */
-    void note(String what) {
-        String line = CLOCK.format(clock.now()) + "  " + what;
-        lines.add(line);
+    /** Adds a timed line to the focus list: the candidate's window lost or regained focus. */
+    void focusNote(String what) {
+        String line = timed(what);
+        focusLines.add(line);
         if (panel != null) {
             panel.focusEvent(line);
         }
     }
 
-    /** The lines noted so far, oldest first. */
-    List<String> lines() {
-        return List.copyOf(lines);
+    /** Adds a timed line to the sitting's other events (pause, added time, downtime, saving and hand-in trouble). */
+    void eventNote(String what) {
+        String line = timed(what);
+        eventLines.add(line);
+        if (panel != null) {
+            panel.sittingEvent(line);
+        }
+    }
+
+    private String timed(String what) {
+        return CLOCK.format(clock.now()) + "  " + what;
+    }
+
+    /** Empties both lists: the next candidate's sitting starts with its own. */
+    void clear() {
+        focusLines.clear();
+        eventLines.clear();
+    }
+
+    /** The focus list so far, oldest first. */
+    List<String> focusLines() {
+        return List.copyOf(focusLines);
+    }
+
+    /** The other events so far, oldest first. */
+    List<String> eventLines() {
+        return List.copyOf(eventLines);
     }
 
     /** True while the PIN prompt or the invigilator screen is up. */

@@ -9,9 +9,9 @@ import java.util.Set;
 import java.util.stream.Collectors;
 import javafx.application.Application;
 import javafx.stage.Stage;
-import org.inkgate.client.sitting.SittingClock;
-import org.inkgate.client.sitting.ui.open.SittingBundleOpener;
-import org.inkgate.client.sitting.ui.open.SittingLoad;
+import org.inkgate.client.sitting.clock.SittingClock;
+import org.inkgate.client.sitting.open.SittingBundleOpener;
+import org.inkgate.client.sitting.open.SittingLoad;
 
 /**
  * The live sitting as a JavaFX application. Started by {@link org.inkgate.client.Launcher}

@@ -4,17 +4,15 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
-import java.time.ZoneId;
-import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
+import java.util.function.Consumer;
 import java.util.function.Supplier;
 import javafx.animation.KeyFrame;
 import javafx.animation.PauseTransition;
@@ -32,26 +30,30 @@ import javafx.util.Duration;
 import org.inkgate.client.practice.PromptText;
 import org.inkgate.client.practice.TaskWording;
 import org.inkgate.client.practice.ui.RefusalView;
-import org.inkgate.client.practice.WordCount;
-import org.inkgate.client.sitting.Sitting;
-import org.inkgate.client.sitting.replay.ReplayException;
-import org.inkgate.client.sitting.replay.TextReplay;
-import org.inkgate.client.sitting.submit.EnrolmentExport;
-import org.inkgate.client.sitting.submit.InstallationKey;
-import org.inkgate.client.sitting.submit.SubmissionResult;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.processlog.ProcessLog;
 import org.inkgate.client.sitting.SittingPlan;
-import org.inkgate.client.sitting.SittingSignal;
 import org.inkgate.client.sitting.TaskStart;
+import org.inkgate.client.sitting.clock.SittingClock;
+import org.inkgate.client.sitting.course.CourseView;
+import org.inkgate.client.sitting.course.ExamAtSeat;
+import org.inkgate.client.sitting.course.FlowScreen;
+import org.inkgate.client.sitting.course.HandedIn;
+import org.inkgate.client.sitting.course.ReviewLine;
+import org.inkgate.client.sitting.course.SittingCourse;
+import org.inkgate.client.sitting.course.TaskAnswer;
+import org.inkgate.client.sitting.course.TypedKeys;
+import org.inkgate.client.sitting.open.SittingLoad;
 import org.inkgate.client.sitting.recovery.RecoveryScan;
 import org.inkgate.client.sitting.recovery.UnfinishedSitting;
 import org.inkgate.client.sitting.store.ClientDataFolder;
-import org.inkgate.client.sitting.submit.DeliveryFailure;
+import org.inkgate.client.sitting.store.SittingScreen;
+import org.inkgate.client.sitting.submit.EnrolmentExport;
+import org.inkgate.client.sitting.submit.InstallationKey;
+import org.inkgate.client.sitting.timing.TimeText;
+import org.inkgate.client.sitting.tools.BundleToolSupply;
 import org.inkgate.client.sitting.ui.lock.StageLock;
-import org.inkgate.client.sitting.ui.open.SittingLoad;
 import org.inkgate.client.sitting.ui.overlay.InvigilatorPanel;
-import org.inkgate.client.sitting.ui.overlay.PausedCover;
-import org.inkgate.client.sitting.ui.overlay.PinPrompt;
+import org.inkgate.client.sitting.ui.parts.Parts;
 import org.inkgate.client.sitting.ui.screen.FinishedScreen;
 import org.inkgate.client.sitting.ui.screen.InstructionsScreen;
 import org.inkgate.client.sitting.ui.screen.QuestionnaireScreen;
@@ -61,32 +63,24 @@ import org.inkgate.client.sitting.ui.screen.SetupScreen;
 import org.inkgate.client.sitting.ui.screen.SignInScreen;
 import org.inkgate.client.sitting.ui.screen.SubmitScreen;
 import org.inkgate.client.sitting.ui.screen.TaskScreen;
-import org.inkgate.client.sitting.ui.tools.BundlePacks;
-import org.inkgate.client.sitting.ui.tools.ExamWords;
-import org.inkgate.client.sitting.ui.tools.ToolShelf;
 import org.inkgate.client.task.DisplaySettings;
 import org.inkgate.client.task.TaskContext;
 import org.inkgate.client.task.TaskWorkspace;
 import org.inkgate.format.bundle.BundleManifest;
 import org.inkgate.format.bundle.FormSlot;
-import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.bundle.PinHasher;
 import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.bundle.TaskSpec;
-import org.inkgate.format.bundle.WordGuidance;
 import org.inkgate.format.refusal.FormatRefusal;
-import org.inkgate.format.response.EventType;
-import org.inkgate.format.response.QuestionnaireAnswers;
-import org.inkgate.format.response.TaskResponse.EndReason;
-import org.inkgate.packs.spelling.EnglishVariant;
+import org.inkgate.packs.broker.TaskTools;
 
 /**
- * The live sitting from the bundle to the finished screen: invigilator set-up, candidate sign-in,
- * instructions (while the tools warm up), questionnaires, the tasks in the form's order, review,
- * hand-in with retry, and the invigilator's overlay (pause, add time, end the task, exit) behind
- * the PIN. Every state change goes through the sitting core, which logs it and makes it durable;
- * this class only decides what is on screen.
+ * The live sitting's window: the invigilator's set-up and recovery screens, and the candidate's
+ * screens as the sitting's course ({@link SittingCourse}, which decides which screen follows
+ * which, time up, pause, recovery, hand-in and next candidate) asks for them; the invigilator's
+ * overlay behind the PIN; the lock; the timers' heartbeat. It renders and forwards people's
+ * actions; it decides nothing about the sitting.
  */
 public final class SittingFlow {
 
@@ -97,7 +91,6 @@ public final class SittingFlow {
     static final Duration TICK = Duration.millis(200);
     /** How long "time is up" stays on screen before the next task. */
     static final Duration TIME_UP_PAUSE = Duration.seconds(4);
-    private static final DateTimeFormatter CLOCK = DateTimeFormatter.ofPattern("HH:mm:ss").withZone(ZoneId.systemDefault());
 
     /**
      * What a sitting window is made from.
@@ -136,28 +129,15 @@ public final class SittingFlow {
     private StageLock lock;
     private OpenedBundle bundle;
     private ClientDataFolder data;
-    private Path outputFolder;
-    private String seat = "";
-    private String openForm;
-    private Sitting sitting;
-    private SittingPlan plan;
+    private BundleToolSupply tools;
+    /** The sitting's decisions; null until the bundle is open and the data folder usable. */
+    private SittingCourse course;
+    /** The screen shown while there is no course (the refusal). */
+    private FlowScreen withoutCourse = FlowScreen.NONE;
     private DisplaySettings display = DisplaySettings.standard();
-    private BundlePacks packs;
-    private ToolShelf shelf;
-    private int taskIndex = -1;
-    private TaskWorkspace workspace;
-    private TaskScreen taskScreen;
-    private boolean paused;
-    private boolean taskEnding;
-    private boolean entryWaiting;
-    private String startText;
+    private InstructionsScreen instructionsScreen;
     private SubmitScreen submitScreen;
-    private final Map<String, Integer> words = new LinkedHashMap<>();
     private InvigilatorDesk desk;
-    private Screen current = Screen.NONE;
-
-    /** Where the flow is; the invigilator panel and the lock depend on it. */
-    enum Screen { NONE, REFUSED, RECOVERY, SETUP, SIGN_IN, INSTRUCTIONS, QUESTIONNAIRE, TASK, REVIEW, SUBMIT, FINISHED }
 
     public SittingFlow(Stage stage, Setup setup) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -177,7 +157,8 @@ public final class SittingFlow {
     // ---- opening ----
 
     private void showRefusal(String message) {
-        current = Screen.REFUSED;
+        withoutCourse = FlowScreen.REFUSED;
+        course = null;
         RefusalView refusal = new RefusalView(message, this::exitApplication);
         shell = new SittingShell("Inkgate sitting");
         desk = new InvigilatorDesk(shell, setup.clock(), deskHost());
@@ -196,12 +177,16 @@ public final class SittingFlow {
             lock = StageLock.apply(stage, new StageLock.FocusListener() {
                 @Override
                 public void focusLost() {
-                    onFocusLost();
+                    if (course != null) {
+                        course.focusLost();
+                    }
                 }
 
                 @Override
                 public void focusReturned(long awayMillis) {
-                    onFocusReturned(awayMillis);
+                    if (course != null) {
+                        course.focusReturned(awayMillis);
+                    }
                 }
             }, () -> setup.clock().monoNanos() / 1_000_000);
         }
@@ -220,6 +205,9 @@ public final class SittingFlow {
                     + " writable disk.");
             return;
         }
+        tools = new BundleToolSupply(opened);
+        course = new SittingCourse(new ExamAtSeat(m, opened.manifestSha256(), bundleFile(), clientVersion()), data,
+                setup.clock(), tools, new Screens(), Platform::runLater, background);
         Optional<UnfinishedSitting> unfinished = findUnfinished(opened.manifestSha256());
         if (unfinished.isPresent()) {
             showRecovery(unfinished.get());
@@ -257,7 +245,7 @@ public final class SittingFlow {
     // ---- invigilator set-up ----
 
     private void showSetup() {
-        current = Screen.SETUP;
+        course.showing(FlowScreen.SETUP);
         BundleManifest m = bundle.manifest();
         Path proposed = data.root().resolve("outbox");
         SetupScreen[] screen = new SetupScreen[1];
@@ -327,512 +315,7 @@ public final class SittingFlow {
                 screen.showError(problem);
                 return;
             }
-            outputFolder = input.outputFolder().toAbsolutePath();
-            seat = input.seat();
-            openForm = input.formId();
-            showSignIn();
-        });
-    }
-
-    // ---- candidate sign-in ----
-
-    private void showSignIn() {
-        current = Screen.SIGN_IN;
-        BundleManifest m = bundle.manifest();
-        String hint = m.roster().isEmpty() ? "Type the number on your admission details."
-                : "Type the number on your admission details, exactly as it is printed.";
-        SignInScreen[] screen = new SignInScreen[1];
-        screen[0] = new SignInScreen(m.title(), hint, number -> signIn(screen[0], number));
-        shell.show(screen[0].root());
-        screen[0].focus();
-    }
-
-    private void signIn(SignInScreen screen, String number) {
-        SittingPlan candidate;
-        try {
-            candidate = SittingPlan.forCandidate(bundle.manifest(), bundle.manifestSha256(), bundleFile(), number, seat,
-                    openForm, clientVersion());
-        } catch (IllegalArgumentException e) {
-            screen.showError(sentence(e.getMessage()));
-            return;
-        }
-        try {
-            sitting = Sitting.begin(candidate, data, setup.clock(), outputFolder);
-        } catch (IOException | RuntimeException e) {
-            screen.showError("The sitting could not be started on this machine (" + e.getMessage()
-                    + "). Ask the invigilator.");
-            return;
-        }
-        plan = candidate;
-        applyDisplay();
-        // the timeline runs from sign-in to the end: it drives the timers and reports saving trouble on every screen
-        ticker.play();
-        showInstructions();
-    }
-
-    private void applyDisplay() {
-        display = SittingTheme.of(plan.manifest().roster().stream()
-                .filter(r -> r.candidateNumber().equals(plan.candidateNumber())).findFirst().orElse(null));
-        SittingTheme.apply(shell.root(), display);
-        shell.who("Candidate " + plan.candidateNumber());
-    }
-
-    // ---- instructions, with the tools warming up ----
-
-    private void showInstructions() {
-        current = Screen.INSTRUCTIONS;
-        sitting.showScreen("instructions");
-        BundleManifest m = plan.manifest();
-        PromptText instructions = readPrompt(m.instructionsFile());
-        List<String> lines = new ArrayList<>();
-        for (FormSlot slot : plan.form().slots()) {
-            TaskSpec task = m.task(slot.taskId()).orElseThrow();
-            lines.add(task.title() + " (" + timeText(task, plan.extraTimePercent()) + "; "
-                    + String.join(", ", TaskWording.tools(slot.policy())).toLowerCase(java.util.Locale.ROOT) + ")");
-        }
-        InstructionsScreen screen = new InstructionsScreen(m.title(), "Candidate " + plan.candidateNumber() + ", form "
-                + plan.formId(), instructions, lines, this::afterInstructions);
-        shell.show(screen.root());
-        screen.focus();
-        startTools(screen, plan.form());
-    }
-
-    private void startTools(InstructionsScreen screen, FormSpec form) {
-        if (shelf != null) {
-            if (screen != null) {
-                shelf.allReady().thenRun(() -> Platform.runLater(() -> screen.toolsStatus("The writing tools are ready.")));
-            }
-            return;
-        }
-        status(screen, "Preparing the writing tools...");
-        try {
-            packs = new BundlePacks(bundle);
-        } catch (IOException e) {
-            status(screen, "The writing tools could not be prepared (" + e.getMessage() + "). Ask the invigilator.");
-            return;
-        }
-        List<ToolShelf.Order> orders = new ArrayList<>();
-        for (FormSlot slot : form.slots()) {
-            TaskSpec task = bundle.manifest().task(slot.taskId()).orElseThrow();
-            orders.add(new ToolShelf.Order(task.id(), slot.policy(), ExamWords.of(readText(task.promptFile()))));
-        }
-        shelf = new ToolShelf(packs.broker(), variant(), orders);
-        shelf.allReady().thenRun(() -> Platform.runLater(() -> status(screen, "The writing tools are ready.")));
-    }
-
-    private static void status(InstructionsScreen screen, String text) {
-        if (screen != null) {
-            screen.toolsStatus(text);
-        }
-    }
-
-    private EnglishVariant variant() {
-        try {
-            return EnglishVariant.fromTag(bundle.manifest().language());
-        } catch (IllegalArgumentException e) {
-            // the checker is only built for tasks that allow it; a non-English exam offering it fails there, visibly
-            return EnglishVariant.EN_GB;
-        }
-    }
-
-    private void afterInstructions() {
-        String pre = plan.form().preQuestionnaire();
-        if (pre != null) {
-            showQuestionnaire(pre, this::startAskedForTask);
-        } else {
-            startAskedForTask();
-        }
-    }
-
-    /** The candidate asked for the next task (Begin, Done, Yes, finish this task): what they type at once goes into it. */
-    private void startAskedForTask() {
-        typeAhead.hold();
-        startNextTask();
-    }
-
-    // ---- questionnaires ----
-
-    private void showQuestionnaire(String id, Runnable then) {
-        current = Screen.QUESTIONNAIRE;
-        sitting.showScreen("questionnaire");
-        QuestionnaireSpec q = plan.manifest().questionnaire(id).orElseThrow();
-        QuestionnaireScreen screen = new QuestionnaireScreen(q, answers -> {
-            answers.forEach((item, value) -> sitting.answer(q.id(), item, value));
-            then.run();
-        });
-        shell.show(screen.root());
-        screen.focus();
-    }
-
-    // ---- tasks ----
-
-    private void startNextTask() {
-        Optional<String> next = sitting.nextTask();
-        if (next.isEmpty()) {
-            typeAhead.drop();
-            afterTasks(false);
-            return;
-        }
-        List<FormSlot> slots = plan.form().slots();
-        for (int i = 0; i < slots.size(); i++) {
-            if (slots.get(i).taskId().equals(next.get())) {
-                enterTask(i);
-                return;
-            }
-        }
-        throw new IllegalStateException("task " + next.get() + " is not in form " + plan.formId());
-    }
-
-    private void enterTask(int index) {
-        FormSlot slot = plan.form().slots().get(index);
-        if (paused) {
-            // a sitting recovered while paused: the task begins when the invigilator resumes
-            typeAhead.drop();
-            entryWaiting = true;
-            return;
-        }
-        current = Screen.TASK;
-        taskIndex = index;
-        taskEnding = false;
-        sitting.showScreen("task");
-        TaskStart start;
-        try {
-            start = sitting.enterTask(slot.taskId());
-        } catch (IOException e) {
-            typeAhead.drop();
-            shell.announcer().announce("Invigilator: the task could not be started, because the saved work could not"
-                    + " be read (" + e.getMessage() + "). Do not close the program; contact the test owner's support.");
-            return;
-        }
-        startText = start.text();
-        shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
-                Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
-        shelf.take(slot.taskId()).whenComplete((tools, failure) -> Platform.runLater(() -> {
-            if (current != Screen.TASK || taskIndex != index || taskEnding) {
-                // the task ended (time, invigilator) while its tools were being prepared
-                if (tools != null) {
-                    tools.close();
-                }
-                return;
-            }
-            if (failure != null) {
-                typeAhead.drop();
-                shell.announcer().announce(sentence(rootMessage(failure)) + " Ask the invigilator.");
-                return;
-            }
-            TaskContext context = new TaskContext(start.task(), readText(start.task().promptFile()), tools,
-                    sitting.log(), start.text(), start.caret(), display, start.loggedBefore());
-            workspace = setup.workspaces().create(context);
-            int total = plan.form().slots().size();
-            taskScreen = new TaskScreen("Task " + (index + 1) + " of " + total + ": " + start.task().title(),
-                    workspace.view(), () -> endTask(EndReason.SUBMITTED));
-            shell.show(taskScreen.root());
-            shell.announcer().clear();
-            if (start.mismatch().isPresent()) {
-                focusLine("Recovery note: " + start.mismatch().get().describe());
-            }
-            updateClock();
-            ticker.play();
-            if (paused) {
-                typeAhead.drop();
-                freeze(true);
-            } else {
-                focusEditorOnceShown(workspace);
-            }
-        }));
-    }
-
-    /**
-     * Puts the caret in the new task's editor and hands it the keys typed on the way in. The
-     * editor takes focus only once its skin is laid out, which can take a few pulses (more in
-     * large print, on a busy machine); until then the scene gives focus to the first button it
-     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most
-     * five seconds), and never after the task has changed, the exam is paused or the invigilator's
-     * screen is open; keys typed meanwhile are kept ({@link TypeAhead}) and delivered in order.
-     */
-    private void focusEditorOnceShown(TaskWorkspace shown) {
-        Timeline retry = new Timeline();
-        retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
-            if (workspace != shown) {
-                retry.stop(); // a later task took over, with its own keys and retry
-                return;
-            }
-            if (paused || desk.showing()) {
-                typeAhead.drop();
-                retry.stop();
-                return;
-            }
-            if (focusInside(shown.view())) {
-                typeAhead.deliverTo(scene.getFocusOwner());
-                retry.stop();
-                return;
-            }
-            shown.focusEditor();
-        }));
-        retry.setCycleCount(167);
-        typeAhead.awaitFocusIn(shown.view());
-        retry.setOnFinished(e -> {
-            if (workspace == shown) {
-                typeAhead.drop(); // focus never reached the editor: keys typed now go where focus is
-            }
-        });
-        shown.focusEditor();
-        retry.play();
-    }
-
-    private boolean focusInside(Node container) {
-        for (Node n = scene.getFocusOwner(); n != null; n = n.getParent()) {
-            if (n == container) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    private void tick() {
-        if (sitting == null) {
-            return;
-        }
-        for (SittingSignal signal : sitting.poll()) {
-            switch (signal) {
-                case SittingSignal.TimeWarning warning -> shell.announcer().announce(warning.minutesLeft()
-                        + (warning.minutesLeft() == 1 ? " minute" : " minutes") + " left in this task.");
-                case SittingSignal.TaskTimeUp up -> timeUp(false);
-                case SittingSignal.SittingTimeUp up -> timeUp(true);
-                case SittingSignal.StorageTrouble trouble -> storageTrouble(trouble.message());
-                case SittingSignal.StorageRecovered ok -> focusLine("Saving works again.");
-            }
-        }
-        updateClock();
-        desk.refresh();
-    }
-
-    private void updateClock() {
-        if (current != Screen.TASK || sitting == null) {
-            shell.time(null, "", false);
-            return;
-        }
-        Optional<java.time.Duration> left = remainingNow();
-        if (left.isEmpty()) {
-            shell.time("Untimed", "This task is untimed", false);
-        } else {
-            long ms = left.get().toMillis();
-            shell.time(TimeText.clock(ms), TimeText.spoken(ms), ms < 5 * 60_000);
-        }
-    }
-
-    /** Time left in the current task, or in the whole sitting when that is shorter; empty when neither is timed. */
-    private Optional<java.time.Duration> remainingNow() {
-        Optional<java.time.Duration> task = currentTaskId() == null ? Optional.empty() : sitting.remaining(currentTaskId());
-        Optional<java.time.Duration> whole = sitting.sittingRemaining();
-        if (task.isPresent() && whole.isPresent()) {
-            return Optional.of(task.get().compareTo(whole.get()) <= 0 ? task.get() : whole.get());
-        }
-        return task.isPresent() ? task : whole;
-    }
-
-    private void timeUp(boolean wholeSitting) {
-        if (current != Screen.TASK || taskEnding) {
-            return;
-        }
-        taskEnding = true;
-        typeAhead.drop(); // keys typed after the time is up belong to no task
-        freeze(true);
-        shell.announcer().announce(wholeSitting ? "The time for the whole exam is up. Your answers have been saved."
-                : "The time for this task is up. Your answer has been saved.");
-        PauseTransition wait = new PauseTransition(TIME_UP_PAUSE);
-        wait.setOnFinished(e -> finishTask(EndReason.TIME_UP, wholeSitting));
-        wait.play();
-    }
-
-    private void endTask(EndReason reason) {
-        // no workspace yet: the task's tools are still being prepared, and there is nothing to end
-        if (current != Screen.TASK || taskEnding || workspace == null) {
-            return;
-        }
-        taskEnding = true;
-        if (reason == EndReason.SUBMITTED) {
-            typeAhead.hold(); // the candidate moves on: what they type now belongs to the next task
-        } else {
-            typeAhead.drop(); // time or the invigilator ended it: keys typed now belong to no task
-        }
-        finishTask(reason, false);
-    }
-
-    private void finishTask(EndReason reason, boolean endSitting) {
-        FormSlot slot = plan.form().slots().get(taskIndex);
-        if (workspace != null) {
-            words.put(slot.taskId(), workspace.wordCount());
-            sitting.endTask(slot.taskId(), reason, workspace.text(), workspace.wordCount(), workspace.toolUse());
-            workspace.close();
-        } else {
-            // the time ran out before the task's tools were ready: the text is what was there when it began
-            String text = startText == null ? "" : startText;
-            words.put(slot.taskId(), WordCount.of(text));
-            sitting.endTask(slot.taskId(), reason, text, WordCount.of(text), Map.of());
-        }
-        workspace = null;
-        startText = null;
-        taskScreen = null;
-        shell.announcer().clear();
-        current = Screen.NONE;
-        updateClock();
-        if (endSitting) {
-            sitting.endUnstartedTasks(EndReason.TIME_UP);
-        }
-        startNextTask();
-    }
-
-    private void freeze(boolean frozen) {
-        if (workspace != null) {
-            workspace.setFrozen(frozen);
-        }
-        if (taskScreen != null) {
-            taskScreen.frozen(frozen);
-        }
-    }
-
-    // ---- after the tasks ----
-
-    /** After the last task: the post-task questionnaire (unless it was done before a restart), then the review. */
-    private void afterTasks(boolean questionnaireDone) {
-        String post = plan.form().postQuestionnaire();
-        if (post != null && !questionnaireDone) {
-            showQuestionnaire(post, this::showReview);
-        } else {
-            showReview();
-        }
-    }
-
-    private void showReview() {
-        current = Screen.REVIEW;
-        sitting.showScreen("review");
-        List<ReviewScreen.Row> rows = new ArrayList<>();
-        for (FormSlot slot : plan.form().slots()) {
-            TaskSpec task = plan.manifest().task(slot.taskId()).orElseThrow();
-            rows.add(new ReviewScreen.Row(task.title(), wordsOf(task.id()), guidance(task.words())));
-        }
-        ReviewScreen screen = new ReviewScreen(rows, this::submit);
-        shell.show(screen.root());
-        screen.focus();
-    }
-
-    private static String guidance(WordGuidance words) {
-        if (words == null || (words.min() == 0 && words.max() == 0)) {
-            return null;
-        }
-        if (words.max() == 0) {
-            return "suggested: at least " + words.min();
-        }
-        return words.min() == 0 ? "suggested: up to " + words.max()
-                : "suggested: " + words.min() + " to " + words.max();
-    }
-
-    /** Words in an ended task: counted at its end, or rebuilt from the log for tasks ended before a restart. */
-    private int wordsOf(String taskId) {
-        Integer counted = words.get(taskId);
-        if (counted != null) {
-            return counted;
-        }
-        try {
-            return WordCount.of(TextReplay.replay(taskId, sitting.log().events(taskId, 0)).text());
-        } catch (IOException | ReplayException e) {
-            return 0;
-        }
-    }
-
-    private void submit() {
-        current = Screen.SUBMIT;
-        submitScreen = new SubmitScreen(this::retryDelivery);
-        shell.show(submitScreen.root());
-        submitScreen.working();
-        workOrFail(() -> sitting.submit(outputFolder, InstallationKey.loadOrCreate(data)), this::delivered);
-    }
-
-    private void retryDelivery() {
-        submitScreen.working();
-        workOrFail(() -> sitting.retryDelivery(outputFolder), this::delivered);
-    }
-
-    private void delivered(SubmissionResult result) {
-        if (result.failure().isPresent()) {
-            DeliveryFailure failure = result.failure().get();
-            focusLine("Hand-in to the output folder failed: " + failure.message());
-            submitScreen.failed(failure.message());
-            return;
-        }
-        showFinished(result.delivered().orElseThrow(), result.localCopy());
-    }
-
-    private void showFinished(Path delivered, Path localCopy) {
-        current = Screen.FINISHED;
-        ticker.stop();
-        shell.time(null, "", false);
-        FinishedScreen screen = new FinishedScreen("For the invigilator: the response package is " + delivered
-                + "; a copy is kept at " + localCopy + ". Open the invigilator screen (Ctrl+Shift+F12) to exit.");
-        shell.show(screen.root());
-    }
-
-    // ---- recovery ----
-
-    private void showRecovery(UnfinishedSitting found) {
-        current = Screen.RECOVERY;
-        Instant now = setup.clock().now();
-        java.time.Duration down = found.downtime(now);
-        List<String> facts = new ArrayList<>();
-        facts.add("Candidate: " + found.candidateNumber() + ", form " + found.formId());
-        facts.add("On screen when it stopped: " + found.currentTask().flatMap(id -> bundle.manifest().task(id))
-                .map(t -> "the task \"" + t.title() + "\"").orElse(found.screen().isEmpty() ? "the start" : "the "
-                        + found.screen() + " screen"));
-        facts.add("Last saved: " + CLOCK.format(found.lastActivity()) + ", " + TimeText.duration(down.toMillis())
-                + " ago (measured on the system clock, so a changed clock distorts it)");
-        if (found.paused()) {
-            facts.add("The exam was paused by the invigilator when it stopped; it continues paused.");
-        }
-        if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
-            facts.add("The answers were handed in and saved on this machine, but not yet written to the output folder.");
-        }
-        if (found.stage() != UnfinishedSitting.Stage.AWAITING_DELIVERY) {
-            // the writing tools start while the invigilator reads this screen, so the restored text is
-            // checked as soon as the task shows, not after LanguageTool's start (seconds on a busy machine)
-            bundle.manifest().form(found.formId()).ifPresent(form -> startTools(null, form));
-        }
-        String creditText = "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down";
-        RecoveryScreen[] screen = new RecoveryScreen[1];
-        // the folder chosen at set-up (the room's stick), remembered in the sitting's database
-        screen[0] = new RecoveryScreen(facts, creditText, found.outputFolder().orElse(data.root().resolve("outbox")),
-                input -> resume(screen[0], found, input, down), this::exitApplication);
-        shell.show(screen[0].root());
-        screen[0].focus();
-    }
-
-    private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
-            java.time.Duration down) {
-        // the output folder is made and checked as at set-up: the folder proposed here may not exist (the stick was taken out)
-        work(() -> !PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())
-                ? "That is not this exam's invigilator PIN. Enter it again."
-                : input.outputFolder() == null ? "Enter the output folder where response packages go."
-                : outputProblem(input.outputFolder()), problem -> {
-            if (problem != null) {
-                screen.showError(problem);
-                return;
-            }
-            try {
-                sitting = Sitting.resume(found, bundle.manifest(), bundle.manifestSha256(),
-                        input.credit() ? down : java.time.Duration.ZERO, data, setup.clock());
-            } catch (IOException | RuntimeException e) {
-                screen.showError("The sitting could not be resumed (" + e.getMessage() + "). The saved answers are"
-                        + " still in " + found.database() + "; keep that file and contact the test owner's support.");
-                return;
-            }
-            plan = sitting.plan();
-            ticker.play();
-            outputFolder = input.outputFolder().toAbsolutePath();
-            seat = plan.seat();
-            applyDisplay();
-            focusLine("Sitting resumed after " + TimeText.duration(down.toMillis()) + (input.credit()
-                    ? "; that time was given back" : "; that time was not given back"));
-            continueRecovered(found);
+            course.seatReady(input.outputFolder(), input.seat(), input.formId());
         });
     }
 
@@ -850,64 +333,342 @@ public final class SittingFlow {
         return null;
     }
 
-    /** Shows what the candidate continues with after a restart, with the time left after the invigilator's choice. */
-    private void continueRecovered(UnfinishedSitting found) {
-        if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY || sitting.submitted()) {
-            current = Screen.SUBMIT;
-            submitScreen = new SubmitScreen(this::retryDelivery);
-            shell.show(submitScreen.root());
-            retryDelivery();
-            return;
-        }
-        paused = sitting.paused();
-        if (paused) {
-            desk.coverPaused(true);
-        }
-        Optional<String> next = sitting.nextTask();
-        String where;
-        if (next.isPresent() && found.currentTask().isPresent()) {
-            TaskSpec task = plan.manifest().task(next.get()).orElseThrow();
-            where = "The task \"" + task.title() + "\" continues with the text saved so far. "
-                    + sitting.remaining(task.id()).map(d -> TimeText.duration(d.toMillis()) + " left in it.")
-                            .orElse("It is untimed.");
-        } else if (next.isEmpty()) {
-            where = "All tasks had ended; the candidate continues with the last questions and hands in.";
-        } else {
-            where = "The candidate continues where the sitting stopped.";
-        }
-        String screenAtStop = found.screen();
-        Runnable go = () -> {
-            if (next.isEmpty()) {
-                prepareToolsQuietly();
-                afterTasks("review".equals(screenAtStop));
-            } else if (found.currentTask().isPresent() || "task".equals(screenAtStop)) {
-                prepareToolsQuietly();
-                startNextTask();
-            } else if ("questionnaire".equals(screenAtStop)) {
-                prepareToolsQuietly();
-                afterInstructions();
-            } else {
-                showInstructions();
-            }
-        };
-        current = Screen.RECOVERY;
-        shell.show(Parts.card("resumedScreen", Parts.heading("The sitting is ready to continue"),
-                Parts.text("Candidate " + plan.candidateNumber() + ", form " + plan.formId() + "."),
-                Parts.text(where), Parts.primary("continueButton", "_Continue", go)));
+    // ---- recovery ----
+
+    private void showRecovery(UnfinishedSitting found) {
+        course.recoveryFound(found);
+        java.time.Duration down = found.downtime(setup.clock().now());
+        RecoveryScreen[] screen = new RecoveryScreen[1];
+        // the folder chosen at set-up (the room's stick), remembered in the sitting's database
+        screen[0] = new RecoveryScreen(recoveryFacts(found, down),
+                "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down",
+                found.outputFolder().orElse(data.root().resolve("outbox")),
+                input -> resume(screen[0], found, input, down), this::exitApplication);
+        shell.show(screen[0].root());
+        screen[0].focus();
     }
 
-    /** After a restart the instructions screen may be skipped, but the tools must still be prepared. */
-    private void prepareToolsQuietly() {
-        if (shelf == null) {
-            startTools(null, plan.form());
+    private List<String> recoveryFacts(UnfinishedSitting found, java.time.Duration down) {
+        List<String> facts = new ArrayList<>();
+        facts.add("Candidate: " + found.candidateNumber() + ", form " + found.formId());
+        facts.add("On screen when it stopped: " + found.currentTask().flatMap(id -> bundle.manifest().task(id))
+                .map(t -> "the task \"" + t.title() + "\"").orElse(found.screen() == SittingScreen.START ? "the start" : "the "
+                        + found.screen().wireName() + " screen"));
+        facts.add("Last saved: " + SittingCourse.CLOCK.format(found.lastActivity()) + ", "
+                + TimeText.duration(down.toMillis()) + " ago (measured on the system clock, so a changed clock distorts it)");
+        if (found.paused()) {
+            facts.add("The exam was paused by the invigilator when it stopped; it continues paused.");
+        }
+        if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
+            facts.add("The answers were handed in and saved on this machine, but not yet written to the output folder.");
+        }
+        return facts;
+    }
+
+    private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
+            java.time.Duration down) {
+        // the output folder is made and checked as at set-up: the folder proposed here may not exist (the stick was taken out)
+        work(() -> !PinHasher.matches(bundle.manifest().invigilatorPin(), input.pin())
+                ? "That is not this exam's invigilator PIN. Enter it again."
+                : input.outputFolder() == null ? "Enter the output folder where response packages go."
+                : outputProblem(input.outputFolder()), problem -> {
+            if (problem != null) {
+                screen.showError(problem);
+                return;
+            }
+            course.resume(found, down, input.credit(), input.outputFolder()).ifPresent(screen::showError);
+        });
+    }
+
+    // ---- the heartbeat ----
+
+    private void tick() {
+        if (course == null) {
+            return;
+        }
+        course.tick();
+        updateClock();
+        desk.refresh();
+    }
+
+    private void updateClock() {
+        if (course == null || course.screen() != FlowScreen.TASK || !course.candidateSitting()) {
+            shell.time(null, "", false);
+            return;
+        }
+        Optional<java.time.Duration> left = course.timeLeft();
+        if (left.isEmpty()) {
+            shell.time("Untimed", "This task is untimed", false);
+        } else {
+            long ms = left.get().toMillis();
+            shell.time(TimeText.clock(ms), TimeText.spoken(ms), ms < 5 * 60_000);
+        }
+    }
+
+    /**
+     * Puts the caret in the new task's editor and hands it the keys typed on the way in. The
+     * editor takes focus only once its skin is laid out, which can take a few pulses (more in
+     * large print, on a busy machine); until then the scene gives focus to the first button it
+     * finds. So the request is repeated each 30 ms until focus is inside the workspace (at most
+     * five seconds), and never after the task has changed, the exam is paused or the invigilator's
+     * screen is open; keys typed meanwhile are kept ({@link TypeAhead}) and delivered in order.
+     */
+    private void focusEditorOnceShown(ShownTask shown) {
+        Timeline retry = new Timeline();
+        retry.getKeyFrames().add(new KeyFrame(Duration.millis(30), e -> {
+            if (!onScreen(shown)) {
+                retry.stop(); // a later task took over, with its own keys and retry
+                return;
+            }
+            if (course.paused() || desk.showing()) {
+                typeAhead.drop();
+                retry.stop();
+                return;
+            }
+            if (focusInside(shown.workspace.view())) {
+                typeAhead.deliverTo(scene.getFocusOwner());
+                retry.stop();
+                return;
+            }
+            shown.workspace.focusEditor();
+        }));
+        retry.setCycleCount(167);
+        typeAhead.awaitFocusIn(shown.workspace.view());
+        retry.setOnFinished(e -> {
+            if (onScreen(shown)) {
+                typeAhead.drop(); // focus never reached the editor: keys typed now go where focus is
+            }
+        });
+        shown.workspace.focusEditor();
+        retry.play();
+    }
+
+    private boolean onScreen(ShownTask shown) {
+        return course != null && course.page().orElse(null) == shown;
+    }
+
+    private boolean focusInside(Node container) {
+        for (Node n = scene.getFocusOwner(); n != null; n = n.getParent()) {
+            if (n == container) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** A task's workspace and screen, as the course sees it. */
+    private static final class ShownTask implements CourseView.TaskPage {
+        private final TaskWorkspace workspace;
+        private final TaskScreen screen;
+
+        ShownTask(TaskWorkspace workspace, TaskScreen screen) {
+            this.workspace = workspace;
+            this.screen = screen;
+        }
+
+        @Override
+        public TaskAnswer answer() {
+            return new TaskAnswer(workspace.text(), workspace.wordCount(), workspace.toolUse());
+        }
+
+        @Override
+        public void setFrozen(boolean frozen) {
+            workspace.setFrozen(frozen);
+            screen.frozen(frozen);
+        }
+
+        @Override
+        public void focusEditor() {
+            workspace.focusEditor();
+        }
+
+        @Override
+        public void close() {
+            workspace.close();
+        }
+    }
+
+    /** The screens the course asks for. */
+    private final class Screens implements CourseView {
+
+        @Override
+        public void candidateIn(SittingPlan plan) {
+            display = SittingTheme.of(plan.manifest().roster().stream()
+                    .filter(r -> r.candidateNumber().equals(plan.candidateNumber())).findFirst().orElse(null));
+            SittingTheme.apply(shell.root(), display);
+            shell.who("Candidate " + plan.candidateNumber());
+            // the timeline runs from sign-in to the end: it drives the timers and reports saving trouble on every screen
+            ticker.play();
+        }
+
+        @Override
+        public void candidateOut() {
+            submitScreen = null;
+            display = DisplaySettings.standard();
+            SittingTheme.apply(shell.root(), display);
+            shell.who("");
+            desk.clear();
+        }
+
+        @Override
+        public void showSignIn() {
+            BundleManifest m = bundle.manifest();
+            String hint = m.roster().isEmpty() ? "Type the number on your admission details."
+                    : "Type the number on your admission details, exactly as it is printed.";
+            SignInScreen[] screen = new SignInScreen[1];
+            screen[0] = new SignInScreen(m.title(), hint, number -> course.signIn(number).ifPresent(screen[0]::showError));
+            shell.show(screen[0].root());
+            screen[0].focus();
+        }
+
+        @Override
+        public void showInstructions(SittingPlan plan) {
+            BundleManifest m = plan.manifest();
+            PromptText instructions = m.instructionsFile() == null ? new PromptText(List.of())
+                    : PromptText.parse(readText(m.instructionsFile()));
+            List<String> lines = new ArrayList<>();
+            for (FormSlot slot : plan.form().slots()) {
+                TaskSpec task = m.task(slot.taskId()).orElseThrow();
+                lines.add(task.title() + " (" + timeText(task, plan.extraTimePercent()) + "; "
+                        + String.join(", ", TaskWording.tools(slot.policy())).toLowerCase(Locale.ROOT) + ")");
+            }
+            instructionsScreen = new InstructionsScreen(m.title(), "Candidate " + plan.candidateNumber() + ", form "
+                    + plan.formId(), instructions, lines, course::instructionsRead);
+            shell.show(instructionsScreen.root());
+            instructionsScreen.focus();
+        }
+
+        @Override
+        public void toolsStatus(String text) {
+            if (instructionsScreen != null && course.screen() == FlowScreen.INSTRUCTIONS) {
+                instructionsScreen.toolsStatus(text);
+            }
+        }
+
+        @Override
+        public void showQuestionnaire(QuestionnaireSpec questionnaire) {
+            QuestionnaireScreen screen = new QuestionnaireScreen(questionnaire, course::questionnaireAnswered);
+            shell.show(screen.root());
+            screen.focus();
+        }
+
+        @Override
+        public void showPreparingTask() {
+            shell.show(Parts.card("preparingTask", Parts.heading("Preparing the task..."),
+                    Parts.quiet("The writing tools are still getting ready. This takes a few seconds.")));
+        }
+
+        @Override
+        public TaskPage showTask(int index, int taskCount, TaskStart start, TaskTools taskTools, ProcessLog log) {
+            TaskContext context = new TaskContext(start.task(), readText(start.task().promptFile()), taskTools, log,
+                    start.text(), start.caret(), display, start.loggedBefore());
+            TaskWorkspace workspace = setup.workspaces().create(context);
+            TaskScreen screen = new TaskScreen("Task " + (index + 1) + " of " + taskCount + ": " + start.task().title(),
+                    workspace.view(), course::finishTaskAsked);
+            shell.show(screen.root());
+            ticker.play();
+            return new ShownTask(workspace, screen);
+        }
+
+        @Override
+        public void focusAnswer(TaskPage page) {
+            focusEditorOnceShown((ShownTask) page);
+        }
+
+        @Override
+        public void showReview(List<ReviewLine> lines) {
+            ReviewScreen screen = new ReviewScreen(lines.stream()
+                    .map(l -> new ReviewScreen.Row(l.title(), l.words(), l.guidance())).toList(), course::handIn);
+            shell.show(screen.root());
+            screen.focus();
+        }
+
+        @Override
+        public void showSubmitting() {
+            if (submitScreen == null) {
+                submitScreen = new SubmitScreen(course::retryDelivery);
+                shell.show(submitScreen.root());
+            }
+            submitScreen.working();
+        }
+
+        @Override
+        public void showDeliveryFailed(String message) {
+            if (submitScreen == null) {
+                showSubmitting();
+            }
+            submitScreen.failed(message);
+        }
+
+        @Override
+        public void showFinished(HandedIn handedIn) {
+            ticker.stop();
+            shell.time(null, "", false);
+            FinishedScreen screen = new FinishedScreen("For the invigilator: the response package is "
+                    + handedIn.delivered() + "; a copy is kept at " + handedIn.localCopy() + ". Open the invigilator"
+                    + " screen (Ctrl+Shift+F12) for the next candidate or to exit.");
+            shell.show(screen.root());
+        }
+
+        @Override
+        public void showResumed(String who, String where) {
+            shell.show(Parts.card("resumedScreen", Parts.heading("The sitting is ready to continue"),
+                    Parts.text(who), Parts.text(where), Parts.primary("continueButton", "_Continue",
+                            course::continueRecovered)));
+        }
+
+        @Override
+        public void afterTimeUpMessage(Runnable then) {
+            PauseTransition wait = new PauseTransition(TIME_UP_PAUSE);
+            wait.setOnFinished(e -> then.run());
+            wait.play();
+        }
+
+        @Override
+        public void announce(String text) {
+            shell.announcer().announce(text);
+        }
+
+        @Override
+        public void clearAnnouncement() {
+            shell.announcer().clear();
+        }
+
+        @Override
+        public void eventNote(String text) {
+            desk.eventNote(text);
+        }
+
+        @Override
+        public void focusNote(String text) {
+            desk.focusNote(text);
+        }
+
+        @Override
+        public void coverPaused(boolean covered) {
+            desk.coverPaused(covered);
+        }
+
+        @Override
+        public void keys(TypedKeys what) {
+            switch (what) {
+                case HOLD_FOR_NEXT_TASK -> typeAhead.hold();
+                case DROP -> typeAhead.drop();
+            }
+        }
+
+        @Override
+        public void clockChanged() {
+            updateClock();
         }
     }
 
     // ---- invigilator ----
 
     private void openInvigilator() {
-        if (current == Screen.NONE || current == Screen.REFUSED || current == Screen.SETUP
-                || current == Screen.RECOVERY) {
+        FlowScreen now = screen();
+        if (now == FlowScreen.NONE || now == FlowScreen.REFUSED || now == FlowScreen.SETUP
+                || now == FlowScreen.RECOVERY) {
             return;
         }
         typeAhead.drop(); // the PIN typed next is never the candidate's text
@@ -928,150 +689,108 @@ public final class SittingFlow {
 
             @Override
             public boolean paused() {
-                return paused;
+                return course != null && course.paused();
             }
 
             @Override
-            public boolean inTask() {
-                return current == Screen.TASK;
+            public InvigilatorPanel.Moment moment() {
+                return SittingFlow.this.moment();
             }
 
             @Override
             public void setPaused(boolean pause) {
-                SittingFlow.this.setPaused(pause);
+                course.setPaused(pause);
             }
 
             @Override
             public void addMinutes(int minutes) {
-                if (current == Screen.TASK && sitting != null) {
-                    sitting.addTime(java.time.Duration.ofMinutes(minutes));
-                    shell.announcer().announce(minutes + (minutes == 1 ? " minute was" : " minutes were")
-                            + " added to this task.");
-                    updateClock();
-                }
+                course.addMinutes(minutes);
             }
 
             @Override
             public void endTask() {
-                SittingFlow.this.endTask(EndReason.ENDED_BY_INVIGILATOR);
+                course.endTaskByInvigilator();
+            }
+
+            @Override
+            public void nextCandidate() {
+                course.nextCandidate();
             }
 
             @Override
             public void exit() {
-                exitByInvigilator();
+                if (course != null) {
+                    course.exitByInvigilator();
+                }
+                exitApplication();
             }
 
             @Override
             public void backToCandidate() {
-                refocus();
+                if (course != null && !course.paused()) {
+                    course.page().ifPresent(CourseView.TaskPage::focusEditor);
+                }
             }
 
             @Override
-            public <T> void work(Supplier<T> job, java.util.function.Consumer<T> then) {
+            public <T> void work(Supplier<T> job, Consumer<T> then) {
                 SittingFlow.this.work(job, then);
             }
         };
     }
 
+    /** Where the sitting is, as far as the invigilator's actions go. */
+    private InvigilatorPanel.Moment moment() {
+        if (course == null || course.plan().isEmpty()) {
+            return InvigilatorPanel.Moment.NO_CANDIDATE;
+        }
+        return switch (course.screen()) {
+            case TASK -> InvigilatorPanel.Moment.IN_TASK;
+            case SUBMIT -> InvigilatorPanel.Moment.HANDING_IN;
+            case FINISHED -> InvigilatorPanel.Moment.HANDED_IN;
+            case NONE, REFUSED, RECOVERY, SETUP, SIGN_IN, INSTRUCTIONS, QUESTIONNAIRE, REVIEW ->
+                InvigilatorPanel.Moment.AT_WORK;
+        };
+    }
+
     private String stateLine() {
-        StringBuilder state = new StringBuilder();
-        if (plan == null) {
-            state.append("No candidate has signed in yet.");
+        Optional<SittingPlan> candidate = course == null ? Optional.empty() : course.plan();
+        boolean paused = course != null && course.paused();
+        if (candidate.isEmpty()) {
+            return paused ? "No candidate has signed in yet. The exam is PAUSED." : "No candidate has signed in yet.";
+        }
+        SittingPlan plan = candidate.get();
+        String who = "Candidate " + plan.candidateNumber() + ", form " + plan.formId();
+        Optional<HandedIn> handedIn = course.handedIn();
+        if (course.screen() == FlowScreen.FINISHED && handedIn.isPresent()) {
+            return who + ": the answers were handed in at " + SittingCourse.CLOCK.format(handedIn.get().at())
+                    + ". The response package is written to " + handedIn.get().delivered() + "; a copy is kept at "
+                    + handedIn.get().localCopy() + ". This candidate's sitting is over.";
+        }
+        if (course.screen() == FlowScreen.SUBMIT) {
+            return who + ": the answers are handed in and saved on this machine, but the response package is not yet"
+                    + " written to the output folder " + course.outputFolder() + ". The candidate's screen says what is"
+                    + " wrong and offers to try again.";
+        }
+        StringBuilder state = new StringBuilder(who);
+        if (plan.extraTimePercent() > 0) {
+            state.append(", ").append(plan.extraTimePercent()).append("% extra time (roster)");
+        }
+        state.append(". ");
+        int index = course.taskIndex();
+        if (index >= 0) {
+            state.append("Task ").append(index + 1).append(" of ").append(plan.form().slots().size()).append(": ")
+                    .append(course.currentTaskTitle()).append(", ")
+                    .append(course.timeLeft().map(d -> TimeText.duration(d.toMillis()) + " left").orElse("untimed"))
+                    .append(". ");
         } else {
-            state.append("Candidate ").append(plan.candidateNumber()).append(", form ").append(plan.formId());
-            if (plan.extraTimePercent() > 0) {
-                state.append(", ").append(plan.extraTimePercent()).append("% extra time (roster)");
-            }
-            state.append(". ");
-            if (current == Screen.TASK && taskIndex >= 0) {
-                TaskSpec task = plan.manifest().task(plan.form().slots().get(taskIndex).taskId()).orElseThrow();
-                state.append("Task ").append(taskIndex + 1).append(" of ").append(plan.form().slots().size())
-                        .append(": ").append(task.title()).append(", ");
-                state.append(remainingNow().map(d -> TimeText.duration(d.toMillis()) + " left").orElse("untimed"));
-                state.append(". ");
-            } else {
-                state.append("Screen: ").append(current.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '))
-                        .append(". ");
-            }
+            state.append("Screen: ").append(course.screen().name().toLowerCase(Locale.ROOT).replace('_', ' ')).append(". ");
         }
         state.append(paused ? "The exam is PAUSED." : "The exam is running.");
         return state.toString();
     }
 
-    private void setPaused(boolean pause) {
-        if (pause == paused || sitting == null) {
-            return;
-        }
-        paused = pause;
-        if (pause) {
-            typeAhead.drop();
-            sitting.pauseAll();
-            freeze(true);
-            desk.coverPaused(true);
-            shell.announcer().announce(PausedCover.HEADING + ".");
-        } else {
-            sitting.resumeAll();
-            desk.coverPaused(false);
-            if (!taskEnding) {
-                freeze(false);
-            }
-            shell.announcer().announce("The exam has resumed. Your time is running again.");
-            if (entryWaiting) {
-                entryWaiting = false;
-                startNextTask();
-            }
-        }
-    }
-
-    private void exitByInvigilator() {
-        if (sitting != null && !sitting.submitted()) {
-            // not an end of the sitting: it stays in the data folder and resumes on the next start
-            sitting.log().record(EventType.NAV_SCREEN, currentTaskId(), Map.of("screen", "exit-by-invigilator"));
-        }
-        exitApplication();
-    }
-
-    private void refocus() {
-        if (workspace != null && !paused) {
-            workspace.focusEditor();
-        }
-    }
-
-    // ---- focus, storage ----
-
-    private void onFocusLost() {
-        focusLine("Focus lost");
-        if (sitting != null) {
-            sitting.log().record(EventType.FOCUS_LOST, currentTaskId(), Map.of());
-        }
-    }
-
-    private void onFocusReturned(long awayMillis) {
-        focusLine("Focus returned after " + TimeText.duration(awayMillis));
-        if (sitting != null) {
-            sitting.log().record(EventType.FOCUS_RETURNED, currentTaskId(), Map.of("awayMillis", awayMillis));
-        }
-    }
-
-    private String currentTaskId() {
-        return current == Screen.TASK && taskIndex >= 0 ? plan.form().slots().get(taskIndex).taskId() : null;
-    }
-
-    private void focusLine(String what) {
-        desk.note(what);
-    }
-
-    private void storageTrouble(String message) {
-        focusLine("Saving failed: " + message);
-        shell.announcer().announce("Invigilator: this machine cannot save the work at the moment (" + message
-                + "). Keep the program open; do not switch the machine off.");
-    }
-
     // ---- helpers ----
-
-    private PromptText readPrompt(String entry) {
-        return entry == null ? new PromptText(List.of()) : PromptText.parse(readText(entry));
-    }
 
     private String readText(String entry) {
         try {
@@ -1097,55 +816,11 @@ public final class SittingFlow {
         return Objects.requireNonNullElse(SittingFlow.class.getPackage().getImplementationVersion(), "development");
     }
 
-    private static String rootMessage(Throwable t) {
-        Throwable cause = t;
-        while (cause.getCause() != null && (cause instanceof java.util.concurrent.CompletionException
-                || cause instanceof java.util.concurrent.ExecutionException)) {
-            cause = cause.getCause();
-        }
-        return cause.getMessage();
-    }
-
-    /** A message from a core exception as a sentence on screen. */
-    static String sentence(String message) {
-        if (message == null || message.isBlank()) {
-            return "Something went wrong.";
-        }
-        String s = Character.toUpperCase(message.charAt(0)) + message.substring(1);
-        return s.endsWith(".") ? s : s + ".";
-    }
-
-    /** Work that may fail with an I/O error. */
-    @FunctionalInterface
-    private interface IoJob<T> {
-        T run() throws IOException;
-    }
-
-    /** As {@link #work}, for submission: an I/O failure keeps the retry screen up with its message. */
-    private <T> void workOrFail(IoJob<T> job, java.util.function.Consumer<T> then) {
-        CompletableFuture.supplyAsync(() -> {
-            try {
-                return job.run();
-            } catch (IOException e) {
-                throw new java.io.UncheckedIOException(e);
-            }
-        }, background).whenComplete((result, failure) -> Platform.runLater(() -> {
-            if (failure != null) {
-                String message = "The answers could not be saved as a response package (" + rootMessage(failure)
-                        + "). Everything typed is still in this machine's sitting database.";
-                focusLine(message);
-                submitScreen.failed(message);
-                return;
-            }
-            then.accept(result);
-        }));
-    }
-
     /** Runs slow work (PIN hashing, disk) off the JavaFX thread and hands the result back to it. */
-    private <T> void work(Supplier<T> job, java.util.function.Consumer<T> then) {
+    private <T> void work(Supplier<T> job, Consumer<T> then) {
         CompletableFuture.supplyAsync(job, background).whenComplete((result, failure) -> Platform.runLater(() -> {
             if (failure != null) {
-                shell.announcer().announce("Something went wrong: " + rootMessage(failure));
+                shell.announcer().announce("Something went wrong: " + SittingCourse.rootMessage(failure));
                 return;
             }
             then.accept(result);
@@ -1164,24 +839,12 @@ public final class SittingFlow {
     /** Closes what the sitting holds (tools, bundle, core); never throws. */
     public void closeQuietly() {
         ticker.stop();
-        if (workspace != null) {
-            workspace.close();
-            workspace = null;
-        }
-        if (shelf != null) {
-            shelf.close();
+        if (course != null) {
+            course.closeQuietly();
+        } else if (tools != null) {
+            tools.close();
         }
         try {
-            if (sitting != null) {
-                sitting.close();
-            }
-        } catch (RuntimeException | IOException ignored) {
-            // the log is durable within half a second; closing only flushes the rest
-        }
-        try {
-            if (packs != null) {
-                packs.close();
-            }
             if (bundle != null) {
                 bundle.close();
             }
@@ -1205,16 +868,16 @@ public final class SittingFlow {
 
     /** Whether the writing tools are being prepared (or ready); for tests. */
     boolean toolsStarted() {
-        return shelf != null;
+        return tools != null && tools.started();
     }
 
-    /** Lines the invigilator screen lists (focus changes, hand-in trouble), oldest first. */
+    /** Lines the invigilator screen's focus list shows, oldest first. */
     List<String> focusLines() {
-        return desk.lines();
+        return desk.focusLines();
     }
 
-    Screen screen() {
-        return current;
+    FlowScreen screen() {
+        return course == null ? withoutCourse : course.screen();
     }
 
     Parent root() {

@@ -30,6 +30,12 @@ public final class SittingShell {
         title.setText(examTitle);
         title.setId("stripTitle");
         title.getStyleClass().add("strip-title");
+        // on a narrow window or in large print the title wraps; nothing in the strip is shortened to "..."
+        title.setWrapText(true);
+        title.setMinHeight(Region.USE_PREF_SIZE);
+        title.setMinWidth(0);
+        HBox.setHgrow(title, Priority.SOMETIMES);
+        who.setMinWidth(Region.USE_PREF_SIZE);
         who.setId("stripWho");
         who.getStyleClass().add("strip-detail");
         time.setId("timeLeft");

@@ -11,7 +11,9 @@ import javafx.stage.Stage;
 import org.inkgate.client.practice.PracticeLoader;
 import org.inkgate.client.testutil.DemoBundles;
 import org.inkgate.client.testutil.PngSnapshots;
+import org.inkgate.client.testutil.StageSize;
 import org.inkgate.client.testutil.Tampering;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -37,10 +39,18 @@ class PracticeWindowScreenshotTest {
     @TempDir
     Path temp;
     private Stage stage;
+    private StageSize before;
 
+    /** The window's own size, whatever an earlier test class left on the shared stage. */
     @Start
     void start(Stage primary) {
         this.stage = primary;
+        before = StageSize.set(primary, PracticeStage.WIDTH, PracticeStage.HEIGHT);
+    }
+
+    @AfterEach
+    void restore(FxRobot robot) {
+        robot.interact(before::restore);
     }
 
     @Test

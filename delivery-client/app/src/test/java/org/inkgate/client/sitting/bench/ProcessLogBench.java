@@ -9,7 +9,7 @@ import java.sql.Statement;
 import java.util.Arrays;
 import java.util.Map;
 import java.util.concurrent.atomic.AtomicBoolean;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.sitting.store.SittingDatabase;
 import org.inkgate.client.sitting.store.SqliteProcessLog;
 import org.inkgate.format.response.EventType;

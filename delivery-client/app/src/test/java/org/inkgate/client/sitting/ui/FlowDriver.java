@@ -16,9 +16,9 @@ import javafx.scene.control.Label;
 import javafx.scene.control.TextInputControl;
 import javafx.stage.Stage;
 import org.inkgate.client.demo.DemoSittingBuild;
-import org.inkgate.client.sitting.SittingClock;
-import org.inkgate.client.sitting.ui.open.SittingBundleOpener;
-import org.inkgate.client.sitting.ui.open.SittingLoad;
+import org.inkgate.client.sitting.clock.SittingClock;
+import org.inkgate.client.sitting.open.SittingBundleOpener;
+import org.inkgate.client.sitting.open.SittingLoad;
 import org.inkgate.client.testutil.DemoBundles;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.crypto.Ed25519;
@@ -107,15 +107,45 @@ final class FlowDriver {
         return flow;
     }
 
+    /**
+     * Releases the lock of the flow this driver opened, if it still holds the stage. A lock left on
+     * the stage TestFX shares between test classes keeps taking the screen back for every later
+     * class: their window sizes turned into the full screen's. Call after each test that locks.
+     */
+    void releaseLock() {
+        if (flow != null && flow.lock() != null) {
+            robot.interact(() -> {
+                if (flow.lock().locked()) {
+                    flow.lock().release();
+                }
+            });
+        }
+    }
+
     /** Waits until a node with this id is showing. */
     <T extends Node> T await(String id, Class<T> type) {
         try {
-            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> robot.lookup("#" + id).tryQuery().map(Node::isVisible)
-                    .orElse(false));
+            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> find(id).map(Node::isVisible).orElse(false));
         } catch (java.util.concurrent.TimeoutException e) {
             throw new AssertionError("#" + id + " did not appear within 60 s; screen is " + flow.screen(), e);
         }
-        return robot.lookup("#" + id).queryAs(type);
+        return type.cast(find(id).orElseThrow(() -> new AssertionError("#" + id + " went away again; screen is " + flow.screen())));
+    }
+
+    /**
+     * Looks a node up on the JavaFX thread. A lookup from the test thread walks the scene while the
+     * flow changes it (seen in a whole-module run: IndexOutOfBoundsException inside
+     * Parent.lookupAll while the sign-in screen replaced the set-up screen).
+     */
+    java.util.Optional<Node> find(String id) {
+        try {
+            return WaitForAsyncUtils.asyncFx(() -> robot.lookup("#" + id).tryQuery()).get(30, TimeUnit.SECONDS);
+        } catch (java.util.concurrent.ExecutionException | java.util.concurrent.TimeoutException e) {
+            throw new AssertionError("could not look up #" + id + " on the JavaFX thread", e);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new AssertionError("interrupted while looking up #" + id, e);
+        }
     }
 
     void type(String id, String text) {
@@ -141,11 +171,11 @@ final class FlowDriver {
     /** Waits until the label with this id shows text containing {@code part}. */
     void awaitText(String id, String part) {
         try {
-            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> robot.lookup("#" + id).tryQuery()
+            WaitForAsyncUtils.waitFor(60, TimeUnit.SECONDS, () -> find(id)
                     .map(n -> n instanceof Label l && l.getText().contains(part)).orElse(false));
         } catch (java.util.concurrent.TimeoutException e) {
             throw new AssertionError("#" + id + " never showed \"" + part + "\"; it shows \""
-                    + robot.lookup("#" + id).tryQuery().map(n -> ((Label) n).getText()).orElse("(nothing)") + "\"", e);
+                    + find(id).map(n -> ((Label) n).getText()).orElse("(nothing)") + "\"", e);
         }
     }
 
@@ -183,6 +213,21 @@ final class FlowDriver {
     void finishTask() {
         press("finishTaskButton");
         press("confirmFinishButton");
+    }
+
+    /** Opens the invigilator screen as the invigilator does: Ctrl+Shift+F12, then the PIN. */
+    void openInvigilator() throws Exception {
+        robot.press(javafx.scene.input.KeyCode.CONTROL, javafx.scene.input.KeyCode.SHIFT, javafx.scene.input.KeyCode.F12)
+                .release(javafx.scene.input.KeyCode.F12, javafx.scene.input.KeyCode.SHIFT, javafx.scene.input.KeyCode.CONTROL);
+        type("pinField", demoPin());
+        press("pinOk");
+        await("invigilatorPanel", Node.class);
+    }
+
+    /** Whether a node with this id is in the scene and showing (its own visibility only). */
+    boolean showing(String id) {
+        WaitForAsyncUtils.waitForFxEvents();
+        return find(id).map(Node::isVisible).orElse(false);
     }
 
     static BundleReader demoReader() throws Exception {

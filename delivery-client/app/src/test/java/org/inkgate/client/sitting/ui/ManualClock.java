@@ -3,7 +3,7 @@ package org.inkgate.client.sitting.ui;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.concurrent.atomic.AtomicLong;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 
 /** A sitting clock that a test moves by hand; both clocks move together. */
 public final class ManualClock implements SittingClock {

@@ -1,20 +1,22 @@
 package org.inkgate.client.sitting.ui;
 
+import org.inkgate.client.sitting.course.FlowScreen;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 import java.util.stream.Stream;
 import javafx.scene.Node;
 import javafx.scene.control.Label;
 import javafx.stage.Stage;
-import org.inkgate.client.sitting.SittingClock;
-import org.inkgate.client.sitting.ui.open.SittingBundleOpener;
-import org.inkgate.client.sitting.ui.open.SittingLoad;
+import org.inkgate.client.sitting.clock.SittingClock;
+import org.inkgate.client.sitting.open.SittingBundleOpener;
+import org.inkgate.client.sitting.open.SittingLoad;
 import org.inkgate.client.testutil.DemoBundles;
 import org.inkgate.client.testutil.Tampering;
 import org.inkgate.format.crypto.Hex;
@@ -24,6 +26,7 @@ import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.response.TaskResponse;
 import org.inkgate.format.trust.TrustPolicy;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -43,6 +46,7 @@ class SittingFlowTest {
     @TempDir
     Path temp;
     private Stage stage;
+    private final List<FlowDriver> drivers = new ArrayList<>();
 
     @Start
     void start(Stage primary) {
@@ -50,7 +54,15 @@ class SittingFlowTest {
     }
 
     private FlowDriver driver() {
-        return new FlowDriver(new FxRobot(), stage, temp.resolve("data"));
+        FlowDriver d = new FlowDriver(new FxRobot(), stage, temp.resolve("data"));
+        drivers.add(d);
+        return d;
+    }
+
+    /** A locked flow left behind would keep the shared stage full screen for every later test class. */
+    @AfterEach
+    void releaseLocks() {
+        drivers.forEach(FlowDriver::releaseLock);
     }
 
     @Test
@@ -63,7 +75,7 @@ class SittingFlowTest {
         String message = d.text("refusalMessage");
         assertTrue(message.contains("tampered.inkexam"), message);
         assertTrue(robot.lookup("#setupPin").tryQuery().isEmpty(), "set-up shown for a refused bundle");
-        assertEquals(SittingFlow.Screen.REFUSED, d.flow.screen());
+        assertEquals(FlowScreen.REFUSED, d.flow.screen());
     }
 
     @Test
@@ -91,7 +103,7 @@ class SittingFlowTest {
         d.setUp("000000", temp.resolve("out"));
 
         d.awaitText("setupError", "not this exam's invigilator PIN");
-        assertEquals(SittingFlow.Screen.SETUP, d.flow.screen());
+        assertEquals(FlowScreen.SETUP, d.flow.screen());
     }
 
     @Test
@@ -115,7 +127,7 @@ class SittingFlowTest {
         var enrolment = org.inkgate.format.enrolment.InstallationEnrolment.read(file);
         assertEquals(fingerprint, enrolment.fingerprint());
         assertEquals("Room 2, seat 14", enrolment.machine());
-        assertEquals(SittingFlow.Screen.SETUP, d.flow.screen(), "writing the file does not start the sitting");
+        assertEquals(FlowScreen.SETUP, d.flow.screen(), "writing the file does not start the sitting");
     }
 
     @Test
@@ -132,15 +144,15 @@ class SittingFlowTest {
     }
 
     @Test
-    void signIn_unknownCandidateNumber_saysItIsNotOnTheRoster(FxRobot robot) throws Exception {
+    void signIn_unknownCandidateNumber_saysItIsNotOnTheList(FxRobot robot) throws Exception {
         FlowDriver d = driver();
         d.open(FlowDriver.buildDemoSitting(temp), SittingClock.system(), false);
         d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
 
         d.signIn("X9999");
 
-        d.awaitText("signInError", "not on this exam's roster");
-        assertEquals(SittingFlow.Screen.SIGN_IN, d.flow.screen());
+        d.awaitText("signInError", "not on the list for this exam");
+        assertEquals(FlowScreen.SIGN_IN, d.flow.screen());
     }
 
     @Test
@@ -277,6 +289,7 @@ class SittingFlowTest {
         d.awaitText("announcement", "5 minutes were added");
 
         d.press("endTaskButton");
+        d.press("confirmEndTaskButton");
         d.awaitTask("The empty shop on Mill Street");
         assertTrue(d.workspaces.getFirst().closed(), "the ended task's workspace was not closed");
     }

@@ -11,9 +11,11 @@ import java.util.concurrent.atomic.AtomicReference;
 import javafx.scene.Node;
 import javafx.scene.input.KeyCode;
 import javafx.stage.Stage;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.testutil.PngSnapshots;
+import org.inkgate.client.testutil.StageSize;
 import org.inkgate.client.testutil.Tampering;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
 import org.junit.jupiter.api.io.TempDir;
@@ -31,14 +33,24 @@ import org.testfx.util.WaitForAsyncUtils;
 class SittingScreenshotTest {
 
     static final String DIR_PROPERTY = "inkgate.screenshots.dir";
+    static final int WIDTH = 1280;
+    static final int HEIGHT = 800;
 
     @TempDir
     Path temp;
     private Stage stage;
+    private StageSize before;
 
+    /** The pictures are 1280x800 whatever an earlier test class left on the shared stage. */
     @Start
     void start(Stage primary) {
         this.stage = primary;
+        before = StageSize.set(primary, WIDTH, HEIGHT);
+    }
+
+    @AfterEach
+    void restore(FxRobot robot) {
+        robot.interact(before::restore);
     }
 
     @Test
@@ -107,6 +119,8 @@ class SittingScreenshotTest {
         d.press("retryButton");
         d.await("finishedScreen", Node.class);
         save(robot, "sitting-12-finished.png");
+        d.openInvigilator();
+        save(robot, "sitting-16-invigilator-after-hand-in.png");
     }
 
     @Test
@@ -118,6 +132,9 @@ class SittingScreenshotTest {
         d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
         // D1003: large print, high contrast, 25% extra time (src/demo/sitting.json)
         d.signIn("D1003");
+        // closing below while the spelling check is still warming up would interrupt LanguageTool's
+        // class set-up and leave it unusable for every later test in this JVM
+        d.awaitText("toolsStatus", "ready");
         d.press("startButton");
         d.awaitTask("A note to a neighbour");
         d.typeInEditor("Dear Sam,\n\nI am writing to ask a favour.");
@@ -152,8 +169,8 @@ class SittingScreenshotTest {
         WaitForAsyncUtils.waitForFxEvents();
         AtomicReference<BufferedImage> image = new AtomicReference<>();
         robot.interact(() -> image.set(PngSnapshots.snapshot(stage.getScene())));
-        assertEquals(1280, image.get().getWidth());
-        assertEquals(800, image.get().getHeight());
+        assertEquals(WIDTH, image.get().getWidth(), "picture width");
+        assertEquals(HEIGHT, image.get().getHeight(), "picture height");
         String dir = System.getProperty(DIR_PROPERTY);
         Path folder = dir == null ? Path.of("target", "screenshots") : Path.of(dir);
         PngSnapshots.write(image.get(), folder.resolve(name));

@@ -18,7 +18,7 @@ import javafx.scene.Scene;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
 import javafx.stage.Stage;
-import org.inkgate.client.sitting.ProcessLog;
+import org.inkgate.client.processlog.ProcessLog;
 import org.inkgate.client.task.DisplaySettings;
 import org.inkgate.client.task.TaskContext;
 import org.inkgate.client.task.TaskWorkspace;

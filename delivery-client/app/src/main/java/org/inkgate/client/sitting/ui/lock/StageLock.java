@@ -6,12 +6,14 @@ import java.util.function.LongSupplier;
 import javafx.application.Platform;
 import javafx.beans.value.ChangeListener;
 import javafx.event.EventHandler;
+import javafx.geometry.Rectangle2D;
 import javafx.scene.Scene;
 import javafx.scene.input.DragEvent;
 import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyCodeCombination;
 import javafx.scene.input.KeyCombination;
 import javafx.scene.input.KeyEvent;
+import javafx.stage.Screen;
 import javafx.stage.Stage;
 import javafx.stage.WindowEvent;
 
@@ -72,6 +74,8 @@ public final class StageLock {
     private final ChangeListener<Scene> sceneWatch = (obs, old, now) -> moveGuards(old, now);
     private boolean locked;
     private long lostAtMillis = -1;
+    /** The window's bounds before the lock, given back on release. */
+    private Rectangle2D before;
 
     private StageLock(Stage stage, FocusListener focus, LongSupplier monoMillis) {
         this.stage = Objects.requireNonNull(stage, "stage");
@@ -98,6 +102,8 @@ public final class StageLock {
         stage.setFullScreenExitKeyCombination(KeyCombination.NO_MATCH);
         stage.setFullScreenExitHint("");
         stage.setAlwaysOnTop(true);
+        before = new Rectangle2D(stage.getX(), stage.getY(), stage.getWidth(), stage.getHeight());
+        coverScreen();
         stage.setFullScreen(true);
         stage.addEventFilter(WindowEvent.WINDOW_CLOSE_REQUEST, closeGuard);
         stage.addEventFilter(KeyEvent.ANY, keyGuard);
@@ -122,6 +128,34 @@ public final class StageLock {
         moveGuards(stage.getScene(), null);
         stage.setAlwaysOnTop(false);
         stage.setFullScreen(false);
+        if (before != null && before.getWidth() > 0 && before.getHeight() > 0) {
+            stage.setX(before.getMinX());
+            stage.setY(before.getMinY());
+            stage.setWidth(before.getWidth());
+            stage.setHeight(before.getHeight());
+        }
+    }
+
+    /**
+     * Gives the window the whole screen's bounds as well as asking for full screen: full screen is a
+     * request to the window manager, and a kiosk session started straight from the display server
+     * has none, so without this the window keeps its first size in a corner of the screen.
+     */
+    private void coverScreen() {
+        Rectangle2D screen = screenOf(stage).getBounds();
+        stage.setX(screen.getMinX());
+        stage.setY(screen.getMinY());
+        stage.setWidth(screen.getWidth());
+        stage.setHeight(screen.getHeight());
+    }
+
+    private static Screen screenOf(Stage stage) {
+        double w = Double.isNaN(stage.getWidth()) ? 1 : Math.max(1, stage.getWidth());
+        double h = Double.isNaN(stage.getHeight()) ? 1 : Math.max(1, stage.getHeight());
+        double x = Double.isNaN(stage.getX()) ? 0 : stage.getX();
+        double y = Double.isNaN(stage.getY()) ? 0 : stage.getY();
+        List<Screen> under = Screen.getScreensForRectangle(x, y, w, h);
+        return under.isEmpty() ? Screen.getPrimary() : under.get(0);
     }
 
     /** True until {@link #release()}. */
@@ -171,6 +205,7 @@ public final class StageLock {
             focus.focusReturned(away);
             // full screen ends silently when another window takes focus; take it back
             if (!stage.isFullScreen()) {
+                coverScreen();
                 stage.setFullScreen(true);
             }
         }
@@ -181,6 +216,7 @@ public final class StageLock {
             // re-entered later, when the runtime is done with this change
             Platform.runLater(() -> {
                 if (locked && !stage.isFullScreen()) {
+                    coverScreen();
                     stage.setFullScreen(true);
                 }
             });

@@ -4,7 +4,7 @@ import javafx.geometry.Pos;
 import javafx.scene.control.Label;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /** Covers the candidate's screen while the invigilator has paused the sitting; the clock is stopped. */
 public final class PausedCover extends StackPane {

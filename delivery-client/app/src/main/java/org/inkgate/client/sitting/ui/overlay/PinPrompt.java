@@ -9,7 +9,7 @@ import javafx.scene.input.KeyCode;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.StackPane;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /** Asks for the invigilator PIN over the candidate's screen; Escape or Cancel closes it. */
 public final class PinPrompt extends StackPane {

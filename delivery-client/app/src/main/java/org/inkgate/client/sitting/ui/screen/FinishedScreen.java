@@ -2,7 +2,7 @@ package org.inkgate.client.sitting.ui.screen;
 
 import javafx.scene.Parent;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /** The end: the answers were handed in; the invigilator closes the program. */
 public final class FinishedScreen {

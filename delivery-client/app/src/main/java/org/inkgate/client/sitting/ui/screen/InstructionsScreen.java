@@ -7,7 +7,7 @@ import javafx.scene.control.Label;
 import javafx.scene.layout.VBox;
 import org.inkgate.client.practice.PromptText;
 import org.inkgate.client.practice.ui.PromptView;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /** The exam's instructions and the plan of the sitting; the writing tools warm up meanwhile. */
 public final class InstructionsScreen {
@@ -40,9 +40,8 @@ public final class InstructionsScreen {
                 Parts.heading("Your tasks"),
                 planBox,
                 Parts.quiet("Each task has its own time. When a task ends, you cannot go back to it."
-                        + " Your work is saved on this machine as you type."),
-                tools, start);
-        root = Parts.card("instructionsScreen", box);
+                        + " Your work is saved on this machine as you type."));
+        root = Parts.cardWithActions("instructionsScreen", new VBox(8, tools, start), box);
     }
 
     public Parent root() {

@@ -10,7 +10,7 @@ import javafx.scene.control.RadioButton;
 import javafx.scene.control.TextArea;
 import javafx.scene.control.ToggleGroup;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 import org.inkgate.format.bundle.QuestionItem;
 import org.inkgate.format.bundle.QuestionnaireSpec;
 
@@ -35,8 +35,8 @@ public final class QuestionnaireScreen {
         VBox box = new VBox(14,
                 Parts.heading(questionnaire.title()),
                 Parts.quiet("These questions are not marked. You may leave any of them unanswered."),
-                items, done);
-        root = Parts.card("questionnaireScreen", box);
+                items);
+        root = Parts.cardWithActions("questionnaireScreen", done, box);
     }
 
     private VBox item(int number, QuestionItem item) {
@@ -95,6 +95,6 @@ public final class QuestionnaireScreen {
 
     public void focus() {
         likert.values().stream().findFirst().map(g -> g.getToggles().getFirst())
-                .ifPresentOrElse(t -> ((RadioButton) t).requestFocus(), done::requestFocus);
+                .ifPresentOrElse(t -> Parts.focusWhenShown((RadioButton) t), done::requestFocus);
     }
 }

@@ -10,7 +10,7 @@ import javafx.scene.control.Label;
 import javafx.scene.control.PasswordField;
 import javafx.scene.control.TextField;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /**
  * Shown on start when an unfinished sitting is found on this machine: what was found, and the
@@ -65,10 +65,9 @@ public final class RecoveryScreen {
                 Parts.quiet("Whether to give back the lost time is the invigilator's decision under the test"
                         + " owner's regulations; the choice is recorded in the sitting's log."),
                 Parts.fieldLabel("_Output folder for the response package", output), output,
-                Parts.fieldLabel("Invigilator _PIN", pin), pin,
-                error, new javafx.scene.layout.HBox(12, resume, Parts.plain("recoveryExit",
-                        "E_xit without resuming", onExit)));
-        root = Parts.card("recoveryScreen", box);
+                Parts.fieldLabel("Invigilator _PIN", pin), pin);
+        root = Parts.cardWithActions("recoveryScreen", new VBox(8, error, new javafx.scene.layout.HBox(12, resume,
+                Parts.plain("recoveryExit", "E_xit without resuming", onExit))), box);
     }
 
     public Parent root() {

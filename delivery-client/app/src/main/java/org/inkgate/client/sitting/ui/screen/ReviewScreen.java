@@ -6,9 +6,10 @@ import javafx.scene.control.Button;
 import javafx.scene.control.CheckBox;
 import javafx.scene.control.Label;
 import javafx.scene.layout.HBox;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /**
  * Review and confirm before final submission (WCAG 3.3.4 Error Prevention: the candidate sees
@@ -35,10 +36,10 @@ public final class ReviewScreen {
             HBox.setHgrow(title, Priority.ALWAYS);
             Label words = new Label(row.words() + (row.words() == 1 ? " word" : " words"));
             words.getStyleClass().add("review-words");
-            words.setMinWidth(120);
+            words.setMinWidth(Region.USE_PREF_SIZE);
             Label guidance = new Label(row.guidance() == null ? "" : row.guidance());
             guidance.getStyleClass().add("quiet-note");
-            guidance.setMinWidth(220);
+            guidance.setMinWidth(Region.USE_PREF_SIZE);
             HBox line = new HBox(title, words, guidance);
             line.getStyleClass().add("review-row");
             line.setAccessibleText(row.title() + ": " + words.getText() + ". " + guidance.getText());
@@ -52,9 +53,8 @@ public final class ReviewScreen {
                 Parts.heading("Check before you hand in"),
                 Parts.text("Your tasks are finished. This is what will be handed in. After you hand in,"
                         + " nothing can be changed."),
-                table,
-                sure, submit);
-        root = Parts.card("reviewScreen", box);
+                table);
+        root = Parts.cardWithActions("reviewScreen", new VBox(10, sure, submit), box);
     }
 
     public Parent root() {

@@ -14,7 +14,7 @@ import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.VBox;
 import javafx.stage.DirectoryChooser;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /**
  * The invigilator's set-up before any candidate signs in: the PIN, the output folder for the
@@ -90,8 +90,7 @@ public final class SetupScreen {
             fields.getChildren().add(demo);
         }
         Button exit = Parts.plain("setupExit", "E_xit", onExit);
-        fields.getChildren().addAll(error, new HBox(12, go, exit));
-        root = Parts.card("setupScreen", fields);
+        root = Parts.cardWithActions("setupScreen", new VBox(8, error, new HBox(12, go, exit)), fields);
     }
 
     /**
@@ -133,7 +132,7 @@ public final class SetupScreen {
 
     /** Where focus starts. */
     public void focus() {
-        pin.requestFocus();
+        Parts.focusWhenShown(pin);
     }
 
     /** Says what is wrong and clears the secret fields. */

@@ -8,7 +8,7 @@ import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
 import javafx.scene.layout.Region;
-import org.inkgate.client.sitting.ui.Parts;
+import org.inkgate.client.sitting.ui.parts.Parts;
 
 /**
  * One task of the sitting: the task workspace (prompt, editor, resource panel) with a footer
@@ -21,6 +21,7 @@ public final class TaskScreen {
     private final Button confirm;
     private final Button keepWriting;
     private final Label question = Parts.text("Finish this task? You cannot come back to it.");
+    private final Label where;
 
     /**
      * @param position  e.g. "Task 1 of 2: A note to a neighbour"
@@ -30,7 +31,7 @@ public final class TaskScreen {
     public TaskScreen(String position, Parent workspace, Runnable onFinish) {
         root.setId("taskScreen");
         root.setCenter(workspace);
-        Label where = Parts.quiet(position);
+        where = Parts.quiet(position);
         where.setId("taskPosition");
         HBox.setHgrow(where, Priority.ALWAYS);
         where.setMaxWidth(Double.MAX_VALUE);
@@ -42,7 +43,12 @@ public final class TaskScreen {
         HBox footer = new HBox(16, where, question, keepWriting, confirm, finish);
         footer.setAlignment(Pos.CENTER_LEFT);
         footer.getStyleClass().add("sitting-strip");
-        question.setMinWidth(Region.USE_PREF_SIZE);
+        question.setMinWidth(0);
+        HBox.setHgrow(question, Priority.ALWAYS);
+        question.setMaxWidth(Double.MAX_VALUE);
+        for (Button b : new Button[] {finish, confirm, keepWriting}) {
+            b.setMinWidth(Region.USE_PREF_SIZE);
+        }
         root.setBottom(footer);
         unask();
     }
@@ -76,5 +82,8 @@ public final class TaskScreen {
         keepWriting.setManaged(asking);
         finish.setVisible(!asking);
         finish.setManaged(!asking);
+        // the question says which task; the position line gives it the room
+        where.setVisible(!asking);
+        where.setManaged(!asking);
     }
 }

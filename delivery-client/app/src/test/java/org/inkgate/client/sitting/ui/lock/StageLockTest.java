@@ -19,6 +19,8 @@ import javafx.scene.input.TransferMode;
 import javafx.scene.layout.StackPane;
 import javafx.stage.Stage;
 import javafx.stage.WindowEvent;
+import org.inkgate.client.testutil.StageSize;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.ExtendWith;
@@ -36,14 +38,22 @@ class StageLockTest {
     private final List<String> focusEvents = new ArrayList<>();
     private final AtomicLong clock = new AtomicLong(1_000);
     private final List<KeyEvent> seen = new ArrayList<>();
+    private StageSize before;
 
     @Start
     void start(Stage primary) {
         stage = primary;
+        // an ordinary 400x300 window, whatever an earlier test class left on the shared stage
+        before = StageSize.set(primary, 400, 300);
         field = new TextField();
         field.addEventHandler(KeyEvent.ANY, seen::add);
         stage.setScene(new Scene(new StackPane(field), 400, 300));
         stage.show();
+    }
+
+    @AfterEach
+    void restore(FxRobot robot) {
+        robot.interact(before::restore);
     }
 
     @BeforeEach
@@ -80,6 +90,45 @@ class StageLockTest {
         } finally {
             robot.interact(lock::release);
         }
+    }
+
+    /**
+     * A kiosk session started straight from the display server has no window manager, and full
+     * screen is only a request to one: the window must take the screen's bounds itself (issue 13).
+     * The headless platform resizes a full-screen window itself (as a window manager would), so the
+     * test reads the window's bounds at the moment full screen is asked for: they must already be
+     * the screen's, set by the lock, not left to whatever honours the full-screen request.
+     */
+    @Test
+    void apply_withoutAWindowManager_windowCoversTheWholeScreen(FxRobot robot) {
+        robot.interact(() -> {
+            StageSize.apply(stage, 400, 300);
+            stage.setX(40);
+            stage.setY(30);
+        });
+        javafx.geometry.Rectangle2D screen = javafx.stage.Screen.getPrimary().getBounds();
+        List<String> atFullScreen = new ArrayList<>();
+        javafx.beans.value.ChangeListener<Boolean> watch = (o, was, now) -> {
+            if (now) {
+                atFullScreen.add(stage.getX() + "," + stage.getY() + " " + stage.getWidth() + "x" + stage.getHeight());
+            }
+        };
+        robot.interact(() -> stage.fullScreenProperty().addListener(watch));
+        StageLock lock = lock(robot);
+        try {
+            WaitForAsyncUtils.waitForFxEvents();
+            assertEquals(List.of(screen.getMinX() + "," + screen.getMinY() + " " + screen.getWidth() + "x" + screen.getHeight()),
+                    atFullScreen, "the window's own bounds cover the screen before full screen is requested");
+            assertEquals(screen.getMinX(), stage.getX(), 0.5, "x");
+            assertEquals(screen.getMinY(), stage.getY(), 0.5, "y");
+            assertEquals(screen.getWidth(), stage.getWidth(), 0.5, "width");
+            assertEquals(screen.getHeight(), stage.getHeight(), 0.5, "height");
+            assertEquals(screen.getWidth(), stage.getScene().getWidth(), 0.5, "the scene fills the window");
+        } finally {
+            robot.interact(lock::release);
+            robot.interact(() -> stage.fullScreenProperty().removeListener(watch));
+        }
+        assertEquals(400, stage.getWidth(), 0.5, "release gives the window its size back");
     }
 
     @Test

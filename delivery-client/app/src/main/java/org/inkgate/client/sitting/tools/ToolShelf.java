@@ -1,4 +1,4 @@
-package org.inkgate.client.sitting.ui.tools;
+package org.inkgate.client.sitting.tools;
 
 import java.util.ArrayList;
 import java.util.Collection;

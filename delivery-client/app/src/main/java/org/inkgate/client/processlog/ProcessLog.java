@@ -1,4 +1,4 @@
-package org.inkgate.client.sitting;
+package org.inkgate.client.processlog;
 
 import java.util.Map;
 import org.inkgate.format.response.EventType;

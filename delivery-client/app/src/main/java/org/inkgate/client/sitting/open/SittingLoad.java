@@ -1,4 +1,4 @@
-package org.inkgate.client.sitting.ui.open;
+package org.inkgate.client.sitting.open;
 
 import java.util.Objects;
 import org.inkgate.format.bundle.OpenedBundle;

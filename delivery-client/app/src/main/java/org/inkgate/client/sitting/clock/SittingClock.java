@@ -1,4 +1,4 @@
-package org.inkgate.client.sitting;
+package org.inkgate.client.sitting.clock;
 
 import java.time.Instant;
 

@@ -1,4 +1,4 @@
-package org.inkgate.client.sitting.ui.tools;
+package org.inkgate.client.sitting.tools;
 
 import java.util.LinkedHashSet;
 import java.util.Set;

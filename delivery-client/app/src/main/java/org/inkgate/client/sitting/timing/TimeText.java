@@ -1,4 +1,4 @@
-package org.inkgate.client.sitting.ui;
+package org.inkgate.client.sitting.timing;
 
 /** Time left as the candidate reads it on screen and hears it from a screen reader. */
 public final class TimeText {

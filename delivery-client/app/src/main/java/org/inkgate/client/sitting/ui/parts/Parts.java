@@ -1,11 +1,13 @@
-package org.inkgate.client.sitting.ui;
+package org.inkgate.client.sitting.ui.parts;
 
 import javafx.geometry.Pos;
 import javafx.scene.AccessibleRole;
 import javafx.scene.Node;
+import javafx.scene.Parent;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
 import javafx.scene.control.ScrollPane;
+import javafx.scene.layout.BorderPane;
 import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 
@@ -46,6 +48,8 @@ public final class Parts {
         Label label = wrapped("", "field-error");
         label.setId(id);
         label.setAccessibleRole(AccessibleRole.TEXT);
+        // no empty gap above the buttons until there is something to say
+        label.managedProperty().bind(label.textProperty().isNotEmpty());
         return label;
     }
 
@@ -84,6 +88,49 @@ public final class Parts {
         scroller.setFocusTraversable(false);
         scroller.getStyleClass().add("screen-scroller");
         return scroller;
+    }
+
+    /**
+     * A card like {@link #card} whose actions (the error line, the button that moves on) stay in a
+     * bar under it, always in view: on a short window or in large print the fields scroll, the
+     * way on does not go below the fold.
+     */
+    public static Parent cardWithActions(String id, Node actions, Node... children) {
+        ScrollPane scroller = card(id, children);
+        VBox bar = new VBox(actions);
+        bar.getStyleClass().add("screen-card");
+        bar.getStyleClass().add("screen-actions");
+        bar.setMaxWidth(860);
+        VBox under = new VBox(bar);
+        under.getStyleClass().add("screen-actions-bar");
+        under.setAlignment(Pos.TOP_CENTER);
+        BorderPane page = new BorderPane(scroller);
+        page.setBottom(under);
+        return page;
+    }
+
+    /**
+     * Puts focus on a control of a screen just shown. A control inside a scroll pane joins the scene
+     * only when the pane's skin is made, at the next layout, so the request is made again then;
+     * otherwise the scene gives focus to the first button it finds (the action bar's).
+     */
+    public static void focusWhenShown(Node control) {
+        control.requestFocus();
+        if (control.getScene() != null) {
+            javafx.application.Platform.runLater(control::requestFocus);
+            return;
+        }
+        control.sceneProperty().addListener(new javafx.beans.value.ChangeListener<>() {
+            @Override
+            public void changed(javafx.beans.value.ObservableValue<? extends javafx.scene.Scene> o,
+                    javafx.scene.Scene was, javafx.scene.Scene now) {
+                if (now != null) {
+                    control.sceneProperty().removeListener(this);
+                    control.requestFocus();
+                    javafx.application.Platform.runLater(control::requestFocus);
+                }
+            }
+        });
     }
 
     private static Label wrapped(String text, String styleClass) {
