@@ -15,7 +15,7 @@ import org.inkgate.client.demo.DemoBundleBuild;
 import org.inkgate.client.demo.DemoSittingBuild;
 import org.inkgate.client.practice.PracticeLoad;
 import org.inkgate.client.practice.PracticeLoader;
-import org.inkgate.client.sitting.SittingClock;
+import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.testutil.DemoBundles;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.bundle.StudyDesign;
