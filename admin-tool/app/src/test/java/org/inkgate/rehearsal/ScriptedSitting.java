@@ -165,20 +165,33 @@ final class ScriptedSitting {
         clock.advanceMillis(script.dwellMillis(pause++));
         showFlag(CandidateScript.MISSPELT_1);
         clock.advanceMillis(script.dwellMillis(pause++));
+        boolean inPanel = true;
         if (script.acceptsFirstSuggestion()) {
             seat.select("suggestionList", CandidateScript.CORRECTED_1);
             seat.focus("suggestionList");
             seat.key(KeyCode.ENTER);
+            // a suggestion used from the panel hands the caret back to the answer (issue 13 section 3):
+            // the candidate has left the panel until they go back into it
+            seat.awaitTask(seat.workspaces.size());
+            leftPanel("spelling", since);
+            inPanel = false;
         } else {
             seat.press("ignoreSuggestion");
         }
         seat.waitUntil("the first flag gone", () -> !flagged(CandidateScript.MISSPELT_1));
         if (script.ignoresSecond()) {
             clock.advanceMillis(script.dwellMillis(pause++));
+            if (!inPanel) {
+                since = clock.millis(); // back into the panel, as a click on the flag list would
+                inPanel = true;
+            }
             showFlag(CandidateScript.MISSPELT_2);
             clock.advanceMillis(script.dwellMillis(pause++));
             seat.press("ignoreSuggestion");
             seat.waitUntil("the second flag gone", () -> !flagged(CandidateScript.MISSPELT_2));
+        }
+        if (!inPanel) {
+            since = clock.millis();
         }
         seat.focus("flagList");
         clock.advanceMillis(script.dwellMillis(pause++));
