@@ -6,18 +6,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import org.apache.commons.math3.analysis.UnivariateFunction;
 import org.apache.commons.math3.distribution.NormalDistribution;
-import org.apache.commons.math3.optim.InitialGuess;
-import org.apache.commons.math3.optim.MaxEval;
-import org.apache.commons.math3.optim.PointValuePair;
-import org.apache.commons.math3.optim.SimpleBounds;
-import org.apache.commons.math3.optim.nonlinear.scalar.GoalType;
-import org.apache.commons.math3.optim.nonlinear.scalar.ObjectiveFunction;
-import org.apache.commons.math3.optim.nonlinear.scalar.noderiv.BOBYQAOptimizer;
-import org.apache.commons.math3.optim.univariate.BrentOptimizer;
-import org.apache.commons.math3.optim.univariate.SearchInterval;
-import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 
 /**
  * A linear mixed model of the condition effect on every rating: fixed effects intercept + condition
@@ -155,6 +144,10 @@ public record LinearMixedModel(int ratings, List<String> conditions, List<FixedE
         if (names.isEmpty()) {
             throw new IllegalArgumentException("the mixed model needs a grouping factor with two or more levels");
         }
+        if (Arrays.stream(score).distinct().count() == 1) {
+            throw new IllegalArgumentException("all " + n + " ratings have the same score (" + score[0] + "): there"
+                    + " is no variation for the mixed model to divide among candidates, raters and tasks");
+        }
         if (n <= p) {
             throw new IllegalArgumentException("the mixed model needs more ratings (" + n + ") than fixed effects ("
                     + p + ")");
@@ -170,12 +163,16 @@ public record LinearMixedModel(int ratings, List<String> conditions, List<FixedE
         CrossedCrossProducts x = new CrossedCrossProducts(score, cond, p, codes.toArray(int[][]::new),
                 levels.stream().mapToInt(Integer::intValue).toArray());
         ProfiledReml reml = new ProfiledReml(x);
-        int[] count = {0};
-        double[] theta = minimise(reml, names.size(), count);
+        RemlSearch.Result search = RemlSearch.minimise(reml, names.size());
+        double[] theta = search.theta();
         ProfiledReml.Evaluation e = reml.evaluate(theta, true);
         if (e == null) {
             throw new IllegalArgumentException("the fixed effects cannot be estimated: the conditions are confounded"
                     + " with each other");
+        }
+        if (!Double.isFinite(e.criterion()) || !(e.sigmaSquared() > 0)) {
+            throw new IllegalArgumentException("the random effects reproduce every rating exactly (no residual"
+                    + " variation is left), so the model is not identified; look at the ratings table");
         }
         double z = new NormalDistribution().inverseCumulativeProbability(1 - (1 - confidence) / 2);
         List<FixedEffect> fixed = new ArrayList<>();
@@ -196,36 +193,7 @@ public record LinearMixedModel(int ratings, List<String> conditions, List<FixedE
             }
         }
         vc.add(new VarianceComponent(RESIDUAL, 0, e.sigmaSquared()));
-        return new LinearMixedModel(n, conditions, fixed, vc, e.criterion(), confidence, count[0], cautions);
-    }
-
-    /** BOBYQA over theta >= 0 from theta = 1 (lme4's start), restarted once from its optimum. */
-    private static double[] minimise(ProfiledReml reml, int dims, int[] count) {
-        if (dims == 1) {
-            UnivariateFunction f = t -> {
-                count[0]++;
-                return reml.criterion(new double[] {t});
-            };
-            // BOBYQA needs two or more parameters; one relative SD is searched by Brent's method
-            double best = new BrentOptimizer(1e-12, 1e-12).optimize(new MaxEval(10_000),
-                    new UnivariateObjectiveFunction(f), GoalType.MINIMIZE, new SearchInterval(0, 100, 1))
-                    .getPoint();
-            return new double[] {best};
-        }
-        ObjectiveFunction f = new ObjectiveFunction(t -> {
-            count[0]++;
-            return reml.criterion(t);
-        });
-        double[] lower = new double[dims];
-        double[] upper = new double[dims];
-        Arrays.fill(upper, 1e4);
-        double[] start = new double[dims];
-        Arrays.fill(start, 1);
-        // a first search to lme4's usual precision, then a short restart that polishes the optimum
-        PointValuePair first = new BOBYQAOptimizer(2 * dims + 1, 0.2, 1e-7).optimize(new MaxEval(100_000), f,
-                GoalType.MINIMIZE, new InitialGuess(start), new SimpleBounds(lower, upper));
-        PointValuePair second = new BOBYQAOptimizer(2 * dims + 1, 1e-4, 1e-10).optimize(new MaxEval(100_000), f,
-                GoalType.MINIMIZE, new InitialGuess(first.getPoint()), new SimpleBounds(lower, upper));
-        return second.getValue() <= first.getValue() ? second.getPoint() : first.getPoint();
+        return new LinearMixedModel(n, conditions, fixed, vc, e.criterion(), confidence, search.evaluations(),
+                cautions);
     }
 }
