@@ -41,6 +41,56 @@ class ManPagesTest {
         }
     }
 
+    /**
+     * The troff pages pass groff's own check of the man macros (GNU groff from Debian, {@code groff
+     * -man -ww -z}: every warning enabled, none printed) and, rendered as {@code man} renders them,
+     * name each option of their command and the command's one-line summary.
+     */
+    @Test
+    void write_troffPages_passGroffsChecks_andNameEveryOption() throws Exception {
+        assertEquals(0, ManPages.write(dir.toFile()));
+        List<CommandLine> commands = new ArrayList<>();
+        collect(InkgateAdmin.commandLine(), commands);
+        for (CommandLine c : commands) {
+            String name = c.getCommandSpec().qualifiedName("-");
+            Path page = dir.resolve("man1").resolve(name + ".1");
+            assertTrue(Files.isRegularFile(page), "no troff page for " + name);
+            Run check = groff(page, "-man", "-ww", "-z");
+            assertEquals(0, check.code(), name + ": " + check.err());
+            assertEquals("", check.err(), name + ": groff warnings");
+            // rendered without hyphenation and with runs of justification spaces made one, so names can be found
+            Run shown = groff(page, "-man", "-rHY=0", "-Tutf8", "-P-cbou");
+            String text = shown.out().replace('\u2212', '-').replace('\u2010', '-').replaceAll("\\s+", " ");
+            assertTrue(text.contains(name + " - "), name + ": NAME line\n" + text);
+            for (CommandLine.Model.OptionSpec o : c.getCommandSpec().options()) {
+                if (!o.hidden()) {
+                    assertTrue(text.contains(o.longestName()), name + " page lacks " + o.longestName() + "\n" + text);
+                }
+            }
+        }
+    }
+
+    @Test
+    void troffPage_textThatLooksLikeARequest_isPrintedAsWritten() throws Exception {
+        assertEquals("\\&.so /etc/passwd", TroffPage.escape(".so /etc/passwd"));
+        assertEquals("\\&'br", TroffPage.escape("'br"));
+        assertEquals("a \\e\\- b", TroffPage.escape("a \\- b"));
+    }
+
+    record Run(int code, String out, String err) {
+    }
+
+    private static Run groff(Path page, String... args) throws Exception {
+        List<String> cmd = new ArrayList<>(List.of("groff"));
+        cmd.addAll(List.of(args));
+        cmd.add(page.toString());
+        Process p = new ProcessBuilder(cmd).start();
+        var out = p.getInputStream().readAllBytes();
+        var err = p.getErrorStream().readAllBytes();
+        return new Run(p.waitFor(), new String(out, java.nio.charset.StandardCharsets.UTF_8),
+                new String(err, java.nio.charset.StandardCharsets.UTF_8));
+    }
+
     private static void collect(CommandLine c, List<CommandLine> out) {
         out.add(c);
         c.getSubcommands().values().stream().distinct().forEach(s -> collect(s, out));
