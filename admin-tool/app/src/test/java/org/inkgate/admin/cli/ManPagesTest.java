@@ -84,7 +84,13 @@ class ManPagesTest {
         List<String> cmd = new ArrayList<>(List.of("groff"));
         cmd.addAll(List.of(args));
         cmd.add(page.toString());
-        Process p = new ProcessBuilder(cmd).start();
+        Process p;
+        try {
+            p = new ProcessBuilder(cmd).start();
+        } catch (java.io.IOException e) {
+            throw new AssertionError("this check runs GNU groff, which is not installed here: install it (Debian:"
+                    + " apt-get install groff-base; .ci/run does so) and run the test again", e);
+        }
         var out = p.getInputStream().readAllBytes();
         var err = p.getErrorStream().readAllBytes();
         return new Run(p.waitFor(), new String(out, java.nio.charset.StandardCharsets.UTF_8),
