@@ -23,7 +23,8 @@ import org.junit.jupiter.api.Test;
 /**
  * The guides' command examples run as written (issue 16): every line of a fenced block in
  * {@code docs/*guide*.md} that starts with one of the admin tool's launchers
- * ({@code admin-tool/app/inkgate-admin}, {@code admin-tool/app/simulate-demo-sitting}), with its
+ * ({@code admin-tool/app/inkgate-admin}, {@code admin-tool/app/simulate-demo-sitting},
+ * {@code admin-tool/app/simulate-demo-ratings}), with its
  * {@code \} continuation lines, runs through {@code sh} exactly as the guide prints it, in the
  * guide's order, in an empty folder ({@code target/guide-examples/GUIDE}, kept for reading) that
  * holds only what the guides name from the repository (the demo exam source and roster) and the two
@@ -40,7 +41,8 @@ class GuideExamplesTest {
     static final Path DOCS = Path.of("../../docs");
     static final Map<String, String> LAUNCHERS = Map.of(
             "admin-tool/app/inkgate-admin", "inkgate-admin",
-            "admin-tool/app/simulate-demo-sitting", "simulate-demo-sitting");
+            "admin-tool/app/simulate-demo-sitting", "simulate-demo-sitting",
+            "admin-tool/app/simulate-demo-ratings", "simulate-demo-ratings");
     static final Pattern SKIP = Pattern.compile("<!-- not run by GuideExamplesTest: (.+) -->");
     static final Pattern EXPORT = Pattern.compile("export [A-Z_][A-Z0-9_]*=.*");
 
