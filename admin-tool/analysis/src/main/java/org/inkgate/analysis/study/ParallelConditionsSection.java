@@ -33,7 +33,7 @@ final class ParallelConditionsSection {
 
     /**
      * Largest over smallest group above this: group sizes count as unequal, and the report reads the
-     * heteroscedastic versions whatever the variance test says (common practice, e.g. Field 2013).
+     * heteroscedastic versions whatever the variance test says (a rule of thumb: common practice).
      */
     static final double UNEQUAL_SIZES = 1.5;
     /** Groups smaller than this: the tests of normality and variance have little power (common practice). */

@@ -165,6 +165,7 @@ public class AnalyseDesignsTest {
         // the Rasch section takes the three conditions as describing candidates, not as a crossed facet
         assertTrue(s.get("mfrm.available").asBoolean(), html);
         assertEquals("describes candidates", s.get("mfrm.condition_treatment").asText());
+        assertTrue(s.get("mfrm.condition_groups.welch_anova_p").asDouble() < 0.05, "the groups differ in measure too");
     }
 
     @Test
