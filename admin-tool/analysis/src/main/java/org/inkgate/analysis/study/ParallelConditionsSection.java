@@ -117,7 +117,7 @@ final class ParallelConditionsSection {
             for (int g = 0; g < k; g++) {
                 ShapiroWilk.Result r = ShapiroWilk.test(groups.values().get(g));
                 if (!Double.isNaN(r.p()) && r.rejects(options.alpha())) {
-                    notNormal.add(conditions.get(g) + " (SW p " + PValueText.of(r.p()) + ")");
+                    notNormal.add("'" + conditions.get(g) + "' (SW p " + PValueText.of(r.p()) + ")");
                 }
             }
             String read = (heteroscedastic ? "Welch / Games-Howell" : "ANOVA / Tukey")
@@ -136,7 +136,7 @@ final class ParallelConditionsSection {
             row.addAll(Arrays.asList(a.f(), a.dfBetween(), a.dfWithin(), a.p(), null, a.etaSquared(),
                     a.omegaSquared(), w.f(), w.df1(), w.df2(), w.p(), null, levene.f(), levene.p(), bf.f(), bf.p(),
                     kw.h(), kw.df(), kw.p(), null, kw.epsilonSquared(),
-                    notNormal.isEmpty() ? "no departure found" : "not normal: " + String.join(", ", notNormal), read));
+                    notNormal.isEmpty() ? "no departure found" : "not normal in " + String.join(", ", notNormal), read));
             rows.add(row.toArray());
             s.put(key + "f", a.f()).put(key + "df1", a.dfBetween()).put(key + "df2", a.dfWithin()).put(key + "p", a.p())
                     .put(key + "eta_squared", a.etaSquared()).put(key + "omega_squared", a.omegaSquared())
