@@ -9,6 +9,8 @@ import java.util.TreeMap;
 import org.inkgate.analysis.comparison.IndependentComparison;
 import org.inkgate.analysis.data.Rating;
 import org.inkgate.analysis.data.StudyDesign;
+import org.inkgate.analysis.groups.Groups;
+import org.inkgate.analysis.groups.WelchAnova;
 import org.inkgate.analysis.report.Column;
 import org.inkgate.analysis.report.Section;
 import org.inkgate.analysis.report.Table;
@@ -111,7 +113,7 @@ public final class ConditionFacet {
         }
         Table.Builder t = Table.builder("mfrm_condition_groups", "Candidates' measures by condition group")
                 .method("candidate measures (logits) summarised per condition; with two groups Welch's t-test on"
-                        + " the measures", "Welch 1947")
+                        + " the measures, with three or more Welch's ANOVA", "Welch 1947; Welch 1951")
                 .columns(Column.of("condition"), Column.of("candidates"), Column.of("mean measure"),
                         Column.of("SD"));
         for (Map.Entry<String, List<Double>> e : byCondition.entrySet()) {
@@ -132,6 +134,11 @@ public final class ConditionFacet {
                             + " p = %.4f", c.difference(), c.welchLower(), c.welchUpper(), c.welchT(), c.welchDf(),
                             c.welchP()) + ".");
             s.put("condition_groups.welch_p", c.welchP()).put("condition_groups.difference", c.difference());
+        } else if (groups.size() > 2 && groups.stream().allMatch(g -> g.length > 1)) {
+            WelchAnova w = WelchAnova.of(new Groups(List.copyOf(byCondition.keySet()), groups));
+            t.note("Welch's ANOVA across the " + groups.size() + " groups: " + String.format(java.util.Locale.ROOT,
+                    "F = %.3f, df = %.0f and %.1f, p = %.4f", w.f(), w.df1(), w.df2(), w.p()) + ".");
+            s.put("condition_groups.welch_anova_f", w.f()).put("condition_groups.welch_anova_p", w.p());
         }
         t.note("The measures carry their own estimation error, so this comparison is somewhat conservative. Extreme"
                 + " candidates' measures are estimated outside the joint model (see their status).");

@@ -17,7 +17,8 @@ import org.inkgate.analysis.scores.ScoreTable;
 /**
  * The condition comparison, chosen by the design: here the paired comparison of two within-candidate
  * conditions, overall and per criterion, with Holm across criteria; the other designs in
- * {@link RepeatedMeasuresSection} and {@link IndependentGroupsSection}; every within-candidate design also
+ * {@link RepeatedMeasuresSection}, {@link IndependentGroupsSection} (two groups) and
+ * {@link ParallelConditionsSection} (three or more groups); every within-candidate design also
  * gets the linear mixed model on every rating ({@link LinearMixedModelSection}).
  */
 final class ConditionSection {
@@ -39,7 +40,7 @@ final class ConditionSection {
 
     /**
      * The condition comparison the design calls for: paired (two within-candidate conditions),
-     * repeated measures (three or more), independent groups (parallel groups), or, when the data fit
+     * repeated measures (three or more), independent groups (parallel groups, two or more), or, when the data fit
      * no design or contradict the declared one, the reason and the candidates concerned.
      */
     static Section build(StudyData data, ScoreTable scores, StudyOptions options, ComparisonDirection direction,
@@ -49,7 +50,8 @@ final class ConditionSection {
         String title = switch (kind) {
             case WITHIN -> conditions.size() == 2 ? "Scores with and without resources (paired)"
                     : "Scores under " + conditions.size() + " conditions (within candidates)";
-            case PARALLEL -> "Scores of the condition groups (parallel groups)";
+            case PARALLEL -> conditions.size() == 2 ? "Scores of the condition groups (parallel groups)"
+                    : "Scores of " + conditions.size() + " condition groups (parallel groups)";
             default -> "Condition comparison: not made";
         };
         Section.Builder s = Section.builder("comparison", title);
@@ -65,14 +67,12 @@ final class ConditionSection {
             s.put("available", false);
             return s.build();
         }
+        s.put("available", true).put("baseline", conditions.get(0));
         if (kind == StudyDesign.Kind.PARALLEL && conditions.size() > 2) {
-            s.paragraph("A parallel-groups design with " + conditions.size() + " conditions: the two-group"
-                    + " comparison does not apply, and the comparison of three or more independent groups is not"
-                    + " part of this report yet. Nothing is compared.");
-            s.put("available", false);
+            s.paragraph(direction.reason());
+            ParallelConditionsSection.build(s, scores, options, conditions);
             return s.build();
         }
-        s.put("available", true).put("baseline", conditions.get(0));
         if (kind == StudyDesign.Kind.PARALLEL) {
             s.put("other", conditions.get(1));
             s.paragraph(direction.reason());

@@ -178,7 +178,8 @@ final class GroupComparisons {
         return s / v.length;
     }
 
-    private static double halfWidth(double[] v) {
+    /** Half-width of the t-based 95% CI of the mean (0 below 2 values). */
+    static double halfWidth(double[] v) {
         if (v.length < 2) {
             return 0;
         }

@@ -48,6 +48,23 @@ class DesignSimulationTest {
         return out;
     }
 
+    /** 48 candidates, 16 under each of none / spelling / full (one condition each); 'full' adds {@code effect}. */
+    static List<Rating> parallelThree(long seed, double effect) {
+        Random rnd = new Random(seed);
+        List<Rating> out = new ArrayList<>();
+        String[] conditions = {"none", "spelling", "full"};
+        for (int i = 0; i < 48; i++) {
+            String level = i % 6 < 3 ? "B1" : "B2";
+            String condition = conditions[i % 3];
+            double ability = rnd.nextGaussian() * 0.8 + (level.equals("B2") ? 0.6 : -0.6)
+                    + (condition.equals("full") ? effect : 0);
+            for (String task : new String[] {"letter", "essay"}) {
+                rate(out, rnd, "Q" + i, level, task, condition, ability);
+            }
+        }
+        return out;
+    }
+
     static List<Rating> threeConditions(long seed, double effect) {
         Random rnd = new Random(seed);
         List<Rating> out = new ArrayList<>();
@@ -85,6 +102,27 @@ class DesignSimulationTest {
             assertTrue(p(planted, "overall.difference") > 0, "direction tools minus none");
             Map<String, Object> none = comparison(parallel(2000 + rep, 0));
             if (p(none, "overall.welch_p") < 0.05 || p(none, "adjusted.p") < 0.05) {
+                nullHits++;
+            }
+        }
+        assertTrue(nullHits <= 1, "null effect flagged in " + nullHits + " of " + REPLICATIONS);
+    }
+
+    @Test
+    void threeParallelGroups_plantedEffectFound_nullNot() {
+        int nullHits = 0;
+        for (int rep = 0; rep < REPLICATIONS; rep++) {
+            Map<String, Object> planted = comparison(parallelThree(5000 + rep, 1.5));
+            assertEquals("parallel", planted.get("comparison.design"));
+            assertEquals(3, ((Number) planted.get("comparison.conditions")).intValue());
+            assertTrue(p(planted, "overall.p") < 0.05, "ANOVA, replication " + rep + ": " + planted);
+            assertTrue(p(planted, "overall.welch_p") < 0.05, "Welch, replication " + rep);
+            assertTrue(p(planted, "overall.kruskal_wallis_p") < 0.05, "Kruskal-Wallis, replication " + rep);
+            assertTrue(p(planted, "overall.pairwise.full_minus_none.tukey_p") < 0.05, "Tukey, replication " + rep);
+            assertTrue(p(planted, "overall.pairwise.full_minus_none.games_howell_p") < 0.05, "Games-Howell " + rep);
+            assertTrue(p(planted, "overall.pairwise.full_minus_none.difference") > 0, "direction full minus none");
+            Map<String, Object> none = comparison(parallelThree(6000 + rep, 0));
+            if (p(none, "overall.p") < 0.05 || p(none, "overall.welch_p") < 0.05) {
                 nullHits++;
             }
         }

@@ -65,6 +65,23 @@ public class AnalyseDesignsTest {
         return b.toString();
     }
 
+    /** 45 candidates, 15 under each of none / spelling / full (one condition each); 'full' adds ~1.5 points. */
+    static String parallelThreeRatings(long seed) {
+        Random rnd = new Random(seed);
+        StringBuilder b = new StringBuilder(HEADER);
+        String[] conditions = {"none", "spelling", "full"};
+        for (int i = 0; i < 45; i++) {
+            String level = i % 6 < 3 ? "B1" : "B2";
+            String condition = conditions[i % 3];
+            double ability = rnd.nextGaussian() * 0.8 + (level.equals("B2") ? 0.8 : -0.4)
+                    + (condition.equals("full") ? 1.5 : 0);
+            for (String task : new String[] {"letter", "essay"}) {
+                rate(b, rnd, "T" + i, level, task, condition, ability);
+            }
+        }
+        return b.toString();
+    }
+
     /** 30 candidates, every one under three conditions (one task each, rotated); 'full' adds ~1 point. */
     static String threeConditionRatings(long seed) {
         Random rnd = new Random(seed);
@@ -114,6 +131,41 @@ public class AnalyseDesignsTest {
         assertEquals("describes candidates", s.get("mfrm.condition_treatment").asText());
         assertTrue(s.get("mfrm.condition_groups.welch_p").asDouble() < 0.05, "the groups differ in measure too");
         assertTrue(Files.exists(outDir.resolve("tables/mfrm_condition_groups.csv")));
+    }
+
+    @Test
+    void analyse_threeParallelGroups_anovaWelchKruskalWallisAndPairwise(@TempDir Path dir) throws Exception {
+        Path ratings = Files.writeString(dir.resolve("ratings.csv"), parallelThreeRatings(20261205));
+        Path outDir = dir.resolve("report");
+        assertEquals(0, run("--ratings", ratings.toString(), "--out", outDir.toString(), "--baseline", "none",
+                "--mfrm-facets", "task,condition,rater,criterion"), err.toString());
+        JsonNode s = summary(outDir);
+        assertEquals("parallel", s.get("comparison.design").asText());
+        assertTrue(s.get("comparison.available").asBoolean(), s.toString());
+        assertEquals(3, s.get("comparison.conditions").asInt());
+        assertEquals(15, s.get("comparison.overall.n.spelling").asInt());
+        assertTrue(s.get("comparison.overall.p").asDouble() < 0.05, "planted effect found: " + s);
+        for (String key : new String[] {"eta_squared", "omega_squared", "welch_p", "levene_p", "brown_forsythe_p",
+                "kruskal_wallis_p", "kruskal_wallis_epsilon_squared", "read"}) {
+            assertTrue(s.has("comparison.overall." + key), key);
+        }
+        assertTrue(s.has("comparison.content.p_holm"), "Holm across criteria");
+        assertTrue(s.get("comparison.overall.pairwise.full_minus_none.tukey_p").asDouble() < 0.05, s.toString());
+        assertTrue(s.has("comparison.overall.pairwise.spelling_minus_full.games_howell_p"));
+        for (String table : new String[] {"comparison_groups", "comparison_groups_pairwise"}) {
+            assertTrue(Files.exists(outDir.resolve("tables/" + table + ".csv")), table);
+        }
+        assertFalse(Files.exists(outDir.resolve("tables/comparison_independent.csv")));
+        String header = Files.readAllLines(outDir.resolve("tables/comparison_groups.csv")).get(0);
+        assertTrue(header.contains("mean_condition_1") && header.contains("kruskal_wallis_p_holm"), header);
+        String html = Files.readString(outDir.resolve("report.html"));
+        assertTrue(html.contains("Scores of 3 condition groups"), "the section says what it compares");
+        assertTrue(html.contains("regulations decide"), "small or unequal groups defer to the test owner's regulations");
+        assertFalse(html.contains("not part of this report yet"));
+        // the Rasch section takes the three conditions as describing candidates, not as a crossed facet
+        assertTrue(s.get("mfrm.available").asBoolean(), html);
+        assertEquals("describes candidates", s.get("mfrm.condition_treatment").asText());
+        assertTrue(s.get("mfrm.condition_groups.welch_anova_p").asDouble() < 0.05, "the groups differ in measure too");
     }
 
     @Test
