@@ -14,7 +14,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CancellationException;
+import org.inkgate.admin.core.export.Cancellation;
 import org.inkgate.admin.core.export.QuestionnaireCsv;
+import org.inkgate.admin.core.export.StagedFolder;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.StoreException;
@@ -49,8 +51,9 @@ import org.inkgate.format.io.Utf8Text;
  * make it, so the two give the same report from the same inputs: read the inputs (files or a
  * results store), build the study sections and the many-facet Rasch section, and write
  * report.html, tables/*.csv, summary.json and the anchor file. The report is written into a
- * hidden folder beside the output folder and moved in only when complete, so a cancelled or
- * failed run leaves no half-written report.
+ * hidden folder beside the output folder and moved in only when complete (admin core's
+ * {@link StagedFolder}, which the export uses too), so a cancelled or failed run leaves no
+ * half-written report.
  */
 public final class AnalysisRun {
 
@@ -216,7 +219,9 @@ public final class AnalysisRun {
         Report finished = report;
         MfrmResult anchorsOut = mfrmResult;
         try {
-            PartialFolder.write(q.out(), folder -> {
+            Cancellation cancellation = new Cancellation();
+            try (StagedFolder staged = StagedFolder.open(q.out(), cancellation)) {
+                Path folder = staged.folder();
                 ReportWriter.write(finished, folder);
                 OwnerOnly.restrict(folder.resolve("report.html"));
                 OwnerOnly.restrict(folder.resolve("summary.json"));
@@ -229,7 +234,15 @@ public final class AnalysisRun {
                     OwnerOnly.restrict(folder.resolve(AnchorFile.FILE_NAME));
                 }
                 step(4, "Moving the finished report into place");
-            }, listener::cancelled);
+                staged.publish(new StagedFolder.Moments() {
+                    @Override
+                    public void beforePublish() {
+                        if (listener.cancelled()) {
+                            cancellation.cancel();
+                        }
+                    }
+                });
+            }
         } catch (IOException e) {
             throw new Refused(true, "could not write the report to " + q.out() + ": " + e.getMessage());
         }

@@ -64,7 +64,9 @@ class CtrlCTest {
         java.nio.file.attribute.FileTime started = java.nio.file.attribute.FileTime.from(java.time.Instant.now());
         Thread.sleep(20); // file times on some file systems are coarse
         Process export = start("export", "--store", store.toString(), "--out", out.toString());
-        waitFor(() -> writtenSince(out, started), export);
+        // the export writes beside the folder (StagedFolder's hidden .export.partial) until its commit point
+        Path staging = out.resolveSibling("." + out.getFileName() + ".partial");
+        waitFor(() -> writtenSince(staging, started), export);
         interrupt(export);
         Map<String, String> after = contents(out);
         List<String> changed = new ArrayList<>(before.keySet());
@@ -75,6 +77,7 @@ class CtrlCTest {
             assertEquals(List.of(), s.filter(f -> f.getFileName().toString().startsWith(".")).toList(),
                     "working folders left in " + out);
         }
+        assertFalse(Files.exists(staging), "the export's hidden folder left beside " + out);
     }
 
     private Process start(String... args) throws Exception {
@@ -99,7 +102,7 @@ class CtrlCTest {
                 if (check.ok()) {
                     return;
                 }
-            } catch (java.io.IOException | java.sql.SQLException notYet) {
+            } catch (java.io.IOException | java.io.UncheckedIOException | java.sql.SQLException notYet) {
                 // the file or store is not there yet
             }
             Thread.sleep(2);
@@ -123,8 +126,11 @@ class CtrlCTest {
         }
     }
 
-    /** True once the running export has written a file anywhere under {@code out} (hidden folders too). */
+    /** True once the running export has written a file anywhere under {@code out}. */
     private static boolean writtenSince(Path out, java.nio.file.attribute.FileTime started) throws Exception {
+        if (!Files.exists(out)) {
+            return false;
+        }
         try (Stream<Path> s = Files.walk(out)) {
             return s.anyMatch(f -> {
                 try {

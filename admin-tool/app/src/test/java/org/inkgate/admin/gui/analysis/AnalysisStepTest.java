@@ -225,7 +225,7 @@ class AnalysisStepTest {
         }));
         assertFalse(Files.exists(out), "no report folder");
         try (Stream<Path> left = Files.list(dir)) {
-            assertEquals(List.of(), left.filter(p -> p.getFileName().toString().contains(".partial-")).toList(),
+            assertEquals(List.of(), left.filter(p -> p.getFileName().toString().contains(".partial")).toList(),
                     "no half-written folder left behind");
         }
     }
