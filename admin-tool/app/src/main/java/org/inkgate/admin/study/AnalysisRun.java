@@ -83,8 +83,11 @@ public final class AnalysisRun {
         }
     }
 
-    /** Hears how far the run is, and may ask it to stop; called on the running thread. */
-    public interface Listener {
+    /**
+     * Hears how far the run is, and may ask it to stop; called on the running thread. It also hears
+     * the moments around the report's commit point ({@link StagedFolder.Moments}).
+     */
+    public interface Listener extends StagedFolder.Moments {
         void stage(int done, int total, String what);
 
         /** A warning for the test owner (the report is still written). */
@@ -92,6 +95,15 @@ public final class AnalysisRun {
 
         default boolean cancelled() {
             return false;
+        }
+
+        /**
+         * The run's cancel-or-publish decision: a caller that cancels from another thread (the
+         * window's Cancel) hands in its own and cancels through it, so that a cancel once the report
+         * is moving into place is refused rather than claimed.
+         */
+        default Cancellation cancellation() {
+            return new Cancellation();
         }
     }
 
@@ -131,11 +143,13 @@ public final class AnalysisRun {
 
     private final Request q;
     private final Listener listener;
+    private final Cancellation cancellation;
     private String examAnalysed;
 
     private AnalysisRun(Request q, Listener listener) {
         this.q = q;
         this.listener = listener;
+        this.cancellation = listener.cancellation();
     }
 
     /** Runs the analysis; throws {@link CancellationException} when the listener asked it to stop. */
@@ -219,7 +233,6 @@ public final class AnalysisRun {
         Report finished = report;
         MfrmResult anchorsOut = mfrmResult;
         try {
-            Cancellation cancellation = new Cancellation();
             try (StagedFolder staged = StagedFolder.open(q.out(), cancellation)) {
                 Path folder = staged.folder();
                 ReportWriter.write(finished, folder);
@@ -237,9 +250,15 @@ public final class AnalysisRun {
                 staged.publish(new StagedFolder.Moments() {
                     @Override
                     public void beforePublish() {
+                        listener.beforePublish();
                         if (listener.cancelled()) {
                             cancellation.cancel();
                         }
+                    }
+
+                    @Override
+                    public void publishing() {
+                        listener.publishing();
                     }
                 });
             }
@@ -268,7 +287,7 @@ public final class AnalysisRun {
     }
 
     private void step(int done, String what) {
-        if (listener.cancelled()) {
+        if (listener.cancelled() || cancellation.cancelled()) {
             throw new CancellationException("cancelled before: " + what);
         }
         listener.stage(done, STAGES, what);

@@ -110,6 +110,11 @@ class ExportCancelStepTest {
                     progressBeforeTheMove.add(robot.lookup("#exportProgress").queryAs(ProgressBar.class).getProgress());
                     toldWhilePublishing.add(robot.lookup("#exportStep").queryAs(Label.class).getText());
                 });
+                try {
+                    StepDriver.shoot1024(robot, stage, "admin-exports-progress.png"); // the guide's picture of a running export
+                } catch (Exception e) {
+                    throw new AssertionError("could not take the picture of the running export", e);
+                }
             }
 
             @Override
