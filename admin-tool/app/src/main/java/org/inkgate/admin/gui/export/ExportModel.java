@@ -168,7 +168,7 @@ public final class ExportModel {
         return new StoreExport.Progress() {
             @Override
             public void step(long done, long total, String what) {
-                work.update(done, total, "Exporting " + what);
+                work.update(done, total, "Export: " + what);
                 Platform.runLater(() -> {
                     progress.set(total <= 0 ? 0 : (double) done / total);
                     step.set(what);
