@@ -64,9 +64,8 @@ class CtrlCTest {
         java.nio.file.attribute.FileTime started = java.nio.file.attribute.FileTime.from(java.time.Instant.now());
         Thread.sleep(20); // file times on some file systems are coarse
         Process export = start("export", "--store", store.toString(), "--out", out.toString());
-        // the export writes beside the folder (StagedFolder's hidden .export.partial) until its commit point
-        Path staging = out.resolveSibling("." + out.getFileName() + ".partial");
-        waitFor(() -> writtenSince(staging, started), export);
+        // the export writes into StagedFolder's hidden .export.partial (inside the existing folder) until its commit point
+        waitFor(() -> writtenSince(out, started), export);
         interrupt(export);
         Map<String, String> after = contents(out);
         List<String> changed = new ArrayList<>(before.keySet());
@@ -77,7 +76,10 @@ class CtrlCTest {
             assertEquals(List.of(), s.filter(f -> f.getFileName().toString().startsWith(".")).toList(),
                     "working folders left in " + out);
         }
-        assertFalse(Files.exists(staging), "the export's hidden folder left beside " + out);
+        try (Stream<Path> s = Files.list(dir)) {
+            assertEquals(List.of(), s.filter(f -> f.getFileName().toString().endsWith(".partial")).toList(),
+                    "working folders left beside " + out);
+        }
     }
 
     private Process start(String... args) throws Exception {
@@ -126,7 +128,7 @@ class CtrlCTest {
         }
     }
 
-    /** True once the running export has written a file anywhere under {@code out}. */
+    /** True once the running export has written a file anywhere under {@code out} (hidden folders too). */
     private static boolean writtenSince(Path out, java.nio.file.attribute.FileTime started) throws Exception {
         if (!Files.exists(out)) {
             return false;

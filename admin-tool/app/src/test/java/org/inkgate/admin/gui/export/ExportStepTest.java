@@ -110,6 +110,10 @@ class ExportStepTest {
             assertEquals(List.of(), s.filter(p -> p.getFileName().toString().startsWith(".")).toList(),
                     "hidden working folder left beside the export");
         }
+        try (Stream<Path> s = Files.list(out)) {
+            assertEquals(List.of(), s.filter(p -> p.getFileName().toString().startsWith(".")).toList(),
+                    "hidden working folder left in the export folder");
+        }
     }
 
     @Test

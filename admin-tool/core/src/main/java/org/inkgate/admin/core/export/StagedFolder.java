@@ -20,14 +20,16 @@ import org.inkgate.format.io.OwnerOnly;
 /**
  * The one way exports and reports reach their folder (the {@code export} and {@code analyse}
  * commands and the admin window's export and analysis steps): every file is written into a hidden
- * sibling {@code .NAME.partial} first, and only {@link #publish} moves it into place, after
+ * folder {@code .NAME.partial} first, and only {@link #publish} moves it into place, after
  * {@link Cancellation} has decided between cancel and publish. So a cancelled, failed or
  * interrupted run leaves the folder as it was and no hidden folder behind.
  *
- * <p>Publishing replaces each top-level entry of the staged folder whole (an exam's export folder, a
- * report file, a report's tables folder) by renames in the same parent, so an earlier export's stale
- * files never mix with the new ones, and keeps the folder's other entries. When the folder does not
- * exist yet, the staged folder is renamed into place in one step. Ctrl+C (a shutdown hook) cancels a
+ * <p>When the folder exists, the hidden folder is made inside it, so that every move stays on the
+ * folder's own disk (a USB stick mounted as the export folder, say) and is a rename; publishing then
+ * replaces each top-level entry of the staged folder whole (an exam's export folder, a report file,
+ * a report's tables folder), so an earlier export's stale files never mix with the new ones, and
+ * keeps the folder's other entries. When the folder does not exist yet, the hidden folder is made
+ * beside it and renamed into place in one step. Ctrl+C (a shutdown hook) cancels a
  * run that has not begun publishing and removes its hidden folder; one that has begun is given time
  * to finish its renames. One run at a time per folder: a hidden folder found at the start is taken
  * as left by a killed run and removed.
@@ -57,7 +59,8 @@ public final class StagedFolder implements AutoCloseable {
 
     private StagedFolder(Path target, Cancellation cancellation) {
         this.target = target;
-        this.staging = target.resolveSibling("." + target.getFileName() + ".partial");
+        String hidden = "." + target.getFileName() + ".partial";
+        this.staging = Files.isDirectory(target) ? target.resolve(hidden) : target.resolveSibling(hidden);
         this.cancellation = cancellation;
         this.onCtrlC = new Thread(this::interrupted, "inkgate-staged-folder-cleanup");
     }
@@ -67,6 +70,9 @@ public final class StagedFolder implements AutoCloseable {
         Path absolute = target.toAbsolutePath().normalize();
         if (absolute.getParent() == null) {
             throw new IOException("cannot write into " + absolute + ": choose a folder inside it");
+        }
+        if (Files.exists(absolute) && !Files.isDirectory(absolute)) {
+            throw new IOException("cannot write into " + absolute + ": it is a file, not a folder; choose a folder");
         }
         StagedFolder s = new StagedFolder(absolute, cancellation);
         OwnerOnly.folder(absolute.getParent());
@@ -100,7 +106,7 @@ public final class StagedFolder implements AutoCloseable {
             if (!Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
                 move(staging, target);
             } else {
-                for (Path entry : entries(staging)) {
+                for (Path entry : entries(staging)) { // the staging folder is inside the target: same disk
                     replace(entry, target.resolve(entry.getFileName().toString()));
                 }
                 delete(staging); // empty now
