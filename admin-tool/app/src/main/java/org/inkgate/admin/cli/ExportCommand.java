@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.inkgate.admin.core.export.Cancellation;
 import org.inkgate.admin.core.export.StoreExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.store.ResultsStore;
@@ -52,20 +53,15 @@ final class ExportCommand implements Callable<Integer> {
         XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
         try (ResultsStore store = Stores.openResultsForReading(StoreLocation.file(ExistingStore.require(location.file())))) {
             List<String> exams = StoreExport.exams(store, examId);
-            int parts = StoreExport.PARTS.size();
+            List<StoreExport.Written> written;
+            // Ctrl+C cancels through the export's own shutdown hook (StagedFolder): nothing is moved into --out
             try (ProgressReporter progress = ProgressReporter.onStandardError(spec.commandLine().getErr(), "export",
-                    "parts", (long) exams.size() * parts)) {
-                for (int e = 0; e < exams.size(); e++) {
-                    String id = exams.get(e);
-                    int done = e * parts;
-                    List<String> lines = StoreExport.write(location.file(), store, id, out, xapiOptions, spreadsheetSafe,
-                            part -> progress.stepTo(done + part, TerminalText.value(id) + ": " + StoreExport.PARTS.get(part)))
-                            .lines();
-                    progress.stepTo(done + parts, "");
-                    progress.clear();
-                    lines.forEach(line -> w.println(TerminalText.value(line)));
-                    w.flush();
-                }
+                    "steps", StoreExport.steps(exams.size()))) {
+                written = StoreExport.write(location.file(), store, exams, out, xapiOptions, spreadsheetSafe,
+                        (done, total, what) -> progress.stepTo(done, TerminalText.value(what)), new Cancellation());
+            }
+            for (StoreExport.Written exam : written) {
+                exam.lines().forEach(line -> w.println(TerminalText.value(line)));
             }
         }
         w.println(StoreExport.HANDLING);

@@ -64,8 +64,11 @@ public final class Work {
     }
 
     /**
-     * As {@link #run(String, Job, Consumer, Consumer)}, for a job that stops when cancelled
-     * ({@link #cancel}); {@code cancelled} is called on the JavaFX thread at once.
+     * As {@link #run(String, Job, Consumer, Consumer)}, for a job that stops when cancelled:
+     * {@code cancelled} is called on the JavaFX thread at once when {@link #cancel} stops it, or
+     * when the job itself ends by throwing {@link java.util.concurrent.CancellationException} (a job
+     * with its own cancel decision, such as the export, whose Cancel must not win once its files
+     * are being moved into place).
      */
     public <T> void run(String what, Job<T> job, Consumer<T> done, Consumer<String> failed, Runnable cancelled) {
         Task<T> task = new Task<>() {
@@ -98,6 +101,13 @@ public final class Work {
             done.accept(task.getValue());
         });
         task.setOnFailed(e -> {
+            if (task.getException() instanceof java.util.concurrent.CancellationException) {
+                // a job cancelled through its own token (export: core's Cancellation) stops by throwing,
+                // after it has removed what it wrote aside: only now is it reported as cancelled
+                finish(what + ": cancelled.");
+                cancelled.run();
+                return;
+            }
             String text = Messages.of(task.getException());
             finish(what + ": failed. " + firstLine(text));
             failed.accept(text);

@@ -14,7 +14,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.CancellationException;
+import org.inkgate.admin.core.export.Cancellation;
 import org.inkgate.admin.core.export.QuestionnaireCsv;
+import org.inkgate.admin.core.export.StagedFolder;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.StoreException;
@@ -49,8 +51,9 @@ import org.inkgate.format.io.Utf8Text;
  * make it, so the two give the same report from the same inputs: read the inputs (files or a
  * results store), build the study sections and the many-facet Rasch section, and write
  * report.html, tables/*.csv, summary.json and the anchor file. The report is written into a
- * hidden folder beside the output folder and moved in only when complete, so a cancelled or
- * failed run leaves no half-written report.
+ * hidden folder beside the output folder and moved in only when complete (admin core's
+ * {@link StagedFolder}, which the export uses too), so a cancelled or failed run leaves no
+ * half-written report.
  */
 public final class AnalysisRun {
 
@@ -80,8 +83,11 @@ public final class AnalysisRun {
         }
     }
 
-    /** Hears how far the run is, and may ask it to stop; called on the running thread. */
-    public interface Listener {
+    /**
+     * Hears how far the run is, and may ask it to stop; called on the running thread. It also hears
+     * the moments around the report's commit point ({@link StagedFolder.Moments}).
+     */
+    public interface Listener extends StagedFolder.Moments {
         void stage(int done, int total, String what);
 
         /** A warning for the test owner (the report is still written). */
@@ -89,6 +95,15 @@ public final class AnalysisRun {
 
         default boolean cancelled() {
             return false;
+        }
+
+        /**
+         * The run's cancel-or-publish decision: a caller that cancels from another thread (the
+         * window's Cancel) hands in its own and cancels through it, so that a cancel once the report
+         * is moving into place is refused rather than claimed.
+         */
+        default Cancellation cancellation() {
+            return new Cancellation();
         }
     }
 
@@ -128,11 +143,13 @@ public final class AnalysisRun {
 
     private final Request q;
     private final Listener listener;
+    private final Cancellation cancellation;
     private String examAnalysed;
 
     private AnalysisRun(Request q, Listener listener) {
         this.q = q;
         this.listener = listener;
+        this.cancellation = listener.cancellation();
     }
 
     /** Runs the analysis; throws {@link CancellationException} when the listener asked it to stop. */
@@ -216,7 +233,8 @@ public final class AnalysisRun {
         Report finished = report;
         MfrmResult anchorsOut = mfrmResult;
         try {
-            PartialFolder.write(q.out(), folder -> {
+            try (StagedFolder staged = StagedFolder.open(q.out(), cancellation)) {
+                Path folder = staged.folder();
                 ReportWriter.write(finished, folder);
                 OwnerOnly.restrict(folder.resolve("report.html"));
                 OwnerOnly.restrict(folder.resolve("summary.json"));
@@ -229,7 +247,21 @@ public final class AnalysisRun {
                     OwnerOnly.restrict(folder.resolve(AnchorFile.FILE_NAME));
                 }
                 step(4, "Moving the finished report into place");
-            }, listener::cancelled);
+                staged.publish(new StagedFolder.Moments() {
+                    @Override
+                    public void beforePublish() {
+                        listener.beforePublish();
+                        if (listener.cancelled()) {
+                            cancellation.cancel();
+                        }
+                    }
+
+                    @Override
+                    public void publishing() {
+                        listener.publishing();
+                    }
+                });
+            }
         } catch (IOException e) {
             throw new Refused(true, "could not write the report to " + q.out() + ": " + e.getMessage());
         }
@@ -255,7 +287,7 @@ public final class AnalysisRun {
     }
 
     private void step(int done, String what) {
-        if (listener.cancelled()) {
+        if (listener.cancelled() || cancellation.cancelled()) {
             throw new CancellationException("cancelled before: " + what);
         }
         listener.stage(done, STAGES, what);

@@ -73,7 +73,9 @@ class LongOperationProgressTest {
         Run shownExport = run(true, "export", "--store", dir.resolve("quiet.db").toString(), "--out",
                 dir.resolve("export-shown").toString());
         assertEquals(0, shownExport.code(), shownExport.out() + shownExport.err());
-        assertTrue(shownExport.err().contains("\rexport: 3/3 parts (100 %)"), shownExport.err());
+        // one exam: its three parts, then the move into place (StoreExport.steps)
+        assertTrue(shownExport.err().contains("\rexport: 4/4 steps (100 %)"), shownExport.err());
+        assertTrue(shownExport.err().contains("moving the files into"), "the commit point is shown: " + shownExport.err());
         assertTrue(shownExport.err().contains("QTI results"), "the part in hand is named: " + shownExport.err());
         assertNoNewLines(shownExport.err());
     }

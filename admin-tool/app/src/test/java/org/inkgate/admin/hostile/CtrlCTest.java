@@ -64,6 +64,7 @@ class CtrlCTest {
         java.nio.file.attribute.FileTime started = java.nio.file.attribute.FileTime.from(java.time.Instant.now());
         Thread.sleep(20); // file times on some file systems are coarse
         Process export = start("export", "--store", store.toString(), "--out", out.toString());
+        // the export writes into StagedFolder's hidden .export.partial (inside the existing folder) until its commit point
         waitFor(() -> writtenSince(out, started), export);
         interrupt(export);
         Map<String, String> after = contents(out);
@@ -74,6 +75,10 @@ class CtrlCTest {
         try (Stream<Path> s = Files.list(out)) {
             assertEquals(List.of(), s.filter(f -> f.getFileName().toString().startsWith(".")).toList(),
                     "working folders left in " + out);
+        }
+        try (Stream<Path> s = Files.list(dir)) {
+            assertEquals(List.of(), s.filter(f -> f.getFileName().toString().endsWith(".partial")).toList(),
+                    "working folders left beside " + out);
         }
     }
 
@@ -99,7 +104,7 @@ class CtrlCTest {
                 if (check.ok()) {
                     return;
                 }
-            } catch (java.io.IOException | java.sql.SQLException notYet) {
+            } catch (java.io.IOException | java.io.UncheckedIOException | java.sql.SQLException notYet) {
                 // the file or store is not there yet
             }
             Thread.sleep(2);
@@ -125,6 +130,9 @@ class CtrlCTest {
 
     /** True once the running export has written a file anywhere under {@code out} (hidden folders too). */
     private static boolean writtenSince(Path out, java.nio.file.attribute.FileTime started) throws Exception {
+        if (!Files.exists(out)) {
+            return false;
+        }
         try (Stream<Path> s = Files.walk(out)) {
             return s.anyMatch(f -> {
                 try {

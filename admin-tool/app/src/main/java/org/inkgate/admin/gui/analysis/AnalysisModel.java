@@ -11,6 +11,7 @@ import javafx.beans.property.SimpleBooleanProperty;
 import javafx.beans.property.SimpleObjectProperty;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
+import org.inkgate.admin.core.export.Cancellation;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
 import org.inkgate.admin.study.AnalysisRun;
@@ -57,6 +58,18 @@ public final class AnalysisModel {
     private final StringProperty commandLine = new SimpleStringProperty("");
     private final ObjectProperty<Path> report = new SimpleObjectProperty<>();
     private final BooleanProperty running = new SimpleBooleanProperty(false);
+    private volatile Cancellation current;
+    private boolean cancelRefused;
+    /** Told on the worker at the report's commit point; tests press Cancel there. */
+    volatile AnalysisRun.Listener watch = new AnalysisRun.Listener() {
+        @Override
+        public void stage(int done, int total, String what) {
+        }
+
+        @Override
+        public void warn(String text) {
+        }
+    };
 
     public AnalysisModel(AdminSession session) {
         this.session = session;
@@ -201,6 +214,10 @@ public final class AnalysisModel {
                 request.arguments().stream().map(org.inkgate.admin.study.AnalyseProvenance::quoted).toList()));
         result.set("Analysing ...");
         running.set(true);
+        Cancellation cancellation = new Cancellation();
+        current = cancellation;
+        cancelRefused = false;
+        AnalysisRun.Listener watcher = watch;
         List<String> heard = new ArrayList<>();
         session.work().run("Analysing", progress -> AnalysisRun.run(request, new AnalysisRun.Listener() {
             @Override
@@ -216,23 +233,37 @@ public final class AnalysisModel {
             }
 
             @Override
-            public boolean cancelled() {
-                return progress.cancelled();
+            public Cancellation cancellation() {
+                return cancellation;
+            }
+
+            @Override
+            public void beforePublish() {
+                watcher.beforePublish();
+            }
+
+            @Override
+            public void publishing() {
+                watcher.publishing();
             }
         }), written -> {
             running.set(false);
+            current = null;
             report.set(written.html());
-            result.set("Report written to " + written.html() + " (" + written.ratings() + " ratings"
+            result.set((cancelRefused ? "Cancel came too late: the report was already being moved into place. " : "")
+                    + "Report written to " + written.html() + " (" + written.ratings() + " ratings"
                     + (written.exam() == null ? "" : " of exam " + written.exam()) + "). Tables are in "
                     + written.folder().resolve("tables") + ", figures in " + written.folder().resolve("summary.json")
                     + ".");
             showWarnings(heard);
         }, message -> {
             running.set(false);
+            current = null;
             result.set("No report was written.\n" + message);
             showWarnings(heard);
         }, () -> {
             running.set(false);
+            current = null;
             result.set("Cancelled. No report was written; the output folder is as it was.");
         });
     }
@@ -335,10 +366,21 @@ public final class AnalysisModel {
         }
     }
 
-    /** Cancels a running analysis. */
+    /**
+     * Cancels a running analysis through its {@link Cancellation}: before the report moves into
+     * place the cancel wins (the run stops at its next stage and writes nothing); once it is moving
+     * the cancel is refused and the step says the report will be complete.
+     */
     public void cancel() {
-        if (running.get()) {
-            session.work().cancel();
+        Cancellation c = current;
+        if (!running.get() || c == null) {
+            return;
+        }
+        if (c.cancel()) {
+            result.set("Cancelling: the analysis stops at the end of its current stage and writes nothing.");
+        } else {
+            cancelRefused = true;
+            result.set("Too late to cancel: the report is already being moved into place; it will be complete.");
         }
     }
 }

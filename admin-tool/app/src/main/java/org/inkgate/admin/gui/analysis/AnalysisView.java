@@ -137,9 +137,10 @@ public final class AnalysisView implements Step {
         run.setAccessibleText("Run the analysis");
         run.disableProperty().bind(work.busy());
         run.setOnAction(e -> model.analyse());
+        run.getProperties().put(AnalysisModel.class, model); // lets a test press Cancel at the commit point
         Button cancel = new Button("Cancel");
         cancel.setId("cancelAnalysis");
-        cancel.setAccessibleText("Cancel the running analysis; nothing is written");
+        cancel.setAccessibleText("Cancel the running analysis; nothing is written unless the report is already moving into place");
         cancel.disableProperty().bind(model.running().not());
         cancel.setOnAction(e -> model.cancel());
         Label result = new Label();

@@ -4,27 +4,29 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.concurrent.CancellationException;
-import java.util.function.IntConsumer;
+import javafx.application.Platform;
 import javafx.beans.property.BooleanProperty;
+import javafx.beans.property.DoubleProperty;
 import javafx.beans.property.SimpleBooleanProperty;
+import javafx.beans.property.SimpleDoubleProperty;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
-import org.inkgate.admin.core.export.OutputFolder;
+import org.inkgate.admin.core.export.Cancellation;
 import org.inkgate.admin.core.export.StoreExport;
 import org.inkgate.admin.core.export.XapiExport;
 import org.inkgate.admin.core.store.ResultsStore;
-import org.inkgate.admin.core.store.StoreException;
-import org.inkgate.admin.gui.AdminSession;
-import org.inkgate.admin.gui.Fields;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
+import org.inkgate.admin.gui.AdminSession;
+import org.inkgate.admin.gui.Fields;
 import org.inkgate.admin.gui.Work;
-import org.inkgate.admin.study.PartialFolder;
 
 /**
  * The export step: {@link StoreExport} for every exam in the store (or the one named) into the
- * chosen folder, as {@code inkgate-admin export}, run on the background worker with progress.
+ * chosen folder, as {@code inkgate-admin export}, run on the background worker. Its progress is
+ * the core's own steps (each part of each exam, then the move into place); Cancel goes through the
+ * core's {@link Cancellation}, so it either wins before the files move (nothing is put into the
+ * folder) or is refused once they are moving (the export completes and says so).
  */
 public final class ExportModel {
 
@@ -36,8 +38,12 @@ public final class ExportModel {
     private final BooleanProperty xapiLight = new SimpleBooleanProperty(false);
     private final StringProperty written = new SimpleStringProperty("");
     private final BooleanProperty running = new SimpleBooleanProperty(false);
-    /** Told on the worker as each part starts (exam index times parts, plus the part); tests hold a part here. */
-    volatile IntConsumer partStarting = part -> { };
+    private final DoubleProperty progress = new SimpleDoubleProperty(0);
+    private final StringProperty step = new SimpleStringProperty("");
+    private volatile Cancellation current;
+    private boolean cancelRefused;
+    /** Told on the worker with the core's progress and commit-point moments; tests press Cancel there. */
+    volatile StoreExport.Progress watch = StoreExport.Progress.NONE;
 
     public ExportModel(AdminSession session) {
         this.session = session;
@@ -77,10 +83,32 @@ public final class ExportModel {
         return running;
     }
 
-    /** Cancels a running export: it stops before its next part and nothing of it stays in the folder. */
+    /** How far the running export is, 0 to 1 (the core's steps done out of all). */
+    public DoubleProperty progress() {
+        return progress;
+    }
+
+    /** The step in hand ("EXAM: QTI results", "moving the files into FOLDER"), blank when idle. */
+    public StringProperty step() {
+        return step;
+    }
+
+    /**
+     * Cancels a running export. Before its files move into the folder the cancel wins: the export
+     * stops at its next step and removes what it wrote aside. Once they are moving it is refused,
+     * and the test owner is told the export will complete.
+     */
     public void cancel() {
-        if (running.get()) {
-            session.work().cancel();
+        Cancellation c = current;
+        if (!running.get() || c == null) {
+            return;
+        }
+        if (c.cancel()) {
+            written.set("Cancelling: the export stops at its next step and removes what it wrote aside.");
+        } else {
+            cancelRefused = true;
+            written.set("Too late to cancel: the files are already being moved into " + folder.get()
+                    + ". The export completes; what it wrote is shown when it is done.");
         }
     }
 
@@ -99,89 +127,82 @@ public final class ExportModel {
         }
         String only = examId.get() == null || examId.get().isBlank() ? null : examId.get().strip();
         XapiExport.Options options = new XapiExport.Options(xapiBase.get().strip(), xapiLight.get());
+        Cancellation cancellation = new Cancellation();
+        current = cancellation;
+        cancelRefused = false;
         written.set("Exporting ...");
+        progress.set(0);
+        step.set("");
         running.set(true);
-        IntConsumer watcher = partStarting;
-        session.work().run("Export", progress -> run(storeFile, out, only, options, progress, watcher),
+        StoreExport.Progress watcher = watch;
+        session.work().run("Export", work -> run(storeFile, out, only, options, shown(work, watcher), cancellation),
                 lines -> {
-                    running.set(false);
-                    written.set(String.join("\n", lines));
+                    idle();
+                    List<String> shownLines = new ArrayList<>(lines);
+                    if (cancelRefused) {
+                        shownLines.add(0, "Cancel came too late: the files were already being moved into place."
+                                + " The export is complete:");
+                    }
+                    written.set(String.join("\n", shownLines));
                 },
                 problem -> {
-                    running.set(false);
+                    idle();
                     written.set("The export stopped: " + problem + "\nNothing of this export was put into " + out
                             + "; files of earlier exports there are as they were.");
                 },
                 () -> {
-                    running.set(false);
+                    idle();
                     written.set("Cancelled. Nothing of this export was put into " + out
                             + "; files of earlier exports there are as they were.");
                 });
     }
 
-    /**
-     * Every exam is written into a hidden folder beside {@code out} and moved in only when all are
-     * complete ({@link PartialFolder}, as the analysis report), so a cancelled or failed export leaves nothing behind.
-     */
+    private void idle() {
+        running.set(false);
+        current = null;
+        step.set("");
+    }
+
+    /** The core's progress, shown in this step and the status bar, and told to {@code watcher}. */
+    private StoreExport.Progress shown(Work.Progress work, StoreExport.Progress watcher) {
+        return new StoreExport.Progress() {
+            @Override
+            public void step(long done, long total, String what) {
+                work.update(done, total, "Export: " + what);
+                Platform.runLater(() -> {
+                    progress.set(total <= 0 ? 0 : (double) done / total);
+                    step.set(what);
+                });
+                watcher.step(done, total, what);
+            }
+
+            @Override
+            public void beforePublish() {
+                watcher.beforePublish();
+            }
+
+            @Override
+            public void publishing() {
+                watcher.publishing();
+            }
+        };
+    }
+
     private static List<String> run(Path storeFile, Path out, String only, XapiExport.Options options,
-            Work.Progress progress, IntConsumer watcher) throws Exception {
+            StoreExport.Progress progress, Cancellation cancellation) throws Exception {
         List<String> lines = new ArrayList<>();
         try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(storeFile))) {
             List<String> exams = StoreExport.exams(s, only);
             if (exams.isEmpty()) {
                 lines.add("The store holds no exam yet. Collect first (step 4).");
             } else {
-                try {
-                    PartialFolder.write(out, partial -> writeAll(storeFile, s, exams, partial, out, options, progress,
-                            watcher, lines), progress::cancelled);
-                } catch (StoreFailure f) {
-                    throw f.store;
+                for (StoreExport.Written w : StoreExport.write(storeFile, s, exams, out, options, false, progress,
+                        cancellation)) {
+                    lines.addAll(w.lines());
                 }
             }
         }
         lines.add(StoreExport.HANDLING);
         return lines;
-    }
-
-    /** The store's exams into {@code partial}; the summary lines name their folders in {@code out}. */
-    private static void writeAll(Path storeFile, ResultsStore s, List<String> exams, Path partial, Path out,
-            XapiExport.Options options, Work.Progress progress, IntConsumer watcher, List<String> lines)
-            throws java.io.IOException {
-        int parts = StoreExport.PARTS.size();
-        for (int i = 0; i < exams.size(); i++) {
-            String id = exams.get(i);
-            int done = i * parts;
-            StoreExport.Written w;
-            try {
-                w = StoreExport.write(storeFile, s, id, partial, options, part -> {
-                    progress.update(done + part, (long) exams.size() * parts, "Exporting " + id + ": "
-                            + StoreExport.PARTS.get(part));
-                    watcher.accept(done + part);
-                    if (progress.cancelled()) {
-                        throw new CancellationException("export cancelled before " + StoreExport.PARTS.get(part));
-                    }
-                });
-            } catch (StoreException e) {
-                throw new StoreFailure(e);
-            }
-            lines.addAll(moved(w, OutputFolder.file(out, id)).lines());
-        }
-        progress.update(exams.size() * parts, (long) exams.size() * parts, "Moving the export into " + out);
-    }
-
-    /** Carries a store failure through {@link PartialFolder.Contents}, which may throw only IOException. */
-    private static final class StoreFailure extends java.io.IOException {
-        private final transient StoreException store;
-
-        StoreFailure(StoreException store) {
-            super(store.getMessage(), store);
-            this.store = store;
-        }
-    }
-
-    /** The summary names the folder the files end up in, not the hidden one they were written to. */
-    private static StoreExport.Written moved(StoreExport.Written w, Path folder) {
-        return new StoreExport.Written(w.examId(), folder, w.responses(), w.toolUse(), w.events(), w.questionnaire(),
-                w.qti(), w.xapi(), w.xapiLight(), w.conflicts());
     }
 }

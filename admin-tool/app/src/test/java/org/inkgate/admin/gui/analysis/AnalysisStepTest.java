@@ -225,7 +225,7 @@ class AnalysisStepTest {
         }));
         assertFalse(Files.exists(out), "no report folder");
         try (Stream<Path> left = Files.list(dir)) {
-            assertEquals(List.of(), left.filter(p -> p.getFileName().toString().contains(".partial-")).toList(),
+            assertEquals(List.of(), left.filter(p -> p.getFileName().toString().contains(".partial")).toList(),
                     "no half-written folder left behind");
         }
     }
@@ -251,6 +251,52 @@ class AnalysisStepTest {
         // the background thread stops at its next check; a job queued after it runs once it has
         CountDownWait.drain(session);
         assertFalse(Files.exists(out), "no report folder");
+    }
+
+    /**
+     * Issue 15 §2: Cancel pressed in the window once the report is moving into place (after the
+     * commit point) is refused; the step says so and then reports the complete report, never "Cancelled".
+     */
+    @Test
+    void cancel_inTheWindow_onceTheReportIsMoving_isRefusedAndTheReportIsWhole(FxRobot robot) throws Exception {
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        robot.interact(() -> session.store().set(rated.file()));
+        select(robot);
+        Path out = dir.resolve("report-window-late-cancel");
+        setText(robot, "#analysisOut", out.toString());
+        AnalysisModel model = (AnalysisModel) robot.lookup("#analyse").queryButton().getProperties()
+                .get(AnalysisModel.class);
+        List<String> toldWhileMoving = new ArrayList<>();
+        model.watch = new AnalysisRun.Listener() {
+            @Override
+            public void stage(int done, int total, String what) {
+            }
+
+            @Override
+            public void warn(String text) {
+            }
+
+            @Override
+            public void publishing() {
+                robot.interact(() -> {
+                    robot.lookup("#cancelAnalysis").queryButton().fire();
+                    toldWhileMoving.add(label(robot, "#analysisResult"));
+                });
+            }
+        };
+        robot.interact(() -> robot.lookup("#analyse").queryButton().fire());
+        waitForWork(session);
+        assertEquals(1, toldWhileMoving.size());
+        assertTrue(toldWhileMoving.get(0).startsWith("Too late to cancel"), toldWhileMoving.get(0));
+        String shown = label(robot, "#analysisResult");
+        assertTrue(shown.startsWith("Cancel came too late"), shown);
+        assertFalse(shown.contains("Cancelled."), shown);
+        assertTrue(Files.isRegularFile(out.resolve("report.html")));
+        assertTrue(Files.isRegularFile(out.resolve("summary.json")));
+        try (Stream<Path> left = Files.list(dir)) {
+            assertEquals(List.of(), left.filter(p -> p.getFileName().toString().contains(".partial")).toList());
+        }
     }
 
     @Test

@@ -80,6 +80,42 @@ class ExportStepTest {
         StepDriver.shoot1024(robot, stage, "admin-exports.png");
     }
 
+    /**
+     * Issue 15 §2: the window's export replaces each exam's folder whole, as the command does, so a
+     * file of an earlier export (here one for a candidate no longer in the store) is never mixed into
+     * the new one; the test owner's own files beside the exam folders stay.
+     */
+    @Test
+    void export_overAnEarlierExport_replacesTheExamFolderWholeAsTheCommandDoes(FxRobot robot) throws Exception {
+        RatedStore rated = RatedStore.make(dir.resolve("study"), List.of());
+        Path out = dir.resolve("export");
+        String first = CommandLineSitting.admin("export", "--store", rated.file().toString(), "--out", out.toString());
+        assertTrue(first.contains("qti-results/"), first);
+        Path stale = out.resolve(rated.exam().examId()).resolve("qti-results").resolve("from-an-earlier-roster.xml");
+        Files.writeString(stale, "<stale/>");
+        Files.writeString(out.resolve("notes.txt"), "the test owner's notes");
+
+        AdminSession session = new AdminSession();
+        robot.interact(() -> AdminWindow.show(stage, session));
+        StepDriver.select(robot, "Exports");
+        StepDriver.setText(robot, "#exportStore", rated.file().toString());
+        StepDriver.setText(robot, "#exportFolder", out.toString());
+        robot.clickOn("#export");
+        StepDriver.waitForWork(session);
+
+        assertTrue(StepDriver.label(robot, "#exportWritten").contains("qti-results/ 12 assessmentResult files"));
+        assertFalse(Files.exists(stale), "a file of the earlier export is mixed into the new one");
+        assertEquals("the test owner's notes", Files.readString(out.resolve("notes.txt")));
+        try (Stream<Path> s = Files.list(dir)) {
+            assertEquals(List.of(), s.filter(p -> p.getFileName().toString().startsWith(".")).toList(),
+                    "hidden working folder left beside the export");
+        }
+        try (Stream<Path> s = Files.list(out)) {
+            assertEquals(List.of(), s.filter(p -> p.getFileName().toString().startsWith(".")).toList(),
+                    "hidden working folder left in the export folder");
+        }
+    }
+
     @Test
     void export_noStoreYet_saysSoAndWritesNothing(FxRobot robot) {
         AdminSession session = new AdminSession();

@@ -15,9 +15,10 @@ import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
 
 /**
- * One exam's whole export (tidy CSV, questionnaire answers, QTI results, xAPI statements) into
+ * The exams' whole export (tidy CSV, questionnaire answers, QTI results, xAPI statements) into
  * {@code OUT/EXAM-ID/}: what the {@code export} command and the admin window's export step both
- * run, so the two cannot drift apart; {@link Written#lines} is the summary both show.
+ * run, so the two cannot drift apart; {@link Written#lines} is the summary both show, and
+ * {@link Progress} the progress both draw. Written whole or not at all ({@link StagedFolder}).
  */
 public final class StoreExport {
 
@@ -28,9 +29,17 @@ public final class StoreExport {
     /** The parts of one exam's export, in the order they are written (for progress). */
     public static final List<String> PARTS = List.of("tidy CSV", "QTI results", "xAPI statements");
 
-    /** Told when each part starts: its index in {@link #PARTS}. */
-    public interface Listener {
-        void part(int index);
+    /**
+     * Told as an export goes, on the thread that runs it: each step as it starts (every part of
+     * every exam, then moving the files into place), and the moments around the commit point
+     * ({@link StagedFolder.Moments}). The command draws it with its terminal counter, the window
+     * with its progress bar.
+     */
+    public interface Progress extends StagedFolder.Moments {
+        Progress NONE = (done, total, what) -> { };
+
+        /** Step {@code done} (from 0) of {@code total} starts; {@code what} names it for people. */
+        void step(long done, long total, String what);
     }
 
     /** What was written for one exam. */
@@ -73,27 +82,64 @@ public final class StoreExport {
         return examId != null ? List.of(examId) : store.examIds();
     }
 
-    /** Writes one exam's export into {@code out/examId/}; {@code storeFile} is the store's file (for its ratings). */
-    public static Written write(Path storeFile, ResultsStore store, String examId, Path out, XapiExport.Options xapiOptions,
-            Listener listener) throws IOException, StoreException {
-        return write(storeFile, store, examId, out, xapiOptions, false, listener);
+    /** The number of progress steps of an export of {@code exams} exams: their parts, then the move into place. */
+    public static long steps(int exams) {
+        return (long) exams * PARTS.size() + 1;
     }
 
     /**
-     * As above; {@code spreadsheetSafe} writes the CSV files for opening in a spreadsheet
+     * Writes the export of {@code exams} into {@code out/EXAM-ID/} for each, all or nothing: every
+     * exam is written into one hidden folder beside {@code out} ({@link StagedFolder}) and moved in
+     * only when all are written and {@code cancellation} has not won. A cancel (or Ctrl+C) before
+     * that throws {@link java.util.concurrent.CancellationException} and leaves {@code out} as it was;
+     * a failure leaves it as it was too. {@code storeFile} is the store's file (for its ratings);
+     * {@code spreadsheetSafe} writes the CSV files for opening in a spreadsheet
      * ({@link org.inkgate.admin.core.csv.SpreadsheetSafe}). Every file and folder written is owner-only.
+     * No exams: nothing is written.
      */
-    public static Written write(Path storeFile, ResultsStore store, String examId, Path out, XapiExport.Options xapiOptions,
-            boolean spreadsheetSafe, Listener listener) throws IOException, StoreException {
-        try (WholeFolder whole = WholeFolder.start(OutputFolder.file(out, examId))) {
-            Written w = write(storeFile, store, examId, whole.folder(), xapiOptions, spreadsheetSafe, listener, whole);
-            return w;
+    public static List<Written> write(Path storeFile, ResultsStore store, List<String> exams, Path out,
+            XapiExport.Options xapiOptions, boolean spreadsheetSafe, Progress progress, Cancellation cancellation)
+            throws IOException, StoreException {
+        if (exams.isEmpty()) {
+            return List.of();
+        }
+        long total = steps(exams.size());
+        List<Path> finalFolders = new ArrayList<>();
+        for (String id : exams) {
+            finalFolders.add(OutputFolder.file(out, id)); // refuses an unsafe exam id before anything is written
+        }
+        try (StagedFolder staged = StagedFolder.open(out, cancellation)) {
+            List<Written> written = new ArrayList<>();
+            for (int e = 0; e < exams.size(); e++) {
+                String id = exams.get(e);
+                long first = (long) e * PARTS.size();
+                Path dir = OutputFolder.file(staged.folder(), id);
+                Written w = writeOne(storeFile, store, id, dir, xapiOptions, spreadsheetSafe,
+                        part -> {
+                            progress.step(first + part, total, id + ": " + PARTS.get(part));
+                            cancellation.stopIfCancelled(PARTS.get(part) + " of " + id);
+                        });
+                written.add(new Written(id, finalFolders.get(e), w.responses(), w.toolUse(), w.events(),
+                        w.questionnaire(), w.qti(), w.xapi(), w.xapiLight(), w.conflicts()));
+            }
+            progress.step(total - 1, total, "moving the files into " + out);
+            cancellation.stopIfCancelled("the files were moved into " + out);
+            staged.publish(progress);
+            progress.step(total, total, "done");
+            return written;
         }
     }
 
-    private static Written write(Path storeFile, ResultsStore store, String examId, Path dir, XapiExport.Options xapiOptions,
-            boolean spreadsheetSafe, Listener listener, WholeFolder whole) throws IOException, StoreException {
+    /** Told when each part of one exam starts: its index in {@link #PARTS}. */
+    private interface PartStarts {
+        void part(int index);
+    }
+
+    private static Written writeOne(Path storeFile, ResultsStore store, String examId, Path dir,
+            XapiExport.Options xapiOptions, boolean spreadsheetSafe, PartStarts listener)
+            throws IOException, StoreException {
         listener.part(0);
+        org.inkgate.format.io.OwnerOnly.folder(dir);
         org.inkgate.format.io.OwnerOnly.folder(dir.resolve("csv"));
         long[] rows = TidyCsvExport.write(store, examId, dir.resolve("csv"), spreadsheetSafe);
         long questionnaire;
@@ -109,8 +155,7 @@ public final class StoreExport {
         XapiExport.Written xapi = XapiExport.write(store, examId, dir.resolve("xapi-statements.jsonl"), xapiOptions);
         org.inkgate.format.io.OwnerOnly.tree(dir);
         int conflicts = store.conflicts(examId).size();
-        Path placed = whole.finish();
-        return new Written(examId, placed, rows[0], rows[1], rows[2], questionnaire, qti, xapi, xapiOptions.light(),
+        return new Written(examId, dir, rows[0], rows[1], rows[2], questionnaire, qti, xapi, xapiOptions.light(),
                 conflicts);
     }
 
