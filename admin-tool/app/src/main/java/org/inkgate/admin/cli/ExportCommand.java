@@ -23,9 +23,12 @@ final class ExportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store",
-            converter = StoreLocationConverter.class)
+    @Option(names = "--store", required = true, paramLabel = "STORE", description = "the results store: a SQLite"
+            + " file, or a PostgreSQL database (postgresql://host:port/database)", converter = StoreLocationConverter.class)
     StoreLocation location;
+
+    @Option(names = "--store-password-file", paramLabel = "FILE", description = StorePasswordFile.DESCRIPTION)
+    Path storePasswordFile;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "folder for the exported files")
     Path out;
@@ -50,7 +53,8 @@ final class ExportCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
         XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
-        try (ResultsStore store = Stores.openResultsForReading(StoreLocation.file(ExistingStore.require(location.file())))) {
+        StoreLocation at = StorePasswordFile.existing(StorePasswordFile.apply(location, storePasswordFile));
+        try (ResultsStore store = Stores.openResultsForReading(at)) {
             List<String> exams = StoreExport.exams(store, examId);
             int parts = StoreExport.PARTS.size();
             try (ProgressReporter progress = ProgressReporter.onStandardError(spec.commandLine().getErr(), "export",
@@ -58,7 +62,7 @@ final class ExportCommand implements Callable<Integer> {
                 for (int e = 0; e < exams.size(); e++) {
                     String id = exams.get(e);
                     int done = e * parts;
-                    List<String> lines = StoreExport.write(location.file(), store, id, out, xapiOptions, spreadsheetSafe,
+                    List<String> lines = StoreExport.write(at, store, id, out, xapiOptions, spreadsheetSafe,
                             part -> progress.stepTo(done + part, TerminalText.value(id) + ": " + StoreExport.PARTS.get(part)))
                             .lines();
                     progress.stepTo(done + parts, "");

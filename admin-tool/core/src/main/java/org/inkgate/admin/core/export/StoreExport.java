@@ -85,13 +85,19 @@ public final class StoreExport {
      */
     public static Written write(Path storeFile, ResultsStore store, String examId, Path out, XapiExport.Options xapiOptions,
             boolean spreadsheetSafe, Listener listener) throws IOException, StoreException {
+        return write(StoreLocation.file(storeFile), store, examId, out, xapiOptions, spreadsheetSafe, listener);
+    }
+
+    /** As above, from the store at {@code location} (a file or a server). */
+    public static Written write(StoreLocation location, ResultsStore store, String examId, Path out,
+            XapiExport.Options xapiOptions, boolean spreadsheetSafe, Listener listener) throws IOException, StoreException {
         try (WholeFolder whole = WholeFolder.start(OutputFolder.file(out, examId))) {
-            Written w = write(storeFile, store, examId, whole.folder(), xapiOptions, spreadsheetSafe, listener, whole);
+            Written w = write(location, store, examId, whole.folder(), xapiOptions, spreadsheetSafe, listener, whole);
             return w;
         }
     }
 
-    private static Written write(Path storeFile, ResultsStore store, String examId, Path dir, XapiExport.Options xapiOptions,
+    private static Written write(StoreLocation location, ResultsStore store, String examId, Path dir, XapiExport.Options xapiOptions,
             boolean spreadsheetSafe, Listener listener, WholeFolder whole) throws IOException, StoreException {
         listener.part(0);
         org.inkgate.format.io.OwnerOnly.folder(dir.resolve("csv"));
@@ -104,7 +110,7 @@ public final class StoreExport {
         }
         listener.part(1);
         QtiResultsExport.Written qti = QtiResultsExport.write(store, examId, dir.resolve("qti-results"),
-                scoring(storeFile, examId));
+                scoring(location, examId));
         listener.part(2);
         XapiExport.Written xapi = XapiExport.write(store, examId, dir.resolve("xapi-statements.jsonl"), xapiOptions);
         org.inkgate.format.io.OwnerOnly.tree(dir);
@@ -115,12 +121,15 @@ public final class StoreExport {
     }
 
     /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */
-    private static QtiResultsExport.Scoring scoring(Path storeFile, String id) throws IOException {
+    private static QtiResultsExport.Scoring scoring(StoreLocation location, String id) throws IOException {
+        if (location instanceof StoreLocation.Server) {
+            return QtiResultsExport.Scoring.NONE; // rating is on store files only in this version: a server store holds no ratings
+        }
         try {
-            if (!Stores.hasRubric(StoreLocation.file(storeFile), id)) {
+            if (!Stores.hasRubric(location, id)) {
                 return QtiResultsExport.Scoring.NONE;
             }
-            try (RatingStore rating = Stores.openRating(StoreLocation.file(storeFile), id)) {
+            try (RatingStore rating = Stores.openRating(location, id)) {
                 return new QtiResultsExport.Scoring(rating.rubric(), rating.scoresByResponse());
             }
         } catch (RatingException e) {

@@ -7,6 +7,7 @@ import java.sql.Connection;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.concurrent.atomic.AtomicInteger;
+import org.inkgate.admin.core.store.StoreLocation;
 
 /**
  * A real PostgreSQL server for the tests, started by the tests themselves: the server binaries come
@@ -38,6 +39,13 @@ public final class PostgresServer {
             }
         }
         return server;
+    }
+
+    /** A new, empty database on the shared server as a store location (user {@code postgres}, trust on loopback). */
+    public static StoreLocation.Server freshStore(String prefix) throws SQLException {
+        String url = freshDatabase(prefix);
+        String database = url.substring(url.lastIndexOf('/') + 1).replaceAll("\\?.*", "");
+        return new StoreLocation.Server("localhost", shared().getPort(), database, "postgres", java.util.Map.of(), null);
     }
 
     /** A new, empty database on the shared server; its JDBC URL (user {@code postgres}, trust on loopback). */
