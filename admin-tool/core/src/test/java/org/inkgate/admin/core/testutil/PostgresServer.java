@@ -58,4 +58,44 @@ public final class PostgresServer {
         }
         return pg.getJdbcUrl("postgres", name);
     }
+
+    private static boolean passwordLogins;
+
+    /**
+     * A login role that must give {@code password} (SCRAM, PostgreSQL's default since 14), with all
+     * rights on {@code database}. The server's host-based authentication file is rewritten once so
+     * that every role but the tests' superuser {@code postgres} logs in with a password (PostgreSQL
+     * docs, 21.1 "The pg_hba.conf File"), then the server rereads it.
+     */
+    public static synchronized void passwordRole(String role, String password, String database) throws SQLException {
+        EmbeddedPostgres pg = shared();
+        try (Connection c = pg.getPostgresDatabase().getConnection(); Statement s = c.createStatement()) {
+            if (!passwordLogins) {
+                String hba;
+                try (var rs = s.executeQuery("SHOW hba_file")) {
+                    rs.next();
+                    hba = rs.getString(1);
+                }
+                try {
+                    java.nio.file.Files.writeString(java.nio.file.Path.of(hba), """
+                            # written by the tests (PostgresServer): the superuser without, every other role with a password
+                            host all postgres 127.0.0.1/32 trust
+                            host all postgres ::1/128 trust
+                            host all all 127.0.0.1/32 scram-sha-256
+                            host all all ::1/128 scram-sha-256
+                            """);
+                } catch (IOException e) {
+                    throw new UncheckedIOException("cannot rewrite the test server's " + hba, e);
+                }
+                s.execute("SELECT pg_reload_conf()");
+                passwordLogins = true;
+            }
+            s.execute("CREATE ROLE " + role + " LOGIN PASSWORD '" + password.replace("'", "''") + "'");
+            s.execute("GRANT ALL ON DATABASE " + database + " TO " + role);
+        }
+        try (Connection c = java.sql.DriverManager.getConnection(pg.getJdbcUrl("postgres", database));
+                Statement s = c.createStatement()) {
+            s.execute("GRANT ALL ON SCHEMA public TO " + role); // PostgreSQL 15 and later no longer grant it to everyone
+        }
+    }
 }

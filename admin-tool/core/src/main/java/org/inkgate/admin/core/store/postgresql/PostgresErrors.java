@@ -15,6 +15,12 @@ final class PostgresErrors {
 
     /** What the failure means for the store, or null when it is none of the known kinds. */
     static String plain(StoreLocation.Server server, Credentials login, Throwable failure) {
+        if (loginRefused(failure) || login.password() == null && hasState(failure, "08004")) {
+            // 08004 without a password: the driver's "the server requested password-based authentication, but no
+            // password was provided"
+            // the driver may wrap the server's refusal in a connection failure of its own (08xxx): the refusal says more
+            return byState(server, login, "28P01");
+        }
         for (Throwable t = failure; t != null; t = t.getCause()) {
             if (t instanceof SQLException s && s.getSQLState() != null) {
                 String found = byState(server, login, s.getSQLState());
@@ -30,6 +36,15 @@ final class PostgresErrors {
     static boolean loginRefused(Throwable failure) {
         for (Throwable t = failure; t != null; t = t.getCause()) {
             if (t instanceof SQLException s && s.getSQLState() != null && s.getSQLState().startsWith("28")) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static boolean hasState(Throwable failure, String state) {
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof SQLException s && state.equals(s.getSQLState())) {
                 return true;
             }
         }

@@ -76,10 +76,6 @@ public final class PostgresResultsStore extends SqlResultsStore {
     private static StoreException failure(StoreLocation.Server server, Credentials login, SQLException e) {
         String what = "cannot open the results store " + server + ": ";
         String plain = PostgresErrors.plain(server, login, e);
-        if (plain == null && login.password() == null && "08004".equals(e.getSQLState())) {
-            // the driver's "the server requested password-based authentication, but no password was provided"
-            plain = PostgresErrors.plain(server, login, new SQLException("", "28P01"));
-        }
         if (plain != null) {
             return new StoreException(what + plain, PostgresErrors.loginRefused(e) ? null : e);
         }
