@@ -250,26 +250,28 @@ public abstract class SqlResultsStore implements ResultsStore {
     }
 
     @Override
-    public long importSitting(SittingRecord record) throws StoreException {
+    public Optional<Long> importSitting(SittingRecord record) throws StoreException {
         OpenedResponse opened = record.opened();
         String contentSha256 = record.contentSha256();
         String sourceFile = record.sourceFile();
         ResponseDocument d = opened.response();
         return tx("importing " + sourceFile, () -> {
-            long sitting;
-            try (PreparedStatement ps = c.prepareStatement("INSERT INTO sittings(package_sha256, package_id, content_sha256,"
+            // ON CONFLICT DO NOTHING on both unique keys (the file's digest; package id and content): a package
+            // another collect stored meanwhile gives no row here instead of a failure. In PostgreSQL the insert
+            // waits for that other transaction and then sees its row (unique index checks see uncommitted
+            // inserts, PostgreSQL docs 13.2.1 and INSERT "ON CONFLICT"); in SQLite one writer runs at a time.
+            Optional<Long> inserted = first("INSERT INTO sittings(package_sha256, package_id, content_sha256,"
                     + " exam_id, bundle_manifest_sha256, candidate_number, form_id, seat, client_version,"
                     + " installation_fingerprint, started_at, submitted_at, source_file, imported_at)"
-                    + " VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?)", Statement.RETURN_GENERATED_KEYS)) {
-                SqlSession.bind(ps, opened.packageSha256(), d.packageId(), contentSha256, d.examId(), d.bundleManifestSha256(),
-                        d.candidateNumber(), d.formId(), d.seat(), d.clientVersion(), opened.installationFingerprint(),
-                        str(d.startedAt()), str(d.submittedAt()), sourceFile, Instant.now().toString());
-                ps.executeUpdate();
-                try (ResultSet keys = ps.getGeneratedKeys()) {
-                    keys.next();
-                    sitting = keys.getLong(1);
-                }
+                    + " VALUES (?,?,?,?,?,?,?,?,?,?,?,?,?,?) ON CONFLICT DO NOTHING RETURNING sitting_id", 1,
+                    opened.packageSha256(), d.packageId(), contentSha256, d.examId(), d.bundleManifestSha256(),
+                    d.candidateNumber(), d.formId(), d.seat(), d.clientVersion(), opened.installationFingerprint(),
+                    str(d.startedAt()), str(d.submittedAt()), sourceFile, Instant.now().toString())
+                    .map(row -> ((Number) row[0]).longValue());
+            if (inserted.isEmpty()) {
+                return inserted;
             }
+            long sitting = inserted.get();
             for (int i = 0; i < d.tasks().size(); i++) {
                 TaskResponse t = d.tasks().get(i);
                 update("INSERT INTO responses(sitting_id, task_id, position, condition_id, policy_id, tools_offered, text,"
@@ -292,7 +294,7 @@ public abstract class SqlResultsStore implements ResultsStore {
                 }
             }
             insertEvents(sitting, record);
-            return sitting;
+            return inserted;
         });
     }
 
