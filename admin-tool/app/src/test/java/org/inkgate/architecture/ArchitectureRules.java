@@ -60,10 +60,11 @@ record ArchitectureRules(String root) {
 
     /**
      * The admin core's store implementations: the shared transaction layer ({@code store.sql}) and
-     * each kind of store ({@code store.sqlite} today). Only they see SQL.
+     * each kind of store ({@code store.sqlite}, {@code store.postgresql}). Only they see SQL.
      */
     String[] storeImplementations() {
-        return new String[] {root + ".admin.core.store.sql..", root + ".admin.core.store.sqlite.."};
+        return new String[] {root + ".admin.core.store.sql..", root + ".admin.core.store.sqlite..",
+            root + ".admin.core.store.postgresql.."};
     }
 
     /** The one factory that opens stores from a location, and so names each implementation. */
@@ -127,7 +128,8 @@ record ArchitectureRules(String root) {
         return noClasses().that().resideInAPackage(admin()).and().resideOutsideOfPackages(storeImplementations())
                 .and().doNotHaveFullyQualifiedName(storeFactory())
                 .should().dependOnClassesThat(resideInAPackage("java.sql..").or(resideInAPackage("org.sqlite.."))
-                        .or(simpleNameStartingWith("Sqlite")))
+                        .or(resideInAPackage("org.postgresql..")).or(simpleNameStartingWith("Sqlite"))
+                        .or(simpleNameStartingWith("Postgres")))
                 .because("the command line and the admin window open stores through store.Stores and use the core"
                         + " interfaces it returns, never SQL or a store implementation");
     }

@@ -190,8 +190,14 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (mfrmAnchors != null && mfrmOptions == null) {
             throw new ParameterException(spec.commandLine(), "--mfrm-anchors needs --mfrm-facets");
         }
+        java.nio.file.Path storeFile;
+        try {
+            storeFile = store == null ? null : store.requireFile("analyse --store");
+        } catch (org.inkgate.admin.core.store.StoreException notYet) {
+            throw new ParameterException(spec.commandLine(), notYet.getMessage());
+        }
         AnalysisRun.Request request = new AnalysisRun.Request(ratings, candidates, attributes, rosterAttributes,
-                toolUsage, process, questionnaire, store == null ? null : store.file(), exam, out, options, mfrmOptions, mfrmAnchors,
+                toolUsage, process, questionnaire, storeFile, exam, out, options, mfrmOptions, mfrmAnchors,
                 spec.commandLine().getParseResult().originalArgs());
         AnalysisRun.Written written;
         try (ProgressReporter progress = ProgressReporter.onStandardError(err, "analyse", "stages", 0)) {

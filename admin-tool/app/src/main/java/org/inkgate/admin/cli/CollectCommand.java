@@ -33,9 +33,13 @@ final class CollectCommand implements Callable<Integer> {
     @Parameters(paramLabel = "FOLDER", arity = "1..*", description = "folders (searched recursively) or .inkresp files")
     List<Path> roots;
 
-    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store (SQLite; created)",
+    @Option(names = "--store", required = true, paramLabel = "STORE", description = "the results store: a SQLite file"
+            + " (created), or a PostgreSQL database, postgresql://host:port/database (its tables created)",
             converter = StoreLocationConverter.class)
     StoreLocation store;
+
+    @Option(names = "--store-password-file", paramLabel = "FILE", description = StorePasswordFile.DESCRIPTION)
+    Path storePasswordFile;
 
     @Option(names = "--bundle", required = true, paramLabel = "FILE", description = "the bundle(s) of the sitting")
     List<Path> bundleFiles;
@@ -94,7 +98,7 @@ final class CollectCommand implements Callable<Integer> {
             if (examSource != null) {
                 exam = ExamSourceReader.read(examSource);
             }
-            report = CollectionRun.run(new CollectionRun.Request(store.file(), bundleFiles, roots, encryptionKey,
+            report = CollectionRun.run(new CollectionRun.Request(StorePasswordFile.apply(store, storePasswordFile), bundleFiles, roots, encryptionKey,
                     keyStore.publicKeys().signingFingerprint(), installations, roster, exam, assignment, threads),
                     n -> {
                         w.println("Collecting " + n + " package files into " + store + " ...");

@@ -34,7 +34,7 @@ final class DeskCommand implements Callable<Integer> {
     boolean noWindow;
 
     @Override
-    public Integer call() {
+    public Integer call() throws org.inkgate.admin.core.store.StoreException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         String examId;
@@ -62,7 +62,7 @@ final class DeskCommand implements Callable<Integer> {
         }
         out.println("Opening the rating desk; close the window to finish (every change is already stored as a draft).");
         out.flush();
-        Application.launch(DeskApp.class, "--store=" + storeOptions.store.file().toAbsolutePath(), "--exam=" + examId);
+        Application.launch(DeskApp.class, "--store=" + storeOptions.store.requireFile("the rating desk").toAbsolutePath(), "--exam=" + examId);
         return InkgateAdmin.OK;
     }
 }

@@ -24,9 +24,12 @@ final class ExportCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store",
-            converter = StoreLocationConverter.class)
+    @Option(names = "--store", required = true, paramLabel = "STORE", description = "the results store: a SQLite"
+            + " file, or a PostgreSQL database (postgresql://host:port/database)", converter = StoreLocationConverter.class)
     StoreLocation location;
+
+    @Option(names = "--store-password-file", paramLabel = "FILE", description = StorePasswordFile.DESCRIPTION)
+    Path storePasswordFile;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "folder for the exported files")
     Path out;
@@ -51,13 +54,14 @@ final class ExportCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         PrintWriter w = spec.commandLine().getOut();
         XapiExport.Options xapiOptions = new XapiExport.Options(xapiBase, xapiLight);
-        try (ResultsStore store = Stores.openResultsForReading(StoreLocation.file(ExistingStore.require(location.file())))) {
+        StoreLocation at = StorePasswordFile.existing(StorePasswordFile.apply(location, storePasswordFile));
+        try (ResultsStore store = Stores.openResultsForReading(at)) {
             List<String> exams = StoreExport.exams(store, examId);
             List<StoreExport.Written> written;
             // Ctrl+C cancels through the export's own shutdown hook (StagedFolder): nothing is moved into --out
             try (ProgressReporter progress = ProgressReporter.onStandardError(spec.commandLine().getErr(), "export",
                     "steps", StoreExport.steps(exams.size()))) {
-                written = StoreExport.write(location.file(), store, exams, out, xapiOptions, spreadsheetSafe,
+                written = StoreExport.write(at, store, exams, out, xapiOptions, spreadsheetSafe,
                         (done, total, what) -> progress.stepTo(done, TerminalText.value(what)), new Cancellation());
             }
             for (StoreExport.Written exam : written) {

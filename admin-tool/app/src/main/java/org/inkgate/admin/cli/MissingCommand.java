@@ -1,6 +1,7 @@
 package org.inkgate.admin.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.inkgate.admin.core.collection.MissingReport;
@@ -18,9 +19,12 @@ final class MissingCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--store", required = true, paramLabel = "DB", description = "the results store",
-            converter = StoreLocationConverter.class)
+    @Option(names = "--store", required = true, paramLabel = "STORE", description = "the results store: a SQLite"
+            + " file, or a PostgreSQL database (postgresql://host:port/database)", converter = StoreLocationConverter.class)
     StoreLocation location;
+
+    @Option(names = "--store-password-file", paramLabel = "FILE", description = StorePasswordFile.DESCRIPTION)
+    Path storePasswordFile;
 
     @Option(names = "--exam-id", paramLabel = "ID", description = "only this exam (default: every exam in the store)")
     String examId;
@@ -28,7 +32,8 @@ final class MissingCommand implements Callable<Integer> {
     @Override
     public Integer call() throws Exception {
         boolean attention = false;
-        try (ResultsStore store = Stores.openResultsForReading(StoreLocation.file(ExistingStore.require(location.file())))) {
+        StoreLocation at = StorePasswordFile.existing(StorePasswordFile.apply(location, storePasswordFile));
+        try (ResultsStore store = Stores.openResultsForReading(at)) {
             List<String> exams = examId != null ? List.of(examId) : store.examIds();
             for (String id : exams) {
                 attention |= print(spec.commandLine().getOut(), MissingReport.of(store, id));

@@ -5,7 +5,7 @@ import org.inkgate.admin.core.store.StoreLocation;
 import picocli.CommandLine.ITypeConverter;
 import picocli.CommandLine.TypeConversionException;
 
-/** Reads {@code --store}: a store file today; a server URL is refused with what to give instead. */
+/** Reads {@code --store}: a store file or a PostgreSQL URL; anything else is refused with what to give instead. */
 final class StoreLocationConverter implements ITypeConverter<StoreLocation> {
 
     @Override

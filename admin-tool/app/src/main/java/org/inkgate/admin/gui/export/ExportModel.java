@@ -196,7 +196,7 @@ public final class ExportModel {
             if (exams.isEmpty()) {
                 lines.add("The store holds no exam yet. Collect first (step 4).");
             } else {
-                for (StoreExport.Written w : StoreExport.write(storeFile, s, exams, out, options, false, progress,
+                for (StoreExport.Written w : StoreExport.write(org.inkgate.admin.core.store.StoreLocation.file(storeFile), s, exams, out, options, false, progress,
                         cancellation)) {
                     lines.addAll(w.lines());
                 }

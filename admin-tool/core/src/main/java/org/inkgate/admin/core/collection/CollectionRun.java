@@ -44,12 +44,20 @@ public final class CollectionRun {
      * @param exam                    exam source (adds its rubric), or null
      * @param assignment              assignment table (records its seed), or null
      */
-    public record Request(Path storeFile, List<Path> bundleFiles, List<Path> roots, PrivateKey encryptionKey,
+    public record Request(StoreLocation store, List<Path> bundleFiles, List<Path> roots, PrivateKey encryptionKey,
             String ownerSigningFingerprint, TrustPolicy installations, Path roster, ExamSource exam, Path assignment,
             int threads) {
         public Request {
             bundleFiles = List.copyOf(bundleFiles);
             roots = List.copyOf(roots);
+        }
+
+        /** Into the SQLite store in {@code storeFile}. */
+        public Request(Path storeFile, List<Path> bundleFiles, List<Path> roots, PrivateKey encryptionKey,
+                String ownerSigningFingerprint, TrustPolicy installations, Path roster, ExamSource exam, Path assignment,
+                int threads) {
+            this(StoreLocation.file(storeFile), bundleFiles, roots, encryptionKey, ownerSigningFingerprint, installations,
+                    roster, exam, assignment, threads);
         }
     }
 
@@ -105,8 +113,10 @@ public final class CollectionRun {
      */
     public static Report run(Request r, IntConsumer starting, Consumer<Outcome> settled)
             throws IOException, InvalidSourceException, BundleRefusedException, org.inkgate.admin.core.store.StoreException {
-        try (CollectLock lock = CollectLock.acquire(r.storeFile());
-                ResultsStore store = Stores.openResults(StoreLocation.file(r.storeFile()))) {
+        // a store file takes one collect at a time (the lock beside it); a server store takes many at once,
+        // its unique keys storing each package once (docs/formats.md)
+        try (CollectLock lock = r.store() instanceof StoreLocation.File f ? CollectLock.acquire(f.path()) : null;
+                ResultsStore store = Stores.openResults(r.store())) {
             Map<String, BundleManifest> bundles = new HashMap<>();
             TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
             Map<String, String> signers = new HashMap<>();

@@ -230,7 +230,11 @@ public final class Collector {
         if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()) {
             return new Outcome.SameAsImported(name, d.packageId());
         }
-        store.importSitting(r.record());
+        if (store.importSitting(r.record()).isEmpty()) {
+            // another collect into the same store stored this package since this one looked
+            return store.sittingByPackageFile(r.sha256()).isPresent() ? new Outcome.AlreadyImported(name)
+                    : new Outcome.SameAsImported(name, d.packageId());
+        }
         boolean onRoster = bundle.roster().isEmpty()
                 || bundle.roster().stream().anyMatch(e -> e.candidateNumber().equals(d.candidateNumber()));
         return new Outcome.Imported(name, d.candidateNumber(), d.formId(), d.packageId(), opened.installationFingerprint(),

@@ -92,12 +92,12 @@ public final class StoreExport {
      * exam is written into one hidden folder beside {@code out} ({@link StagedFolder}) and moved in
      * only when all are written and {@code cancellation} has not won. A cancel (or Ctrl+C) before
      * that throws {@link java.util.concurrent.CancellationException} and leaves {@code out} as it was;
-     * a failure leaves it as it was too. {@code storeFile} is the store's file (for its ratings);
+     * a failure leaves it as it was too. {@code location} is where the store is (for its ratings);
      * {@code spreadsheetSafe} writes the CSV files for opening in a spreadsheet
      * ({@link org.inkgate.admin.core.csv.SpreadsheetSafe}). Every file and folder written is owner-only.
      * No exams: nothing is written.
      */
-    public static List<Written> write(Path storeFile, ResultsStore store, List<String> exams, Path out,
+    public static List<Written> write(StoreLocation location, ResultsStore store, List<String> exams, Path out,
             XapiExport.Options xapiOptions, boolean spreadsheetSafe, Progress progress, Cancellation cancellation)
             throws IOException, StoreException {
         if (exams.isEmpty()) {
@@ -114,7 +114,7 @@ public final class StoreExport {
                 String id = exams.get(e);
                 long first = (long) e * PARTS.size();
                 Path dir = OutputFolder.file(staged.folder(), id);
-                Written w = writeOne(storeFile, store, id, dir, xapiOptions, spreadsheetSafe,
+                Written w = writeOne(location, store, id, dir, xapiOptions, spreadsheetSafe,
                         part -> {
                             progress.step(first + part, total, id + ": " + PARTS.get(part));
                             cancellation.stopIfCancelled(PARTS.get(part) + " of " + id);
@@ -135,7 +135,7 @@ public final class StoreExport {
         void part(int index);
     }
 
-    private static Written writeOne(Path storeFile, ResultsStore store, String examId, Path dir,
+    private static Written writeOne(StoreLocation location, ResultsStore store, String examId, Path dir,
             XapiExport.Options xapiOptions, boolean spreadsheetSafe, PartStarts listener)
             throws IOException, StoreException {
         listener.part(0);
@@ -150,7 +150,7 @@ public final class StoreExport {
         }
         listener.part(1);
         QtiResultsExport.Written qti = QtiResultsExport.write(store, examId, dir.resolve("qti-results"),
-                scoring(storeFile, examId));
+                scoring(location, examId));
         listener.part(2);
         XapiExport.Written xapi = XapiExport.write(store, examId, dir.resolve("xapi-statements.jsonl"), xapiOptions);
         org.inkgate.format.io.OwnerOnly.tree(dir);
@@ -160,12 +160,15 @@ public final class StoreExport {
     }
 
     /** The ratings to report, once the store holds a rubric for the exam (collect --exam registers it). */
-    private static QtiResultsExport.Scoring scoring(Path storeFile, String id) throws IOException {
+    private static QtiResultsExport.Scoring scoring(StoreLocation location, String id) throws IOException {
+        if (location instanceof StoreLocation.Server) {
+            return QtiResultsExport.Scoring.NONE; // rating is on store files only in this version: a server store holds no ratings
+        }
         try {
-            if (!Stores.hasRubric(StoreLocation.file(storeFile), id)) {
+            if (!Stores.hasRubric(location, id)) {
                 return QtiResultsExport.Scoring.NONE;
             }
-            try (RatingStore rating = Stores.openRating(StoreLocation.file(storeFile), id)) {
+            try (RatingStore rating = Stores.openRating(location, id)) {
                 return new QtiResultsExport.Scoring(rating.rubric(), rating.scoresByResponse());
             }
         } catch (RatingException e) {

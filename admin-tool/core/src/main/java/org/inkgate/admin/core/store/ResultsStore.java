@@ -45,11 +45,17 @@ public interface ResultsStore extends AutoCloseable {
     /** The sitting with this package id and content (a re-sent copy), if any. */
     Optional<Long> sittingByContent(String packageId, String contentSha256) throws StoreException;
 
-    /** Imports one opened package in one transaction; returns the new sitting id. */
-    long importSitting(SittingRecord sitting) throws StoreException;
+    /**
+     * Imports one opened package in one transaction; returns the new sitting id, or empty when the
+     * store holds the package already (the same file, or the same package id and content), which
+     * another collect into the same store may have stored since this one looked: each package is
+     * stored once (docs/formats.md, "Several collects at once").
+     */
+    Optional<Long> importSitting(SittingRecord sitting) throws StoreException;
 
-    /** Imports one opened package in one transaction; returns the new sitting id. */
-    default long importSitting(OpenedResponse opened, String contentSha256, String sourceFile) throws StoreException {
+    /** As {@link #importSitting(SittingRecord)}. */
+    default Optional<Long> importSitting(OpenedResponse opened, String contentSha256, String sourceFile)
+            throws StoreException {
         return importSitting(SittingRecord.of(opened, contentSha256, sourceFile));
     }
 

@@ -21,6 +21,9 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * A simulated 200-seat sitting: a bundle built by the bundle builder, packages written by the
@@ -28,7 +31,12 @@ import org.junit.jupiter.api.io.TempDir;
  * foreign packages mixed in. The expected rows follow from how the files were made.
  */
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class CollectionEndToEndTest {
+
+    @Parameter
+    StoreFixture.Kind kind;
 
     private static final int SEATS = 200;
     private static final int EVENTS = 40;
@@ -96,8 +104,7 @@ class CollectionEndToEndTest {
 
     @Test
     void collect_mixedSitting_storesExactlyTheGoodPackagesAndNamesEachProblem() throws Exception {
-        Path db = dir.resolve("results-" + System.nanoTime() + ".db");
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        try (ResultsStore store = StoreFixture.create(kind, dir, "results-" + System.nanoTime() + ".db").results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             store.registerRoster("test-exam", sitting.roster());
             List<Outcome> outcomes = collector(store).collect(Collector.packageFiles(List.of(packages)), o -> { });

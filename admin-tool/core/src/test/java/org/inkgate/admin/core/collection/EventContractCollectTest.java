@@ -22,16 +22,35 @@ import org.inkgate.format.response.ResponsePackageWriter;
 import org.inkgate.format.testutil.TestKeys;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Packages whose process log breaks the event contract (docs/formats.md, "Event types"), written by
  * the format's real writer and signed by an enrolled test installation, so that only the contract
  * can refuse them, collected through the collection service the collect command runs.
  */
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class EventContractCollectTest {
+
+    /** The same tests against a SQLite file and a PostgreSQL database. */
+    @Parameter
+    StoreFixture.Kind kind;
 
     @TempDir
     Path dir;
+
+    private StoreFixture store;
+
+    /** This test's store, made on first use. */
+    private StoreFixture store() {
+        if (store == null) {
+            store = StoreFixture.create(kind, dir);
+        }
+        return store;
+    }
 
     private Sitting sitting;
     private Path packages;
@@ -62,7 +81,7 @@ class EventContractCollectTest {
     }
 
     private CollectionRun.Report collect() throws Exception {
-        return CollectionRun.run(new CollectionRun.Request(dir.resolve("results.db"), List.of(sitting.bundle()),
+        return CollectionRun.run(new CollectionRun.Request(store().location(), List.of(sitting.bundle()),
                 List.of(packages), TestKeys.OWNER_ENCRYPTION, TestKeys.ownerFingerprint(), TestKeys.installations(),
                 null, null, null, 2), n -> { }, o -> { });
     }
@@ -104,7 +123,7 @@ class EventContractCollectTest {
         assertContains(messages.get("C005-task-event-without-task.inkresp"), "event 5 (text.insert): a task-level event without a task");
         messages.values().forEach(m -> assertContains(m, "keep the file and report it"));
 
-        try (ResultsStore store = StoreFixture.of(dir.resolve("results.db")).results()) {
+        try (ResultsStore store = store().results()) {
             // only C001's and C006's events are in the store; the refusals are recorded with their reason
             List<String> candidates = new ArrayList<>();
             store.forEachEvent("test-exam", e -> candidates.add(e.candidateNumber()));

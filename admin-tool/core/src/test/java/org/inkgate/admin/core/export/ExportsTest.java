@@ -27,28 +27,37 @@ import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.testutil.TestKeys;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
 import org.w3c.dom.Document;
 import org.w3c.dom.Element;
 import org.w3c.dom.Node;
+import org.junit.jupiter.params.BeforeParameterizedClassInvocation;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Exports checked against the standards' structure as condensed in the team's STANDARDS.md (QTI 3.0
  * results; xAPI 1.0.3 statement rules) and against RFC 4180 by reading the CSV back.
  */
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class ExportsTest {
+
+    /** The same tests against a SQLite file and a PostgreSQL database. */
+    @Parameter
+    StoreFixture.Kind kind;
 
     private static final String QTI = "http://www.imsglobal.org/xsd/imsqti_result_v3p0";
     private Path dir;
-    private Path db;
+    private StoreFixture db;
     private Sitting sitting;
 
-    @BeforeAll
-    void collectASmallSitting(@TempDir Path tempDir) throws Exception {
+    @BeforeParameterizedClassInvocation // once per kind of store
+    void collectASmallSitting(StoreFixture.Kind kindOfStore, @TempDir Path tempDir) throws Exception {
         dir = tempDir;
         sitting = Sitting.make(dir, 12);
         Path packages = Files.createDirectories(dir.resolve("packages"));
@@ -58,8 +67,8 @@ class ExportsTest {
             client.write(r.candidateNumber(), sitting.formOf(r.candidateNumber()), r.candidateNumber().hashCode(), 300,
                     packages.resolve(r.candidateNumber() + ".inkresp"));
         }
-        db = dir.resolve("results.db");
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        db = StoreFixture.create(kindOfStore, dir);
+        try (ResultsStore store = db.results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             store.registerRoster("test-exam", sitting.roster());
             new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
@@ -70,7 +79,7 @@ class ExportsTest {
     @Test
     void tidyCsv_readBackAsRfc4180_givesOneRowPerResponseWithTheStoredValues() throws Exception {
         Path out = dir.resolve("csv");
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        try (ResultsStore store = db.results()) {
             long[] rows = TidyCsvExport.write(store, "test-exam", out);
             assertEquals(24, rows[0], "12 candidates x 2 tasks");
             List<Rows.Response> stored = new ArrayList<>();
@@ -96,7 +105,7 @@ class ExportsTest {
     @Test
     void qtiResults_followTheResultsElementStructure() throws Exception {
         Path out = dir.resolve("qti");
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        try (ResultsStore store = db.results()) {
             assertEquals(12, QtiResultsExport.write(store, "test-exam", out).files());
         }
         DocumentBuilderFactory f = DocumentBuilderFactory.newInstance();
@@ -141,7 +150,7 @@ class ExportsTest {
     @Test
     void xapiStatements_keepTheStatementRules() throws Exception {
         Path out = dir.resolve("statements.jsonl");
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        try (ResultsStore store = db.results()) {
             assertEquals(12 * 300, XapiExport.write(store, "test-exam", out).statements());
         }
         ObjectMapper m = new ObjectMapper();

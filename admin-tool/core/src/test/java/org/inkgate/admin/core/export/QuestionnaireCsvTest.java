@@ -25,10 +25,13 @@ import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.testutil.TestKeys;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.BeforeParameterizedClassInvocation;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * The questionnaire table: written from a store filled by the real collector (invented sitting of
@@ -36,15 +39,21 @@ import org.junit.jupiter.api.io.TempDir;
  * {@link Csv}), and the reader's refusals with row and column.
  */
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class QuestionnaireCsvTest {
 
+    /** The same tests against a SQLite file and a PostgreSQL database. */
+    @Parameter
+    StoreFixture.Kind kind;
+
     private static final String HEADER = String.join(",", QuestionnaireCsv.COLUMNS) + "\r\n";
-    private Path db;
+    private StoreFixture db;
     private Sitting sitting;
     private final Map<String, String> answered = new HashMap<>();
 
-    @BeforeAll
-    void collect(@TempDir Path dir) throws Exception {
+    @BeforeParameterizedClassInvocation // once per kind of store
+    void collect(StoreFixture.Kind kindOfStore, @TempDir Path dir) throws Exception {
         sitting = Sitting.make(dir, 6);
         Path packages = Files.createDirectories(dir.resolve("packages"));
         SimulatedSitting client = new SimulatedSitting(sitting.manifest(), sitting.manifestSha256(),
@@ -62,8 +71,8 @@ class QuestionnaireCsvTest {
                     packages.resolve(c + ".inkresp"));
             i++;
         }
-        db = dir.resolve("results.db");
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        db = StoreFixture.create(kindOfStore, dir);
+        try (ResultsStore store = db.results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             store.registerRoster("test-exam", sitting.roster());
             new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
@@ -75,7 +84,7 @@ class QuestionnaireCsvTest {
     @Test
     void write_collectedStore_oneRowPerSittingAndItem_readBackWithTheBundlesScale() throws Exception {
         StringWriter out = new StringWriter();
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        try (ResultsStore store = db.results()) {
             assertEquals(6, QuestionnaireCsv.write(store, "test-exam", out));
         }
         List<Csv.Row> raw = Csv.parse(out.toString());
@@ -107,7 +116,7 @@ class QuestionnaireCsvTest {
                 m.instructionsFile(), m.tasks(), m.conditions(), m.forms(),
                 List.of(new QuestionnaireSpec(q.id(), q.title(), List.of(changed))), m.packs(), m.roster(), m.ownerKeys(),
                 m.invigilatorPin(), m.seal(), m.practice(), m.entries());
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        try (ResultsStore store = db.results()) {
             StoreException e = assertThrows(StoreException.class,
                     () -> store.registerBundle(other, "0".repeat(64), TestKeys.ownerFingerprint()));
             assertTrue(e.getMessage().contains("differs from the item of that id"), e.getMessage());

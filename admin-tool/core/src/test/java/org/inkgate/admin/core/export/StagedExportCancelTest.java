@@ -186,7 +186,7 @@ class StagedExportCancelTest {
     private List<StoreExport.Written> export(Path out, StoreExport.Progress progress, Cancellation cancellation)
             throws Exception {
         try (ResultsStore store = StoreFixture.of(db).results()) {
-            return StoreExport.write(db, store, List.of(EXAM), out, new XapiExport.Options(XapiExport.BASE, false), false,
+            return StoreExport.write(org.inkgate.admin.core.store.StoreLocation.file(db), store, List.of(EXAM), out, new XapiExport.Options(XapiExport.BASE, false), false,
                     progress, cancellation);
         }
     }

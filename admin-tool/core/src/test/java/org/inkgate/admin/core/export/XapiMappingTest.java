@@ -26,9 +26,18 @@ import org.inkgate.format.response.ResponsePackageWriter;
 import org.inkgate.format.testutil.TestKeys;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /** Every event type is exported with a published verb, or listed as not exported with a reason. */
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class XapiMappingTest {
+
+    /** The same tests against a SQLite file and a PostgreSQL database. */
+    @Parameter
+    StoreFixture.Kind kind;
 
     /** ADL's xAPI verb vocabulary (http://adlnet.gov/expapi/verbs/; this list is from memory of the ADL vocabulary). */
     private static final Set<String> ADL_VERBS = Set.of("answered", "asked", "attempted", "attended", "commented",
@@ -98,7 +107,7 @@ class XapiMappingTest {
         new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic())
                 .write(d, EveryEventType.log(d), packages.resolve("C001.inkresp"));
         Path out = dir.resolve("statements.jsonl");
-        try (ResultsStore store = StoreFixture.of(dir.resolve("results.db")).results()) {
+        try (ResultsStore store = StoreFixture.create(kind, dir).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             List<Outcome> outcomes = new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                     Map.of(sitting.manifestSha256(), sitting.manifest()), 1).collect(List.of(packages.resolve("C001.inkresp")), o -> { });

@@ -19,21 +19,30 @@ import org.inkgate.admin.core.testutil.StoreFixture;
 import org.inkgate.admin.core.testutil.Sitting;
 import org.inkgate.format.response.EventType;
 import org.inkgate.format.testutil.TestKeys;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestInstance;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.BeforeParameterizedClassInvocation;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /** The xAPI export's IRI base, verb displays and light form, over a collected store. */
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class XapiOptionsTest {
+
+    /** The same tests against a SQLite file and a PostgreSQL database. */
+    @Parameter
+    StoreFixture.Kind kind;
 
     private static final String OWN = "https://assessment.invented-owner.test/xapi";
     private Path dir;
-    private Path db;
+    private StoreFixture db;
 
-    @BeforeAll
-    void collect(@TempDir Path tempDir) throws Exception {
+    @BeforeParameterizedClassInvocation // once per kind of store
+    void collect(StoreFixture.Kind kindOfStore, @TempDir Path tempDir) throws Exception {
         dir = tempDir;
         Sitting sitting = Sitting.make(dir, 6);
         Path packages = Files.createDirectories(dir.resolve("packages"));
@@ -43,8 +52,8 @@ class XapiOptionsTest {
             client.write(r.candidateNumber(), sitting.formOf(r.candidateNumber()), r.candidateNumber().hashCode(), 300,
                     packages.resolve(r.candidateNumber() + ".inkresp"));
         }
-        db = dir.resolve("results.db");
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        db = StoreFixture.create(kindOfStore, dir);
+        try (ResultsStore store = db.results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                     Map.of(sitting.manifestSha256(), sitting.manifest()), 2).collect(Collector.packageFiles(List.of(packages)), o -> { });
@@ -52,7 +61,7 @@ class XapiOptionsTest {
     }
 
     private XapiExport.Written write(Path file, XapiExport.Options options) throws Exception {
-        try (ResultsStore store = StoreFixture.of(db).results()) {
+        try (ResultsStore store = db.results()) {
             return XapiExport.write(store, "test-exam", file, options);
         }
     }

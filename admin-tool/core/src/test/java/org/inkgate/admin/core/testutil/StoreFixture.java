@@ -14,15 +14,18 @@ import org.inkgate.admin.core.store.Stores;
 /**
  * Where a test's store is and how the test opens it: every store test opens its stores here,
  * through the same factory the programs use ({@link Stores}), never through an implementation.
- * Today there is one kind (a SQLite file); a test written against this fixture can later be
- * parameterised over {@link #kinds()} to run against every kind of store.
+ * The results store tests are parameterised over {@link #kinds()} ({@code @ParameterizedClass}), so
+ * the same test bodies run against a SQLite file and against a database on the test PostgreSQL
+ * server ({@link PostgresServer}, one server per test JVM, one fresh database per store).
  */
 public record StoreFixture(Kind kind, StoreLocation location) {
 
     /** The kinds of store the tests can run against. */
     public enum Kind {
         /** A SQLite file in the test's temporary folder. */
-        SQLITE
+        SQLITE,
+        /** A fresh database on the test PostgreSQL server. */
+        POSTGRESQL
     }
 
     /** Every kind, for parameterised tests ({@code @MethodSource}). */
@@ -32,9 +35,27 @@ public record StoreFixture(Kind kind, StoreLocation location) {
 
     /** A new, empty store of the given kind for a test whose temporary folder is {@code dir}. */
     public static StoreFixture create(Kind kind, Path dir) {
+        return create(kind, dir, ResultsStore.DEFAULT_FILE_NAME);
+    }
+
+    /** As {@link #create(Kind, Path)}, a SQLite store taking the file name {@code name}. */
+    public static StoreFixture create(Kind kind, Path dir, String name) {
         return switch (kind) {
-            case SQLITE -> of(dir.resolve(ResultsStore.DEFAULT_FILE_NAME));
+            case SQLITE -> of(dir.resolve(name));
+            case POSTGRESQL -> {
+                try {
+                    yield new StoreFixture(kind, PostgresServer.freshStore("results"));
+                } catch (java.sql.SQLException e) {
+                    throw new IllegalStateException("cannot make a database on the test PostgreSQL server: "
+                            + e.getMessage(), e);
+                }
+            }
         };
+    }
+
+    /** Opens the store for the steps that only read it (export, missing). */
+    public ResultsStore resultsForReading() throws StoreException {
+        return Stores.openResultsForReading(location);
     }
 
     /** The SQLite store in {@code file} (made by the real collect or by a test's own builder). */

@@ -14,7 +14,7 @@ import java.util.function.Function;
 /**
  * The one transaction and SQL layer every store shares: one JDBC connection, transactions that
  * are retried when the database is busy, reads, and typed row mapping. The SQL itself stays in
- * each store; this class is dialect-neutral (SQLite today, PostgreSQL next), so only the busy
+ * each store; this class is dialect-neutral (SQLite and PostgreSQL), so only the busy
  * test ({@link Busy}) knows both.
  *
  * <p>A store's own refusal inside a transaction travels as an {@link SQLException} whose cause is

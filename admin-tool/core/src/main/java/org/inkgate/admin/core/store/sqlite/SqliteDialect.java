@@ -1,0 +1,47 @@
+package org.inkgate.admin.core.store.sqlite;
+
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.sql.Statement;
+import org.inkgate.admin.core.store.sql.Dialect;
+
+/**
+ * SQLite: the schema's statements run as written, the version lives in {@code PRAGMA user_version}
+ * (so an older inkgate-admin still sees a newer store and refuses it). One store file has one
+ * writer at a time, and collect's lock beside the file keeps a second collect out, so the
+ * migration needs no lock of its own.
+ */
+public final class SqliteDialect implements Dialect {
+
+    public static final SqliteDialect INSTANCE = new SqliteDialect();
+
+    private SqliteDialect() {
+    }
+
+    @Override
+    public String name() {
+        return "SQLite";
+    }
+
+    @Override
+    public String ddl(String statement) {
+        return statement;
+    }
+
+    @Override
+    public int schemaVersion(Connection c) throws SQLException {
+        try (Statement s = c.createStatement(); var rs = s.executeQuery("PRAGMA user_version")) {
+            return rs.getInt(1);
+        }
+    }
+
+    @Override
+    public void recordSchemaVersion(Statement s, int version) throws SQLException {
+        s.execute("PRAGMA user_version = " + version);
+    }
+
+    @Override
+    public void lockSchema(Statement s) {
+        // the file's single writer serialises migrations (see the class comment)
+    }
+}
