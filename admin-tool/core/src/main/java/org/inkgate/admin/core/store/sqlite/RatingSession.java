@@ -37,10 +37,14 @@ final class RatingSession {
             + " ON se.flag_id = sf.flag_id WHERE sf.sitting_id = a.sitting_id AND sf.task_id = a.task_id)";
     static final String SUBMITTED = "EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)";
     /**
-     * True for a real rating assignment (alias a): not a control script mixed into a queue. Control
-     * ratings measure the rater; they never enter a candidate's flags, final scores or exports.
+     * True for a live rating assignment (alias a): not a control script mixed into a queue, nor a
+     * script of the qualification set. Those ratings measure the rater; they never enter a
+     * candidate's flags, final scores or exports.
      */
-    static final String NOT_CONTROL = "a.assignment_id NOT IN (SELECT assignment_id FROM control_assignments)";
+    static final String LIVE = "(a.assignment_id NOT IN (SELECT assignment_id FROM control_assignments) AND"
+            + " a.assignment_id NOT IN (SELECT assignment_id FROM qualification_assignments))";
+    /** True for a script of the qualification set (alias a). */
+    static final String QUALIFICATION = "a.assignment_id IN (SELECT assignment_id FROM qualification_assignments)";
     /** Items a queue shows: a settled response leaves it, unless the rater had already rated it (kept as done). */
     static final String IN_QUEUE = "(NOT " + SETTLED + " OR " + SUBMITTED + ")";
 
@@ -88,7 +92,10 @@ final class RatingSession {
     record Assignment(long id, long sittingId, String taskId, String raterId, RatingDesk.Kind kind) {
     }
 
-    /** The assignment behind a blind id of this exam; with a rater, it must be in that rater's queue. */
+    /**
+     * The assignment behind a blind id of this exam; with a rater, it must be in that rater's queue
+     * and, for a live item, live rating must be open to the rater (the qualification set).
+     */
     Assignment assignment(String raterId, String blindId) throws RatingException {
         List<Assignment> found = read("looking up " + blindId, () -> db.list("SELECT a.assignment_id, a.sitting_id,"
                 + " a.task_id, a.rater_id, a.kind FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
@@ -101,11 +108,36 @@ final class RatingSession {
         if (raterId != null && !a.raterId().equals(raterId)) {
             throw new RatingException("response " + blindId + " is not in rater " + raterId + "'s queue");
         }
+        if (raterId != null) {
+            QualificationGate.refuseIfClosed(this, raterId, a.id());
+        }
         return a;
     }
 
+    /**
+     * Inside a transaction: the sitting of a candidate's one response to a task, for marking it as
+     * {@code use} (e.g. "a control script"); refused when there is none or a conflict left two.
+     */
+    long sittingOfResponse(String candidateNumber, String taskId, String use) throws SQLException {
+        List<Long> sittings = db.list("SELECT r.sitting_id FROM responses r JOIN sittings s ON s.sitting_id"
+                + " = r.sitting_id WHERE s.exam_id=? AND s.candidate_number=? AND r.task_id=?",
+                rs -> rs.getLong(1), examId, candidateNumber, taskId);
+        if (sittings.size() != 1) {
+            throw SqlSession.refusal(new RatingException(sittings.isEmpty()
+                    ? "no response of candidate " + candidateNumber + " to task " + taskId + " in exam "
+                    + examId + "; check the candidate number and task id"
+                    : "candidate " + candidateNumber + " has " + sittings.size() + " responses to task " + taskId
+                    + " (a conflict); settle the conflict before using the response as " + use));
+        }
+        return sittings.get(0);
+    }
+
     static RatingDesk.Kind kind(String stored) {
-        return "adjudication".equals(stored) ? RatingDesk.Kind.ADJUDICATION : RatingDesk.Kind.RATING;
+        return switch (stored == null ? "" : stored) {
+            case "adjudication" -> RatingDesk.Kind.ADJUDICATION;
+            case "qualification" -> RatingDesk.Kind.QUALIFICATION;
+            default -> RatingDesk.Kind.RATING;
+        };
     }
 
     /** A rater's latest submission. */

@@ -36,12 +36,17 @@ final class SqliteDesk implements RatingDesk {
     public List<QueueItem> queue(String raterId) throws RatingException {
         s.requireRater(raterId);
         // ORDER BY a boolean expression (own items before adjudications): false sorts first in SQLite and PostgreSQL
+        boolean liveOpen = s.read("reading " + raterId + "'s qualification",
+                () -> QualificationGate.standing(s, raterId)).liveOpen();
+        // qualification scripts lie before every live item (negative places); while live rating is closed, only they show
         List<QueueItem> raw = s.read("reading the queue of " + raterId, () -> s.db.list("SELECT a.blind_id, a.task_id,"
-                + " a.kind, " + RatingSession.SUBMITTED + " FROM rating_assignments a JOIN sittings s"
+                + " CASE WHEN " + RatingSession.QUALIFICATION + " THEN 'qualification' ELSE a.kind END, "
+                + RatingSession.SUBMITTED + " FROM rating_assignments a JOIN sittings s"
                 + " ON s.sitting_id = a.sitting_id WHERE a.rater_id=? AND s.exam_id=? AND " + RatingSession.IN_QUEUE
                 + " ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
                 rs -> new QueueItem(0, rs.getString(1), rs.getString(2), RatingSession.kind(rs.getString(3)),
-                        rs.getBoolean(4)), raterId, s.examId));
+                        rs.getBoolean(4)), raterId, s.examId)).stream()
+                .filter(q -> liveOpen || q.kind() == Kind.QUALIFICATION).toList();
         List<QueueItem> out = new ArrayList<>(raw.size());
         for (int i = 0; i < raw.size(); i++) {
             QueueItem q = raw.get(i);
