@@ -408,11 +408,33 @@ public final class Migrations {
                       FOREIGN KEY (sitting_id, task_id) REFERENCES responses(sitting_id, task_id)
                     )""",
                     """
-                    CREATE TABLE qualification_assignments (
-                      assignment_id INTEGER PRIMARY KEY REFERENCES rating_assignments(assignment_id),
+                    CREATE TABLE qualification_items (
+                      item_id INTEGER PRIMARY KEY,
                       sitting_id INTEGER NOT NULL,
                       task_id TEXT NOT NULL,
+                      rater_id TEXT NOT NULL REFERENCES raters(rater_id),
+                      blind_id TEXT NOT NULL UNIQUE,
+                      position INTEGER NOT NULL,
+                      given_at TEXT NOT NULL,
+                      UNIQUE (sitting_id, task_id, rater_id),
                       FOREIGN KEY (sitting_id, task_id) REFERENCES qualification_scripts(sitting_id, task_id)
+                    )""",
+                    """
+                    CREATE TABLE qualification_ratings (
+                      rating_id INTEGER PRIMARY KEY,
+                      item_id INTEGER NOT NULL REFERENCES qualification_items(item_id),
+                      scores_json TEXT NOT NULL,
+                      comment TEXT NOT NULL,
+                      submitted_at TEXT NOT NULL,
+                      via TEXT NOT NULL
+                    )""",
+                    "CREATE INDEX qualification_ratings_by_item ON qualification_ratings(item_id)",
+                    """
+                    CREATE TABLE qualification_drafts (
+                      item_id INTEGER PRIMARY KEY REFERENCES qualification_items(item_id),
+                      scores_json TEXT NOT NULL,
+                      comment TEXT NOT NULL,
+                      saved_at TEXT NOT NULL
                     )""",
                     """
                     CREATE TABLE qualification_rules (

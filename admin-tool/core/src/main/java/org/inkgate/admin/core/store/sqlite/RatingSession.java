@@ -37,14 +37,10 @@ final class RatingSession {
             + " ON se.flag_id = sf.flag_id WHERE sf.sitting_id = a.sitting_id AND sf.task_id = a.task_id)";
     static final String SUBMITTED = "EXISTS(SELECT 1 FROM rating_submissions x WHERE x.assignment_id = a.assignment_id)";
     /**
-     * True for a live rating assignment (alias a): not a control script mixed into a queue, nor a
-     * script of the qualification set. Those ratings measure the rater; they never enter a
-     * candidate's flags, final scores or exports.
+     * True for a real rating assignment (alias a): not a control script mixed into a queue. Control
+     * ratings measure the rater; they never enter a candidate's flags, final scores or exports.
      */
-    static final String LIVE = "(a.assignment_id NOT IN (SELECT assignment_id FROM control_assignments) AND"
-            + " a.assignment_id NOT IN (SELECT assignment_id FROM qualification_assignments))";
-    /** True for a script of the qualification set (alias a). */
-    static final String QUALIFICATION = "a.assignment_id IN (SELECT assignment_id FROM qualification_assignments)";
+    static final String NOT_CONTROL = "a.assignment_id NOT IN (SELECT assignment_id FROM control_assignments)";
     /** Items a queue shows: a settled response leaves it, unless the rater had already rated it (kept as done). */
     static final String IN_QUEUE = "(NOT " + SETTLED + " OR " + SUBMITTED + ")";
 
@@ -94,7 +90,7 @@ final class RatingSession {
 
     /**
      * The assignment behind a blind id of this exam; with a rater, it must be in that rater's queue
-     * and, for a live item, live rating must be open to the rater (the qualification set).
+     * and live rating must be open to the rater (the qualification set).
      */
     Assignment assignment(String raterId, String blindId) throws RatingException {
         List<Assignment> found = read("looking up " + blindId, () -> db.list("SELECT a.assignment_id, a.sitting_id,"
@@ -109,7 +105,8 @@ final class RatingSession {
             throw new RatingException("response " + blindId + " is not in rater " + raterId + "'s queue");
         }
         if (raterId != null) {
-            QualificationGate.refuseIfClosed(this, raterId, a.id());
+            // a live item: live rating must be open to the rater (qualification scripts have their own table)
+            QualificationItems.refuseIfClosed(this, raterId);
         }
         return a;
     }
@@ -135,7 +132,6 @@ final class RatingSession {
     static RatingDesk.Kind kind(String stored) {
         return switch (stored == null ? "" : stored) {
             case "adjudication" -> RatingDesk.Kind.ADJUDICATION;
-            case "qualification" -> RatingDesk.Kind.QUALIFICATION;
             default -> RatingDesk.Kind.RATING;
         };
     }

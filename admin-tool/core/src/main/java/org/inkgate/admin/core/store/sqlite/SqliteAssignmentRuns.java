@@ -100,7 +100,7 @@ final class SqliteAssignmentRuns implements AssignmentRuns {
         Map<String, List<String>> byResponse = new TreeMap<>();
         // || concatenates in SQLite and PostgreSQL alike (a bigint and text give text in both)
         s.db.each("SELECT a.sitting_id || '/' || a.task_id, a.rater_id FROM rating_assignments a JOIN sittings s"
-                + " ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND " + RatingSession.LIVE
+                + " ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND " + RatingSession.NOT_CONTROL
                 + " ORDER BY a.assignment_id",
                 rs -> byResponse.computeIfAbsent(rs.getString(1), x -> new ArrayList<>()).add(rs.getString(2)), s.examId);
         return RaterLinks.ofRaterSets(byResponse);

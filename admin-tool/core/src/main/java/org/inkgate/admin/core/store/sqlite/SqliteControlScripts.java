@@ -55,7 +55,7 @@ final class SqliteControlScripts implements ControlScripts {
                 // a control response must have its own raters first: a later assignment run could otherwise
                 // hand it to a rater who already holds it as a control item
                 if (s.db.list("SELECT 1 FROM rating_assignments a WHERE a.sitting_id=? AND a.task_id=? AND "
-                        + RatingSession.LIVE, rs -> 1, control[0], control[1]).isEmpty()) {
+                        + RatingSession.NOT_CONTROL, rs -> 1, control[0], control[1]).isEmpty()) {
                     String candidate = s.db.list("SELECT candidate_number FROM sittings WHERE sitting_id=?",
                             rs -> rs.getString(1), control[0]).get(0);
                     throw SqlSession.refusal(new RatingException("the control script of candidate " + candidate

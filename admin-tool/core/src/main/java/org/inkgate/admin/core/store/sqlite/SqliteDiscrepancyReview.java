@@ -79,10 +79,10 @@ final class SqliteDiscrepancyReview implements DiscrepancyReview {
     void evaluate(long sittingId, String taskId, String now) throws SQLException {
         List<FinalScore.Submitted> ratings = new ArrayList<>();
         int expected = s.db.count("SELECT COUNT(*) FROM rating_assignments a WHERE a.sitting_id=? AND a.task_id=?"
-                + " AND a.kind='rating' AND " + RatingSession.LIVE, sittingId, taskId);
+                + " AND a.kind='rating' AND " + RatingSession.NOT_CONTROL, sittingId, taskId);
         s.db.each("SELECT a.rater_id, a.kind, (SELECT x.scores_json FROM rating_submissions x WHERE x.assignment_id ="
                 + " a.assignment_id ORDER BY x.submission_id DESC LIMIT 1) FROM rating_assignments a"
-                + " WHERE a.sitting_id=? AND a.task_id=? AND " + RatingSession.LIVE + " ORDER BY a.assignment_id",
+                + " WHERE a.sitting_id=? AND a.task_id=? AND " + RatingSession.NOT_CONTROL + " ORDER BY a.assignment_id",
                 rs -> {
                     if (rs.getString(3) != null) {
                         ratings.add(new FinalScore.Submitted(rs.getString(1), RatingSession.kind(rs.getString(2)),
@@ -139,7 +139,7 @@ final class SqliteDiscrepancyReview implements DiscrepancyReview {
         // group_concat is SQLite's; the PostgreSQL port writes string_agg(a.rater_id, ' ' ORDER BY a.assignment_id)
         return s.read("listing flags", () -> s.db.list("SELECT f.flag_id, f.task_id, f.reason, f.flagged_at,"
                 + " (SELECT group_concat(a.rater_id, ' ') FROM rating_assignments a WHERE a.sitting_id = f.sitting_id"
-                + "   AND a.task_id = f.task_id AND a.kind = 'rating' AND " + RatingSession.LIVE + "),"
+                + "   AND a.task_id = f.task_id AND a.kind = 'rating' AND " + RatingSession.NOT_CONTROL + "),"
                 + " (SELECT a.rater_id FROM rating_assignments a WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id"
                 + "   AND a.kind = 'adjudication' ORDER BY a.assignment_id DESC LIMIT 1),"
                 + " (SELECT a.blind_id FROM rating_assignments a WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id"

@@ -34,7 +34,7 @@ final class SqliteRatingResults implements RatingResults {
                     + " JOIN sittings s ON s.sitting_id = a.sitting_id"
                     + " JOIN responses r ON r.sitting_id = a.sitting_id AND r.task_id = a.task_id"
                     + " LEFT JOIN candidates c ON c.exam_id = s.exam_id AND c.candidate_number = s.candidate_number"
-                    + " WHERE s.exam_id=? AND " + RatingSession.LIVE
+                    + " WHERE s.exam_id=? AND " + RatingSession.NOT_CONTROL
                     + " ORDER BY s.candidate_number, a.task_id, s.sitting_id, a.rater_id, g.criterion_id",
                     rs -> sink.accept(new RatingRow(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
                             rs.getString(5), rs.getString(6), rs.getString(7), rs.getInt(8), rs.getString(9),
@@ -78,7 +78,7 @@ final class SqliteRatingResults implements RatingResults {
             Map<ResponseScores.Key, Map<String, RatingDesk.Kind>> kinds = new HashMap<>();
             s.db.each("SELECT a.sitting_id, a.task_id, a.rater_id, a.kind, g.criterion_id, g.score FROM ratings g"
                     + " JOIN rating_assignments a ON a.assignment_id = g.assignment_id"
-                    + " JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND " + RatingSession.LIVE
+                    + " JOIN sittings s ON s.sitting_id = a.sitting_id WHERE s.exam_id=? AND " + RatingSession.NOT_CONTROL
                     + " ORDER BY a.sitting_id, a.task_id, a.kind DESC, a.rater_id, g.criterion_id", rs -> {
                         var key = new ResponseScores.Key(rs.getLong(1), rs.getString(2));
                         ratings.computeIfAbsent(key, k -> new LinkedHashMap<>())
