@@ -38,6 +38,21 @@ public interface QualificationSet {
             }
         }
 
+        /** The limits in words, e.g. "adjacent agreement at least 0.80, mean difference within +-1.00". */
+        public String describe() {
+            List<String> parts = new java.util.ArrayList<>();
+            if (minExact != null) {
+                parts.add(String.format(java.util.Locale.ROOT, "exact agreement at least %.2f", minExact));
+            }
+            if (minAdjacent != null) {
+                parts.add(String.format(java.util.Locale.ROOT, "adjacent agreement at least %.2f", minAdjacent));
+            }
+            if (maxMeanDifference != null) {
+                parts.add(String.format(java.util.Locale.ROOT, "mean difference within +-%.2f", maxMeanDifference));
+            }
+            return String.join(", ", parts);
+        }
+
         ControlMonitor.Thresholds thresholds() {
             return new ControlMonitor.Thresholds(minExact, minAdjacent, maxMeanDifference, null);
         }
