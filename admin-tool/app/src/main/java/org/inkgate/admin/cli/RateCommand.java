@@ -39,7 +39,8 @@ import picocli.CommandLine.Spec;
         subcommands = {RateCommand.Raters.class, RateCommand.Assign.class, RateCommand.Progress.class,
             RateCommand.Sheet.class, RateCommand.Rule.class, RateCommand.Flags.class, RateCommand.Resolve.class,
             RateCommand.Export.class, RateCommand.Refer.class, RateCommand.ReferralsGroup.class,
-            RateControlCommand.class, RateControlCommand.Monitor.class, DeskCommand.class, CommandLine.HelpCommand.class})
+            RateControlCommand.class, RateControlCommand.Monitor.class, RateQualificationCommand.class, DeskCommand.class,
+            CommandLine.HelpCommand.class})
 final class RateCommand extends GroupCommand {
 
     /** --store and --exam, shared by every rating step. */

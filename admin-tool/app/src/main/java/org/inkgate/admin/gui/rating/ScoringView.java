@@ -35,6 +35,9 @@ final class ScoringView {
 
     static final String ADJUDICATION_NOTE = "Adjudication: an independent further rating. Earlier ratings are not"
             + " shown; score the response on its own, as you would any other.";
+    static final String QUALIFICATION_NOTE = "Qualification script: the test owner has agreed scores for it. Score it"
+            + " as you would any other; your live scripts open when you have scored the qualification set within the"
+            + " test owner's limits.";
     static final String DONE_NOTE = "You have submitted this rating. A change counts only when you save again; the"
             + " earlier rating stays in the record.";
 
@@ -164,7 +167,12 @@ final class ScoringView {
     }
 
     static String queueText(QueueItem item) {
-        return item.position() + ".  " + item.blindId() + (item.kind() == RatingDesk.Kind.ADJUDICATION ? "  adjudication" : "")
+        String kind = switch (item.kind()) {
+            case ADJUDICATION -> "  adjudication";
+            case QUALIFICATION -> "  qualification";
+            case RATING -> "";
+        };
+        return item.position() + ".  " + item.blindId() + kind
                 + "\n      " + (item.done() ? "rated" : "to rate") + "  \u00b7  " + item.taskId();
     }
 
@@ -198,12 +206,15 @@ final class ScoringView {
             return item == null || r == null ? "" : "Task: " + r.taskTitle() + "   \u00b7   item " + item.position() + " of "
                     + model.queue().size();
         }, model.current(), model.response(), model.queue()));
-        Label kind = new Label(ADJUDICATION_NOTE);
+        Label kind = new Label();
         kind.setId("itemKind");
         kind.setWrapText(true);
         kind.getStyleClass().add("adjudication-note");
+        kind.textProperty().bind(Bindings.createStringBinding(() -> model.current().get() != null
+                && model.current().get().kind() == RatingDesk.Kind.QUALIFICATION ? QUALIFICATION_NOTE : ADJUDICATION_NOTE,
+                model.current()));
         kind.visibleProperty().bind(Bindings.createBooleanBinding(() -> model.current().get() != null
-                && model.current().get().kind() == RatingDesk.Kind.ADJUDICATION, model.current()));
+                && model.current().get().kind() != RatingDesk.Kind.RATING, model.current()));
         kind.managedProperty().bind(kind.visibleProperty());
 
         responseText.setId("responseText");

@@ -119,7 +119,8 @@ public final class ControlQuality {
         applyLimits();
     }
 
-    private static Double number(StringProperty field, String name) {
+    /** A limit typed in a field; blank: null (not checked). */
+    static Double number(StringProperty field, String name) {
         String t = field.get() == null ? "" : field.get().strip();
         if (t.isEmpty()) {
             return null;

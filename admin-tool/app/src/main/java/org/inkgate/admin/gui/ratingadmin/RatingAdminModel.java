@@ -13,6 +13,8 @@ import javafx.collections.FXCollections;
 import javafx.collections.ObservableList;
 import org.inkgate.admin.core.rating.AssignmentSummary;
 import org.inkgate.admin.core.rating.ControlScripts;
+import org.inkgate.admin.core.rating.QualificationSet;
+import org.inkgate.admin.core.rating.QualificationStanding;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.rating.Referrals;
@@ -31,7 +33,8 @@ public final class RatingAdminModel {
     /** What the tables show, read in one go after each change. */
     record Snapshot(List<RatingStore.RaterEntry> raters, List<RatingStore.ProgressRow> progress,
             List<RatingStore.Flag> flags, String state, List<Referrals.Referral> referrals,
-            List<ControlScripts.Control> controls, List<ControlScripts.ControlRating> controlRatings) {
+            List<ControlScripts.Control> controls, List<ControlScripts.ControlRating> controlRatings,
+            List<QualificationSet.Script> qualification, List<QualificationStanding> standings, String qualificationRule) {
     }
 
     /** One store call; returns the message for the test owner. */
@@ -57,6 +60,7 @@ public final class RatingAdminModel {
     private final SheetsAndScores sheets = new SheetsAndScores(this);
     private final ReferralDecisions referrals = new ReferralDecisions(this);
     private final ControlQuality controls = new ControlQuality(this);
+    private final QualificationQuality qualification = new QualificationQuality(this);
 
     public RatingAdminModel(AdminSession session) {
         this.session = session;
@@ -83,6 +87,7 @@ public final class RatingAdminModel {
     public SheetsAndScores sheets() { return sheets; }
     public ReferralDecisions referrals() { return referrals; }
     public ControlQuality controls() { return controls; }
+    public QualificationQuality qualification() { return qualification; }
 
     /** Reads raters, progress and flags again. */
     public void refresh() {
@@ -149,6 +154,7 @@ public final class RatingAdminModel {
         state.set(s.state());
         referrals.referrals().setAll(s.referrals());
         controls.show(s.controls(), s.controlRatings());
+        qualification.show(s.qualification(), s.standings(), s.qualificationRule());
     }
 
     /** As the command's --exam: may be left out when the store holds one exam. */
@@ -173,6 +179,8 @@ public final class RatingAdminModel {
         state.add(s.rule().map(r -> "Discrepancy rule: flag " + r.describe() + ".")
                 .orElse("No discrepancy rule is set: ratings are averaged without any check."));
         return new Snapshot(s.raterEntries(), s.progressRows(), s.flags(), String.join("\n", state), s.referrals(false),
-                s.controls(), s.controlRatings());
+                s.controls(), s.controlRatings(), s.qualificationScripts(), s.qualificationStandings(),
+                s.qualificationRule().map(r -> "Qualification rule: " + r.describe() + ".")
+                        .orElse("No qualification rule is set: live rating is open to every rater."));
     }
 }

@@ -164,6 +164,7 @@ public final class RatingAdminView implements Step {
                 ruleGrid,
                 Fields.heading("Flags and resolution entries"), flags, review, resolution,
                 QualityPanels.referrals(model.referrals(), work), QualityPanels.controls(model.controls(), work),
+                QualificationPanel.of(model.qualification(), work),
                 Fields.heading("Rating sheets and final scores"), Fields.note("A sheet lists the rater's queue under"
                         + " blind ids; the scripts folder beside it holds the texts and the rubric. A filled sheet is"
                         + " checked row by row and nothing is stored if any row is bad. ratings.csv and"

@@ -21,7 +21,12 @@ public interface RatingDesk {
         /** A first or second (or further) independent rating. */
         RATING,
         /** A third, independent rating of a response whose ratings disagreed by more than the rule allows. */
-        ADJUDICATION
+        ADJUDICATION,
+        /**
+         * A script of the qualification set, scored before live rating opens; the rater is told. Its
+         * rating measures the rater and never enters a candidate's scores.
+         */
+        QUALIFICATION
     }
 
     /**

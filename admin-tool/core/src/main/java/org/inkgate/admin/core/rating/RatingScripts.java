@@ -50,7 +50,12 @@ public final class RatingScripts {
             }
             RatingDesk.BlindResponse r = desk.response(raterId, id);
             String doc = "Response " + id + "\nTask: " + r.taskTitle() + " (" + r.taskId() + ")"
-                    + (item.kind() == RatingDesk.Kind.ADJUDICATION ? "\nA further independent rating" : "")
+                    + switch (item.kind()) {
+                        case ADJUDICATION -> "\nA further independent rating";
+                        case QUALIFICATION -> "\nA qualification script: score it as any other; your live scripts"
+                                + " follow once the qualification set is passed";
+                        case RATING -> "";
+                    }
                     + "\n\n" + r.text().replace("\r\n", "\n") + "\n";
             write(folder.resolve(id + ".txt"), doc);
             index.add(String.format("%4d  %s  %s%s", item.position(), id, r.taskId(), item.done() ? "  (rated)" : ""));

@@ -7,11 +7,12 @@ import org.inkgate.admin.core.source.ExamSource;
  * raters ({@link RaterRegister}), assignment runs ({@link AssignmentRuns}), the rater's desk
  * ({@link RatingDesk}) and its records ({@link DeskRecords}), referrals ({@link Referrals}),
  * discrepancy review and adjudication ({@link DiscrepancyReview}), final scores and ratings for
- * exports ({@link RatingResults}) and control scripts ({@link ControlScripts}). Opened from a
+ * exports ({@link RatingResults}), control scripts ({@link ControlScripts}) and the qualification set
+ * ({@link QualificationSet}). Opened from a
  * store location by {@code store.Stores}; calls are serialised, whichever thread they come from.
  */
 public interface RatingStore extends RatingDesk, RaterRegister, AssignmentRuns, DeskRecords, Referrals,
-        DiscrepancyReview, RatingResults, ControlScripts, AutoCloseable {
+        DiscrepancyReview, RatingResults, ControlScripts, QualificationSet, AutoCloseable {
 
     /** The exam this store rates. */
     String examId();

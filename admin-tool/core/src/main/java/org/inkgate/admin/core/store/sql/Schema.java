@@ -395,7 +395,65 @@ public final class Schema {
             new Migration(7, "task prompts, shown to raters beside the script",
                     List.of("ALTER TABLE tasks ADD COLUMN prompt TEXT")),
             new Migration(8, "the study design the exam's bundle declares (crossover, latin-square, parallel)",
-                    List.of("ALTER TABLE exams ADD COLUMN design TEXT")));
+                    List.of("ALTER TABLE exams ADD COLUMN design TEXT")),
+            new Migration(9, "qualification set: scripts with agreed scores a rater passes before live rating opens",
+                    List.of(
+                    """
+                    CREATE TABLE qualification_scripts (
+                      sitting_id INTEGER NOT NULL,
+                      task_id TEXT NOT NULL,
+                      agreed_scores_json TEXT NOT NULL,
+                      source TEXT NOT NULL,
+                      marked_at TEXT NOT NULL,
+                      PRIMARY KEY (sitting_id, task_id),
+                      FOREIGN KEY (sitting_id, task_id) REFERENCES responses(sitting_id, task_id)
+                    )""",
+                    """
+                    CREATE TABLE qualification_items (
+                      item_id INTEGER PRIMARY KEY,
+                      sitting_id INTEGER NOT NULL,
+                      task_id TEXT NOT NULL,
+                      rater_id TEXT NOT NULL REFERENCES raters(rater_id),
+                      blind_id TEXT NOT NULL UNIQUE,
+                      position INTEGER NOT NULL,
+                      given_at TEXT NOT NULL,
+                      UNIQUE (sitting_id, task_id, rater_id),
+                      FOREIGN KEY (sitting_id, task_id) REFERENCES qualification_scripts(sitting_id, task_id)
+                    )""",
+                    """
+                    CREATE TABLE qualification_ratings (
+                      rating_id INTEGER PRIMARY KEY,
+                      item_id INTEGER NOT NULL REFERENCES qualification_items(item_id),
+                      scores_json TEXT NOT NULL,
+                      comment TEXT NOT NULL,
+                      submitted_at TEXT NOT NULL,
+                      via TEXT NOT NULL
+                    )""",
+                    "CREATE INDEX qualification_ratings_by_item ON qualification_ratings(item_id)",
+                    """
+                    CREATE TABLE qualification_drafts (
+                      item_id INTEGER PRIMARY KEY REFERENCES qualification_items(item_id),
+                      scores_json TEXT NOT NULL,
+                      comment TEXT NOT NULL,
+                      saved_at TEXT NOT NULL
+                    )""",
+                    """
+                    CREATE TABLE qualification_rules (
+                      exam_id TEXT PRIMARY KEY REFERENCES exams(exam_id),
+                      min_exact REAL CHECK (min_exact IS NULL OR min_exact BETWEEN 0 AND 1),
+                      min_adjacent REAL CHECK (min_adjacent IS NULL OR min_adjacent BETWEEN 0 AND 1),
+                      max_mean_difference REAL CHECK (max_mean_difference IS NULL OR max_mean_difference >= 0),
+                      set_at TEXT NOT NULL
+                    )""",
+                    """
+                    CREATE TABLE qualification_admissions (
+                      exam_id TEXT NOT NULL REFERENCES exams(exam_id),
+                      rater_id TEXT NOT NULL REFERENCES raters(rater_id),
+                      admitted_by TEXT NOT NULL,
+                      reason TEXT NOT NULL,
+                      admitted_at TEXT NOT NULL,
+                      PRIMARY KEY (exam_id, rater_id)
+                    )""")));
 
     private static void apply(Connection c, Statement s, Dialect dialect, Migration m) throws SQLException {
         try {

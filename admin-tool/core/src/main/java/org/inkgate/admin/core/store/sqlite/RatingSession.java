@@ -88,7 +88,10 @@ final class RatingSession {
     record Assignment(long id, long sittingId, String taskId, String raterId, RatingDesk.Kind kind) {
     }
 
-    /** The assignment behind a blind id of this exam; with a rater, it must be in that rater's queue. */
+    /**
+     * The assignment behind a blind id of this exam; with a rater, it must be in that rater's queue
+     * and live rating must be open to the rater (the qualification set).
+     */
     Assignment assignment(String raterId, String blindId) throws RatingException {
         List<Assignment> found = read("looking up " + blindId, () -> db.list("SELECT a.assignment_id, a.sitting_id,"
                 + " a.task_id, a.rater_id, a.kind FROM rating_assignments a JOIN sittings s ON s.sitting_id = a.sitting_id"
@@ -101,11 +104,36 @@ final class RatingSession {
         if (raterId != null && !a.raterId().equals(raterId)) {
             throw new RatingException("response " + blindId + " is not in rater " + raterId + "'s queue");
         }
+        if (raterId != null) {
+            // a live item: live rating must be open to the rater (qualification scripts have their own table)
+            QualificationItems.refuseIfClosed(this, raterId);
+        }
         return a;
     }
 
+    /**
+     * Inside a transaction: the sitting of a candidate's one response to a task, for marking it as
+     * {@code use} (e.g. "a control script"); refused when there is none or a conflict left two.
+     */
+    long sittingOfResponse(String candidateNumber, String taskId, String use) throws SQLException {
+        List<Long> sittings = db.list("SELECT r.sitting_id FROM responses r JOIN sittings s ON s.sitting_id"
+                + " = r.sitting_id WHERE s.exam_id=? AND s.candidate_number=? AND r.task_id=?",
+                rs -> rs.getLong(1), examId, candidateNumber, taskId);
+        if (sittings.size() != 1) {
+            throw SqlSession.refusal(new RatingException(sittings.isEmpty()
+                    ? "no response of candidate " + candidateNumber + " to task " + taskId + " in exam "
+                    + examId + "; check the candidate number and task id"
+                    : "candidate " + candidateNumber + " has " + sittings.size() + " responses to task " + taskId
+                    + " (a conflict); settle the conflict before using the response as " + use));
+        }
+        return sittings.get(0);
+    }
+
     static RatingDesk.Kind kind(String stored) {
-        return "adjudication".equals(stored) ? RatingDesk.Kind.ADJUDICATION : RatingDesk.Kind.RATING;
+        return switch (stored == null ? "" : stored) {
+            case "adjudication" -> RatingDesk.Kind.ADJUDICATION;
+            default -> RatingDesk.Kind.RATING;
+        };
     }
 
     /** A rater's latest submission. */

@@ -32,20 +32,11 @@ final class SqliteControlScripts implements ControlScripts {
                     + " meeting); nothing was stored");
         }
         s.tx("marking a control script", () -> {
-            List<Long> sittings = s.db.list("SELECT r.sitting_id FROM responses r JOIN sittings s ON s.sitting_id"
-                    + " = r.sitting_id WHERE s.exam_id=? AND s.candidate_number=? AND r.task_id=?",
-                    rs -> rs.getLong(1), s.examId, candidateNumber, taskId);
-            if (sittings.size() != 1) {
-                throw SqlSession.refusal(new RatingException(sittings.isEmpty()
-                        ? "no response of candidate " + candidateNumber + " to task " + taskId + " in exam "
-                        + s.examId + "; check the candidate number and task id"
-                        : "candidate " + candidateNumber + " has " + sittings.size() + " responses to task " + taskId
-                        + " (a conflict); settle the conflict before using the response as a control script"));
-            }
+            long sitting = s.sittingOfResponse(candidateNumber, taskId, "a control script");
             s.db.update("INSERT INTO control_scripts(sitting_id, task_id, agreed_scores_json, source, marked_at)"
                     + " VALUES (?,?,?,?,?) ON CONFLICT(sitting_id, task_id) DO UPDATE SET agreed_scores_json ="
                     + " excluded.agreed_scores_json, source = excluded.source, marked_at = excluded.marked_at",
-                    sittings.get(0), taskId, RatingSession.json(agreed), source.strip(), s.now());
+                    sitting, taskId, RatingSession.json(agreed), source.strip(), s.now());
             return null;
         });
     }

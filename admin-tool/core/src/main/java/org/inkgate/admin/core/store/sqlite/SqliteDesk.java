@@ -35,13 +35,20 @@ final class SqliteDesk implements RatingDesk {
     @Override
     public List<QueueItem> queue(String raterId) throws RatingException {
         s.requireRater(raterId);
-        // ORDER BY a boolean expression (own items before adjudications): false sorts first in SQLite and PostgreSQL
-        List<QueueItem> raw = s.read("reading the queue of " + raterId, () -> s.db.list("SELECT a.blind_id, a.task_id,"
-                + " a.kind, " + RatingSession.SUBMITTED + " FROM rating_assignments a JOIN sittings s"
-                + " ON s.sitting_id = a.sitting_id WHERE a.rater_id=? AND s.exam_id=? AND " + RatingSession.IN_QUEUE
-                + " ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
-                rs -> new QueueItem(0, rs.getString(1), rs.getString(2), RatingSession.kind(rs.getString(3)),
-                        rs.getBoolean(4)), raterId, s.examId));
+        // the qualification set comes first; while live rating is closed to the rater, it is the whole queue
+        List<QueueItem> raw = new ArrayList<>(s.read("reading the qualification set of " + raterId,
+                () -> QualificationItems.queue(s, raterId)));
+        boolean liveOpen = s.read("reading " + raterId + "'s qualification", () -> QualificationItems.rule(s).isEmpty()
+                || QualificationItems.standing(s, raterId).liveOpen());
+        if (liveOpen) {
+            // ORDER BY a boolean expression (own items before adjudications): false sorts first in SQLite and PostgreSQL
+            raw.addAll(s.read("reading the queue of " + raterId, () -> s.db.list("SELECT a.blind_id, a.task_id,"
+                    + " a.kind, " + RatingSession.SUBMITTED + " FROM rating_assignments a JOIN sittings s"
+                    + " ON s.sitting_id = a.sitting_id WHERE a.rater_id=? AND s.exam_id=? AND " + RatingSession.IN_QUEUE
+                    + " ORDER BY a.kind = 'adjudication', a.queue_position, a.assignment_id",
+                    rs -> new QueueItem(0, rs.getString(1), rs.getString(2), RatingSession.kind(rs.getString(3)),
+                            rs.getBoolean(4)), raterId, s.examId)));
+        }
         List<QueueItem> out = new ArrayList<>(raw.size());
         for (int i = 0; i < raw.size(); i++) {
             QueueItem q = raw.get(i);
@@ -52,6 +59,10 @@ final class SqliteDesk implements RatingDesk {
 
     @Override
     public BlindResponse response(String raterId, String blindId) throws RatingException {
+        Optional<QualificationItems.Item> q = QualificationItems.of(s, raterId, blindId);
+        if (q.isPresent()) {
+            return QualificationItems.response(s, q.get());
+        }
         RatingSession.Assignment a = s.assignment(raterId, blindId);
         return s.read("reading response " + blindId, () -> s.db.list("SELECT t.title, r.text, t.prompt FROM responses r"
                 + " JOIN sittings s ON s.sitting_id = r.sitting_id JOIN tasks t ON t.exam_id = s.exam_id AND t.task_id ="
@@ -61,12 +72,18 @@ final class SqliteDesk implements RatingDesk {
 
     @Override
     public ExamSource.Rubric rubric(String blindId) throws RatingException {
-        s.assignment(null, blindId);
+        if (QualificationItems.find(s, blindId).isEmpty()) {
+            s.assignment(null, blindId);
+        }
         return s.rubric;
     }
 
     @Override
     public Optional<RatingSheet> sheet(String raterId, String blindId) throws RatingException {
+        Optional<QualificationItems.Item> q = QualificationItems.of(s, raterId, blindId);
+        if (q.isPresent()) {
+            return QualificationItems.sheet(s, q.get());
+        }
         RatingSession.Assignment a = s.assignment(raterId, blindId);
         return s.read("reading the sheet of " + blindId, () -> {
             Optional<RatingSheet> draft = s.db.first("SELECT scores_json, comment FROM rating_drafts WHERE assignment_id=?",
@@ -80,12 +97,17 @@ final class SqliteDesk implements RatingDesk {
 
     @Override
     public void saveDraft(String raterId, String blindId, RatingSheet sheet) throws RatingException {
-        RatingSession.Assignment a = s.assignment(raterId, blindId);
-        s.refuseIfSettled(blindId);
         List<String> problems = s.check(sheet, false);
         if (!problems.isEmpty()) {
             throw new RatingException(blindId + ": " + String.join("; ", problems));
         }
+        Optional<QualificationItems.Item> q = QualificationItems.of(s, raterId, blindId);
+        if (q.isPresent()) {
+            QualificationItems.saveDraft(s, q.get(), sheet);
+            return;
+        }
+        RatingSession.Assignment a = s.assignment(raterId, blindId);
+        s.refuseIfSettled(blindId);
         s.tx("saving the draft of " + blindId, () -> s.db.update("INSERT INTO rating_drafts(assignment_id, scores_json,"
                 + " comment, saved_at) VALUES (?,?,?,?) ON CONFLICT(assignment_id) DO UPDATE SET"
                 + " scores_json=excluded.scores_json, comment=excluded.comment, saved_at=excluded.saved_at", a.id(),
@@ -99,6 +121,10 @@ final class SqliteDesk implements RatingDesk {
 
     @Override
     public long refer(String raterId, String blindId, Referrals.Reason reason, String note) throws RatingException {
+        if (QualificationItems.of(s, raterId, blindId).isPresent()) {
+            throw new RatingException(blindId + " is a qualification script, not a candidate's live response: tell the"
+                    + " test owner what you saw directly; nothing was stored");
+        }
         return referrals.refer(raterId, blindId, reason, note);
     }
 

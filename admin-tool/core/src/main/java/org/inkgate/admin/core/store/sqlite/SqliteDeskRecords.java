@@ -27,6 +27,10 @@ final class SqliteDeskRecords implements DeskRecords {
 
     @Override
     public Optional<String> raterOf(String blindId) throws RatingException {
+        Optional<QualificationItems.Item> q = QualificationItems.find(s, blindId);
+        if (q.isPresent()) {
+            return Optional.of(q.get().raterId());
+        }
         return s.read("looking up " + blindId, () -> s.db.first("SELECT a.rater_id FROM rating_assignments a JOIN"
                 + " sittings s ON s.sitting_id = a.sitting_id WHERE a.blind_id=? AND s.exam_id=?", rs -> rs.getString(1),
                 blindId, s.examId));
@@ -34,6 +38,10 @@ final class SqliteDeskRecords implements DeskRecords {
 
     @Override
     public Optional<RatingSheet> submitted(String raterId, String blindId) throws RatingException {
+        Optional<QualificationItems.Item> q = QualificationItems.of(s, raterId, blindId);
+        if (q.isPresent()) {
+            return QualificationItems.latest(s, q.get());
+        }
         RatingSession.Assignment a = s.assignment(raterId, blindId);
         return s.read("reading the rating of " + blindId, () -> s.latest(a.id())
                 .map(l -> new RatingSheet(l.scores(), l.comment())));
@@ -47,8 +55,19 @@ final class SqliteDeskRecords implements DeskRecords {
     @Override
     public int submitAll(String raterId, Map<String, RatingSheet> sheets, String via) throws RatingException {
         s.requireRater(raterId);
+        Map<QualificationItems.Item, RatingSheet> qualification = new LinkedHashMap<>();
         Map<RatingSession.Assignment, RatingSheet> checked = new LinkedHashMap<>();
         for (Map.Entry<String, RatingSheet> e : sheets.entrySet()) {
+            List<String> problems = s.check(e.getValue(), true);
+            Optional<QualificationItems.Item> q = QualificationItems.of(s, raterId, e.getKey());
+            if (q.isPresent()) {
+                if (!problems.isEmpty()) {
+                    throw new RatingException(e.getKey() + ": " + String.join("; ", problems) + ". Nothing was stored");
+                }
+                QualificationItems.refuseIfSettled(s, q.get(), e.getValue());
+                qualification.put(q.get(), e.getValue());
+                continue;
+            }
             RatingSession.Assignment a = s.assignment(raterId, e.getKey());
             RatingSheet sent = e.getValue();
             boolean unchanged = s.read("reading the rating of " + e.getKey(), () -> s.latest(a.id())
@@ -57,7 +76,6 @@ final class SqliteDeskRecords implements DeskRecords {
                 // the same rating sent again (a sheet imported twice) changes nothing and needs no refusal
                 s.refuseIfSettled(e.getKey());
             }
-            List<String> problems = s.check(e.getValue(), true);
             if (!problems.isEmpty()) {
                 throw new RatingException(e.getKey() + ": " + String.join("; ", problems) + ". Nothing was stored");
             }
@@ -66,6 +84,9 @@ final class SqliteDeskRecords implements DeskRecords {
         return s.tx("storing ratings of " + raterId, () -> {
             int changed = 0;
             String now = s.now();
+            for (Map.Entry<QualificationItems.Item, RatingSheet> e : qualification.entrySet()) {
+                changed += QualificationItems.store(s, e.getKey(), e.getValue(), via, now) ? 1 : 0;
+            }
             for (Map.Entry<RatingSession.Assignment, RatingSheet> e : checked.entrySet()) {
                 RatingSession.Assignment a = e.getKey();
                 RatingSheet sheet = e.getValue();
@@ -97,6 +118,9 @@ final class SqliteDeskRecords implements DeskRecords {
 
     @Override
     public List<HistoryEntry> history(String blindId) throws RatingException {
+        if (QualificationItems.find(s, blindId).isPresent()) {
+            return List.of(); // a qualification script has no live rating history
+        }
         RatingSession.Assignment a = s.assignment(null, blindId);
         return s.read("reading history", () -> s.db.list("SELECT rater_id, scores_json, comment, submitted_at, via FROM"
                 + " rating_submissions WHERE assignment_id=? ORDER BY submission_id", rs -> new HistoryEntry(rs.getString(1),

@@ -44,6 +44,7 @@ public final class SqliteRatingStore implements RatingStore {
     private final SqliteDesk desk;
     private final SqliteRatingResults results;
     private final SqliteControlScripts controls;
+    private final SqliteQualificationSet qualification;
 
     private SqliteRatingStore(RatingSession s) {
         this.s = s;
@@ -55,6 +56,7 @@ public final class SqliteRatingStore implements RatingStore {
         this.desk = new SqliteDesk(s, records, referrals);
         this.results = new SqliteRatingResults(s);
         this.controls = new SqliteControlScripts(s);
+        this.qualification = new SqliteQualificationSet(s);
     }
 
     /** Opens rating of {@code examId} in an existing results store (migrating its schema if older). */
@@ -357,6 +359,43 @@ public final class SqliteRatingStore implements RatingStore {
     @Override
     public synchronized List<ControlRating> controlRatings() throws RatingException {
         return controls.controlRatings();
+    }
+
+    @Override
+    public synchronized void markQualification(String candidateNumber, String taskId, Map<String, Integer> agreed,
+            String source) throws RatingException {
+        qualification.markQualification(candidateNumber, taskId, agreed, source);
+    }
+
+    @Override
+    public synchronized void setQualificationRule(Rule rule) throws RatingException {
+        qualification.setQualificationRule(rule);
+    }
+
+    @Override
+    public synchronized Optional<Rule> qualificationRule() throws RatingException {
+        return qualification.qualificationRule();
+    }
+
+    @Override
+    public synchronized int giveQualificationSet() throws RatingException {
+        return qualification.giveQualificationSet();
+    }
+
+    @Override
+    public synchronized List<Script> qualificationScripts() throws RatingException {
+        return qualification.qualificationScripts();
+    }
+
+    @Override
+    public synchronized List<org.inkgate.admin.core.rating.QualificationStanding> qualificationStandings()
+            throws RatingException {
+        return qualification.qualificationStandings();
+    }
+
+    @Override
+    public synchronized void admitRater(String raterId, String by, String reason) throws RatingException {
+        qualification.admitRater(raterId, by, reason);
     }
 
     @Override
