@@ -3,7 +3,6 @@ package org.inkgate.admin.gui;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
-import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -29,7 +28,6 @@ import org.inkgate.admin.core.keys.OwnerKeyStore;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.admin.core.source.Problem;
 import org.inkgate.admin.testutil.DemoSource;
-import org.inkgate.admin.testutil.PngSnapshots;
 import org.inkgate.format.bundle.BundleReader;
 import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.bundle.RosterEntry;
@@ -445,13 +443,8 @@ class AdminWindowTest {
         throw new AssertionError(needle + " not planted");
     }
 
+    /** The window at 1024x768, the smallest screen the guides promise, saved for docs/screenshots. */
     private static void shoot(FxRobot robot, Scene scene, String name) throws Exception {
-        AtomicReference<java.awt.image.BufferedImage> image = new AtomicReference<>();
-        WaitForAsyncUtils.waitForFxEvents();
-        robot.interact(() -> image.set(PngSnapshots.snapshot(scene)));
-        assertEquals(1280, image.get().getWidth());
-        assertEquals(800, image.get().getHeight());
-        assertSame(scene, scene);
-        PngSnapshots.save(image.get(), name);
+        StepDriver.shoot1024(robot, (javafx.stage.Stage) scene.getWindow(), name);
     }
 }

@@ -227,11 +227,10 @@ public final class Collector {
         if (!breaches.isEmpty()) {
             return refuse(r, breaches);
         }
-        if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()) {
-            return new Outcome.SameAsImported(name, d.packageId());
-        }
-        if (store.importSitting(r.record()).isEmpty()) {
-            // another collect into the same store stored this package since this one looked
+        // another collect into the same store may have stored this very file since this one looked:
+        // then it is already imported, not a second copy with other bytes
+        if (store.sittingByContent(d.packageId(), r.record().contentSha256()).isPresent()
+                || store.importSitting(r.record()).isEmpty()) {
             return store.sittingByPackageFile(r.sha256()).isPresent() ? new Outcome.AlreadyImported(name)
                     : new Outcome.SameAsImported(name, d.packageId());
         }
