@@ -1,5 +1,9 @@
 package org.inkgate.admin.gui.ratingadmin;
 
+import static org.inkgate.admin.gui.ratingadmin.QualityPanels.limit;
+import static org.inkgate.admin.gui.ratingadmin.QualityPanels.share;
+import static org.inkgate.admin.gui.ratingadmin.QualityPanels.sized;
+import static org.inkgate.admin.gui.ratingadmin.QualityPanels.wrapped;
 import static org.inkgate.admin.gui.ratingadmin.RatingAdminView.button;
 import static org.inkgate.admin.gui.ratingadmin.RatingAdminView.column;
 import static org.inkgate.admin.gui.ratingadmin.RatingAdminView.field;
@@ -11,7 +15,6 @@ import java.util.stream.Collectors;
 import javafx.scene.Node;
 import javafx.scene.control.Button;
 import javafx.scene.control.Label;
-import javafx.scene.control.TableColumn;
 import javafx.scene.control.TableView;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.VBox;
@@ -81,7 +84,8 @@ final class QualificationPanel {
         standings.setPlaceholder(new Label("No raters yet."));
         standings.getColumns().add(sized(column("Rater", QualificationStanding::raterId), 72));
         standings.getColumns().add(sized(column("Scored", q -> q.rated() + " of " + q.given()), 72));
-        standings.getColumns().add(sized(column("Exact", q -> q.agreement() == null ? "-" : share(q.agreement().exact())), 56));
+        standings.getColumns().add(sized(column("Exact", q -> q.agreement() == null ? "-"
+                : share(q.agreement().exact())), 56));
         standings.getColumns().add(sized(column("Adjacent", q -> q.agreement() == null ? "-"
                 : share(q.agreement().adjacent())), 80));
         standings.getColumns().add(sized(column("Mean\ndifference", q -> q.agreement() == null ? "-"
@@ -104,28 +108,5 @@ final class QualificationPanel {
                 + " the rater has scored the whole set within its limits, or you admit the rater; set the limits your"
                 + " scoring rules give (there is no default). Qualification ratings never enter a candidate's scores."),
                 scripts, form, limits, rule, standings, admission);
-    }
-
-    private static javafx.scene.control.TextField limit(String id, String accessible,
-            javafx.beans.property.StringProperty value) {
-        var f = field(id, accessible, value, 4);
-        f.setPromptText("none");
-        return f;
-    }
-
-    private static <S> TableColumn<S, String> wrapped(TableColumn<S, String> c, double width) {
-        c.setPrefWidth(width);
-        Fields.wrap(c);
-        return c;
-    }
-
-    private static <S> TableColumn<S, String> sized(TableColumn<S, String> c, double width) {
-        c.setPrefWidth(width);
-        c.setMinWidth(width);
-        return c;
-    }
-
-    private static String share(double d) {
-        return Double.isNaN(d) ? "-" : String.format(Locale.ROOT, "%.2f", d);
     }
 }

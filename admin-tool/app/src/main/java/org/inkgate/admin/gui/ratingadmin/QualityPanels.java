@@ -157,20 +157,20 @@ final class QualityPanels {
         grid.add(field, column + 1, row);
     }
 
-    private static javafx.scene.control.TextField limit(String id, String accessible,
+    static javafx.scene.control.TextField limit(String id, String accessible,
             javafx.beans.property.StringProperty value) {
         var f = field(id, accessible, value, 4);
         f.setPromptText("none");
         return f;
     }
 
-    private static <S> TableColumn<S, String> wrapped(TableColumn<S, String> c, double width) {
+    static <S> TableColumn<S, String> wrapped(TableColumn<S, String> c, double width) {
         c.setPrefWidth(width);
         Fields.wrap(c);
         return c;
     }
 
-    private static <S> TableColumn<S, String> sized(TableColumn<S, String> c, double width) {
+    static <S> TableColumn<S, String> sized(TableColumn<S, String> c, double width) {
         c.setPrefWidth(width);
         c.setMinWidth(width);
         return c;
@@ -182,7 +182,7 @@ final class QualityPanels {
                 + " UTC" : String.valueOf(iso);
     }
 
-    private static String share(double d) {
+    static String share(double d) {
         return Double.isNaN(d) ? "-" : String.format(Locale.ROOT, "%.2f", d);
     }
 

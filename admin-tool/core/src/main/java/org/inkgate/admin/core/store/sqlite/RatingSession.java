@@ -176,6 +176,18 @@ final class RatingSession {
         }
     }
 
+    /** Refuses agreed scores (of a control or qualification script) that miss a criterion or leave its range, or have no source. */
+    void checkAgreed(Map<String, Integer> agreed, String source) throws RatingException {
+        List<String> problems = check(new RatingDesk.RatingSheet(agreed, ""), true);
+        if (!problems.isEmpty()) {
+            throw new RatingException("agreed scores: " + String.join("; ", problems) + ". Nothing was stored");
+        }
+        if (source == null || source.isBlank()) {
+            throw new RatingException("say where the agreed scores come from (--source, e.g. the standardisation"
+                    + " meeting); nothing was stored");
+        }
+    }
+
     /** What is wrong with a sheet: unknown criteria, scores out of range, and (if complete) missing criteria. */
     List<String> check(RatingDesk.RatingSheet sheet, boolean complete) {
         List<String> problems = new ArrayList<>();

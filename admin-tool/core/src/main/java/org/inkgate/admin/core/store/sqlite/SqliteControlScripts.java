@@ -7,7 +7,6 @@ import java.util.Map;
 import java.util.Set;
 import java.util.SplittableRandom;
 import org.inkgate.admin.core.rating.ControlScripts;
-import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.store.sql.SqlSession;
 
@@ -23,14 +22,7 @@ final class SqliteControlScripts implements ControlScripts {
     @Override
     public void markControl(String candidateNumber, String taskId, Map<String, Integer> agreed, String source)
             throws RatingException {
-        List<String> problems = s.check(new RatingDesk.RatingSheet(agreed, ""), true);
-        if (!problems.isEmpty()) {
-            throw new RatingException("agreed scores: " + String.join("; ", problems) + ". Nothing was stored");
-        }
-        if (source == null || source.isBlank()) {
-            throw new RatingException("say where the agreed scores come from (--source, e.g. the standardisation"
-                    + " meeting); nothing was stored");
-        }
+        s.checkAgreed(agreed, source);
         s.tx("marking a control script", () -> {
             long sitting = s.sittingOfResponse(candidateNumber, taskId, "a control script");
             s.db.update("INSERT INTO control_scripts(sitting_id, task_id, agreed_scores_json, source, marked_at)"

@@ -9,7 +9,6 @@ import java.util.Set;
 import org.inkgate.admin.core.rating.QualificationSet;
 import org.inkgate.admin.core.rating.QualificationStanding;
 import org.inkgate.admin.core.rating.RaterRegister;
-import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
 
 /** {@link QualificationSet} in the SQLite store. */
@@ -24,14 +23,7 @@ final class SqliteQualificationSet implements QualificationSet {
     @Override
     public void markQualification(String candidateNumber, String taskId, Map<String, Integer> agreed, String source)
             throws RatingException {
-        List<String> problems = s.check(new RatingDesk.RatingSheet(agreed, ""), true);
-        if (!problems.isEmpty()) {
-            throw new RatingException("agreed scores: " + String.join("; ", problems) + ". Nothing was stored");
-        }
-        if (source == null || source.isBlank()) {
-            throw new RatingException("say where the agreed scores come from (--source, e.g. the standardisation"
-                    + " meeting); nothing was stored");
-        }
+        s.checkAgreed(agreed, source);
         s.tx("marking a qualification script", () -> {
             long sitting = s.sittingOfResponse(candidateNumber, taskId, "a qualification script");
             s.db.update("INSERT INTO qualification_scripts(sitting_id, task_id, agreed_scores_json, source, marked_at)"
