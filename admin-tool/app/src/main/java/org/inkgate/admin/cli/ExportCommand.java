@@ -61,8 +61,17 @@ final class ExportCommand implements Callable<Integer> {
             // Ctrl+C cancels through the export's own shutdown hook (StagedFolder): nothing is moved into --out
             try (ProgressReporter progress = ProgressReporter.onStandardError(spec.commandLine().getErr(), "export",
                     "steps", StoreExport.steps(exams.size()))) {
-                written = StoreExport.write(at, store, exams, out, xapiOptions, spreadsheetSafe,
-                        (done, total, what) -> progress.stepTo(done, TerminalText.value(what)), new Cancellation());
+                written = StoreExport.write(at, store, exams, out, xapiOptions, spreadsheetSafe, new StoreExport.Progress() {
+                    @Override
+                    public void step(long done, long total, String what) {
+                        progress.stepTo(done, TerminalText.value(what));
+                    }
+
+                    @Override
+                    public void earlierRunFinished(String note) {
+                        w.println(TerminalText.value(note));
+                    }
+                }, new Cancellation());
             }
             for (StoreExport.Written exam : written) {
                 exam.lines().forEach(line -> w.println(TerminalText.value(line)));

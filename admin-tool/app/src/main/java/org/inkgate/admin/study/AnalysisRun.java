@@ -234,6 +234,12 @@ public final class AnalysisRun {
         MfrmResult anchorsOut = mfrmResult;
         try {
             try (StagedFolder staged = StagedFolder.open(q.out(), cancellation)) {
+                staged.tellEarlierRun(new StagedFolder.Moments() {
+                    @Override
+                    public void earlierRunFinished(String note) {
+                        listener.warn(note); // a warning the command and the window both show
+                    }
+                });
                 Path folder = staged.folder();
                 ReportWriter.write(finished, folder);
                 OwnerOnly.restrict(folder.resolve("report.html"));

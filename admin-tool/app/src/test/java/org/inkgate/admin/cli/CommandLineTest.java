@@ -1,6 +1,7 @@
 package org.inkgate.admin.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -110,6 +111,18 @@ class CommandLineTest {
         assertTrue(Files.exists(dir.resolve("export/demo-harbourside-placement/csv/responses.csv")));
         assertEquals(11, Files.list(dir.resolve("export/demo-harbourside-placement/qti-results")).count());
         assertTrue(export.out().contains("csv/questionnaire_answers.csv 22 rows"), "11 sittings x 2 items: " + export.out());
+
+        // an export killed while moving its exam folders in (as StagedFolderKillTest leaves one: the hidden
+        // folder with its publishing note and the exams not yet moved): the next export finishes it first and says so
+        Path killed = Files.createDirectories(dir.resolve("export/.export.partial/demo-other-exam"));
+        Files.writeString(killed.resolve("responses.csv"), "left by a killed export");
+        Files.writeString(dir.resolve("export/.export.partial/.publishing"), "moving");
+        Run afterKill = admin("export", "--store", store, "--out", dir.resolve("export").toString());
+        assertEquals(0, afterKill.code(), afterKill.out());
+        assertTrue(afterKill.out().contains("NOTE: an earlier run into") && afterKill.out().contains("(demo-other-exam)"),
+                afterKill.out());
+        assertTrue(Files.exists(dir.resolve("export/demo-other-exam/responses.csv")));
+        assertFalse(Files.exists(dir.resolve("export/.export.partial")));
 
         // ratings come from a CSV (the rating desk comes later); levels, tool use and process events from the store
         Path ratings = dir.resolve("ratings.csv");

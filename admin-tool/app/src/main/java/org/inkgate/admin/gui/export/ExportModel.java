@@ -40,6 +40,8 @@ public final class ExportModel {
     private final BooleanProperty running = new SimpleBooleanProperty(false);
     private final DoubleProperty progress = new SimpleDoubleProperty(0);
     private final StringProperty step = new SimpleStringProperty("");
+    /** The note of an earlier, killed export that this one finished first; empty when none. */
+    private final StringProperty earlier = new SimpleStringProperty("");
     private volatile Cancellation current;
     private boolean cancelRefused;
     /** Told on the worker with the core's progress and commit-point moments; tests press Cancel there. */
@@ -131,6 +133,7 @@ public final class ExportModel {
         current = cancellation;
         cancelRefused = false;
         written.set("Exporting ...");
+        earlier.set("");
         progress.set(0);
         step.set("");
         running.set(true);
@@ -139,6 +142,9 @@ public final class ExportModel {
                 lines -> {
                     idle();
                     List<String> shownLines = new ArrayList<>(lines);
+                    if (!earlier.get().isEmpty()) {
+                        shownLines.add(0, earlier.get());
+                    }
                     if (cancelRefused) {
                         shownLines.add(0, "Cancel came too late: the files were already being moved into place."
                                 + " The export is complete:");
@@ -184,6 +190,12 @@ public final class ExportModel {
             @Override
             public void publishing() {
                 watcher.publishing();
+            }
+
+            @Override
+            public void earlierRunFinished(String note) {
+                Platform.runLater(() -> earlier.set(note));
+                watcher.earlierRunFinished(note);
             }
         };
     }

@@ -32,7 +32,10 @@ import org.inkgate.format.io.OwnerOnly;
  * beside it and renamed into place in one step. Ctrl+C (a shutdown hook) cancels a
  * run that has not begun publishing and removes its hidden folder; one that has begun is given time
  * to finish its renames. One run at a time per folder: a hidden folder found at the start is taken
- * as left by a killed run and removed.
+ * as left by a killed run and removed, unless that run had begun publishing: then it holds a
+ * {@value #PUBLISHING} note, its remaining entries are moved into place first (rolled forward), so a
+ * folder of several exams is never left part new and part old once the next run starts
+ * ({@link #finishedEarlierRun}).
  */
 public final class StagedFolder implements AutoCloseable {
 
@@ -47,15 +50,36 @@ public final class StagedFolder implements AutoCloseable {
         /** Publishing has been claimed: a cancel now is refused; the renames come next. */
         default void publishing() {
         }
+
+        /**
+         * An earlier run into the folder had been stopped while moving its files in; {@code note}
+         * says which entries were moved in now (see {@link StagedFolder#finishedEarlierRun}).
+         */
+        default void earlierRunFinished(String note) {
+        }
+
+        /** One staged entry has been moved into the existing folder (tests stop the process here). */
+        default void moved(String entry) {
+        }
     }
 
     private static final long PUBLISH_GRACE_SECONDS = 30;
+
+    /**
+     * Written into the hidden folder at the commit point, before the first rename into an existing
+     * folder: its presence says every staged file was complete and the moves had begun.
+     */
+    static final String PUBLISHING = ".publishing";
+
+    /** The suffix of an earlier entry set aside while its replacement is renamed in. */
+    private static final String SET_ASIDE = ".replaced";
 
     private final Path target;
     private final Path staging;
     private final Cancellation cancellation;
     private final Thread onCtrlC;
     private final CountDownLatch published = new CountDownLatch(1);
+    private List<String> finishedEarlier = List.of();
 
     private StagedFolder(Path target, Cancellation cancellation) {
         this.target = target;
@@ -76,10 +100,30 @@ public final class StagedFolder implements AutoCloseable {
         }
         StagedFolder s = new StagedFolder(absolute, cancellation);
         OwnerOnly.folder(absolute.getParent());
+        s.finishedEarlier = s.finishInterruptedPublish();
         delete(s.staging); // left by a killed run
         OwnerOnly.folder(s.staging);
         Runtime.getRuntime().addShutdownHook(s.onCtrlC);
         return s;
+    }
+
+    /**
+     * The entries an earlier run had begun to move into place when it was killed, moved in now
+     * before this run writes anything; empty when there was no such run. Tell the test owner: the
+     * folder held a mix of that run's files and older ones until now.
+     */
+    public List<String> finishedEarlierRun() {
+        return finishedEarlier;
+    }
+
+    /** Tells {@code moments} of a run finished at {@link #open}, in words for the test owner; nothing when there was none. */
+    public void tellEarlierRun(Moments moments) {
+        if (!finishedEarlier.isEmpty()) {
+            moments.earlierRunFinished("NOTE: an earlier run into " + target + " was stopped while moving its files"
+                    + " into place, leaving part of it new and part older; its remaining " + finishedEarlier.size()
+                    + " entries (" + String.join(", ", finishedEarlier) + ") were moved in first, so that run is"
+                    + " now complete there before this one replaces it.");
+        }
     }
 
     /** The hidden folder to write into. */
@@ -106,10 +150,9 @@ public final class StagedFolder implements AutoCloseable {
             if (!Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
                 move(staging, target);
             } else {
-                for (Path entry : entries(staging)) { // the staging folder is inside the target: same disk
-                    replace(entry, target.resolve(entry.getFileName().toString()));
-                }
-                delete(staging); // empty now
+                Files.writeString(staging.resolve(PUBLISHING), "moving these files into place; "
+                        + "the next run into this folder finishes the moves if this one is stopped\n");
+                moveEntriesIn(moments);
             }
             return target;
         } finally {
@@ -117,7 +160,11 @@ public final class StagedFolder implements AutoCloseable {
         }
     }
 
-    /** Removes the hidden folder (what is left of it after a cancel or failure); call it always (try-with-resources). */
+    /**
+     * Removes the hidden folder (what is left of it after a cancel or failure); call it always
+     * (try-with-resources). A publish that failed part-way keeps it, with its note, for the next
+     * run to finish.
+     */
     @Override
     public void close() throws IOException {
         try {
@@ -125,7 +172,42 @@ public final class StagedFolder implements AutoCloseable {
         } catch (IllegalStateException shuttingDown) {
             return; // the hook runs now and cleans up
         }
-        delete(staging); // gone already when published
+        if (!Files.exists(staging.resolve(PUBLISHING), LinkOption.NOFOLLOW_LINKS)) {
+            delete(staging); // gone already when published
+        }
+    }
+
+    /** Moves every staged entry into the existing target, then removes the hidden folder and its note. */
+    private void moveEntriesIn(Moments moments) throws IOException {
+        for (Path entry : entries(staging)) { // the staging folder is inside the target: same disk
+            String name = entry.getFileName().toString();
+            replace(entry, target.resolve(name));
+            moments.moved(name);
+        }
+        clearSetAside();
+        delete(staging); // only the note is left
+    }
+
+    /** Rolls forward a run killed while moving its entries in; returns the entries it moved. */
+    private List<String> finishInterruptedPublish() throws IOException {
+        if (!Files.isDirectory(target) || !Files.exists(staging.resolve(PUBLISHING), LinkOption.NOFOLLOW_LINKS)) {
+            return List.of();
+        }
+        List<String> names = new ArrayList<>();
+        for (Path entry : entries(staging)) {
+            names.add(entry.getFileName().toString());
+        }
+        moveEntriesIn(Moments.NONE);
+        return List.copyOf(names);
+    }
+
+    /** Removes earlier folders set aside by {@link #replace} that a killed run left behind. */
+    private void clearSetAside() throws IOException {
+        try (DirectoryStream<Path> s = Files.newDirectoryStream(target, ".*" + SET_ASIDE)) {
+            for (Path old : s) {
+                delete(old);
+            }
+        }
     }
 
     /** The shutdown hook: cancel if still possible and clean up, else let the renames finish. */
@@ -141,10 +223,15 @@ public final class StagedFolder implements AutoCloseable {
         }
     }
 
+    /** The staged entries, without the note. */
     private static List<Path> entries(Path folder) throws IOException {
         List<Path> all = new ArrayList<>();
         try (DirectoryStream<Path> s = Files.newDirectoryStream(folder)) {
-            s.forEach(all::add);
+            s.forEach(p -> {
+                if (!p.getFileName().toString().equals(PUBLISHING)) {
+                    all.add(p);
+                }
+            });
         }
         all.sort(null);
         return all;
@@ -160,7 +247,7 @@ public final class StagedFolder implements AutoCloseable {
             }
             return;
         }
-        Path old = to.resolveSibling("." + to.getFileName() + ".replaced");
+        Path old = to.resolveSibling("." + to.getFileName() + SET_ASIDE);
         delete(old);
         if (Files.exists(to, LinkOption.NOFOLLOW_LINKS)) {
             move(to, old);

@@ -109,6 +109,7 @@ public final class StoreExport {
             finalFolders.add(OutputFolder.file(out, id)); // refuses an unsafe exam id before anything is written
         }
         try (StagedFolder staged = StagedFolder.open(out, cancellation)) {
+            staged.tellEarlierRun(progress);
             List<Written> written = new ArrayList<>();
             for (int e = 0; e < exams.size(); e++) {
                 String id = exams.get(e);
