@@ -42,6 +42,9 @@ public final class RatingAdminModel {
         String run(RatingStore s) throws Exception;
     }
 
+    /** Opening the store, the action, reading the tables again. */
+    private static final int STAGES = 3;
+
     private final AdminSession session;
     private final StringProperty store = new SimpleStringProperty("");
     private final StringProperty exam = new SimpleStringProperty("");
@@ -137,8 +140,12 @@ public final class RatingAdminModel {
         }
         String examId = exam.get().isBlank() ? null : exam.get().strip();
         session.work().run(what, p -> {
+            // one store transaction each, too short to cancel: the bar counts its three stages instead of spinning
+            p.update(0, STAGES, what + ": opening the store");
             try (RatingStore s = open(file, examId)) {
+                p.update(1, STAGES, what);
                 String said = call.run(s);
+                p.update(2, STAGES, what + ": reading raters, progress, flags and quality tables");
                 return new Object[] {said, snapshot(s)};
             }
         }, done -> {

@@ -60,8 +60,12 @@ class RatingAdminStepTest {
         assertEquals("Added rater R3 (capacity 10)", StepDriver.label(robot, "#ratingMessage"));
         robot.interact(() -> robot.lookup("#ratersPerResponse").queryAs(ChoiceBox.class).setValue("2"));
         StepDriver.setText(robot, "#ratingSeed", SEED);
+        List<Double> bar = new java.util.concurrent.CopyOnWriteArrayList<>();
+        robot.interact(() -> session.work().progress().addListener((o, was, now) -> bar.add(now.doubleValue())));
         StepDriver.press(robot, "#assignRatings");
         StepDriver.waitForWork(session);
+        // the status bar counts the action's stages (a fraction of the whole), not an endless spinner (-1)
+        assertTrue(bar.stream().anyMatch(v -> v > 0 && v < 1), "progress values shown: " + bar);
         String assigned = StepDriver.label(robot, "#ratingMessage");
 
         String store = byCommand.file().toString();
