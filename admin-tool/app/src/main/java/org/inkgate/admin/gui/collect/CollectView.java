@@ -69,14 +69,15 @@ public final class CollectView implements Step {
         refused.setId("refused");
         refused.setAccessibleText("Refused packages with their reasons");
         refused.setPlaceholder(new Label("No package refused."));
-        TableColumn<Outcome.Refused, String> file = column("Package file", 300, Outcome.Refused::file);
+        // the file's name, which the message repeats; the whole path is in the details above and the command's output
+        TableColumn<Outcome.Refused, String> file = column("Package file", 210, r -> fileName(r.file()));
         TableColumn<Outcome.Refused, String> message = column("What it means and what to do", 600,
                 Outcome.Refused::message);
         Fields.wrap(file);
         Fields.wrap(message);
         refused.getColumns().add(file);
-        TableColumn<Outcome.Refused, String> reason = column("Reason", 190, Outcome.Refused::reason);
-        Fields.wrap(reason);
+        TableColumn<Outcome.Refused, String> reason = column("Reason", 170, Outcome.Refused::reason);
+        reason.setMinWidth(150); // a reason code is one word: never broken across lines
         refused.getColumns().add(reason);
         refused.getColumns().add(message);
         refused.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
@@ -90,6 +91,12 @@ public final class CollectView implements Step {
                         + " built from; the roster adds levels and personal fields to the store."),
                 grid, collect, counts, details, refused);
         root.getStyleClass().add("step");
+    }
+
+    /** The last part of a package's path as collect reports it; the text itself when it has no parts. */
+    static String fileName(String path) {
+        int cut = Math.max(path.lastIndexOf('/'), path.lastIndexOf('\\'));
+        return cut < 0 || cut == path.length() - 1 ? path : path.substring(cut + 1);
     }
 
     private static TableColumn<Outcome.Refused, String> column(String name, double width,

@@ -41,11 +41,16 @@ public final class ExamCheckView implements Step {
         table.setId("problems");
         table.setAccessibleText("Problems found in the exam folder");
         table.setPlaceholder(new Label("No problems listed."));
-        table.getColumns().add(column("File", 120, p -> p.file()));
-        table.getColumns().add(column("Line", 60, p -> p.line() == 0 ? "" : String.valueOf(p.line())));
-        table.getColumns().add(column("Col", 50, p -> p.column() == 0 ? "" : String.valueOf(p.column())));
-        table.getColumns().add(column("Field", 220, p -> p.field()));
-        TableColumn<Problem, String> fix = column("Problem and how to fix it", 560, p -> p.message());
+        // file and field are read whole at a glance: the message column gives way, never they
+        TableColumn<Problem, String> file = column("File", 120, p -> p.file());
+        file.setMinWidth(110);
+        table.getColumns().add(file);
+        table.getColumns().add(column("Line", 48, p -> p.line() == 0 ? "" : String.valueOf(p.line())));
+        table.getColumns().add(column("Col", 44, p -> p.column() == 0 ? "" : String.valueOf(p.column())));
+        TableColumn<Problem, String> field = column("Field", 210, p -> p.field());
+        field.setMinWidth(190);
+        table.getColumns().add(field);
+        TableColumn<Problem, String> fix = column("Problem and how to fix it", 300, p -> p.message());
         Fields.wrap(fix);
         table.getColumns().add(fix);
         table.setColumnResizePolicy(TableView.CONSTRAINED_RESIZE_POLICY_FLEX_LAST_COLUMN);
