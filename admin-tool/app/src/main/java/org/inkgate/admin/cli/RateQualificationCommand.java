@@ -10,6 +10,7 @@ import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.format.refusal.FormatRefusal;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** {@code rate qualification ...}: the scripts a rater scores within the test owner's limits before live rating opens. */
@@ -27,23 +28,13 @@ final class RateQualificationCommand extends GroupCommand {
     @Command(name = "mark", mixinStandardHelpOptions = true,
             description = "Mark a candidate's response to a task as a qualification script with its agreed scores.")
     static final class Mark extends RateCommand.Step {
-        @Option(names = "--candidate", required = true, paramLabel = "NUMBER", description = "whose response")
-        String candidate;
-
-        @Option(names = "--task", required = true, paramLabel = "ID", description = "which task")
-        String task;
-
-        @Option(names = "--agreed", required = true, paramLabel = "CRITERION=SCORE", split = ",",
-                description = "the agreed score of every criterion, e.g. --agreed content=5,language=6")
-        List<String> agreed;
-
-        @Option(names = "--source", required = true, paramLabel = "TEXT", description = "where the agreed scores come from")
-        String source;
+        @Mixin
+        AgreedScriptOptions script;
 
         @Override
         int run(RatingStore s, PrintWriter out) throws RatingException {
-            s.markQualification(candidate, task, RateCommand.scores(spec, agreed), source);
-            out.println("Marked as a qualification script: candidate " + candidate + ", task " + task
+            s.markQualification(script.candidate, script.task, script.scores(spec), script.source);
+            out.println("Marked as a qualification script: candidate " + script.candidate + ", task " + script.task
                     + ". Give the set to the raters with rate qualification give.");
             return InkgateAdmin.OK;
         }

@@ -3,7 +3,6 @@ package org.inkgate.admin.gui.ratingadmin;
 import java.security.SecureRandom;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
@@ -20,13 +19,10 @@ import org.inkgate.admin.core.rating.ControlScripts;
 public final class ControlQuality {
 
     private final RatingAdminModel model;
+    private final AgreedScriptForm form = new AgreedScriptForm();
     private final ObservableList<ControlScripts.Control> controls = FXCollections.observableArrayList();
     private final ObservableList<ControlMonitor.RaterReport> monitor = FXCollections.observableArrayList();
     private List<ControlScripts.ControlRating> ratings = List.of();
-    private final StringProperty candidate = new SimpleStringProperty("");
-    private final StringProperty task = new SimpleStringProperty("");
-    private final StringProperty agreed = new SimpleStringProperty("");
-    private final StringProperty source = new SimpleStringProperty("");
     private final StringProperty mixSeed = new SimpleStringProperty("");
     private final StringProperty minExact = new SimpleStringProperty("");
     private final StringProperty minAdjacent = new SimpleStringProperty(
@@ -42,11 +38,11 @@ public final class ControlQuality {
     public ObservableList<ControlScripts.Control> controls() { return controls; }
     /** One row per rater who rated a control script, from {@link ControlMonitor#of}. */
     public ObservableList<ControlMonitor.RaterReport> monitor() { return monitor; }
-    public StringProperty candidate() { return candidate; }
-    public StringProperty task() { return task; }
+    public StringProperty candidate() { return form.candidate(); }
+    public StringProperty task() { return form.task(); }
     /** CRITERION=SCORE pairs separated by commas, as the command's --agreed. */
-    public StringProperty agreed() { return agreed; }
-    public StringProperty source() { return source; }
+    public StringProperty agreed() { return form.agreed(); }
+    public StringProperty source() { return form.source(); }
     /** Blank: a new seed is drawn, shown here and in the message. */
     public StringProperty mixSeed() { return mixSeed; }
     /** Blank: not checked. */
@@ -57,22 +53,7 @@ public final class ControlQuality {
 
     /** As {@code rate control mark --candidate N --task ID --agreed ... --source TEXT}. */
     public void mark() {
-        Map<String, Integer> scores;
-        try {
-            scores = CriterionScores.parse(agreed.get());
-        } catch (IllegalArgumentException e) {
-            model.message().set("The control script was not marked: " + e.getMessage());
-            return;
-        }
-        String who = candidate.get().strip();
-        String which = task.get().strip();
-        String from = source.get().strip();
-        if (who.isEmpty() || which.isEmpty() || from.isEmpty()) {
-            model.message().set("Name the candidate number, the task and where the agreed scores come from;"
-                    + " nothing was marked.");
-            return;
-        }
-        model.call("Marking a control script", s -> {
+        form.mark(model, "control script", (s, who, which, scores, from) -> {
             s.markControl(who, which, scores, from);
             return "Marked: candidate " + who + ", task " + which + ". Put it into the queues with Mix into queues.";
         });

@@ -1,7 +1,6 @@
 package org.inkgate.admin.gui.ratingadmin;
 
 import java.util.List;
-import java.util.Map;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import javafx.collections.FXCollections;
@@ -17,13 +16,10 @@ import org.inkgate.admin.core.rating.QualificationStanding;
 public final class QualificationQuality {
 
     private final RatingAdminModel model;
+    private final AgreedScriptForm form = new AgreedScriptForm();
     private final ObservableList<QualificationSet.Script> scripts = FXCollections.observableArrayList();
     private final ObservableList<QualificationStanding> standings = FXCollections.observableArrayList();
     private final StringProperty rule = new SimpleStringProperty("");
-    private final StringProperty candidate = new SimpleStringProperty("");
-    private final StringProperty task = new SimpleStringProperty("");
-    private final StringProperty agreed = new SimpleStringProperty("");
-    private final StringProperty source = new SimpleStringProperty("");
     private final StringProperty minExact = new SimpleStringProperty("");
     private final StringProperty minAdjacent = new SimpleStringProperty("");
     private final StringProperty maxMeanDifference = new SimpleStringProperty("");
@@ -39,11 +35,11 @@ public final class QualificationQuality {
     public ObservableList<QualificationStanding> standings() { return standings; }
     /** The rule in words, or that none is set. */
     public StringProperty rule() { return rule; }
-    public StringProperty candidate() { return candidate; }
-    public StringProperty task() { return task; }
+    public StringProperty candidate() { return form.candidate(); }
+    public StringProperty task() { return form.task(); }
     /** CRITERION=SCORE pairs separated by commas, as the command's --agreed. */
-    public StringProperty agreed() { return agreed; }
-    public StringProperty source() { return source; }
+    public StringProperty agreed() { return form.agreed(); }
+    public StringProperty source() { return form.source(); }
     /** Blank: not checked; at least one limit is needed. */
     public StringProperty minExact() { return minExact; }
     public StringProperty minAdjacent() { return minAdjacent; }
@@ -54,22 +50,7 @@ public final class QualificationQuality {
 
     /** As {@code rate qualification mark --candidate N --task ID --agreed ... --source TEXT}. */
     public void mark() {
-        Map<String, Integer> scores;
-        try {
-            scores = CriterionScores.parse(agreed.get());
-        } catch (IllegalArgumentException e) {
-            model.message().set("The qualification script was not marked: " + e.getMessage());
-            return;
-        }
-        String who = candidate.get().strip();
-        String which = task.get().strip();
-        String from = source.get().strip();
-        if (who.isEmpty() || which.isEmpty() || from.isEmpty()) {
-            model.message().set("Name the candidate number, the task and where the agreed scores come from;"
-                    + " nothing was marked.");
-            return;
-        }
-        model.call("Marking a qualification script", s -> {
+        form.mark(model, "qualification script", (s, who, which, scores, from) -> {
             s.markQualification(who, which, scores, from);
             return "Marked as a qualification script: candidate " + who + ", task " + which
                     + ". Give the set to the raters with Give to raters.";
