@@ -1,5 +1,11 @@
 package org.inkgate.admin.core.qti;
 
+import static org.inkgate.admin.core.qti.QtiDom.attribute;
+import static org.inkgate.admin.core.qti.QtiDom.children;
+import static org.inkgate.admin.core.qti.QtiDom.descendants;
+import static org.inkgate.admin.core.qti.QtiDom.local;
+import static org.inkgate.admin.core.qti.QtiDom.printable;
+
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -21,7 +27,6 @@ import org.inkgate.admin.core.source.ExamSourceReader;
 import org.inkgate.admin.core.source.Problem;
 import org.w3c.dom.Document;
 import org.w3c.dom.Element;
-import org.w3c.dom.Node;
 
 /**
  * Extended-text items and tests from QTI 3.0 packages (and QTI 2.2 items) into a new exam source
@@ -35,7 +40,6 @@ import org.w3c.dom.Node;
 public final class QtiExamImport {
 
     private static final String ID = "[A-Za-z0-9][A-Za-z0-9._-]{0,63}";
-    private static final Set<String> HTML_CONTAINERS = Set.of("div", "section", "article", "blockquote");
 
     /**
      * The outcome.
@@ -72,6 +76,9 @@ public final class QtiExamImport {
     private final YAMLMapper yaml = YAMLMapper.builder().disable(YAMLGenerator.Feature.WRITE_DOC_START_MARKER)
             .enable(YAMLGenerator.Feature.MINIMIZE_QUOTES).enable(YAMLGenerator.Feature.ALWAYS_QUOTE_NUMBERS_AS_STRINGS)
             .build();
+
+    private final QtiPromptReader prompts = new QtiPromptReader(notes);
+    private final QtiRubricReader rubrics = new QtiRubricReader(yaml, notes);
 
     private QtiExamImport(PackageFiles files) {
         this.files = files;
@@ -140,7 +147,7 @@ public final class QtiExamImport {
                     case "qti-time-limits", "timeLimits" -> sittingLimit = seconds(child, "test " + examId);
                     case "qti-rubric-block", "rubricBlock" -> {
                         if (child.getAttribute("view").contains("candidate")) {
-                            instructions = MarkdownBlocks.toMarkdown(blocks(content(child), "test instructions"));
+                            instructions = MarkdownBlocks.toMarkdown(prompts.blocks(QtiPromptReader.content(child), "test instructions"));
                         } else {
                             notes.add("a test rubric block for " + child.getAttribute("view") + " has no place in Inkgate");
                         }
@@ -273,14 +280,14 @@ public final class QtiExamImport {
                         String name = local(part);
                         if (name.equals("qti-rubric-block") || name.equals("rubricBlock")) {
                             if (part.getAttribute("view").contains("scorer")) {
-                                rubric = rubric(part, where);
+                                rubric = rubrics.rubric(part, where);
                             } else {
-                                blocks.addAll(blocks(content(part), where));
+                                blocks.addAll(prompts.blocks(QtiPromptReader.content(part), where));
                                 notes.add(where + ": a rubric block for " + part.getAttribute("view")
                                         + " became part of the prompt");
                             }
                         } else {
-                            blocks.addAll(blocks(List.of(part), where));
+                            blocks.addAll(prompts.blocks(List.of(part), where));
                         }
                     }
                 }
@@ -370,47 +377,6 @@ public final class QtiExamImport {
         out.put("insertFromPanel", tools != null && tools.has("insertFromPanel") && tools.get("insertFromPanel").asBoolean());
         out.put("showWordCount", tools == null || !tools.has("showWordCount") || tools.get("showWordCount").asBoolean());
         out.put("paste", tools != null && tools.has("paste") ? tools.get("paste").asText() : "none");
-        return out;
-    }
-
-    private ObjectNode rubric(Element block, String where) {
-        ArrayNode criteria = yaml.createArrayNode();
-        for (Element c : descendants(block, null)) {
-            if (!hasClass(c, "inkgate-criterion")) {
-                continue;
-            }
-            ObjectNode criterion = criteria.addObject();
-            for (Element e : descendants(c, null)) {
-                if (hasClass(e, "inkgate-criterion-id")) {
-                    criterion.put("id", e.getTextContent().strip());
-                } else if (hasClass(e, "inkgate-criterion-name")) {
-                    criterion.put("name", e.getTextContent().strip());
-                } else if (hasClass(e, "inkgate-scores")) {
-                    criterion.put("scores", e.getTextContent().strip());
-                }
-            }
-            ArrayNode bands = criterion.putArray("bands");
-            for (Element li : descendants(c, null)) {
-                if (!local(li).equals("li")) {
-                    continue;
-                }
-                ObjectNode band = bands.addObject();
-                for (Element e : descendants(li, null)) {
-                    if (hasClass(e, "inkgate-band")) {
-                        band.put("scores", e.getTextContent().strip());
-                    } else if (hasClass(e, "inkgate-descriptor")) {
-                        band.put("descriptor", e.getTextContent());
-                    }
-                }
-            }
-        }
-        if (criteria.isEmpty()) {
-            notes.add(where + ": the scorers' rubric block is not in Inkgate's criterion layout; write rubric.yaml from"
-                    + " it by hand. Its text: " + printable(block.getTextContent().strip().replaceAll("\\s+", " ")));
-            return null;
-        }
-        ObjectNode out = yaml.createObjectNode();
-        out.set("criteria", criteria);
         return out;
     }
 
@@ -580,68 +546,6 @@ public final class QtiExamImport {
         }
     }
 
-    /** Turns body content into prompt blocks, listing what the prompt cannot hold. */
-    private List<MarkdownBlocks.Block> blocks(List<Element> elements, String where) {
-        List<MarkdownBlocks.Block> out = new ArrayList<>();
-        for (Element e : elements) {
-            String name = local(e);
-            if (name.matches("h[1-6]")) {
-                out.add(new MarkdownBlocks.Heading(name.charAt(1) - '0', text(e, where)));
-            } else if (name.equals("p")) {
-                out.add(new MarkdownBlocks.Paragraph(text(e, where)));
-            } else if (name.equals("ul") || name.equals("ol")) {
-                List<String> items = new ArrayList<>();
-                for (Element li : children(e)) {
-                    items.add(text(li, where));
-                }
-                out.add(new MarkdownBlocks.ListBlock(name.equals("ol"), items));
-            } else if (name.equals("qti-extended-text-interaction") || name.equals("extendedTextInteraction")) {
-                for (Element p : children(e)) {
-                    if (local(p).equals("qti-prompt") || local(p).equals("prompt")) {
-                        out.addAll(blocks(children(p).isEmpty() ? List.of(p) : children(p), where));
-                    }
-                }
-            } else if (HTML_CONTAINERS.contains(name) || name.equals("qti-prompt") || name.equals("prompt")
-                    || name.equals("qti-content-body")) {
-                if (children(e).isEmpty() && !e.getTextContent().isBlank()) {
-                    out.add(new MarkdownBlocks.Paragraph(text(e, where)));
-                } else {
-                    out.addAll(blocks(children(e), where));
-                }
-            } else {
-                notes.add(where + ": " + name + " has no place in an Inkgate prompt"
-                        + (e.getTextContent().isBlank() ? "; left out" : "; its text was kept as a paragraph"));
-                if (!e.getTextContent().isBlank()) {
-                    out.add(new MarkdownBlocks.Paragraph(e.getTextContent().strip()));
-                }
-            }
-        }
-        return out;
-    }
-
-    private List<MarkdownBlocks.Block> blocks(Element parent, String where) {
-        return blocks(children(parent), where);
-    }
-
-    private String text(Element e, String where) {
-        for (Element inner : descendants(e, null)) {
-            String n = local(inner);
-            if (n.equals("img") || n.equals("object") || n.equals("math") || n.equals("audio") || n.equals("video")) {
-                notes.add(where + ": " + n + " has no place in an Inkgate prompt; left out");
-            }
-        }
-        return e.getTextContent().strip();
-    }
-
-    private static List<Element> content(Element rubricBlock) {
-        for (Element c : children(rubricBlock)) {
-            if (local(c).equals("qti-content-body")) {
-                return children(c);
-            }
-        }
-        return children(rubricBlock);
-    }
-
     private int seconds(Element timeLimits, String where) throws ImportRefusal {
         String max = attribute(timeLimits, "max-time", "maxTime");
         if (max.isEmpty()) {
@@ -679,50 +583,5 @@ public final class QtiExamImport {
         return made;
     }
 
-    private static String attribute(Element e, String qti3, String qti2) {
-        return e.hasAttribute(qti3) ? e.getAttribute(qti3) : e.getAttribute(qti2);
-    }
 
-    private static boolean hasClass(Element e, String cls) {
-        return List.of(e.getAttribute("class").split("\\s+")).contains(cls);
-    }
-
-    private static String local(Element e) {
-        return e.getLocalName() == null ? e.getTagName() : e.getLocalName();
-    }
-
-    private static List<Element> children(Element parent) {
-        List<Element> out = new ArrayList<>();
-        for (Node n = parent.getFirstChild(); n != null; n = n.getNextSibling()) {
-            if (n instanceof Element e) {
-                out.add(e);
-            }
-        }
-        return out;
-    }
-
-    /** Every descendant element (document order), or those with the given local name. */
-    private static List<Element> descendants(Element root, String name) {
-        List<Element> out = new ArrayList<>();
-        for (Element c : children(root)) {
-            if (name == null || local(c).equals(name)) {
-                out.add(c);
-            }
-            out.addAll(descendants(c, name));
-        }
-        return out;
-    }
-
-    /** Outside text as it may be shown: controls as \\uXXXX, at most 200 characters. */
-    static String printable(String s) {
-        StringBuilder out = new StringBuilder();
-        s.codePoints().limit(200).forEach(c -> {
-            if (c < 0x20 || (c >= 0x7F && c < 0xA0)) {
-                out.append(String.format("\\u%04X", c));
-            } else {
-                out.appendCodePoint(c);
-            }
-        });
-        return s.length() > 200 ? out + "..." : out.toString();
-    }
 }

@@ -180,7 +180,7 @@ public final class QtiPnp {
                     continue;
                 }
                 String number = person.getTextContent().strip();
-                String where = file.getFileName() + " (candidate " + QtiExamImport.printable(number) + ")";
+                String where = file.getFileName() + " (candidate " + QtiDom.printable(number) + ")";
                 Preferences p = preferences(number, pnp, where, notes);
                 Preferences before = out.putIfAbsent(number, p);
                 if (before != null && !before.equals(p)) {
@@ -290,7 +290,7 @@ public final class QtiPnp {
         }
         for (String candidate : pnp.byCandidate().keySet()) {
             if (!seen.contains(candidate)) {
-                notes.add("candidate " + QtiExamImport.printable(candidate) + " has PNP preferences but is not on the"
+                notes.add("candidate " + QtiDom.printable(candidate) + " has PNP preferences but is not on the"
                         + " roster; not added (a roster row needs a level)");
             }
         }
