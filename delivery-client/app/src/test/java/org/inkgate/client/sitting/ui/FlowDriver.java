@@ -225,6 +225,22 @@ final class FlowDriver {
     }
 
     /** Whether a node with this id is in the scene and showing (its own visibility only). */
+    /** Whether node {@code id} lies wholly inside what scroll pane {@code scroller} shows now, without scrolling. */
+    boolean inViewOf(String scroller, String id) {
+        WaitForAsyncUtils.waitForFxEvents();
+        Node pane = find(scroller).orElseThrow(() -> new AssertionError("no #" + scroller));
+        Node node = find(id).orElseThrow(() -> new AssertionError("no #" + id));
+        try {
+            return WaitForAsyncUtils.asyncFx(() -> {
+                javafx.geometry.Bounds view = pane.localToScene(pane.getLayoutBounds());
+                javafx.geometry.Bounds b = node.localToScene(node.getLayoutBounds());
+                return b.getMinY() >= view.getMinY() && b.getMaxY() <= view.getMaxY();
+            }).get(30, TimeUnit.SECONDS);
+        } catch (Exception e) {
+            throw new AssertionError("could not measure #" + id + " in #" + scroller, e);
+        }
+    }
+
     boolean showing(String id) {
         WaitForAsyncUtils.waitForFxEvents();
         return find(id).map(Node::isVisible).orElse(false);

@@ -112,6 +112,21 @@ class InvigilatorActionsTest {
         }
         assertTrue(d.showing("nextCandidateButton"), "no next candidate offered");
         assertTrue(d.showing("exitButton"), "no exit offered");
+        // what the invigilator does next is in view at once, above the logs, not below the scroll fold
+        assertTrue(d.inViewOf("invigilatorScroller", "nextCandidateButton"), "next candidate below the fold");
+        assertTrue(d.inViewOf("invigilatorScroller", "exitButton"), "exit below the fold");
+    }
+
+    /** The same in large print (D1003's accommodation in the demo roster), where the text takes more room. */
+    @Test
+    void afterHandIn_inLargePrint_nextCandidateAndExitAreInViewWithoutScrolling(FxRobot robot) throws Exception {
+        FlowDriver d = driver();
+        d.open(FlowDriver.buildDemoSitting(temp), new ManualClock(), false);
+        d.setUp(FlowDriver.demoPin(), temp.resolve("out"));
+        handIn(d, "D1003");
+        d.openInvigilator();
+        assertTrue(d.inViewOf("invigilatorScroller", "nextCandidateButton"), "next candidate below the fold");
+        assertTrue(d.inViewOf("invigilatorScroller", "exitButton"), "exit below the fold");
     }
 
     /**

@@ -125,12 +125,13 @@ public final class InvigilatorPanel extends StackPane {
         lists.addRow(0, Parts.fieldLabel("Focus _lost (left the window)", focus),
                 Parts.fieldLabel("Other e_vents", events));
         lists.addRow(1, focus, events);
+        // the actions right under the state, the logs after them: what to do next is in view without scrolling
         VBox body = new VBox(12,
                 state,
-                lists,
                 buttons,
                 endTaskWarning, confirmEndTask,
-                exitNote);
+                exitNote,
+                lists);
         // on a short window or in large print the middle scrolls; the heading and the way back stay in view
         ScrollPane middle = new ScrollPane(body);
         middle.setId("invigilatorScroller");
