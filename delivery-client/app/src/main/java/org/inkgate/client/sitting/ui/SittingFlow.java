@@ -46,7 +46,6 @@ import org.inkgate.client.sitting.open.SittingLoad;
 import org.inkgate.client.sitting.recovery.RecoveryScan;
 import org.inkgate.client.sitting.recovery.UnfinishedSitting;
 import org.inkgate.client.sitting.store.ClientDataFolder;
-import org.inkgate.client.sitting.store.SittingScreen;
 import org.inkgate.client.sitting.submit.EnrolmentExport;
 import org.inkgate.client.sitting.submit.InstallationKey;
 import org.inkgate.client.sitting.timing.TimeText;
@@ -340,29 +339,12 @@ public final class SittingFlow {
         java.time.Duration down = found.downtime(setup.clock().now());
         RecoveryScreen[] screen = new RecoveryScreen[1];
         // the folder chosen at set-up (the room's stick), remembered in the sitting's database
-        screen[0] = new RecoveryScreen(recoveryFacts(found, down),
+        screen[0] = new RecoveryScreen(InvigilatorFacts.recovery(found, down, bundle.manifest()),
                 "_Give back the " + TimeText.duration(down.toMillis()) + " the machine was down",
                 found.outputFolder().orElse(data.root().resolve("outbox")),
                 input -> resume(screen[0], found, input, down), this::exitApplication);
         shell.show(screen[0].root());
         screen[0].focus();
-    }
-
-    private List<String> recoveryFacts(UnfinishedSitting found, java.time.Duration down) {
-        List<String> facts = new ArrayList<>();
-        facts.add("Candidate: " + found.candidateNumber() + ", form " + found.formId());
-        facts.add("On screen when it stopped: " + found.currentTask().flatMap(id -> bundle.manifest().task(id))
-                .map(t -> "the task \"" + t.title() + "\"").orElse(found.screen() == SittingScreen.START ? "the start" : "the "
-                        + found.screen().wireName() + " screen"));
-        facts.add("Last saved: " + SittingCourse.CLOCK.format(found.lastActivity()) + ", "
-                + TimeText.duration(down.toMillis()) + " ago (measured on the system clock, so a changed clock distorts it)");
-        if (found.paused()) {
-            facts.add("The exam was paused by the invigilator when it stopped; it continues paused.");
-        }
-        if (found.stage() == UnfinishedSitting.Stage.AWAITING_DELIVERY) {
-            facts.add("The answers were handed in and saved on this machine, but not yet written to the output folder.");
-        }
-        return facts;
     }
 
     private void resume(RecoveryScreen screen, UnfinishedSitting found, RecoveryScreen.Input input,
@@ -425,21 +407,21 @@ public final class SittingFlow {
                 retry.stop();
                 return;
             }
-            if (focusInside(shown.workspace.view())) {
+            if (focusInside(shown.workspace().view())) {
                 typeAhead.deliverTo(scene.getFocusOwner());
                 retry.stop();
                 return;
             }
-            shown.workspace.focusEditor();
+            shown.workspace().focusEditor();
         }));
         retry.setCycleCount(167);
-        typeAhead.awaitFocusIn(shown.workspace.view());
+        typeAhead.awaitFocusIn(shown.workspace().view());
         retry.setOnFinished(e -> {
             if (onScreen(shown)) {
                 typeAhead.drop(); // focus never reached the editor: keys typed now go where focus is
             }
         });
-        shown.workspace.focusEditor();
+        shown.workspace().focusEditor();
         retry.play();
     }
 
@@ -454,38 +436,6 @@ public final class SittingFlow {
             }
         }
         return false;
-    }
-
-    /** A task's workspace and screen, as the course sees it. */
-    private static final class ShownTask implements CourseView.TaskPage {
-        private final TaskWorkspace workspace;
-        private final TaskScreen screen;
-
-        ShownTask(TaskWorkspace workspace, TaskScreen screen) {
-            this.workspace = workspace;
-            this.screen = screen;
-        }
-
-        @Override
-        public TaskAnswer answer() {
-            return new TaskAnswer(workspace.text(), workspace.wordCount(), workspace.toolUse());
-        }
-
-        @Override
-        public void setFrozen(boolean frozen) {
-            workspace.setFrozen(frozen);
-            screen.frozen(frozen);
-        }
-
-        @Override
-        public void focusEditor() {
-            workspace.focusEditor();
-        }
-
-        @Override
-        public void close() {
-            workspace.close();
-        }
     }
 
     /** The screens the course asks for. */
@@ -684,7 +634,7 @@ public final class SittingFlow {
 
             @Override
             public String stateLine() {
-                return SittingFlow.this.stateLine();
+                return InvigilatorFacts.state(course);
             }
 
             @Override
@@ -694,7 +644,7 @@ public final class SittingFlow {
 
             @Override
             public InvigilatorPanel.Moment moment() {
-                return SittingFlow.this.moment();
+                return InvigilatorFacts.moment(course);
             }
 
             @Override
@@ -737,57 +687,6 @@ public final class SittingFlow {
                 SittingFlow.this.work(job, then);
             }
         };
-    }
-
-    /** Where the sitting is, as far as the invigilator's actions go. */
-    private InvigilatorPanel.Moment moment() {
-        if (course == null || course.plan().isEmpty()) {
-            return InvigilatorPanel.Moment.NO_CANDIDATE;
-        }
-        return switch (course.screen()) {
-            case TASK -> InvigilatorPanel.Moment.IN_TASK;
-            case SUBMIT -> InvigilatorPanel.Moment.HANDING_IN;
-            case FINISHED -> InvigilatorPanel.Moment.HANDED_IN;
-            case NONE, REFUSED, RECOVERY, SETUP, SIGN_IN, INSTRUCTIONS, QUESTIONNAIRE, REVIEW ->
-                InvigilatorPanel.Moment.AT_WORK;
-        };
-    }
-
-    private String stateLine() {
-        Optional<SittingPlan> candidate = course == null ? Optional.empty() : course.plan();
-        boolean paused = course != null && course.paused();
-        if (candidate.isEmpty()) {
-            return paused ? "No candidate has signed in yet. The exam is PAUSED." : "No candidate has signed in yet.";
-        }
-        SittingPlan plan = candidate.get();
-        String who = "Candidate " + plan.candidateNumber() + ", form " + plan.formId();
-        Optional<HandedIn> handedIn = course.handedIn();
-        if (course.screen() == FlowScreen.FINISHED && handedIn.isPresent()) {
-            return who + ": the answers were handed in at " + SittingCourse.CLOCK.format(handedIn.get().at())
-                    + ". The response package is written to " + handedIn.get().delivered() + "; a copy is kept at "
-                    + handedIn.get().localCopy() + ". This candidate's sitting is over.";
-        }
-        if (course.screen() == FlowScreen.SUBMIT) {
-            return who + ": the answers are handed in and saved on this machine, but the response package is not yet"
-                    + " written to the output folder " + course.outputFolder() + ". The candidate's screen says what is"
-                    + " wrong and offers to try again.";
-        }
-        StringBuilder state = new StringBuilder(who);
-        if (plan.extraTimePercent() > 0) {
-            state.append(", ").append(plan.extraTimePercent()).append("% extra time (roster)");
-        }
-        state.append(". ");
-        int index = course.taskIndex();
-        if (index >= 0) {
-            state.append("Task ").append(index + 1).append(" of ").append(plan.form().slots().size()).append(": ")
-                    .append(course.currentTaskTitle()).append(", ")
-                    .append(course.timeLeft().map(d -> TimeText.duration(d.toMillis()) + " left").orElse("untimed"))
-                    .append(". ");
-        } else {
-            state.append("Screen: ").append(course.screen().name().toLowerCase(Locale.ROOT).replace('_', ' ')).append(". ");
-        }
-        state.append(paused ? "The exam is PAUSED." : "The exam is running.");
-        return state.toString();
     }
 
     // ---- helpers ----
