@@ -15,6 +15,17 @@ final class PostgresErrors {
 
     /** What the failure means for the store, or null when it is none of the known kinds. */
     static String plain(StoreLocation.Server server, Credentials login, Throwable failure) {
+        if (tlsCheckFailed(failure)) {
+            return "the TLS check of the PostgreSQL server " + server + " failed: its certificate is not signed by the"
+                    + " certificate named in sslrootcert, has expired, or does not name this host (sslmode=verify-full"
+                    + " checks the name too). Ask the database administrator for the server's root certificate and name"
+                    + " it with ?sslrootcert=FILE in the store address";
+        }
+        if (onlyOverTls(failure)) {
+            return "the PostgreSQL server " + server + " lets " + login.user() + " in only over TLS: add"
+                    + " ?sslmode=verify-full&sslrootcert=FILE to the store address, FILE being the server's root"
+                    + " certificate from the database administrator";
+        }
         if (loginRefused(failure) || login.password() == null && hasState(failure, "08004")) {
             // 08004 without a password: the driver's "the server requested password-based authentication, but no
             // password was provided"
@@ -30,6 +41,31 @@ final class PostgresErrors {
             }
         }
         return null;
+    }
+
+    /** Whether the TLS handshake failed on the server's certificate (the client's check, not the server's refusal). */
+    private static boolean tlsCheckFailed(Throwable failure) {
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof javax.net.ssl.SSLException || t instanceof java.security.cert.CertificateException) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Whether the server's host-based authentication refused a connection without TLS (PostgreSQL's
+     * message for a {@code hostnossl ... reject} line or no line for plain connections ends "no
+     * encryption"). The message is read here, never shown: it is the server's.
+     */
+    private static boolean onlyOverTls(Throwable failure) {
+        for (Throwable t = failure; t != null; t = t.getCause()) {
+            if (t instanceof SQLException s && "28000".equals(s.getSQLState()) && s.getMessage() != null
+                    && s.getMessage().contains("no encryption")) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** Whether the server refused the login: the one failure whose driver message is never shown. */
