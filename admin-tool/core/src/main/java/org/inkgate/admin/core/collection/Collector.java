@@ -89,9 +89,19 @@ public final class Collector {
         }
     }
 
-    /** A package read by a worker: opened, or refused, or skipped because its bytes are known. */
+    /**
+     * A package read by a worker: opened, or refused, or skipped because its bytes are known. An
+     * opened one carries what breaks the event contract (null when nothing does), checked on the
+     * reading thread because it depends on the package alone; the single writer reports it in
+     * its turn among the other checks, as before.
+     */
     private record Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
-            IOException failure, boolean known) {
+            IOException failure, boolean known, String contractBreaches) {
+
+        Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
+                IOException failure, boolean known) {
+            this(file, sha256, opened, record, refusal, failure, known, null);
+        }
     }
 
     /** Imports the files; reports each outcome to {@code progress} as it is settled. */
@@ -145,7 +155,8 @@ public final class Collector {
             try {
                 OpenedResponse opened = reader.open(file.getFileName().toString(), bytes);
                 // digest and row rendering here, on the reading threads, so the single writer only stores
-                return new Read(file, sha, opened, record(opened, file.toString()), null, null, false);
+                return new Read(file, sha, opened, record(opened, file.toString()), null, null, false,
+                        contractBreaches(opened.response(), opened.events()));
             } catch (FormatRefusal refusal) {
                 return new Read(file, sha, null, null, refusal, null, false);
             }
@@ -233,7 +244,7 @@ public final class Collector {
             return refuse(r, "form-mismatch", name + ": " + mismatch + ". The client that wrote it did not follow the"
                     + " signed bundle; keep the file and report it");
         }
-        String broken = contractBreaches(d, opened.events());
+        String broken = r.contractBreaches();
         if (broken != null) {
             return refuse(r, "event-contract", name + ": " + broken + ". Nothing of it was counted. The client that wrote it"
                     + " did not keep the event contract (docs/formats.md, \"Event types\"); keep the file and report it with"
