@@ -22,7 +22,7 @@ public final class EventText {
      * The store's JSON of an event's data, as {@code Json.writeLine} writes it; appends the data's
      * {@code toString} to {@code digestText} on the way.
      *
-     * @param data       an event's data: a map sorted by key (as {@code ProcessEvent} keeps it)
+     * @param data       an event's data (sorted by key as {@code ProcessEvent} keeps it, else written the slow way)
      * @param json       a buffer to reuse; its content is replaced
      * @param digestText where the content digest's text of the data is appended
      */
@@ -31,21 +31,24 @@ public final class EventText {
         json.setLength(0);
         json.append('{');
         digestText.append('{');
-        boolean first = true;
+        String previous = null;
         for (Map.Entry<String, Object> e : data.entrySet()) {
             String key = e.getKey();
             Object value = e.getValue();
-            if (!plain(key) || !(value instanceof String || value instanceof Integer || value instanceof Long
-                    || value instanceof Boolean) || value instanceof String s && !plain(s)) {
+            // Jackson sorts the keys (ORDER_MAP_ENTRIES_BY_KEYS); a map not in that order takes the slow path
+            if (!plain(key) || previous != null && previous.compareTo(key) >= 0
+                    || !(value instanceof String || value instanceof Integer || value instanceof Long
+                            || value instanceof Boolean)
+                    || value instanceof String s && !plain(s)) {
                 digestText.setLength(mark);
                 digestText.append(data);
                 return new String(Json.writeLine(data), StandardCharsets.UTF_8);
             }
-            if (!first) {
+            if (previous != null) {
                 json.append(',');
                 digestText.append(", ");
             }
-            first = false;
+            previous = key;
             json.append('"').append(key).append("\":");
             digestText.append(key).append('=');
             if (value instanceof String s) {

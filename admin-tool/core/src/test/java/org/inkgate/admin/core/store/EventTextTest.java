@@ -41,6 +41,17 @@ class EventTextTest {
         }
     }
 
+    @Test
+    void aMapNotSortedByKey_isWrittenAsJacksonAndToStringWriteIt() {
+        java.util.LinkedHashMap<String, Object> data = new java.util.LinkedHashMap<>();
+        data.put("text", "b");
+        data.put("pos", 3);
+        data.put("len", 1);
+        check(data);
+        data.put("pos", 4); // same order, other value
+        check(data);
+    }
+
     private static Object value(SplittableRandom random) {
         return switch (random.nextInt(12)) {
             case 0, 1, 2 -> text(random, 20);
