@@ -28,6 +28,7 @@ import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.response.TaskResponse;
 import org.inkgate.format.trust.TrustPolicy;
+import org.inkgate.admin.core.store.EventText;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.SittingRecord;
 import org.inkgate.admin.core.store.StoreException;
@@ -88,9 +89,19 @@ public final class Collector {
         }
     }
 
-    /** A package read by a worker: opened, or refused, or skipped because its bytes are known. */
+    /**
+     * A package read by a worker: opened, or refused, or skipped because its bytes are known. An
+     * opened one carries what breaks the event contract (null when nothing does), checked on the
+     * reading thread because it depends on the package alone; the single writer reports it in
+     * its turn among the other checks, as before.
+     */
     private record Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
-            IOException failure, boolean known) {
+            IOException failure, boolean known, String contractBreaches) {
+
+        Read(Path file, String sha256, OpenedResponse opened, SittingRecord record, FormatRefusal refusal,
+                IOException failure, boolean known) {
+            this(file, sha256, opened, record, refusal, failure, known, null);
+        }
     }
 
     /** Imports the files; reports each outcome to {@code progress} as it is settled. */
@@ -144,8 +155,8 @@ public final class Collector {
             try {
                 OpenedResponse opened = reader.open(file.getFileName().toString(), bytes);
                 // digest and row rendering here, on the reading threads, so the single writer only stores
-                return new Read(file, sha, opened, SittingRecord.of(opened, contentSha256(opened), file.toString()),
-                        null, null, false);
+                return new Read(file, sha, opened, record(opened, file.toString()), null, null, false,
+                        contractBreaches(opened.response(), opened.events()));
             } catch (FormatRefusal refusal) {
                 return new Read(file, sha, null, null, refusal, null, false);
             }
@@ -160,18 +171,35 @@ public final class Collector {
      * Cheaper than re-encoding the log as JSON lines, and equally exact.
      */
     static String contentSha256(OpenedResponse opened) {
+        return record(opened, "").contentSha256();
+    }
+
+    /**
+     * The package's rows to store and its content digest, from one pass over the events: each time
+     * and each data map is written out once and serves both (before, the digest and the rows each
+     * rendered them, the data through Jackson every time). The digest's text is unchanged:
+     * seq|at|mono|type|task|data with the data map's {@code toString} ({@code ContentDigestTest}).
+     */
+    static SittingRecord record(OpenedResponse opened, String sourceFile) {
+        java.util.List<org.inkgate.format.response.ProcessEvent> events = opened.events();
+        String[] at = new String[events.size()];
+        String[] data = new String[events.size()];
         java.security.MessageDigest digest = Sha256.newDigest();
         byte[] prefix = new byte[4];
         update(digest, prefix, Json.writeLine(opened.response()));
-        StringBuilder line = new StringBuilder(128);
-        for (org.inkgate.format.response.ProcessEvent e : opened.events()) {
+        StringBuilder line = new StringBuilder(256);
+        StringBuilder json = new StringBuilder(128);
+        for (int i = 0; i < at.length; i++) {
+            org.inkgate.format.response.ProcessEvent e = events.get(i);
+            at[i] = e.at().toString();
             // the same characters as seq|at|mono|type|task|data by string concatenation: stored digests stay valid
             line.setLength(0);
-            line.append(e.seq()).append('|').append(e.at()).append('|').append(e.mono()).append('|').append(e.type())
-                    .append('|').append(e.task()).append('|').append(e.data());
+            line.append(e.seq()).append('|').append(at[i]).append('|').append(e.mono()).append('|').append(e.type())
+                    .append('|').append(e.task()).append('|');
+            data[i] = EventText.json(e.data(), json, line);
             update(digest, prefix, line.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
         }
-        return org.inkgate.format.crypto.Hex.of(digest.digest());
+        return new SittingRecord(opened, org.inkgate.format.crypto.Hex.of(digest.digest()), sourceFile, at, data);
     }
 
     private static void update(java.security.MessageDigest digest, byte[] prefix, byte[] bytes) {
@@ -216,7 +244,7 @@ public final class Collector {
             return refuse(r, "form-mismatch", name + ": " + mismatch + ". The client that wrote it did not follow the"
                     + " signed bundle; keep the file and report it");
         }
-        String broken = contractBreaches(d, opened.events());
+        String broken = r.contractBreaches();
         if (broken != null) {
             return refuse(r, "event-contract", name + ": " + broken + ". Nothing of it was counted. The client that wrote it"
                     + " did not keep the event contract (docs/formats.md, \"Event types\"); keep the file and report it with"

@@ -1,8 +1,6 @@
 package org.inkgate.admin.core.store;
 
-import java.nio.charset.StandardCharsets;
 import java.util.List;
-import org.inkgate.format.json.Json;
 import org.inkgate.format.response.OpenedResponse;
 import org.inkgate.format.response.ProcessEvent;
 
@@ -19,14 +17,18 @@ import org.inkgate.format.response.ProcessEvent;
 public record SittingRecord(OpenedResponse opened, String contentSha256, String sourceFile, String[] eventAt,
         String[] eventData) {
 
+    /** The record of a package whose content digest is already known (the collector makes both at once). */
     public static SittingRecord of(OpenedResponse opened, String contentSha256, String sourceFile) {
         List<ProcessEvent> events = opened.events();
         String[] at = new String[events.size()];
         String[] data = new String[events.size()];
+        StringBuilder json = new StringBuilder(128);
+        StringBuilder ignored = new StringBuilder(128);
         for (int i = 0; i < at.length; i++) {
             ProcessEvent e = events.get(i);
             at[i] = e.at().toString();
-            data[i] = new String(Json.writeLine(e.data()), StandardCharsets.UTF_8);
+            ignored.setLength(0);
+            data[i] = EventText.json(e.data(), json, ignored);
         }
         return new SittingRecord(opened, contentSha256, sourceFile, at, data);
     }

@@ -27,7 +27,14 @@ import org.inkgate.format.testutil.TestKeys;
  */
 public final class CollectBench {
 
+    private static final java.lang.management.ThreadMXBean THREADS = java.lang.management.ManagementFactory.getThreadMXBean();
+
     private CollectBench() {
+    }
+
+    private static long processCpuNanos() {
+        return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory.getOperatingSystemMXBean())
+                .getProcessCpuTime();
     }
 
     public static void main(String[] args) throws Exception {
@@ -77,6 +84,8 @@ public final class CollectBench {
                 Files.deleteIfExists(Path.of(db + suffix));
             }
             long start = System.nanoTime();
+            long processCpu = processCpuNanos();
+            long writerCpu = THREADS.getCurrentThreadCpuTime();
             long imported;
             try (ResultsStore store = StoreFixture.of(db).results()) {
                 store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
@@ -90,8 +99,12 @@ public final class CollectBench {
             }
             double s = (System.nanoTime() - start) / 1e9;
             seconds.add(s);
-            System.out.printf("run %d: collected %d packages (%d events) in %.1f s%n", run + 1, imported,
-                    (long) packages * events, s);
+            // CPU time is less sensitive than wall time to other work on a shared machine: the process's
+            // (reading threads, writer, garbage collector, JIT) and the calling thread's, which stores
+            double process = (processCpuNanos() - processCpu) / 1e6 / packages;
+            double writer = (THREADS.getCurrentThreadCpuTime() - writerCpu) / 1e6 / packages;
+            System.out.printf("run %d: collected %d packages (%d events) in %.1f s; CPU per package: process %.1f ms,"
+                    + " storing thread %.1f ms%n", run + 1, imported, (long) packages * events, s, process, writer);
         }
         Collections.sort(seconds);
         System.out.printf("median %.1f s over %d runs%n", seconds.get(seconds.size() / 2), runs);

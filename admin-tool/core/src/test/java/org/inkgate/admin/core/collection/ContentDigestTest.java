@@ -43,7 +43,7 @@ class ContentDigestTest {
         assertEquals(definition(opened), Collector.contentSha256(opened));
     }
 
-    private static String definition(OpenedResponse opened) throws Exception {
+    static String definition(OpenedResponse opened) throws Exception {
         MessageDigest digest = MessageDigest.getInstance("SHA-256");
         prefixed(digest, Json.writeLine(opened.response()));
         for (ProcessEvent e : opened.events()) {
