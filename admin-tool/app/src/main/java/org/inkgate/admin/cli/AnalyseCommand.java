@@ -78,11 +78,14 @@ public final class AnalyseCommand implements Callable<Integer> {
                     + " with --store it takes the place of the store's answers")
     private Path questionnaire;
 
-    @Option(names = "--store", paramLabel = "FILE.db",
-            description = "Optional results store (from collect): candidates' levels, tool use and process events of"
+    @Option(names = "--store", paramLabel = "STORE",
+            description = "Optional results store (from collect; a file or postgresql://host:port/database): candidates' levels, tool use and process events of"
                     + " --exam are read from it, and its ratings when --ratings is left out; not together with"
                     + " --tool-usage or --process", converter = StoreLocationConverter.class)
     private StoreLocation store;
+
+    @Option(names = "--store-password-file", paramLabel = "FILE", description = StorePasswordFile.DESCRIPTION)
+    private Path storePasswordFile;
 
     @Option(names = "--exam", paramLabel = "ID",
             description = "The exam in --store; may be left out when the store holds one exam")
@@ -190,14 +193,14 @@ public final class AnalyseCommand implements Callable<Integer> {
         if (mfrmAnchors != null && mfrmOptions == null) {
             throw new ParameterException(spec.commandLine(), "--mfrm-anchors needs --mfrm-facets");
         }
-        java.nio.file.Path storeFile;
+        StoreLocation store;
         try {
-            storeFile = store == null ? null : store.requireFile("analyse --store");
-        } catch (org.inkgate.admin.core.store.StoreException notYet) {
-            throw new ParameterException(spec.commandLine(), notYet.getMessage());
+            store = this.store == null ? null : StorePasswordFile.apply(this.store, storePasswordFile);
+        } catch (IllegalArgumentException e) {
+            throw new ParameterException(spec.commandLine(), e.getMessage());
         }
         AnalysisRun.Request request = new AnalysisRun.Request(ratings, candidates, attributes, rosterAttributes,
-                toolUsage, process, questionnaire, storeFile, exam, out, options, mfrmOptions, mfrmAnchors,
+                toolUsage, process, questionnaire, store, exam, out, options, mfrmOptions, mfrmAnchors,
                 spec.commandLine().getParseResult().originalArgs());
         AnalysisRun.Written written;
         try (ProgressReporter progress = ProgressReporter.onStandardError(err, "analyse", "stages", 0)) {

@@ -3,10 +3,10 @@ package org.inkgate.admin.cli;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
-import javafx.application.Application;
 import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.gui.rating.DeskApp;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -62,7 +62,14 @@ final class DeskCommand implements Callable<Integer> {
         }
         out.println("Opening the rating desk; close the window to finish (every change is already stored as a draft).");
         out.flush();
-        Application.launch(DeskApp.class, "--store=" + storeOptions.store.requireFile("the rating desk").toAbsolutePath(), "--exam=" + examId);
+        StoreLocation at;
+        try {
+            at = storeOptions.location();
+        } catch (RatingException e) {
+            err.println("inkgate-admin rate desk: " + e.getMessage() + ". No window was opened.");
+            return InkgateAdmin.PROBLEMS;
+        }
+        DeskApp.launch(at instanceof StoreLocation.File f ? StoreLocation.file(f.path().toAbsolutePath()) : at, examId);
         return InkgateAdmin.OK;
     }
 }

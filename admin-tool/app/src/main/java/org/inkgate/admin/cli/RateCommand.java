@@ -49,10 +49,23 @@ final class RateCommand extends GroupCommand {
                 converter = StoreLocationConverter.class)
         StoreLocation store;
 
+        @Option(names = "--store-password-file", paramLabel = "FILE", description = StorePasswordFile.DESCRIPTION)
+        java.nio.file.Path storePasswordFile;
+
         @Option(names = "--exam", paramLabel = "ID", description = "the exam; may be left out when the store holds one")
         String exam;
 
+        /** The store with its password file, if one was named. */
+        StoreLocation location() throws RatingException {
+            try {
+                return StorePasswordFile.apply(store, storePasswordFile);
+            } catch (IllegalArgumentException e) {
+                throw new RatingException(e.getMessage());
+            }
+        }
+
         RatingStore open() throws RatingException {
+            StoreLocation store = location();
             String id = exam;
             if (id == null) {
                 List<String> exams = Stores.exams(store);

@@ -57,10 +57,10 @@ import org.inkgate.format.io.Utf8Text;
  */
 public final class AnalysisRun {
 
-    /** What to analyse; null paths are inputs not given. */
+    /** What to analyse; null paths are inputs not given; the store is a file or a PostgreSQL server. */
     public record Request(Path ratings, Path candidates, List<String> attributes, List<String> rosterAttributes,
-            Path toolUsage, Path process, Path questionnaire, Path store, String exam, Path out, StudyOptions options,
-            MfrmOptions mfrm, Path anchors, List<String> arguments) {
+            Path toolUsage, Path process, Path questionnaire, StoreLocation store, String exam, Path out,
+            StudyOptions options, MfrmOptions mfrm, Path anchors, List<String> arguments) {
 
         public Request {
             attributes = declared(attributes);
@@ -68,11 +68,21 @@ public final class AnalysisRun {
             arguments = List.copyOf(arguments);
         }
 
+        /** A request whose store, if any, is a file (the window's store field). */
+        public Request(Path ratings, Path candidates, List<String> attributes, List<String> rosterAttributes,
+                Path toolUsage, Path process, Path questionnaire, Path storeFile, String exam, Path out,
+                StudyOptions options, MfrmOptions mfrm, Path anchors, List<String> arguments) {
+            this(ratings, candidates, attributes, rosterAttributes, toolUsage, process, questionnaire,
+                    storeFile == null ? null : StoreLocation.file(storeFile), exam, out, options, mfrm, anchors, arguments);
+        }
+
         /** Every input file given, by its command-line option, in a fixed order (for the provenance). */
         public Map<String, Path> inputFiles() {
             Map<String, Path> in = new LinkedHashMap<>();
             Object[][] options = {{"--ratings", ratings}, {"--candidates", candidates}, {"--tool-usage", toolUsage},
-                {"--process", process}, {"--questionnaire", questionnaire}, {"--store", store},
+                {"--process", process}, {"--questionnaire", questionnaire},
+                // a store file is an input file with a digest; a server store is named in the arguments only
+                {"--store", store instanceof StoreLocation.File f ? f.path() : null},
                 {"--mfrm-anchors", anchors}};
             for (Object[] o : options) {
                 if (o[1] != null) {
@@ -358,8 +368,8 @@ public final class AnalysisRun {
             return null;
         }
         String chosen = chooseExam();
-        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(q.store()))) {
-            return QuestionnaireInput.read(s, chosen, q.store().getFileName().toString());
+        try (ResultsStore s = Stores.openResultsForReading(q.store())) {
+            return QuestionnaireInput.read(s, chosen, storeName(q.store()));
         } catch (StoreException e) {
             throw new Refused(false, "could not read the results store " + q.store() + ": " + e.getMessage());
         }
@@ -367,9 +377,7 @@ public final class AnalysisRun {
 
     /** The store's ratings of the chosen exam through the analysis's own reader. */
     private List<Rating> readStoreRatings() throws Refused, IOException, InputRejected {
-        if (!Files.isRegularFile(q.store())) {
-            throw new Refused(false, "no results store at " + q.store() + "; give the file collect wrote");
-        }
+        refuseMissingFile();
         String chosen = chooseExam();
         try {
             List<Rating> r = StoreRatings.read(q.store(), chosen);
@@ -383,9 +391,21 @@ public final class AnalysisRun {
         }
     }
 
+    /** A store file that is not there; a server store says for itself when it holds no store. */
+    private void refuseMissingFile() throws Refused {
+        if (q.store() instanceof StoreLocation.File f && !Files.isRegularFile(f.path())) {
+            throw new Refused(false, "no results store at " + q.store() + "; give the file collect wrote");
+        }
+    }
+
+    /** The store as a source name in the report: a file's name, a server store's address. */
+    static String storeName(StoreLocation store) {
+        return store instanceof StoreLocation.File f ? f.path().getFileName().toString() : store.toString();
+    }
+
     /** The exam named by --exam, or the store's only exam. */
     private String chooseExam() throws Refused {
-        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(q.store()))) {
+        try (ResultsStore s = Stores.openResultsForReading(q.store())) {
             List<String> exams = s.examIds();
             if (q.exam() == null) {
                 if (exams.size() != 1) {
@@ -411,11 +431,9 @@ public final class AnalysisRun {
             throw new Refused(false, "give either --store or --tool-usage/--process, not both: the store"
                     + " already holds the tool use and process events");
         }
-        if (!Files.isRegularFile(q.store())) {
-            throw new Refused(false, "no results store at " + q.store() + "; give the file collect wrote");
-        }
+        refuseMissingFile();
         String chosen = chooseExam();
-        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(q.store()))) {
+        try (ResultsStore s = Stores.openResultsForReading(q.store())) {
             return StoreStudyInput.read(s, chosen, q.rosterAttributes());
         } catch (StoreException e) {
             throw new Refused(false, "could not read the results store " + q.store() + ": " + e.getMessage());

@@ -27,14 +27,21 @@ public final class StoreRatings {
 
     /** Every current rating of the exam, as the analysis reads them (empty when nothing is rated yet). */
     public static List<Rating> read(Path storeFile, String examId) throws RatingException, IOException, InputRejected {
+        return read(StoreLocation.file(storeFile), examId);
+    }
+
+    /** As {@link #read(Path, String)} from a store at any location (a file or a PostgreSQL server). */
+    public static List<Rating> read(StoreLocation store, String examId) throws RatingException, IOException,
+            InputRejected {
         StringWriter csv = new StringWriter();
         long rows;
-        try (RatingStore s = Stores.openRating(StoreLocation.file(storeFile), examId)) {
+        try (RatingStore s = Stores.openRating(store, examId)) {
             rows = RatingExport.ratings(s, csv);
         }
         if (rows == 0) {
             return List.of(); // the reader refuses a table with no rows; the caller says why in its own words
         }
-        return RatingsReader.read(storeFile.getFileName() + " (ratings of " + examId + ")", new StringReader(csv.toString()));
+        return RatingsReader.read(AnalysisRun.storeName(store) + " (ratings of " + examId + ")",
+                new StringReader(csv.toString()));
     }
 }

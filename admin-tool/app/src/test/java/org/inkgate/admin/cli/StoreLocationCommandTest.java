@@ -57,18 +57,21 @@ class StoreLocationCommandTest {
     }
 
     @Test
-    void ratingAndAnalyse_postgresqlStore_areNotYet_namingWhatWorks() {
-        // refused before any connection is tried: the invented server is never reached
-        String server = "postgresql://db.invented.example:5432/inkgate";
+    void ratingAndAnalyse_postgresqlStoreNotReachable_sayWhichServerAndWhatToCheck() {
+        // rating and analyse --store work on a PostgreSQL store (PostgresRatingCommandTest); a server that does not
+        // answer (nothing listens on port 1 of the loopback address) is named with what to check
+        String server = "postgresql://127.0.0.1:1/inkgate";
         Result rate = run("rate", "progress", "--store", server);
         assertEquals(InkgateAdmin.PROBLEMS, rate.code(), rate.out() + rate.err());
-        assertTrue(rate.err().contains("rating on a PostgreSQL store is not yet in this version"), rate.err());
-        assertTrue(rate.err().contains("What works on a PostgreSQL store: collect, missing and export"), rate.err());
-        assertTrue(rate.err().contains("--store results.db"), rate.err());
+        assertTrue(rate.err().contains("the connection to the PostgreSQL server postgresql://127.0.0.1:1/inkgate failed"),
+                rate.err());
+        assertTrue(rate.err().contains("check the host, the port and the firewall"), rate.err());
 
         Result analyse = run("analyse", "--store", server, "--out", dir.resolve("report").toString());
-        assertEquals(CommandLine.ExitCode.USAGE, analyse.code(), analyse.err());
-        assertTrue(analyse.err().contains("analyse --store on a PostgreSQL store is not yet"), analyse.err());
+        assertEquals(AnalyseCommand.INPUT_REFUSED, analyse.code(), analyse.out() + analyse.err());
+        assertTrue((analyse.out() + analyse.err()).contains("the connection to the PostgreSQL server"),
+                analyse.out() + analyse.err());
+        assertFalse(Files.exists(dir.resolve("report")), "no report from a store that could not be read");
     }
 
     @Test

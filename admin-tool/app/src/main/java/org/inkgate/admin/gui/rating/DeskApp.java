@@ -12,18 +12,32 @@ import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.core.rating.RatingStore;
 
 /**
- * The rating desk as a JavaFX application, started by {@code inkgate-admin rate desk} with the
- * named parameters {@code --store} and {@code --exam} (the command has checked both).
+ * The rating desk as a JavaFX application, started by {@code inkgate-admin rate desk} through
+ * {@link #launch(StoreLocation, String)} (the command has checked the store and the exam).
  */
 public final class DeskApp extends Application {
+
+    /**
+     * The store the desk opens: handed over in this process, not as a launch parameter, because a
+     * server location carries its user, TLS settings and password file, which its printed form leaves out.
+     */
+    private static volatile StoreLocation location;
 
     private RatingStore store;
     private String failure;
 
+    /** Opens the desk on {@code where} for {@code examId}; returns when the window is closed. */
+    public static void launch(StoreLocation where, String examId) {
+        location = where;
+        Application.launch(DeskApp.class, "--exam=" + examId);
+    }
+
     @Override
     public void init() {
         try {
-            store = Stores.openRating(StoreLocation.file(Path.of(getParameters().getNamed().get("store"))), getParameters().getNamed().get("exam"));
+            StoreLocation where = location != null ? location
+                    : StoreLocation.file(Path.of(getParameters().getNamed().get("store")));
+            store = Stores.openRating(where, getParameters().getNamed().get("exam"));
         } catch (RatingException e) {
             failure = "The rating desk cannot open: " + e.getMessage() + ". Nothing was changed.";
         }

@@ -80,7 +80,7 @@ public sealed interface StoreLocation {
     }
 
     /** The steps that work on a PostgreSQL store in this version, for "not yet" messages. */
-    String SERVER_STEPS = "collect, missing and export";
+    String SERVER_STEPS = "collect, missing, export, rate (with the rating desk) and analyse --store";
 
     /** PostgreSQL's port when a URL names none. */
     int DEFAULT_PORT = 5432;

@@ -5,6 +5,7 @@ import java.util.List;
 import org.inkgate.admin.core.rating.BlindIds;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.store.postgresql.PostgresRatingStore;
 import org.inkgate.admin.core.store.postgresql.PostgresResultsStore;
 import org.inkgate.admin.core.store.sqlite.SqliteRatingStore;
 import org.inkgate.admin.core.store.sqlite.SqliteResultsStore;
@@ -12,8 +13,7 @@ import org.inkgate.admin.core.store.sqlite.SqliteResultsStore;
 /**
  * The one door to storage: opens the stores at a {@link StoreLocation} as core interfaces. The
  * command line and the admin window open every store here and never name an implementation: each
- * kind of store (a SQLite file, a PostgreSQL server) is one case in each method. Rating is on
- * SQLite files only in this version; a server location is refused with what works there.
+ * kind of store (a SQLite file, a PostgreSQL server) is one case in each method.
  */
 public final class Stores {
 
@@ -43,7 +43,7 @@ public final class Stores {
     public static RatingStore openRating(StoreLocation location, String examId) throws RatingException {
         return switch (location) {
             case StoreLocation.File f -> SqliteRatingStore.open(f.path(), examId);
-            case StoreLocation.Server s -> throw ratingNotYet(s);
+            case StoreLocation.Server s -> PostgresRatingStore.open(s, examId, Clock.systemUTC(), new BlindIds());
         };
     }
 
@@ -52,7 +52,7 @@ public final class Stores {
             throws RatingException {
         return switch (location) {
             case StoreLocation.File f -> SqliteRatingStore.open(f.path(), examId, clock, ids);
-            case StoreLocation.Server s -> throw ratingNotYet(s);
+            case StoreLocation.Server s -> PostgresRatingStore.open(s, examId, clock, ids);
         };
     }
 
@@ -60,7 +60,7 @@ public final class Stores {
     public static List<String> exams(StoreLocation location) throws RatingException {
         return switch (location) {
             case StoreLocation.File f -> SqliteRatingStore.exams(f.path());
-            case StoreLocation.Server s -> throw ratingNotYet(s);
+            case StoreLocation.Server s -> PostgresRatingStore.exams(s);
         };
     }
 
@@ -68,12 +68,7 @@ public final class Stores {
     public static boolean hasRubric(StoreLocation location, String examId) throws RatingException {
         return switch (location) {
             case StoreLocation.File f -> SqliteRatingStore.hasRubric(f.path(), examId);
-            case StoreLocation.Server s -> throw ratingNotYet(s);
+            case StoreLocation.Server s -> PostgresRatingStore.hasRubric(s, examId);
         };
-    }
-
-    /** Rating on a server store: not in this version, saying what works. */
-    private static RatingException ratingNotYet(StoreLocation.Server s) {
-        return new RatingException(s.notYet("rating"));
     }
 }

@@ -13,9 +13,18 @@ import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /** Control scripts in the store over an invented exam, and the monitor's figures on a worked example. */
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class ControlScriptsStoreTest {
+
+    @Parameter
+    StoreFixture.Kind kind;
+
 
     private static final Clock CLOCK = Clock.fixed(Instant.parse("2026-12-02T09:00:00Z"), ZoneOffset.UTC);
 
@@ -24,8 +33,8 @@ class ControlScriptsStoreTest {
 
     @Test
     void mark_unknownOrOutOfRange_refused_andMixBeforeAssign_refusedWithWhatToDo() throws Exception {
-        Path db = InventedStore.make(dir, 6, List.of("t1"));
-        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
+        StoreFixture db = InventedStore.make(kind, dir, 6, List.of("t1"));
+        try (RatingStore s = db.rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
             for (int i = 1; i <= 3; i++) {
                 s.addRater("R0" + i, "Invented rater " + i, null);
             }

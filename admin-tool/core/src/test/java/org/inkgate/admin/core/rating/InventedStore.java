@@ -2,7 +2,6 @@ package org.inkgate.admin.core.rating;
 
 import java.nio.file.Path;
 import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.PreparedStatement;
 import java.sql.Statement;
 import java.util.List;
@@ -32,8 +31,20 @@ public final class InventedStore {
 
     public static Path make(Path dir, int candidates, List<String> tasks) throws Exception {
         Path file = dir.resolve("results.db");
-        try (ResultsStore store = StoreFixture.of(file).results()) {
-            try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file); Statement s = c.createStatement()) {
+        make(StoreFixture.of(file), candidates, tasks);
+        return file;
+    }
+
+    /** The invented exam in a new store of the given kind (a SQLite file in {@code dir}, or a fresh server database). */
+    public static StoreFixture make(StoreFixture.Kind kind, Path dir, int candidates, List<String> tasks) throws Exception {
+        StoreFixture fixture = StoreFixture.create(kind, dir);
+        make(fixture, candidates, tasks);
+        return fixture;
+    }
+
+    private static void make(StoreFixture fixture, int candidates, List<String> tasks) throws Exception {
+        try (ResultsStore store = fixture.results()) {
+            try (Connection c = fixture.connect(); Statement s = c.createStatement()) {
                 c.setAutoCommit(false);
                 s.execute("INSERT INTO exams(exam_id, title, language, practice) VALUES ('" + EXAM + "', 'Invented river exam', 'en-GB', 0)");
                 s.execute("INSERT INTO bundles VALUES ('b0', '" + EXAM + "', 'fp', '2026-12-01T00:00:00Z')");
@@ -50,13 +61,17 @@ public final class InventedStore {
             }
             store.registerRubric(EXAM, RUBRIC);
         }
-        addCandidates(file, 0, candidates, tasks);
-        return file;
+        addCandidates(fixture, 0, candidates, tasks);
     }
 
     /** Adds candidates {@code from} .. {@code from + count - 1}, each with one sitting answering every task. */
     public static void addCandidates(Path file, int from, int count, List<String> tasks) throws Exception {
-        try (Connection c = DriverManager.getConnection("jdbc:sqlite:" + file)) {
+        addCandidates(StoreFixture.of(file), from, count, tasks);
+    }
+
+    /** As {@link #addCandidates(Path, int, int, List)} in a store of any kind. */
+    public static void addCandidates(StoreFixture fixture, int from, int count, List<String> tasks) throws Exception {
+        try (Connection c = fixture.connect()) {
             c.setAutoCommit(false);
             try (PreparedStatement cand = c.prepareStatement("INSERT INTO candidates(exam_id, candidate_number, level,"
                     + " form_id) VALUES (?,?,?,'F1')");

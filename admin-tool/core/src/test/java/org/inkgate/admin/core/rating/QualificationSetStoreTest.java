@@ -16,6 +16,9 @@ import java.util.Map;
 import org.inkgate.admin.core.testutil.StoreFixture;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * The qualification set through the real SQLite rating store over an invented exam (6 candidates,
@@ -24,7 +27,13 @@ import org.junit.jupiter.api.io.TempDir;
  * admitted, and qualification ratings kept out of every candidate's scores. Agreement figures are
  * those of the control monitor (exact, adjacent within 1 point, mean difference; common practice).
  */
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class QualificationSetStoreTest {
+
+    @Parameter
+    StoreFixture.Kind kind;
+
 
     private static final Clock CLOCK = Clock.fixed(Instant.parse("2026-12-03T09:00:00Z"), ZoneOffset.UTC);
     private static final Map<String, Integer> AGREED_1 = Map.of("content", 5, "language", 6);
@@ -35,8 +44,8 @@ class QualificationSetStoreTest {
 
     @Test
     void liveRating_opensOnlyAfterTheSetIsPassed_orTheRaterIsAdmitted() throws Exception {
-        Path db = InventedStore.make(dir, 6, List.of("t1"));
-        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
+        StoreFixture db = InventedStore.make(kind, dir, 6, List.of("t1"));
+        try (RatingStore s = db.rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
             for (int i = 1; i <= 3; i++) {
                 s.addRater("R0" + i, "Invented rater " + i, null);
             }
@@ -95,8 +104,8 @@ class QualificationSetStoreTest {
 
     @Test
     void sheet_carriesTheSetFirst_andItsImportIsChecked() throws Exception {
-        Path db = InventedStore.make(dir, 6, List.of("t1"));
-        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
+        StoreFixture db = InventedStore.make(kind, dir, 6, List.of("t1"));
+        try (RatingStore s = db.rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
             s.addRater("R01", "Invented rater one", null);
             s.addRater("R02", "Invented rater two", null);
             s.assign(2, 7L, false);

@@ -12,9 +12,18 @@ import org.inkgate.admin.core.csv.Csv;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /** Offline rating sheets: export, fill, import; every bad row named with row and column; all or nothing. */
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class RatingSheetsTest {
+
+    @Parameter
+    StoreFixture.Kind kind;
+
 
     @TempDir
     Path dir;
@@ -25,8 +34,8 @@ class RatingSheetsTest {
 
     @BeforeEach
     void assignAnInventedExam() throws Exception {
-        Path db = InventedStore.make(dir, 8, List.of("t1", "t2"));
-        store = StoreFixture.of(db).rating(InventedStore.EXAM);
+        StoreFixture db = InventedStore.make(kind, dir, 8, List.of("t1", "t2"));
+        store = db.rating(InventedStore.EXAM);
         for (String r : List.of("R01", "R02", "R03")) {
             store.addRater(r, "Invented " + r, null);
         }

@@ -10,7 +10,6 @@ import org.inkgate.admin.core.testutil.StoreFixture;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.sql.DriverManager;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
@@ -22,17 +21,26 @@ import java.util.Map;
 import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
-/** The rating store, opened through the store factory, over a real results store holding an invented exam. */
+/** The rating store, opened through the store factory, over a real results store holding an invented exam, on SQLite and PostgreSQL. */
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class RatingStoreTest {
+
+    @Parameter
+    StoreFixture.Kind kind;
+
 
     private static final Clock CLOCK = Clock.fixed(Instant.parse("2026-12-02T09:00:00Z"), ZoneOffset.UTC);
 
     @TempDir
     Path dir;
 
-    private RatingStore open(Path db) throws RatingException {
-        return StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds());
+    private RatingStore open(StoreFixture db) throws RatingException {
+        return db.rating(InventedStore.EXAM, CLOCK, new BlindIds());
     }
 
     private static RatingDesk.RatingSheet sheet(int content, int language) {
@@ -46,9 +54,9 @@ class RatingStoreTest {
     }
 
     /** Candidate data behind every blind id, read straight from the store for the blindness checks. */
-    private static Map<String, List<String>> hidden(Path db) throws Exception {
+    private static Map<String, List<String>> hidden(StoreFixture db) throws Exception {
         Map<String, List<String>> out = new HashMap<>();
-        try (var c = DriverManager.getConnection("jdbc:sqlite:" + db); var st = c.createStatement();
+        try (var c = db.connect(); var st = c.createStatement();
                 var rs = st.executeQuery("SELECT a.blind_id, s.candidate_number, c.level, s.form_id, r.condition_id,"
                         + " s.submitted_at, s.package_id, a.sitting_id FROM rating_assignments a JOIN sittings s"
                         + " ON s.sitting_id = a.sitting_id JOIN responses r ON r.sitting_id = a.sitting_id AND"
@@ -63,11 +71,11 @@ class RatingStoreTest {
 
     @Test
     void assign_storesQueuesWithBlindIdsThatRevealNothingAndAreNotReproducibleFromTheSeed() throws Exception {
-        Path a = InventedStore.make(Files.createDirectories(dir.resolve("a")), 60, List.of("t1", "t2"));
-        Path b = InventedStore.make(Files.createDirectories(dir.resolve("b")), 60, List.of("t1", "t2"));
+        StoreFixture a = InventedStore.make(kind, Files.createDirectories(dir.resolve("a")), 60, List.of("t1", "t2"));
+        StoreFixture b = InventedStore.make(kind, Files.createDirectories(dir.resolve("b")), 60, List.of("t1", "t2"));
         Map<String, Set<String>> raterSetsA = new HashMap<>();
         Map<String, Set<String>> raterSetsB = new HashMap<>();
-        for (Path db : List.of(a, b)) {
+        for (StoreFixture db : List.of(a, b)) {
             try (RatingStore s = open(db)) {
                 addRaters(s, 5);
                 RatingStore.AssignmentOutcome out = s.assign(2, 424242L, false);
@@ -104,7 +112,7 @@ class RatingStoreTest {
         assertTrue(Math.abs(rho) < 0.3, "rho " + rho);
         // the same seed gives the same raters per response (determinism of the design)
         for (var entry : List.of(Map.entry(a, raterSetsA), Map.entry(b, raterSetsB))) {
-            try (var c = DriverManager.getConnection("jdbc:sqlite:" + entry.getKey()); var st = c.createStatement();
+            try (var c = entry.getKey().connect(); var st = c.createStatement();
                     var rs = st.executeQuery("SELECT sitting_id || '/' || task_id, rater_id FROM rating_assignments")) {
                 while (rs.next()) {
                     entry.getValue().computeIfAbsent(rs.getString(1), k -> new HashSet<>()).add(rs.getString(2));
@@ -126,7 +134,7 @@ class RatingStoreTest {
 
     @Test
     void assign_laterRunForLateResponses_balancesTotalsAndKeepsQueuesGrouped() throws Exception {
-        Path db = InventedStore.make(dir, 30, List.of("t1", "t2"));
+        StoreFixture db = InventedStore.make(kind, dir, 30, List.of("t1", "t2"));
         try (RatingStore s = open(db)) {
             addRaters(s, 3);
             s.assign(2, 1L, false);
@@ -156,7 +164,7 @@ class RatingStoreTest {
 
     @Test
     void assign_unlinkableDesign_isRefusedAndNothingStored_unlessAllowed() throws Exception {
-        Path db = InventedStore.make(dir, 3, List.of("t1"));
+        StoreFixture db = InventedStore.make(kind, dir, 3, List.of("t1"));
         try (RatingStore s = open(db)) {
             addRaters(s, 7);
             RatingException e = assertThrows(RatingException.class, () -> s.assign(2, 9L, false));
@@ -171,7 +179,7 @@ class RatingStoreTest {
 
     @Test
     void desk_draftSurvivesReopen_submitValidates_resubmissionKeepsHistoryWithWhoAndWhen() throws Exception {
-        Path db = InventedStore.make(dir, 10, List.of("t1", "t2"));
+        StoreFixture db = InventedStore.make(kind, dir, 10, List.of("t1", "t2"));
         String id;
         try (RatingStore s = open(db)) {
             addRaters(s, 3);
@@ -209,7 +217,7 @@ class RatingStoreTest {
 
     @Test
     void rule_disagreementFlagsAndGoesToAThirdRater_adjudicationSettlesByClosestPair() throws Exception {
-        Path db = InventedStore.make(dir, 6, List.of("t1"));
+        StoreFixture db = InventedStore.make(kind, dir, 6, List.of("t1"));
         try (RatingStore s = open(db)) {
             addRaters(s, 4);
             s.assign(2, 5L, false);
@@ -277,7 +285,7 @@ class RatingStoreTest {
 
     @Test
     void rule_noThirdRaterLeft_staysInTheQueueAndSaysSo() throws Exception {
-        Path db = InventedStore.make(dir, 2, List.of("t1"));
+        StoreFixture db = InventedStore.make(kind, dir, 2, List.of("t1"));
         try (RatingStore s = open(db)) {
             addRaters(s, 2);
             s.assign(2, 5L, false);
@@ -326,11 +334,11 @@ class RatingStoreTest {
         // R03 and R04 carry 2 each. Over 8 seeds the adjudicator of (C0000,t1) must always be R04 (a coin would
         // pick R03 about half the time)
         for (int seed = 1; seed <= 8; seed++) {
-            Path db = InventedStore.make(Files.createDirectories(dir.resolve("s" + seed)), 2, List.of("t1", "t2"));
+            StoreFixture db = InventedStore.make(kind, Files.createDirectories(dir.resolve("s" + seed)), 2, List.of("t1", "t2"));
             try (RatingStore s = open(db)) {
                 addRaters(s, 4);
             }
-            try (var c = DriverManager.getConnection("jdbc:sqlite:" + db); var st = c.createStatement()) {
+            try (var c = db.connect(); var st = c.createStatement()) {
                 String[][] rows = {{"1", "t1", "R01", "1"}, {"1", "t1", "R02", "1"}, {"2", "t1", "R03", "1"},
                     {"1", "t2", "R03", "2"}, {"1", "t2", "R04", "1"}, {"2", "t1", "R04", "2"}};
                 int n = 0;
@@ -350,9 +358,9 @@ class RatingStoreTest {
     }
 
     /** Per response (sitting/task) its assignments as [blind id, rater], in assignment order. */
-    private static Map<String, List<String[]>> responses(Path db) throws Exception {
+    private static Map<String, List<String[]>> responses(StoreFixture db) throws Exception {
         Map<String, List<String[]>> out = new java.util.TreeMap<>();
-        try (var c = DriverManager.getConnection("jdbc:sqlite:" + db); var st = c.createStatement();
+        try (var c = db.connect(); var st = c.createStatement();
                 var rs = st.executeQuery("SELECT sitting_id || '/' || task_id, blind_id, rater_id FROM rating_assignments"
                         + " WHERE kind = 'rating' ORDER BY assignment_id")) {
             while (rs.next()) {
@@ -365,11 +373,13 @@ class RatingStoreTest {
 
     @Test
     void open_missingStoreOrExam_saysWhatToGive() throws Exception {
-        RatingException none = assertThrows(RatingException.class, () -> open(dir.resolve("nope.db")));
-        assertTrue(none.getMessage().contains("no results store at"), none.getMessage());
-        Path db = InventedStore.make(dir, 1, List.of("t1"));
-        RatingException exam = assertThrows(RatingException.class, () -> StoreFixture.of(db).rating("other"));
+        StoreFixture empty = StoreFixture.create(kind, Files.createDirectories(dir.resolve("empty")), "nope.db");
+        RatingException none = assertThrows(RatingException.class, () -> open(empty));
+        assertTrue(none.getMessage().contains("no results store " + (kind == StoreFixture.Kind.SQLITE ? "at" : "in")),
+                none.getMessage());
+        StoreFixture db = InventedStore.make(kind, dir, 1, List.of("t1"));
+        RatingException exam = assertThrows(RatingException.class, () -> db.rating("other"));
         assertTrue(exam.getMessage().contains("holds no exam other"), exam.getMessage());
-        assertNotEquals(null, org.inkgate.admin.core.store.Stores.exams(org.inkgate.admin.core.store.StoreLocation.file(db)));
+        assertNotEquals(null, org.inkgate.admin.core.store.Stores.exams(db.location()));
     }
 }

@@ -7,7 +7,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.inkgate.admin.core.testutil.StoreFixture;
 
 import java.nio.file.Path;
-import java.sql.DriverManager;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.ZoneOffset;
@@ -16,12 +15,21 @@ import java.util.List;
 import java.util.Map;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.Parameter;
+import org.junit.jupiter.params.ParameterizedClass;
+import org.junit.jupiter.params.provider.MethodSource;
 
 /**
  * Issue 15 §3: a response the test owner settled by a resolution entry leaves every queue, and a
  * rating that arrives for it afterwards, from the desk or a sheet, is refused with the reason.
  */
+@ParameterizedClass(name = "{0}")
+@MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
 class SettledResponseTest {
+
+    @Parameter
+    StoreFixture.Kind kind;
+
 
     private static final Clock CLOCK = Clock.fixed(Instant.parse("2026-12-02T09:00:00Z"), ZoneOffset.UTC);
 
@@ -30,8 +38,8 @@ class SettledResponseTest {
 
     @Test
     void resolvedBeforeTheAdjudicatorRated_leavesTheQueue_andDeskAndSheetRatingsAreRefused() throws Exception {
-        Path db = InventedStore.make(dir, 1, List.of("t1"));
-        try (RatingStore s = StoreFixture.of(db).rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
+        StoreFixture db = InventedStore.make(kind, dir, 1, List.of("t1"));
+        try (RatingStore s = db.rating(InventedStore.EXAM, CLOCK, new BlindIds())) {
             for (int i = 1; i <= 3; i++) {
                 s.addRater("R0" + i, "Invented rater " + i, null);
             }
@@ -88,9 +96,9 @@ class SettledResponseTest {
         return new RatingDesk.RatingSheet(Map.of("content", content, "language", language), "");
     }
 
-    private static List<String[]> ratings(Path db) throws Exception {
+    private static List<String[]> ratings(StoreFixture db) throws Exception {
         List<String[]> out = new ArrayList<>();
-        try (var c = DriverManager.getConnection("jdbc:sqlite:" + db); var st = c.createStatement();
+        try (var c = db.connect(); var st = c.createStatement();
                 var rs = st.executeQuery("SELECT blind_id, rater_id FROM rating_assignments WHERE kind = 'rating'"
                         + " ORDER BY assignment_id")) {
             while (rs.next()) {

@@ -61,10 +61,11 @@ class StoreLocationTest {
     @Test
     void requireFile_serverStore_isNotYetForFileOnlySteps_namingWhatWorks() throws Exception {
         StoreException e = assertThrows(StoreException.class,
-                () -> StoreLocation.parse("postgresql://db.invented.example/inkgate").requireFile("analyse --store"));
-        assertTrue(e.getMessage().startsWith("analyse --store on a PostgreSQL store is not yet in this version"),
+                () -> StoreLocation.parse("postgresql://db.invented.example/inkgate").requireFile("the admin window"));
+        assertTrue(e.getMessage().startsWith("the admin window on a PostgreSQL store is not yet in this version"),
                 e.getMessage());
-        assertTrue(e.getMessage().contains("What works on a PostgreSQL store: collect, missing and export"), e.getMessage());
+        assertTrue(e.getMessage().contains("What works on a PostgreSQL store: collect, missing, export, rate (with the"
+                + " rating desk) and analyse --store"), e.getMessage());
     }
 
     @Test

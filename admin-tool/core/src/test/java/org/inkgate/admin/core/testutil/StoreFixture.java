@@ -63,6 +63,18 @@ public record StoreFixture(Kind kind, StoreLocation location) {
         return new StoreFixture(Kind.SQLITE, StoreLocation.file(file));
     }
 
+    /**
+     * A plain JDBC connection to the store, for tests that write rows of their own or look behind
+     * the stores' interfaces (the user {@code postgres} of the test server, trusted on loopback).
+     */
+    public java.sql.Connection connect() throws java.sql.SQLException {
+        return switch (location) {
+            case StoreLocation.File f -> java.sql.DriverManager.getConnection("jdbc:sqlite:" + f.path());
+            case StoreLocation.Server s -> java.sql.DriverManager.getConnection("jdbc:postgresql://" + s.host() + ":"
+                    + s.port() + "/" + s.database() + "?user=postgres");
+        };
+    }
+
     /** Opens the results store (created if new). */
     public ResultsStore results() throws StoreException {
         return Stores.openResults(location);

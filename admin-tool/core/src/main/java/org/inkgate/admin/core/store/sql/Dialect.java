@@ -7,7 +7,7 @@ import java.sql.Statement;
 /**
  * What one kind of database does its own way, and nothing else: the spelling of the schema's type
  * words, where the schema version is kept, and how migrators keep out of each other's way. The
- * schema ({@link Schema}) and the stores' queries ({@link SqlResultsStore}) are written once, in SQL
+ * schema ({@link Schema}) and the stores' queries ({@link SqlResultsStore}, {@link SqlRatingStore}) are written once, in SQL
  * that both SQLite and PostgreSQL read alike.
  */
 public interface Dialect {
@@ -26,4 +26,27 @@ public interface Dialect {
 
     /** Run first in each migration transaction: other migrators of the same store wait until it ends. */
     void lockSchema(Statement s) throws SQLException;
+
+    /** Whether the store's database has the table (an empty database, a store of an older version). */
+    boolean hasTable(Connection c, String table) throws SQLException;
+
+    /**
+     * An ORDER BY term giving the rows of a table keyed by text in the order they were first
+     * inserted (the rubric's own order of its criteria).
+     */
+    String insertionOrder();
+
+    /**
+     * Run first in the transaction of an assignment run (or another step that reads a whole exam's
+     * queues and then writes them): a second such run on the same exam waits until this one ends,
+     * then sees what it stored, so two runs never interleave.
+     */
+    void lockAssignmentRuns(Statement s, String examId) throws SQLException;
+
+    /**
+     * Ends a SELECT inside a transaction so that the rows it finds stay locked against a second
+     * writer of the same rows until the transaction ends; the second reads them after the first
+     * committed. Empty where the database has one writer at a time anyway.
+     */
+    String lockRows();
 }

@@ -44,4 +44,37 @@ public final class SqliteDialect implements Dialect {
     public void lockSchema(Statement s) {
         // the file's single writer serialises migrations (see the class comment)
     }
+
+    /** sqlite_master is SQLite's catalogue (sqlite.org, "The Schema Table"). */
+    @Override
+    public boolean hasTable(Connection c, String table) throws SQLException {
+        try (var ps = c.prepareStatement("SELECT 1 FROM sqlite_master WHERE type='table' AND name=?")) {
+            ps.setString(1, table);
+            try (var rs = ps.executeQuery()) {
+                return rs.next();
+            }
+        }
+    }
+
+    /** The rowid: SQLite numbers the rows of a table with a text key in the order they were inserted. */
+    @Override
+    public String insertionOrder() {
+        return "rowid";
+    }
+
+    /**
+     * Nothing to take: a SQLite file has one writer at a time, and a run that read the queues
+     * before another run wrote them fails its commit as busy (SQLITE_BUSY_SNAPSHOT in write-ahead
+     * mode) and is planned again from the new state ({@link org.inkgate.admin.core.store.sql.Busy}).
+     */
+    @Override
+    public void lockAssignmentRuns(Statement s, String examId) {
+        // see above
+    }
+
+    /** Nothing: a SQLite file has one writer at a time (and SQLite has no SELECT ... FOR UPDATE). */
+    @Override
+    public String lockRows() {
+        return "";
+    }
 }

@@ -1,17 +1,17 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.util.List;
 import org.inkgate.admin.core.rating.RaterRegister;
 import org.inkgate.admin.core.rating.RatingException;
 
-/** {@link RaterRegister} in the SQLite store. */
-final class SqliteRaters implements RaterRegister {
+/** {@link RaterRegister} in the results store (SQLite or PostgreSQL). */
+final class SqlRaters implements RaterRegister {
 
     private static final String RATER_ID = "[A-Za-z0-9][A-Za-z0-9._-]{0,31}";
 
     private final RatingSession s;
 
-    SqliteRaters(RatingSession s) {
+    SqlRaters(RatingSession s) {
         this.s = s;
     }
 

@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.sql.SQLException;
 import java.util.ArrayList;
@@ -25,6 +25,7 @@ final class Adjudicators {
      * so a review repeated on a copy of the store picks the same rater.
      */
     void assign(long sittingId, String taskId, String now) throws SQLException {
+        s.lockQueues(); // before the queue ends are read: another desk's flag may be adding to them
         Set<String> already = new HashSet<>(s.db.list("SELECT rater_id FROM rating_assignments WHERE sitting_id=? AND"
                 + " task_id=?", rs -> rs.getString(1), sittingId, taskId));
         Map<String, Integer> load = s.tails.loadInTx();

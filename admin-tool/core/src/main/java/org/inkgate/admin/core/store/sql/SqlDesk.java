@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -11,17 +11,17 @@ import org.inkgate.admin.core.rating.Referrals;
 import org.inkgate.admin.core.source.ExamSource;
 
 /**
- * {@link RatingDesk} in the SQLite store: queues, blind responses, drafts and submissions. Every
+ * {@link RatingDesk} in the results store (SQLite or PostgreSQL): queues, blind responses, drafts and submissions. Every
  * submission is kept (history), with who and when; the current rating of an assignment is its
  * latest submission.
  */
-final class SqliteDesk implements RatingDesk {
+final class SqlDesk implements RatingDesk {
 
     private final RatingSession s;
-    private final SqliteDeskRecords records;
-    private final SqliteReferrals referrals;
+    private final SqlDeskRecords records;
+    private final SqlReferrals referrals;
 
-    SqliteDesk(RatingSession s, SqliteDeskRecords records, SqliteReferrals referrals) {
+    SqlDesk(RatingSession s, SqlDeskRecords records, SqlReferrals referrals) {
         this.s = s;
         this.records = records;
         this.referrals = referrals;

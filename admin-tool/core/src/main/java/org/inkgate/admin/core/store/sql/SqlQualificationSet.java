@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.util.ArrayList;
 import java.util.HashSet;
@@ -11,12 +11,12 @@ import org.inkgate.admin.core.rating.QualificationStanding;
 import org.inkgate.admin.core.rating.RaterRegister;
 import org.inkgate.admin.core.rating.RatingException;
 
-/** {@link QualificationSet} in the SQLite store. */
-final class SqliteQualificationSet implements QualificationSet {
+/** {@link QualificationSet} in the results store (SQLite or PostgreSQL). */
+final class SqlQualificationSet implements QualificationSet {
 
     private final RatingSession s;
 
-    SqliteQualificationSet(RatingSession s) {
+    SqlQualificationSet(RatingSession s) {
         this.s = s;
     }
 

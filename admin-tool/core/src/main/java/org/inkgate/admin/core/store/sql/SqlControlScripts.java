@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.sql.SQLException;
 import java.util.HashSet;
@@ -8,14 +8,13 @@ import java.util.Set;
 import java.util.SplittableRandom;
 import org.inkgate.admin.core.rating.ControlScripts;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.store.sql.SqlSession;
 
-/** {@link ControlScripts} in the SQLite store. */
-final class SqliteControlScripts implements ControlScripts {
+/** {@link ControlScripts} in the results store (SQLite or PostgreSQL). */
+final class SqlControlScripts implements ControlScripts {
 
     private final RatingSession s;
 
-    SqliteControlScripts(RatingSession s) {
+    SqlControlScripts(RatingSession s) {
         this.s = s;
     }
 
@@ -37,6 +36,7 @@ final class SqliteControlScripts implements ControlScripts {
     public int mixControls(long seed) throws RatingException {
         SplittableRandom random = new SplittableRandom(seed);
         return s.tx("mixing control scripts into the queues", () -> {
+            s.lockQueues();
             List<Object[]> controls = s.db.list("SELECT cs.sitting_id, cs.task_id FROM control_scripts cs JOIN"
                     + " sittings s ON s.sitting_id = cs.sitting_id WHERE s.exam_id=? ORDER BY cs.sitting_id,"
                     + " cs.task_id", rs -> new Object[] {rs.getLong(1), rs.getString(2)}, s.examId);

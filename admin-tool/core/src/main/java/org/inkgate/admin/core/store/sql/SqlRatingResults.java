@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -14,14 +14,13 @@ import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingResults;
 import org.inkgate.admin.core.rating.ResponseScores;
-import org.inkgate.admin.core.store.sql.SqlSession;
 
-/** {@link RatingResults} in the SQLite store: control ratings never appear here. */
-final class SqliteRatingResults implements RatingResults {
+/** {@link RatingResults} in the results store (SQLite or PostgreSQL): control ratings never appear here. */
+final class SqlRatingResults implements RatingResults {
 
     private final RatingSession s;
 
-    SqliteRatingResults(RatingSession s) {
+    SqlRatingResults(RatingSession s) {
         this.s = s;
     }
 

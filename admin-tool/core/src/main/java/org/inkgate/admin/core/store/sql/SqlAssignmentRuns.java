@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.sql.SQLException;
 import java.util.ArrayList;
@@ -13,51 +13,69 @@ import org.inkgate.admin.core.rating.RaterLinks;
 import org.inkgate.admin.core.rating.RaterRegister.RaterEntry;
 import org.inkgate.admin.core.rating.RatingAssigner;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.store.sql.SqlSession;
 
-/** {@link AssignmentRuns} in the SQLite store. */
-final class SqliteAssignmentRuns implements AssignmentRuns {
+/** {@link AssignmentRuns} in the results store (SQLite or PostgreSQL). */
+final class SqlAssignmentRuns implements AssignmentRuns {
 
     private final RatingSession s;
 
-    SqliteAssignmentRuns(RatingSession s) {
+    SqlAssignmentRuns(RatingSession s) {
         this.s = s;
     }
 
     @Override
     public List<RatingAssigner.Response> unassignedResponses() throws RatingException {
-        return s.read("listing responses", () -> s.db.list("SELECT r.sitting_id, r.task_id, s.candidate_number FROM"
+        return s.read("listing responses", this::unassigned);
+    }
+
+    private List<RatingAssigner.Response> unassigned() throws SQLException {
+        return s.db.list("SELECT r.sitting_id, r.task_id, s.candidate_number FROM"
                 + " responses r JOIN sittings s ON s.sitting_id = r.sitting_id WHERE s.exam_id=? AND NOT EXISTS (SELECT 1"
                 + " FROM rating_assignments a WHERE a.sitting_id = r.sitting_id AND a.task_id = r.task_id)"
                 + " ORDER BY r.sitting_id, r.task_id",
-                rs -> new RatingAssigner.Response(rs.getLong(1), rs.getString(2), rs.getString(3)), s.examId));
+                rs -> new RatingAssigner.Response(rs.getLong(1), rs.getString(2), rs.getString(3)), s.examId);
     }
 
+    /**
+     * Plans and stores the run in one transaction that first takes the exam's assignment lock
+     * ({@link Dialect#lockAssignmentRuns}): a second run started meanwhile (another admin machine on
+     * a server store) waits, then plans from what this one stored, so no response is assigned twice
+     * and no queue interleaves.
+     */
     @Override
     public AssignmentOutcome assign(int k, long seed, boolean allowUnlinked) throws RatingException {
-        List<RatingAssigner.Response> todo = unassignedResponses();
-        if (todo.isEmpty()) {
-            throw new RatingException("every response of exam " + s.examId + " already has its raters; nothing to assign");
-        }
-        List<RaterEntry> raters = s.read("listing raters", s::raterEntries);
-        if (raters.isEmpty()) {
-            throw new RatingException("no raters yet; add them first (rate raters add ID --label NAME)");
-        }
-        List<RatingAssigner.RaterCapacity> capacities = new ArrayList<>();
-        Map<String, Integer> load = s.read("counting workloads", s::workloads);
-        for (RaterEntry r : raters) {
-            Integer left = r.capacity() == null ? null : Math.max(0, r.capacity() - load.getOrDefault(r.id(), 0));
-            capacities.add(new RatingAssigner.RaterCapacity(r.id(), left));
-        }
-        Map<String, String> last = new HashMap<>();
-        for (RaterEntry r : raters) {
-            String c = s.read("reading queues", () -> s.tails.lastOwnCandidate(r.id()));
-            if (c != null) {
-                last.put(r.id(), c);
+        return s.tx("storing the rating assignment", () -> {
+            s.lockQueues();
+            List<RatingAssigner.Response> todo = unassigned();
+            if (todo.isEmpty()) {
+                throw SqlSession.refusal(new RatingException("every response of exam " + s.examId
+                        + " already has its raters; nothing to assign"));
             }
-        }
-        RatingAssigner.Plan plan = RatingAssigner.assign(todo, capacities, load, last, k, seed);
-        return s.tx("storing the rating assignment", () -> store(plan, todo.size(), capacities, k, seed, allowUnlinked));
+            List<RaterEntry> raters = s.raterEntries();
+            if (raters.isEmpty()) {
+                throw SqlSession.refusal(new RatingException("no raters yet; add them first (rate raters add ID --label NAME)"));
+            }
+            List<RatingAssigner.RaterCapacity> capacities = new ArrayList<>();
+            Map<String, Integer> load = s.workloads();
+            for (RaterEntry r : raters) {
+                Integer left = r.capacity() == null ? null : Math.max(0, r.capacity() - load.getOrDefault(r.id(), 0));
+                capacities.add(new RatingAssigner.RaterCapacity(r.id(), left));
+            }
+            Map<String, String> last = new HashMap<>();
+            for (RaterEntry r : raters) {
+                String c = s.tails.lastOwnCandidate(r.id());
+                if (c != null) {
+                    last.put(r.id(), c);
+                }
+            }
+            RatingAssigner.Plan plan;
+            try {
+                plan = RatingAssigner.assign(todo, capacities, load, last, k, seed);
+            } catch (RatingException refused) {
+                throw SqlSession.refusal(refused);
+            }
+            return store(plan, todo.size(), capacities, k, seed, allowUnlinked);
+        });
     }
 
     private AssignmentOutcome store(RatingAssigner.Plan plan, int responses, List<RatingAssigner.RaterCapacity> capacities,

@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -9,13 +9,13 @@ import org.inkgate.admin.core.rating.DeskRecords;
 import org.inkgate.admin.core.rating.RatingDesk.RatingSheet;
 import org.inkgate.admin.core.rating.RatingException;
 
-/** {@link DeskRecords} in the SQLite store. */
-final class SqliteDeskRecords implements DeskRecords {
+/** {@link DeskRecords} in the results store (SQLite or PostgreSQL). */
+final class SqlDeskRecords implements DeskRecords {
 
     private final RatingSession s;
-    private final SqliteDiscrepancyReview review;
+    private final SqlDiscrepancyReview review;
 
-    SqliteDeskRecords(RatingSession s, SqliteDiscrepancyReview review) {
+    SqlDeskRecords(RatingSession s, SqlDiscrepancyReview review) {
         this.s = s;
         this.review = review;
     }
@@ -90,6 +90,7 @@ final class SqliteDeskRecords implements DeskRecords {
             for (Map.Entry<RatingSession.Assignment, RatingSheet> e : checked.entrySet()) {
                 RatingSession.Assignment a = e.getKey();
                 RatingSheet sheet = e.getValue();
+                s.lockResponse(a.sittingId(), a.taskId());
                 Optional<RatingSession.Submission> current = s.latest(a.id());
                 if (current.isPresent() && same(current.get(), sheet)) {
                     s.db.update("DELETE FROM rating_drafts WHERE assignment_id=?", a.id());

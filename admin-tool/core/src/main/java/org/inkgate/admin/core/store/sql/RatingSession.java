@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.type.TypeReference;
@@ -18,13 +18,12 @@ import org.inkgate.admin.core.rating.RaterRegister;
 import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.source.ExamSource;
-import org.inkgate.admin.core.store.sql.SqlSession;
 
 /**
  * What the parts of one open rating store share: the session on the store, the exam with its
  * rubric, the clock and blind ids, and the look-ups several concerns make (an assignment behind a
  * blind id, a sheet's problems, a response's settlement, the end of a rater's queue). Callers hold
- * the store's lock ({@link SqliteRatingStore} serialises every call).
+ * the store's lock ({@link SqlRatingStore} serialises every call).
  */
 final class RatingSession {
 
@@ -45,6 +44,8 @@ final class RatingSession {
     static final String IN_QUEUE = "(NOT " + SETTLED + " OR " + SUBMITTED + ")";
 
     final SqlSession<RatingException> db;
+    /** What the store's database does its own way (locks, catalogue, row order). */
+    final Dialect dialect;
     final String examId;
     final ExamSource.Rubric rubric;
     final Clock clock;
@@ -52,9 +53,10 @@ final class RatingSession {
     /** Queue ends remembered inside one transaction that assigns adjudicators; forgotten at its edges. */
     final QueueTails tails;
 
-    RatingSession(SqlSession<RatingException> db, String examId, ExamSource.Rubric rubric, Clock clock,
+    RatingSession(SqlSession<RatingException> db, Dialect dialect, String examId, ExamSource.Rubric rubric, Clock clock,
             BlindIds blindIds) {
         this.db = db;
+        this.dialect = dialect;
         this.examId = examId;
         this.rubric = rubric;
         this.clock = clock;
@@ -127,6 +129,23 @@ final class RatingSession {
                     + " (a conflict); settle the conflict before using the response as " + use));
         }
         return sittings.get(0);
+    }
+
+    /**
+     * Inside a transaction, before reading a response's ratings to decide its flag and final score:
+     * a second rater's submission for the same response waits here until this one commits, then
+     * sees both ratings (PostgreSQL; a SQLite file has one writer anyway), so no final score is
+     * decided from half of them.
+     */
+    void lockResponse(long sittingId, String taskId) throws SQLException {
+        db.exists("SELECT 1 FROM responses WHERE sitting_id=? AND task_id=?" + dialect.lockRows(), sittingId, taskId);
+    }
+
+    /** Inside a transaction: waits for any other step writing this exam's queues (see {@link Dialect#lockAssignmentRuns}). */
+    void lockQueues() throws SQLException {
+        try (java.sql.Statement lock = db.connection().createStatement()) {
+            dialect.lockAssignmentRuns(lock, examId);
+        }
     }
 
     static RatingDesk.Kind kind(String stored) {

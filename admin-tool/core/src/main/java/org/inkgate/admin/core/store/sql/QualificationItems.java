@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.sql.ResultSet;
 import java.sql.SQLException;

@@ -1,17 +1,16 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.util.List;
 import java.util.Locale;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.Referrals;
-import org.inkgate.admin.core.store.sql.SqlSession;
 
-/** {@link Referrals} in the SQLite store, and the desk's side of them ({@link #refer}). */
-final class SqliteReferrals implements Referrals {
+/** {@link Referrals} in the results store (SQLite or PostgreSQL), and the desk's side of them ({@link #refer}). */
+final class SqlReferrals implements Referrals {
 
     private final RatingSession s;
 
-    SqliteReferrals(RatingSession s) {
+    SqlReferrals(RatingSession s) {
         this.s = s;
     }
 

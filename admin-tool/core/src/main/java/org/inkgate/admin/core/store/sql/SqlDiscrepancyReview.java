@@ -1,4 +1,4 @@
-package org.inkgate.admin.core.store.sqlite;
+package org.inkgate.admin.core.store.sql;
 
 import java.sql.SQLException;
 import java.util.ArrayList;
@@ -11,18 +11,17 @@ import org.inkgate.admin.core.rating.DiscrepancyRule;
 import org.inkgate.admin.core.rating.FinalScore;
 import org.inkgate.admin.core.rating.RatingDesk;
 import org.inkgate.admin.core.rating.RatingException;
-import org.inkgate.admin.core.store.sql.SqlSession;
 
 /**
- * {@link DiscrepancyReview} in the SQLite store, and the one place a response's flag and final
+ * {@link DiscrepancyReview} in the results store (SQLite or PostgreSQL), and the one place a response's flag and final
  * score are worked out ({@link #evaluate}), whichever call changed its ratings.
  */
-final class SqliteDiscrepancyReview implements DiscrepancyReview {
+final class SqlDiscrepancyReview implements DiscrepancyReview {
 
     private final RatingSession s;
     private final Adjudicators adjudicators;
 
-    SqliteDiscrepancyReview(RatingSession s) {
+    SqlDiscrepancyReview(RatingSession s) {
         this.s = s;
         this.adjudicators = new Adjudicators(s);
     }
@@ -77,6 +76,7 @@ final class SqliteDiscrepancyReview implements DiscrepancyReview {
 
     /** Flags the response if its complete first ratings break the rule, finds it an adjudicator, and updates its final score. */
     void evaluate(long sittingId, String taskId, String now) throws SQLException {
+        s.lockResponse(sittingId, taskId); // a desk submitting for this response meanwhile waits, then decides again
         List<FinalScore.Submitted> ratings = new ArrayList<>();
         int expected = s.db.count("SELECT COUNT(*) FROM rating_assignments a WHERE a.sitting_id=? AND a.task_id=?"
                 + " AND a.kind='rating' AND " + RatingSession.NOT_CONTROL, sittingId, taskId);
@@ -136,9 +136,9 @@ final class SqliteDiscrepancyReview implements DiscrepancyReview {
 
     @Override
     public List<Flag> flags() throws RatingException {
-        // group_concat is SQLite's; the PostgreSQL port writes string_agg(a.rater_id, ' ' ORDER BY a.assignment_id)
+        // string_agg with ORDER BY: the same words in PostgreSQL 9.0+ and SQLite 3.44+ (sqlite.org, "Aggregate Functions")
         return s.read("listing flags", () -> s.db.list("SELECT f.flag_id, f.task_id, f.reason, f.flagged_at,"
-                + " (SELECT group_concat(a.rater_id, ' ') FROM rating_assignments a WHERE a.sitting_id = f.sitting_id"
+                + " (SELECT string_agg(a.rater_id, ' ' ORDER BY a.assignment_id) FROM rating_assignments a WHERE a.sitting_id = f.sitting_id"
                 + "   AND a.task_id = f.task_id AND a.kind = 'rating' AND " + RatingSession.NOT_CONTROL + "),"
                 + " (SELECT a.rater_id FROM rating_assignments a WHERE a.sitting_id = f.sitting_id AND a.task_id = f.task_id"
                 + "   AND a.kind = 'adjudication' ORDER BY a.assignment_id DESC LIMIT 1),"
