@@ -26,4 +26,21 @@ public interface Dialect {
 
     /** Run first in each migration transaction: other migrators of the same store wait until it ends. */
     void lockSchema(Statement s) throws SQLException;
+
+    /**
+     * Starts a read of the whole store that sees one state of it, however long it takes and whatever
+     * others write meanwhile (a store copy, a store's content digests); the caller ends it with a
+     * commit or rollback. SQLite: a transaction's first read fixes what it sees (write-ahead log).
+     */
+    default void beginSnapshot(Connection c) throws SQLException {
+        c.setAutoCommit(false);
+    }
+
+    /**
+     * After rows were written with their key values given (a store copy), moves the database's key
+     * generators past them so that the next generated key is new. SQLite takes the largest key plus
+     * one by itself.
+     */
+    default void resumeKeys(Connection c) throws SQLException {
+    }
 }
