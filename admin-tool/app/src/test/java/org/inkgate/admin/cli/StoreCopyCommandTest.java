@@ -119,7 +119,6 @@ class StoreCopyCommandTest {
         CommandLineSitting.packages(keys, bundle, late, "none");
         Run more = admin(concat(collect, "--store", server));
         assertTrue(more.out().contains("Imported 0, already imported (same file) 11"), more.all());
-        Files.list(packages).forEach(p -> p.toFile().delete());
         Run lateOne = admin("collect", late.resolve("H1012.inkresp").toString(), "--bundle", bundle.toString(),
                 "--keys", keys.toString(), "--any-installation", "--passphrase-env", CommandLineSitting.SECRET_ENV,
                 "--store", server);

@@ -41,6 +41,15 @@ public interface Dialect {
      * generators past them so that the next generated key is new. SQLite takes the largest key plus
      * one by itself.
      */
+    /**
+     * The ORDER BY (or nothing) that reads a table's rows in the order they were written, where the
+     * database keeps one, so that a copy writes them in the same order: SQLite's rubric order is its
+     * insertion order (rowid). Nothing by default: the database's own scan order.
+     */
+    default String insertionOrder(Connection c, String table) throws SQLException {
+        return "";
+    }
+
     default void resumeKeys(Connection c) throws SQLException {
     }
 }

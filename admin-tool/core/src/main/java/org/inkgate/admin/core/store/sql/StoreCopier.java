@@ -16,7 +16,7 @@ import org.inkgate.admin.core.store.StoreException;
  * Copies a whole results store into an empty one, table by table over plain JDBC, whichever
  * databases the two are ({@link SchemaTables}: every table of the schema, referenced tables first),
  * and proves the copy: each table's content digest ({@link TableDigest}) is taken from the source
- * as its rows are read and from the target after they are written, inside the target's one
+ * (in the same snapshot the rows are read in) and from the target after they are written, inside the target's one
  * transaction; only when every digest agrees is that transaction committed. A disagreement or any
  * failure rolls it back, so the target never holds half a store. The source is read in one
  * snapshot ({@link Dialect#beginSnapshot}): collects writing into it meanwhile are not half seen.
@@ -33,14 +33,13 @@ public final class StoreCopier {
 
     /** Copies {@code from} into {@code to}, which must be empty; the contents both hold afterwards. */
     public static StoreContent copy(CopyEnd from, CopyEnd to, StoreContent.Progress progress) throws StoreException {
-        int version = sourceVersion(from);
-        boolean written = false;
+        boolean committed = false;
         try {
+            int version = sourceVersion(from);
             requireEmptyTarget(to, version);
             Schema.migrate(to.connection(), to.dialect(), version);
             Connection target = to.connection();
             target.setAutoCommit(false);
-            written = true;
             from.dialect().beginSnapshot(from.connection());
             List<String> tables = SchemaTables.inCopyOrder();
             Map<String, Long> counts = counts(from.connection(), tables);
@@ -49,7 +48,7 @@ public final class StoreCopier {
             long done = 0;
             for (String table : tables) {
                 progress.rows(done, total, table);
-                StoreContent.Table t = copyTable(from.connection(), target, table, done, total, progress);
+                StoreContent.Table t = copyTable(from, target, table, done, total, progress);
                 done += t.rows();
                 source.add(t);
             }
@@ -69,7 +68,7 @@ public final class StoreCopier {
                         + " Nothing in " + from.name() + " was changed. Report this: it is a fault of inkgate-admin");
             }
             target.commit();
-            written = false;
+            committed = true;
             return new StoreContent(version, source);
         } catch (SQLException e) {
             String words = to.plain().apply(e);
@@ -80,9 +79,9 @@ public final class StoreCopier {
                     + (words != null ? words : e.getMessage()) + ". The copy was undone; " + to.name()
                     + " holds nothing of it and " + from.name() + " was not changed", e);
         } finally {
-            if (written) {
+            if (!committed) {
                 rollbackQuietly(to.connection());
-                to.undo().run();
+                to.undo().run(); // removes a file created for the copy; an existing target is left as it was
             }
             rollbackQuietly(from.connection());
         }
@@ -161,51 +160,64 @@ public final class StoreCopier {
         return out;
     }
 
-    private static StoreContent.Table copyTable(Connection from, Connection to, String table, long doneBefore,
+    /**
+     * Writes the table's rows in the source's insertion order ({@link Dialect#insertionOrder}); the
+     * digest is then taken of the source in the digest's own order, in the same snapshot.
+     */
+    private static StoreContent.Table copyTable(CopyEnd from, Connection to, String table, long doneBefore,
             long total, StoreContent.Progress progress) throws SQLException {
-        int columnCount = columnCount(from, table);
-        try (PreparedStatement read = from.prepareStatement(TableDigest.orderedSelect(table, columnCount))) {
+        try (PreparedStatement read = from.connection().prepareStatement("SELECT * FROM " + table
+                + from.dialect().insertionOrder(from.connection(), table))) {
             read.setFetchSize(BATCH); // PostgreSQL streams the rows inside the transaction instead of holding them all
             try (ResultSet rs = read.executeQuery()) {
                 List<String> columns = TableDigest.columnNames(rs.getMetaData());
-                TableDigest digest = new TableDigest(columns);
                 String insert = "INSERT INTO " + table + "(" + String.join(", ", columns) + ") VALUES ("
                         + String.join(", ", java.util.Collections.nCopies(columns.size(), "?")) + ")";
                 try (PreparedStatement write = to.prepareStatement(insert)) {
                     int pending = 0;
+                    long rows = 0;
                     while (rs.next()) {
-                        SqlSession.bind(write, digest.add(rs));
+                        Object[] values = new Object[columns.size()];
+                        for (int i = 0; i < values.length; i++) {
+                            values[i] = rs.getObject(i + 1);
+                        }
+                        SqlSession.bind(write, values);
                         write.addBatch();
+                        rows++;
                         if (++pending == BATCH) {
                             write.executeBatch();
                             pending = 0;
-                            progress.rows(doneBefore + digest.rows(), total, table);
+                            progress.rows(doneBefore + rows, total, table);
                         }
                     }
                     if (pending > 0) {
                         write.executeBatch();
                     }
                 }
-                return new StoreContent.Table(table, digest.rows(), digest.hex());
             }
         }
+        return digest(from.connection(), table);
     }
 
     private static List<StoreContent.Table> digests(Connection c, List<String> tables) throws SQLException {
         List<StoreContent.Table> out = new ArrayList<>();
         for (String table : tables) {
-            try (PreparedStatement ps = c.prepareStatement(TableDigest.orderedSelect(table, columnCount(c, table)))) {
-                ps.setFetchSize(BATCH);
-                try (ResultSet rs = ps.executeQuery()) {
-                    TableDigest digest = new TableDigest(TableDigest.columnNames(rs.getMetaData()));
-                    while (rs.next()) {
-                        digest.add(rs);
-                    }
-                    out.add(new StoreContent.Table(table, digest.rows(), digest.hex()));
-                }
-            }
+            out.add(digest(c, table));
         }
         return out;
+    }
+
+    private static StoreContent.Table digest(Connection c, String table) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement(TableDigest.orderedSelect(table, columnCount(c, table)))) {
+            ps.setFetchSize(BATCH);
+            try (ResultSet rs = ps.executeQuery()) {
+                TableDigest digest = new TableDigest(TableDigest.columnNames(rs.getMetaData()));
+                while (rs.next()) {
+                    digest.add(rs);
+                }
+                return new StoreContent.Table(table, digest.rows(), digest.hex());
+            }
+        }
     }
 
     private static int columnCount(Connection c, String table) throws SQLException {
