@@ -53,15 +53,26 @@ public final class Stores {
             throw new StoreException("the store to copy from and the store to copy into are the same (" + from
                     + "); name a new file or an empty database as the target");
         }
-        try (Closing source = new Closing(copySource(from)); Closing target = new Closing(copyTarget(to))) {
-            return StoreCopier.copy(source.end(), target.end(), progress);
+        CopyEnd source = copySource(from);
+        try {
+            CopyEnd target = copyTarget(to);
+            try {
+                return StoreCopier.copy(source, target, progress);
+            } finally {
+                close(target);
+            }
+        } finally {
+            close(source);
         }
     }
 
     /** The row counts and content digests of every table of the store at {@code location}; changes nothing. */
     public static StoreContent content(StoreLocation location) throws StoreException {
-        try (Closing store = new Closing(copySource(location))) {
-            return StoreCopier.content(store.end());
+        CopyEnd store = copySource(location);
+        try {
+            return StoreCopier.content(store);
+        } finally {
+            close(store);
         }
     }
 
@@ -79,15 +90,12 @@ public final class Stores {
         };
     }
 
-    /** Closes a copy end's connection. */
-    private record Closing(CopyEnd end) implements AutoCloseable {
-        @Override
-        public void close() {
-            try {
-                end.connection().close();
-            } catch (java.sql.SQLException ignored) {
-                // the copy's outcome is decided; a failing close changes nothing of it
-            }
+    /** Closes a copy end's connection; the copy's outcome is decided, a failing close changes nothing of it. */
+    private static void close(CopyEnd end) {
+        try {
+            end.connection().close();
+        } catch (java.sql.SQLException ignored) {
+            // see above
         }
     }
 
