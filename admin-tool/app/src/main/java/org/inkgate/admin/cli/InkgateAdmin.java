@@ -25,6 +25,7 @@ import picocli.CommandLine.Command;
             CollectCommand.class,
             MissingCommand.class,
             ExportCommand.class,
+            StoreCommand.class,
             RateCommand.class,
             QtiCommand.class,
             AnalyseCommand.class,

@@ -230,6 +230,7 @@ public final class Collector {
         OpenedResponse opened = r.opened();
         ResponseDocument d = opened.response();
         List<PackageContentRules.Breach> breaches = PackageContentRules.beforeBundle(d);
+        breaches.addAll(PackageContentRules.nulCharacters(d, opened.events()));
         if (!breaches.isEmpty()) {
             return refuse(r, breaches);
         }

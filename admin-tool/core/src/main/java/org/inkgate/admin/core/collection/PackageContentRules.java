@@ -11,6 +11,7 @@ import org.inkgate.format.bundle.FormSpec;
 import org.inkgate.format.bundle.QuestionItem;
 import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.refusal.FormatRefusal;
+import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.response.TaskResponse;
@@ -38,6 +39,50 @@ final class PackageContentRules {
             breaches.add(new Breach("candidate-number", "its candidate number \""
                     + FormatRefusal.printable(shorten(d.candidateNumber())) + "\" breaks the rule for candidate numbers ("
                     + CandidateNumber.RULE + "), which every roster and client keeps"));
+        }
+        return breaches;
+    }
+
+    /** What the refusal says of a NUL character, after where it is. */
+    static final String NUL_WORDS = " holds a NUL character (U+0000), which no client of this version writes, a PostgreSQL"
+            + " store cannot hold (PostgreSQL docs, \"Character Types\") and exports would mishandle";
+
+    /**
+     * The texts of the package the store keeps as text, with where each is, checked for U+0000:
+     * refused rather than changed, so that both kinds of store hold the same and a candidate's text
+     * is never altered on the way. Event data are kept as JSON, where U+0000 is written
+     * {@code \\u0000} (backslash, u, four zeros), so a NUL there is stored, reversibly, and not refused.
+     */
+    static List<Breach> nulCharacters(ResponseDocument d, List<ProcessEvent> events) {
+        List<Breach> breaches = new ArrayList<>();
+        java.util.function.BiConsumer<String, String> check = (where, text) -> {
+            if (text != null && text.indexOf(0) >= 0) {
+                breaches.add(new Breach("nul-character", where + NUL_WORDS));
+            }
+        };
+        check.accept("the package id", d.packageId());
+        check.accept("the exam id", d.examId());
+        check.accept("the form id", d.formId());
+        check.accept("the seat", d.seat());
+        check.accept("the client version", d.clientVersion());
+        for (TaskResponse t : d.tasks()) {
+            String task = FormatRefusal.printable(shorten(t.taskId()));
+            check.accept("the id of task " + task, t.taskId());
+            check.accept("the condition of task " + task, t.conditionId());
+            check.accept("the text of task " + task, t.text());
+        }
+        for (QuestionnaireAnswers q : d.questionnaires()) {
+            String questionnaire = FormatRefusal.printable(shorten(q.questionnaireId()));
+            check.accept("the id of questionnaire " + questionnaire, q.questionnaireId());
+            for (Map.Entry<String, String> a : q.answers().entrySet()) {
+                String item = FormatRefusal.printable(shorten(a.getKey()));
+                check.accept("the item id " + item + " of questionnaire " + questionnaire, a.getKey());
+                check.accept("the answer to item " + item + " of questionnaire " + questionnaire, a.getValue());
+            }
+        }
+        for (ProcessEvent e : events) {
+            check.accept("the type of event " + e.seq(), e.type());
+            check.accept("the task of event " + e.seq(), e.task());
         }
         return breaches;
     }

@@ -7,6 +7,8 @@ import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.core.store.postgresql.PostgresRatingStore;
 import org.inkgate.admin.core.store.postgresql.PostgresResultsStore;
+import org.inkgate.admin.core.store.sql.CopyEnd;
+import org.inkgate.admin.core.store.sql.StoreCopier;
 import org.inkgate.admin.core.store.sqlite.SqliteRatingStore;
 import org.inkgate.admin.core.store.sqlite.SqliteResultsStore;
 
@@ -37,6 +39,64 @@ public final class Stores {
             case StoreLocation.File f -> SqliteResultsStore.openReadOnly(f.path());
             case StoreLocation.Server s -> PostgresResultsStore.openForReading(s);
         };
+    }
+
+    /**
+     * Copies the whole store at {@code from} into the empty store at {@code to} (a new file or an
+     * empty database), verified table by table by content digests; refused, with nothing left in
+     * {@code to}, when the target is not empty, the schema versions differ or a digest disagrees.
+     */
+    public static StoreContent copy(StoreLocation from, StoreLocation to, StoreContent.Progress progress)
+            throws StoreException {
+        if (from.equals(to) || from instanceof StoreLocation.File f && to instanceof StoreLocation.File t
+                && f.path().toAbsolutePath().normalize().equals(t.path().toAbsolutePath().normalize())) {
+            throw new StoreException("the store to copy from and the store to copy into are the same (" + from
+                    + "); name a new file or an empty database as the target");
+        }
+        CopyEnd source = copySource(from);
+        try {
+            CopyEnd target = copyTarget(to);
+            try {
+                return StoreCopier.copy(source, target, progress);
+            } finally {
+                close(target);
+            }
+        } finally {
+            close(source);
+        }
+    }
+
+    /** The row counts and content digests of every table of the store at {@code location}; changes nothing. */
+    public static StoreContent content(StoreLocation location) throws StoreException {
+        CopyEnd store = copySource(location);
+        try {
+            return StoreCopier.content(store);
+        } finally {
+            close(store);
+        }
+    }
+
+    private static CopyEnd copySource(StoreLocation location) throws StoreException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteResultsStore.copySource(f.path());
+            case StoreLocation.Server s -> PostgresResultsStore.copyEnd(s);
+        };
+    }
+
+    private static CopyEnd copyTarget(StoreLocation location) throws StoreException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteResultsStore.copyTarget(f.path());
+            case StoreLocation.Server s -> PostgresResultsStore.copyEnd(s);
+        };
+    }
+
+    /** Closes a copy end's connection; the copy's outcome is decided, a failing close changes nothing of it. */
+    private static void close(CopyEnd end) {
+        try {
+            end.connection().close();
+        } catch (java.sql.SQLException ignored) {
+            // see above
+        }
     }
 
     /** Opens rating of one exam in an existing results store. */

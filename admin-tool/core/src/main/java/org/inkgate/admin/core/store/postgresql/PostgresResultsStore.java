@@ -54,6 +54,14 @@ public final class PostgresResultsStore extends SqlResultsStore {
         }
     }
 
+    /** A database on the server as either end of a store copy, or the store a content digest is taken of. */
+    public static org.inkgate.admin.core.store.sql.CopyEnd copyEnd(StoreLocation.Server server) throws StoreException {
+        Credentials login = Credentials.of(server, System.getenv());
+        Connection c = connect(server, login);
+        return new org.inkgate.admin.core.store.sql.CopyEnd(server.toString(), c, PostgresDialect.INSTANCE,
+                failure -> PostgresErrors.plain(server, login, failure), () -> { });
+    }
+
     /** A connection as {@code login}, with the URL's TLS and time-out parameters. */
     static Connection connect(StoreLocation.Server server, Credentials login) throws StoreException {
         Properties p = new Properties();

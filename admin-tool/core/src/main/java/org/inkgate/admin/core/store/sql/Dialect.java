@@ -49,4 +49,30 @@ public interface Dialect {
      * committed. Empty where the database has one writer at a time anyway.
      */
     String lockRows();
+
+    /**
+     * Starts a read of the whole store that sees one state of it, however long it takes and whatever
+     * others write meanwhile (a store copy, a store's content digests); the caller ends it with a
+     * commit or rollback. SQLite: a transaction's first read fixes what it sees (write-ahead log).
+     */
+    default void beginSnapshot(Connection c) throws SQLException {
+        c.setAutoCommit(false);
+    }
+
+    /**
+     * The ORDER BY (or nothing) that reads a table's rows in the order they were written, where the
+     * database keeps one, so that a copy writes them in the same order: SQLite's rubric order is its
+     * insertion order (rowid). Nothing by default: the database's own scan order.
+     */
+    default String insertionOrder(Connection c, String table) throws SQLException {
+        return "";
+    }
+
+    /**
+     * After rows were written with their key values given (a store copy), moves the database's key
+     * generators past them so that the next generated key is new. SQLite takes the largest key plus
+     * one by itself.
+     */
+    default void resumeKeys(Connection c) throws SQLException {
+    }
 }

@@ -40,6 +40,19 @@ public final class SqliteDialect implements Dialect {
         s.execute("PRAGMA user_version = " + version);
     }
 
+    /** rowid, SQLite's insertion order, except in a WITHOUT ROWID table (kept in key order). */
+    @Override
+    public String insertionOrder(Connection c, String table) throws SQLException {
+        try (var ps = c.prepareStatement("SELECT sql FROM sqlite_master WHERE type = 'table' AND name = ?")) {
+            ps.setString(1, table);
+            try (var rs = ps.executeQuery()) {
+                boolean withoutRowid = rs.next() && rs.getString(1).toUpperCase(java.util.Locale.ROOT)
+                        .contains("WITHOUT ROWID");
+                return withoutRowid ? "" : " ORDER BY rowid";
+            }
+        }
+    }
+
     @Override
     public void lockSchema(Statement s) {
         // the file's single writer serialises migrations (see the class comment)

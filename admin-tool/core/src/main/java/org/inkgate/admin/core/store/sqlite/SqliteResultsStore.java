@@ -58,6 +58,53 @@ public final class SqliteResultsStore extends SqlResultsStore {
         }
     }
 
+    /**
+     * An existing store file as the source of a store copy or a content digest; changed in nothing.
+     */
+    public static org.inkgate.admin.core.store.sql.CopyEnd copySource(Path file) throws StoreException {
+        if (!java.nio.file.Files.isRegularFile(file)) {
+            throw new StoreException("no results store at " + file + "; name the store that collect wrote");
+        }
+        try {
+            Connection c = SqliteFiles.connectForReading(file);
+            return new org.inkgate.admin.core.store.sql.CopyEnd(file.toString(), c, SqliteDialect.INSTANCE,
+                    failure -> SqliteErrors.plain(file, failure), () -> { });
+        } catch (SQLException e) {
+            throw failure("cannot open the results store " + file, file, e);
+        }
+    }
+
+    /**
+     * A store file as the target of a store copy, created owner-only when it does not exist; when a
+     * copy into a file created here is refused, the file is removed again.
+     */
+    public static org.inkgate.admin.core.store.sql.CopyEnd copyTarget(Path file) throws StoreException {
+        boolean created = !java.nio.file.Files.exists(file);
+        Connection c = null;
+        try {
+            org.inkgate.format.io.OwnerOnly.file(file);
+            // the copy is one commit, so syncing it costs nothing, and a backup should survive a power cut
+            c = SqliteFiles.connect(file, SqliteFiles.Durability.EVERY_COMMIT);
+            Connection opened = c;
+            return new org.inkgate.admin.core.store.sql.CopyEnd(file.toString(), c, SqliteDialect.INSTANCE,
+                    failure -> SqliteErrors.plain(file, failure), () -> {
+                        if (created) {
+                            SqliteFiles.closeQuietly(opened);
+                            for (String suffix : new String[] {"", "-wal", "-shm", "-journal"}) {
+                                try {
+                                    java.nio.file.Files.deleteIfExists(Path.of(file + suffix));
+                                } catch (java.io.IOException ignored) {
+                                    // the refusal is reported; a leftover empty file holds no data
+                                }
+                            }
+                        }
+                    });
+        } catch (SQLException | java.io.IOException e) {
+            SqliteFiles.closeQuietly(c);
+            throw failure("cannot open the store file " + file + " to copy into", file, e);
+        }
+    }
+
     /** The failure in plain words when it is a full disk, read-only media and the like; else as SQLite says. */
     private static StoreException failure(String what, Path file, Exception e) {
         String plain = SqliteErrors.plain(file, e);
