@@ -29,7 +29,8 @@ import org.junit.jupiter.api.io.TempDir;
  */
 class CtrlCTest {
 
-    private static final int PACKAGES = 120;
+    // enough that collect is still at work when Ctrl+C comes: collect got faster (stop 27) and 120 were done first
+    private static final int PACKAGES = 480;
 
     @TempDir
     Path dir;
@@ -48,7 +49,7 @@ class CtrlCTest {
         Process collect = start("collect", folder.toString(), "--store", store.toString(), "--bundle", p.bundle().toString(),
                 "--keys", p.keys().toString(), "--any-installation", "--passphrase-env", ForgedPackages.PASSPHRASE_ENV);
         Path log = dir.resolve("collect.out");
-        waitFor(() -> Files.readString(log).contains("Collecting ") && sittings(store) >= 5, collect);
+        waitFor(() -> Files.readString(log).contains("Collecting ") && sittings(store) >= 2, collect);
         int exit = interrupt(collect);
         int kept = sittings(store);
         assertTrue(kept < PACKAGES, "collect finished before Ctrl+C (exit " + exit + "); nothing was shown");
