@@ -91,7 +91,10 @@ class CtrlCTest {
     }
 
     private Process start(String... args) throws Exception {
-        List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+        // a build started in the background (nohup, &, some CI runners) ignores SIGINT, and children inherit
+        // that: the JVM would then never see the Ctrl+C; coreutils' env puts the default action back
+        List<String> command = new ArrayList<>(List.of("/usr/bin/env", "--default-signal=INT",
+                Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                 "--enable-native-access=ALL-UNNAMED", "-cp", System.getProperty("java.class.path"),
                 InkgateAdmin.class.getName()));
         command.addAll(List.of(args));
