@@ -9,6 +9,7 @@ import javafx.scene.input.KeyCode;
 import javafx.scene.input.KeyEvent;
 import org.fxmisc.richtext.StyleClassedTextArea;
 import org.fxmisc.richtext.util.UndoUtils;
+import org.inkgate.format.response.AnswerCharacters;
 
 /**
  * The answer editor: plain text in a RichTextFX area whose only styles are the checker's
@@ -106,6 +107,16 @@ final class AnswerArea extends StyleClassedTextArea {
         if (isEditable()) {
             changeAs(ChangeSource.REDO, super::redo);
         }
+    }
+
+    /**
+     * Every insertion (typing, input methods, paste, panel insertions) ends here; control characters
+     * an answer may not hold ({@link AnswerCharacters}) are dropped before the text changes, so the
+     * change the log records is the change the answer gets.
+     */
+    @Override
+    public void replaceText(int start, int end, String text) {
+        super.replaceText(start, end, AnswerCharacters.clean(text));
     }
 
     /** Passes an input-method event to RichTextFX's own handling (tests on platforms without input methods). */
