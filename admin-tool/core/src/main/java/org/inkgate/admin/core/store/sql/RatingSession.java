@@ -207,6 +207,28 @@ final class RatingSession {
         }
     }
 
+    /**
+     * Stores the agreed scores of one response as a control or qualification script, replacing
+     * earlier ones. {@code keepFirstMarked} keeps the time it was first marked, which orders a
+     * qualification set; a control script takes the newest time.
+     *
+     * @param table control_scripts or qualification_scripts (a constant of the caller, never outside text)
+     * @param what  "a control script", "a qualification script": for messages
+     */
+    void markAgreed(String table, String what, String candidateNumber, String taskId, Map<String, Integer> agreed,
+            String source, boolean keepFirstMarked) throws RatingException {
+        checkAgreed(agreed, source);
+        tx("marking " + what, () -> {
+            long sitting = sittingOfResponse(candidateNumber, taskId, what);
+            db.update("INSERT INTO " + table + "(sitting_id, task_id, agreed_scores_json, source, marked_at)"
+                    + " VALUES (?,?,?,?,?) ON CONFLICT(sitting_id, task_id) DO UPDATE SET agreed_scores_json ="
+                    + " excluded.agreed_scores_json, source = excluded.source"
+                    + (keepFirstMarked ? "" : ", marked_at = excluded.marked_at"),
+                    sitting, taskId, json(agreed), source.strip(), now());
+            return null;
+        });
+    }
+
     /** What is wrong with a sheet: unknown criteria, scores out of range, and (if complete) missing criteria. */
     List<String> check(RatingDesk.RatingSheet sheet, boolean complete) {
         List<String> problems = new ArrayList<>();

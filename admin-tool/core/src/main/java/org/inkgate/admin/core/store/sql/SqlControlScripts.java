@@ -21,15 +21,7 @@ final class SqlControlScripts implements ControlScripts {
     @Override
     public void markControl(String candidateNumber, String taskId, Map<String, Integer> agreed, String source)
             throws RatingException {
-        s.checkAgreed(agreed, source);
-        s.tx("marking a control script", () -> {
-            long sitting = s.sittingOfResponse(candidateNumber, taskId, "a control script");
-            s.db.update("INSERT INTO control_scripts(sitting_id, task_id, agreed_scores_json, source, marked_at)"
-                    + " VALUES (?,?,?,?,?) ON CONFLICT(sitting_id, task_id) DO UPDATE SET agreed_scores_json ="
-                    + " excluded.agreed_scores_json, source = excluded.source, marked_at = excluded.marked_at",
-                    sitting, taskId, RatingSession.json(agreed), source.strip(), s.now());
-            return null;
-        });
+        s.markAgreed("control_scripts", "a control script", candidateNumber, taskId, agreed, source, false);
     }
 
     @Override

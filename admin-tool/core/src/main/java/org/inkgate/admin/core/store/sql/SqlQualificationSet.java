@@ -23,15 +23,7 @@ final class SqlQualificationSet implements QualificationSet {
     @Override
     public void markQualification(String candidateNumber, String taskId, Map<String, Integer> agreed, String source)
             throws RatingException {
-        s.checkAgreed(agreed, source);
-        s.tx("marking a qualification script", () -> {
-            long sitting = s.sittingOfResponse(candidateNumber, taskId, "a qualification script");
-            s.db.update("INSERT INTO qualification_scripts(sitting_id, task_id, agreed_scores_json, source, marked_at)"
-                    + " VALUES (?,?,?,?,?) ON CONFLICT(sitting_id, task_id) DO UPDATE SET agreed_scores_json ="
-                    + " excluded.agreed_scores_json, source = excluded.source", sitting, taskId,
-                    RatingSession.json(agreed), source.strip(), s.now());
-            return null;
-        });
+        s.markAgreed("qualification_scripts", "a qualification script", candidateNumber, taskId, agreed, source, true);
     }
 
     @Override
