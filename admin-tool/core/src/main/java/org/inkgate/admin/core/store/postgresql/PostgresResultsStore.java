@@ -20,7 +20,7 @@ import org.inkgate.admin.core.store.sql.SqlResultsStore;
 public final class PostgresResultsStore extends SqlResultsStore {
 
     private PostgresResultsStore(Connection c, StoreLocation.Server server, Credentials login) {
-        super(c, failure -> PostgresErrors.plain(server, login, failure));
+        super(c, PostgresDialect.INSTANCE, failure -> PostgresErrors.plain(server, login, failure));
     }
 
     /** Opens the store, creating its tables in the (empty) database the first time, and migrates its schema. */

@@ -51,6 +51,15 @@ public interface Dialect {
     String lockRows();
 
     /**
+     * Begins a transaction that writes ({@link SqlSession#transaction}). SQLite takes the write lock
+     * at the start, so that a second writer waits for the first rather than failing; PostgreSQL
+     * locks row by row as it goes ({@link #lockRows}).
+     */
+    default void beginWrite(Connection c) throws SQLException {
+        c.setAutoCommit(false);
+    }
+
+    /**
      * Starts a read of the whole store that sees one state of it, however long it takes and whatever
      * others write meanwhile (a store copy, a store's content digests); the caller ends it with a
      * commit or rollback. SQLite: a transaction's first read fixes what it sees (write-ahead log).

@@ -59,7 +59,7 @@ public class SqlRatingStore implements RatingStore {
     /** As above, with failures a person can act on put in plain words by {@code errors}. */
     protected SqlRatingStore(Connection c, SqlSession.Errors<RatingException> errors, Dialect dialect, String where,
             String examId, Clock clock, BlindIds ids) throws RatingException, SQLException {
-        SqlSession<RatingException> db = new SqlSession<>(c, errors);
+        SqlSession<RatingException> db = new SqlSession<>(c, dialect, errors);
         List<String> exams = examIds(db);
         if (!exams.contains(examId)) {
             throw new RatingException("the store " + where + " holds no exam " + examId + "; it holds " + exams);

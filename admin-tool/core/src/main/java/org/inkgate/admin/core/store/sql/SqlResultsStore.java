@@ -49,12 +49,13 @@ public abstract class SqlResultsStore implements ResultsStore {
     private final Map<String, Long> policyIds = new HashMap<>();
 
     /**
-     * @param plain a failure a person can act on (a full disk, a lost server) in plain words, or null
+     * @param dialect begins its write transactions ({@link Dialect#beginWrite})
+     * @param plain   a failure a person can act on (a full disk, a lost server) in plain words, or null
      */
-    protected SqlResultsStore(Connection c, java.util.function.Function<Throwable, String> plain) {
+    protected SqlResultsStore(Connection c, Dialect dialect, java.util.function.Function<Throwable, String> plain) {
         this.c = c;
         // ids cached inside a rolled-back transaction no longer exist
-        this.db = new SqlSession<>(c, new SqlSession.Errors<>(StoreException.class, StoreException::new, plain),
+        this.db = new SqlSession<>(c, dialect, new SqlSession.Errors<>(StoreException.class, StoreException::new, plain),
                 policyIds::clear);
     }
 

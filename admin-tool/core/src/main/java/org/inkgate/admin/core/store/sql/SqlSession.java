@@ -66,20 +66,41 @@ public final class SqlSession<E extends Exception> implements AutoCloseable {
     static final int ATTEMPTS = 4;
 
     private final Connection c;
+    private final Begin begin;
     private final Errors<E> errors;
     private final Runnable onRollback;
 
+    /** How a write transaction begins on this session's connection. */
+    private interface Begin {
+        void on(Connection c) throws SQLException;
+    }
+
     /**
+     * @param dialect    begins the write transactions ({@link Dialect#beginWrite})
      * @param onRollback run after every rollback, e.g. to forget ids cached inside the transaction
      */
+    public SqlSession(Connection c, Dialect dialect, Errors<E> errors, Runnable onRollback) {
+        this(c, dialect::beginWrite, errors, onRollback);
+    }
+
+    public SqlSession(Connection c, Dialect dialect, Errors<E> errors) {
+        this(c, dialect::beginWrite, errors, () -> { });
+    }
+
+    /** A session whose transactions begin as the driver begins them (reads, tests of the session itself). */
     public SqlSession(Connection c, Errors<E> errors, Runnable onRollback) {
-        this.c = c;
-        this.errors = errors;
-        this.onRollback = onRollback;
+        this(c, connection -> connection.setAutoCommit(false), errors, onRollback);
     }
 
     public SqlSession(Connection c, Errors<E> errors) {
         this(c, errors, () -> { });
+    }
+
+    private SqlSession(Connection c, Begin begin, Errors<E> errors, Runnable onRollback) {
+        this.c = c;
+        this.begin = begin;
+        this.errors = errors;
+        this.onRollback = onRollback;
     }
 
     /** The connection, for the store implementation that owns this session (and its tests). */
@@ -115,7 +136,7 @@ public final class SqlSession<E extends Exception> implements AutoCloseable {
     }
 
     private <T> T once(Work<T> work) throws SQLException {
-        c.setAutoCommit(false);
+        begin.on(c);
         boolean failed = false;
         try {
             T result = work.run();

@@ -4,6 +4,8 @@ import java.sql.Connection;
 import java.sql.SQLException;
 import java.sql.Statement;
 import org.inkgate.admin.core.store.sql.Dialect;
+import org.sqlite.SQLiteConfig;
+import org.sqlite.SQLiteConnection;
 
 /**
  * SQLite: the schema's statements run as written, the version lives in {@code PRAGMA user_version}
@@ -66,6 +68,27 @@ public final class SqliteDialect implements Dialect {
             try (var rs = ps.executeQuery()) {
                 return rs.next();
             }
+        }
+    }
+
+    /**
+     * BEGIN IMMEDIATE: the write lock is taken at the start. Two deferred transactions that both
+     * read and then write fail at once with SQLITE_BUSY, which the busy timeout does not wait out
+     * (sqlite.org, "BEGIN TRANSACTION" and "Result and Error Codes"); begun immediate, the second
+     * waits for the first. Only this begin is immediate: the driver opens a new transaction after
+     * each commit and rollback with the connection's mode, and that one must stay deferred, which
+     * takes no lock, or a commit could wait for, and fail on, another writer after its work was kept.
+     */
+    @Override
+    public void beginWrite(Connection c) throws SQLException {
+        SQLiteConnection sqlite = c.unwrap(SQLiteConnection.class);
+        var config = sqlite.getConnectionConfig();
+        SQLiteConfig.TransactionMode usual = config.getTransactionMode();
+        config.setTransactionMode(SQLiteConfig.TransactionMode.IMMEDIATE);
+        try {
+            c.setAutoCommit(false);
+        } finally {
+            config.setTransactionMode(usual);
         }
     }
 

@@ -15,7 +15,7 @@ public final class SqliteResultsStore extends SqlResultsStore {
 
     private SqliteResultsStore(Connection c, Path file) {
         // a full disk, read-only media and the like in plain words
-        super(c, failure -> SqliteErrors.plain(file, failure));
+        super(c, SqliteDialect.INSTANCE, failure -> SqliteErrors.plain(file, failure));
     }
 
     /** Opens (creating if needed) the store and brings its schema to the latest version. */
