@@ -1,19 +1,18 @@
 package org.inkgate.admin.cli;
 
+import static org.inkgate.admin.testutil.AdminCommand.admin;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import org.inkgate.admin.testutil.AdminCommand.Run;
 import org.inkgate.admin.testutil.CommandLineSitting;
 import org.inkgate.admin.testutil.DemoSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * Issue 15 §1: {@code forms --out} never replaces an existing assignment table without
@@ -29,18 +28,7 @@ class AssignmentSafetyTest {
     Path dir;
 
     /** Exit code, standard output and error of one run of the real command line. */
-    record Run(int code, String out, String err) {
-    }
 
-    static Run admin(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
 
     @Test
     void forms_outExists_refusedWithItsSeedUnlessReplace() throws Exception {

@@ -1,23 +1,22 @@
 package org.inkgate.admin.cli;
 
+import static org.inkgate.admin.testutil.AdminCommand.admin;
+import static org.inkgate.admin.testutil.AdminCommand.concat;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.DriverManager;
 import java.sql.Statement;
-import java.util.stream.Stream;
+import org.inkgate.admin.testutil.AdminCommand.Run;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.testutil.PostgresServer;
 import org.inkgate.admin.testutil.CommandLineSitting;
 import org.inkgate.admin.testutil.DemoSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * The roles the IT department guide (docs/it-department-guide.md) tells the database administrator
@@ -34,17 +33,7 @@ class PostgresLeastPrivilegeTest {
     @TempDir
     Path dir;
 
-    private record Run(int code, String out, String err) {
-    }
 
-    private static Run admin(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        return new Run(cl.execute(args), out.toString(), err.toString());
-    }
 
     @Test
     void collectorWithTheGuidesGrantsOnly_collectsReportsAndExports() throws Exception {
@@ -89,7 +78,4 @@ class PostgresLeastPrivilegeTest {
         assertEquals(InkgateAdmin.OK, export.code(), export.out() + export.err());
     }
 
-    private static String[] concat(String[] a, String... b) {
-        return Stream.concat(Stream.of(a), Stream.of(b)).toArray(String[]::new);
-    }
 }

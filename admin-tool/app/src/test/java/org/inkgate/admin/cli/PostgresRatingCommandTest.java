@@ -1,11 +1,11 @@
 package org.inkgate.admin.cli;
 
+import static org.inkgate.admin.testutil.AdminCommand.admin;
+import static org.inkgate.admin.testutil.AdminCommand.concat;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -14,14 +14,13 @@ import java.util.List;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import java.util.stream.Stream;
+import org.inkgate.admin.testutil.AdminCommand.Run;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.testutil.PostgresServer;
 import org.inkgate.admin.testutil.CommandLineSitting;
 import org.inkgate.admin.testutil.DemoSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * Rating through the real command line on a PostgreSQL store, logging in with a password file:
@@ -42,21 +41,7 @@ class PostgresRatingCommandTest {
     @TempDir
     Path dir;
 
-    private record Run(int code, String out, String err) {
-        String all() {
-            return out + err;
-        }
-    }
 
-    private static Run admin(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
 
     @Test
     void assignRateResolveExportAnalyse_onAPostgresqlStore_giveTheFinalScoresOfTheSameStepsOnAStoreFile()
@@ -179,7 +164,4 @@ class PostgresRatingCommandTest {
         return out.toString();
     }
 
-    private static String[] concat(String[] a, String[] b) {
-        return Stream.concat(Stream.of(a), Stream.of(b)).toArray(String[]::new);
-    }
 }

@@ -1,12 +1,12 @@
 package org.inkgate.admin.cli;
 
+import static org.inkgate.admin.testutil.AdminCommand.admin;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Path;
+import org.inkgate.admin.testutil.AdminCommand.Run;
 import org.inkgate.admin.core.bundling.PreviewBundle;
 import org.inkgate.admin.core.source.ExamSource;
 import org.inkgate.admin.core.source.ExamSourceReader;
@@ -21,7 +21,6 @@ import org.inkgate.format.bundle.OpenedBundle;
 import org.inkgate.format.trust.TrustPolicy;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * The bundle-building half of {@code preview}, without a window: the preview bundle holds the one
@@ -33,18 +32,7 @@ class PreviewCommandTest {
     @TempDir
     Path dir;
 
-    record Run(int code, String out, String err) {
-    }
 
-    private static Run admin(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
 
     @Test
     void preview_taskUnderCondition_bundleHoldsTheSourcesTaskAndPolicy() throws Exception {

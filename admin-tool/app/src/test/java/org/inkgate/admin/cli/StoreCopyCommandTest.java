@@ -1,17 +1,18 @@
 package org.inkgate.admin.cli;
 
+import static org.inkgate.admin.testutil.AdminCommand.admin;
+import static org.inkgate.admin.testutil.AdminCommand.concat;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Stream;
+import org.inkgate.admin.testutil.AdminCommand.Run;
 import org.inkgate.admin.core.store.StoreContent;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
@@ -20,7 +21,6 @@ import org.inkgate.admin.testutil.CommandLineSitting;
 import org.inkgate.admin.testutil.DemoSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * {@code store copy} through the real command line: a store collected and rated with the real
@@ -39,21 +39,7 @@ class StoreCopyCommandTest {
     @TempDir
     Path dir;
 
-    private record Run(int code, String out, String err) {
-        String all() {
-            return out + err;
-        }
-    }
 
-    private static Run admin(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
-    }
 
     @Test
     void copy_ratedStore_sqliteToPostgresqlAndBack_keepsEveryTableAndEveryOutput() throws Exception {
@@ -224,7 +210,4 @@ class StoreCopyCommandTest {
         }
     }
 
-    private static String[] concat(String[] a, String... b) {
-        return Stream.concat(Stream.of(a), Stream.of(b)).toArray(String[]::new);
-    }
 }

@@ -1,13 +1,13 @@
 package org.inkgate.admin.hostile;
 
+import static org.inkgate.admin.testutil.AdminCommand.admin;
+import static org.inkgate.admin.testutil.AdminCommand.concat;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.KeyPair;
@@ -21,6 +21,7 @@ import java.util.Set;
 import java.util.TreeMap;
 import java.util.concurrent.CompletableFuture;
 import java.util.stream.Stream;
+import org.inkgate.admin.testutil.AdminCommand.Run;
 import org.inkgate.admin.cli.InkgateAdmin;
 import org.inkgate.admin.core.keys.OwnerKeyStore;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
@@ -36,7 +37,6 @@ import org.inkgate.format.crypto.X25519;
 import org.inkgate.format.trust.TrustPolicy;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * The PostgreSQL server stops while {@code collect} (the real command) is importing into it (issue
@@ -56,20 +56,7 @@ class ServerLostMidCollectTest {
     @TempDir
     Path dir;
 
-    private record Run(int code, String out, String err) {
-        String all() {
-            return out + err;
-        }
-    }
 
-    private static Run admin(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        return new Run(cl.execute(args), out.toString(), err.toString());
-    }
 
     @Test
     void serverStopsMidCollect_noPackageHalfStored_andARerunFinishesTheJob() throws Exception {
@@ -185,7 +172,4 @@ class ServerLostMidCollectTest {
         }
     }
 
-    private static String[] concat(String[] a, String... b) {
-        return Stream.concat(Stream.of(a), Stream.of(b)).toArray(String[]::new);
-    }
 }
