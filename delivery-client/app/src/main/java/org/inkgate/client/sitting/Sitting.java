@@ -17,10 +17,9 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
-import java.util.OptionalInt;
+import java.util.OptionalLong;
 import java.util.Set;
 import java.util.UUID;
-import java.util.concurrent.TimeUnit;
 import java.util.stream.Collectors;
 import org.inkgate.client.sitting.clock.SittingClock;
 import org.inkgate.client.sitting.recovery.TextRecovery;
@@ -89,16 +88,14 @@ public final class Sitting implements AutoCloseable {
         final int order;
         final FormSlot slot;
         final TaskSpec spec;
-        final Optional<Countdown> countdown;
         Instant startedAt;
         Instant endedAt;
         EndReason endReason;
 
-        TaskRecord(int order, FormSlot slot, TaskSpec spec, Optional<Countdown> countdown) {
+        TaskRecord(int order, FormSlot slot, TaskSpec spec) {
             this.order = order;
             this.slot = slot;
             this.spec = spec;
-            this.countdown = countdown;
         }
     }
 
@@ -110,13 +107,9 @@ public final class Sitting implements AutoCloseable {
     private final SittingStateStore store;
     private final Instant startedAt;
     private final Map<String, TaskRecord> tasks = new LinkedHashMap<>();
-    private final Optional<Countdown> sittingCountdown;
-    private boolean sittingClockStarted;
+    private final SittingTime time;
     private String currentTask;
     private SittingScreen screen;
-    private boolean paused;
-    private long pauseStartedMono;
-    private long lastCheckpointMono;
     private String reportedProblem;
     private String packageId;
     private Path localCopy;
@@ -139,18 +132,10 @@ public final class Sitting implements AutoCloseable {
             TaskSpec spec = plan.manifest().task(slot.taskId()).orElseThrow(
                     () -> new IllegalArgumentException("form " + plan.formId() + " names task " + slot.taskId()
                             + " that the bundle does not define"));
-            Optional<StoredTask> before = Optional.ofNullable(stored.get(spec.id()));
-            Optional<Countdown> countdown = spec.timeLimitSeconds() <= 0 ? Optional.empty()
-                    : Optional.of(new Countdown(clock, TimeUnit.SECONDS.toMillis(spec.timeLimitSeconds()), plan.extraTimePercent(),
-                            spec.warningMinutes(), before.map(StoredTask::usedMillis).orElse(0L),
-                            before.map(StoredTask::addedMillis).orElse(0L), before.map(StoredTask::warned).orElse(Set.of())));
-            tasks.put(spec.id(), new TaskRecord(i, slot, spec, countdown));
+            tasks.put(spec.id(), new TaskRecord(i, slot, spec));
         }
-        int sittingLimit = plan.form().sittingLimitSeconds();
-        this.sittingCountdown = sittingLimit <= 0 ? Optional.empty()
-                : Optional.of(new Countdown(clock, TimeUnit.SECONDS.toMillis(sittingLimit), plan.extraTimePercent(), List.of(),
-                        sittingUsed, sittingAdded, Set.of()));
-        this.lastCheckpointMono = clock.monoNanos();
+        this.time = new SittingTime(clock, tasks.values().stream().map(t -> t.spec).toList(), plan.extraTimePercent(), stored,
+                plan.form().sittingLimitSeconds(), sittingUsed, sittingAdded);
     }
 
     // -- starting and resuming --
@@ -221,8 +206,6 @@ public final class Sitting implements AutoCloseable {
                 stored.sittingUsedMillis(), stored.sittingAddedMillis());
         s.screen = stored.screen();
         s.currentTask = stored.currentTask().orElse(null);
-        s.paused = stored.paused();
-        s.pauseStartedMono = clock.monoNanos();
         s.packageId = stored.packageId().orElse(null);
         s.localCopy = stored.localCopy().orElse(null);
         s.submitted = stored.status() != SittingStatus.IN_PROGRESS;
@@ -234,32 +217,20 @@ public final class Sitting implements AutoCloseable {
                 t.endReason = st.endReason().orElse(null);
             }
         }
-        s.sittingClockStarted = s.tasks.values().stream().anyMatch(t -> t.startedAt != null);
+        s.time.restore(stored.paused(), s.tasks.values().stream().anyMatch(t -> t.startedAt != null));
         return s;
     }
 
     private void creditDowntime(Duration down, Duration credited) {
         long downMs = down.toMillis();
         long creditMs = Math.max(0, Math.min(downMs, Objects.requireNonNullElse(credited, Duration.ZERO).toMillis()));
-        TaskRecord running = currentTask == null ? null : tasks.get(currentTask);
-        boolean taskWasRunning = !paused && !submitted && running != null && running.startedAt != null && running.endedAt == null;
-        boolean sittingWasRunning = !paused && !submitted && sittingClockStarted;
-        if (taskWasRunning) {
-            running.countdown.ifPresent(cd -> cd.charge(downMs));
-        }
-        if (sittingWasRunning) {
-            sittingCountdown.ifPresent(cd -> cd.charge(downMs));
-        }
+        Optional<String> wasRunning = Optional.ofNullable(currentTask)
+                .filter(id -> tasks.get(id).startedAt != null && tasks.get(id).endedAt == null);
+        SittingTime.Credit credit = time.chargeDowntime(wasRunning, submitted, downMs, creditMs);
         log.record(EventType.SITTING_RESUME, null, Map.of("downSeconds", downMs / 1000.0, "creditedSeconds", creditMs / 1000.0,
                 "by", "invigilator"));
-        if (creditMs > 0 && (taskWasRunning || sittingWasRunning)) {
-            if (taskWasRunning) {
-                running.countdown.ifPresent(cd -> cd.add(creditMs));
-            }
-            if (sittingWasRunning) {
-                sittingCountdown.ifPresent(cd -> cd.add(creditMs));
-            }
-            log.record(EventType.TIME_ADDED, taskWasRunning ? currentTask : null,
+        if (credit.any()) {
+            log.record(EventType.TIME_ADDED, credit.task() ? currentTask : null,
                     Map.of("seconds", creditMs / 1000.0, "reason", "crash-credit"));
         }
         checkpoint();
@@ -315,7 +286,7 @@ public final class Sitting implements AutoCloseable {
 
     /** Whether the invigilator has paused the sitting. */
     public boolean paused() {
-        return paused;
+        return time.paused();
     }
 
     /** Whether the response package has been written (delivered or awaiting delivery). */
@@ -325,12 +296,14 @@ public final class Sitting implements AutoCloseable {
 
     /** Time left in a task; empty for an untimed task. */
     public Optional<Duration> remaining(String taskId) {
-        return record(taskId).countdown.map(cd -> Duration.ofMillis(cd.remainingMillis()));
+        record(taskId);
+        return time.task(taskId).map(cd -> Duration.ofMillis(cd.remainingMillis()));
     }
 
     /** Time allowed in a task (limit, roster extra time, additions); empty for an untimed task. */
     public Optional<Duration> allowed(String taskId) {
-        return record(taskId).countdown.map(cd -> Duration.ofMillis(cd.allowedMillis()));
+        record(taskId);
+        return time.task(taskId).map(cd -> Duration.ofMillis(cd.allowedMillis()));
     }
 
     /**
@@ -340,7 +313,7 @@ public final class Sitting implements AutoCloseable {
      * additions applied as to task limits.
      */
     public Optional<Duration> sittingRemaining() {
-        return sittingCountdown.map(cd -> Duration.ofMillis(cd.remainingMillis()));
+        return time.sittingRemaining();
     }
 
     // -- what the flow does --
@@ -377,7 +350,7 @@ public final class Sitting implements AutoCloseable {
             throw new IllegalStateException("task " + earlier + " comes before " + taskId + " in form " + plan.formId()
                     + " and has not ended");
         }
-        if (paused) {
+        if (time.paused()) {
             throw new IllegalStateException("the sitting is paused; resume it before entering a task");
         }
         boolean resumed = t.startedAt != null;
@@ -397,13 +370,11 @@ public final class Sitting implements AutoCloseable {
         log.record(EventType.TASK_START, taskId, Map.of("policy", policyJson(policy), "tools", toolNames(policy.offeredTools()),
                 "resumed", resumed, "condition", t.slot.conditionId()));
         if (!resumed) {
-            t.countdown.filter(cd -> cd.rosterExtraMillis() > 0).ifPresent(cd -> log.record(EventType.TIME_ADDED, taskId,
+            time.task(taskId).filter(cd -> cd.rosterExtraMillis() > 0).ifPresent(cd -> log.record(EventType.TIME_ADDED, taskId,
                     Map.of("seconds", cd.rosterExtraMillis() / 1000.0, "reason", "roster")));
         }
         recovered.problem().ifPresent(p -> log.record(EventType.TASK_REPLAY_PROBLEM, taskId, Map.of("problem", p)));
-        t.countdown.ifPresent(Countdown::start);
-        sittingCountdown.ifPresent(Countdown::start);
-        sittingClockStarted = true;
+        time.startTask(taskId);
         checkpoint();
         return new TaskStart(t.slot, t.spec, recovered.text(), recovered.caret(), resumed, recovered.mismatch(), loggedBefore);
     }
@@ -420,7 +391,7 @@ public final class Sitting implements AutoCloseable {
         }
         Objects.requireNonNull(reason, "reason");
         Objects.requireNonNull(finalText, "finalText");
-        t.countdown.ifPresent(Countdown::stop);
+        time.stopTask(taskId);
         Instant now = clock.now();
         t.endedAt = now;
         t.endReason = reason;
@@ -433,7 +404,7 @@ public final class Sitting implements AutoCloseable {
         });
         log.snapshot(taskId, finalText, finalText.length());
         log.record(EventType.TASK_END, taskId, Map.of("reason", reasonName(reason), "words", wordCount));
-        store.saveTaskEnd(taskId, now, reason, finalText, wordCount, use, t.countdown.map(Countdown::usedMillis).orElse(0L));
+        store.saveTaskEnd(taskId, now, reason, finalText, wordCount, use, time.task(taskId).map(Countdown::usedMillis).orElse(0L));
         currentTask = null;
     }
 
@@ -492,31 +463,20 @@ public final class Sitting implements AutoCloseable {
     /** Pauses the sitting (the invigilator's emergency pause): time stops, {@code pause.start} is logged. */
     public void pauseAll() {
         requireOpen();
-        if (paused) {
-            return;
+        if (time.pause(running())) {
+            log.record(EventType.PAUSE_START, currentTask, Map.of("scope", "all"));
+            checkpoint();
         }
-        running().flatMap(t -> t.countdown).ifPresent(Countdown::stop);
-        sittingCountdown.ifPresent(Countdown::stop);
-        paused = true;
-        pauseStartedMono = clock.monoNanos();
-        log.record(EventType.PAUSE_START, currentTask, Map.of("scope", "all"));
-        checkpoint();
     }
 
     /** Ends the pause: time runs again, {@code pause.end} is logged with how long it lasted. */
     public void resumeAll() {
         requireOpen();
-        if (!paused) {
-            return;
+        OptionalLong pausedMillis = time.resume(running(), submitted);
+        if (pausedMillis.isPresent()) {
+            log.record(EventType.PAUSE_END, currentTask, Map.of("pausedMillis", pausedMillis.getAsLong()));
+            checkpoint();
         }
-        paused = false;
-        long pausedMillis = TimeUnit.NANOSECONDS.toMillis(clock.monoNanos() - pauseStartedMono);
-        log.record(EventType.PAUSE_END, currentTask, Map.of("pausedMillis", pausedMillis));
-        running().flatMap(t -> t.countdown).ifPresent(Countdown::start);
-        if (sittingClockStarted && !submitted) {
-            sittingCountdown.ifPresent(Countdown::start);
-        }
-        checkpoint();
     }
 
     /**
@@ -524,17 +484,14 @@ public final class Sitting implements AutoCloseable {
      * the next one when none is, and to the sitting limit when the form sets one. Logged as
      * {@code time.added} with reason "invigilator".
      */
-    public void addTime(Duration time) {
+    public void addTime(Duration added) {
         requireOpen();
-        long ms = time.toMillis();
+        long ms = added.toMillis();
         if (ms <= 0) {
-            throw new IllegalArgumentException("time added must be positive, not " + time);
+            throw new IllegalArgumentException("time added must be positive, not " + added);
         }
         String target = currentTask != null ? currentTask : nextTask().orElse(null);
-        if (target != null) {
-            tasks.get(target).countdown.ifPresent(cd -> cd.add(ms));
-        }
-        sittingCountdown.ifPresent(cd -> cd.add(ms));
+        time.add(Optional.ofNullable(target), ms);
         log.record(EventType.TIME_ADDED, target, Map.of("seconds", ms / 1000.0, "reason", "invigilator"));
         checkpoint();
     }
@@ -553,28 +510,20 @@ public final class Sitting implements AutoCloseable {
             reportedProblem = null;
             signals.add(new SittingSignal.StorageRecovered());
         }
-        if (submitted || paused) {
+        if (submitted || time.paused()) {
             return signals;
         }
-        Optional<TaskRecord> running = running();
-        if (running.isPresent() && running.get().countdown.isPresent()) {
-            Countdown cd = running.get().countdown.get();
-            String id = running.get().spec.id();
-            OptionalInt warning = cd.dueWarning();
-            if (warning.isPresent()) {
-                log.record(EventType.TIMER_WARNING, id, Map.of("minutesLeft", warning.getAsInt()));
-                signals.add(new SittingSignal.TimeWarning(id, warning.getAsInt()));
+        for (SittingSignal due : time.due(running(), submitted)) {
+            switch (due) {
+                case SittingSignal.TimeWarning w -> log.record(EventType.TIMER_WARNING, w.taskId(),
+                        Map.of("minutesLeft", w.minutesLeft()));
+                case SittingSignal.TaskTimeUp up -> log.record(EventType.TIMER_EXPIRED, up.taskId(), Map.of("scope", "task"));
+                case SittingSignal.SittingTimeUp up -> log.record(EventType.TIMER_EXPIRED, null, Map.of("scope", "sitting"));
+                default -> throw new IllegalStateException("not a timer signal: " + due);
             }
-            if (cd.expiredNow()) {
-                log.record(EventType.TIMER_EXPIRED, id, Map.of("scope", "task"));
-                signals.add(new SittingSignal.TaskTimeUp(id));
-            }
+            signals.add(due);
         }
-        if (sittingCountdown.isPresent() && sittingClockStarted && sittingCountdown.get().expiredNow()) {
-            log.record(EventType.TIMER_EXPIRED, null, Map.of("scope", "sitting"));
-            signals.add(new SittingSignal.SittingTimeUp());
-        }
-        if (clock.monoNanos() - lastCheckpointMono >= TimeUnit.MILLISECONDS.toNanos(CHECKPOINT_MILLIS)) {
+        if (time.checkpointDue()) {
             checkpoint();
         }
         return signals;
@@ -621,7 +570,7 @@ public final class Sitting implements AutoCloseable {
             packageId = UUID.randomUUID().toString();
             store.savePackageId(packageId);
         }
-        sittingCountdown.ifPresent(Countdown::stop);
+        time.stopSitting();
         if (!endRecorded) {
             // a retry after the local copy failed does not end the sitting twice
             log.record(EventType.SITTING_END, null, Map.of("reason", "submitted"));
@@ -680,7 +629,7 @@ public final class Sitting implements AutoCloseable {
         List<TaskResponse> responses = new ArrayList<>();
         for (TaskOutcome o : stored.tasks()) {
             TaskRecord t = tasks.get(o.taskId());
-            long extraMs = t.countdown.map(cd -> cd.rosterExtraMillis() + cd.addedMillis()).orElse(o.addedMillis());
+            long extraMs = time.task(t.spec.id()).map(cd -> cd.rosterExtraMillis() + cd.addedMillis()).orElse(o.addedMillis());
             responses.add(new TaskResponse(t.spec.id(), t.slot.conditionId(), o.finalText(), o.wordCount(),
                     o.startedAt().orElse(null), o.endedAt().orElse(null), extraMs / 1000, t.slot.policy(),
                     t.slot.policy().offeredTools(), o.toolUse(), o.endReason()));
@@ -707,23 +656,12 @@ public final class Sitting implements AutoCloseable {
     // -- helpers --
 
     private void checkpoint() {
-        lastCheckpointMono = clock.monoNanos();
-        Instant now = clock.now();
-        long sittingUsed = sittingCountdown.map(Countdown::usedMillis).orElse(0L);
-        long sittingAdded = sittingCountdown.map(Countdown::addedMillis).orElse(0L);
-        List<TaskTimes> taskTimes = new ArrayList<>();
-        for (TaskRecord t : tasks.values()) {
-            t.countdown.ifPresent(cd -> taskTimes.add(new TaskTimes(t.spec.id(), cd.usedMillis(), cd.addedMillis(), cd.warned())));
-        }
-        store.saveTimers(new TimerCheckpoint(now, sittingUsed, sittingAdded, paused, taskTimes));
+        store.saveTimers(time.checkpoint(clock.now()));
     }
 
-    private Optional<TaskRecord> running() {
-        if (currentTask == null) {
-            return Optional.empty();
-        }
-        TaskRecord t = tasks.get(currentTask);
-        return t.endedAt == null ? Optional.of(t) : Optional.empty();
+    /** The task in progress: the current one until it ends. */
+    private Optional<String> running() {
+        return currentTask == null || tasks.get(currentTask).endedAt != null ? Optional.empty() : Optional.of(currentTask);
     }
 
     private TaskRecord record(String taskId) {
