@@ -3,6 +3,7 @@ package org.inkgate.admin.gui;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
@@ -22,6 +23,7 @@ import javafx.stage.Stage;
 import javafx.stage.Window;
 import org.inkgate.admin.cli.InkgateAdmin;
 import org.inkgate.admin.core.rating.RatingStore;
+import org.inkgate.admin.core.store.StoreException;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.core.testutil.PostgresServer;
@@ -171,17 +173,29 @@ class ServerStoreWindowTest {
         // what was typed stays, so the test owner fixes the password file and collects again
         assertEquals(sitting.url, text(robot, "#storeFile"));
         assertEquals(wrong.toString(), text(robot, "#storeFilePasswordFile"));
-        try (var results = Stores.openResultsForReading(sitting.database)) {
-            assertEquals(List.of(), results.examIds(), "nothing was imported");
-        }
+        // the refused login created nothing: the database still holds none of the store's tables
+        StoreException none = assertThrows(StoreException.class, () -> Stores.openResultsForReading(sitting.database));
+        assertTrue(none.getMessage().contains("holds none of its tables"), none.getMessage());
 
         StepDriver.select(robot, "Missing responses");
         StepDriver.press(robot, "#showMissing");
         String missing = StepDriver.label(robot, "#missingReport");
         assertTrue(missing.contains(commandSays), missing);
 
+        // rating administration: the command's words, and no rater added
+        StepDriver.select(robot, "Rating administration");
+        StepDriver.setText(robot, "#raterId", "R1");
+        StepDriver.press(robot, "#addRater");
+        StepDriver.waitForWork(session);
+        String[] rate = admin("rate", "raters", "add", "R1", "--store", sitting.url, "--store-password-file",
+                wrong.toString());
+        String rateSays = rate[1].strip().replaceFirst("^inkgate-admin[^:]*: ", "").lines().findFirst().orElseThrow();
+        assertTrue(rateSays.contains("wrong password or no access"), rate[1]);
+        assertEquals("Refused, nothing changed: " + rateSays, StepDriver.label(robot, "#ratingMessage"));
+
         // no server listening: the command's words again
         String nowhere = "postgresql://" + sitting.role + "@127.0.0.1:1/nowhere?sslmode=disable&connectTimeout=2";
+        StepDriver.select(robot, "Missing responses");
         StepDriver.setText(robot, "#missingStore", nowhere);
         StepDriver.press(robot, "#showMissing");
         String[] unreachable = admin("missing", "--store", nowhere, "--store-password-file", wrong.toString());
@@ -218,6 +232,16 @@ class ServerStoreWindowTest {
     /** Step 4 as a test owner fills it in, with the server's address and a password file. */
     private static void collect(FxRobot robot, AdminSession session, Sitting sitting, Path passwordFile)
             throws Exception {
+        if (session.exam().get() == null) {
+            // step 1, so that collect records the rubric the rating steps need
+            StepDriver.select(robot, "Exam check");
+            StepDriver.setText(robot, "#examFolder", EXAM.toAbsolutePath().toString());
+            robot.clickOn("#checkExam");
+            WaitForAsyncUtils.waitForFxEvents();
+            StepDriver.waitForWork(session);
+            assertTrue(StepDriver.label(robot, "#examSummary").startsWith("No problems found"),
+                    StepDriver.label(robot, "#examSummary"));
+        }
         StepDriver.select(robot, "Collect");
         StepDriver.setText(robot, "#packageFolders", sitting.packages.toString());
         StepDriver.setText(robot, "#collectBundle", sitting.bundle.toString());
