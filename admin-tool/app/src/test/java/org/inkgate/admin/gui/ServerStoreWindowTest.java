@@ -84,6 +84,9 @@ class ServerStoreWindowTest {
         assertTrue(StepDriver.label(robot, "#collectCounts").startsWith("Imported 11,"),
                 StepDriver.label(robot, "#collectCounts"));
 
+        StepDriver.scrollTo(robot, "#storeFile", 20);
+        StepDriver.shoot1024(robot, stage, "admin-collect-server-store.png");
+
         // the next steps show the same server store and password file without retyping
         StepDriver.select(robot, "Missing responses");
         assertEquals(sitting.url, text(robot, "#missingStore"));
