@@ -212,6 +212,21 @@ class ServerStoreWindowTest {
         collect(robot, session, sitting, right);
         assertTrue(StepDriver.label(robot, "#collectCounts").startsWith("Imported 11,"),
                 StepDriver.label(robot, "#collectCounts"));
+
+        // a store a newer inkgate-admin wrote (its schema version raised by hand): refused in the command's words
+        try (var c = java.sql.DriverManager.getConnection(PostgresServer.shared().getJdbcUrl("postgres",
+                sitting.database.database())); var st = c.createStatement()) {
+            st.execute("INSERT INTO inkgate_schema_version(version) VALUES (999)");
+        }
+        StepDriver.select(robot, "Missing responses");
+        assertEquals(sitting.url, text(robot, "#missingStore"));
+        StepDriver.press(robot, "#showMissing");
+        String[] newer = admin("missing", "--store", sitting.url, "--store-password-file", right.toString());
+        String newerSays = newer[1].strip().replaceFirst("^inkgate-admin missing: ", "").lines().findFirst()
+                .orElseThrow();
+        assertTrue(newerSays.contains("schema version 999"), newer[1]);
+        assertTrue(StepDriver.label(robot, "#missingReport").contains(newerSays),
+                StepDriver.label(robot, "#missingReport") + "\n" + newerSays);
         assertNoPasswordOnScreen(robot);
     }
 
