@@ -106,7 +106,7 @@ public final class StoreField {
      * @throws StoreException for a blank field or an address that cannot be used, saying what to give instead
      */
     public static StoreLocation location(String text, String passwordFile) throws StoreException {
-        StoreLocation at = StoreLocation.parse(text);
+        StoreLocation at = StoreLocation.parse(text == null ? null : text.strip());
         Path file = Fields.path(passwordFile);
         return at instanceof StoreLocation.Server s && file != null ? s.withPasswordFile(file) : at;
     }
