@@ -10,8 +10,7 @@ import org.inkgate.admin.core.store.StoreLocation;
 final class StorePasswordFile {
 
     /** The option's description, one wording for every command that takes it. */
-    static final String DESCRIPTION = "for a PostgreSQL store: a password file (lines host:port:database:user:password,"
-            + " as PostgreSQL's own programs read them); without it PGPASSWORD, then PGPASSFILE, then ~/.pgpass";
+    static final String DESCRIPTION = "for a PostgreSQL store: " + StoreLocation.PASSWORD_SOURCES;
 
     private StorePasswordFile() {
     }

@@ -3,6 +3,8 @@ package org.inkgate.admin.gui;
 import java.nio.file.Path;
 import javafx.beans.property.ObjectProperty;
 import javafx.beans.property.SimpleObjectProperty;
+import javafx.beans.property.SimpleStringProperty;
+import javafx.beans.property.StringProperty;
 import org.inkgate.admin.core.source.ExamSource;
 
 /**
@@ -17,7 +19,8 @@ public final class AdminSession {
     private final ObjectProperty<Path> assignment = new SimpleObjectProperty<>();
     private final ObjectProperty<Path> bundle = new SimpleObjectProperty<>();
     private final ObjectProperty<Path> keys = new SimpleObjectProperty<>();
-    private final ObjectProperty<Path> store = new SimpleObjectProperty<>();
+    private final StringProperty store = new SimpleStringProperty("");
+    private final StringProperty storePasswordFile = new SimpleStringProperty("");
     private final Work work = new Work();
     private java.util.function.Consumer<String> browser;
 
@@ -47,8 +50,17 @@ public final class AdminSession {
         return keys;
     }
 
-    public ObjectProperty<Path> store() {
+    /** The results store as typed: a file, or a PostgreSQL store's address (see {@link StoreField}). */
+    public StringProperty store() {
         return store;
+    }
+
+    /**
+     * The password file of a PostgreSQL store, one for every step; blank: PGPASSWORD, PGPASSFILE,
+     * ~/.pgpass. Only the file's path is kept, never the password.
+     */
+    public StringProperty storePasswordFile() {
+        return storePasswordFile;
     }
 
     /** Opens a file: URI in the system browser; set by the application (HostServices), null in tests that do not. */

@@ -95,9 +95,15 @@ public final class Fields {
         return g;
     }
 
-    private static void choose(TextField field, Choose kind) {
+    /** Opens the chooser of {@code kind}, starting where the field points, and puts the choice into the field. */
+    static void choose(TextField field, Choose kind) {
         Window owner = field.getScene() == null ? null : field.getScene().getWindow();
-        Path current = field.getText().isBlank() ? null : Path.of(field.getText()).toAbsolutePath();
+        Path current;
+        try {
+            current = field.getText().isBlank() ? null : Path.of(field.getText()).toAbsolutePath();
+        } catch (java.nio.file.InvalidPathException e) {
+            current = null; // a server store's address, say: the chooser starts where it likes
+        }
         File start = current == null ? null : (current.toFile().isDirectory() ? current.toFile()
                 : current.getParent() == null ? null : current.getParent().toFile());
         File chosen;

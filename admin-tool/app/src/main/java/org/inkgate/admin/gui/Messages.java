@@ -26,6 +26,8 @@ public final class Messages {
             case EncryptedKeys.WrongPassphraseException w -> m + " Nothing was changed.";
             case CollectionRun.BundleRefusedException b -> m + " Nothing was imported.";
             case StoreException s -> "The results store: " + m + " Nothing else was changed.";
+            // the rating steps say themselves that nothing changed; the message is the command's
+            case org.inkgate.admin.core.rating.RatingException r -> m;
             case FormatRefusal r -> m;
             case org.inkgate.admin.study.AnalysisRun.Refused a -> m; // the step says itself that no report was written
             case IOException io -> "A file could not be read or written: " + m + ". Check the path and permissions.";

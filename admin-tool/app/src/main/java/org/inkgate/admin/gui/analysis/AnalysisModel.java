@@ -14,6 +14,9 @@ import javafx.beans.property.StringProperty;
 import org.inkgate.admin.core.export.Cancellation;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.StoreField;
+import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.study.AnalysisRun;
 import org.inkgate.admin.study.RaschChoices;
 import org.inkgate.analysis.data.StudyDesign;
@@ -76,24 +79,32 @@ public final class AnalysisModel {
         for (String c : StudyRatings.COLUMNS) {
             facets.put(c, new SimpleBooleanProperty(false));
         }
-        Fields.link(store, session.store());
+        StoreField.link(store, session.store());
         if (!store.get().isBlank()) {
             out.set(besideStore("report"));
         }
         store.addListener((o, was, now) -> {
-            if (out.get().isBlank() && Fields.path(now) != null) {
+            if (out.get().isBlank() && now != null && !now.isBlank()) {
                 out.set(besideStore("report"));
             }
         });
     }
 
     private String besideStore(String name) {
+        if (StoreField.isServer(store.get())) {
+            return session.besideExam(name).toString(); // a server store has no folder here
+        }
         Path s = Fields.path(store.get()).toAbsolutePath();
         return (s.getParent() == null ? Path.of(name) : s.getParent().resolve(name)).toString();
     }
 
     public StringProperty store() {
         return store;
+    }
+
+    /** The password file of a PostgreSQL store, shared by the steps. */
+    public StringProperty storePasswordFile() {
+        return session.storePasswordFile();
     }
 
     /** The exam in the store; blank when the store holds one. */
@@ -276,7 +287,12 @@ public final class AnalysisModel {
 
     /** The run's request and its command-line arguments, from the fields; a bad choice throws with a message for people. */
     AnalysisRun.Request request() {
-        Path storeFile = Fields.path(store.get());
+        StoreLocation storeFile;
+        try {
+            storeFile = store.get().isBlank() ? null : StoreField.location(store.get(), session.storePasswordFile().get());
+        } catch (StoreException e) {
+            throw new IllegalArgumentException(e.getMessage(), e);
+        }
         Path ratingsFile = Fields.path(ratings.get());
         Path outFolder = Fields.path(out.get());
         if (storeFile == null && ratingsFile == null) {
@@ -288,7 +304,14 @@ public final class AnalysisModel {
         List<String> args = new ArrayList<>();
         add(args, "--ratings", ratingsFile);
         add(args, "--candidates", Fields.path(candidates.get()));
-        add(args, "--store", storeFile);
+        if (storeFile != null) {
+            // as typed, so the report's command line names the same store; a password file by its path only
+            args.add("--store");
+            args.add(store.get().strip());
+            if (storeFile instanceof StoreLocation.Server s && s.passwordFile() != null) {
+                add(args, "--store-password-file", s.passwordFile());
+            }
+        }
         String examId = exam.get().isBlank() || storeFile == null ? null : exam.get().strip();
         if (examId != null) {
             args.add("--exam");

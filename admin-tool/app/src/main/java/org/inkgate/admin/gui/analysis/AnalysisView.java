@@ -35,7 +35,8 @@ public final class AnalysisView implements Step {
 
     public AnalysisView(AnalysisModel model, Work work) {
         GridPane inputs = Fields.grid();
-        store = Fields.pathRow(inputs, 0, "analysisStore", "Results store", model.store(), Fields.Choose.OPEN_FILE);
+        store = org.inkgate.admin.gui.StoreField.row(inputs, 0, "analysisStore", "Results store", model.store(),
+                model.storePasswordFile(), Fields.Choose.OPEN_FILE);
         TextField exam = new TextField();
         exam.setId("analysisExam");
         exam.setAccessibleText("Exam id in the store (blank when the store holds one exam)");

@@ -18,6 +18,9 @@ import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.Rows;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.StoreField;
+import org.inkgate.admin.core.store.StoreException;
+import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.format.trust.TrustPolicy;
 
 /** The collect step: {@link CollectionRun} (as {@code inkgate-admin collect} runs it), off the JavaFX thread. */
@@ -44,7 +47,7 @@ public final class CollectModel {
         Fields.link(keys, session.keys());
         Fields.link(assignment, session.assignment());
         Fields.link(roster, session.roster());
-        Fields.link(store, session.store());
+        StoreField.link(store, session.store());
         session.exam().addListener((o, was, exam) -> {
             if (exam != null && store.get().isBlank()) {
                 store.set(session.besideExam(ResultsStore.DEFAULT_FILE_NAME).toString());
@@ -81,6 +84,11 @@ public final class CollectModel {
         return store;
     }
 
+    /** The password file of a PostgreSQL store, shared by the steps. */
+    public StringProperty storePasswordFile() {
+        return session.storePasswordFile();
+    }
+
     public StringProperty installations() {
         return installations;
     }
@@ -109,14 +117,20 @@ public final class CollectModel {
     public void collect() {
         List<Path> roots = Arrays.stream(folders.get().split("\\R")).map(String::strip).filter(s -> !s.isEmpty())
                 .map(Path::of).toList();
-        Path storeFile = Fields.path(store.get());
         Path bundle = Fields.path(this.bundle.get());
         Path keys = Fields.path(this.keys.get());
         Path installationsFile = Fields.path(installations.get());
         refused.clear();
         details.set("");
-        if (roots.isEmpty() || storeFile == null) {
+        if (roots.isEmpty() || store.get().isBlank()) {
             counts.set("Name at least one folder of response packages and the results store file.");
+            return;
+        }
+        StoreLocation storeFile;
+        try {
+            storeFile = StoreField.location(store.get(), session.storePasswordFile().get());
+        } catch (StoreException e) {
+            counts.set(e.getMessage());
             return;
         }
         if (bundle == null || keys == null) {
@@ -155,7 +169,7 @@ public final class CollectModel {
                     o -> progress.update(settled.incrementAndGet(), total.get(), "Settled " + settled.get() + " of "
                             + total.get() + " packages"));
         }, report -> {
-            session.store().set(storeFile);
+            session.store().set(store.get().strip());
             show(report, any);
             if (exam == null) {
                 details.set((details.get() + "\nNo rubric was recorded: check the exam folder in step 1 and collect"

@@ -38,7 +38,8 @@ public final class CollectView implements Step {
                 Fields.Choose.OPEN_FILE);
         Fields.pathRow(grid, 4, "collectRoster", "Roster CSV", model.roster(),
                 Fields.Choose.OPEN_FILE);
-        Fields.pathRow(grid, 5, "storeFile", "Results store", model.store(), Fields.Choose.SAVE_FILE);
+        org.inkgate.admin.gui.StoreField.row(grid, 5, "storeFile", "Results store", model.store(),
+                model.storePasswordFile(), Fields.Choose.SAVE_FILE);
         Fields.pathRow(grid, 6, "installations", "Enrolled installations", model.installations(), Fields.Choose.OPEN_FILE);
         CheckBox any = new CheckBox("Accept any installation (list each package's installation to compare with seat records)");
         any.setId("anyInstallation");

@@ -19,6 +19,8 @@ import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.StoreField;
+import org.inkgate.admin.core.store.StoreException;
 import org.inkgate.admin.gui.Work;
 
 /**
@@ -49,13 +51,18 @@ public final class ExportModel {
 
     public ExportModel(AdminSession session) {
         this.session = session;
-        Fields.link(store, session.store());
+        StoreField.link(store, session.store());
         folder.set(session.besideExam("export").toString());
         session.examFolder().addListener((o, was, now) -> folder.set(session.besideExam("export").toString()));
     }
 
     public StringProperty store() {
         return store;
+    }
+
+    /** The password file of a PostgreSQL store, shared by the steps. */
+    public StringProperty storePasswordFile() {
+        return session.storePasswordFile();
     }
 
     public StringProperty folder() {
@@ -116,11 +123,12 @@ public final class ExportModel {
 
     /** Starts the export on the worker; the summary lands in {@link #written}. */
     public void export() {
-        Path storeFile = Fields.path(store.get());
         Path out = Fields.path(folder.get());
-        if (storeFile == null || !Files.isRegularFile(storeFile)) {
-            written.set("There is no results store " + (storeFile == null ? "named" : "at " + storeFile)
-                    + ". Collect first (step 4) or name the store file.");
+        StoreLocation storeFile;
+        try {
+            storeFile = StoreField.existing(store.get(), session.storePasswordFile().get());
+        } catch (StoreException e) {
+            written.set(e.getMessage());
             return;
         }
         if (out == null) {
@@ -200,15 +208,15 @@ public final class ExportModel {
         };
     }
 
-    private static List<String> run(Path storeFile, Path out, String only, XapiExport.Options options,
+    private static List<String> run(StoreLocation storeFile, Path out, String only, XapiExport.Options options,
             StoreExport.Progress progress, Cancellation cancellation) throws Exception {
         List<String> lines = new ArrayList<>();
-        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(storeFile))) {
+        try (ResultsStore s = Stores.openResultsForReading(storeFile)) {
             List<String> exams = StoreExport.exams(s, only);
             if (exams.isEmpty()) {
                 lines.add("The store holds no exam yet. Collect first (step 4).");
             } else {
-                for (StoreExport.Written w : StoreExport.write(org.inkgate.admin.core.store.StoreLocation.file(storeFile), s, exams, out, options, false, progress,
+                for (StoreExport.Written w : StoreExport.write(storeFile, s, exams, out, options, false, progress,
                         cancellation)) {
                     lines.addAll(w.lines());
                 }

@@ -23,7 +23,8 @@ public final class ExportView implements Step {
 
     public ExportView(ExportModel model, Work work) {
         GridPane grid = Fields.grid();
-        storeField = Fields.pathRow(grid, 0, "exportStore", "Results store", model.store(), Fields.Choose.OPEN_FILE);
+        storeField = org.inkgate.admin.gui.StoreField.row(grid, 0, "exportStore", "Results store", model.store(),
+                model.storePasswordFile(), Fields.Choose.OPEN_FILE);
         Fields.pathRow(grid, 1, "exportFolder", "Export folder", model.folder(), Fields.Choose.FOLDER);
         TextField exam = new TextField();
         exam.setId("exportExam");

@@ -1,14 +1,13 @@
 package org.inkgate.admin.gui.missing;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.List;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
 import org.inkgate.admin.core.collection.MissingReport;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.gui.AdminSession;
-import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.StoreField;
+import org.inkgate.admin.core.store.StoreException;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Messages;
@@ -20,11 +19,18 @@ public final class MissingModel {
             + " collected, a machine failure). Look for the client's local copy before concluding, and follow your"
             + " regulations.";
 
+    private final AdminSession session;
     private final StringProperty store = new SimpleStringProperty("");
     private final StringProperty report = new SimpleStringProperty("");
 
     public MissingModel(AdminSession session) {
-        Fields.link(store, session.store());
+        this.session = session;
+        StoreField.link(store, session.store());
+    }
+
+    /** The password file of a PostgreSQL store, shared by the steps. */
+    public StringProperty storePasswordFile() {
+        return session.storePasswordFile();
     }
 
     public StringProperty store() {
@@ -37,13 +43,14 @@ public final class MissingModel {
 
     /** Reads the store and writes the report text. */
     public void show() {
-        Path file = Fields.path(store.get());
-        if (file == null || !Files.isRegularFile(file)) {
-            report.set("There is no results store " + (file == null ? "named" : "at " + file) + ". Collect first (step 4)"
-                    + " or name the store file.");
+        StoreLocation at;
+        try {
+            at = StoreField.existing(store.get(), session.storePasswordFile().get());
+        } catch (StoreException e) {
+            report.set(e.getMessage());
             return;
         }
-        try (ResultsStore s = Stores.openResultsForReading(StoreLocation.file(file))) {
+        try (ResultsStore s = Stores.openResultsForReading(at)) {
             StringBuilder b = new StringBuilder();
             List<String> exams = s.examIds();
             if (exams.isEmpty()) {

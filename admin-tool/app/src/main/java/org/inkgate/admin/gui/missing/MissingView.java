@@ -16,7 +16,8 @@ public final class MissingView implements Step {
 
     public MissingView(MissingModel model) {
         GridPane grid = Fields.grid();
-        storeField = Fields.pathRow(grid, 0, "missingStore", "Results store", model.store(), Fields.Choose.OPEN_FILE);
+        storeField = org.inkgate.admin.gui.StoreField.row(grid, 0, "missingStore", "Results store", model.store(),
+                model.storePasswordFile(), Fields.Choose.OPEN_FILE);
         Button show = new Button("Show missing responses");
         show.setId("showMissing");
         show.setOnAction(e -> model.show());

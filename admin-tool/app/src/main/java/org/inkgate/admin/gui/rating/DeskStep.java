@@ -20,7 +20,8 @@ public final class DeskStep implements Step {
 
     public DeskStep(DeskStepModel model, Work work) {
         GridPane grid = Fields.grid();
-        storeField = Fields.pathRow(grid, 0, "deskStore", "Results store", model.store(), Fields.Choose.OPEN_FILE);
+        storeField = org.inkgate.admin.gui.StoreField.row(grid, 0, "deskStore", "Results store", model.store(),
+                model.storePasswordFile(), Fields.Choose.OPEN_FILE);
         TextField exam = new TextField();
         exam.setId("deskExam");
         exam.setAccessibleText("Exam id (may stay empty when the store holds one exam)");

@@ -1,7 +1,5 @@
 package org.inkgate.admin.gui.rating;
 
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.List;
 import javafx.beans.property.SimpleStringProperty;
 import javafx.beans.property.StringProperty;
@@ -9,7 +7,8 @@ import javafx.stage.Stage;
 import org.inkgate.admin.core.rating.RatingException;
 import org.inkgate.admin.core.rating.RatingStore;
 import org.inkgate.admin.gui.AdminSession;
-import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.StoreField;
+import org.inkgate.admin.core.store.StoreException;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Work;
@@ -24,7 +23,12 @@ public final class DeskStepModel {
 
     public DeskStepModel(AdminSession session) {
         this.session = session;
-        Fields.link(store, session.store());
+        StoreField.link(store, session.store());
+    }
+
+    /** The password file of a PostgreSQL store, shared by the steps. */
+    public StringProperty storePasswordFile() {
+        return session.storePasswordFile();
     }
 
     public StringProperty store() {
@@ -42,11 +46,12 @@ public final class DeskStepModel {
 
     /** Opens the store off the JavaFX thread, then the desk in a new window; the store closes with it. */
     public void open() {
-        Path file = Fields.path(store.get());
         String examId = exam.get() == null || exam.get().isBlank() ? null : exam.get().strip();
-        if (file == null || !Files.isRegularFile(file)) {
-            result.set("There is no results store " + (file == null ? "named" : "at " + file) + ". Collect first (step 4)"
-                    + " or name the store file.");
+        StoreLocation file;
+        try {
+            file = StoreField.existing(store.get(), session.storePasswordFile().get());
+        } catch (StoreException e) {
+            result.set(e.getMessage());
             return;
         }
         Work work = session.work();
@@ -58,16 +63,16 @@ public final class DeskStepModel {
         }, failure -> result.set("The rating desk did not open. " + failure));
     }
 
-    private static RatingStore open(Path file, String examId) throws RatingException {
+    private static RatingStore open(StoreLocation file, String examId) throws RatingException {
         String id = examId;
         if (id == null) {
-            List<String> exams = Stores.exams(StoreLocation.file(file));
+            List<String> exams = Stores.exams(file);
             if (exams.size() != 1) {
                 throw new RatingException("the store holds " + exams.size() + " exams " + exams + "; type the exam id");
             }
             id = exams.get(0);
         }
-        RatingStore s = Stores.openRating(StoreLocation.file(file), id);
+        RatingStore s = Stores.openRating(file, id);
         if (s.raters().isEmpty()) {
             s.close();
             throw new RatingException("exam " + id + " has no raters yet; add them and assign the responses first"

@@ -22,6 +22,8 @@ import org.inkgate.admin.gui.AdminSession;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.Stores;
 import org.inkgate.admin.gui.Fields;
+import org.inkgate.admin.gui.StoreField;
+import org.inkgate.admin.core.store.StoreException;
 
 /**
  * The rating administration step: raters, the seeded assignment and its linkage, progress per
@@ -67,10 +69,13 @@ public final class RatingAdminModel {
 
     public RatingAdminModel(AdminSession session) {
         this.session = session;
-        Fields.link(store, session.store());
+        StoreField.link(store, session.store());
     }
 
     public StringProperty store() { return store; }
+
+    /** The password file of a PostgreSQL store, shared by the steps. */
+    public StringProperty storePasswordFile() { return session.storePasswordFile(); }
     public StringProperty exam() { return exam; }
     public StringProperty raterId() { return raterId; }
     public StringProperty raterLabel() { return raterLabel; }
@@ -132,10 +137,11 @@ public final class RatingAdminModel {
 
     /** Runs {@code call} on the worker over the named store, then shows its message and the tables. */
     void call(String what, Call call) {
-        Path file = Fields.path(store.get());
-        if (file == null || !Files.isRegularFile(file)) {
-            message.set("There is no results store " + (file == null ? "named" : "at " + file)
-                    + ". Collect first (step 4) or name the store file.");
+        StoreLocation file;
+        try {
+            file = StoreField.existing(store.get(), session.storePasswordFile().get());
+        } catch (StoreException e) {
+            message.set(e.getMessage());
             return;
         }
         String examId = exam.get().isBlank() ? null : exam.get().strip();
@@ -165,16 +171,16 @@ public final class RatingAdminModel {
     }
 
     /** As the command's --exam: may be left out when the store holds one exam. */
-    static RatingStore open(Path file, String examId) throws RatingException {
+    static RatingStore open(StoreLocation file, String examId) throws RatingException {
         String id = examId;
         if (id == null) {
-            List<String> exams = Stores.exams(StoreLocation.file(file));
+            List<String> exams = Stores.exams(file);
             if (exams.size() != 1) {
                 throw new RatingException("the store holds " + exams.size() + " exams " + exams + "; name one in Exam id");
             }
             id = exams.get(0);
         }
-        return Stores.openRating(StoreLocation.file(file), id);
+        return Stores.openRating(file, id);
     }
 
     private static Snapshot snapshot(RatingStore s) throws RatingException {

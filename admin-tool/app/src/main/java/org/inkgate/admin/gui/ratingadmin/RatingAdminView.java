@@ -30,7 +30,8 @@ public final class RatingAdminView implements Step {
 
     public RatingAdminView(RatingAdminModel model, Work work) {
         GridPane where = Fields.grid();
-        storeField = Fields.pathRow(where, 0, "ratingStore", "Results store", model.store(), Fields.Choose.OPEN_FILE);
+        storeField = org.inkgate.admin.gui.StoreField.row(where, 0, "ratingStore", "Results store", model.store(),
+                model.storePasswordFile(), Fields.Choose.OPEN_FILE);
         TextField exam = field("ratingExam", "Exam id (blank when the store holds one exam)", model.exam(), 16);
         exam.setPromptText("the store's only exam");
         Fields.row(where, 1, "Exam id", exam);

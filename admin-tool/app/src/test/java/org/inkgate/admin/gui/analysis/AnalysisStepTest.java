@@ -104,7 +104,7 @@ class AnalysisStepTest {
         List<String> opened = new ArrayList<>();
         session.browser(opened::add);
         robot.interact(() -> AdminWindow.show(stage, session));
-        robot.interact(() -> session.store().set(rated.file()));
+        robot.interact(() -> session.store().set(rated.file().toString()));
         select(robot);
         Path guiOut = dir.resolve("report-window");
         assertEquals(dir.resolve("report").toAbsolutePath().toString(), text(robot, "#analysisOut"),
@@ -156,7 +156,7 @@ class AnalysisStepTest {
 
         AdminSession session = new AdminSession();
         robot.interact(() -> AdminWindow.show(stage, session));
-        robot.interact(() -> session.store().set(rated.file()));
+        robot.interact(() -> session.store().set(rated.file().toString()));
         select(robot);
         Path guiOut = dir.resolve("anchored-window");
         setText(robot, "#analysisOut", guiOut.toString());
@@ -234,7 +234,7 @@ class AnalysisStepTest {
     void cancel_inTheWindow_saysSoAndWritesNothing(FxRobot robot) throws Exception {
         AdminSession session = new AdminSession();
         robot.interact(() -> AdminWindow.show(stage, session));
-        robot.interact(() -> session.store().set(rated.file()));
+        robot.interact(() -> session.store().set(rated.file().toString()));
         select(robot);
         Path out = dir.resolve("report-window-cancelled");
         setText(robot, "#analysisOut", out.toString());
@@ -261,7 +261,7 @@ class AnalysisStepTest {
     void cancel_inTheWindow_onceTheReportIsMoving_isRefusedAndTheReportIsWhole(FxRobot robot) throws Exception {
         AdminSession session = new AdminSession();
         robot.interact(() -> AdminWindow.show(stage, session));
-        robot.interact(() -> session.store().set(rated.file()));
+        robot.interact(() -> session.store().set(rated.file().toString()));
         select(robot);
         Path out = dir.resolve("report-window-late-cancel");
         setText(robot, "#analysisOut", out.toString());
@@ -306,7 +306,7 @@ class AnalysisStepTest {
         robot.interact(() -> {
             stage.setWidth(1024);
             stage.setHeight(768);
-            session.store().set(rated.file());
+            session.store().set(rated.file().toString());
         });
         select(robot);
         Node view = robot.lookup("#analysisStore").query().getParent();

@@ -27,11 +27,6 @@ public sealed interface StoreLocation {
         }
 
         @Override
-        public Path requireFile(String step) {
-            return path;
-        }
-
-        @Override
         public String toString() {
             return path.toString();
         }
@@ -60,18 +55,6 @@ public sealed interface StoreLocation {
             return new Server(host, port, database, user, parameters, file);
         }
 
-        @Override
-        public Path requireFile(String step) throws StoreException {
-            throw new StoreException(notYet(step));
-        }
-
-        /** "{@code step} on a PostgreSQL store is not yet ...", naming what works on one. */
-        public String notYet(String step) {
-            return step + " on a PostgreSQL store is not yet in this version of inkgate-admin (" + this + "). What"
-                    + " works on a PostgreSQL store: " + SERVER_STEPS + ". Run " + step + " on a SQLite store file"
-                    + " (--store " + ResultsStore.DEFAULT_FILE_NAME + ")";
-        }
-
         /** {@code postgresql://host:port/database}, without user, parameters or password: safe to print. */
         @Override
         public String toString() {
@@ -79,8 +62,12 @@ public sealed interface StoreLocation {
         }
     }
 
-    /** The steps that work on a PostgreSQL store in this version, for "not yet" messages. */
-    String SERVER_STEPS = "collect, missing, export, rate (with the rating desk) and analyse --store";
+    /**
+     * Where the password of a server store comes from, in the words of {@code --store-password-file}
+     * and of the admin window's password file field: one wording for both.
+     */
+    String PASSWORD_SOURCES = "a password file (lines host:port:database:user:password, as PostgreSQL's own"
+            + " programs read them); without it PGPASSWORD, then PGPASSFILE, then ~/.pgpass";
 
     /** PostgreSQL's port when a URL names none. */
     int DEFAULT_PORT = 5432;
@@ -94,12 +81,6 @@ public sealed interface StoreLocation {
     Set<String> PASSED_THROUGH = Set.of("ssl", "sslmode", "sslrootcert", "sslcert", "sslkey", "sslfactory",
             "sslhostnameverifier", "sslnegotiation", "connectTimeout", "socketTimeout", "loginTimeout",
             "ApplicationName", "targetServerType");
-
-    /**
-     * The store's file, for the steps that work on a file only (the rating steps, analyse, the
-     * admin window), or a "not yet" refusal naming {@code step} and what works on a server store.
-     */
-    Path requireFile(String step) throws StoreException;
 
     /** {@code scheme://...}: a URL, never a file name (a Windows drive letter has one letter and no "//"). */
     Pattern URL = Pattern.compile("^([A-Za-z][A-Za-z0-9+.-]+):(//.*)?$");

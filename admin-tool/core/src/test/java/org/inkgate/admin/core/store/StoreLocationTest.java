@@ -59,16 +59,6 @@ class StoreLocationTest {
     }
 
     @Test
-    void requireFile_serverStore_isNotYetForFileOnlySteps_namingWhatWorks() throws Exception {
-        StoreException e = assertThrows(StoreException.class,
-                () -> StoreLocation.parse("postgresql://db.invented.example/inkgate").requireFile("the admin window"));
-        assertTrue(e.getMessage().startsWith("the admin window on a PostgreSQL store is not yet in this version"),
-                e.getMessage());
-        assertTrue(e.getMessage().contains("What works on a PostgreSQL store: collect, missing, export, rate (with the"
-                + " rating desk) and analyse --store"), e.getMessage());
-    }
-
-    @Test
     void parse_otherUrlsAndBlank_areRefusedSayingWhatToGive() {
         StoreException https = assertThrows(StoreException.class, () -> StoreLocation.parse("https://x.example/r.db"));
         assertTrue(https.getMessage().startsWith("a store at a https:// address is not supported"), https.getMessage());
