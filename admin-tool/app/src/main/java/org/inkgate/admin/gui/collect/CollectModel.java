@@ -123,7 +123,7 @@ public final class CollectModel {
         refused.clear();
         details.set("");
         if (roots.isEmpty() || store.get().isBlank()) {
-            counts.set("Name at least one folder of response packages and the results store file.");
+            counts.set("Name at least one folder of response packages and the results store (a file, or a postgresql:// address).");
             return;
         }
         StoreLocation storeFile;
