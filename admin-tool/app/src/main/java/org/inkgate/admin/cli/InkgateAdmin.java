@@ -1,6 +1,7 @@
 package org.inkgate.admin.cli;
 
 import org.inkgate.packs.cli.StandardOptions;
+import java.util.List;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 
@@ -11,8 +12,29 @@ import picocli.CommandLine.Command;
  * packages, conflicts, missing responses).
  */
 @Command(name = "inkgate-admin", mixinStandardHelpOptions = true, versionProvider = org.inkgate.packs.cli.ReleaseVersion.class,
-        description = "Prepare, bundle and collect Inkgate writing exams.",
-        subcommands = {
+        description = "Prepare, bundle and collect Inkgate writing exams.")
+public final class InkgateAdmin {
+
+    public static final int OK = 0;
+    public static final int PROBLEMS = 1;
+    public static final int ATTENTION = 3;
+
+    /** Reports the build's version. */
+    static final class Version implements CommandLine.IVersionProvider {
+        @Override
+        public String[] getVersion() {
+            String v = InkgateAdmin.class.getPackage().getImplementationVersion();
+            return new String[] {"inkgate-admin " + (v == null ? "(development build)" : v)};
+        }
+    }
+
+    /**
+     * The subcommands, in the order {@code --help} lists them. Not in the {@code @Command}
+     * annotation: picocli reads every command's annotations when it builds a tree, which took
+     * about a third of a second before any command ran, so the launcher builds only the one that
+     * runs ({@link #commandLineFor}); help, completion and man pages get the whole tree.
+     */
+    static final List<Class<?>> SUBCOMMANDS = List.of(
             // one line per command
             KeysCommand.class,
             ExamCommand.class,
@@ -32,26 +54,44 @@ import picocli.CommandLine.Command;
             PlanCommand.class,
             GuiCommand.class,
             org.inkgate.packs.cli.PackCommand.class,
-            CommandLine.HelpCommand.class,
-        })
-public final class InkgateAdmin {
+            CommandLine.HelpCommand.class);
 
-    public static final int OK = 0;
-    public static final int PROBLEMS = 1;
-    public static final int ATTENTION = 3;
-
-    /** Reports the build's version. */
-    static final class Version implements CommandLine.IVersionProvider {
-        @Override
-        public String[] getVersion() {
-            String v = InkgateAdmin.class.getPackage().getImplementationVersion();
-            return new String[] {"inkgate-admin " + (v == null ? "(development build)" : v)};
-        }
+    /** The whole configured command tree: for help, completion, man pages and tests. */
+    public static CommandLine commandLine() {
+        return configured(SUBCOMMANDS);
     }
 
-    /** A configured command line, for the launcher and for tests. */
-    public static CommandLine commandLine() {
-        CommandLine cl = StandardOptions.apply(new CommandLine(new InkgateAdmin()), "inkgate-admin");
+    /**
+     * The command line the launcher runs {@code args} with: when the first argument names a
+     * subcommand (other than {@code help}), a tree of the root and that subcommand only, which
+     * parses, prints usage and errors and exits exactly as the whole tree does for that command;
+     * otherwise (root options, {@code help}, no or an unknown command, where picocli lists or
+     * suggests commands) the whole tree.
+     */
+    public static CommandLine commandLineFor(String... args) {
+        if (args.length > 0) {
+            for (Class<?> c : SUBCOMMANDS) {
+                Command command = c.getAnnotation(Command.class);
+                if (c != CommandLine.HelpCommand.class && names(command).contains(args[0])) {
+                    return configured(List.of(c));
+                }
+            }
+        }
+        return commandLine();
+    }
+
+    private static List<String> names(Command command) {
+        List<String> names = new java.util.ArrayList<>(List.of(command.aliases()));
+        names.add(command.name());
+        return names;
+    }
+
+    private static CommandLine configured(List<Class<?>> subcommands) {
+        CommandLine root = new CommandLine(new InkgateAdmin());
+        for (Class<?> c : subcommands) {
+            root.addSubcommand(c);
+        }
+        CommandLine cl = StandardOptions.apply(root, "inkgate-admin");
         // every command prints through these: no control character from outside data reaches the terminal
         cl.setColorScheme(CommandLine.Help.defaultColorScheme(CommandLine.Help.Ansi.OFF));
         cl.setOut(TerminalText.guard(cl.getOut()));
@@ -75,6 +115,6 @@ public final class InkgateAdmin {
 
     public static void main(String[] args) {
         org.inkgate.packs.cli.QuietJdkLogging.install();
-        System.exit(commandLine().execute(args));
+        System.exit(commandLineFor(args).execute(args));
     }
 }

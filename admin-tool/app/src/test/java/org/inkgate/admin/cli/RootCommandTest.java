@@ -14,7 +14,7 @@ class RootCommandTest {
 
     @Test
     void root_listsEveryCommandTheGuidesName() {
-        var names = new CommandLine(new InkgateAdmin()).getSubcommands().keySet();
+        var names = InkgateAdmin.commandLine().getSubcommands().keySet();
         for (String name : List.of("keys", "exam", "forms", "roster", "bundle", "inspect", "collect", "missing",
                 "export", "analyse", "pack")) {
             assertTrue(names.contains(name), name + " is a subcommand of inkgate-admin: " + names);
@@ -24,7 +24,7 @@ class RootCommandTest {
     @Test
     void packVerifyHelp_throughTheRoot_printsItsUsage() {
         StringWriter out = new StringWriter();
-        CommandLine cli = new CommandLine(new InkgateAdmin());
+        CommandLine cli = InkgateAdmin.commandLine();
         cli.setOut(new PrintWriter(out));
         assertEquals(0, cli.execute("pack", "verify", "--help"));
         assertTrue(out.toString().contains("verify"), out.toString());
@@ -33,7 +33,7 @@ class RootCommandTest {
     @Test
     void analyseHelp_throughTheRoot_printsItsOptions() {
         StringWriter out = new StringWriter();
-        CommandLine cli = new CommandLine(new InkgateAdmin());
+        CommandLine cli = InkgateAdmin.commandLine();
         cli.setOut(new PrintWriter(out));
         assertEquals(0, cli.execute("analyse", "--help"));
         assertTrue(out.toString().contains("--ratings"), out.toString());

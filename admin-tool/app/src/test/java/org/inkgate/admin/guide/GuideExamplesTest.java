@@ -34,7 +34,9 @@ import org.junit.jupiter.api.Test;
  * the guide's file and line. Commands that open a window are parsed by the real command tree, not
  * opened ({@link GuideLauncher}). A block that cannot run as printed says why in an HTML comment
  * on the line above its fence, {@code <!-- not run by GuideExamplesTest: REASON -->}, shown to
- * nobody reading the rendered guide but listed by this test.
+ * nobody reading the rendered guide but listed by this test. The stand-ins the guides name for what
+ * only the reader has (a server, a blind id, a stick of enrolment files) are replaced by what the
+ * test makes in their place, and only they ({@link StandIns}).
  */
 class GuideExamplesTest {
 
@@ -68,6 +70,7 @@ class GuideExamplesTest {
             Path work = Path.of("target/guide-examples").resolve(guide.getFileName().toString().replace(".md", ""));
             prepare(work);
             List<String> environment = new ArrayList<>();
+            StandIns standIns = new StandIns(work);
             StringBuilder log = new StringBuilder();
             for (Example e : examples) {
                 if (e.notRun() != null) {
@@ -78,14 +81,17 @@ class GuideExamplesTest {
                     environment.add(e.text());
                     continue;
                 }
-                String script = String.join("\n", environment) + "\n" + e.text() + "\n";
+                String command = standIns.apply(e.text());
+                String script = String.join("\n", environment) + "\n" + String.join("\n", standIns.environment())
+                        + "\n" + command + "\n";
                 Result r = sh(work, script);
                 log.append("$ ").append(e.text()).append("   # ").append(e.where()).append(", exit ").append(r.code())
-                        .append('\n').append(r.output()).append('\n');
+                        .append('\n').append(command.equals(e.text()) ? "" : "(stand-ins replaced: " + command + ")\n")
+                        .append(r.output()).append('\n');
                 Files.writeString(work.resolve("commands.log"), log.toString(), StandardCharsets.UTF_8);
                 ran++;
                 if (r.code() != 0 && r.code() != 3) {
-                    fail(e.where() + ": the example exits " + r.code() + " (0 or 3 expected):\n  " + e.text() + "\n"
+                    fail(e.where() + ": the example exits " + r.code() + " (0 or 3 expected):\n  " + command + "\n"
                             + r.output() + "\n(all commands and their output: " + work.resolve("commands.log") + ")");
                 }
             }

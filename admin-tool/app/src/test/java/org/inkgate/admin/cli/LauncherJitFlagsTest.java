@@ -1,0 +1,66 @@
+package org.inkgate.admin.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The launcher script runs {@code analyse} with the C1 compiler only (issue 16: the whole command
+ * under 2 s; docs/benchmarks.md) and every other command with the JVM's usual compilers. The real
+ * script runs from a copy beside a stand-in build, with a stand-in {@code java} that prints the
+ * arguments it was given.
+ */
+class LauncherJitFlagsTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void analyse_runsWithC1Only() throws Exception {
+        List<String> args = javaArguments("analyse", "--ratings", "r.csv", "--out", "out");
+        assertTrue(args.contains("-XX:TieredStopAtLevel=1"), args.toString());
+        assertEquals(List.of("org.inkgate.admin.cli.InkgateAdmin", "analyse", "--ratings", "r.csv", "--out", "out"),
+                args.subList(args.size() - 6, args.size()));
+    }
+
+    @Test
+    void otherCommands_keepTheUsualCompilers() throws Exception {
+        for (String command : List.of("collect", "bundle", "gui", "--help")) {
+            List<String> args = javaArguments(command);
+            assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel")), command + ": " + args);
+            assertEquals(command, args.get(args.size() - 1));
+        }
+    }
+
+    private List<String> javaArguments(String... commandLine) throws IOException, InterruptedException {
+        Path app = Files.createDirectories(dir.resolve("app"));
+        Path launcher = app.resolve("inkgate-admin");
+        Files.copy(Path.of("inkgate-admin"), launcher, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+        Files.createDirectories(app.resolve("target/lib"));
+        Files.write(app.resolve("target/inkgate-admin.jar"), new byte[0]);
+        Path jdk = Files.createDirectories(dir.resolve("jdk/bin"));
+        Files.writeString(dir.resolve("jdk/release"), "JAVA_VERSION=\"25.0.1\"\n");
+        Path java = jdk.resolve("java");
+        Files.writeString(java, "#!/bin/sh\nfor a in \"$@\"; do printf '%s\\n' \"$a\"; done\n");
+        Files.setPosixFilePermissions(java, PosixFilePermissions.fromString("rwxr-xr-x"));
+        Files.setPosixFilePermissions(launcher, PosixFilePermissions.fromString("rwxr-xr-x"));
+        ProcessBuilder pb = new ProcessBuilder();
+        pb.command().add(launcher.toString());
+        pb.command().addAll(List.of(commandLine));
+        pb.environment().put("JAVA_HOME", dir.resolve("jdk").toString());
+        pb.redirectErrorStream(true);
+        Process p = pb.start();
+        String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertEquals(0, p.waitFor(), out);
+        return out.lines().toList();
+    }
+}
