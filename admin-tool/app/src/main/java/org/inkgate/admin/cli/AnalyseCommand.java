@@ -201,7 +201,7 @@ public final class AnalyseCommand implements Callable<Integer> {
         }
         AnalysisRun.Request request = new AnalysisRun.Request(ratings, candidates, attributes, rosterAttributes,
                 toolUsage, process, questionnaire, store, exam, out, options, mfrmOptions, mfrmAnchors,
-                spec.commandLine().getParseResult().originalArgs());
+                ownArguments());
         AnalysisRun.Written written;
         try (ProgressReporter progress = ProgressReporter.onStandardError(err, "analyse", "stages", 0)) {
             written = AnalysisRun.run(request, new AnalysisRun.Listener() {
@@ -253,5 +253,20 @@ public final class AnalyseCommand implements Callable<Integer> {
 
     private static List<String> declared(List<String> names) {
         return names == null ? List.of() : names.stream().map(String::trim).filter(n -> !n.isEmpty()).distinct().toList();
+    }
+
+    /**
+     * The arguments after {@code analyse} itself, as typed: picocli gives a subcommand the whole
+     * command line (root options and the subcommand's name included), and the provenance records
+     * {@code inkgate-admin analyse} followed by these.
+     */
+    private List<String> ownArguments() {
+        List<String> all = spec.commandLine().getParseResult().originalArgs();
+        if (spec.root() == spec) {
+            return all; // run on its own, without the root: the arguments are its own already
+        }
+        // the root takes no option with a value, so the first "analyse" is the subcommand's name
+        int name = all.indexOf(spec.name());
+        return name < 0 ? all : all.subList(name + 1, all.size());
     }
 }

@@ -15,6 +15,7 @@ import java.nio.file.Path;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import org.inkgate.admin.testutil.AdminCommand;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
@@ -457,8 +458,10 @@ class AnalyseCommandTest {
     void analyse_reportStartsWithProvenance_whoseCommandLineReproducesTheRun(@TempDir Path dir) throws Exception {
         Path ratings = shroutFleissRatings(dir);
         Path outDir = dir.resolve("report");
-        assertEquals(0, run("--ratings", ratings.toString(), "--out", outDir.toString(), "--title", "Judges' ratings"),
-                err.toString());
+        // through the real command line, as typed: the recorded command names the subcommand once
+        AdminCommand.Run firstRun = AdminCommand.admin("analyse", "--ratings", ratings.toString(), "--out", outDir.toString(),
+                "--title", "Judges' ratings");
+        assertEquals(0, firstRun.code(), firstRun.all());
         ObjectMapper json = new ObjectMapper();
         JsonNode s = json.readTree(outDir.resolve("summary.json").toFile());
         // SHA-256 of the input as the system's sha256sum (GNU coreutils, FIPS 180-4) computes it
@@ -471,13 +474,16 @@ class AnalyseCommandTest {
         // POSIX shell quoting of a single quote: 'Judges'\'' ratings'
         assertTrue(s.get("provenance.command_line").asText().contains("--title 'Judges'\\'' ratings'"),
                 s.get("provenance.command_line").asText());
+        assertTrue(s.get("provenance.command_line").asText().startsWith("inkgate-admin analyse --ratings "),
+                s.get("provenance.command_line").asText());
         String html = Files.readString(outDir.resolve("report.html"));
         assertTrue(html.indexOf("id=\"provenance\"") < html.indexOf("id=\"descriptives\""), "provenance comes first");
         // the recorded arguments, run again, give the same figures; only the date and time differ
         List<String> args = new java.util.ArrayList<>();
         s.get("provenance.arguments").forEach(a -> args.add(a.asText()));
         Files.move(outDir.resolve("summary.json"), dir.resolve("first.json"));
-        assertEquals(0, run(args.toArray(String[]::new)), err.toString());
+        AdminCommand.Run rerun = AdminCommand.admin(AdminCommand.concat(new String[] {"analyse"}, args.toArray(String[]::new)));
+        assertEquals(0, rerun.code(), rerun.all());
         com.fasterxml.jackson.databind.node.ObjectNode first = (com.fasterxml.jackson.databind.node.ObjectNode)
                 json.readTree(dir.resolve("first.json").toFile());
         com.fasterxml.jackson.databind.node.ObjectNode again = (com.fasterxml.jackson.databind.node.ObjectNode)
