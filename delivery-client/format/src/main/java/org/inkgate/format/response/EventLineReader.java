@@ -10,7 +10,7 @@ import org.inkgate.format.json.Json;
 
 /**
  * Reads one event line with Jackson's streaming parser (the same parser, features and limits as
- * {@link Json#mapper()}) instead of binding it to {@link EventChain.Line} by reflection: binding
+ * {@link Json#mapper()}, but repeated names found here rather than by the parser) instead of binding it to {@link EventChain.Line} by reflection: binding
  * every line of a log was about half of opening a package (docs/benchmarks.md, issue 16).
  *
  * <p>It reads only the shape the writer produces: the seven fields in any order, {@code task}
@@ -29,6 +29,9 @@ final class EventLineReader {
     /** The line, or null if the binding must decide (anything outside the writer's shape, or an error). */
     static EventChain.Line read(byte[] bytes, int offset, int length) {
         try (JsonParser p = Json.mapper().createParser(bytes, offset, length)) {
+            // this reader finds repeated names itself (and leaves such a line to the binding, which refuses it);
+            // the parser's own detection keeps a hash set per object, a tenth of a collect's reading time
+            p.disable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
             EventChain.Line line = readObject(p);
             // trailing content after the object: the binding refuses it
             return line != null && p.nextToken() == null ? line : null;
@@ -55,7 +58,7 @@ final class EventLineReader {
             JsonToken value = p.nextToken();
             int bit = bit(name);
             if (bit == 0 || (seen & bit) != 0) {
-                return null; // unknown or repeated (the parser refuses repeats itself; this does not rely on it)
+                return null; // unknown or repeated
             }
             seen |= bit;
             switch (name) {

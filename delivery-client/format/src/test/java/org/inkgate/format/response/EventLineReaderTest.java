@@ -43,7 +43,7 @@ class EventLineReaderTest {
     void writtenEvents_takeTheStreamingPath_andReadAsTheBindingReadsThem() {
         Random random = new Random(16);
         int streamed = 0;
-        for (int i = 0; i < 20_000; i++) {
+        for (int i = 0; i < 5_000; i++) {
             Map<String, Object> data = new LinkedHashMap<>();
             int fields = random.nextInt(6);
             for (int f = 0; f < fields; f++) {
@@ -67,13 +67,13 @@ class EventLineReaderTest {
                 streamed++;
             }
         }
-        assertTrue(streamed > 10_000, "lines the binding accepts, all streamed: " + streamed);
+        assertTrue(streamed > 2_500, "lines the binding accepts, all streamed: " + streamed);
     }
 
     @Test
     void handWrittenData_ofEveryKind_readsAsTheBindingReadsIt() {
         Random random = new Random(1603);
-        for (int i = 0; i < 20_000; i++) {
+        for (int i = 0; i < 5_000; i++) {
             StringBuilder data = new StringBuilder("{");
             int fields = random.nextInt(5);
             for (int f = 0; f < fields; f++) {
