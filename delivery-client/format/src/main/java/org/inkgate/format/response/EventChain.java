@@ -89,11 +89,9 @@ public final class EventChain {
                 end++;
             }
             number++;
-            Line parsed;
-            try {
-                parsed = Json.bind(file, entry, encoded, start, end - start, Line.class);
-            } catch (MalformedJson e) {
-                throw new MalformedJson(file, entry, number, e.column(), "line " + number + " is not a valid event", e);
+            Line parsed = EventLineReader.read(encoded, start, end - start);
+            if (parsed == null) {
+                parsed = bind(file, entry, encoded, start, end - start, number);
             }
             if (!prev.equals(parsed.prev())) {
                 throw new BrokenHashChain(file, entry, number);
@@ -107,6 +105,15 @@ public final class EventChain {
             start = end + 1;
         }
         return new Decoded(events, prev);
+    }
+
+    /** One line bound by the mapper: the reference reading, and the one that locates and words refusals. */
+    static Line bind(String file, String entry, byte[] encoded, int start, int length, int number) throws MalformedJson {
+        try {
+            return Json.bind(file, entry, encoded, start, length, Line.class);
+        } catch (MalformedJson e) {
+            throw new MalformedJson(file, entry, number, e.column(), "line " + number + " is not a valid event", e);
+        }
     }
 
     private static List<byte[]> lines(byte[] encoded) {

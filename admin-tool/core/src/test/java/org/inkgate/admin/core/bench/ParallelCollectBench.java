@@ -1,5 +1,6 @@
 package org.inkgate.admin.core.bench;
 
+import java.lang.management.ManagementFactory;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -119,8 +120,10 @@ public final class ParallelCollectBench {
         long start = System.nanoTime();
         List<Process> running = new ArrayList<>();
         for (List<String> a : perProcess) {
-            List<String> command = new ArrayList<>(List.of(java, "-cp", System.getProperty("java.class.path"),
-                    OneCollect.class.getName()));
+            // the bench's own JVM flags (e.g. the launcher's, docs/benchmarks.md) apply to every collect process too
+            List<String> command = new ArrayList<>(List.of(java));
+            command.addAll(ManagementFactory.getRuntimeMXBean().getInputArguments());
+            command.addAll(List.of("-cp", System.getProperty("java.class.path"), OneCollect.class.getName()));
             command.addAll(a);
             running.add(new ProcessBuilder(command).redirectErrorStream(true).start());
         }

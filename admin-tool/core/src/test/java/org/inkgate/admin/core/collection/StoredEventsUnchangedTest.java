@@ -23,7 +23,9 @@ import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.response.ResponsePackageWriter;
 import org.inkgate.format.testutil.TestKeys;
-import org.junit.jupiter.api.Test;
+import org.inkgate.admin.core.testutil.StoreFixture;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
@@ -45,8 +47,13 @@ class StoredEventsUnchangedTest {
     @TempDir
     Path dir;
 
-    @Test
-    void storedEventColumnsAndDigestText_areTheSameAsBefore() throws Exception {
+    /**
+     * On both kinds of store: a PostgreSQL store receives the events by COPY, not by the INSERT a
+     * SQLite store gets, and must hold the same values; the fixture is the SQLite store's of 62d187f.
+     */
+    @ParameterizedTest
+    @MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
+    void storedEventColumnsAndDigestText_areTheSameAsBefore(StoreFixture.Kind kind) throws Exception {
         Sitting sitting = Sitting.make(dir, 2);
         String candidate = sitting.roster().getFirst().candidateNumber();
         SimulatedSitting client = new SimulatedSitting(sitting.manifest(), sitting.manifestSha256(),
@@ -59,16 +66,28 @@ class StoredEventsUnchangedTest {
         new ResponsePackageWriter(TestKeys.INSTALLATION_SIGNING, TestKeys.ownerEncryptionPublic()).write(d, events, file);
 
         StringBuilder actual = new StringBuilder();
-        try (ResultsStore store = StoreFixture.of(dir.resolve("results.db")).results()) {
+        List<org.inkgate.admin.core.store.Rows.Event> stored = new ArrayList<>();
+        try (ResultsStore store = StoreFixture.create(kind, dir).results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             List<Outcome> outcomes = new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                     Map.of(sitting.manifestSha256(), sitting.manifest()), 2).collect(List.of(file), o -> { });
             assertEquals(Outcome.Imported.class, outcomes.getFirst().getClass(), outcomes.toString());
-            store.forEachEvent(d.examId(), e -> actual.append("stored ").append(e.seq()).append(' ').append(e.at())
-                    .append(' ').append(e.dataJson()).append('\n'));
+            store.forEachEvent(d.examId(), e -> {
+                actual.append("stored ").append(e.seq()).append(' ').append(e.at()).append(' ').append(e.dataJson())
+                        .append('\n');
+                stored.add(e);
+            });
         }
         OpenedResponse opened = new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION, TestKeys.installations())
                 .open(file.getFileName().toString(), Files.readAllBytes(file));
+        // the columns the fixture does not show: as the package has them
+        assertEquals(opened.events().size(), stored.size());
+        for (int i = 0; i < stored.size(); i++) {
+            ProcessEvent e = opened.events().get(i);
+            org.inkgate.admin.core.store.Rows.Event row = stored.get(i);
+            assertEquals(List.of(e.seq(), e.mono(), e.type(), String.valueOf(e.task())),
+                    List.of(row.seq(), row.mono(), row.type(), String.valueOf(row.taskId())), "event " + e.seq());
+        }
         for (ProcessEvent e : opened.events()) {
             // the content digest's text for an event, as ContentDigestTest defines it
             actual.append("digest ").append(e.seq() + "|" + e.at() + "|" + e.mono() + "|" + e.type() + "|" + e.task()

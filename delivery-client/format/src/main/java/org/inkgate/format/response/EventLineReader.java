@@ -1,0 +1,162 @@
+package org.inkgate.format.response;
+
+import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonToken;
+import java.io.IOException;
+import java.time.Instant;
+import java.util.Map;
+import java.util.TreeMap;
+import org.inkgate.format.json.Json;
+
+/**
+ * Reads one event line with Jackson's streaming parser (the same parser, features and limits as
+ * {@link Json#mapper()}, but repeated names found here rather than by the parser) instead of binding it to {@link EventChain.Line} by reflection: binding
+ * every line of a log was about half of opening a package (docs/benchmarks.md, issue 16).
+ *
+ * <p>It reads only the shape the writer produces: the seven fields in any order, {@code task}
+ * missing or a string, whole numbers for {@code seq} and {@code mono}, the writer's own form of a
+ * time, and data values that are text, whole numbers or booleans. For anything else (a missing or
+ * unknown field, a null, a decimal, a list, a nested object, an unusual time, a syntax error) it
+ * answers null and the caller binds the line as before, so exactly the same lines are accepted
+ * and refused, with the same messages; {@code EventLineReaderTest} checks the values against the
+ * binding's.
+ */
+final class EventLineReader {
+
+    private EventLineReader() {
+    }
+
+    /** The line, or null if the binding must decide (anything outside the writer's shape, or an error). */
+    static EventChain.Line read(byte[] bytes, int offset, int length) {
+        try (JsonParser p = Json.mapper().createParser(bytes, offset, length)) {
+            // this reader finds repeated names itself (and leaves such a line to the binding, which refuses it);
+            // the parser's own detection keeps a hash set per object, a tenth of a collect's reading time
+            p.disable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+            EventChain.Line line = readObject(p);
+            // trailing content after the object: the binding refuses it
+            return line != null && p.nextToken() == null ? line : null;
+        } catch (IOException | RuntimeException e) {
+            return null; // the binding reports it, located as before
+        }
+    }
+
+    private static EventChain.Line readObject(JsonParser p) throws IOException {
+        if (p.nextToken() != JsonToken.START_OBJECT) {
+            return null;
+        }
+        long seq = 0;
+        long mono = 0;
+        Instant at = null;
+        String type = null;
+        String task = null;
+        Map<String, Object> data = null;
+        String prev = null;
+        int seen = 0;
+        JsonToken token;
+        while ((token = p.nextToken()) == JsonToken.FIELD_NAME) {
+            String name = p.currentName();
+            JsonToken value = p.nextToken();
+            int bit = bit(name);
+            if (bit == 0 || (seen & bit) != 0) {
+                return null; // unknown or repeated
+            }
+            seen |= bit;
+            switch (name) {
+                case "seq" -> {
+                    if (!isLong(p, value)) {
+                        return null;
+                    }
+                    seq = p.getLongValue();
+                }
+                case "at" -> {
+                    at = value == JsonToken.VALUE_STRING ? EventTime.canonical(p.getText()) : null;
+                    if (at == null) {
+                        return null;
+                    }
+                }
+                case "mono" -> {
+                    if (!isLong(p, value)) {
+                        return null;
+                    }
+                    mono = p.getLongValue();
+                }
+                case "type" -> {
+                    if (value != JsonToken.VALUE_STRING) {
+                        return null;
+                    }
+                    type = p.getText();
+                }
+                case "task" -> {
+                    if (value != JsonToken.VALUE_STRING) {
+                        return null;
+                    }
+                    task = p.getText();
+                }
+                case "data" -> {
+                    data = readData(p, value);
+                    if (data == null) {
+                        return null;
+                    }
+                }
+                case "prev" -> {
+                    if (value != JsonToken.VALUE_STRING) {
+                        return null;
+                    }
+                    prev = p.getText();
+                }
+                default -> throw new AssertionError(name);
+            }
+        }
+        // every field but task present (the writer leaves out only a null task)
+        return token == JsonToken.END_OBJECT && (seen & ALL_BUT_TASK) == ALL_BUT_TASK ? new EventChain.Line(seq, at, mono, type, task, data, prev) : null;
+    }
+
+    private static final int ALL_BUT_TASK = 0b0111111; // seq, at, mono, type, data, prev
+
+    /** The field's bit in {@code seen}; 0 for a field the line does not have. */
+    private static int bit(String name) {
+        return switch (name) {
+            case "seq" -> 1;
+            case "at" -> 2;
+            case "mono" -> 4;
+            case "type" -> 8;
+            case "data" -> 16;
+            case "prev" -> 32;
+            case "task" -> 64;
+            default -> 0;
+        };
+    }
+
+    private static boolean isLong(JsonParser p, JsonToken value) throws IOException {
+        if (value != JsonToken.VALUE_NUMBER_INT) {
+            return false;
+        }
+        JsonParser.NumberType kind = p.getNumberType();
+        return kind == JsonParser.NumberType.INT || kind == JsonParser.NumberType.LONG;
+    }
+
+    /** A flat object of text, whole numbers and booleans, as the binding's map would hold it; else null. */
+    private static Map<String, Object> readData(JsonParser p, JsonToken value) throws IOException {
+        if (value != JsonToken.START_OBJECT) {
+            return null;
+        }
+        // sorted already: ProcessEvent keeps its data sorted and copies from a sorted map cheaply
+        Map<String, Object> data = new TreeMap<>();
+        JsonToken token;
+        while ((token = p.nextToken()) == JsonToken.FIELD_NAME) {
+            String key = p.currentName();
+            Object entry = switch (p.nextToken()) {
+                case VALUE_STRING -> p.getText();
+                // Integer, Long or BigInteger by size, as the binding's untyped values
+                case VALUE_NUMBER_INT -> p.getNumberValue();
+                case VALUE_TRUE -> Boolean.TRUE;
+                case VALUE_FALSE -> Boolean.FALSE;
+                default -> null;
+            };
+            if (entry == null || data.put(key, entry) != null) {
+                return null; // another kind of value, or a repeated key: the binding decides
+            }
+        }
+        return token == JsonToken.END_OBJECT ? data : null;
+    }
+}
