@@ -3,8 +3,6 @@ package org.inkgate.admin.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -13,10 +11,10 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import org.inkgate.admin.testutil.AdminCommand;
 import org.inkgate.admin.testutil.DemoSource;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import picocli.CommandLine;
 
 /**
  * {@code forms --roster} through the real command: the achieved order and condition counts are
@@ -31,14 +29,9 @@ class FormsCommandTest {
     Path dir;
 
     private static String forms(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        assertEquals(0, code, out + "\n" + err);
-        return out.toString();
+        AdminCommand.Run r = AdminCommand.admin(args);
+        assertEquals(0, r.code(), r.out() + "\n" + r.err());
+        return r.out();
     }
 
     /** The case: 12 demo candidates, 6 per level: 6 write each task first (it was 8 and 4). */

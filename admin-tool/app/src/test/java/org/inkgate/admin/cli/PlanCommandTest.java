@@ -3,10 +3,9 @@ package org.inkgate.admin.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
+import org.inkgate.admin.testutil.AdminCommand;
+import org.inkgate.admin.testutil.AdminCommand.Run;
 import org.junit.jupiter.api.Test;
-import picocli.CommandLine;
 
 /**
  * {@code inkgate-admin plan} through the launcher's own command line. Figures come from base R 4.2.2
@@ -14,17 +13,8 @@ import picocli.CommandLine;
  */
 class PlanCommandTest {
 
-    record Run(int code, String out, String err) {
-    }
-
     private static Run run(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        return new Run(code, out.toString(), err.toString());
+        return AdminCommand.admin(args);
     }
 
     @Test

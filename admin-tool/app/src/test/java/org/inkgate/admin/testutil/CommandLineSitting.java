@@ -2,14 +2,11 @@ package org.inkgate.admin.testutil;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-import java.io.PrintWriter;
-import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.KeyPair;
 import java.util.Base64;
 import java.util.Set;
-import org.inkgate.admin.cli.InkgateAdmin;
 import org.inkgate.admin.core.keys.OwnerKeyStore;
 import org.inkgate.admin.core.simulation.SimulatedSitting;
 import org.inkgate.format.bundle.BundleReader;
@@ -18,7 +15,6 @@ import org.inkgate.format.bundle.RosterEntry;
 import org.inkgate.format.crypto.Ed25519;
 import org.inkgate.format.crypto.X25519;
 import org.inkgate.format.trust.TrustPolicy;
-import picocli.CommandLine;
 
 /**
  * A sitting prepared the way a test owner does it on the command line (keys, forms, bundle through
@@ -40,14 +36,9 @@ public final class CommandLineSitting {
 
     /** Runs one command; fails the test unless it exits with 0. */
     public static String admin(String... args) {
-        StringWriter out = new StringWriter();
-        StringWriter err = new StringWriter();
-        CommandLine cl = InkgateAdmin.commandLine();
-        cl.setOut(new PrintWriter(out, true));
-        cl.setErr(new PrintWriter(err, true));
-        int code = cl.execute(args);
-        assertEquals(0, code, String.join(" ", args) + "\n" + out + "\n" + err);
-        return out.toString();
+        AdminCommand.Run r = AdminCommand.admin(args);
+        assertEquals(0, r.code(), String.join(" ", args) + "\n" + r.out() + "\n" + r.err());
+        return r.out();
     }
 
     /** keys init, forms --out and bundle, each through the command line; returns the bundle. */
