@@ -69,7 +69,7 @@ class StoreCopyCommandTest {
         StoreContent before = Stores.content(StoreLocation.file(original));
         assertEquals(before, Stores.content(StoreLocation.parse(server)), "the server copy has the same digests");
         assertEquals(before, Stores.content(StoreLocation.file(back)), "the copy of the copy has the same digests");
-        for (String table : List.of("sittings", "process_events", "raters", "rating_assignments", "ratings",
+        for (String table : List.of("sittings", "event_logs", "raters", "rating_assignments", "ratings",
                 "rating_submissions", "rating_flags", "final_scores", "candidate_personal", "rubric_criteria")) {
             assertTrue(before.tables().stream().anyMatch(t -> t.name().equals(table) && t.rows() > 0),
                     table + " has rows, so the comparison covers it: " + before);

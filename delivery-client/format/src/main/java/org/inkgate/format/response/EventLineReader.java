@@ -4,6 +4,7 @@ import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
 import java.io.IOException;
 import java.time.Instant;
+import java.util.Arrays;
 import java.util.Map;
 import java.util.TreeMap;
 import org.inkgate.format.json.Json;
@@ -140,8 +141,9 @@ final class EventLineReader {
         if (value != JsonToken.START_OBJECT) {
             return null;
         }
-        // sorted already: ProcessEvent keeps its data sorted and copies from a sorted map cheaply
-        Map<String, Object> data = new TreeMap<>();
+        String[] keys = new String[8];
+        Object[] values = new Object[8];
+        int size = 0;
         JsonToken token;
         while ((token = p.nextToken()) == JsonToken.FIELD_NAME) {
             String key = p.currentName();
@@ -153,10 +155,30 @@ final class EventLineReader {
                 case VALUE_FALSE -> Boolean.FALSE;
                 default -> null;
             };
-            if (entry == null || data.put(key, entry) != null) {
-                return null; // another kind of value, or a repeated key: the binding decides
+            if (entry == null) {
+                return null; // another kind of value: the binding decides
+            }
+            if (size == keys.length) {
+                keys = Arrays.copyOf(keys, size * 2);
+                values = Arrays.copyOf(values, size * 2);
+            }
+            keys[size] = key;
+            values[size++] = entry;
+        }
+        if (token != JsonToken.END_OBJECT) {
+            return null;
+        }
+        EventData sorted = EventData.ofSorted(keys, values, size);
+        if (sorted != null) {
+            return sorted;
+        }
+        // keys out of the writer's order: a sorted map, as before
+        Map<String, Object> data = new TreeMap<>();
+        for (int i = 0; i < size; i++) {
+            if (data.put(keys[i], values[i]) != null) {
+                return null; // a repeated key: the binding decides
             }
         }
-        return token == JsonToken.END_OBJECT ? data : null;
+        return data;
     }
 }

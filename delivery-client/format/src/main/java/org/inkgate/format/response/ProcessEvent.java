@@ -23,7 +23,9 @@ public record ProcessEvent(long seq, Instant at, long mono, String type, String 
     public ProcessEvent {
         Objects.requireNonNull(at, "at");
         Objects.requireNonNull(type, "type");
-        data = java.util.Collections.unmodifiableMap(new TreeMap<>(Objects.requireNonNullElse(data, Map.of())));
+        // data the line reader made is sorted and read-only already (EventData); anything else is copied
+        data = data instanceof EventData ? data
+                : java.util.Collections.unmodifiableMap(new TreeMap<>(Objects.requireNonNullElse(data, Map.of())));
     }
 
     /** An event of one of the vocabulary's types. */

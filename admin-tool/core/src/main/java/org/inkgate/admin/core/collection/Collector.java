@@ -28,6 +28,7 @@ import org.inkgate.format.response.ResponseDocument;
 import org.inkgate.format.response.ResponsePackageReader;
 import org.inkgate.format.response.TaskResponse;
 import org.inkgate.format.trust.TrustPolicy;
+import org.inkgate.admin.core.store.EventLog;
 import org.inkgate.admin.core.store.EventText;
 import org.inkgate.admin.core.store.ResultsStore;
 import org.inkgate.admin.core.store.SittingRecord;
@@ -175,31 +176,29 @@ public final class Collector {
     }
 
     /**
-     * The package's rows to store and its content digest, from one pass over the events: each time
+     * The package's event log to store and its content digest, from one pass over the events: each time
      * and each data map is written out once and serves both (before, the digest and the rows each
      * rendered them, the data through Jackson every time). The digest's text is unchanged:
      * seq|at|mono|type|task|data with the data map's {@code toString} ({@code ContentDigestTest}).
      */
     static SittingRecord record(OpenedResponse opened, String sourceFile) {
         java.util.List<org.inkgate.format.response.ProcessEvent> events = opened.events();
-        String[] at = new String[events.size()];
-        String[] data = new String[events.size()];
+        EventLog log = new EventLog(events.size());
         java.security.MessageDigest digest = Sha256.newDigest();
         byte[] prefix = new byte[4];
         update(digest, prefix, Json.writeLine(opened.response()));
         StringBuilder line = new StringBuilder(256);
         StringBuilder json = new StringBuilder(128);
-        for (int i = 0; i < at.length; i++) {
-            org.inkgate.format.response.ProcessEvent e = events.get(i);
-            at[i] = e.at().toString();
+        for (org.inkgate.format.response.ProcessEvent e : events) {
+            String at = EventText.time(e.at());
             // the same characters as seq|at|mono|type|task|data by string concatenation: stored digests stay valid
             line.setLength(0);
-            line.append(e.seq()).append('|').append(at[i]).append('|').append(e.mono()).append('|').append(e.type())
+            line.append(e.seq()).append('|').append(at).append('|').append(e.mono()).append('|').append(e.type())
                     .append('|').append(e.task()).append('|');
-            data[i] = EventText.json(e.data(), json, line);
+            log.add(e.seq(), at, e.mono(), e.type(), e.task(), EventText.json(e.data(), json, line));
             update(digest, prefix, line.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
         }
-        return new SittingRecord(opened, org.inkgate.format.crypto.Hex.of(digest.digest()), sourceFile, at, data);
+        return new SittingRecord(opened, org.inkgate.format.crypto.Hex.of(digest.digest()), sourceFile, log.text());
     }
 
     private static void update(java.security.MessageDigest digest, byte[] prefix, byte[] bytes) {

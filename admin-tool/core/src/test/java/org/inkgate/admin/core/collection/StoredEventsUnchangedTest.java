@@ -48,8 +48,9 @@ class StoredEventsUnchangedTest {
     Path dir;
 
     /**
-     * On both kinds of store: a PostgreSQL store receives the events by COPY, not by the INSERT a
-     * SQLite store gets, and must hold the same values; the fixture is the SQLite store's of 62d187f.
+     * On both kinds of store, read both ways: by the store's own reading of its event logs and by SQL
+     * on the view {@code process_events} (schema 10); the fixture is the SQLite store's of 62d187f,
+     * when each event was a row of a table.
      */
     @ParameterizedTest
     @MethodSource("org.inkgate.admin.core.testutil.StoreFixture#kinds")
@@ -67,7 +68,8 @@ class StoredEventsUnchangedTest {
 
         StringBuilder actual = new StringBuilder();
         List<org.inkgate.admin.core.store.Rows.Event> stored = new ArrayList<>();
-        try (ResultsStore store = StoreFixture.create(kind, dir).results()) {
+        StoreFixture fixture = StoreFixture.create(kind, dir);
+        try (ResultsStore store = fixture.results()) {
             store.registerBundle(sitting.manifest(), sitting.manifestSha256(), TestKeys.ownerFingerprint());
             List<Outcome> outcomes = new Collector(store, TestKeys.OWNER_ENCRYPTION, TestKeys.installations(),
                     Map.of(sitting.manifestSha256(), sitting.manifest()), 2).collect(List.of(file), o -> { });
@@ -78,6 +80,18 @@ class StoredEventsUnchangedTest {
                 stored.add(e);
             });
         }
+        // SQL against the view process_events sees the same rows as the store's own reading of the logs
+        List<List<Object>> viewed = new ArrayList<>();
+        try (java.sql.Connection c = fixture.connect(); java.sql.Statement s = c.createStatement();
+                java.sql.ResultSet rs = s.executeQuery("SELECT seq, at, mono, type, task_id, data_json FROM process_events"
+                        + " ORDER BY seq")) {
+            while (rs.next()) {
+                viewed.add(Arrays.asList(rs.getLong(1), rs.getString(2), rs.getLong(3), rs.getString(4), rs.getString(5),
+                        rs.getString(6)));
+            }
+        }
+        assertEquals(stored.stream().map(e -> Arrays.<Object>asList(e.seq(), e.at(), e.mono(), e.type(), e.taskId(),
+                e.dataJson())).toList(), viewed);
         OpenedResponse opened = new ResponsePackageReader(TestKeys.OWNER_ENCRYPTION, TestKeys.installations())
                 .open(file.getFileName().toString(), Files.readAllBytes(file));
         // the columns the fixture does not show: as the package has them

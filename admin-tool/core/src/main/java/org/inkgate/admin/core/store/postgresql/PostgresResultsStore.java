@@ -5,9 +5,7 @@ import java.sql.DriverManager;
 import java.sql.SQLException;
 import java.util.Map;
 import java.util.Properties;
-import org.inkgate.admin.core.store.SittingRecord;
 import org.inkgate.admin.core.store.StoreException;
-import org.postgresql.PGConnection;
 import org.inkgate.admin.core.store.StoreLocation;
 import org.inkgate.admin.core.store.sql.Schema;
 import org.inkgate.admin.core.store.sql.SqlResultsStore;
@@ -23,21 +21,6 @@ public final class PostgresResultsStore extends SqlResultsStore {
 
     private PostgresResultsStore(Connection c, StoreLocation.Server server, Credentials login) {
         super(c, PostgresDialect.INSTANCE, failure -> PostgresErrors.plain(server, login, failure));
-    }
-
-    /**
-     * The events by COPY (one stream per package, inside the import's transaction, so a failed or
-     * killed import still leaves nothing of the package) instead of the shared INSERT.
-     */
-    @Override
-    protected void insertEvents(long sitting, SittingRecord record) throws SQLException {
-        byte[] rows = EventCopy.rows(sitting, record);
-        try {
-            connection().unwrap(PGConnection.class).getCopyAPI()
-                    .copyIn("COPY process_events(" + EVENT_COLUMNS + ") FROM STDIN", new java.io.ByteArrayInputStream(rows));
-        } catch (java.io.IOException e) {
-            throw new SQLException("could not send the events of a package to the server: " + e.getMessage(), e);
-        }
     }
 
     /** Opens the store, creating its tables in the (empty) database the first time, and migrates its schema. */

@@ -453,7 +453,34 @@ public final class Schema {
                       reason TEXT NOT NULL,
                       admitted_at TEXT NOT NULL,
                       PRIMARY KEY (exam_id, rater_id)
-                    )""")));
+                    )""")),
+            new Migration(10, "process events kept as one log per sitting (event_logs); process_events becomes a view"
+                    + " over the logs with the same columns and values", List.of(
+                    // the layout of each event's array is org.inkgate.admin.core.store.EventLog's
+                    """
+                    CREATE TABLE event_logs (
+                      sitting_id INTEGER PRIMARY KEY REFERENCES sittings(sitting_id),
+                      event_count INTEGER NOT NULL CHECK (event_count >= 0),
+                      events TEXT NOT NULL
+                    )""",
+                    """
+                    INSERT INTO event_logs(sitting_id, event_count, events)
+                      SELECT sitting_id, COUNT(*),
+                        json_group_array(json_array(seq, at, mono, type, task_id, data_json) ORDER BY seq)
+                      FROM process_events GROUP BY sitting_id""",
+                    "DROP VIEW tool_events",
+                    "DROP TABLE process_events",
+                    """
+                    CREATE VIEW process_events AS
+                      SELECT l.sitting_id AS sitting_id, CAST(e.value ->> 0 AS INTEGER) AS seq, e.value ->> 1 AS at,
+                        CAST(e.value ->> 2 AS INTEGER) AS mono, e.value ->> 3 AS type, e.value ->> 4 AS task_id,
+                        e.value ->> 5 AS data_json
+                      FROM event_logs l, json_each(l.events) AS e""",
+                    """
+                    CREATE VIEW tool_events AS
+                      SELECT * FROM process_events
+                      WHERE type LIKE 'tool.%' OR type LIKE 'suggestion.%'""")));
+
 
     private static void apply(Connection c, Statement s, Dialect dialect, Migration m) throws SQLException {
         try {

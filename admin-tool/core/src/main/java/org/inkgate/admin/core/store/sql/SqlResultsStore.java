@@ -298,53 +298,13 @@ public abstract class SqlResultsStore implements ResultsStore {
         });
     }
 
-    /** Rows per INSERT statement: 7 parameters each, far below SQLite's default limit of 32,766 parameters. */
-    private static final int EVENT_ROWS_PER_STATEMENT = 200;
-
-    /** The columns of an event row, in the order both ways of storing them give them. */
-    protected static final String EVENT_COLUMNS = "sitting_id, seq, at, mono, type, task_id, data_json";
-
     /**
-     * Stores the package's events, inside the import's transaction. Many rows per statement: one
-     * native step per 200 events instead of one per event. A dialect with a faster bulk path
-     * (PostgreSQL's COPY) overrides it; the stored values must be the same.
+     * Stores the package's events, inside the import's transaction: one value, the log the reading
+     * thread wrote ({@link org.inkgate.admin.core.store.EventLog}), where there used to be a row per event.
      */
-    protected void insertEvents(long sitting, SittingRecord record) throws SQLException {
-        List<ProcessEvent> events = record.opened().events();
-        String row = "(?,?,?,?,?,?,?)";
-        String insert = "INSERT INTO process_events(" + EVENT_COLUMNS + ") VALUES ";
-        try (PreparedStatement ps = c.prepareStatement(insert
-                + String.join(",", java.util.Collections.nCopies(EVENT_ROWS_PER_STATEMENT, row)))) {
-            int i = 0;
-            for (; i + EVENT_ROWS_PER_STATEMENT <= events.size(); i += EVENT_ROWS_PER_STATEMENT) {
-                bindEvents(ps, sitting, record, i, EVENT_ROWS_PER_STATEMENT);
-                ps.executeUpdate();
-            }
-            if (i < events.size()) {
-                int rest = events.size() - i;
-                try (PreparedStatement last = c.prepareStatement(insert
-                        + String.join(",", java.util.Collections.nCopies(rest, row)))) {
-                    bindEvents(last, sitting, record, i, rest);
-                    last.executeUpdate();
-                }
-            }
-        }
-    }
-
-    private static void bindEvents(PreparedStatement ps, long sitting, SittingRecord record, int from, int count)
-            throws SQLException {
-        List<ProcessEvent> events = record.opened().events();
-        int p = 1;
-        for (int i = from; i < from + count; i++) {
-            ProcessEvent e = events.get(i);
-            ps.setLong(p++, sitting);
-            ps.setLong(p++, e.seq());
-            ps.setString(p++, record.eventAt()[i]);
-            ps.setLong(p++, e.mono());
-            ps.setString(p++, e.type());
-            ps.setString(p++, e.task());
-            ps.setString(p++, record.eventData()[i]);
-        }
+    private void insertEvents(long sitting, SittingRecord record) throws SQLException {
+        update("INSERT INTO event_logs(sitting_id, event_count, events) VALUES (?,?,?)", sitting,
+                record.opened().events().size(), record.eventLog());
     }
 
     private static String tools(java.util.Set<Tool> tools) {
@@ -462,13 +422,19 @@ public abstract class SqlResultsStore implements ResultsStore {
 
     @Override
     public void forEachEvent(String examId, Consumer<Rows.Event> sink) throws StoreException {
+        // the logs themselves rather than the view: each is in seq order already, so nothing is sorted
         read("reading events", () -> {
-            each("SELECT s.exam_id, s.candidate_number, s.package_id, s.package_id, e.seq, e.at, e.mono, e.type, e.task_id,"
-                    + " e.data_json FROM process_events e JOIN sittings s ON s.sitting_id = e.sitting_id WHERE s.exam_id=?"
-                    + " ORDER BY s.candidate_number, s.sitting_id, e.seq",
-                    rs -> sink.accept(new Rows.Event(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
-                            rs.getLong(5), rs.getString(6), rs.getLong(7), rs.getString(8), rs.getString(9),
-                            rs.getString(10))), examId);
+            each("SELECT s.exam_id, s.candidate_number, s.package_id, l.events FROM event_logs l"
+                    + " JOIN sittings s ON s.sitting_id = l.sitting_id WHERE s.exam_id=?"
+                    + " ORDER BY s.candidate_number, s.sitting_id",
+                    rs -> {
+                        String exam = rs.getString(1);
+                        String candidate = rs.getString(2);
+                        String packageId = rs.getString(3);
+                        org.inkgate.admin.core.store.EventLog.forEach(rs.getString(4), e -> sink.accept(new Rows.Event(
+                                exam, candidate, packageId, packageId, e.seq(), e.at(), e.mono(), e.type(), e.task(),
+                                e.dataJson())));
+                    }, examId);
             return null;
         });
     }
@@ -513,7 +479,10 @@ public abstract class SqlResultsStore implements ResultsStore {
             for (String t : List.of("exams", "bundles", "tasks", "conditions", "forms", "form_slots", "policy_snapshots",
                     "candidates", "candidate_personal", "sittings", "responses", "tool_use", "process_events",
                     "questionnaire_answers", "rubric_criteria", "rubric_bands", "refusals")) {
-                out.put(t, ((Number) first("SELECT COUNT(*) FROM " + t, 1).orElseThrow()[0]).longValue());
+                // the events' count is kept beside each log: counting the view's rows would parse every log
+                String count = t.equals("process_events") ? "SELECT COALESCE(SUM(event_count), 0) FROM event_logs"
+                        : "SELECT COUNT(*) FROM " + t;
+                out.put(t, ((Number) first(count, 1).orElseThrow()[0]).longValue());
             }
             return out;
         });

@@ -68,6 +68,46 @@ class PostgresResultsStoreTest {
     }
 
     @Test
+    void migration10_storeAtVersion9WithEvents_keepsEveryValueInTheView() throws Exception {
+        StoreLocation.Server server = PostgresServer.freshStore("events9");
+        PostgresResultsStore.open(server, Map.of(), 9, true).close();
+        String awkward = "{\"text\":\"say \\\"hi\\\" \\\\ tab\\t \u00e9 \ud83d\ude00\"}";
+        List<List<Object>> rows = List.of(
+                java.util.Arrays.asList(2L, "2026-06-15T09:00:01Z", 1_000_000_000L, "text.insert", "t1", awkward),
+                java.util.Arrays.asList(1L, "2026-06-15T09:00:00.123456789Z", 0L, "sitting.start", null, "{}"),
+                java.util.Arrays.asList(3L, "2026-06-15T09:00:02Z", Long.MAX_VALUE, "tool.open", "t1", "{\"tool\":\"x\"}"));
+        try (Connection c = DriverManager.getConnection(jdbc(server)); Statement s = c.createStatement()) {
+            s.execute("INSERT INTO exams VALUES ('e1', 'Invented', 'en', 0)");
+            s.execute("INSERT INTO bundles VALUES ('b', 'e1', 'fp', 't')");
+            s.execute("INSERT INTO forms VALUES ('e1', 'F')");
+            s.execute("INSERT INTO sittings(sitting_id, package_sha256, package_id, content_sha256, exam_id,"
+                    + " bundle_manifest_sha256, candidate_number, form_id, installation_fingerprint, source_file,"
+                    + " imported_at) VALUES (1, 'p', 'P', 'c', 'e1', 'b', 'C1', 'F', 'i', 'f', 't')");
+            try (var p = c.prepareStatement("INSERT INTO process_events(sitting_id, seq, at, mono, type, task_id,"
+                    + " data_json) VALUES (1,?,?,?,?,?,?)")) {
+                for (List<Object> r : rows) {
+                    for (int i = 0; i < r.size(); i++) {
+                        p.setObject(i + 1, r.get(i));
+                    }
+                    p.execute();
+                }
+            }
+        }
+        PostgresResultsStore.open(server, Map.of(), 10, true).close();
+        List<List<Object>> viewed = new ArrayList<>();
+        try (Connection c = DriverManager.getConnection(jdbc(server)); Statement s = c.createStatement();
+                var rs = s.executeQuery("SELECT sitting_id, seq, at, mono, type, task_id, data_json FROM process_events"
+                        + " ORDER BY seq")) {
+            while (rs.next()) {
+                assertEquals(1, rs.getLong(1));
+                viewed.add(java.util.Arrays.asList(rs.getLong(2), rs.getString(3), rs.getLong(4), rs.getString(5),
+                        rs.getString(6), rs.getString(7)));
+            }
+        }
+        assertEquals(List.of(rows.get(1), rows.get(0), rows.get(2)), viewed);
+    }
+
+    @Test
     void openForReading_databaseWithoutTheStore_isRefusedAndNothingIsCreated() throws Exception {
         StoreLocation.Server server = PostgresServer.freshStore("empty");
         StoreException e = assertThrows(StoreException.class, () -> Stores.openResultsForReading(server));

@@ -10,6 +10,8 @@ import java.sql.Connection;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
+import java.util.Arrays;
+import java.util.List;
 import java.util.Set;
 import java.util.TreeSet;
 import org.inkgate.admin.core.store.Rows;
@@ -242,6 +244,52 @@ class MigrationsTest {
     }
 
     @Test
+    void migration10_storeAtVersion9WithEvents_keepsEveryValueInTheViewAndCountsThem() throws Exception {
+        Path file = dir.resolve("r.db");
+        migration6_storeAtVersion5WithAReferral_keepsItAndTakesControlScriptsOfExistingResponsesOnly();
+        String awkward = "{\"text\":\"say \\\"hi\\\" \\\\ tab\\t \u00e9 \ud83d\ude00\"}";
+        List<List<Object>> rows = List.of(
+                Arrays.asList(2L, "2026-06-15T09:00:01Z", 1_000_000_000L, "text.insert", "t1", awkward),
+                Arrays.asList(1L, "2026-06-15T09:00:00.123456789Z", 0L, "sitting.start", null, "{}"),
+                Arrays.asList(3L, "2026-06-15T09:00:02Z", Long.MAX_VALUE, "tool.open", "t1", "{\"tool\":\"glossary\"}"));
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 9)) {
+            try (java.sql.PreparedStatement p = store.connection().prepareStatement(
+                    "INSERT INTO process_events(sitting_id, seq, at, mono, type, task_id, data_json) VALUES (1,?,?,?,?,?,?)")) {
+                for (List<Object> r : rows) {
+                    for (int i = 0; i < r.size(); i++) {
+                        p.setObject(i + 1, r.get(i));
+                    }
+                    p.execute();
+                }
+            }
+        }
+        try (SqliteResultsStore store = SqliteResultsStore.open(file, 10)) {
+            Connection c = store.connection();
+            assertTrue(objects(c, "table").contains("event_logs"));
+            assertFalse(objects(c, "table").contains("process_events"));
+            assertEquals(Set.of("process_events", "tool_events", "response_conflicts"), objects(c, "view"));
+            List<List<Object>> viewed = new java.util.ArrayList<>();
+            try (Statement s = c.createStatement();
+                    ResultSet rs = s.executeQuery("SELECT sitting_id, seq, at, mono, type, task_id, data_json"
+                            + " FROM process_events")) {
+                while (rs.next()) {
+                    assertEquals(1, rs.getLong(1));
+                    viewed.add(Arrays.asList(rs.getLong(2), rs.getString(3), rs.getLong(4), rs.getString(5), rs.getString(6),
+                            rs.getString(7)));
+                }
+            }
+            assertEquals(List.of(rows.get(1), rows.get(0), rows.get(2)), viewed, "every value kept, in seq order");
+            assertEquals(3L, store.counts().get("process_events"));
+            try (Statement s = c.createStatement();
+                    ResultSet rs = s.executeQuery("SELECT type FROM tool_events")) {
+                assertTrue(rs.next());
+                assertEquals("tool.open", rs.getString(1));
+                assertFalse(rs.next());
+            }
+        }
+    }
+
+    @Test
     void open_storeFromANewerProgram_isRefusedAndLeftAlone() throws Exception {
         Path file = dir.resolve("r.db");
         try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
@@ -260,7 +308,7 @@ class MigrationsTest {
     void open_latest_isTheLastMigration() throws Exception {
         try (SqliteResultsStore store = SqliteResultsStore.open(dir.resolve("r.db"))) {
             assertEquals(Migrations.latest(), Migrations.version(store.connection()));
-            assertEquals(9, Migrations.latest(), "9: the qualification set");
+            assertEquals(10, Migrations.latest(), "10: event logs");
         }
     }
 }
