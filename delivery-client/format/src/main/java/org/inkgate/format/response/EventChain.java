@@ -83,13 +83,14 @@ public final class EventChain {
         String prev = GENESIS;
         int number = 0;
         int start = 0;
+        EventLineReader.Log lines = new EventLineReader.Log(encoded);
         while (start < encoded.length) {
             int end = start;
             while (encoded[end] != '\n') {
                 end++;
             }
             number++;
-            Line parsed = EventLineReader.read(encoded, start, end - start);
+            Line parsed = lines.read(start, end);
             if (parsed == null) {
                 parsed = bind(file, entry, encoded, start, end - start, number);
             }
@@ -104,6 +105,7 @@ public final class EventChain {
             prev = Hex.of(digest.digest());
             start = end + 1;
         }
+        lines.close();
         return new Decoded(events, prev);
     }
 

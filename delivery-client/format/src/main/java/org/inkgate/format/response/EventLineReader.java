@@ -41,10 +41,77 @@ final class EventLineReader {
         }
     }
 
+    /**
+     * The lines of one log read by one parser, one after the other, instead of a parser per line:
+     * making a parser (its buffers and its table of names) for each of 5,000 lines was about a
+     * quarter of reading a log (docs/benchmarks.md, issue 16). The caller finds each line's bounds
+     * itself; a line is taken from this parser only if its object starts exactly at the line's
+     * start and ends exactly at its end. At the first line that is anything else (space around the
+     * object, an object running over the line's end, anything this reader leaves to the binding)
+     * this parser is given up, and that line and every later one are read one by one as before, so
+     * exactly the same lines are accepted and refused, with the same messages.
+     */
+    static final class Log implements AutoCloseable {
+
+        private final byte[] bytes;
+        private JsonParser parser;
+
+        Log(byte[] bytes) {
+            this.bytes = bytes;
+            try {
+                parser = Json.mapper().createParser(bytes);
+                parser.disable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+            } catch (IOException e) {
+                parser = null; // every line on its own, as before
+            }
+        }
+
+        /** The line from {@code start} to {@code end} (its newline), or null if the binding must decide. */
+        EventChain.Line read(int start, int end) {
+            if (parser != null) {
+                try {
+                    if (parser.nextToken() == JsonToken.START_OBJECT
+                            && parser.currentTokenLocation().getByteOffset() == start) {
+                        EventChain.Line line = readFields(parser);
+                        if (line != null && parser.currentLocation().getByteOffset() == end) {
+                            return line;
+                        }
+                    }
+                } catch (IOException | RuntimeException e) {
+                    // as below: the line on its own decides
+                }
+                close();
+            }
+            return EventLineReader.read(bytes, start, end - start);
+        }
+
+        /** Whether the lines are still read by the one parser (tests: a writer's log never gives it up). */
+        boolean shared() {
+            return parser != null;
+        }
+
+        @Override
+        public void close() {
+            if (parser != null) {
+                try {
+                    parser.close();
+                } catch (IOException ignored) {
+                    // nothing was written; the parser only read from memory
+                }
+                parser = null;
+            }
+        }
+    }
+
     private static EventChain.Line readObject(JsonParser p) throws IOException {
         if (p.nextToken() != JsonToken.START_OBJECT) {
             return null;
         }
+        return readFields(p);
+    }
+
+    /** The fields of an event object whose opening brace was just read. */
+    private static EventChain.Line readFields(JsonParser p) throws IOException {
         long seq = 0;
         long mono = 0;
         Instant at = null;

@@ -128,6 +128,55 @@ class EventLineReaderTest {
         assertSameAsBinding(line.getBytes(StandardCharsets.UTF_8));
     }
 
+    /**
+     * One parser over a whole log against the reference of a parser per line (the reading before
+     * it, itself checked against the binding above): every line gives the same answer, wherever in
+     * the log an odd line stands, and a log as the writer writes it is read by the one parser to the end.
+     */
+    @Test
+    void aWholeLog_readByOneParser_givesEveryLineAsReadAlone() {
+        Random random = new Random(29);
+        List<String> written = new java.util.ArrayList<>();
+        for (int i = 0; i < 40; i++) {
+            Map<String, Object> data = new LinkedHashMap<>();
+            data.put("text", pick(random, TEXTS));
+            data.put("pos", random.nextInt(1000));
+            byte[] line = oneLine(new ProcessEvent(1, Instant.ofEpochSecond(1_700_000_000L + i, random.nextInt(1_000_000_000)),
+                    random.nextLong(), "text.insert", i % 3 == 0 ? null : "t1", data));
+            if (bindingAccepts(line)) {
+                written.add(new String(line, StandardCharsets.UTF_8));
+            }
+        }
+        String good = "{\"seq\":1,\"at\":\"2026-03-14T09:00:18Z\",\"mono\":0,\"type\":\"x\",\"data\":{\"n\":1},\"prev\":\"P\"}";
+        List<String> odd = List.of(" " + good, good + " ", good + "\r", good + " {}", good + "x", good.substring(0, good.length() - 1),
+                good.replace("{\"n\":1}", "{\"n\":1.5}"), good.replace("{\"n\":1}", "{\"b\":1,\"a\":2}"), "", "{}", "[]",
+                "{\"seq\":1,", "\"text\"", good + "\n" + good);
+        assertTrue(sameAsAlone(String.join("\n", written) + "\n"), "a written log is read by the one parser to its end");
+        for (String line : odd) {
+            for (int at : List.of(0, 1, written.size() / 2, written.size())) {
+                List<String> lines = new java.util.ArrayList<>(written);
+                lines.add(at, line);
+                sameAsAlone(String.join("\n", lines) + "\n");
+            }
+        }
+    }
+
+    /** Reads the log both ways, line by line, asserting the same answers; whether the one parser lasted to the end. */
+    private static boolean sameAsAlone(String log) {
+        byte[] bytes = log.getBytes(StandardCharsets.UTF_8);
+        try (EventLineReader.Log shared = new EventLineReader.Log(bytes)) {
+            int start = 0;
+            for (int end = 0; end < bytes.length; end++) {
+                if (bytes[end] == '\n') {
+                    String shown = new String(bytes, start, end - start, StandardCharsets.UTF_8);
+                    assertEquals(EventLineReader.read(bytes, start, end - start), shared.read(start, end), shown);
+                    start = end + 1;
+                }
+            }
+            return shared.shared();
+        }
+    }
+
     @Test
     void aLineInsideALargerBuffer_isReadFromItsOwnBytesOnly() {
         String line = "{\"seq\":1,\"at\":\"2026-03-14T09:00:18Z\",\"mono\":0,\"type\":\"x\",\"data\":{\"n\":12},\"prev\":\"P\"}";
