@@ -3,7 +3,6 @@ package org.inkgate.admin.core.store;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
 import java.io.IOException;
-import java.io.UncheckedIOException;
 
 /**
  * How the results store keeps one sitting's process events: one JSON array per sitting (table
@@ -21,7 +20,7 @@ import java.io.UncheckedIOException;
  */
 public final class EventLog {
 
-    /** The columns of an event, in the order of each event's array and of the view. */
+    /** The columns of an event, in the order of each event's array and of the view (Schema, version 10). */
     public static final String COLUMNS = "seq, at, mono, type, task_id, data_json";
 
     private final StringBuilder text;
@@ -100,7 +99,17 @@ public final class EventLog {
             }
             expect(p.currentToken(), JsonToken.END_ARRAY);
         } catch (IOException e) {
-            throw new UncheckedIOException("a stored event log is not the JSON this program writes: " + e.getMessage(), e);
+            throw new Unreadable(e.getMessage(), e);
+        }
+    }
+
+    /** A stored log that is not what this program writes: the store was changed by something else. */
+    public static final class Unreadable extends RuntimeException {
+
+        private static final long serialVersionUID = 1L;
+
+        Unreadable(String message, Throwable cause) {
+            super(message, cause);
         }
     }
 

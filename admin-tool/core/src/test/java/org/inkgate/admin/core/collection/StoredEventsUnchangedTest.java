@@ -83,7 +83,7 @@ class StoredEventsUnchangedTest {
         // SQL against the view process_events sees the same rows as the store's own reading of the logs
         List<List<Object>> viewed = new ArrayList<>();
         try (java.sql.Connection c = fixture.connect(); java.sql.Statement s = c.createStatement();
-                java.sql.ResultSet rs = s.executeQuery("SELECT seq, at, mono, type, task_id, data_json FROM process_events"
+                java.sql.ResultSet rs = s.executeQuery("SELECT " + org.inkgate.admin.core.store.EventLog.COLUMNS + " FROM process_events"
                         + " ORDER BY seq")) {
             while (rs.next()) {
                 viewed.add(Arrays.asList(rs.getLong(1), rs.getString(2), rs.getLong(3), rs.getString(4), rs.getString(5),

@@ -431,9 +431,15 @@ public abstract class SqlResultsStore implements ResultsStore {
                         String exam = rs.getString(1);
                         String candidate = rs.getString(2);
                         String packageId = rs.getString(3);
-                        org.inkgate.admin.core.store.EventLog.forEach(rs.getString(4), e -> sink.accept(new Rows.Event(
-                                exam, candidate, packageId, packageId, e.seq(), e.at(), e.mono(), e.type(), e.task(),
-                                e.dataJson())));
+                        try {
+                            org.inkgate.admin.core.store.EventLog.forEach(rs.getString(4), e -> sink.accept(new Rows.Event(
+                                    exam, candidate, packageId, packageId, e.seq(), e.at(), e.mono(), e.type(), e.task(),
+                                    e.dataJson())));
+                        } catch (org.inkgate.admin.core.store.EventLog.Unreadable bad) {
+                            throw new SQLException("the stored events of candidate " + candidate + " (package "
+                                    + packageId + ") cannot be read (" + bad.getMessage() + "): the store was"
+                                    + " changed by another program. Collect the package again into a new store", bad);
+                        }
                     }, examId);
             return null;
         });

@@ -290,6 +290,20 @@ class MigrationsTest {
     }
 
     @Test
+    void eventLogChangedByAnotherProgram_isReportedWithItsCandidate_notAsAStackTrace() throws Exception {
+        Path file = dir.resolve("r.db");
+        migration6_storeAtVersion5WithAReferral_keepsItAndTakesControlScriptsOfExistingResponsesOnly();
+        try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
+            try (Statement s = store.connection().createStatement()) {
+                s.execute("INSERT INTO event_logs(sitting_id, event_count, events) VALUES (1, 1, '[[1,\"2026-06-15T09:00:00Z\"')");
+            }
+            StoreException e = assertThrows(StoreException.class, () -> store.forEachEvent("e1", event -> { }));
+            assertTrue(e.getMessage().contains("the stored events of candidate C1 (package P) cannot be read"), e.getMessage());
+            assertTrue(e.getMessage().contains("changed by another program"), e.getMessage());
+        }
+    }
+
+    @Test
     void open_storeFromANewerProgram_isRefusedAndLeftAlone() throws Exception {
         Path file = dir.resolve("r.db");
         try (SqliteResultsStore store = SqliteResultsStore.open(file)) {
