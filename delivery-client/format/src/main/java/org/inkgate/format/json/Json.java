@@ -23,22 +23,26 @@ import org.inkgate.format.refusal.MalformedJson;
  */
 public final class Json {
 
-    private static final ObjectMapper MAPPER = JsonMapper.builder()
-            .addModule(new JavaTimeModule())
-            .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
-            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
-            .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-            .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
-            .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
-            .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY)
-            // "60" or 60.5 for a number, 0 or "true" for a boolean: refused, not converted
-            .disable(com.fasterxml.jackson.databind.MapperFeature.ALLOW_COERCION_OF_SCALARS)
-            .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
-            .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
-            .enable(SerializationFeature.INDENT_OUTPUT)
-            .disable(SerializationFeature.WRITE_DATES_AS_TIMESTAMPS)
-            .serializationInclusion(JsonInclude.Include.NON_NULL)
-            .build();
+    private static final ObjectMapper MAPPER = configured().addModule(new InstantModule()).build();
+
+    /** Every setting but the fast instants: the reference {@code InstantModuleTest} compares them with. */
+    static JsonMapper.Builder configured() {
+        return JsonMapper.builder()
+                .addModule(new JavaTimeModule())
+                .enable(StreamReadFeature.STRICT_DUPLICATE_DETECTION)
+                .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+                .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+                .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+                .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
+                .enable(DeserializationFeature.FAIL_ON_READING_DUP_TREE_KEY)
+                // "60" or 60.5 for a number, 0 or "true" for a boolean: refused, not converted
+                .disable(com.fasterxml.jackson.databind.MapperFeature.ALLOW_COERCION_OF_SCALARS)
+                .disable(DeserializationFeature.ACCEPT_FLOAT_AS_INT)
+                .enable(SerializationFeature.ORDER_MAP_ENTRIES_BY_KEYS)
+                .enable(SerializationFeature.INDENT_OUTPUT)
+                .disable(SerializationFeature.WRITE_DATES_AS_TIMESTAMPS)
+                .serializationInclusion(JsonInclude.Include.NON_NULL);
+    }
 
     private static final ObjectMapper COMPACT = MAPPER.copy().disable(SerializationFeature.INDENT_OUTPUT);
 

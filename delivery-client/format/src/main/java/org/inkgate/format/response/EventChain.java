@@ -28,7 +28,7 @@ public final class EventChain {
 
     /** The on-disk shape of one line. */
     @JsonPropertyOrder({"seq", "at", "mono", "type", "task", "data", "prev"})
-    record Line(long seq, @com.fasterxml.jackson.databind.annotation.JsonDeserialize(using = EventTime.class) Instant at, long mono, String type, String task, Map<String, Object> data, String prev) {
+    record Line(long seq, Instant at, long mono, String type, String task, Map<String, Object> data, String prev) {
     }
 
     private EventChain() {

@@ -137,7 +137,7 @@ final class EventLineReader {
                     seq = p.getLongValue();
                 }
                 case "at" -> {
-                    at = value == JsonToken.VALUE_STRING ? EventTime.canonical(p.getText()) : null;
+                    at = value == JsonToken.VALUE_STRING ? org.inkgate.format.json.InstantText.parse(p.getText()) : null;
                     if (at == null) {
                         return null;
                     }

@@ -87,10 +87,19 @@ public final class ResponsePackageReader {
      * @param name the file name, for messages
      */
     public OpenedResponse open(String name, byte[] bytes) throws FormatRefusal, IOException {
+        return open(name, bytes, Sha256.hex(bytes));
+    }
+
+    /**
+     * Opens a package already read and hashed, e.g. by a collector that hashed the file to skip packages it
+     * already holds: the bytes are then hashed once, not twice.
+     *
+     * @param packageSha256 the SHA-256 of {@code bytes} in lower-case hex, as {@link Sha256#hex} gives it
+     */
+    public OpenedResponse open(String name, byte[] bytes, String packageSha256) throws FormatRefusal, IOException {
         if (bytes.length > limits.maxArchiveBytes()) {
             throw new SizeLimitExceeded(name, "the package's size (" + bytes.length + " bytes)", limits.maxArchiveBytes());
         }
-        String packageSha256 = Sha256.hex(bytes);
         byte[] envelopeBytes;
         byte[] payload;
         try (SafeZipReader outer = SafeZipReader.open(name, bytes, limits)) {

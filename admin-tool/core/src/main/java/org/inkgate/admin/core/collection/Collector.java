@@ -154,7 +154,7 @@ public final class Collector {
                 return new Read(file, sha, null, null, null, null, true);
             }
             try {
-                OpenedResponse opened = reader.open(file.getFileName().toString(), bytes);
+                OpenedResponse opened = reader.open(file.getFileName().toString(), bytes, sha);
                 // digest and row rendering here, on the reading threads, so the single writer only stores
                 return new Read(file, sha, opened, record(opened, file.toString()), null, null, false,
                         contractBreaches(opened.response(), opened.events()));
@@ -184,31 +184,19 @@ public final class Collector {
     static SittingRecord record(OpenedResponse opened, String sourceFile) {
         java.util.List<org.inkgate.format.response.ProcessEvent> events = opened.events();
         EventLog log = new EventLog(events.size());
-        java.security.MessageDigest digest = Sha256.newDigest();
-        byte[] prefix = new byte[4];
-        update(digest, prefix, Json.writeLine(opened.response()));
+        ContentDigest digest = new ContentDigest();
+        digest.add(Json.writeLine(opened.response()));
         StringBuilder line = new StringBuilder(256);
-        StringBuilder json = new StringBuilder(128);
         for (org.inkgate.format.response.ProcessEvent e : events) {
-            String at = EventText.time(e.at());
+            String at = org.inkgate.format.json.InstantText.text(e.at());
             // the same characters as seq|at|mono|type|task|data by string concatenation: stored digests stay valid
             line.setLength(0);
             line.append(e.seq()).append('|').append(at).append('|').append(e.mono()).append('|').append(e.type())
                     .append('|').append(e.task()).append('|');
-            log.add(e.seq(), at, e.mono(), e.type(), e.task(), EventText.json(e.data(), json, line));
-            update(digest, prefix, line.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8));
+            log.add(e.seq(), at, e.mono(), e.type(), e.task(), e.data(), line);
+            digest.add(line);
         }
-        return new SittingRecord(opened, org.inkgate.format.crypto.Hex.of(digest.digest()), sourceFile, log.text());
-    }
-
-    private static void update(java.security.MessageDigest digest, byte[] prefix, byte[] bytes) {
-        int n = bytes.length;
-        prefix[0] = (byte) (n >>> 24);
-        prefix[1] = (byte) (n >>> 16);
-        prefix[2] = (byte) (n >>> 8);
-        prefix[3] = (byte) n;
-        digest.update(prefix);
-        digest.update(bytes);
+        return new SittingRecord(opened, digest.hex(), sourceFile, log.text());
     }
 
     private Outcome settle(Read r) throws StoreException {

@@ -43,6 +43,27 @@ public final class EventLog {
         return this;
     }
 
+    /**
+     * Appends one event whose data is still a map: its compact JSON (what {@link EventText#json} returns) is
+     * written into the array as a JSON string directly, without making the JSON and then escaping it, and the
+     * data's {@code toString} is appended to {@code digestText} for the content digest on the way.
+     */
+    public EventLog add(long seq, String at, long mono, String type, String task, java.util.Map<String, Object> data,
+            StringBuilder digestText) {
+        if (count++ > 0) {
+            text.append(',');
+        }
+        text.append('[').append(seq).append(',');
+        string(at).append(',').append(mono).append(',');
+        string(type).append(',');
+        string(task).append(',');
+        if (!EventText.appendJsonString(data, text, digestText)) {
+            string(EventText.json(data, new StringBuilder(), digestText));
+        }
+        text.append(']');
+        return this;
+    }
+
     /** How many events were added. */
     public int count() {
         return count;

@@ -64,52 +64,47 @@ public final class EventText {
         return json.toString();
     }
 
-    /** Seconds from the epoch to 10000-01-01T00:00:00Z: later times print with a sign, left to the JDK. */
-    private static final long YEAR_10000 = 253_402_300_800L;
-
     /**
-     * An event's time as the store keeps it: exactly {@link Instant#toString()} (ISO 8601 in UTC with
-     * 0, 3, 6 or 9 decimals), written directly for the years 1970 to 9999 and by the JDK otherwise.
-     * Why: the JDK's formatter was about a twentieth of a collect's reading time (docs/benchmarks.md,
-     * issue 16); {@code EventTextTest} compares the two over every kind of fraction.
+     * Appends {@code data}'s compact JSON, as {@link #json} writes it, to {@code log} as a JSON string (its
+     * quotes escaped, nothing else needs it), and its {@code toString} to {@code digestText}; one pass, no
+     * intermediate text. Returns false, with both left as they were, when the data is not of the common kind
+     * {@link #json} writes directly; the caller then takes the slow way.
      */
-    public static String time(java.time.Instant t) {
-        long seconds = t.getEpochSecond();
-        if (seconds < 0 || seconds >= YEAR_10000) {
-            return t.toString();
+    static boolean appendJsonString(Map<String, Object> data, StringBuilder log, StringBuilder digestText) {
+        int logMark = log.length();
+        int digestMark = digestText.length();
+        log.append("\"{");
+        digestText.append('{');
+        String previous = null;
+        for (Map.Entry<String, Object> e : data.entrySet()) {
+            String key = e.getKey();
+            Object value = e.getValue();
+            if (!plain(key) || previous != null && previous.compareTo(key) >= 0
+                    || !(value instanceof String || value instanceof Integer || value instanceof Long
+                            || value instanceof Boolean)
+                    || value instanceof String s && !plain(s)) {
+                log.setLength(logMark);
+                digestText.setLength(digestMark);
+                return false;
+            }
+            if (previous != null) {
+                log.append(',');
+                digestText.append(", ");
+            }
+            previous = key;
+            log.append("\\\"").append(key).append("\\\":");
+            digestText.append(key).append('=');
+            if (value instanceof String s) {
+                log.append("\\\"").append(s).append("\\\"");
+                digestText.append(s);
+            } else {
+                log.append(value);
+                digestText.append(value);
+            }
         }
-        long days = seconds / 86_400;
-        int secondOfDay = (int) (seconds - days * 86_400);
-        java.time.LocalDate date = java.time.LocalDate.ofEpochDay(days);
-        int nano = t.getNano();
-        int decimals = nano == 0 ? 0 : nano % 1_000_000 == 0 ? 3 : nano % 1_000 == 0 ? 6 : 9;
-        byte[] out = new byte[20 + (decimals == 0 ? 0 : decimals + 1)];
-        digits(out, 0, date.getYear(), 4);
-        out[4] = '-';
-        digits(out, 5, date.getMonthValue(), 2);
-        out[7] = '-';
-        digits(out, 8, date.getDayOfMonth(), 2);
-        out[10] = 'T';
-        digits(out, 11, secondOfDay / 3600, 2);
-        out[13] = ':';
-        digits(out, 14, secondOfDay / 60 % 60, 2);
-        out[16] = ':';
-        digits(out, 17, secondOfDay % 60, 2);
-        if (decimals > 0) {
-            out[19] = '.';
-            int fraction = decimals == 3 ? nano / 1_000_000 : decimals == 6 ? nano / 1_000 : nano;
-            digits(out, 20, fraction, decimals);
-        }
-        out[out.length - 1] = 'Z';
-        return new String(out, StandardCharsets.US_ASCII);
-    }
-
-    /** {@code value} as {@code count} decimal digits, leading zeros included. */
-    private static void digits(byte[] out, int at, int value, int count) {
-        for (int i = at + count - 1; i >= at; i--) {
-            out[i] = (byte) ('0' + value % 10);
-            value /= 10;
-        }
+        log.append("}\"");
+        digestText.append('}');
+        return true;
     }
 
     /** Jackson writes such text as it is: no control character, quote, backslash or surrogate. */

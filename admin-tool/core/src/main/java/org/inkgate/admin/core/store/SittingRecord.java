@@ -19,11 +19,10 @@ public record SittingRecord(OpenedResponse opened, String contentSha256, String 
     public static SittingRecord of(OpenedResponse opened, String contentSha256, String sourceFile) {
         List<ProcessEvent> events = opened.events();
         EventLog log = new EventLog(events.size());
-        StringBuilder json = new StringBuilder(128);
         StringBuilder ignored = new StringBuilder(128);
         for (ProcessEvent e : events) {
             ignored.setLength(0);
-            log.add(e.seq(), EventText.time(e.at()), e.mono(), e.type(), e.task(), EventText.json(e.data(), json, ignored));
+            log.add(e.seq(), org.inkgate.format.json.InstantText.text(e.at()), e.mono(), e.type(), e.task(), e.data(), ignored);
         }
         return new SittingRecord(opened, contentSha256, sourceFile, log.text());
     }

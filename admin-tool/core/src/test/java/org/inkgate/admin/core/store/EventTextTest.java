@@ -28,31 +28,6 @@ class EventTextTest {
         }
     }
 
-    /** The reference is the JDK's {@code Instant.toString} (ISO_INSTANT), over every kind of fraction and year. */
-    @Test
-    void times_areWrittenAsTheJdkWritesThem() {
-        SplittableRandom random = new SplittableRandom(29);
-        List<java.time.Instant> times = new ArrayList<>(List.of(java.time.Instant.EPOCH,
-                java.time.Instant.parse("1969-12-31T23:59:59.999999999Z"), java.time.Instant.parse("2000-02-29T12:00:00Z"),
-                java.time.Instant.parse("2026-06-15T09:00:00.100Z"), java.time.Instant.parse("2026-06-15T09:00:00.000100Z"),
-                java.time.Instant.parse("2026-06-15T09:00:00.000000100Z"), java.time.Instant.parse("9999-12-31T23:59:59.999999999Z"),
-                java.time.Instant.parse("+10000-01-01T00:00:00Z"), java.time.Instant.parse("-0001-01-01T00:00:00Z"),
-                java.time.Instant.MIN, java.time.Instant.MAX));
-        for (int i = 0; i < 200_000; i++) {
-            long seconds = random.nextLong(-100_000_000_000L, 300_000_000_000L);
-            int nano = switch (random.nextInt(4)) {
-                case 0 -> 0;
-                case 1 -> random.nextInt(1000) * 1_000_000;
-                case 2 -> random.nextInt(1_000_000) * 1_000;
-                default -> random.nextInt(1_000_000_000);
-            };
-            times.add(java.time.Instant.ofEpochSecond(seconds, nano));
-        }
-        for (java.time.Instant t : times) {
-            assertEquals(t.toString(), EventText.time(t));
-        }
-    }
-
     @Test
     void randomMapsOfEveryValueKind_areWrittenAsJacksonAndToStringWriteThem() {
         SplittableRandom random = new SplittableRandom(16);
@@ -120,6 +95,13 @@ class EventTextTest {
         String json = EventText.json(data, new StringBuilder(), digest);
         assertEquals(new String(Json.writeLine(data), StandardCharsets.UTF_8), json, () -> "JSON of " + escaped(data));
         assertEquals("seq|at|" + data, digest.toString(), () -> "digest text of " + escaped(data));
+        // the event log written from the map in one pass: the same array as from the reference JSON, the same digest text
+        StringBuilder viaMap = new StringBuilder("seq|at|");
+        String logFromMap = new EventLog(1).add(7, "at", -3, "type", null, data, viaMap).text();
+        String logFromJson = new EventLog(1).add(7, "at", -3, "type", null, new String(Json.writeLine(data),
+                StandardCharsets.UTF_8)).text();
+        assertEquals(logFromJson, logFromMap, () -> "event log of " + escaped(data));
+        assertEquals("seq|at|" + data, viaMap.toString(), () -> "digest text via the log of " + escaped(data));
     }
 
     private static String escaped(Map<String, Object> data) {

@@ -312,7 +312,7 @@ public abstract class SqlResultsStore implements ResultsStore {
     }
 
     private static String str(Instant i) {
-        return i == null ? null : i.toString();
+        return i == null ? null : org.inkgate.format.json.InstantText.text(i);
     }
 
     @Override
