@@ -80,7 +80,8 @@ public final class EventChain {
         }
         List<ProcessEvent> events = new ArrayList<>();
         MessageDigest digest = Sha256.newDigest();
-        String prev = GENESIS;
+        // the previous line's digest as bytes, compared with each line's prev without writing it out as hex
+        byte[] prev = new byte[32];
         int number = 0;
         int start = 0;
         EventLineReader.Log lines = new EventLineReader.Log(encoded);
@@ -94,7 +95,7 @@ public final class EventChain {
             if (parsed == null) {
                 parsed = bind(file, entry, encoded, start, end - start, number);
             }
-            if (!prev.equals(parsed.prev())) {
+            if (!Hex.spells(parsed.prev(), prev)) {
                 throw new BrokenHashChain(file, entry, number);
             }
             if (parsed.seq() != number) {
@@ -102,11 +103,15 @@ public final class EventChain {
             }
             events.add(new ProcessEvent(parsed.seq(), parsed.at(), parsed.mono(), parsed.type(), parsed.task(), parsed.data()));
             digest.update(encoded, start, end - start);
-            prev = Hex.of(digest.digest());
+            try {
+                digest.digest(prev, 0, prev.length);
+            } catch (java.security.DigestException e) {
+                throw new IllegalStateException("SHA-256 gives 32 bytes", e);
+            }
             start = end + 1;
         }
         lines.close();
-        return new Decoded(events, prev);
+        return new Decoded(events, Hex.of(prev));
     }
 
     /** One line bound by the mapper: the reference reading, and the one that locates and words refusals. */

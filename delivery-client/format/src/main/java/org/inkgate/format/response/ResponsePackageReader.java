@@ -5,7 +5,6 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.PrivateKey;
-import java.security.PublicKey;
 import java.util.Arrays;
 import java.util.Base64;
 import java.util.List;
@@ -50,7 +49,7 @@ import org.inkgate.format.trust.TrustPolicy;
  */
 public final class ResponsePackageReader {
 
-    private final PrivateKey ownerKey;
+    private final byte[] ownerScalar;
     private final byte[] ownerPublic;
     private final TrustPolicy installations;
     private final ArchiveLimits limits;
@@ -60,7 +59,7 @@ public final class ResponsePackageReader {
     }
 
     public ResponsePackageReader(PrivateKey ownerEncryptionKey, TrustPolicy installations, ArchiveLimits limits) {
-        this.ownerKey = ownerEncryptionKey;
+        this.ownerScalar = X25519.rawPrivate(ownerEncryptionKey);
         this.ownerPublic = X25519.rawPublic(X25519.publicOf(ownerEncryptionKey));
         this.installations = Objects.requireNonNull(installations, "installations: say which installation keys to trust");
         this.limits = limits;
@@ -143,7 +142,7 @@ public final class ResponsePackageReader {
         }
         byte[] shared;
         try {
-            shared = X25519.agree(ownerKey, X25519.publicFromRaw(ephemeralPublic));
+            shared = X25519.agree(ownerScalar, ephemeralPublic);
         } catch (IllegalArgumentException e) {
             throw new DecryptionFailed(name, "the envelope's one-time key is not a usable X25519 key; the file is damaged", e);
         }
@@ -166,17 +165,20 @@ public final class ResponsePackageReader {
             byte[] signature = SignedArchive.signature(name, zip, PackageLayout.SIGNATURE);
             JsonNode tree = Json.tree(name, PackageLayout.MANIFEST, manifestBytes);
             checkFormat(name, tree, PackageManifest.FORMAT, "response package");
-            PublicKey signer;
+            byte[] signer;
             try {
-                signer = Ed25519.publicFromRaw(Base64.getDecoder().decode(tree.path("signingKey").asText("")));
+                signer = Base64.getDecoder().decode(tree.path("signingKey").asText(""));
             } catch (IllegalArgumentException e) {
+                throw new BadSignature(name, "the package names no valid client signing key");
+            }
+            if (signer.length != Ed25519.KEY_BYTES) {
                 throw new BadSignature(name, "the package names no valid client signing key");
             }
             if (!Ed25519.verify(signer, manifestBytes, signature)) {
                 throw new BadSignature(name, "the client's signature does not match the package contents");
             }
             checkSchemaVersion(name, tree, PackageManifest.SCHEMA_VERSION, "response package");
-            String installation = Fingerprint.of(Ed25519.rawPublic(signer));
+            String installation = Fingerprint.of(signer);
             if (!installations.trusts(installation)) {
                 throw UntrustedSigner.installation(name, installation);
             }

@@ -59,6 +59,54 @@ class PublishedVectorsTest {
     void x25519_rfc7748Vector_givesPublishedOutput(String scalar, String u, String expected) {
         byte[] out = X25519.agree(X25519.privateFromRaw(Hex.parse(scalar)), X25519.publicFromRaw(Hex.parse(u)));
         assertEquals(expected, Hex.of(out));
+        // the raw form, as a collect calls it: the u-coordinate exactly as published, top bit and all
+        assertEquals(expected, Hex.of(X25519.agree(Hex.parse(scalar), Hex.parse(u))));
+    }
+
+    /** RFC 7748 section 6.1: an all-zero shared secret (here from u = 0, a point of small order) is refused. */
+    @Test
+    void x25519_lowOrderPoint_isRefused() {
+        byte[] scalar = Hex.parse("77076d0a7318a57d3c16c17251b26645df4c2f87ebc0992ab177fba51db92c2a");
+        org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class, () -> X25519.agree(scalar, new byte[32]));
+    }
+
+    /**
+     * Verification (Bouncy Castle's RFC 8032 code) against the JDK's EdDSA provider as reference: signatures
+     * the JDK makes over random messages verify, and every signature with one bit flipped, the key with one
+     * bit flipped, or another message is refused by both.
+     */
+    @Test
+    void ed25519_verification_agreesWithTheJdk() throws Exception {
+        java.util.SplittableRandom random = new java.util.SplittableRandom(8032);
+        for (int round = 0; round < 200; round++) {
+            java.security.KeyPair pair = Ed25519.generate();
+            byte[] message = new byte[random.nextInt(0, 600)];
+            random.nextBytes(message);
+            byte[] signature = Ed25519.sign(pair.getPrivate(), message);
+            byte[] raw = Ed25519.rawPublic(pair.getPublic());
+            assertTrue(Ed25519.verify(raw, message, signature));
+            byte[] badSignature = signature.clone();
+            badSignature[random.nextInt(64)] ^= (byte) (1 << random.nextInt(8));
+            byte[] badKey = raw.clone();
+            badKey[random.nextInt(32)] ^= (byte) (1 << random.nextInt(8));
+            byte[] otherMessage = java.util.Arrays.copyOf(message, message.length + 1);
+            assertEquals(jdkVerifies(raw, message, badSignature), Ed25519.verify(raw, message, badSignature));
+            assertEquals(jdkVerifies(badKey, message, signature), Ed25519.verify(badKey, message, signature));
+            assertEquals(jdkVerifies(raw, otherMessage, signature), Ed25519.verify(raw, otherMessage, signature));
+        }
+        assertFalse(Ed25519.verify(new byte[31], new byte[0], new byte[64]), "a short key is not valid");
+        assertFalse(Ed25519.verify(new byte[32], new byte[0], new byte[63]), "a short signature is not valid");
+    }
+
+    private static boolean jdkVerifies(byte[] rawPublic, byte[] message, byte[] signature) throws Exception {
+        java.security.Signature jdk = java.security.Signature.getInstance("Ed25519");
+        try {
+            jdk.initVerify(Ed25519.publicFromRaw(rawPublic));
+            jdk.update(message);
+            return jdk.verify(signature);
+        } catch (java.security.GeneralSecurityException e) {
+            return false;
+        }
     }
 
     /** RFC 7748 section 6.1: Alice's and Bob's key pairs and their shared secret. */
