@@ -84,16 +84,24 @@ public final class EventChain {
         byte[] prev = new byte[32];
         int number = 0;
         int start = 0;
+        EventLineScanner scanner = new EventLineScanner(encoded);
         EventLineReader.Log lines = new EventLineReader.Log(encoded);
         while (start < encoded.length) {
-            int end = start;
-            while (encoded[end] != '\n') {
-                end++;
-            }
             number++;
-            Line parsed = lines.read(start, end);
-            if (parsed == null) {
-                parsed = bind(file, entry, encoded, start, end - start, number);
+            Line parsed = scanner.read(start);
+            int end;
+            if (parsed != null) {
+                end = scanner.lineEnd();
+            } else {
+                // not in the writer's exact form: Jackson's streaming parser, and the binding if that cannot say
+                end = start;
+                while (encoded[end] != '\n') {
+                    end++;
+                }
+                parsed = lines.read(start, end);
+                if (parsed == null) {
+                    parsed = bind(file, entry, encoded, start, end - start, number);
+                }
             }
             if (!Hex.spells(parsed.prev(), prev)) {
                 throw new BrokenHashChain(file, entry, number);

@@ -29,6 +29,16 @@ final class EventLineReader {
 
     /** The line, or null if the binding must decide (anything outside the writer's shape, or an error). */
     static EventChain.Line read(byte[] bytes, int offset, int length) {
+        EventLineScanner scanner = new EventLineScanner(bytes);
+        EventChain.Line scanned = scanner.read(offset);
+        if (scanned != null && scanner.lineEnd() == offset + length) {
+            return scanned;
+        }
+        return parse(bytes, offset, length);
+    }
+
+    /** The line read by Jackson's streaming parser alone, or null if the binding must decide. */
+    static EventChain.Line parse(byte[] bytes, int offset, int length) {
         try (JsonParser p = Json.mapper().createParser(bytes, offset, length)) {
             // this reader finds repeated names itself (and leaves such a line to the binding, which refuses it);
             // the parser's own detection keeps a hash set per object, a tenth of a collect's reading time
@@ -55,37 +65,45 @@ final class EventLineReader {
 
         private final byte[] bytes;
         private JsonParser parser;
+        /** Where the parser's input starts in the bytes (its offsets count from there). */
+        private int base;
+        /** Where the line after the parser's last one starts. */
+        private int next = -1;
 
         Log(byte[] bytes) {
             this.bytes = bytes;
-            try {
-                parser = Json.mapper().createParser(bytes);
-                parser.disable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
-            } catch (IOException e) {
-                parser = null; // every line on its own, as before
-            }
         }
 
         /** The line from {@code start} to {@code end} (its newline), or null if the binding must decide. */
         EventChain.Line read(int start, int end) {
-            if (parser != null) {
-                try {
-                    if (parser.nextToken() == JsonToken.START_OBJECT
-                            && parser.currentTokenLocation().getByteOffset() == start) {
-                        EventChain.Line line = readFields(parser);
-                        if (line != null && parser.currentLocation().getByteOffset() == end) {
-                            return line;
-                        }
-                    }
-                } catch (IOException | RuntimeException e) {
-                    // as below: the line on its own decides
-                }
+            if (parser == null || start != next) {
+                // the first line read here, or lines in between were read by the scanner: start again at this line
                 close();
+                try {
+                    parser = Json.mapper().createParser(bytes, start, bytes.length - start);
+                    parser.disable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION);
+                    base = start;
+                } catch (IOException e) {
+                    return EventLineReader.parse(bytes, start, end - start);
+                }
             }
-            return EventLineReader.read(bytes, start, end - start);
+            try {
+                if (parser.nextToken() == JsonToken.START_OBJECT
+                        && base + parser.currentTokenLocation().getByteOffset() == start) {
+                    EventChain.Line line = readFields(parser);
+                    if (line != null && base + parser.currentLocation().getByteOffset() == end) {
+                        next = end + 1;
+                        return line;
+                    }
+                }
+            } catch (IOException | RuntimeException e) {
+                // as below: the line on its own decides
+            }
+            close();
+            return EventLineReader.parse(bytes, start, end - start);
         }
 
-        /** Whether the lines are still read by the one parser (tests: a writer's log never gives it up). */
+        /** Whether the parser reads on from the last line (tests: a writer's log never gives it up). */
         boolean shared() {
             return parser != null;
         }

@@ -1,0 +1,420 @@
+package org.inkgate.format.response;
+
+import java.nio.charset.StandardCharsets;
+import java.time.Instant;
+import java.util.Arrays;
+import java.util.Map;
+import org.inkgate.format.json.InstantText;
+
+/**
+ * Reads an event line written exactly as the writer writes it, byte by byte, without a general JSON
+ * parser: {@code {"seq":N,"at":"T","mono":N,"type":"S"[,"task":"S"],"data":{...},"prev":"S"}} with the
+ * fields in that order, no space, whole numbers in the range of a long, the writer's own form of a time,
+ * data keys in ascending order and data values that are text, whole numbers or booleans; text in
+ * well-formed UTF-8 with JSON's escapes (surrogates only as an escaped pair) and at most {@value #MAX_TEXT} bytes.
+ * For any other line it answers null and {@link EventLineReader} reads the line with Jackson, which
+ * decides as before; so a line this class accepts is one the binding accepts with the same values
+ * ({@code EventLineScannerTest} compares the two over written, hand-made and damaged lines).
+ *
+ * <p>Why: a general parser paid for what a written log never has (names in any order, spacing,
+ * nesting, every kind of number), about a quarter of a collect's reading time, and its large methods
+ * were a good part of what the JIT compiler had to do in every fresh collect (docs/benchmarks.md,
+ * issue 16). One scanner reads one log; it keeps a small table of the short texts it has met, since
+ * an event log repeats its types, task ids, data keys and many values thousands of times.
+ */
+final class EventLineScanner {
+
+    /** Longer text is left to Jackson, whose own limits (names of 50,000 characters) then decide. */
+    static final int MAX_TEXT = 10_000;
+
+    private static final byte[] SEQ = ascii("{\"seq\":");
+    private static final byte[] AT = ascii(",\"at\":\"");
+    private static final byte[] MONO = ascii(",\"mono\":");
+    private static final byte[] TYPE = ascii(",\"type\":");
+    private static final byte[] TASK = ascii(",\"task\":");
+    private static final byte[] DATA = ascii(",\"data\":{");
+    private static final byte[] PREV = ascii(",\"prev\":");
+    private static final byte[] TRUE = ascii("true");
+    private static final byte[] FALSE = ascii("false");
+
+    private final byte[] b;
+    private int i;
+    private long number;
+    private char[] chars = new char[64];
+    private String[] keys = new String[8];
+    private Object[] values = new Object[8];
+    private final String[] known = new String[256];
+
+    EventLineScanner(byte[] bytes) {
+        this.b = bytes;
+    }
+
+    private int lineEnd;
+
+    /**
+     * The line starting at {@code start} and ending at the next newline or the end of the bytes, or null
+     * if it is not exactly in the writer's form (then nothing is known about where it ends).
+     */
+    EventChain.Line read(int start) {
+        try {
+            return line(start);
+        } catch (ArrayIndexOutOfBoundsException e) {
+            return null; // ran past the bytes: not a whole line in the writer's form
+        }
+    }
+
+    /** Where the line {@link #read} last gave ends: the index of its newline, or the length of the bytes. */
+    int lineEnd() {
+        return lineEnd;
+    }
+
+    private EventChain.Line line(int start) {
+        i = start;
+        if (!literal(SEQ) || !number()) {
+            return null;
+        }
+        long seq = number;
+        if (!literal(AT)) {
+            return null;
+        }
+        int from = i;
+        while (b[i] != '"') {
+            if (b[i] < 0x20 || b[i] == '\\') { // also every byte from 0x80: negative
+                return null;
+            }
+            i++;
+        }
+        if (i - from > 30) {
+            return null;
+        }
+        Instant at = InstantText.parse(new String(b, from, i - from, StandardCharsets.ISO_8859_1));
+        i++;
+        if (at == null || !literal(MONO) || !number()) {
+            return null;
+        }
+        long mono = number;
+        if (!literal(TYPE)) {
+            return null;
+        }
+        String type = text();
+        if (type == null) {
+            return null;
+        }
+        String task = null;
+        if (literal(TASK) && (task = text()) == null) {
+            return null;
+        }
+        if (!literal(DATA)) {
+            return null;
+        }
+        Map<String, Object> data = data();
+        if (data == null || !literal(PREV)) {
+            return null;
+        }
+        String prev = text();
+        if (prev == null || b[i] != '}' || i + 1 < b.length && b[i + 1] != '\n') {
+            return null;
+        }
+        lineEnd = i + 1;
+        return new EventChain.Line(seq, at, mono, type, task, data, prev);
+    }
+
+    /** The data object's entries after its opening brace, through its closing one; null if not in the writer's form. */
+    private Map<String, Object> data() {
+        int size = 0;
+        if (b[i] == '}') {
+            i++;
+            return EventData.ofSorted(keys, values, 0);
+        }
+        while (true) {
+            String key = text();
+            if (key == null || b[i++] != ':') {
+                return null;
+            }
+            Object value;
+            byte c = b[i];
+            if (c == '"') {
+                value = text();
+            } else if (c == '-' || c >= '0' && c <= '9') {
+                value = number() ? whole(number) : null;
+            } else if (literal(TRUE)) {
+                value = Boolean.TRUE;
+            } else if (literal(FALSE)) {
+                value = Boolean.FALSE;
+            } else {
+                value = null;
+            }
+            if (value == null) {
+                return null;
+            }
+            if (size == keys.length) {
+                keys = Arrays.copyOf(keys, size * 2);
+                values = Arrays.copyOf(values, size * 2);
+            }
+            keys[size] = key;
+            values[size++] = value;
+            c = b[i++];
+            if (c == '}') {
+                return EventData.ofSorted(keys, values, size); // null unless strictly ascending, as written
+            }
+            if (c != ',') {
+                return null;
+            }
+        }
+    }
+
+    /** Integer when it fits, else Long: the kinds Jackson gives a whole number in the range of a long in a map. */
+    private static Object whole(long v) {
+        if (v == (int) v) {
+            return Integer.valueOf((int) v);
+        }
+        return Long.valueOf(v);
+    }
+
+    private boolean literal(byte[] expected) {
+        for (int k = 0; k < expected.length; k++) {
+            if (b[i + k] != expected[k]) {
+                return false;
+            }
+        }
+        i += expected.length;
+        return true;
+    }
+
+    /**
+     * A whole number in the range of a long, with a minus sign or none, no leading zero and not "-0", into
+     * {@link #number}; false for anything else (Jackson then decides, also on numbers too long for a long).
+     */
+    private boolean number() {
+        boolean negative = b[i] == '-';
+        int from = negative ? ++i : i;
+        long v = 0;
+        while (b[i] >= '0' && b[i] <= '9') {
+            v = v * 10 + (b[i++] - '0');
+        }
+        int digits = i - from;
+        if (digits == 0 || digits > 19 || b[from] == '0' && (digits > 1 || negative)) {
+            return false;
+        }
+        byte next = b[i];
+        if (next == '.' || next == 'e' || next == 'E') {
+            return false;
+        }
+        if (digits == 19) { // near the ends of a long: the JDK says whether it is one
+            try {
+                number = Long.parseLong(new String(b, negative ? from - 1 : from, digits + (negative ? 1 : 0),
+                        StandardCharsets.ISO_8859_1));
+                return true;
+            } catch (NumberFormatException e) {
+                return false;
+            }
+        }
+        number = negative ? -v : v;
+        return true;
+    }
+
+    /** A JSON text starting at its quote, through its closing quote; null if not in the writer's form. */
+    private String text() {
+        if (b[i] != '"') {
+            return null;
+        }
+        int from = ++i;
+        boolean plain = true;
+        boolean ascii = true;
+        while (true) {
+            byte c = b[i];
+            if (c == '"') {
+                break;
+            }
+            if (c == '\\') {
+                plain = false;
+                i += 2; // the escaped character; a \\u's four digits are plain bytes the next turns pass
+                continue;
+            }
+            if (c >= 0 && c < 0x20) {
+                return null; // a raw control character: JSON refuses it
+            }
+            if (c < 0) {
+                ascii = false;
+            }
+            i++;
+        }
+        int to = i++;
+        if (to - from > MAX_TEXT) {
+            return null;
+        }
+        if (plain && ascii) {
+            return known(from, to);
+        }
+        return plain ? utf8(from, to) : unescape(from, to);
+    }
+
+    /** ASCII text without escapes, from the table of texts met before when it is short. */
+    private String known(int from, int to) {
+        int n = to - from;
+        if (n > 32) {
+            return new String(b, from, n, StandardCharsets.ISO_8859_1);
+        }
+        int h = n;
+        for (int k = from; k < to; k++) {
+            h = 31 * h + b[k];
+        }
+        int slot = (h ^ h >>> 8) & (known.length - 1);
+        String s = known[slot];
+        if (s != null && s.length() == n) {
+            int k = 0;
+            while (k < n && s.charAt(k) == b[from + k]) {
+                k++;
+            }
+            if (k == n) {
+                return s;
+            }
+        }
+        s = new String(b, from, n, StandardCharsets.ISO_8859_1);
+        known[slot] = s;
+        return s;
+    }
+
+    /** Text without escapes that is well-formed UTF-8; null otherwise. */
+    private String utf8(int from, int to) {
+        for (int k = from; k < to; ) {
+            int length = sequence(k, to);
+            if (length == 0) {
+                return null;
+            }
+            k += length;
+        }
+        return new String(b, from, to - from, StandardCharsets.UTF_8);
+    }
+
+    /** Text with JSON's escapes and perhaps UTF-8 sequences, decoded; null for anything not in the writer's form. */
+    private String unescape(int from, int to) {
+        if (chars.length < to - from) {
+            chars = new char[to - from];
+        }
+        int n = 0;
+        for (int k = from; k < to; ) {
+            byte c = b[k];
+            if (c == '\\') {
+                char e = (char) b[k + 1];
+                char decoded;
+                switch (e) {
+                    case '"', '\\', '/' -> decoded = e;
+                    case 'b' -> decoded = '\b';
+                    case 'f' -> decoded = '\f';
+                    case 'n' -> decoded = '\n';
+                    case 'r' -> decoded = '\r';
+                    case 't' -> decoded = '\t';
+                    case 'u' -> {
+                        int v = hex4(k, to);
+                        if (v < 0) {
+                            return null;
+                        }
+                        if (Character.isHighSurrogate((char) v)) {
+                            // the writer escapes a character beyond U+FFFF as its two halves, high then low
+                            int low = b[k + 6] == '\\' && b[k + 7] == 'u' ? hex4(k + 6, to) : -1;
+                            if (low < 0 || !Character.isLowSurrogate((char) low)) {
+                                return null; // a lone half: Jackson decides
+                            }
+                            chars[n++] = (char) v;
+                            chars[n++] = (char) low;
+                            k += 12;
+                            continue;
+                        }
+                        if (Character.isLowSurrogate((char) v)) {
+                            return null;
+                        }
+                        chars[n++] = (char) v;
+                        k += 6;
+                        continue;
+                    }
+                    default -> {
+                        return null;
+                    }
+                }
+                chars[n++] = decoded;
+                k += 2;
+            } else if (c >= 0) {
+                chars[n++] = (char) c;
+                k++;
+            } else {
+                int length = sequence(k, to);
+                if (length == 0) {
+                    return null;
+                }
+                String s = new String(b, k, length, StandardCharsets.UTF_8);
+                for (int j = 0; j < s.length(); j++) {
+                    chars[n++] = s.charAt(j);
+                }
+                k += length;
+            }
+        }
+        return new String(chars, 0, n);
+    }
+
+    /** The value of the four hex digits of the \\u escape at {@code k}, or -1 if they are not four hex digits before {@code to}. */
+    private int hex4(int k, int to) {
+        if (k + 6 > to) {
+            return -1;
+        }
+        int v = 0;
+        for (int d = k + 2; d < k + 6; d++) {
+            int digit = b[d] < 0 ? -1 : Character.digit(b[d], 16);
+            if (digit < 0) {
+                return -1;
+            }
+            v = v * 16 + digit;
+        }
+        return v;
+    }
+
+    /**
+     * The length of the well-formed UTF-8 sequence at {@code k} (Unicode table 3-7: no overlong forms,
+     * no surrogates, nothing past U+10FFFF), or 0 if there is none before {@code to}.
+     */
+    private int sequence(int k, int to) {
+        int lead = b[k] & 0xff;
+        if (lead < 0x80) {
+            return 1;
+        }
+        int length;
+        int low = 0x80;
+        int high = 0xbf;
+        if (lead >= 0xc2 && lead <= 0xdf) {
+            length = 2;
+        } else if (lead >= 0xe0 && lead <= 0xef) {
+            length = 3;
+            if (lead == 0xe0) {
+                low = 0xa0;
+            } else if (lead == 0xed) {
+                high = 0x9f;
+            }
+        } else if (lead >= 0xf0 && lead <= 0xf4) {
+            length = 4;
+            if (lead == 0xf0) {
+                low = 0x90;
+            } else if (lead == 0xf4) {
+                high = 0x8f;
+            }
+        } else {
+            return 0;
+        }
+        if (k + length > to) {
+            return 0;
+        }
+        int second = b[k + 1] & 0xff;
+        if (second < low || second > high) {
+            return 0;
+        }
+        for (int j = k + 2; j < k + length; j++) {
+            if ((b[j] & 0xc0) != 0x80) {
+                return 0;
+            }
+        }
+        return length;
+    }
+
+    private static byte[] ascii(String s) {
+        return s.getBytes(StandardCharsets.US_ASCII);
+    }
+}
