@@ -1,6 +1,5 @@
 package org.inkgate.format.archive;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.ByteBuffer;
@@ -57,9 +56,9 @@ final class EntryData {
     }
 
     byte[] read(ArchiveEntry entry) throws FormatRefusal, IOException {
-        ByteArrayOutputStream out = new ByteArrayOutputStream((int) Math.min(entry.size(), 1 << 20));
+        EntryBytes out = new EntryBytes(entry.size());
         copy(entry, out, null);
-        return out.toByteArray();
+        return out.bytes();
     }
 
     /** Streams the unpacked bytes to {@code out}, updating {@code digest} (may be null) with the same bytes. */

@@ -1,6 +1,5 @@
 package org.inkgate.format.archive;
 
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.file.FileAlreadyExistsException;
@@ -94,12 +93,12 @@ public final class SignedArchive {
         for (Map.Entry<String, ListedDigest> e : listed.entrySet()) {
             ArchiveEntry entry = zip.entry(e.getKey()).orElseThrow();
             MessageDigest digest = Sha256.newDigest();
-            ByteArrayOutputStream bytes = new ByteArrayOutputStream((int) Math.min(entry.size(), 1 << 20));
+            EntryBytes bytes = new EntryBytes(entry.size());
             zip.copy(entry, bytes, digest);
             if (!Hex.of(digest.digest()).equals(e.getValue().sha256())) {
                 throw new DigestMismatch(file, entry.name());
             }
-            out.put(entry.name(), bytes.toByteArray());
+            out.put(entry.name(), bytes.bytes());
         }
         return out;
     }
