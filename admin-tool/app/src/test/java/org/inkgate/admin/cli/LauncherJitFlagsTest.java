@@ -15,7 +15,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * The launcher script runs {@code analyse} with the C1 compiler only (issue 16: the whole command
- * under 2 s; docs/benchmarks.md) and every other command with the JVM's usual compilers. The real
+ * under 2 s; docs/benchmarks.md), {@code collect} with C2 taking methods ten times later (issue 16:
+ * fewer compilations in a fresh collect), and every other command with the JVM's usual compilers. The real
  * script runs from a copy beside a stand-in build, with a stand-in {@code java} that prints the
  * arguments it was given.
  */
@@ -33,10 +34,21 @@ class LauncherJitFlagsTest {
     }
 
     @Test
+    void collect_takesMethodsToC2TenTimesLater() throws Exception {
+        List<String> args = javaArguments("collect", "--store", "s.db", "in");
+        assertTrue(args.containsAll(List.of("-XX:Tier4InvocationThreshold=50000", "-XX:Tier4MinInvocationThreshold=6000",
+                "-XX:Tier4CompileThreshold=150000", "-XX:Tier4BackEdgeThreshold=400000")), args.toString());
+        assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel")), args.toString());
+        assertEquals(List.of("org.inkgate.admin.cli.InkgateAdmin", "collect", "--store", "s.db", "in"),
+                args.subList(args.size() - 5, args.size()));
+    }
+
+    @Test
     void otherCommands_keepTheUsualCompilers() throws Exception {
-        for (String command : List.of("collect", "bundle", "gui", "--help")) {
+        for (String command : List.of("bundle", "gui", "export", "--help")) {
             List<String> args = javaArguments(command);
-            assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel")), command + ": " + args);
+            assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel") || a.startsWith("-XX:Tier4")),
+                    command + ": " + args);
             assertEquals(command, args.get(args.size() - 1));
         }
     }
