@@ -48,6 +48,14 @@ public final class OwnerKeyStore {
 
     /** Creates both key pairs; refuses to overwrite an existing key folder. */
     public PublicKeys init(char[] passphrase) throws IOException {
+        return init(passphrase, Ed25519.generate(), X25519.generate());
+    }
+
+    /**
+     * Writes the given key pairs here, protected by the passphrase, as {@link #init(char[])} writes new ones
+     * (bench commands write the test keys this way, so the real command line can open their packages).
+     */
+    public PublicKeys init(char[] passphrase, KeyPair signing, KeyPair encryption) throws IOException {
         if (passphrase == null || passphrase.length < MIN_PASSPHRASE) {
             throw new IllegalArgumentException("the passphrase needs at least " + MIN_PASSPHRASE + " characters: anyone who"
                     + " copies the key files can try passphrases offline");
@@ -60,8 +68,6 @@ public final class OwnerKeyStore {
             }
         }
         Files.createDirectories(folder);
-        KeyPair signing = Ed25519.generate();
-        KeyPair encryption = X25519.generate();
         writePrivate(SIGNING_FILE, EncryptedKeys.pem(EncryptedKeys.encrypt(signing.getPrivate(), passphrase)));
         writePrivate(ENCRYPTION_FILE, EncryptedKeys.pem(EncryptedKeys.encrypt(encryption.getPrivate(), passphrase)));
         PublicKeys pub = publicKeys(signing.getPublic(), encryption.getPublic());

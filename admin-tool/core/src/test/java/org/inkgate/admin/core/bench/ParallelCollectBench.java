@@ -150,6 +150,23 @@ public final class ParallelCollectBench {
     }
 
     /** One collect process: {@code <store> <bundle> <reading threads> <folder>...}; prints how many it imported. */
+    /**
+     * Writes the test keys the bench's packages are made with as an owner key folder, so that the real
+     * command line can collect them: {@code ParallelCollectBench$KeyFolder <dir>} (passphrase in the
+     * environment variable INKGATE_BENCH_PASSPHRASE), then
+     * {@code INKGATE_BENCH_PASSPHRASE=... inkgate-admin collect --store s.db --bundle <work>/exam.inkexam --keys <dir>
+     * --passphrase-env INKGATE_BENCH_PASSPHRASE --any-installation <work>/centre-*} (docs/benchmarks.md).
+     */
+    public static final class KeyFolder {
+        public static void main(String[] args) throws Exception {
+            char[] passphrase = System.getenv("INKGATE_BENCH_PASSPHRASE").toCharArray();
+            new org.inkgate.admin.core.keys.OwnerKeyStore(Path.of(args[0])).init(passphrase,
+                    new java.security.KeyPair(org.inkgate.format.crypto.Ed25519.publicOf(TestKeys.OWNER_SIGNING),
+                            TestKeys.OWNER_SIGNING),
+                    new java.security.KeyPair(TestKeys.ownerEncryptionPublic(), TestKeys.OWNER_ENCRYPTION));
+        }
+    }
+
     public static final class OneCollect {
         public static void main(String[] args) throws Exception {
             StoreLocation at = StoreLocation.parse(args[0]);
