@@ -32,13 +32,7 @@ public final class EventLog {
 
     /** Appends one event. */
     public EventLog add(long seq, String at, long mono, String type, String task, String dataJson) {
-        if (count++ > 0) {
-            text.append(',');
-        }
-        text.append('[').append(seq).append(',');
-        string(at).append(',').append(mono).append(',');
-        string(type).append(',');
-        string(task).append(',');
+        columnsBeforeData(seq, at, mono, type, task);
         string(dataJson).append(']');
         return this;
     }
@@ -50,6 +44,16 @@ public final class EventLog {
      */
     public EventLog add(long seq, String at, long mono, String type, String task, java.util.Map<String, Object> data,
             StringBuilder digestText) {
+        columnsBeforeData(seq, at, mono, type, task);
+        if (!EventText.appendJsonString(data, text, digestText)) {
+            string(EventText.json(data, new StringBuilder(), digestText));
+        }
+        text.append(']');
+        return this;
+    }
+
+    /** Opens an event's array and writes its columns up to the data's, with the comma after them. */
+    private void columnsBeforeData(long seq, String at, long mono, String type, String task) {
         if (count++ > 0) {
             text.append(',');
         }
@@ -57,11 +61,6 @@ public final class EventLog {
         string(at).append(',').append(mono).append(',');
         string(type).append(',');
         string(task).append(',');
-        if (!EventText.appendJsonString(data, text, digestText)) {
-            string(EventText.json(data, new StringBuilder(), digestText));
-        }
-        text.append(']');
-        return this;
     }
 
     /** How many events were added. */

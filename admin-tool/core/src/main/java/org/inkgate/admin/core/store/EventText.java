@@ -27,40 +27,11 @@ public final class EventText {
      * @param digestText where the content digest's text of the data is appended
      */
     public static String json(Map<String, Object> data, StringBuilder json, StringBuilder digestText) {
-        int mark = digestText.length();
         json.setLength(0);
-        json.append('{');
-        digestText.append('{');
-        String previous = null;
-        for (Map.Entry<String, Object> e : data.entrySet()) {
-            String key = e.getKey();
-            Object value = e.getValue();
-            // Jackson sorts the keys (ORDER_MAP_ENTRIES_BY_KEYS); a map not in that order takes the slow path
-            if (!plain(key) || previous != null && previous.compareTo(key) >= 0
-                    || !(value instanceof String || value instanceof Integer || value instanceof Long
-                            || value instanceof Boolean)
-                    || value instanceof String s && !plain(s)) {
-                digestText.setLength(mark);
-                digestText.append(data);
-                return new String(Json.writeLine(data), StandardCharsets.UTF_8);
-            }
-            if (previous != null) {
-                json.append(',');
-                digestText.append(", ");
-            }
-            previous = key;
-            json.append('"').append(key).append("\":");
-            digestText.append(key).append('=');
-            if (value instanceof String s) {
-                json.append('"').append(s).append('"');
-                digestText.append(s);
-            } else {
-                json.append(value);
-                digestText.append(value);
-            }
+        if (!write(data, json, "\"", digestText)) {
+            digestText.append(data);
+            return new String(Json.writeLine(data), StandardCharsets.UTF_8);
         }
-        json.append('}');
-        digestText.append('}');
         return json.toString();
     }
 
@@ -72,37 +43,55 @@ public final class EventText {
      */
     static boolean appendJsonString(Map<String, Object> data, StringBuilder log, StringBuilder digestText) {
         int logMark = log.length();
+        log.append('"');
+        if (!write(data, log, "\\\"", digestText)) {
+            log.setLength(logMark);
+            return false;
+        }
+        log.append('"');
+        return true;
+    }
+
+    /**
+     * Writes the common kind of data (keys and values that are text, whole numbers or booleans, text without
+     * characters JSON escapes, keys in Jackson's sorted order) as compact JSON to {@code out}, each of its
+     * quotes written as {@code quote}, and its {@code toString} to {@code digestText}. Returns false, with
+     * both left as they were, for any other data.
+     */
+    private static boolean write(Map<String, Object> data, StringBuilder out, String quote, StringBuilder digestText) {
+        int outMark = out.length();
         int digestMark = digestText.length();
-        log.append("\"{");
+        out.append('{');
         digestText.append('{');
         String previous = null;
         for (Map.Entry<String, Object> e : data.entrySet()) {
             String key = e.getKey();
             Object value = e.getValue();
+            // Jackson sorts the keys (ORDER_MAP_ENTRIES_BY_KEYS); a map not in that order takes the slow path
             if (!plain(key) || previous != null && previous.compareTo(key) >= 0
                     || !(value instanceof String || value instanceof Integer || value instanceof Long
                             || value instanceof Boolean)
                     || value instanceof String s && !plain(s)) {
-                log.setLength(logMark);
+                out.setLength(outMark);
                 digestText.setLength(digestMark);
                 return false;
             }
             if (previous != null) {
-                log.append(',');
+                out.append(',');
                 digestText.append(", ");
             }
             previous = key;
-            log.append("\\\"").append(key).append("\\\":");
+            out.append(quote).append(key).append(quote).append(':');
             digestText.append(key).append('=');
             if (value instanceof String s) {
-                log.append("\\\"").append(s).append("\\\"");
+                out.append(quote).append(s).append(quote);
                 digestText.append(s);
             } else {
-                log.append(value);
+                out.append(value);
                 digestText.append(value);
             }
         }
-        log.append("}\"");
+        out.append('}');
         digestText.append('}');
         return true;
     }
