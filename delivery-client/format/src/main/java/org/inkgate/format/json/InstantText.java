@@ -80,7 +80,7 @@ public final class InstantText {
         int secondOfDay = (int) (seconds - days * 86_400);
         LocalDate date = LocalDate.ofEpochDay(days);
         int nano = t.getNano();
-        int decimals = nano == 0 ? 0 : nano % 1_000_000 == 0 ? 3 : nano % 1_000 == 0 ? 6 : 9;
+        int decimals = decimals(nano);
         byte[] out = new byte[20 + (decimals == 0 ? 0 : decimals + 1)];
         digits(out, 0, date.getYear(), 4);
         out[4] = '-';
@@ -100,6 +100,28 @@ public final class InstantText {
         }
         out[out.length - 1] = 'Z';
         return new String(out, StandardCharsets.US_ASCII);
+    }
+
+    /**
+     * Whether {@link #text} writes {@code t} in exactly {@code length} characters by its direct way (the
+     * years 1970 to 9999). For a time {@link #parse} read from a text of that length this means {@link #text}
+     * gives that very text back: the fields are the same, and the number of decimals is the one {@link #text}
+     * chooses for its fraction (so {@code .000} or {@code .5} are not its spelling). Readers that keep a time's
+     * text use this to keep the bytes they read instead of writing the time out again.
+     */
+    public static boolean writesIn(Instant t, int length) {
+        long seconds = t.getEpochSecond();
+        if (seconds < 0 || seconds >= YEAR_10000) {
+            return false;
+        }
+        int nano = t.getNano();
+        int decimals = decimals(nano);
+        return length == 20 + (decimals == 0 ? 0 : decimals + 1);
+    }
+
+    /** How many decimals {@link Instant#toString()} gives a fraction of a second: 0, 3, 6 or 9. */
+    private static int decimals(int nano) {
+        return nano == 0 ? 0 : nano % 1_000_000 == 0 ? 3 : nano % 1_000 == 0 ? 6 : 9;
     }
 
     /** {@code value} as {@code count} decimal digits, leading zeros included. */

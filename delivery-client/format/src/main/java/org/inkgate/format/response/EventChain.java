@@ -66,8 +66,11 @@ public final class EventChain {
         return decodeWithHead(file, entry, encoded).events();
     }
 
-    /** The events of a checked chain and its head (what {@link #head} returns), from one pass. */
-    public record Decoded(List<ProcessEvent> events, String head) {
+    /**
+     * The events of a checked chain, its head (what {@link #head} returns) and where the events' fields lie in the
+     * log's bytes, from one pass.
+     */
+    public record Decoded(List<ProcessEvent> events, String head, EventLines lines) {
     }
 
     /**
@@ -79,6 +82,8 @@ public final class EventChain {
             throw new InvalidContent(file, "the event log \"" + entry + "\" does not end with a complete line (truncated?)");
         }
         List<ProcessEvent> events = new ArrayList<>();
+        // a written line is some 200 bytes: a first guess at the count, grown if short
+        EventLines spans = new EventLines(encoded, encoded.length / 160);
         MessageDigest digest = Sha256.newDigest();
         // the previous line's digest as bytes, compared with each line's prev without writing it out as hex
         byte[] prev = new byte[32];
@@ -92,7 +97,13 @@ public final class EventChain {
             int end;
             if (parsed != null) {
                 end = scanner.lineEnd();
+                if (scanner.plain()) {
+                    spans.addPlain(scanner.fields());
+                } else {
+                    spans.addOther();
+                }
             } else {
+                spans.addOther();
                 // not in the writer's exact form: Jackson's streaming parser, and the binding if that cannot say
                 end = start;
                 while (encoded[end] != '\n') {
@@ -119,7 +130,7 @@ public final class EventChain {
             start = end + 1;
         }
         lines.close();
-        return new Decoded(events, Hex.of(prev));
+        return new Decoded(events, Hex.of(prev), spans);
     }
 
     /** One line bound by the mapper: the reference reading, and the one that locates and words refusals. */

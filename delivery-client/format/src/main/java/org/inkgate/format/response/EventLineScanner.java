@@ -44,6 +44,15 @@ final class EventLineScanner {
     private String[] keys = new String[8];
     private Object[] values = new Object[8];
     private final String[] known = new String[256];
+    /** Start and end of each field of the line last read, in {@link EventLines.Field}'s order. */
+    private final int[] fields = new int[2 * EventLines.Field.values().length];
+    /** Where the text {@link #text} last read lies, between its quotes. */
+    private int textFrom;
+    private int textTo;
+    /** Whether a text of the line being read has an escape. */
+    private boolean escaped;
+    /** Whether the line last read is plain ({@link EventLines}). */
+    private boolean plain;
 
     EventLineScanner(byte[] bytes) {
         this.b = bytes;
@@ -69,11 +78,28 @@ final class EventLineScanner {
         return lineEnd;
     }
 
+    /** Whether the line {@link #read} last gave is plain, as {@link EventLines} defines it. */
+    boolean plain() {
+        return plain;
+    }
+
+    /** Start and end of each field of the line {@link #read} last gave, in {@link EventLines.Field}'s order (shared). */
+    int[] fields() {
+        return fields;
+    }
+
+    private void field(EventLines.Field field, int from, int to) {
+        fields[2 * field.ordinal()] = from;
+        fields[2 * field.ordinal() + 1] = to;
+    }
+
     private EventChain.Line line(int start) {
         i = start;
+        escaped = false;
         if (!literal(SEQ) || !number()) {
             return null;
         }
+        field(EventLines.Field.SEQ, start + SEQ.length, i);
         long seq = number;
         if (!literal(AT)) {
             return null;
@@ -89,10 +115,20 @@ final class EventLineScanner {
             return null;
         }
         Instant at = InstantText.parse(new String(b, from, i - from, StandardCharsets.ISO_8859_1));
-        i++;
-        if (at == null || !literal(MONO) || !number()) {
+        if (at == null) {
             return null;
         }
+        boolean timeAsWritten = InstantText.writesIn(at, i - from);
+        field(EventLines.Field.AT, from, i);
+        i++;
+        if (!literal(MONO)) {
+            return null;
+        }
+        from = i;
+        if (!number()) {
+            return null;
+        }
+        field(EventLines.Field.MONO, from, i);
         long mono = number;
         if (!literal(TYPE)) {
             return null;
@@ -101,14 +137,22 @@ final class EventLineScanner {
         if (type == null) {
             return null;
         }
+        field(EventLines.Field.TYPE, textFrom, textTo);
         String task = null;
-        if (literal(TASK) && (task = text()) == null) {
-            return null;
+        if (literal(TASK)) {
+            if ((task = text()) == null) {
+                return null;
+            }
+            field(EventLines.Field.TASK, textFrom, textTo);
+        } else {
+            field(EventLines.Field.TASK, -1, -1);
         }
         if (!literal(DATA)) {
             return null;
         }
+        from = i - 1;
         Map<String, Object> data = data();
+        field(EventLines.Field.DATA, from, i);
         if (data == null || !literal(PREV)) {
             return null;
         }
@@ -117,6 +161,7 @@ final class EventLineScanner {
             return null;
         }
         lineEnd = i + 1;
+        plain = timeAsWritten && !escaped;
         return new EventChain.Line(seq, at, mono, type, task, data, prev);
     }
 
@@ -244,6 +289,9 @@ final class EventLineScanner {
         if (to - from > MAX_TEXT) {
             return null;
         }
+        textFrom = from;
+        textTo = to;
+        escaped |= !plain;
         if (plain && ascii) {
             return known(from, to);
         }

@@ -207,7 +207,7 @@ public final class ResponsePackageReader {
                 throw new InvalidContent(name, "the signed response breaks the response rules: " + String.join("; ", problems)
                         + ". The client that wrote it is faulty; keep the file and report it.");
             }
-            return new OpenedResponse(name, envelope, response, events, installation, packageSha256);
+            return new OpenedResponse(name, envelope, response, events, log.lines(), installation, packageSha256);
         }
     }
 

@@ -59,6 +59,41 @@ class InstantTextTest {
         }
     }
 
+    /**
+     * {@code writesIn} says that {@code text} gives back the very text a time was read from exactly when it
+     * does, by the JDK's {@code Instant.toString} (the reference): over texts of every fraction length from 0
+     * to 9 digits, including zero fractions such as {@code .000}, in the years it writes directly (1970 to 9999);
+     * before 1970 it answers no, and the reader writes the time out again as before.
+     */
+    @Test
+    void writesIn_saysWhetherTheTextReadIsTheTextWritten() {
+        SplittableRandom random = new SplittableRandom(31);
+        int same = 0;
+        int other = 0;
+        for (int i = 0; i < 100_000; i++) {
+            StringBuilder s = new StringBuilder(String.format("%04d-%02d-%02dT%02d:%02d:%02d", random.nextInt(1970, 10_000),
+                    1 + random.nextInt(12), 1 + random.nextInt(28), random.nextInt(24), random.nextInt(60), random.nextInt(60)));
+            int fraction = random.nextInt(10);
+            if (fraction > 0) {
+                s.append('.');
+                for (int d = 0; d < fraction; d++) {
+                    s.append(random.nextInt(4) == 0 ? '0' : (char) ('0' + random.nextInt(10)));
+                }
+            }
+            String text = s.append('Z').toString();
+            Instant t = InstantText.parse(text);
+            boolean written = t.toString().equals(text);
+            assertEquals(written, InstantText.writesIn(t, text.length()), text);
+            if (written) {
+                same++;
+            } else {
+                other++;
+            }
+        }
+        assertEquals(true, same > 10_000 && other > 10_000, same + " written as read, " + other + " not");
+        assertEquals(false, InstantText.writesIn(Instant.parse("1969-12-31T23:59:59Z"), 20));
+    }
+
     /** Edges and 200,000 random instants with 0, 3, 6 and 9 decimals, from before 1970 to after 9999. */
     static List<Instant> times() {
         SplittableRandom random = new SplittableRandom(29);

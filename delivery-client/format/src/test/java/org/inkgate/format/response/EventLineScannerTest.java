@@ -39,6 +39,10 @@ class EventLineScannerTest {
         for (int round = 0; round < 5_000; round++) {
             byte[] line = written(random, false);
             assertTrue(check(line), () -> "a written line left to Jackson: " + new String(line, StandardCharsets.UTF_8));
+            EventLineScanner scanner = new EventLineScanner(line);
+            scanner.read(0);
+            // the writer spells times as InstantText does: only an escape makes a written line not plain
+            assertEquals(!contains(line, (byte) '\\'), scanner.plain(), () -> new String(line, StandardCharsets.UTF_8));
             check(written(random, true)); // with what is left to Jackson: refused, or read as the binding reads it
         }
     }
@@ -116,7 +120,50 @@ class EventLineScannerTest {
         for (Map.Entry<String, Object> e : reference.data().entrySet()) {
             assertEquals(e.getValue().getClass(), scanned.data().get(e.getKey()).getClass(), () -> "kind of " + e.getKey() + " in " + shown);
         }
+        if (scanner.plain()) {
+            assertPlainFields(line, scanner.fields(), reference, shown);
+        }
         return true;
+    }
+
+    /**
+     * A plain line's fields are byte for byte the JSON the mapper writes for the binding's values (texts without
+     * their quotes), as {@link EventLines} promises: whatever reads the bytes instead of the values reads the same.
+     */
+    private static void assertPlainFields(byte[] line, int[] fields, EventChain.Line reference, String shown) {
+        assertTrue(!contains(line, (byte) '\\'), () -> "plain with an escape: " + shown);
+        assertEquals(json(reference.seq()), span(line, fields, EventLines.Field.SEQ), shown);
+        assertEquals(unquoted(json(reference.at())), span(line, fields, EventLines.Field.AT), shown);
+        assertEquals(json(reference.mono()), span(line, fields, EventLines.Field.MONO), shown);
+        assertEquals(unquoted(json(reference.type())), span(line, fields, EventLines.Field.TYPE), shown);
+        if (reference.task() == null) {
+            assertEquals(-1, fields[2 * EventLines.Field.TASK.ordinal()], shown);
+        } else {
+            assertEquals(unquoted(json(reference.task())), span(line, fields, EventLines.Field.TASK), shown);
+        }
+        assertEquals(json(reference.data()), span(line, fields, EventLines.Field.DATA), shown);
+    }
+
+    private static String json(Object value) {
+        return new String(org.inkgate.format.json.Json.writeLine(value), StandardCharsets.UTF_8);
+    }
+
+    private static String unquoted(String jsonText) {
+        return jsonText.substring(1, jsonText.length() - 1);
+    }
+
+    private static String span(byte[] line, int[] fields, EventLines.Field field) {
+        int from = fields[2 * field.ordinal()];
+        return new String(line, from, fields[2 * field.ordinal() + 1] - from, StandardCharsets.UTF_8);
+    }
+
+    private static boolean contains(byte[] bytes, byte wanted) {
+        for (byte b : bytes) {
+            if (b == wanted) {
+                return true;
+            }
+        }
+        return false;
     }
 
     private static EventChain.Line bound(byte[] line) {

@@ -187,7 +187,15 @@ public final class Collector {
         ContentDigest digest = new ContentDigest();
         digest.add(Json.writeLine(opened.response()));
         StringBuilder line = new StringBuilder(256);
-        for (org.inkgate.format.response.ProcessEvent e : events) {
+        org.inkgate.format.response.EventLines lines = opened.eventLines();
+        for (int i = 0; i < events.size(); i++) {
+            if (lines.plain(i)) {
+                // the line's own bytes, which are the JSON of the values (EventLines): nothing to write out
+                log.addPlain(lines, i);
+                digest.addPlain(lines, i);
+                continue;
+            }
+            org.inkgate.format.response.ProcessEvent e = events.get(i);
             String at = org.inkgate.format.json.InstantText.text(e.at());
             // the same characters as seq|at|mono|type|task|data by string concatenation: stored digests stay valid
             line.setLength(0);

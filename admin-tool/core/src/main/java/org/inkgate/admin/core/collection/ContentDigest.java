@@ -4,6 +4,7 @@ import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import org.inkgate.format.crypto.Hex;
 import org.inkgate.format.crypto.Sha256;
+import org.inkgate.format.response.EventLines;
 
 /**
  * The SHA-256 of a package's content ({@link Collector#contentSha256}): each part hashed after its length
@@ -16,7 +17,7 @@ import org.inkgate.format.crypto.Sha256;
 final class ContentDigest {
 
     private final MessageDigest digest = Sha256.newDigest();
-    private final byte[] buffer = new byte[16 * 1024];
+    private byte[] buffer = new byte[16 * 1024];
     private int used;
 
     /** Hashes one part given as bytes. */
@@ -41,6 +42,76 @@ final class ContentDigest {
             }
             buffer[used++] = (byte) text.charAt(i);
         }
+    }
+
+    /**
+     * Hashes the part of the event at {@code index} of a log read from plain lines, {@code seq|at|mono|type|task|data}
+     * with the data map's {@code toString}, from the line's bytes: a plain line's fields are the JSON of their
+     * values ({@link EventLines}), and a data object of texts, whole numbers and booleans with no escape becomes its
+     * map's {@code toString} by dropping the quotes, writing {@code =} for the colon after a key and {@code ", "}
+     * for the comma between entries; the text in UTF-8, as {@link #add(CharSequence)} would encode it.
+     */
+    void addPlain(EventLines lines, int index) {
+        byte[] b = lines.bytes();
+        int seqFrom = lines.start(index, EventLines.Field.SEQ);
+        int dataFrom = lines.start(index, EventLines.Field.DATA);
+        int dataTo = lines.end(index, EventLines.Field.DATA);
+        // at most: the line's bytes up to the data's end and a space for each comma of the data
+        int most = 4 + dataTo - seqFrom + (dataTo - dataFrom);
+        if (most > buffer.length - used) {
+            flush();
+            if (most > buffer.length) {
+                buffer = new byte[most];
+            }
+        }
+        byte[] out = buffer;
+        int lengthAt = used;
+        int n = used + 4;
+        n = copy(b, seqFrom, lines.end(index, EventLines.Field.SEQ), out, n);
+        out[n++] = '|';
+        n = copy(b, lines.start(index, EventLines.Field.AT), lines.end(index, EventLines.Field.AT), out, n);
+        out[n++] = '|';
+        n = copy(b, lines.start(index, EventLines.Field.MONO), lines.end(index, EventLines.Field.MONO), out, n);
+        out[n++] = '|';
+        n = copy(b, lines.start(index, EventLines.Field.TYPE), lines.end(index, EventLines.Field.TYPE), out, n);
+        out[n++] = '|';
+        int taskFrom = lines.start(index, EventLines.Field.TASK);
+        if (taskFrom < 0) {
+            out[n++] = 'n';
+            out[n++] = 'u';
+            out[n++] = 'l';
+            out[n++] = 'l';
+        } else {
+            n = copy(b, taskFrom, lines.end(index, EventLines.Field.TASK), out, n);
+        }
+        out[n++] = '|';
+        boolean inText = false;
+        for (int k = dataFrom; k < dataTo; k++) {
+            byte c = b[k];
+            if (c == '"') {
+                inText = !inText;
+            } else if (inText) {
+                out[n++] = c;
+            } else if (c == ':') {
+                out[n++] = '=';
+            } else if (c == ',') {
+                out[n++] = ',';
+                out[n++] = ' ';
+            } else {
+                out[n++] = c;
+            }
+        }
+        int length = n - lengthAt - 4;
+        out[lengthAt] = (byte) (length >>> 24);
+        out[lengthAt + 1] = (byte) (length >>> 16);
+        out[lengthAt + 2] = (byte) (length >>> 8);
+        out[lengthAt + 3] = (byte) length;
+        used = n;
+    }
+
+    private static int copy(byte[] from, int start, int end, byte[] to, int at) {
+        System.arraycopy(from, start, to, at, end - start);
+        return at + end - start;
     }
 
     /** The digest of everything added, in lower-case hex. */

@@ -3,6 +3,9 @@ package org.inkgate.admin.core.store;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
 import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
+import org.inkgate.format.response.EventLines;
 
 /**
  * How the results store keeps one sitting's process events: one JSON array per sitting (table
@@ -23,18 +26,24 @@ public final class EventLog {
     /** The columns of an event, in the order of each event's array and of the view (Schema, version 10). */
     public static final String COLUMNS = "seq, at, mono, type, task_id, data_json";
 
-    private final StringBuilder text;
+    /** The array so far, in UTF-8. */
+    private byte[] bytes;
+    private int used;
+    /** An event written out from its values, before it joins the bytes. */
+    private final StringBuilder pending = new StringBuilder(256);
     private int count;
 
     public EventLog(int expectedEvents) {
-        text = new StringBuilder(Math.max(16, expectedEvents) * 160).append('[');
+        bytes = new byte[Math.max(16, expectedEvents) * 160];
+        bytes[used++] = '[';
     }
 
     /** Appends one event. */
     public EventLog add(long seq, String at, long mono, String type, String task, String dataJson) {
+        pending.setLength(0);
         columnsBeforeData(seq, at, mono, type, task);
         string(dataJson).append(']');
-        return this;
+        return flushPending();
     }
 
     /**
@@ -44,23 +53,111 @@ public final class EventLog {
      */
     public EventLog add(long seq, String at, long mono, String type, String task, java.util.Map<String, Object> data,
             StringBuilder digestText) {
+        pending.setLength(0);
         columnsBeforeData(seq, at, mono, type, task);
-        if (!EventText.appendJsonString(data, text, digestText)) {
+        if (!EventText.appendJsonString(data, pending, digestText)) {
             string(EventText.json(data, new StringBuilder(), digestText));
         }
-        text.append(']');
+        pending.append(']');
+        return flushPending();
+    }
+
+    /**
+     * Appends the event at {@code index} of a log read from plain lines, by copying its fields' bytes: a plain
+     * line's fields are the JSON of their values as the mapper writes them ({@link EventLines}), so the array
+     * gets the same characters as from {@link #add(long, String, long, String, String, java.util.Map, StringBuilder)};
+     * the data's JSON becomes a JSON string by escaping its quotes, the only characters of it that need it, since
+     * a plain line has no backslash and no control character.
+     */
+    public EventLog addPlain(EventLines lines, int index) {
+        byte[] b = lines.bytes();
+        int dataFrom = lines.start(index, EventLines.Field.DATA);
+        int dataTo = lines.end(index, EventLines.Field.DATA);
+        // at most: the line's own bytes, every quote of the data escaped, and the punctuation around the columns
+        room(lines.end(index, EventLines.Field.DATA) - lines.start(index, EventLines.Field.SEQ) + (dataTo - dataFrom) + 16);
+        byte[] out = bytes;
+        int n = used;
+        if (count++ > 0) {
+            out[n++] = ',';
+        }
+        out[n++] = '[';
+        n = copy(b, lines.start(index, EventLines.Field.SEQ), lines.end(index, EventLines.Field.SEQ), out, n);
+        out[n++] = ',';
+        out[n++] = '"';
+        n = copy(b, lines.start(index, EventLines.Field.AT), lines.end(index, EventLines.Field.AT), out, n);
+        out[n++] = '"';
+        out[n++] = ',';
+        n = copy(b, lines.start(index, EventLines.Field.MONO), lines.end(index, EventLines.Field.MONO), out, n);
+        out[n++] = ',';
+        out[n++] = '"';
+        n = copy(b, lines.start(index, EventLines.Field.TYPE), lines.end(index, EventLines.Field.TYPE), out, n);
+        out[n++] = '"';
+        out[n++] = ',';
+        int taskFrom = lines.start(index, EventLines.Field.TASK);
+        if (taskFrom < 0) {
+            out[n++] = 'n';
+            out[n++] = 'u';
+            out[n++] = 'l';
+            out[n++] = 'l';
+        } else {
+            out[n++] = '"';
+            n = copy(b, taskFrom, lines.end(index, EventLines.Field.TASK), out, n);
+            out[n++] = '"';
+        }
+        out[n++] = ',';
+        out[n++] = '"';
+        for (int k = dataFrom; k < dataTo; k++) {
+            byte c = b[k];
+            if (c == '"') {
+                out[n++] = '\\';
+            }
+            out[n++] = c;
+        }
+        out[n++] = '"';
+        out[n++] = ']';
+        used = n;
         return this;
+    }
+
+    private static int copy(byte[] from, int start, int end, byte[] to, int at) {
+        System.arraycopy(from, start, to, at, end - start);
+        return at + end - start;
     }
 
     /** Opens an event's array and writes its columns up to the data's, with the comma after them. */
     private void columnsBeforeData(long seq, String at, long mono, String type, String task) {
         if (count++ > 0) {
-            text.append(',');
+            pending.append(',');
         }
-        text.append('[').append(seq).append(',');
+        pending.append('[').append(seq).append(',');
         string(at).append(',').append(mono).append(',');
         string(type).append(',');
         string(task).append(',');
+    }
+
+    /** Moves the event written out in {@link #pending} into the bytes, in UTF-8. */
+    private EventLog flushPending() {
+        int n = pending.length();
+        room(n);
+        for (int i = 0; i < n; i++) {
+            char c = pending.charAt(i);
+            if (c >= 0x80) {
+                // the JDK's encoder, as the database driver would have used on the text before
+                byte[] encoded = pending.substring(i).getBytes(StandardCharsets.UTF_8);
+                room(encoded.length);
+                System.arraycopy(encoded, 0, bytes, used, encoded.length);
+                used += encoded.length;
+                return this;
+            }
+            bytes[used++] = (byte) c;
+        }
+        return this;
+    }
+
+    private void room(int more) {
+        if (used + more + 1 > bytes.length) {
+            bytes = Arrays.copyOf(bytes, Math.max(bytes.length * 2, used + more + 1));
+        }
     }
 
     /** How many events were added. */
@@ -70,31 +167,33 @@ public final class EventLog {
 
     /** The array's text. */
     public String text() {
-        return text + "]";
+        room(1);
+        bytes[used] = ']';
+        return new String(bytes, 0, used + 1, StandardCharsets.UTF_8);
     }
 
     /** A JSON string as RFC 8259 section 7 requires it: quote, backslash and control characters escaped; null as null. */
     private StringBuilder string(String s) {
         if (s == null) {
-            return text.append("null");
+            return pending.append("null");
         }
-        text.append('"');
+        pending.append('"');
         int from = 0;
         for (int i = 0; i < s.length(); i++) {
             char c = s.charAt(i);
             if (c == '"' || c == '\\' || c < 0x20) {
-                text.append(s, from, i).append('\\');
+                pending.append(s, from, i).append('\\');
                 switch (c) {
-                    case '"', '\\' -> text.append(c);
-                    case '\n' -> text.append('n');
-                    case '\r' -> text.append('r');
-                    case '\t' -> text.append('t');
-                    default -> text.append(String.format("u%04x", (int) c));
+                    case '"', '\\' -> pending.append(c);
+                    case '\n' -> pending.append('n');
+                    case '\r' -> pending.append('r');
+                    case '\t' -> pending.append('t');
+                    default -> pending.append(String.format("u%04x", (int) c));
                 }
                 from = i + 1;
             }
         }
-        return text.append(s, from, s.length()).append('"');
+        return pending.append(s, from, s.length()).append('"');
     }
 
     /** One event as the store gives it back. */
