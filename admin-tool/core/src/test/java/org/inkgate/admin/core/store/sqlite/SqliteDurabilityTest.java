@@ -34,6 +34,22 @@ class SqliteDurabilityTest {
         }
     }
 
+    @Test
+    void newResultsStore_has16KiBPages_andAStoreMadeWith4KiBKeepsThem() throws Exception {
+        try (SqliteResultsStore s = SqliteResultsStore.open(dir.resolve("new.db"))) {
+            assertEquals(16_384, pragma(s.connection(), "page_size"));
+            assertEquals("wal", pragmaText(s.connection(), "journal_mode"));
+        }
+        Path old = dir.resolve("old.db");
+        try (Connection c = java.sql.DriverManager.getConnection("jdbc:sqlite:" + old); var st = c.createStatement()) {
+            st.execute("CREATE TABLE made_before(x)"); // SQLite's default pages (4,096 bytes since 3.12.0)
+        }
+        try (SqliteResultsStore s = SqliteResultsStore.open(old)) {
+            assertEquals(4_096, pragma(s.connection(), "page_size"));
+            assertEquals("wal", pragmaText(s.connection(), "journal_mode"));
+        }
+    }
+
     private static int pragma(Connection c, String name) throws SQLException {
         try (var st = c.createStatement(); var rs = st.executeQuery("PRAGMA " + name)) {
             return rs.getInt(1);
