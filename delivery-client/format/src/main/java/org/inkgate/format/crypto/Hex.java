@@ -35,5 +35,22 @@ public final class Hex {
         return true;
     }
 
+    /**
+     * Whether the {@code 2 * bytes.length} bytes of {@code text} from {@code from} are exactly the ASCII of
+     * {@link #of}{@code (bytes)}, as {@link #spells(String, byte[])} judges the same characters.
+     */
+    public static boolean spells(byte[] text, int from, byte[] bytes) {
+        if (from < 0 || text.length - from < bytes.length * 2) {
+            return false;
+        }
+        for (int i = 0; i < bytes.length; i++) {
+            int b = bytes[i] & 0xff;
+            if (text[from + 2 * i] != DIGITS[b >>> 4] || text[from + 2 * i + 1] != DIGITS[b & 0xf]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
     private static final char[] DIGITS = "0123456789abcdef".toCharArray();
 }

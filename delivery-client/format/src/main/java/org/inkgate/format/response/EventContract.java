@@ -1,8 +1,11 @@
 package org.inkgate.format.response;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collection;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.inkgate.format.refusal.FormatRefusal;
 
@@ -39,14 +42,32 @@ public final class EventContract {
     public static List<Violation> check(Collection<String> responseTaskIds, List<ProcessEvent> events) {
         Set<String> tasks = Set.copyOf(responseTaskIds);
         List<Violation> out = new ArrayList<>();
+        // a log repeats a few shapes (a type with its data keys) thousands of times: the last keys that kept the
+        // contract for each type name are remembered, and an event with the same keys needs only its task checked
+        Map<String, Shape> kept = new HashMap<>();
         for (ProcessEvent e : events) {
+            String[] keys = e.data() instanceof EventData d ? d.keyArray() : null;
+            Shape shape = keys == null ? null : kept.get(e.type());
+            if (shape != null && Arrays.equals(shape.keys(), keys)) {
+                checkTask(shape.type(), e, tasks, out);
+                continue;
+            }
             switch (EventType.parse(e.type())) {
                 case EventType.Unknown u -> out.add(new Violation(e.seq(), e.type(), Problem.UNKNOWN_TYPE,
                         "not an event type of the response format (docs/formats.md lists them)"));
-                case EventType.Known(EventType type) -> check(type, e, tasks, out);
+                case EventType.Known(EventType type) -> {
+                    if (checkKeys(type, e, out) && keys != null) {
+                        kept.put(e.type(), new Shape(type, keys));
+                    }
+                    checkTask(type, e, tasks, out);
+                }
             }
         }
         return out;
+    }
+
+    /** A type and data keys that keep the contract together. */
+    private record Shape(EventType type, String[] keys) {
     }
 
     /** The same check for a response document: its tasks are the ones events may name. */
@@ -54,7 +75,9 @@ public final class EventContract {
         return check(response.tasks().stream().map(TaskResponse::taskId).toList(), events);
     }
 
-    private static void check(EventType type, ProcessEvent e, Set<String> tasks, List<Violation> out) {
+    /** Adds what is wrong with the event's data keys; true if nothing is. */
+    private static boolean checkKeys(EventType type, ProcessEvent e, List<Violation> out) {
+        int before = out.size();
         for (String key : type.requiredKeys()) {
             if (!e.data().containsKey(key)) {
                 out.add(new Violation(e.seq(), e.type(), Problem.MISSING_KEY, "data key \"" + key + "\" missing"));
@@ -67,6 +90,11 @@ public final class EventContract {
                                 ? "" : " (optional " + type.optionalKeys() + ")")));
             }
         }
+        return out.size() == before;
+    }
+
+    /** Adds what is wrong with the event's task: missing, not allowed, or not one of the response's. */
+    private static void checkTask(EventType type, ProcessEvent e, Set<String> tasks, List<Violation> out) {
         boolean hasTask = e.task() != null;
         switch (type.level()) {
             case TASK -> {

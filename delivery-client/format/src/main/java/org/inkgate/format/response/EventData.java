@@ -45,6 +45,11 @@ final class EventData extends AbstractMap<String, Object> {
         return new EventData(Arrays.copyOf(keys, size), Arrays.copyOf(values, size));
     }
 
+    /** The keys in order, shared: for readers in this package that compare whole key sets, never to change. */
+    String[] keyArray() {
+        return keys;
+    }
+
     @Override
     public int size() {
         return keys.length;

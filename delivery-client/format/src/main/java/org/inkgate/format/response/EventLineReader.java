@@ -32,7 +32,7 @@ final class EventLineReader {
         EventLineScanner scanner = new EventLineScanner(bytes);
         EventChain.Line scanned = scanner.read(offset);
         if (scanned != null && scanner.lineEnd() == offset + length) {
-            return scanned;
+            return scanner.withPrevText(scanned);
         }
         return parse(bytes, offset, length);
     }

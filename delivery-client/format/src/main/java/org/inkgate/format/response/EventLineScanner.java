@@ -4,6 +4,7 @@ import java.nio.charset.StandardCharsets;
 import java.time.Instant;
 import java.util.Arrays;
 import java.util.Map;
+import org.inkgate.format.json.InstantBytes;
 import org.inkgate.format.json.InstantText;
 
 /**
@@ -39,6 +40,7 @@ final class EventLineScanner {
 
     private final byte[] b;
     private final JsonTextBytes decoder;
+    private final InstantBytes times = new InstantBytes();
     private int i;
     private long number;
     private String[] keys = new String[8];
@@ -60,6 +62,10 @@ final class EventLineScanner {
     }
 
     private int lineEnd;
+    private int prevFrom;
+
+    /** A SHA-256 in hex, as the writer writes the previous line's digest. */
+    static final int PREV_DIGITS = 64;
 
     /**
      * The line starting at {@code start} and ending at the next newline or the end of the bytes, or null
@@ -76,6 +82,34 @@ final class EventLineScanner {
     /** Where the line {@link #read} last gave ends: the index of its newline, or the length of the bytes. */
     int lineEnd() {
         return lineEnd;
+    }
+
+    /**
+     * Where the 64 characters of {@code prev} start, when the line {@link #read} last gave has them between quotes
+     * (its {@code prev} is then null and the caller compares these bytes with the digest they must spell; if they do
+     * not spell it, the general reader decides what the line says). Otherwise the line's {@code prev} is its text.
+     */
+    int prevFrom() {
+        return prevFrom;
+    }
+
+    /** The line {@link #read} last gave, with its prev as text also when it was left as bytes ({@link #prevFrom}). */
+    EventChain.Line withPrevText(EventChain.Line line) {
+        if (line.prev() != null) {
+            return line;
+        }
+        return new EventChain.Line(line.seq(), line.at(), line.mono(), line.type(), line.task(), line.data(),
+                new String(b, prevFrom, PREV_DIGITS, StandardCharsets.ISO_8859_1));
+    }
+
+    private boolean lowerHex(int from, int count) {
+        for (int k = from; k < from + count; k++) {
+            byte c = b[k];
+            if ((c < '0' || c > '9') && (c < 'a' || c > 'f')) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Whether the line {@link #read} last gave is plain, as {@link EventLines} defines it. */
@@ -114,7 +148,7 @@ final class EventLineScanner {
         if (i - from > 30) {
             return null;
         }
-        Instant at = InstantText.parse(new String(b, from, i - from, StandardCharsets.ISO_8859_1));
+        Instant at = times.parse(b, from, i);
         if (at == null) {
             return null;
         }
@@ -156,8 +190,16 @@ final class EventLineScanner {
         if (data == null || !literal(PREV)) {
             return null;
         }
-        String prev = text();
-        if (prev == null || b[i] != '}' || i + 1 < b.length && b[i + 1] != '\n') {
+        String prev;
+        if (b[i] == '"' && b[i + 1 + PREV_DIGITS] == '"' && lowerHex(i + 1, PREV_DIGITS)) {
+            // the writer's 64 lower-case digits, compared as bytes by the caller (prevFrom) instead of becoming text
+            prev = null;
+            prevFrom = i + 1;
+            i += PREV_DIGITS + 2;
+        } else if ((prev = text()) == null) {
+            return null;
+        }
+        if (b[i] != '}' || i + 1 < b.length && b[i + 1] != '\n') {
             return null;
         }
         lineEnd = i + 1;
