@@ -45,6 +45,17 @@ final class EventData extends AbstractMap<String, Object> {
         return new EventData(Arrays.copyOf(keys, size), Arrays.copyOf(values, size));
     }
 
+    /**
+     * The data of {@code size} entries whose keys are those of {@code sorted}, an array of an earlier event's data
+     * ({@link #keyArray}), so known to be strictly ascending: it is shared, and the values are copied.
+     */
+    static EventData withKeysOf(EventData sorted, Object[] values, int size) {
+        if (sorted.keys.length != size) {
+            throw new IllegalArgumentException(size + " values for " + sorted.keys.length + " keys");
+        }
+        return new EventData(sorted.keys, Arrays.copyOf(values, size));
+    }
+
     /** The keys in order, shared: for readers in this package that compare whole key sets, never to change. */
     String[] keyArray() {
         return keys;

@@ -15,7 +15,9 @@ import org.inkgate.format.json.InstantText;
  * well-formed UTF-8 with JSON's escapes (surrogates only as an escaped pair) and at most {@value #MAX_TEXT} bytes.
  * For any other line it answers null and {@link EventLineReader} reads the line with Jackson, which
  * decides as before; so a line this class accepts is one the binding accepts with the same values
- * ({@code EventLineScannerTest} compares the two over written, hand-made and damaged lines).
+ * ({@code EventLineScannerTest} compares the two over written, hand-made and damaged lines). One
+ * exception, for speed: 64 bytes of {@code prev} between quotes are left as bytes for the caller, and the
+ * line counts as read only if they spell the digest the chain expects ({@link #prevFrom}).
  *
  * <p>Why: a general parser paid for what a written log never has (names in any order, spacing,
  * nesting, every kind of number), about a quarter of a collect's reading time, and its large methods
@@ -46,6 +48,10 @@ final class EventLineScanner {
     private String[] keys = new String[8];
     private Object[] values = new Object[8];
     private final String[] known = new String[256];
+    /** Data read earlier, by a hash of their keys: their key arrays are shared with later data of the same keys. */
+    private final EventData[] keySets = new EventData[64];
+    /** The bytes of each text in {@link #known}. */
+    private final byte[][] knownBytes = new byte[256][];
     /** Start and end of each field of the line last read, in {@link EventLines.Field}'s order. */
     private final int[] fields = new int[2 * EventLines.Field.values().length];
     /** Where the text {@link #text} last read lies, between its quotes. */
@@ -85,9 +91,10 @@ final class EventLineScanner {
     }
 
     /**
-     * Where the 64 characters of {@code prev} start, when the line {@link #read} last gave has them between quotes
-     * (its {@code prev} is then null and the caller compares these bytes with the digest they must spell; if they do
-     * not spell it, the general reader decides what the line says). Otherwise the line's {@code prev} is its text.
+     * Where the 64 bytes of {@code prev} start, when the line {@link #read} last gave has 64 between quotes: its
+     * {@code prev} is then null, and the line is read only if those bytes spell the digest the chain expects (the
+     * caller compares them; lower-case hex digits, then, as the writer writes them). If they do not, nothing is
+     * known about the line and the general reader decides what it says. Otherwise the line's {@code prev} is its text.
      */
     int prevFrom() {
         return prevFrom;
@@ -100,16 +107,6 @@ final class EventLineScanner {
         }
         return new EventChain.Line(line.seq(), line.at(), line.mono(), line.type(), line.task(), line.data(),
                 new String(b, prevFrom, PREV_DIGITS, StandardCharsets.ISO_8859_1));
-    }
-
-    private boolean lowerHex(int from, int count) {
-        for (int k = from; k < from + count; k++) {
-            byte c = b[k];
-            if ((c < '0' || c > '9') && (c < 'a' || c > 'f')) {
-                return false;
-            }
-        }
-        return true;
     }
 
     /** Whether the line {@link #read} last gave is plain, as {@link EventLines} defines it. */
@@ -191,8 +188,8 @@ final class EventLineScanner {
             return null;
         }
         String prev;
-        if (b[i] == '"' && b[i + 1 + PREV_DIGITS] == '"' && lowerHex(i + 1, PREV_DIGITS)) {
-            // the writer's 64 lower-case digits, compared as bytes by the caller (prevFrom) instead of becoming text
+        if (b[i] == '"' && b[i + 1 + PREV_DIGITS] == '"') {
+            // 64 characters, compared as bytes by the caller (prevFrom) instead of becoming text for each line
             prev = null;
             prevFrom = i + 1;
             i += PREV_DIGITS + 2;
@@ -243,12 +240,43 @@ final class EventLineScanner {
             values[size++] = value;
             c = b[i++];
             if (c == '}') {
-                return EventData.ofSorted(keys, values, size); // null unless strictly ascending, as written
+                return data(size); // null unless strictly ascending, as written
             }
             if (c != ',') {
                 return null;
             }
         }
+    }
+
+    /**
+     * The data read into {@link #keys} and {@link #values}: with the key array of an earlier event whose keys were
+     * the very same texts (the table of texts met before gives the same text for the same bytes), else checked
+     * for ascending order and copied. An event log has a few key sets, repeated thousands of times.
+     */
+    private EventData data(int size) {
+        int slot = (keys[0].hashCode() + 31 * keys[size - 1].hashCode() + size) & (keySets.length - 1);
+        EventData earlier = keySets[slot];
+        if (earlier != null && sameKeys(earlier.keyArray(), size)) {
+            return EventData.withKeysOf(earlier, values, size);
+        }
+        EventData data = EventData.ofSorted(keys, values, size);
+        if (data != null) {
+            keySets[slot] = data;
+        }
+        return data;
+    }
+
+    /** Whether {@code set} holds the very texts (the same objects) of the {@code size} keys just read. */
+    private boolean sameKeys(String[] set, int size) {
+        if (set.length != size) {
+            return false;
+        }
+        for (int k = 0; k < size; k++) {
+            if (set[k] != keys[k]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Integer when it fits, else Long: the kinds Jackson gives a whole number in the range of a long in a map. */
@@ -309,8 +337,10 @@ final class EventLineScanner {
         int from = ++i;
         boolean plain = true;
         boolean ascii = true;
+        int h = 0; // for the table of texts met before
         while (true) {
             byte c = b[i];
+            h = 31 * h + c;
             if (c == '"') {
                 break;
             }
@@ -335,34 +365,28 @@ final class EventLineScanner {
         textTo = to;
         escaped |= !plain;
         if (plain && ascii) {
-            return known(from, to);
+            return known(from, to, h);
         }
         return plain ? decoder.utf8(from, to) : decoder.unescape(from, to);
     }
 
-    /** ASCII text without escapes, from the table of texts met before when it is short. */
-    private String known(int from, int to) {
+    /**
+     * ASCII text without escapes, from the table of texts met before when it is short; {@code h} is a hash of
+     * its bytes (any function of them: it only picks the slot, the bytes decide).
+     */
+    private String known(int from, int to, int h) {
         int n = to - from;
         if (n > 32) {
             return new String(b, from, n, StandardCharsets.ISO_8859_1);
         }
-        int h = n;
-        for (int k = from; k < to; k++) {
-            h = 31 * h + b[k];
-        }
         int slot = (h ^ h >>> 8) & (known.length - 1);
-        String s = known[slot];
-        if (s != null && s.length() == n) {
-            int k = 0;
-            while (k < n && s.charAt(k) == b[from + k]) {
-                k++;
-            }
-            if (k == n) {
-                return s;
-            }
+        byte[] met = knownBytes[slot];
+        if (met != null && Arrays.equals(met, 0, met.length, b, from, to)) {
+            return known[slot];
         }
-        s = new String(b, from, n, StandardCharsets.ISO_8859_1);
+        String s = new String(b, from, n, StandardCharsets.ISO_8859_1);
         known[slot] = s;
+        knownBytes[slot] = Arrays.copyOfRange(b, from, to);
         return s;
     }
 

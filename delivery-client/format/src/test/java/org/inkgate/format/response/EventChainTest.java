@@ -48,6 +48,34 @@ class EventChainTest {
         assertThrows(InvalidContent.class, () -> EventChain.decode("f", "events.jsonl", cut));
     }
 
+    /**
+     * A prev of 64 characters that are not the digest as the writer spells it is judged as the general reader
+     * (Jackson's binding) judges the line: the right digest in capitals or the wrong one breaks the chain, a raw
+     * control character makes the line malformed JSON, the digest with an escaped digit is read as the digest.
+     */
+    @Test
+    void decode_prevNotAsWritten_isJudgedAsTheBindingJudgesIt() throws Exception {
+        String[] lines = new String(EventChain.encode(SampleResponse.events(2)), StandardCharsets.UTF_8).split("\n");
+        String digest = Sha256.hex(lines[0].getBytes(StandardCharsets.UTF_8));
+        String capitals = digest.toUpperCase(java.util.Locale.ROOT);
+        String wrong = Sha256.hex(lines[1].getBytes(StandardCharsets.UTF_8));
+        for (String prev : List.of(capitals, wrong, "\u0001" + digest.substring(1))) {
+            String changed = lines[1].replace(digest, prev);
+            if (!capitals.equals(digest)) {
+                assertTrue(!changed.equals(lines[1]));
+            }
+            byte[] log = (lines[0] + "\n" + changed + "\n").getBytes(StandardCharsets.UTF_8);
+            org.inkgate.format.refusal.FormatRefusal refusal = assertThrows(org.inkgate.format.refusal.FormatRefusal.class,
+                    () -> EventChain.decode("f", "events.jsonl", log), prev);
+            assertEquals(prev.startsWith("\u0001") ? org.inkgate.format.refusal.MalformedJson.class : BrokenHashChain.class,
+                    refusal.getClass(), prev);
+        }
+        String escaped = lines[1].replace("\"prev\":\"" + digest.charAt(0), "\"prev\":\"\\u00" + Integer.toHexString(digest.charAt(0)));
+        List<ProcessEvent> read = EventChain.decode("f", "events.jsonl",
+                (lines[0] + "\n" + escaped + "\n").getBytes(StandardCharsets.UTF_8));
+        assertEquals(2, read.size(), escaped);
+    }
+
     @Test
     void encode_gapInSequence_isRejected() {
         List<ProcessEvent> events = new java.util.ArrayList<>(SampleResponse.events(3));
