@@ -39,6 +39,7 @@ class LauncherJitFlagsTest {
         assertTrue(args.containsAll(List.of("-XX:Tier4InvocationThreshold=50000", "-XX:Tier4MinInvocationThreshold=6000",
                 "-XX:Tier4CompileThreshold=150000", "-XX:Tier4BackEdgeThreshold=400000")), args.toString());
         assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel")), args.toString());
+        assertTrue(args.contains("-XX:+UseSerialGC"), args.toString());
         assertEquals(List.of("org.inkgate.admin.cli.InkgateAdmin", "collect", "--store", "s.db", "in"),
                 args.subList(args.size() - 5, args.size()));
     }
@@ -47,7 +48,8 @@ class LauncherJitFlagsTest {
     void otherCommands_keepTheUsualCompilers() throws Exception {
         for (String command : List.of("bundle", "gui", "export", "--help")) {
             List<String> args = javaArguments(command);
-            assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel") || a.startsWith("-XX:Tier4")),
+            assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel") || a.startsWith("-XX:Tier4")
+                    || a.equals("-XX:+UseSerialGC")),
                     command + ": " + args);
             assertEquals(command, args.get(args.size() - 1));
         }
