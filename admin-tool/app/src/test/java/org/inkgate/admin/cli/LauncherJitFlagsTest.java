@@ -40,6 +40,9 @@ class LauncherJitFlagsTest {
                 "-XX:Tier4CompileThreshold=150000", "-XX:Tier4BackEdgeThreshold=400000")), args.toString());
         assertFalse(args.stream().anyMatch(a -> a.startsWith("-XX:TieredStopAtLevel")), args.toString());
         assertTrue(args.contains("-XX:+UseSerialGC"), args.toString());
+        // the GCM classes compiled early, not the whole crypto provider (key schedules, HMAC)
+        assertTrue(args.contains("-XX:CompileCommand=CompileThresholdScaling,com.sun.crypto.provider.G*::*,0.01"), args.toString());
+        assertFalse(args.stream().anyMatch(a -> a.contains("com.sun.crypto.provider.*::*")), args.toString());
         assertEquals(List.of("org.inkgate.admin.cli.InkgateAdmin", "collect", "--store", "s.db", "in"),
                 args.subList(args.size() - 5, args.size()));
     }

@@ -225,7 +225,7 @@ public final class Collector {
         OpenedResponse opened = r.opened();
         ResponseDocument d = opened.response();
         List<PackageContentRules.Breach> breaches = PackageContentRules.beforeBundle(d);
-        breaches.addAll(PackageContentRules.nulCharacters(d, opened.events()));
+        breaches.addAll(PackageContentRules.nulCharacters(d, opened.events(), opened.eventLines()));
         if (!breaches.isEmpty()) {
             return refuse(r, breaches);
         }
