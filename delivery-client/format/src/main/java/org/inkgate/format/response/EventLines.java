@@ -38,6 +38,9 @@ public final class EventLines {
     private final byte[] bytes;
     private int[] spans;
     private int count;
+    /** The indexes of the events not read from plain lines, in order. */
+    private int[] others = new int[8];
+    private int otherCount;
 
     EventLines(byte[] bytes, int expectedEvents) {
         this.bytes = bytes;
@@ -64,6 +67,10 @@ public final class EventLines {
     void addOther() {
         grow();
         spans[count * STRIDE] = -1;
+        if (otherCount == others.length) {
+            others = Arrays.copyOf(others, otherCount * 2);
+        }
+        others[otherCount++] = count;
         count++;
     }
 
@@ -81,6 +88,14 @@ public final class EventLines {
     /** How many events the log holds. */
     public int events() {
         return count;
+    }
+
+    /**
+     * The indexes of the events not read from plain lines, in ascending order: for a reader that needs to look only at
+     * those (a plain line has no escape and no control character), without going through thousands of plain ones.
+     */
+    public int[] others() {
+        return Arrays.copyOf(others, otherCount);
     }
 
     /** Whether the event at {@code index} (0 for the first) was read from a plain line. */

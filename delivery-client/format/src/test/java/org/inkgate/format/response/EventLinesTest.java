@@ -1,5 +1,6 @@
 package org.inkgate.format.response;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 
@@ -44,6 +45,7 @@ class EventLinesTest {
         assertEquals("t1", span(lines, 0, EventLines.Field.TASK));
         assertEquals(-1, lines.start(1, EventLines.Field.TASK));
         assertThrows(IllegalStateException.class, () -> lines.start(2, EventLines.Field.DATA));
+        assertArrayEquals(new int[] {2}, lines.others());
     }
 
     @Test
@@ -60,6 +62,7 @@ class EventLinesTest {
         assertEquals(List.of(true, false, false, false, false, false, true), List.of(lines.plain(0), lines.plain(1),
                 lines.plain(2), lines.plain(3), lines.plain(4), lines.plain(5), lines.plain(6)));
         assertEquals("{\"a\":2,\"b\":1}", span(lines, 6, EventLines.Field.DATA));
+        assertArrayEquals(new int[] {1, 2, 3, 4, 5}, lines.others());
     }
 
     /** Lines given with %s for their prev, chained as the writer chains them. */

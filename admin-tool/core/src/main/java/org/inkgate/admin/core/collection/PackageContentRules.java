@@ -84,10 +84,7 @@ final class PackageContentRules {
         // where is named only for a breach: building it for every event cost the single storing thread a
         // tenth of its Java time (collect profile, docs/benchmarks.md, issue 16)
         // a plain line has no escape and no raw control character (EventLines), so no U+0000: only the others are read
-        for (int i = 0; i < events.size(); i++) {
-            if (lines.plain(i)) {
-                continue;
-            }
+        for (int i : lines.others()) {
             ProcessEvent e = events.get(i);
             if (e.type().indexOf(0) >= 0) {
                 check.accept("the type of event " + e.seq(), e.type());
