@@ -52,6 +52,8 @@ public final class Collector {
     private final ResultsStore store;
     private final ResponsePackageReader reader;
     private final Map<String, BundleManifest> bundles;
+    /** Each bundle's candidate numbers, by manifest SHA-256: looked up once per package, not searched. */
+    private final Map<String, Set<String>> rosters;
     private final int threads;
 
     /**
@@ -62,6 +64,10 @@ public final class Collector {
         this.store = store;
         this.reader = new ResponsePackageReader(ownerEncryptionKey, installations);
         this.bundles = Map.copyOf(bundles);
+        Map<String, Set<String>> numbers = new java.util.HashMap<>();
+        bundles.forEach((sha, manifest) -> numbers.put(sha, manifest.roster().stream()
+                .map(org.inkgate.format.bundle.RosterEntry::candidateNumber).collect(java.util.stream.Collectors.toUnmodifiableSet())));
+        this.rosters = Map.copyOf(numbers);
         this.threads = Math.max(1, threads);
     }
 
@@ -258,8 +264,8 @@ public final class Collector {
             return store.sittingByPackageFile(r.sha256()).isPresent() ? new Outcome.AlreadyImported(name)
                     : new Outcome.SameAsImported(name, d.packageId());
         }
-        boolean onRoster = bundle.roster().isEmpty()
-                || bundle.roster().stream().anyMatch(e -> e.candidateNumber().equals(d.candidateNumber()));
+        Set<String> roster = rosters.get(d.bundleManifestSha256());
+        boolean onRoster = roster.isEmpty() || roster.contains(d.candidateNumber());
         return new Outcome.Imported(name, d.candidateNumber(), d.formId(), d.packageId(), opened.installationFingerprint(),
                 onRoster);
     }
