@@ -78,7 +78,7 @@ final class EntryData {
             throws FormatRefusal, IOException {
         long position = entry.dataOffset();
         long remaining = entry.packedSize();
-        ByteBuffer buffer = ByteBuffer.allocate(BUFFER_BYTES);
+        ByteBuffer buffer = ByteBuffer.allocate(bufferFor(remaining));
         while (remaining > 0) {
             buffer.clear().limit((int) Math.min(buffer.capacity(), remaining));
             int n = source.read(buffer, position);
@@ -99,8 +99,9 @@ final class EntryData {
             long position = entry.dataOffset();
             long remainingIn = entry.packedSize();
             long produced = 0;
-            ByteBuffer in = ByteBuffer.allocate(BUFFER_BYTES);
-            byte[] outBuffer = new byte[BUFFER_BYTES];
+            ByteBuffer in = ByteBuffer.allocate(bufferFor(remainingIn));
+            // one byte more than the declared size, so that an entry unpacking to more is seen in the first call
+            byte[] outBuffer = new byte[bufferFor(entry.size() + 1)];
             while (!inflater.finished()) {
                 if (inflater.needsInput()) {
                     if (remainingIn == 0) {
@@ -138,6 +139,11 @@ final class EntryData {
         } finally {
             inflater.end();
         }
+    }
+
+    /** A buffer no larger than the bytes it will hold (most entries are a few hundred bytes), nor than 64 KiB. */
+    private static int bufferFor(long bytes) {
+        return (int) Math.max(1, Math.min(BUFFER_BYTES, bytes));
     }
 
     private static void emit(byte[] bytes, int n, OutputStream out, MessageDigest digest, CRC32 crc) throws IOException {
