@@ -91,7 +91,9 @@ final class CollectCommand implements Callable<Integer> {
         }
         ExamSource exam = null;
         char[] pass = Secrets.read(spec, passphraseEnv, "key passphrase", false);
-        var encryptionKey = keyStore.encryptionKey(pass);
+        // the passphrase's key derivation (some tenths of a second) runs beside the reading of the exam source and
+        // the bundles; the run takes the key before it opens the store
+        CollectionRun.KeySource encryptionKey = unlocking(() -> keyStore.encryptionKey(pass));
         CollectionRun.Report report;
         ProgressReporter[] progress = {null};
         try {
@@ -131,6 +133,30 @@ final class CollectCommand implements Callable<Integer> {
             return InkgateAdmin.PROBLEMS;
         }
         return report(w, report, trust.any);
+    }
+
+    /** Starts unlocking on a thread of its own; the source gives the key, or the unlocking's own failure. */
+    private static CollectionRun.KeySource unlocking(java.util.concurrent.Callable<java.security.PrivateKey> unlock) {
+        java.util.concurrent.FutureTask<java.security.PrivateKey> task = new java.util.concurrent.FutureTask<>(unlock);
+        Thread thread = new Thread(task, "inkgate-unlock");
+        thread.setDaemon(true);
+        thread.start();
+        return () -> {
+            try {
+                return task.get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new java.io.IOException("interrupted while unlocking the owner key", e);
+            } catch (java.util.concurrent.ExecutionException e) {
+                switch (e.getCause()) {
+                    case org.inkgate.admin.core.keys.EncryptedKeys.WrongPassphraseException wrong -> throw wrong;
+                    case java.io.IOException io -> throw io;
+                    case RuntimeException runtime -> throw runtime;
+                    case Error error -> throw error;
+                    default -> throw new IllegalStateException("unlocking the owner key failed", e.getCause());
+                }
+            }
+        };
     }
 
     private static int report(PrintWriter w, CollectionRun.Report report, boolean anyInstallation) {

@@ -139,6 +139,11 @@ public final class ForgedPackages {
 
     /** The admin command line in its own JVM, with the invented passphrase and PIN in the environment. */
     public static Run process(Path workDir, String... args) throws Exception {
+        return process(workDir, java.util.Map.of(), args);
+    }
+
+    /** The same with more variables in the environment (e.g. a wrong passphrase under another name). */
+    public static Run process(Path workDir, java.util.Map<String, String> environment, String... args) throws Exception {
         List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                 "--enable-native-access=ALL-UNNAMED", "-cp", System.getProperty("java.class.path"),
                 InkgateAdmin.class.getName()));
@@ -146,6 +151,7 @@ public final class ForgedPackages {
         ProcessBuilder pb = new ProcessBuilder(command).redirectErrorStream(true);
         pb.environment().put(PASSPHRASE_ENV, "invented passphrase for a hostile-input test");
         pb.environment().put("TEST_PIN", "invented-pin-5731");
+        pb.environment().putAll(environment);
         Process p = pb.start();
         String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         if (!p.waitFor(300, TimeUnit.SECONDS)) {

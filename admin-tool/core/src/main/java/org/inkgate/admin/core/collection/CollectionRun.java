@@ -14,6 +14,7 @@ import java.util.function.Consumer;
 import java.util.function.IntConsumer;
 import org.inkgate.admin.core.forms.Assignment;
 import org.inkgate.admin.core.forms.AssignmentTable;
+import org.inkgate.admin.core.keys.EncryptedKeys;
 import org.inkgate.admin.core.source.Problem;
 import org.inkgate.admin.core.roster.RosterReader;
 import org.inkgate.admin.core.source.ExamSource;
@@ -44,12 +45,20 @@ public final class CollectionRun {
      * @param exam                    exam source (adds its rubric), or null
      * @param assignment              assignment table (records its seed), or null
      */
-    public record Request(StoreLocation store, List<Path> bundleFiles, List<Path> roots, PrivateKey encryptionKey,
+    public record Request(StoreLocation store, List<Path> bundleFiles, List<Path> roots, KeySource encryptionKey,
             String ownerSigningFingerprint, TrustPolicy installations, Path roster, ExamSource exam, Path assignment,
             int threads) {
         public Request {
             bundleFiles = List.copyOf(bundleFiles);
             roots = List.copyOf(roots);
+        }
+
+        /** With the owner's decryption key already unlocked. */
+        public Request(StoreLocation store, List<Path> bundleFiles, List<Path> roots, PrivateKey encryptionKey,
+                String ownerSigningFingerprint, TrustPolicy installations, Path roster, ExamSource exam, Path assignment,
+                int threads) {
+            this(store, bundleFiles, roots, () -> encryptionKey, ownerSigningFingerprint, installations, roster, exam,
+                    assignment, threads);
         }
 
         /** Into the SQLite store in {@code storeFile}. */
@@ -95,6 +104,16 @@ public final class CollectionRun {
         }
     }
 
+    /**
+     * The owner's decryption key, which may still be being unlocked from its passphrase (a key derivation of some
+     * tenths of a second, docs/benchmarks.md, issue 16): a run reads and checks its bundles meanwhile and takes the
+     * key before it opens the store, so a wrong passphrase still changes nothing.
+     */
+    @FunctionalInterface
+    public interface KeySource {
+        PrivateKey key() throws IOException, EncryptedKeys.WrongPassphraseException;
+    }
+
     /** A bundle named for the collection was refused; nothing was imported. */
     public static final class BundleRefusedException extends Exception {
         private static final long serialVersionUID = 1L;
@@ -112,42 +131,46 @@ public final class CollectionRun {
      * each outcome as it is settled (on the calling thread).
      */
     public static Report run(Request r, IntConsumer starting, Consumer<Outcome> settled)
-            throws IOException, InvalidSourceException, BundleRefusedException, org.inkgate.admin.core.store.StoreException {
+            throws IOException, InvalidSourceException, BundleRefusedException, org.inkgate.admin.core.store.StoreException,
+            EncryptedKeys.WrongPassphraseException {
+        // the bundles and the assignment table are read and checked before the store is opened: a refusal leaves
+        // no store behind, and the key may be unlocked meanwhile
+        Map<String, BundleManifest> bundles = new HashMap<>();
+        TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
+        Map<String, String> signers = new HashMap<>();
+        Map<String, Map<String, String>> prompts = new HashMap<>();
+        for (Path f : r.bundleFiles()) {
+            try (OpenedBundle b = new BundleReader(owner).open(f)) {
+                bundles.put(b.manifestSha256(), b.manifest());
+                signers.put(b.manifestSha256(), b.signerFingerprint());
+                if (b.readable()) {
+                    // a sealed bundle's prompts stay closed here; --exam supplies them (below)
+                    Map<String, String> byTask = prompts.computeIfAbsent(b.manifest().examId(), k -> new HashMap<>());
+                    for (var t : b.manifest().tasks()) {
+                        byTask.put(t.id(), b.readText(t.promptFile()));
+                    }
+                }
+            } catch (FormatRefusal refusal) {
+                throw new BundleRefusedException(f, refusal);
+            }
+        }
+        Assignment assignment = r.assignment() == null ? null : AssignmentTable.read(r.assignment());
+        if (assignment != null) {
+            // before anything is written: a table other than the bundle's would record the wrong forms and seed
+            for (BundleManifest m : bundles.values()) {
+                List<Problem> wrong = AssignmentTable.mismatches(assignment, r.assignment(), m.roster());
+                if (!wrong.isEmpty()) {
+                    throw new InvalidSourceException("the assignment " + r.assignment() + " is not the one the bundle"
+                            + " of " + m.examId() + " was built from (nothing was collected; name the table the bundle"
+                            + " was built with)", wrong);
+                }
+            }
+        }
+        PrivateKey encryptionKey = r.encryptionKey().key();
         // a store file takes one collect at a time (the lock beside it); a server store takes many at once,
         // its unique keys storing each package once (docs/formats.md)
         try (CollectLock lock = r.store() instanceof StoreLocation.File f ? CollectLock.acquire(f.path()) : null;
                 ResultsStore store = Stores.openResults(r.store())) {
-            Map<String, BundleManifest> bundles = new HashMap<>();
-            TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
-            Map<String, String> signers = new HashMap<>();
-            Map<String, Map<String, String>> prompts = new HashMap<>();
-            for (Path f : r.bundleFiles()) {
-                try (OpenedBundle b = new BundleReader(owner).open(f)) {
-                    bundles.put(b.manifestSha256(), b.manifest());
-                    signers.put(b.manifestSha256(), b.signerFingerprint());
-                    if (b.readable()) {
-                        // a sealed bundle's prompts stay closed here; --exam supplies them (below)
-                        Map<String, String> byTask = prompts.computeIfAbsent(b.manifest().examId(), k -> new HashMap<>());
-                        for (var t : b.manifest().tasks()) {
-                            byTask.put(t.id(), b.readText(t.promptFile()));
-                        }
-                    }
-                } catch (FormatRefusal refusal) {
-                    throw new BundleRefusedException(f, refusal);
-                }
-            }
-            Assignment assignment = r.assignment() == null ? null : AssignmentTable.read(r.assignment());
-            if (assignment != null) {
-                // before anything is written: a table other than the bundle's would record the wrong forms and seed
-                for (BundleManifest m : bundles.values()) {
-                    List<Problem> wrong = AssignmentTable.mismatches(assignment, r.assignment(), m.roster());
-                    if (!wrong.isEmpty()) {
-                        throw new InvalidSourceException("the assignment " + r.assignment() + " is not the one the bundle"
-                                + " of " + m.examId() + " was built from (nothing was collected; name the table the bundle"
-                                + " was built with)", wrong);
-                    }
-                }
-            }
             for (var e : bundles.entrySet()) {
                 store.registerBundle(e.getValue(), e.getKey(), signers.get(e.getKey()));
             }
@@ -178,7 +201,7 @@ public final class CollectionRun {
             }
             List<Path> files = Collector.packageFiles(r.roots());
             starting.accept(files.size());
-            Collector collector = new Collector(store, r.encryptionKey(), r.installations(), bundles, r.threads());
+            Collector collector = new Collector(store, encryptionKey, r.installations(), bundles, r.threads());
             List<Outcome> outcomes = collector.collect(files, settled);
             List<String> offRoster = new ArrayList<>();
             Map<String, Integer> byInstallation = new TreeMap<>();
