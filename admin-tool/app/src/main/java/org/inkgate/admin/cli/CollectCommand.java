@@ -98,7 +98,12 @@ final class CollectCommand implements Callable<Integer> {
         ProgressReporter[] progress = {null};
         try {
             if (examSource != null) {
-                exam = ExamSourceReader.read(examSource);
+                try {
+                    exam = ExamSourceReader.read(examSource);
+                } catch (InvalidSourceException | RuntimeException e) {
+                    encryptionKey.key(); // a wrong passphrase is reported first, as when the key was unlocked first
+                    throw e;
+                }
             }
             report = CollectionRun.run(new CollectionRun.Request(StorePasswordFile.apply(store, storePasswordFile), bundleFiles, roots, encryptionKey,
                     keyStore.publicKeys().signingFingerprint(), installations, roster, exam, assignment, threads),

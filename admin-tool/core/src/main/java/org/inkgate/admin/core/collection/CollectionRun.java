@@ -126,15 +126,12 @@ public final class CollectionRun {
     private CollectionRun() {
     }
 
-    /**
-     * Runs the collection. {@code starting} hears the number of package files found, {@code settled}
-     * each outcome as it is settled (on the calling thread).
-     */
-    public static Report run(Request r, IntConsumer starting, Consumer<Outcome> settled)
-            throws IOException, InvalidSourceException, BundleRefusedException, org.inkgate.admin.core.store.StoreException,
-            EncryptedKeys.WrongPassphraseException {
-        // the bundles and the assignment table are read and checked before the store is opened: a refusal leaves
-        // no store behind, and the key may be unlocked meanwhile
+    /** The bundles of a run, checked, with what the store records of them, and the assignment table if named. */
+    private record Bundles(Map<String, BundleManifest> manifests, Map<String, String> signers,
+            Map<String, Map<String, String>> prompts, Assignment assignment) {
+    }
+
+    private static Bundles readBundles(Request r) throws IOException, InvalidSourceException, BundleRefusedException {
         Map<String, BundleManifest> bundles = new HashMap<>();
         TrustPolicy owner = TrustPolicy.trusting(Set.of(r.ownerSigningFingerprint()));
         Map<String, String> signers = new HashMap<>();
@@ -166,6 +163,29 @@ public final class CollectionRun {
                 }
             }
         }
+        return new Bundles(bundles, signers, prompts, assignment);
+    }
+
+    /**
+     * Runs the collection. {@code starting} hears the number of package files found, {@code settled}
+     * each outcome as it is settled (on the calling thread).
+     */
+    public static Report run(Request r, IntConsumer starting, Consumer<Outcome> settled)
+            throws IOException, InvalidSourceException, BundleRefusedException, org.inkgate.admin.core.store.StoreException,
+            EncryptedKeys.WrongPassphraseException {
+        // the bundles and the assignment table are read and checked before the store is opened: a refusal leaves
+        // no store behind, and the key may be unlocked meanwhile
+        Bundles b;
+        try {
+            b = readBundles(r);
+        } catch (IOException | InvalidSourceException | BundleRefusedException | RuntimeException e) {
+            r.encryptionKey().key(); // a wrong passphrase is reported first, as when the key was unlocked before all else
+            throw e;
+        }
+        Map<String, BundleManifest> bundles = b.manifests();
+        Map<String, String> signers = b.signers();
+        Map<String, Map<String, String>> prompts = b.prompts();
+        Assignment assignment = b.assignment();
         PrivateKey encryptionKey = r.encryptionKey().key();
         // a store file takes one collect at a time (the lock beside it); a server store takes many at once,
         // its unique keys storing each package once (docs/formats.md)
