@@ -5,10 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.attribute.PosixFilePermissions;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -59,25 +56,6 @@ class LauncherJitFlagsTest {
     }
 
     private List<String> javaArguments(String... commandLine) throws IOException, InterruptedException {
-        Path app = Files.createDirectories(dir.resolve("app"));
-        Path launcher = app.resolve("inkgate-admin");
-        Files.copy(Path.of("inkgate-admin"), launcher, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
-        Files.createDirectories(app.resolve("target/lib"));
-        Files.write(app.resolve("target/inkgate-admin.jar"), new byte[0]);
-        Path jdk = Files.createDirectories(dir.resolve("jdk/bin"));
-        Files.writeString(dir.resolve("jdk/release"), "JAVA_VERSION=\"25.0.1\"\n");
-        Path java = jdk.resolve("java");
-        Files.writeString(java, "#!/bin/sh\nfor a in \"$@\"; do printf '%s\\n' \"$a\"; done\n");
-        Files.setPosixFilePermissions(java, PosixFilePermissions.fromString("rwxr-xr-x"));
-        Files.setPosixFilePermissions(launcher, PosixFilePermissions.fromString("rwxr-xr-x"));
-        ProcessBuilder pb = new ProcessBuilder();
-        pb.command().add(launcher.toString());
-        pb.command().addAll(List.of(commandLine));
-        pb.environment().put("JAVA_HOME", dir.resolve("jdk").toString());
-        pb.redirectErrorStream(true);
-        Process p = pb.start();
-        String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
-        assertEquals(0, p.waitFor(), out);
-        return out.lines().toList();
+        return new StandInLauncher(dir).run(commandLine);
     }
 }

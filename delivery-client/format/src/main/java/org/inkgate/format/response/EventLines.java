@@ -113,6 +113,23 @@ public final class EventLines {
         return spans[plainIndex(index) * STRIDE + 2 * field.ordinal() + 1];
     }
 
+    /**
+     * Copies a plain event's field into {@code to} from {@code at} and returns where the copy ends; a task the event
+     * does not have is copied as {@code null}, as JSON and a map's {@code toString} both spell it.
+     */
+    public int copy(int index, Field field, byte[] to, int at) {
+        int from = start(index, field);
+        if (from < 0) {
+            System.arraycopy(NULL, 0, to, at, NULL.length);
+            return at + NULL.length;
+        }
+        int n = end(index, field) - from;
+        System.arraycopy(bytes, from, to, at, n);
+        return at + n;
+    }
+
+    private static final byte[] NULL = {'n', 'u', 'l', 'l'};
+
     private int plainIndex(int index) {
         if (!plain(index)) {
             throw new IllegalStateException("event " + (index + 1) + " was not read from a plain line: write its values");

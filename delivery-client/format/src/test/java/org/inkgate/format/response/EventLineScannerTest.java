@@ -84,23 +84,7 @@ class EventLineScannerTest {
         for (int seq = 1; seq <= 300; seq++) {
             events.add(event(random, seq, false));
         }
-        byte[] log = EventChain.encode(events);
-        EventLineScanner scanner = new EventLineScanner(log);
-        int start = 0;
-        int read = 0;
-        while (start < log.length) {
-            int end = start;
-            while (log[end] != '\n') {
-                end++;
-            }
-            EventChain.Line line = scanner.read(start);
-            if (line != null) {
-                assertEquals(end, scanner.lineEnd());
-                assertEquals(bound(Arrays.copyOfRange(log, start, end)), scanner.withPrevText(line));
-                read++;
-            }
-            start = end + 1;
-        }
+        int read = readEachLine(EventChain.encode(events));
         assertEquals(300, read, "lines read by the scanner");
     }
 
@@ -123,7 +107,15 @@ class EventLineScannerTest {
             }
             events.add(new ProcessEvent(seq, Instant.ofEpochSecond(1_780_000_000L + seq), seq, "text.insert", "t1", data));
         }
-        byte[] log = EventChain.encode(events);
+        int read = readEachLine(EventChain.encode(events));
+        assertEquals(5_000, read, "lines read by the scanner");
+    }
+
+    /**
+     * Reads a log's lines one after another with one scanner, each as the binding reads it alone and ending where it
+     * ends; returns how many the scanner read.
+     */
+    private static int readEachLine(byte[] log) {
         EventLineScanner scanner = new EventLineScanner(log);
         int start = 0;
         int read = 0;
@@ -133,14 +125,14 @@ class EventLineScannerTest {
                 end++;
             }
             EventChain.Line line = scanner.read(start);
-            EventChain.Line reference = bound(Arrays.copyOfRange(log, start, end));
             if (line != null) {
-                assertEquals(reference, scanner.withPrevText(line));
+                assertEquals(end, scanner.lineEnd());
+                assertEquals(bound(Arrays.copyOfRange(log, start, end)), scanner.withPrevText(line));
                 read++;
             }
             start = end + 1;
         }
-        assertEquals(5_000, read, "lines read by the scanner");
+        return read;
     }
 
     /** True if the scanner accepted the line; fails if it accepted what the binding refuses or reads otherwise. */

@@ -67,23 +67,15 @@ final class ContentDigest {
         byte[] out = buffer;
         int lengthAt = used;
         int n = used + 4;
-        n = copy(b, seqFrom, lines.end(index, EventLines.Field.SEQ), out, n);
+        n = lines.copy(index, EventLines.Field.SEQ, out, n);
         out[n++] = '|';
-        n = copy(b, lines.start(index, EventLines.Field.AT), lines.end(index, EventLines.Field.AT), out, n);
+        n = lines.copy(index, EventLines.Field.AT, out, n);
         out[n++] = '|';
-        n = copy(b, lines.start(index, EventLines.Field.MONO), lines.end(index, EventLines.Field.MONO), out, n);
+        n = lines.copy(index, EventLines.Field.MONO, out, n);
         out[n++] = '|';
-        n = copy(b, lines.start(index, EventLines.Field.TYPE), lines.end(index, EventLines.Field.TYPE), out, n);
+        n = lines.copy(index, EventLines.Field.TYPE, out, n);
         out[n++] = '|';
-        int taskFrom = lines.start(index, EventLines.Field.TASK);
-        if (taskFrom < 0) {
-            out[n++] = 'n';
-            out[n++] = 'u';
-            out[n++] = 'l';
-            out[n++] = 'l';
-        } else {
-            n = copy(b, taskFrom, lines.end(index, EventLines.Field.TASK), out, n);
-        }
+        n = lines.copy(index, EventLines.Field.TASK, out, n);
         out[n++] = '|';
         boolean inText = false;
         for (int k = dataFrom; k < dataTo; k++) {
@@ -107,11 +99,6 @@ final class ContentDigest {
         out[lengthAt + 2] = (byte) (length >>> 8);
         out[lengthAt + 3] = (byte) length;
         used = n;
-    }
-
-    private static int copy(byte[] from, int start, int end, byte[] to, int at) {
-        System.arraycopy(from, start, to, at, end - start);
-        return at + end - start;
     }
 
     /** The digest of everything added, in lower-case hex. */

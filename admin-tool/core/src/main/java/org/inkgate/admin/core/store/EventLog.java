@@ -81,27 +81,23 @@ public final class EventLog {
             out[n++] = ',';
         }
         out[n++] = '[';
-        n = copy(b, lines.start(index, EventLines.Field.SEQ), lines.end(index, EventLines.Field.SEQ), out, n);
+        n = lines.copy(index, EventLines.Field.SEQ, out, n);
         out[n++] = ',';
         out[n++] = '"';
-        n = copy(b, lines.start(index, EventLines.Field.AT), lines.end(index, EventLines.Field.AT), out, n);
+        n = lines.copy(index, EventLines.Field.AT, out, n);
         out[n++] = '"';
         out[n++] = ',';
-        n = copy(b, lines.start(index, EventLines.Field.MONO), lines.end(index, EventLines.Field.MONO), out, n);
+        n = lines.copy(index, EventLines.Field.MONO, out, n);
         out[n++] = ',';
         out[n++] = '"';
-        n = copy(b, lines.start(index, EventLines.Field.TYPE), lines.end(index, EventLines.Field.TYPE), out, n);
+        n = lines.copy(index, EventLines.Field.TYPE, out, n);
         out[n++] = '"';
         out[n++] = ',';
-        int taskFrom = lines.start(index, EventLines.Field.TASK);
-        if (taskFrom < 0) {
-            out[n++] = 'n';
-            out[n++] = 'u';
-            out[n++] = 'l';
-            out[n++] = 'l';
+        if (lines.start(index, EventLines.Field.TASK) < 0) {
+            n = lines.copy(index, EventLines.Field.TASK, out, n); // null, unquoted
         } else {
             out[n++] = '"';
-            n = copy(b, taskFrom, lines.end(index, EventLines.Field.TASK), out, n);
+            n = lines.copy(index, EventLines.Field.TASK, out, n);
             out[n++] = '"';
         }
         out[n++] = ',';
@@ -117,11 +113,6 @@ public final class EventLog {
         out[n++] = ']';
         used = n;
         return this;
-    }
-
-    private static int copy(byte[] from, int start, int end, byte[] to, int at) {
-        System.arraycopy(from, start, to, at, end - start);
-        return at + end - start;
     }
 
     /** Opens an event's array and writes its columns up to the data's, with the comma after them. */
