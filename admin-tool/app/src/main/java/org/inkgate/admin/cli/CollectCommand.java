@@ -133,8 +133,10 @@ final class CollectCommand implements Callable<Integer> {
                 progress[0].clear();
             }
             err.println("inkgate-admin collect: " + e.getMessage());
-            err.println("Packages imported before this are kept in the store, whole; the package in hand was not"
-                    + " imported. Run the same collect again once this is fixed: it imports only what is not there yet.");
+            if (!e.getMessage().endsWith(CollectionRun.NOT_MADE)) {
+                err.println("Packages imported before this are kept in the store, whole; the package in hand was not"
+                        + " imported. Run the same collect again once this is fixed: it imports only what is not there yet.");
+            }
             return InkgateAdmin.PROBLEMS;
         }
         return report(w, report, trust.any);

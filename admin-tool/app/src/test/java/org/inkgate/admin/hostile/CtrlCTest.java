@@ -22,8 +22,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Ctrl+C during collect and export: the real admin command line in its own JVM gets a real
- * SIGINT (kill -INT, what the terminal sends) while it works. Collect leaves a store of whole
- * sittings only, and the same collect afterwards imports exactly the rest; export leaves the
+ * SIGINT (kill -INT, what the terminal sends) while it works. Collect into a store that exists leaves it
+ * with whole sittings only, and the same collect afterwards imports exactly the rest; export leaves the
  * export folder as it was before the run (or complete), with no half-written files and no hidden
  * working folder. POSIX only.
  */
@@ -45,6 +45,11 @@ class CtrlCTest {
             p.write(p.document(candidate, i), folder.resolve(candidate + ".inkresp"));
         }
         Path store = dir.resolve("results.db");
+        // into a store that exists (a new one is built aside and named only when whole: NewStoreAsideTest), holding
+        // one of the packages already
+        Path starter = Files.createDirectories(dir.resolve("first"));
+        Files.copy(folder.resolve("H1001.inkresp"), starter.resolve("H1001.inkresp"));
+        assertTrue(p.collect(starter, store).out().contains("Imported 1,"));
 
         Process collect = start("collect", folder.toString(), "--store", store.toString(), "--bundle", p.bundle().toString(),
                 "--keys", p.keys().toString(), "--any-installation", "--passphrase-env", ForgedPackages.PASSPHRASE_ENV,
@@ -91,17 +96,7 @@ class CtrlCTest {
     }
 
     private Process start(String... args) throws Exception {
-        // a build started in the background (nohup, &, some CI runners) ignores SIGINT, and children inherit
-        // that: the JVM would then never see the Ctrl+C; coreutils' env puts the default action back
-        List<String> command = new ArrayList<>(List.of("/usr/bin/env", "--default-signal=INT",
-                Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "--enable-native-access=ALL-UNNAMED", "-cp", System.getProperty("java.class.path"),
-                InkgateAdmin.class.getName()));
-        command.addAll(List.of(args));
-        ProcessBuilder pb = new ProcessBuilder(command).redirectErrorStream(true)
-                .redirectOutput(dir.resolve(args[0] + ".out").toFile());
-        pb.environment().put(ForgedPackages.PASSPHRASE_ENV, "invented passphrase for a hostile-input test");
-        return pb.start();
+        return ForgedPackages.start(dir.resolve(args[0] + ".out"), args);
     }
 
     private interface Check {

@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.inkgate.admin.cli.InkgateAdmin;
 import org.inkgate.admin.testutil.ForgedPackages;
 import org.inkgate.admin.testutil.SmallDisk;
@@ -65,6 +66,48 @@ class FullDiskTest {
             assertWholeSittingsOnly(store);
             assertTrue(imported > 0, "the disk filled before any of the rest was imported, so the test shows nothing: "
                     + full.out());
+        }
+    }
+
+    /**
+     * A new store is built aside and named only when whole (NewStoreAsideTest): the disk filling while its schema is
+     * written, or halfway through the packages, leaves no store and says so, and the same collect imports all later.
+     */
+    @Test
+    void collectIntoANewStore_diskFillsUp_leavesNoStoreAndSaysSo() throws Exception {
+        ForgedPackages p = ForgedPackages.prepare(dir);
+        Path packages = dir.resolve("packages");
+        for (int i = 0; i < 24; i++) {
+            String candidate = "H" + (1001 + i);
+            p.write(p.document(candidate, i), packages.resolve(candidate + ".inkresp"));
+        }
+        // the room a new store takes empty and with all 24 (on the ordinary disk): the disk below fills between
+        Path empty = Files.createDirectories(dir.resolve("no-packages"));
+        p.collect(empty, dir.resolve("empty.db"));
+        p.collect(packages, dir.resolve("whole.db"));
+        long halfway = (Files.size(dir.resolve("empty.db")) + Files.size(dir.resolve("whole.db"))) / 2;
+        try (SmallDisk disk = SmallDisk.mount(dir.resolve("small-disk"), 16)) {
+            Assumptions.assumeTrue(disk != null, "this machine does not allow mounting a tmpfs (needs root)");
+            Path store = disk.folder().resolve("results.db");
+            for (long room : new long[] {64 * 1024, halfway}) {
+                Path filler = disk.fill(room);
+                ForgedPackages.Run full = p.collect(packages, store);
+                String at = "with " + room + " bytes free: " + full.out();
+                assertEquals(InkgateAdmin.PROBLEMS, full.code(), at);
+                assertTrue(full.out().contains("is full. Free space on that disk"), at);
+                assertTrue(full.out().contains("No store was made"), at);
+                assertFalse(full.out().contains("kept in the store") || full.out().contains("SQLITE")
+                        || full.out().contains("Exception"), at);
+                assertTrue(room < halfway || full.out().contains("Collecting 24 package files"), at);
+                try (var left = Files.list(disk.folder())) {
+                    assertEquals(List.of(filler.getFileName().toString(), "results.db.collect-lock"),
+                            left.map(f -> f.getFileName().toString()).sorted().toList(), "a half-built store was left");
+                }
+                Files.delete(filler);
+            }
+            ForgedPackages.Run again = p.collect(packages, store);
+            assertTrue(again.out().contains("Imported 24,"), again.out());
+            assertWholeSittingsOnly(store);
         }
     }
 

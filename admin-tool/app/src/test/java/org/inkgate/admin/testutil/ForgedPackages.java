@@ -160,4 +160,27 @@ public final class ForgedPackages {
         }
         return new Run(p.exitValue(), out);
     }
+
+    /** The arguments of {@link #collect} for {@code folder} into {@code store}, with {@code more} after them. */
+    public String[] collectArguments(Path folder, Path store, String... more) {
+        List<String> args = new ArrayList<>(List.of("collect", folder.toString(), "--store", store.toString(), "--bundle",
+                bundle.toString(), "--keys", keys.toString(), "--any-installation", "--passphrase-env", PASSPHRASE_ENV));
+        args.addAll(List.of(more));
+        return args.toArray(String[]::new);
+    }
+
+    /**
+     * The admin command line in its own JVM, left running for the test to stop (SIGINT, SIGKILL); its output goes
+     * to {@code log}. POSIX only: a build started in the background (nohup, &, some CI runners) ignores SIGINT, and
+     * children inherit that, so the JVM would never see a Ctrl+C; coreutils' env puts the default action back.
+     */
+    public static Process start(Path log, String... args) throws IOException {
+        List<String> command = new ArrayList<>(List.of("/usr/bin/env", "--default-signal=INT",
+                Path.of(System.getProperty("java.home"), "bin", "java").toString(), "--enable-native-access=ALL-UNNAMED",
+                "-cp", System.getProperty("java.class.path"), InkgateAdmin.class.getName()));
+        command.addAll(List.of(args));
+        ProcessBuilder pb = new ProcessBuilder(command).redirectErrorStream(true).redirectOutput(log.toFile());
+        pb.environment().put(PASSPHRASE_ENV, "invented passphrase for a hostile-input test");
+        return pb.start();
+    }
 }

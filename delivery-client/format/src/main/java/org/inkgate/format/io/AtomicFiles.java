@@ -48,6 +48,29 @@ public final class AtomicFiles {
     }
 
     /**
+     * Gives {@code written}, a complete file, the name {@code target}: forced to disk, renamed in one step, the
+     * folder forced, so the name never holds less than the whole file, even after a power cut. Refuses, changing
+     * nothing, when {@code target} exists (checked just before the rename: the caller keeps others from making it
+     * meanwhile, as collect's lock does).
+     */
+    public static void moveIntoPlace(Path written, Path target) throws IOException {
+        try (FileChannel channel = FileChannel.open(written, StandardOpenOption.WRITE)) {
+            channel.force(true);
+        }
+        Path absolute = target.toAbsolutePath();
+        if (Files.exists(absolute, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+            throw new java.nio.file.FileAlreadyExistsException(absolute.toString(), written.toString(),
+                    "it appeared while its content was being written beside it; nothing was replaced");
+        }
+        try {
+            Files.move(written, absolute, StandardCopyOption.ATOMIC_MOVE);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(written, absolute);
+        }
+        forceFolder(absolute.getParent());
+    }
+
+    /**
      * On POSIX systems a rename is durable only once the folder itself is flushed; without it a
      * power cut can lose the new name. Windows cannot open a folder this way: there the rename
      * is left to the file system's own journal.

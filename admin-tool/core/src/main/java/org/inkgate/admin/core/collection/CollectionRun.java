@@ -182,15 +182,33 @@ public final class CollectionRun {
             r.encryptionKey().key(); // a wrong passphrase is reported first, as when the key was unlocked before all else
             throw e;
         }
+        PrivateKey encryptionKey = r.encryptionKey().key();
+        try {
+            return collectInto(r, b, encryptionKey, starting, settled);
+        } catch (org.inkgate.admin.core.store.StoreException e) {
+            // a new store file is built aside and named only when the run is done (Stores.openResultsToCollect)
+            if (r.store() instanceof StoreLocation.File f
+                    && !java.nio.file.Files.exists(f.path(), java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+                throw new org.inkgate.admin.core.store.StoreException(e.getMessage() + ". " + NOT_MADE, e);
+            }
+            throw e;
+        }
+    }
+
+    /** Said when a run into a new store file fails: the side file it was built in is gone, the name never given. */
+    public static final String NOT_MADE = "No store was made: a new store gets its name only when its whole collect is"
+            + " done, and nothing is lost (the packages are where they were); run the same collect again once this is fixed";
+
+    private static Report collectInto(Request r, Bundles b, PrivateKey encryptionKey, IntConsumer starting,
+            Consumer<Outcome> settled) throws IOException, InvalidSourceException, org.inkgate.admin.core.store.StoreException {
         Map<String, BundleManifest> bundles = b.manifests();
         Map<String, String> signers = b.signers();
         Map<String, Map<String, String>> prompts = b.prompts();
         Assignment assignment = b.assignment();
-        PrivateKey encryptionKey = r.encryptionKey().key();
         // a store file takes one collect at a time (the lock beside it); a server store takes many at once,
         // its unique keys storing each package once (docs/formats.md)
         try (CollectLock lock = r.store() instanceof StoreLocation.File f ? CollectLock.acquire(f.path()) : null;
-                ResultsStore store = Stores.openResults(r.store())) {
+                ResultsStore store = Stores.openResultsToCollect(r.store())) {
             for (var e : bundles.entrySet()) {
                 store.registerBundle(e.getValue(), e.getKey(), signers.get(e.getKey()));
             }
@@ -239,6 +257,7 @@ public final class CollectionRun {
                 conflicts.put(examId, store.conflicts(examId));
                 missing.put(examId, MissingReport.of(store, examId));
             }
+            store.keep();
             return new Report(outcomes, offRoster, byInstallation, conflicts, missing);
         }
     }

@@ -133,7 +133,7 @@ public final class Collector {
                     read = window.removeFirst().get();
                 } catch (InterruptedException e) {
                     Thread.currentThread().interrupt();
-                    throw new StoreException("collection interrupted; imported packages are kept, rerun to finish");
+                    throw new StoreException("collection interrupted; run the same collect again to finish");
                 } catch (ExecutionException e) {
                     throw new IllegalStateException("reading a package failed unexpectedly: " + e.getCause(), e.getCause());
                 }

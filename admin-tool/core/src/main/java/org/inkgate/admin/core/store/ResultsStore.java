@@ -98,6 +98,14 @@ public interface ResultsStore extends AutoCloseable {
     /** Row counts per table, for reports and tests. */
     java.util.Map<String, Long> counts() throws StoreException;
 
+    /**
+     * Keeps what this store was opened to write ({@link Stores#openResultsToCollect}): a new store file built aside
+     * gets its name now, whole; closed without this it is discarded. Any other store has kept each import at its
+     * commit, and this does nothing.
+     */
+    default void keep() throws StoreException {
+    }
+
     @Override
     void close() throws StoreException;
 }

@@ -31,6 +31,18 @@ public final class Stores {
     }
 
     /**
+     * Opens the results store for a collect, which holds its collect lock. A SQLite file that does not exist yet is
+     * built beside its name and named by {@link ResultsStore#keep} when the collect is done (each page written once,
+     * and nothing half-built ever has the name); otherwise as {@link #openResults}.
+     */
+    public static ResultsStore openResultsToCollect(StoreLocation location) throws StoreException {
+        return switch (location) {
+            case StoreLocation.File f -> SqliteResultsStore.openToCollect(f.path());
+            case StoreLocation.Server s -> PostgresResultsStore.open(s);
+        };
+    }
+
+    /**
      * Opens an existing results store for the steps that only read it (missing, export, analyse),
      * also where nothing may be written (a SQLite store on read-only media).
      */

@@ -490,9 +490,14 @@ public final class Schema {
             dialect.recordSchemaVersion(s, m.version());
             c.commit();
         } catch (SQLException e) {
-            c.rollback();
-            throw new SQLException("migration to schema version " + m.version() + " failed and was rolled back: "
-                    + e.getMessage(), e);
+            SQLException failed = new SQLException("migration to schema version " + m.version() + " failed and was"
+                    + " rolled back: " + e.getMessage(), e);
+            try {
+                c.rollback();
+            } catch (SQLException notOpen) {
+                failed.addSuppressed(notOpen); // SQLite rolled back by itself (a full disk), see restore
+            }
+            throw failed;
         }
     }
 
@@ -513,6 +518,7 @@ public final class Schema {
         SchemaVersion.refuseNewer(dialect.schemaVersion(c), latest());
         boolean auto = c.getAutoCommit();
         c.setAutoCommit(false);
+        SQLException failed = null;
         try {
             for (Migration m : ALL) {
                 if (m.version() > target) {
@@ -529,8 +535,27 @@ public final class Schema {
                     apply(c, s, dialect, m);
                 }
             }
+        } catch (SQLException e) {
+            failed = e;
+            throw e;
         } finally {
+            restore(c, auto, failed);
+        }
+    }
+
+    /**
+     * Puts the connection's auto-commit back. After a failed migration that may fail too (SQLite ends a transaction
+     * on a full disk by itself, and then has none to commit): the migration's failure is the one to report, the
+     * disk full in its causes, not "no transaction is active".
+     */
+    private static void restore(Connection c, boolean auto, SQLException failed) throws SQLException {
+        try {
             c.setAutoCommit(auto);
+        } catch (SQLException e) {
+            if (failed == null) {
+                throw e;
+            }
+            failed.addSuppressed(e);
         }
     }
 }

@@ -23,7 +23,14 @@ final class SqliteFiles {
          * last few commits, and a rerun of collect imports those packages again from their files.
          * FULL costs an fsync per package, which the 1,000-package benchmark cannot afford.
          */
-        AFTER_CRASH
+        AFTER_CRASH,
+        /**
+         * A new store built under a side name and named only when whole ({@link NewStoreFile}): the rollback
+         * journal in memory, so a refused package still rolls back, and no syncs while it is built; it is synced
+         * once, switched to the write-ahead log and named. Each page is written once instead of once to the log
+         * and again to the database. A killed process leaves only the side file, which no one opens as a store.
+         */
+        BUILT_ASIDE
     }
 
     /**
@@ -38,15 +45,23 @@ final class SqliteFiles {
     private SqliteFiles() {
     }
 
-    /** A connection with foreign keys on, write-ahead log, a 10 s busy timeout and the given durability. */
+    /**
+     * A connection with foreign keys on, a 10 s busy timeout and the given durability: the write-ahead log, or
+     * for a store built aside the rollback journal in memory.
+     */
     static Connection connect(Path file, Durability durability) throws SQLException {
         SQLiteConfig config = new SQLiteConfig();
         config.enforceForeignKeys(true);
-        if (durability == Durability.EVERY_COMMIT) {
-            config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
-        } else {
-            config.setSynchronous(SQLiteConfig.SynchronousMode.NORMAL);
-            config.setCacheSize(-65536);
+        switch (durability) {
+            case EVERY_COMMIT -> config.setSynchronous(SQLiteConfig.SynchronousMode.FULL);
+            case AFTER_CRASH -> {
+                config.setSynchronous(SQLiteConfig.SynchronousMode.NORMAL);
+                config.setCacheSize(-65536);
+            }
+            case BUILT_ASIDE -> {
+                config.setSynchronous(SQLiteConfig.SynchronousMode.OFF);
+                config.setCacheSize(-65536);
+            }
         }
         config.setBusyTimeout(10_000);
         Connection c = DriverManager.getConnection("jdbc:sqlite:" + file.toAbsolutePath(), config.toProperties());
@@ -54,7 +69,7 @@ final class SqliteFiles {
             // the page size first: switching to the write-ahead log writes a new file's header, with the pages
             // it has then (the driver's own settings switch the log first); a store made before keeps its pages
             s.execute("PRAGMA page_size = " + PAGE_BYTES);
-            s.execute("PRAGMA journal_mode = WAL");
+            s.execute(durability == Durability.BUILT_ASIDE ? "PRAGMA journal_mode = MEMORY" : "PRAGMA journal_mode = WAL");
         } catch (SQLException e) {
             closeQuietly(c);
             throw e;

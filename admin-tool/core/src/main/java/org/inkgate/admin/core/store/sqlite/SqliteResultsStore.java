@@ -13,9 +13,87 @@ import org.inkgate.admin.core.store.sql.SqlResultsStore;
  */
 public final class SqliteResultsStore extends SqlResultsStore {
 
-    private SqliteResultsStore(Connection c, Path file) {
-        // a full disk, read-only media and the like in plain words
+    /** Where a new store is being built, or null when this store is its file. */
+    private final NewStoreFile aside;
+    private boolean kept;
+
+    private SqliteResultsStore(Connection c, Path file, NewStoreFile aside) {
+        // a full disk, read-only media and the like in plain words, naming the store the user named
         super(c, SqliteDialect.INSTANCE, failure -> SqliteErrors.plain(file, failure));
+        this.aside = aside;
+    }
+
+    private SqliteResultsStore(Connection c, Path file) {
+        this(c, file, null);
+    }
+
+    /**
+     * Opens the store for a collect holding its lock: an existing file as {@link #open}; a new one is built beside
+     * its name ({@link NewStoreFile}) and named by {@link #keep}.
+     */
+    public static SqliteResultsStore openToCollect(Path file) throws StoreException {
+        if (!NewStoreFile.isNew(file)) {
+            return open(file);
+        }
+        NewStoreFile aside = null;
+        Connection c = null;
+        try {
+            aside = NewStoreFile.begin(file);
+            c = SqliteFiles.connect(aside.side(), SqliteFiles.Durability.BUILT_ASIDE);
+            Migrations.migrate(c, Migrations.latest());
+            return new SqliteResultsStore(c, file, aside);
+        } catch (SQLException | java.io.IOException e) {
+            SqliteFiles.closeQuietly(c);
+            discardQuietly(aside);
+            throw failure("cannot make the results store " + file, file, e);
+        }
+    }
+
+    /** A new store built aside: switched to the write-ahead log (as every store in use is), closed, synced, named. */
+    @Override
+    public void keep() throws StoreException {
+        if (aside == null || kept) {
+            return;
+        }
+        try (java.sql.Statement s = connection().createStatement()) {
+            s.execute("PRAGMA journal_mode = WAL");
+        } catch (SQLException e) {
+            throw failure("cannot finish the new results store " + aside.side(), aside.side(), e);
+        }
+        super.close();
+        try {
+            aside.name();
+            kept = true;
+        } catch (java.io.IOException e) {
+            throw failure("cannot give the new results store its name", aside.side(), e);
+        }
+    }
+
+    /** Closes the store; a new store built aside and not kept is removed. */
+    @Override
+    public void close() throws StoreException {
+        try {
+            super.close();
+        } finally {
+            if (aside != null && !kept) {
+                try {
+                    aside.discard();
+                } catch (java.io.IOException e) {
+                    throw failure("cannot remove the unfinished store " + aside.side()
+                            + " (no store was made; remove it by hand)", aside.side(), e);
+                }
+            }
+        }
+    }
+
+    private static void discardQuietly(NewStoreFile aside) {
+        if (aside != null) {
+            try {
+                aside.discard();
+            } catch (java.io.IOException ignored) {
+                // the failure to open is the one to report; the next collect removes the side file
+            }
+        }
     }
 
     /** Opens (creating if needed) the store and brings its schema to the latest version. */

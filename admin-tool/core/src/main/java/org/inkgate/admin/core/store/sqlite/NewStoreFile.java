@@ -1,0 +1,87 @@
+package org.inkgate.admin.core.store.sqlite;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.inkgate.format.io.AtomicFiles;
+import org.inkgate.format.io.OwnerOnly;
+
+/**
+ * A new store file built under a side name, {@code <store>.incomplete}, and given its own name only when whole
+ * (issue 16: a collect into a new store writes each page once, with no write-ahead log and no sync per package).
+ * Nothing half-built ever carries the store's name: a collect that is killed leaves the side file, which the next
+ * collect into that store removes before it starts over; Ctrl+C (and any orderly end of the program) removes it
+ * at once. Whoever builds one holds the store's collect lock, so no one else touches the side file meanwhile.
+ */
+final class NewStoreFile {
+
+    private static final List<String> SQLITE_COMPANIONS = List.of("", "-journal", "-wal", "-shm");
+
+    private final Path store;
+    private final Path side;
+    private final Thread removeOnExit;
+
+    private NewStoreFile(Path store, Path side) {
+        this.store = store;
+        this.side = side;
+        this.removeOnExit = new Thread(this::removeQuietly, "inkgate-remove-incomplete-store");
+    }
+
+    /** The side name a new store at {@code store} is built under. */
+    static Path sideOf(Path store) {
+        return store.resolveSibling(store.getFileName() + ".incomplete");
+    }
+
+    /** Whether {@code store} names nothing yet (not even a link), so a collect into it builds a new store aside. */
+    static boolean isNew(Path store) {
+        return !Files.exists(store, java.nio.file.LinkOption.NOFOLLOW_LINKS);
+    }
+
+    /** Removes what a killed build left, then makes the empty side file, owner-only. */
+    static NewStoreFile begin(Path store) throws IOException {
+        NewStoreFile file = new NewStoreFile(store, sideOf(store));
+        file.remove();
+        OwnerOnly.file(file.side);
+        Runtime.getRuntime().addShutdownHook(file.removeOnExit);
+        return file;
+    }
+
+    Path side() {
+        return side;
+    }
+
+    /** Gives the built file, its connection closed, the store's name; synced first, so the name holds all of it. */
+    void name() throws IOException {
+        AtomicFiles.moveIntoPlace(side, store);
+        forgetHook();
+    }
+
+    /** Removes the side file: the build failed or was given up; the store's name was never given. */
+    void discard() throws IOException {
+        forgetHook();
+        remove();
+    }
+
+    private void remove() throws IOException {
+        for (String suffix : SQLITE_COMPANIONS) {
+            Files.deleteIfExists(Path.of(side + suffix));
+        }
+    }
+
+    private void removeQuietly() {
+        try {
+            remove();
+        } catch (IOException ignored) {
+            // the program is ending; the next collect into this store removes what is left
+        }
+    }
+
+    private void forgetHook() {
+        try {
+            Runtime.getRuntime().removeShutdownHook(removeOnExit);
+        } catch (IllegalStateException ending) {
+            // the program is already ending: the hook runs, removing a side file only if one is still there
+        }
+    }
+}
