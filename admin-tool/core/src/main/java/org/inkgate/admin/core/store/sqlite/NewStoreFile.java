@@ -21,6 +21,9 @@ final class NewStoreFile {
     private final Path store;
     private final Path side;
     private final Thread removeOnExit;
+    private Thread syncing;
+
+    private static final long SYNC_STEP = 32L << 20;
 
     private NewStoreFile(Path store, Path side) {
         this.store = store;
@@ -51,14 +54,56 @@ final class NewStoreFile {
         return side;
     }
 
+    /**
+     * Starts handing what is written so far to the disk in the background, each time the file has grown by some tens
+     * of megabytes: the sync before the naming then has little left to write (1,000 packages, some 650 MB: about
+     * 0.3 s at the end otherwise). What a background sync writes is no promise of anything; the one before the
+     * naming is.
+     */
+    void syncAlong() {
+        Thread t = new Thread(() -> {
+            try (java.nio.channels.FileChannel ch = java.nio.channels.FileChannel.open(side,
+                    java.nio.file.StandardOpenOption.WRITE)) {
+                long synced = 0;
+                while (!Thread.currentThread().isInterrupted()) {
+                    long size = ch.size();
+                    if (size - synced >= SYNC_STEP) {
+                        ch.force(false);
+                        synced = size;
+                    }
+                    Thread.sleep(50);
+                }
+            } catch (IOException | InterruptedException stopped) {
+                // the build ended (or its file is gone): the naming syncs what is left
+            }
+        }, "inkgate-sync-incomplete");
+        t.setDaemon(true);
+        t.start();
+        syncing = t;
+    }
+
     /** Gives the built file, its connection closed, the store's name; synced first, so the name holds all of it. */
     void name() throws IOException {
+        stopSyncing();
         AtomicFiles.moveIntoPlace(side, store);
         forgetHook();
     }
 
+    private void stopSyncing() {
+        Thread t = syncing;
+        if (t != null) {
+            t.interrupt();
+            try {
+                t.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+            }
+        }
+    }
+
     /** Removes the side file: the build failed or was given up; the store's name was never given. */
     void discard() throws IOException {
+        stopSyncing();
         forgetHook();
         remove();
     }

@@ -41,6 +41,7 @@ public final class SqliteResultsStore extends SqlResultsStore {
             aside = NewStoreFile.begin(file);
             c = SqliteFiles.connect(aside.side(), SqliteFiles.Durability.BUILT_ASIDE);
             Migrations.migrate(c, Migrations.latest());
+            aside.syncAlong();
             return new SqliteResultsStore(c, file, aside);
         } catch (SQLException | java.io.IOException e) {
             SqliteFiles.closeQuietly(c);
