@@ -3,7 +3,6 @@ package org.inkgate.admin.core.store.sqlite;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 import org.inkgate.format.io.AtomicFiles;
 import org.inkgate.format.io.OwnerOnly;
 
@@ -15,8 +14,6 @@ import org.inkgate.format.io.OwnerOnly;
  * at once. Whoever builds one holds the store's collect lock, so no one else touches the side file meanwhile.
  */
 final class NewStoreFile {
-
-    private static final List<String> SQLITE_COMPANIONS = List.of("", "-journal", "-wal", "-shm");
 
     private final Path store;
     private final Path side;
@@ -109,9 +106,7 @@ final class NewStoreFile {
     }
 
     private void remove() throws IOException {
-        for (String suffix : SQLITE_COMPANIONS) {
-            Files.deleteIfExists(Path.of(side + suffix));
-        }
+        SqliteFiles.deleteWithCompanions(side);
     }
 
     private void removeQuietly() {

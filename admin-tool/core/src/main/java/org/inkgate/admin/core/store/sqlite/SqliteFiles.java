@@ -86,6 +86,13 @@ final class SqliteFiles {
                 : ReadOnlyStore.connect(file);
     }
 
+    /** Deletes a store file and the journal, log and index files SQLite keeps beside it, where there are any. */
+    static void deleteWithCompanions(Path file) throws java.io.IOException {
+        for (String suffix : new String[] {"", "-wal", "-shm", "-journal"}) {
+            java.nio.file.Files.deleteIfExists(Path.of(file + suffix));
+        }
+    }
+
     static void closeQuietly(Connection c) {
         if (c != null) {
             try {

@@ -56,8 +56,13 @@ public final class SqliteResultsStore extends SqlResultsStore {
         if (aside == null || kept) {
             return;
         }
-        try (java.sql.Statement s = connection().createStatement()) {
-            s.execute("PRAGMA journal_mode = WAL");
+        try (java.sql.Statement s = connection().createStatement();
+                java.sql.ResultSet mode = s.executeQuery("PRAGMA journal_mode = WAL")) {
+            // SQLite answers with the mode it is in, the old one when it could not switch (sqlite.org, PRAGMA journal_mode)
+            String now = mode.next() ? mode.getString(1) : "(none)";
+            if (!"wal".equalsIgnoreCase(now)) {
+                throw new SQLException("the new store stayed in journal mode " + now + " instead of the write-ahead log");
+            }
         } catch (SQLException e) {
             throw failure("cannot finish the new results store " + aside.side(), aside.side(), e);
         }
@@ -73,17 +78,26 @@ public final class SqliteResultsStore extends SqlResultsStore {
     /** Closes the store; a new store built aside and not kept is removed. */
     @Override
     public void close() throws StoreException {
+        StoreException closing = null;
         try {
             super.close();
-        } finally {
-            if (aside != null && !kept) {
-                try {
-                    aside.discard();
-                } catch (java.io.IOException e) {
-                    throw failure("cannot remove the unfinished store " + aside.side()
-                            + " (no store was made; remove it by hand)", aside.side(), e);
+        } catch (StoreException e) {
+            closing = e;
+        }
+        if (aside != null && !kept) {
+            try {
+                aside.discard();
+            } catch (java.io.IOException e) {
+                StoreException removing = failure("cannot remove the unfinished store " + aside.side()
+                        + " (no store was made; remove it by hand)", aside.side(), e);
+                if (closing == null) {
+                    throw removing;
                 }
+                closing.addSuppressed(removing);
             }
+        }
+        if (closing != null) {
+            throw closing;
         }
     }
 
@@ -169,12 +183,10 @@ public final class SqliteResultsStore extends SqlResultsStore {
                     failure -> SqliteErrors.plain(file, failure), () -> {
                         if (created) {
                             SqliteFiles.closeQuietly(opened);
-                            for (String suffix : new String[] {"", "-wal", "-shm", "-journal"}) {
-                                try {
-                                    java.nio.file.Files.deleteIfExists(Path.of(file + suffix));
-                                } catch (java.io.IOException ignored) {
-                                    // the refusal is reported; a leftover empty file holds no data
-                                }
+                            try {
+                                SqliteFiles.deleteWithCompanions(file);
+                            } catch (java.io.IOException ignored) {
+                                // the refusal is reported; a leftover empty file holds no data
                             }
                         }
                     });
