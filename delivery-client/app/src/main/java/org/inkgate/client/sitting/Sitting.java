@@ -1,15 +1,12 @@
 package org.inkgate.client.sitting;
 
 import java.io.IOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
-import java.security.PublicKey;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
-import java.util.Base64;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -51,14 +48,11 @@ import org.inkgate.format.bundle.FormSlot;
 import org.inkgate.format.bundle.QuestionItem;
 import org.inkgate.format.bundle.QuestionnaireSpec;
 import org.inkgate.format.bundle.TaskSpec;
-import org.inkgate.format.crypto.X25519;
-import org.inkgate.format.io.AtomicFiles;
 import org.inkgate.format.json.Json;
 import org.inkgate.format.response.EventType;
 import org.inkgate.format.response.ProcessEvent;
 import org.inkgate.format.response.QuestionnaireAnswers;
 import org.inkgate.format.response.ResponseDocument;
-import org.inkgate.format.response.ResponsePackageWriter;
 import org.inkgate.format.response.TaskResponse;
 import org.inkgate.format.response.TaskResponse.EndReason;
 import org.inkgate.format.response.ToolUse;
@@ -111,8 +105,7 @@ public final class Sitting implements AutoCloseable {
     private String currentTask;
     private SittingScreen screen;
     private String reportedProblem;
-    private String packageId;
-    private Path localCopy;
+    private final HandIn handIn;
     private boolean submitted;
     private boolean closed;
     private boolean endRecorded;
@@ -125,6 +118,7 @@ public final class Sitting implements AutoCloseable {
         this.clock = clock;
         this.log = log;
         this.store = new SittingStateStore(log);
+        this.handIn = new HandIn(plan, folder, store, log);
         this.startedAt = startedAt;
         List<FormSlot> slots = plan.form().slots();
         for (int i = 0; i < slots.size(); i++) {
@@ -206,8 +200,7 @@ public final class Sitting implements AutoCloseable {
                 stored.sittingUsedMillis(), stored.sittingAddedMillis());
         s.screen = stored.screen();
         s.currentTask = stored.currentTask().orElse(null);
-        s.packageId = stored.packageId().orElse(null);
-        s.localCopy = stored.localCopy().orElse(null);
+        s.handIn.restore(stored.packageId().orElse(null), stored.localCopy().orElse(null));
         s.submitted = stored.status() != SittingStatus.IN_PROGRESS;
         for (StoredTask st : stored.tasks().values()) {
             TaskRecord t = s.tasks.get(st.taskId());
@@ -566,10 +559,7 @@ public final class Sitting implements AutoCloseable {
         if (open.isPresent()) {
             throw new IllegalStateException("task " + open.get() + " has not ended; end it (or end the unstarted tasks) first");
         }
-        if (packageId == null) {
-            packageId = UUID.randomUUID().toString();
-            store.savePackageId(packageId);
-        }
+        handIn.packageId(); // drawn and saved before the sitting ends: a retry writes the same package
         time.stopSitting();
         if (!endRecorded) {
             // a retry after the local copy failed does not end the sitting twice
@@ -580,49 +570,25 @@ public final class Sitting implements AutoCloseable {
         Instant submittedAt = clock.now();
         List<ProcessEvent> events = log.events();
         ResponseDocument document = responseDocument(store.responses(), submittedAt);
-        PublicKey ownerKey = X25519.publicFromRaw(Base64.getDecoder().decode(plan.manifest().ownerKeys().encryption()));
-        byte[] bytes = new ResponsePackageWriter(key.key(), ownerKey).encode(document, events);
-        Path local = folder.responses().resolve(packageFileName());
-        AtomicFiles.write(local, out -> out.write(bytes));
-        localCopy = local;
+        byte[] bytes = handIn.writeLocalCopy(document, events, key, submittedAt);
         submitted = true;
-        store.markSubmitted(submittedAt, local);
-        log.flush();
-        return deliver(bytes, outputFolder);
+        return handIn.deliver(bytes, outputFolder);
     }
 
     /** Delivers the saved package again (after a failure, or to a second folder). */
     public SubmissionResult retryDelivery(Path outputFolder) throws IOException {
         requireOpen();
-        if (localCopy == null) {
-            throw new IllegalStateException("nothing has been submitted yet");
-        }
-        return deliver(Files.readAllBytes(localCopy), outputFolder);
+        return handIn.retry(outputFolder);
     }
 
     /** The local copy of the response package, once submitted. */
     public Optional<Path> localCopy() {
-        return Optional.ofNullable(localCopy);
+        return handIn.localCopy();
     }
-
-    private SubmissionResult deliver(byte[] bytes, Path outputFolder) throws IOException {
-        PackageDelivery.Outcome outcome = delivery.deliver(bytes, outputFolder, packageFileName());
-        if (outcome.delivered().isPresent()) {
-            store.markDelivered(outcome.delivered().get());
-            log.flush();
-        }
-        return new SubmissionResult(packageId, localCopy, outcome.delivered(), outcome.failure());
-    }
-
-    private PackageDelivery delivery = PackageDelivery.local();
 
     /** Replaces the file-system access of deliveries (tests stand in a full or read-only disk). */
     public void useDelivery(PackageDelivery replacement) {
-        delivery = Objects.requireNonNull(replacement, "replacement");
-    }
-
-    private String packageFileName() {
-        return safe(plan.manifest().examId()) + "-" + safe(plan.candidateNumber()) + "-" + packageId + ".inkresp";
+        handIn.useDelivery(replacement);
     }
 
     private ResponseDocument responseDocument(StoredResponses stored, Instant submittedAt) {
@@ -637,7 +603,8 @@ public final class Sitting implements AutoCloseable {
         Map<String, Map<String, String>> answers = stored.answers();
         List<QuestionnaireAnswers> questionnaires = answers.entrySet().stream()
                 .map(e -> new QuestionnaireAnswers(e.getKey(), e.getValue())).toList();
-        return new ResponseDocument(ResponseDocument.FORMAT, ResponseDocument.SCHEMA_VERSION, packageId, plan.manifest().examId(),
+        return new ResponseDocument(ResponseDocument.FORMAT, ResponseDocument.SCHEMA_VERSION, handIn.packageId(),
+                plan.manifest().examId(),
                 plan.manifestSha256(), plan.candidateNumber(), plan.seat(), plan.formId(), plan.clientVersion(), startedAt,
                 submittedAt, responses, questionnaires);
     }
@@ -699,7 +666,8 @@ public final class Sitting implements AutoCloseable {
         };
     }
 
-    private static String safe(String s) {
+    /** A name part for files: characters other than {@code A-Z a-z 0-9 . _ -} become {@code _}. */
+    static String safe(String s) {
         String cleaned = s.replaceAll("[^A-Za-z0-9._-]", "_");
         return cleaned.isEmpty() ? "_" : cleaned;
     }
