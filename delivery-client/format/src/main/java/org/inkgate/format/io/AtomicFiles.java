@@ -36,11 +36,7 @@ public final class AtomicFiles {
                 out.flush();
                 channel.force(true);
             }
-            try {
-                Files.move(temp, absolute, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
-            }
+            rename(temp, absolute, StandardCopyOption.REPLACE_EXISTING);
             forceFolder(folder);
         } finally {
             Files.deleteIfExists(temp);
@@ -62,12 +58,19 @@ public final class AtomicFiles {
             throw new java.nio.file.FileAlreadyExistsException(absolute.toString(), written.toString(),
                     "it appeared while its content was being written beside it; nothing was replaced");
         }
-        try {
-            Files.move(written, absolute, StandardCopyOption.ATOMIC_MOVE);
-        } catch (AtomicMoveNotSupportedException e) {
-            Files.move(written, absolute);
-        }
+        rename(written, absolute);
         forceFolder(absolute.getParent());
+    }
+
+    /** One atomic rename where the file system has one, else a plain move. */
+    private static void rename(Path from, Path to, java.nio.file.CopyOption... options) throws IOException {
+        java.nio.file.CopyOption[] atomic = java.util.Arrays.copyOf(options, options.length + 1);
+        atomic[options.length] = StandardCopyOption.ATOMIC_MOVE;
+        try {
+            Files.move(from, to, atomic);
+        } catch (AtomicMoveNotSupportedException e) {
+            Files.move(from, to, options);
+        }
     }
 
     /**
